@@ -1,0 +1,40 @@
+package org.thermion.cli;
+
+import org.thermion.model.Machine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+
+/** {@code check FILE}: parse, elaborate and lint; print a summary. */
+@Command(name = "check", mixinStandardHelpOptions = true,
+        description = "Parse, elaborate and lint a machine description; print its summary.")
+final class CheckCommand implements Callable<Integer> {
+    @Parameters(paramLabel = "FILE", description = "The .machine file.")
+    Path file;
+
+    @Mixin
+    CommonOptions common;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        MachineLoader loader = new MachineLoader();
+        Machine m = loader.load(file, err, true);
+        if (m == null) {
+            return ExitCodes.BAD_INPUT;
+        }
+        new MachineSummary(m).print(out);
+        out.flush();
+        return ExitCodes.OK;
+    }
+}

@@ -1,0 +1,4 @@
+package org.thermion.cli;
+
+/** Output formats for reports. */
+public enum Format { text, csv, json }

@@ -1,0 +1,41 @@
+package org.thermion.cli;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The {@code thermion} command: one subcommand per job. */
+@Command(name = "thermion", mixinStandardHelpOptions = true, version = "thermion 0.1.0",
+        description = "Workbench for one-bit vacuum-tube control processors.",
+        subcommands = {CheckCommand.class, CommandLine.HelpCommand.class})
+public final class Main implements java.util.concurrent.Callable<Integer> {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    public static void main(String[] args) {
+        System.exit(run(args));
+    }
+
+    /** Runs the command line and returns the exit code, without exiting. */
+    public static int run(String... args) {
+        CommandLine cl = commandLine();
+        return cl.execute(args);
+    }
+
+    static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new Main());
+        cl.setExecutionExceptionHandler(new Failures());
+        cl.setParameterExceptionHandler((ex, a) -> {
+            CommandLine c = ex.getCommandLine();
+            c.getErr().println("error: " + ex.getMessage());
+            c.getErr().println("try '" + c.getCommandSpec().qualifiedName() + " --help'");
+            return ExitCodes.BAD_INPUT;
+        });
+        return cl;
+    }
+
+    @Override
+    public Integer call() {
+        return DefaultRun.run(spec.commandLine().getOut(), spec.commandLine().getErr());
+    }
+}

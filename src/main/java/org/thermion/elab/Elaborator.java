@@ -1,0 +1,386 @@
+package org.thermion.elab;
+
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.SourceSet;
+import org.thermion.lang.Span;
+import org.thermion.lang.ast.Decl;
+import org.thermion.lang.ast.Prop;
+import org.thermion.lang.ast.SourceFile;
+import org.thermion.lang.ast.Value;
+import org.thermion.model.BypassTrigger;
+import org.thermion.model.Clock;
+import org.thermion.model.Gate;
+import org.thermion.model.Isa;
+import org.thermion.model.Latch;
+import org.thermion.model.Machine;
+import org.thermion.model.ModuleInstance;
+import org.thermion.model.Netlist;
+import org.thermion.model.Port;
+import org.thermion.model.ProgramCounter;
+import org.thermion.model.Relay;
+import org.thermion.model.Rom;
+import org.thermion.model.SoftStart;
+import org.thermion.model.StageFunction;
+import org.thermion.model.StageType;
+import org.thermion.model.TubeKind;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Turns .machine source into a checked {@link Machine}: loads includes and the parts
+ * library, expands the modules, binds the machine block and the ISA, packs tubes and
+ * heater strings, levelizes the logic and lints it.
+ */
+public final class Elaborator {
+    private final SourceSet sources;
+    private final Diagnostics diags;
+
+    public Elaborator(SourceSet sources, Diagnostics diags) {
+        this.sources = sources;
+        this.diags = diags;
+    }
+
+    /** Elaborates a file on disk; null when errors were reported. */
+    public Machine elaborate(Path file) {
+        SourceLoader loader = new SourceLoader(sources, diags);
+        SourceFile lib = loader.library();
+        List<SourceFile> files = loader.load(file);
+        return build(lib, files);
+    }
+
+    /** Elaborates text given directly, as if read from {@code nominal}. */
+    public Machine elaborateText(Path nominal, String text) {
+        SourceLoader loader = new SourceLoader(sources, diags);
+        SourceFile lib = loader.library();
+        List<SourceFile> files = loader.loadText(nominal, text);
+        return build(lib, files);
+    }
+
+    private Machine build(SourceFile lib, List<SourceFile> files) {
+        Declarations decls = new Declarations();
+        decls.add(lib, true, diags);
+        for (SourceFile f : files) {
+            decls.add(f, false, diags);
+        }
+        if (diags.hasErrors()) {
+            return null;
+        }
+        try {
+            return buildChecked(decls, files);
+        } catch (TooLarge e) {
+            diags.error(firstSpan(files), "expansion stopped: the description grows past " + NetBuilder.LIMIT
+                    + " stage instances (or its loops past 10,000,000 steps)",
+                    "check the ranges of generator loops and the bus widths");
+            return null;
+        }
+    }
+
+    private static Span firstSpan(List<SourceFile> files) {
+        for (int i = files.size() - 1; i >= 0; i--) {
+            for (Decl d : files.get(i).decls()) {
+                if (d instanceof Decl.PropDecl p && p.prop().key().text().equals("machine")) {
+                    return p.span();
+                }
+            }
+        }
+        return files.isEmpty() || files.get(files.size() - 1).decls().isEmpty() ? Span.none()
+                : files.get(files.size() - 1).decls().get(0).span();
+    }
+
+    private Machine buildChecked(Declarations decls, List<SourceFile> files) {
+        Parts parts = new Parts(decls, diags);
+        if (decls.machines.isEmpty()) {
+            Path f = files.isEmpty() ? Path.of("?") : files.get(files.size() - 1).path();
+            diags.error(new Span(f, 1, 1, 1, 2), "no machine block in " + f.getFileName(),
+                    "add `machine NAME { top MODULE ... }` naming the top module");
+            return null;
+        }
+        if (decls.machines.size() > 1) {
+            diags.error(decls.machines.get(1).span(), "more than one machine block", "one machine per description");
+        }
+        MachineBlock mb = MachineBlock.read(decls.machines.get(0), parts, diags);
+        Decl.Module top = null;
+        if (mb.top == null) {
+            diags.error(mb.nameSpan.isKnown() ? mb.nameSpan : mb.span, "machine names no top module", "add `top MODULE`");
+        } else {
+            top = decls.modules.get(mb.top);
+            if (top == null) {
+                diags.error(mb.topSpan, "unknown module '" + mb.top + "'",
+                        Declarations.hintFor(mb.top, new ArrayList<>(decls.modules.keySet()), "declare it with `module " + mb.top + " { ... }`"));
+            }
+        }
+        if (top == null) {
+            return null;
+        }
+        ModuleExpander ex = new ModuleExpander(decls, parts, diags, mb.phases);
+        Map<String, Signal> scope = ex.expandTop(top);
+        NetBuilder nb = ex.nb;
+        topOutputs = new java.util.HashSet<>();
+        for (Signal s : ex.ports.get(0)) {
+            if (s.kind() == Signal.Kind.OUT) {
+                topOutputs.add(s.name());
+            }
+        }
+
+        List<Port> inputs = new ArrayList<>();
+        List<Port> outputs = new ArrayList<>();
+        for (Value v : mb.inputs) {
+            Signal s = topPort(scope, v, Signal.Kind.IN, "input");
+            if (s != null) {
+                inputs.add(new Port(s.name(), s.nets()[0]));
+            }
+        }
+        for (Value v : mb.outputs) {
+            Signal s = topPort(scope, v, Signal.Kind.OUT, "output");
+            if (s != null) {
+                outputs.add(new Port(s.name(), s.nets()[0]));
+                nb.read(s.nets()[0]);
+            }
+        }
+        Rom rom = null;
+        ProgramCounter pc = null;
+        if (mb.romData != null) {
+            Signal s = topSignal(scope, mb.romData, mb.romDataSpan, Signal.Kind.IN, "ROM data");
+            if (s != null) {
+                if (mb.romWidth != 0 && mb.romWidth != s.width()) {
+                    diags.error(mb.romDataSpan, "bus width mismatch: the ROM is " + mb.romWidth + " bits wide, port '"
+                            + s.name() + "' " + s.width(), null);
+                }
+                rom = new Rom(mb.romWords == 0 ? 256 : mb.romWords, s.width(), s.nets(), mb.romOffBoard);
+            }
+        }
+        if (mb.pcJump != null || mb.pcTarget != null) {
+            Signal j = mb.pcJump == null ? null : topSignal(scope, mb.pcJump, mb.pcJumpSpan, Signal.Kind.OUT, "jump");
+            Signal t = mb.pcTarget == null ? null : topSignal(scope, mb.pcTarget, mb.pcTargetSpan, Signal.Kind.OUT, "jump target");
+            if (j != null && t != null) {
+                int width = mb.pcWidth == 0 ? t.width() : mb.pcWidth;
+                if (t.width() != width) {
+                    diags.error(mb.pcTargetSpan, "bus width mismatch: the program counter is " + width + " bits, '"
+                            + t.name() + "' " + t.width(), null);
+                }
+                int phase = mb.pcPhase == 0 ? mb.phases : mb.pcPhase;
+                if (phase > mb.phases) {
+                    diags.error(mb.pcJumpSpan, "the program counter loads on phase " + phase + " but the clock has "
+                            + mb.phases, null);
+                }
+                nb.read(j.nets()[0]);
+                for (int n : t.nets()) {
+                    nb.read(n);
+                }
+                pc = new ProgramCounter(width, phase, j.nets()[0], t.nets(), true);
+                if (rom != null && rom.words() > (1 << width)) {
+                    diags.warning(mb.pcTargetSpan, "the ROM has " + rom.words() + " words but the program counter reaches "
+                            + (1 << width), null);
+                }
+            }
+        }
+        for (Signal s : scope.values()) {
+            if (s.kind() == Signal.Kind.IN) {
+                for (int n : s.nets()) {
+                    if (nb.driver.get(n) == NetBuilder.EXTERNAL && inputs.stream().noneMatch(p -> p.net() == n)
+                            && (rom == null || java.util.Arrays.stream(rom.dataNets()).noneMatch(x -> x == n))) {
+                        diags.error(s.decl(), "input port '" + s.name() + "' of the top module is driven by nothing",
+                                "list it under `inputs` in the machine block, or name it as the ROM's `data`");
+                        break;
+                    }
+                }
+            }
+        }
+
+        Isa isa = null;
+        if (!decls.isas.isEmpty() && !diags.full()) {
+            isa = new IsaBuilder(diags, scope, nb, inputs, outputs).build(decls.isas.get(0));
+            if (isa != null) {
+                for (var sb : isa.state()) {
+                    nb.read(sb.net());
+                }
+                if (rom != null && rom.width() != isa.wordBits()) {
+                    diags.error(decls.isas.get(0).name().span(), "the isa word is " + isa.wordBits() + " bits but the ROM is "
+                            + rom.width(), "make `word` and the ROM width agree");
+                }
+            }
+        }
+
+        Packer packer = new Packer(parts, diags);
+        List<ModuleInstance> modules = new ArrayList<>(ex.modules);
+        List<SoftStart> softStarts = new ArrayList<>();
+        int[] gateEnvelope = new int[nb.gates.size()];
+        int[] latchEnvelope = new int[nb.latches.size()];
+        for (int i = 0; i < nb.gates.size(); i++) {
+            NetBuilder.GateB g = nb.gates.get(i);
+            gateEnvelope[i] = g.stage < 0 ? -1 : placeStage(packer, parts, g.stage, g.module, g.in.length);
+        }
+        for (int i = 0; i < nb.latches.size(); i++) {
+            NetBuilder.LatchB l = nb.latches.get(i);
+            latchEnvelope[i] = l.stage() < 0 ? -1 : placeStage(packer, parts, l.stage(), l.module(), 1);
+        }
+        for (Prop p : decls.softStarts.values()) {
+            SoftStart ss = softStart(p, parts, packer, modules);
+            if (ss != null) {
+                softStarts.add(ss);
+            }
+        }
+        for (Prop h : decls.heaters) {
+            packer.readRules(h);
+        }
+        if (!diags.hasErrors()) {
+            packer.wire(mb.span);
+        }
+        if (diags.hasErrors()) {
+            return null;
+        }
+        Levelizer lev = new Levelizer(nb, diags);
+        int[] order = lev.order();
+        if (order == null) {
+            return null;
+        }
+        new Linter(nb, ex, diags, inputs).run();
+        if (diags.hasErrors()) {
+            return null;
+        }
+
+        List<Gate> gates = new ArrayList<>(order.length);
+        int[] gateEnvOrdered = new int[order.length];
+        for (int k = 0; k < order.length; k++) {
+            NetBuilder.GateB g = nb.gates.get(order[k]);
+            gates.add(new Gate(k, g.fn, g.in, g.out, g.stage, g.module));
+            gateEnvOrdered[k] = gateEnvelope[order[k]];
+        }
+        List<Latch> latches = new ArrayList<>(nb.latches.size());
+        for (int i = 0; i < nb.latches.size(); i++) {
+            NetBuilder.LatchB l = nb.latches.get(i);
+            latches.add(new Latch(i, l.data(), l.enable(), l.out(), l.phase(), l.stage(), l.module()));
+        }
+        Netlist netlist = new Netlist(nb.names.toArray(new String[0]), nb.netModule.toArray(), List.copyOf(gates),
+                List.copyOf(latches));
+        return new Machine(mb.name, new Clock(mb.phases, mb.period), List.copyOf(parts.tubes), List.copyOf(parts.stages),
+                List.copyOf(parts.rails), List.copyOf(packer.rules), List.copyOf(softStarts), List.copyOf(modules), netlist,
+                rom, pc, List.copyOf(inputs), List.copyOf(outputs), List.copyOf(packer.envelopes),
+                List.copyOf(packer.strings), isa, gateEnvOrdered, latchEnvelope);
+    }
+
+    private static int placeStage(Packer packer, Parts parts, int stage, int module, int inputs) {
+        StageType st = parts.stages.get(stage);
+        return packer.place(st.tube(), module, st.sectionsFor(inputs));
+    }
+
+    private java.util.Set<String> topOutputs = java.util.Set.of();
+
+    private Signal topPort(Map<String, Signal> scope, Value v, Signal.Kind kind, String what) {
+        return topSignal(scope, v.text(), v.span(), kind, what);
+    }
+
+    private Signal topSignal(Map<String, Signal> scope, String name, Span at, Signal.Kind kind, String what) {
+        Signal s = scope.get(name);
+        if (s != null && s.kind() == Signal.Kind.LATCH && topOutputs.contains(name)) {
+            s = new Signal(s.name(), s.nets(), s.decl(), Signal.Kind.OUT, s.bus());
+        }
+        if (s == null || (s.kind() != Signal.Kind.IN && s.kind() != Signal.Kind.OUT)) {
+            List<String> ports = scope.values().stream().filter(x -> x.kind() == kind).map(Signal::name).toList();
+            diags.error(at, "unknown " + what + " '" + name + "': the top module has no such " + (kind == Signal.Kind.IN ? "input" : "output") + " port",
+                    Declarations.hintFor(name, ports, "its " + (kind == Signal.Kind.IN ? "inputs" : "outputs") + " are: " + String.join(", ", ports)));
+            return null;
+        }
+        if (s.kind() != kind) {
+            diags.error(at, "'" + name + "' is an " + (s.kind() == Signal.Kind.IN ? "input" : "output") + " of the top module, not an "
+                    + (kind == Signal.Kind.IN ? "input" : "output"), null);
+            return null;
+        }
+        return s;
+    }
+
+    private SoftStart softStart(Prop p, Parts parts, Packer packer, List<ModuleInstance> modules) {
+        PropReader head = new PropReader(p, diags);
+        String name = head.word("a name");
+        head.expectWord("on");
+        String railName = head.word("a rail name");
+        Span rs = head.lastSpan();
+        head.end();
+        if (head.failed()) {
+            return null;
+        }
+        int rail = parts.rail(railName, rs);
+        double ohms = Double.NaN, watts = Double.POSITIVE_INFINITY;
+        Relay relay = null;
+        BypassTrigger trigger = null;
+        Span triggerSpan = p.span();
+        for (Prop q : p.block()) {
+            PropReader r = new PropReader(q, diags);
+            switch (q.key().text()) {
+                case "resistor" -> {
+                    ohms = r.positive(Unit.OHM, "soft-start resistor", false);
+                    if (r.acceptWord("rated")) {
+                        watts = r.positive(Unit.WATT, "resistor rating", false);
+                    }
+                }
+                case "relay" -> relay = relay(q, parts);
+                case "bypass" -> {
+                    triggerSpan = q.span();
+                    if (r.acceptWord("after")) {
+                        double t = r.positive(Unit.SECOND, "bypass delay", true);
+                        trigger = new BypassTrigger.AfterDelay(t);
+                    } else if (r.acceptWord("when")) {
+                        String stage = r.word("a thyratron relay-driver stage");
+                        Span ss = r.lastSpan();
+                        r.expectWord("warm");
+                        int s = stage == null ? -1 : parts.stage(stage, ss);
+                        if (s >= 0) {
+                            StageType st = parts.stages.get(s);
+                            if (parts.tubes.get(st.tube()).kind() != TubeKind.THYRATRON || st.function() != StageFunction.RELAY) {
+                                diags.error(ss, "stage '" + stage + "' is not a thyratron relay driver",
+                                        "name a relay stage whose tube is a thyratron");
+                            } else {
+                                int module = modules.size();
+                                modules.add(new ModuleInstance(module, name, "softstart", 0));
+                                int env = packer.place(st.tube(), module, st.sections());
+                                trigger = new BypassTrigger.ThyratronWarm(env, st.tube(), st.loadOhms(), st.loadRail(), 0.9);
+                            }
+                        }
+                    } else {
+                        diags.error(r.here(), "expected `after TIME` or `when STAGE warm`", null);
+                    }
+                }
+                default -> parts.unknownKey(q, "softstart", List.of("resistor", "relay", "bypass"));
+            }
+            r.end();
+        }
+        if (Double.isNaN(ohms)) {
+            diags.error(p.span(), "soft start '" + name + "' has no resistor", "add `resistor 2 ohm rated 50 W`");
+            return null;
+        }
+        if (trigger == null) {
+            if (!diags.hasErrors()) {
+                diags.error(triggerSpan, "soft start '" + name + "' has no bypass trigger", "add `bypass after 10 s` or `bypass when STAGE warm`");
+            }
+            return null;
+        }
+        if (relay == null) {
+            relay = new Relay(100, 12, 7.2, 1.2, 0.010);
+        }
+        if (rail < 0) {
+            return null;
+        }
+        return new SoftStart(name, rail, ohms, watts, relay, trigger);
+    }
+
+    private Relay relay(Prop q, Parts parts) {
+        double coil = 100, rated = 12, pickup = Double.NaN, dropout = Double.NaN, operate = 0.010;
+        for (Prop c : q.block()) {
+            PropReader r = new PropReader(c, diags);
+            switch (c.key().text()) {
+                case "coil" -> coil = r.positive(Unit.OHM, "coil resistance", false);
+                case "rated" -> rated = r.positive(Unit.VOLT, "rated coil voltage", false);
+                case "pickup" -> pickup = r.positive(Unit.VOLT, "pick-up voltage", false);
+                case "dropout" -> dropout = r.positive(Unit.VOLT, "drop-out voltage", true);
+                case "operate" -> operate = r.positive(Unit.SECOND, "operate time", true);
+                default -> parts.unknownKey(c, "relay", List.of("coil", "rated", "pickup", "dropout", "operate"));
+            }
+            r.end();
+        }
+        // Common practice for relays without data: pick-up at 60 % and drop-out at 10 % of rated.
+        return new Relay(coil, rated, Double.isNaN(pickup) ? 0.6 * rated : pickup, Double.isNaN(dropout) ? 0.1 * rated : dropout, operate);
+    }
+}

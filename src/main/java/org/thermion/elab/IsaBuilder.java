@@ -1,0 +1,389 @@
+package org.thermion.elab;
+
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.Names;
+import org.thermion.lang.Span;
+import org.thermion.lang.ast.Decl;
+import org.thermion.lang.ast.IsaOp;
+import org.thermion.lang.ast.Prop;
+import org.thermion.lang.ast.RtExpr;
+import org.thermion.lang.ast.RtStmt;
+import org.thermion.lang.ast.Value;
+import org.thermion.model.AddressedBit;
+import org.thermion.model.Instruction;
+import org.thermion.model.Isa;
+import org.thermion.model.IsaField;
+import org.thermion.model.Port;
+import org.thermion.model.Rtl;
+import org.thermion.model.StateBit;
+import org.thermion.model.Transfer;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Resolves an {@code isa} block against the elaborated logic. */
+final class IsaBuilder {
+    private final Diagnostics diags;
+    private final Map<String, Signal> topScope;
+    private final NetBuilder nb;
+    private final List<Port> inputs;
+    private final List<Port> outputs;
+
+    IsaBuilder(Diagnostics diags, Map<String, Signal> topScope, NetBuilder nb, List<Port> inputs, List<Port> outputs) {
+        this.diags = diags;
+        this.topScope = topScope;
+        this.nb = nb;
+        this.inputs = inputs;
+        this.outputs = outputs;
+    }
+
+    Isa build(Decl.Isa d) {
+        int word = 0;
+        List<IsaField> fields = new ArrayList<>();
+        Map<String, Span> fieldSpans = new HashMap<>();
+        String opcode = null, target = null, select = null;
+        Span opcodeSpan = d.span(), targetSpan = d.span(), selectSpan = d.span();
+        List<StateBit> state = new ArrayList<>();
+        List<Prop> bitProps = new ArrayList<>();
+        for (Prop p : d.props()) {
+            PropReader r = new PropReader(p, diags);
+            switch (p.key().text()) {
+                case "word" -> {
+                    word = (int) r.whole("instruction word width", 1, 63);
+                    r.acceptWord("bits");
+                }
+                case "field" -> {
+                    String name = r.word("a field name");
+                    Span ns = r.lastSpan();
+                    long hi = r.whole("the field's high bit");
+                    r.expectSym("..");
+                    long lo = r.whole("the field's low bit");
+                    if (name != null && !r.failed()) {
+                        if (fieldSpans.containsKey(name)) {
+                            diags.error(ns, "duplicate field '" + name + "'", "first declared at " + fieldSpans.get(name));
+                        } else if (hi < lo || lo < 0 || (word > 0 && hi >= word)) {
+                            diags.error(p.span(), "field '" + name + "' bits " + hi + ".." + lo + " do not fit a "
+                                    + word + "-bit word", "write fields high..low within 0.." + (word - 1));
+                        } else {
+                            fields.add(new IsaField(name, (int) hi, (int) lo));
+                            fieldSpans.put(name, ns);
+                        }
+                    }
+                }
+                case "opcode" -> {
+                    opcode = r.word("the opcode field");
+                    opcodeSpan = r.lastSpan();
+                }
+                case "target" -> {
+                    target = r.word("the jump-target field");
+                    targetSpan = r.lastSpan();
+                }
+                case "select" -> {
+                    select = r.word("the bit-address field");
+                    selectSpan = r.lastSpan();
+                }
+                case "state" -> {
+                    String name = r.word("a state bit name");
+                    Span ns = r.lastSpan();
+                    r.expectSym("=");
+                    String path = r.word("a latch in the top module");
+                    Span ps = r.lastSpan();
+                    if (name != null && path != null) {
+                        StateBit sb = bindState(name, path, ns, ps);
+                        if (sb != null) {
+                            if (state.stream().anyMatch(x -> x.name().equals(name))) {
+                                diags.error(ns, "duplicate state bit '" + name + "'", null);
+                            } else {
+                                state.add(sb);
+                            }
+                        }
+                    }
+                }
+                case "bit" -> {
+                    bitProps.add(p);
+                    continue;
+                }
+                default -> diags.error(p.key().span(), "unknown property '" + p.key().text() + "' in isa",
+                        Declarations.hintFor(p.key().text(), List.of("word", "field", "opcode", "target", "select", "state", "bit", "op"),
+                                "expected word, field, opcode, target, select, state, bit or op"));
+            }
+            r.end();
+        }
+        if (word == 0) {
+            diags.error(d.name().span(), "isa has no word width", "add `word 12` (bits per instruction)");
+            return null;
+        }
+        int opcodeField = field(fields, opcode, opcodeSpan, "opcode", true);
+        int targetField = field(fields, target, targetSpan, "target", false);
+        int selectField = field(fields, select, selectSpan, "select", false);
+        List<AddressedBit> map = new ArrayList<>();
+        for (Prop p : bitProps) {
+            PropReader r = new PropReader(p, diags);
+            Span as = r.here();
+            long addr = r.whole("a bit address");
+            r.expectSym("=");
+            String name = r.word("an input or state bit");
+            Span ns = r.lastSpan();
+            r.end();
+            if (r.failed()) {
+                continue;
+            }
+            if (selectField >= 0 && addr >= (1L << fields.get(selectField).width())) {
+                diags.error(as, "bit address " + addr + " does not fit the " + fields.get(selectField).width()
+                        + "-bit select field", null);
+                continue;
+            }
+            if (map.stream().anyMatch(b -> b.address() == addr)) {
+                diags.error(as, "bit address " + addr + " is mapped twice", null);
+                continue;
+            }
+            int in = indexOf(inputs, name);
+            int st = stateIndex(state, name);
+            if (in < 0 && st < 0) {
+                List<String> known = new ArrayList<>();
+                inputs.forEach(x -> known.add(x.name()));
+                state.forEach(x -> known.add(x.name()));
+                diags.error(ns, "unknown bit '" + name + "'", Declarations.hintFor(name, known, "name a machine input or a state bit"));
+                continue;
+            }
+            map.add(new AddressedBit(addr, name, st >= 0 ? -1 : in, st));
+        }
+        List<Instruction> instrs = new ArrayList<>();
+        Map<Long, IsaOp> byCode = new HashMap<>();
+        Map<String, IsaOp> byName = new HashMap<>();
+        Ctx ctx = new Ctx(fields, state, selectField, targetField);
+        for (IsaOp op : d.ops()) {
+            long code = constantOf(op);
+            String m = op.mnemonic().text();
+            if (byName.containsKey(m.toUpperCase())) {
+                diags.error(op.mnemonic().span(), "mnemonic '" + m + "' is defined twice", "first at " + byName.get(m.toUpperCase()).span());
+                continue;
+            }
+            byName.put(m.toUpperCase(), op);
+            if (code < 0) {
+                continue;
+            }
+            if (opcodeField >= 0 && code >= (1L << fields.get(opcodeField).width())) {
+                diags.error(op.opcode().span(), "opcode " + code + " of " + m + " is wider than the "
+                        + fields.get(opcodeField).width() + "-bit opcode field",
+                        "use an opcode from 0 to " + ((1L << fields.get(opcodeField).width()) - 1));
+                continue;
+            }
+            if (byCode.containsKey(code)) {
+                diags.error(op.opcode().span(), "opcode " + code + " is used twice: by " + byCode.get(code).mnemonic().text()
+                        + " and " + m, "give each instruction its own opcode");
+                continue;
+            }
+            byCode.put(code, op);
+            instrs.add(new Instruction(m, code, stmts(ctx, op.body())));
+        }
+        return new Isa(word, List.copyOf(fields), Math.max(0, opcodeField), targetField, List.copyOf(state), List.copyOf(map),
+                selectField, List.copyOf(instrs));
+    }
+
+    private long constantOf(IsaOp op) {
+        if (op.opcode() instanceof org.thermion.lang.ast.Expr.Num n) {
+            return n.value();
+        }
+        diags.error(op.opcode().span(), "an opcode is a number", "write it as 0x5 or 5");
+        return -1;
+    }
+
+    private StateBit bindState(String name, String path, Span ns, Span ps) {
+        String base = path;
+        int bit = -1;
+        int br = path.indexOf('[');
+        if (br > 0 && path.endsWith("]")) {
+            base = path.substring(0, br);
+            bit = Integer.parseInt(path.substring(br + 1, path.length() - 1));
+        }
+        Signal s = topScope.get(base);
+        if (s == null) {
+            diags.error(ps, "ISA state bit '" + name + "' is not bound: no net '" + path + "' in the top module",
+                    Declarations.hintFor(base, new ArrayList<>(topScope.keySet()), "bind it to a latch of the top module"));
+            return null;
+        }
+        if (s.width() != 1 && bit < 0) {
+            diags.error(ps, "state bit '" + name + "' is bound to a " + s.width() + "-bit bus", "name one bit, e.g. " + path + "[0]");
+            return null;
+        }
+        int net = s.nets()[Math.max(0, bit)];
+        if (!nb.isLatchOutput(net)) {
+            diags.error(ps, "ISA state bit '" + name + "' is not bound to a latch: '" + path + "' is not stored",
+                    "state bits must be latches or flip-flops");
+            return null;
+        }
+        String out = null;
+        for (Port p : outputs) {
+            if (p.net() == net) {
+                out = p.name();
+            }
+        }
+        return new StateBit(name, net, out);
+    }
+
+    private int field(List<IsaField> fields, String name, Span at, String role, boolean required) {
+        if (name == null) {
+            if (required) {
+                diags.error(at, "isa names no opcode field", "add `opcode FIELD`");
+            }
+            return -1;
+        }
+        for (int i = 0; i < fields.size(); i++) {
+            if (fields.get(i).name().equals(name)) {
+                return i;
+            }
+        }
+        diags.error(at, "unknown field '" + name + "' for " + role,
+                Declarations.hintFor(name, fields.stream().map(IsaField::name).toList(), "declare it with `field " + name + " HI..LO`"));
+        return -1;
+    }
+
+    private static int indexOf(List<Port> ports, String name) {
+        for (int i = 0; i < ports.size(); i++) {
+            if (ports.get(i).name().equals(name)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    private static int stateIndex(List<StateBit> s, String name) {
+        for (int i = 0; i < s.size(); i++) {
+            if (s.get(i).name().equals(name)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    private record Ctx(List<IsaField> fields, List<StateBit> state, int selectField, int targetField) {
+    }
+
+    private List<Transfer> stmts(Ctx c, List<RtStmt> body) {
+        List<Transfer> out = new ArrayList<>();
+        for (RtStmt s : body) {
+            if (s instanceof RtStmt.Assign a) {
+                String t = a.target().text();
+                if (a.selected()) {
+                    if (!checkSelect(c, a.target())) {
+                        continue;
+                    }
+                    Rtl v = expr(c, a.value());
+                    if (v != null) {
+                        out.add(new Transfer.ToSelected(v));
+                    }
+                } else if (t.equals("pc")) {
+                    if (a.value() instanceof RtExpr.Ref r) {
+                        int fi = fieldIndex(c, r.name().text());
+                        if (fi < 0) {
+                            diags.error(r.span(), "a jump takes its target from a field; '" + r.name().text() + "' is not one",
+                                    Declarations.hintFor(r.name().text(), c.fields().stream().map(IsaField::name).toList(), null));
+                        } else {
+                            out.add(new Transfer.ToPc(fi));
+                        }
+                    } else {
+                        diags.error(a.value().span(), "a jump takes its target from a field", "write `pc <- operand`");
+                    }
+                } else {
+                    int si = stateIndex(c.state(), t);
+                    if (si < 0) {
+                        diags.error(a.target().span(), "unknown state bit '" + t + "'",
+                                Declarations.hintFor(t, c.state().stream().map(StateBit::name).toList(), "declare it with `state " + t + " = LATCH`"));
+                        continue;
+                    }
+                    Rtl v = expr(c, a.value());
+                    if (v != null) {
+                        out.add(new Transfer.ToState(si, v));
+                    }
+                }
+            } else if (s instanceof RtStmt.If i) {
+                Rtl cond = expr(c, i.cond());
+                List<Transfer> then = stmts(c, i.then());
+                List<Transfer> otherwise = stmts(c, i.otherwise());
+                if (cond != null) {
+                    out.add(new Transfer.When(cond, then, otherwise));
+                }
+            }
+        }
+        return out;
+    }
+
+    private boolean checkSelect(Ctx c, org.thermion.lang.ast.Ident field) {
+        int fi = fieldIndex(c, field.text());
+        if (fi < 0 || fi != c.selectField()) {
+            diags.error(field.span(), "'[" + field.text() + "]' needs the isa's select field",
+                    c.selectField() < 0 ? "add `select FIELD` to the isa" : "write [" + c.fields().get(c.selectField()).name() + "]");
+            return false;
+        }
+        return true;
+    }
+
+    private int fieldIndex(Ctx c, String name) {
+        for (int i = 0; i < c.fields().size(); i++) {
+            if (c.fields().get(i).name().equals(name)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    private Rtl expr(Ctx c, RtExpr e) {
+        if (e instanceof RtExpr.Num n) {
+            if (n.value() != 0 && n.value() != 1) {
+                diags.error(n.span(), "a one-bit value is 0 or 1, not " + n.value(), null);
+                return null;
+            }
+            return new Rtl.Const(n.value() == 1);
+        }
+        if (e instanceof RtExpr.Select s) {
+            return checkSelect(c, s.field()) ? new Rtl.Selected() : null;
+        }
+        if (e instanceof RtExpr.Ref r) {
+            String name = r.name().text();
+            int si = stateIndex(c.state(), name);
+            if (si >= 0) {
+                return new Rtl.State(si);
+            }
+            int in = indexOf(inputs, name);
+            if (in >= 0) {
+                return new Rtl.Input(in);
+            }
+            List<String> known = new ArrayList<>();
+            c.state().forEach(x -> known.add(x.name()));
+            inputs.forEach(x -> known.add(x.name()));
+            diags.error(r.span(), "unknown name '" + name + "' in an instruction's meaning",
+                    Declarations.hintFor(name, known, "name a state bit or a machine input"));
+            return null;
+        }
+        if (e instanceof RtExpr.Not n) {
+            Rtl x = expr(c, n.operand());
+            return x == null ? null : new Rtl.Not(x);
+        }
+        if (e instanceof RtExpr.Bin b) {
+            Rtl l = expr(c, b.left());
+            Rtl r = expr(c, b.right());
+            if (l == null || r == null) {
+                return null;
+            }
+            return switch (b.op()) {
+                case AND -> new Rtl.And(l, r);
+                case OR -> new Rtl.Or(l, r);
+                case XOR -> new Rtl.Xor(l, r);
+            };
+        }
+        return null;
+    }
+
+    @SuppressWarnings("unused")
+    private static String near(String n, List<String> c) {
+        return Names.nearest(n, c);
+    }
+
+    @SuppressWarnings("unused")
+    private static List<String> words(List<Value> v) {
+        return v.stream().map(Value::text).toList();
+    }
+}

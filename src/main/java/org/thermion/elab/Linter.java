@@ -1,0 +1,161 @@
+package org.thermion.elab;
+
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.Span;
+import org.thermion.model.ModuleInstance;
+import org.thermion.model.Port;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Finds nets read but driven by nothing (errors), and nets, inputs and outputs that
+ * nothing uses (warnings). Each signal is reported once, at its declaration.
+ */
+final class Linter {
+    private final NetBuilder nb;
+    private final ModuleExpander ex;
+    private final Diagnostics diags;
+    private final List<Port> inputs;
+
+    Linter(NetBuilder nb, ModuleExpander ex, Diagnostics diags, List<Port> inputs) {
+        this.nb = nb;
+        this.ex = ex;
+        this.diags = diags;
+        this.inputs = inputs;
+    }
+
+    void run() {
+        Set<Integer> portNets = new HashSet<>();
+        for (List<Signal> ps : ex.ports.values()) {
+            for (Signal s : ps) {
+                for (int n : s.nets()) {
+                    portNets.add(n);
+                }
+            }
+        }
+        Set<String> seenUndriven = new HashSet<>();
+        for (int n = 2; n < nb.names.size(); n++) {
+            if (nb.reads.get(n) > 0 && nb.driver.get(n) == NetBuilder.NONE) {
+                Span s = nb.netSpan.get(n);
+                if (seenUndriven.add(s.toString())) {
+                    diags.error(s, "net '" + nb.names.get(n) + "' is driven by nothing",
+                            "assign it (`" + base(nb.names.get(n)) + " = ...`), or connect it to an output port");
+                }
+            }
+        }
+        // Unused bits, grouped by the signal that declared them.
+        Map<String, List<Integer>> bySignal = new LinkedHashMap<>();
+        for (Map.Entry<Integer, Map<String, Signal>> e : ex.scopes.entrySet()) {
+            for (Signal s : e.getValue().values()) {
+                if (s.nets().length == 0 || s.kind() == Signal.Kind.IN) {
+                    continue;
+                }
+                if (s.kind() == Signal.Kind.OUT && e.getKey() == 0) {
+                    continue;
+                }
+                if (nb.netModule.get(s.nets()[0]) != e.getKey()) {
+                    continue;
+                }
+                List<Integer> unused = new ArrayList<>();
+                boolean anyUsed = false;
+                for (int n : s.nets()) {
+                    boolean driven = nb.driver.get(n) != NetBuilder.NONE;
+                    boolean read = nb.reads.get(n) > 0 || ex.driverOutputs.contains(n);
+                    if (driven && !read) {
+                        unused.add(n);
+                    }
+                    anyUsed |= driven || read;
+                }
+                if (!anyUsed) {
+                    diags.warning(s.decl(), (s.kind() == Signal.Kind.OUT ? "output '" : "net '") + qualified(e.getKey(), s.name())
+                            + "' is declared but never used", "remove it, or connect it");
+                } else if (!unused.isEmpty()) {
+                    String what = unused.size() == s.width() ? "" : " (" + unused.size() + " of " + s.width() + " bits)";
+                    diags.warning(s.decl(), (s.kind() == Signal.Kind.OUT ? "output '" : "net '") + qualified(e.getKey(), s.name())
+                            + "' is never read" + what, s.kind() == Signal.Kind.OUT ? "nothing outside the module uses it" : "remove it, or use it");
+                }
+            }
+        }
+        // Inputs that a module never looks at, once per module type.
+        Set<String> reportedInputs = new HashSet<>();
+        for (Map.Entry<Integer, List<Signal>> e : ex.ports.entrySet()) {
+            ModuleInstance mi = ex.modules.get(e.getKey());
+            for (Signal s : e.getValue()) {
+                if (s.kind() != Signal.Kind.IN) {
+                    continue;
+                }
+                boolean used = false;
+                for (int n : s.nets()) {
+                    used |= readInside(n, e.getKey());
+                }
+                if (!used && reportedInputs.add(mi.type() + "." + s.name())) {
+                    diags.warning(s.decl(), "input '" + s.name() + "' of module '" + mi.type() + "' is tied to nothing inside it",
+                            "remove the port, or use it");
+                }
+            }
+        }
+        for (Port p : inputs) {
+            if (nb.reads.get(p.net()) == 0) {
+                diags.warning(nb.netSpan.get(p.net()), "machine input '" + p.name() + "' is never read", null);
+            }
+        }
+    }
+
+    private boolean readInside(int net, int module) {
+        if (nb.reads.get(net) == 0) {
+            return false;
+        }
+        for (NetBuilder.GateB g : moduleGates(module)) {
+            for (int in : g.in) {
+                if (in == net) {
+                    return true;
+                }
+            }
+        }
+        for (NetBuilder.LatchB l : nb.latches) {
+            if (l.module() == module && (l.data() == net || l.enable() == net)) {
+                return true;
+            }
+        }
+        // Passed on to a child instance counts as use.
+        for (ModuleInstance mi : ex.modules) {
+            if (mi.parent() == module) {
+                for (Signal s : ex.ports.getOrDefault(mi.id(), List.of())) {
+                    for (int n : s.nets()) {
+                        if (n == net && readInside(net, mi.id())) {
+                            return true;
+                        }
+                    }
+                }
+            }
+        }
+        return false;
+    }
+
+    private Map<Integer, List<NetBuilder.GateB>> gatesByModule;
+
+    private List<NetBuilder.GateB> moduleGates(int module) {
+        if (gatesByModule == null) {
+            gatesByModule = new java.util.HashMap<>();
+            for (NetBuilder.GateB g : nb.gates) {
+                gatesByModule.computeIfAbsent(g.module, k -> new ArrayList<>()).add(g);
+            }
+        }
+        return gatesByModule.getOrDefault(module, List.of());
+    }
+
+    private String qualified(int module, String name) {
+        String p = ex.modules.get(module).path();
+        return p.isEmpty() ? name : p + "." + name;
+    }
+
+    private static String base(String name) {
+        int dot = name.lastIndexOf('.');
+        return dot < 0 ? name : name.substring(dot + 1);
+    }
+}

@@ -1,0 +1,202 @@
+package org.thermion.elab;
+
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.Span;
+import org.thermion.model.GateFn;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Grows the flat netlist: nets with names and drivers, gates and latches with the span
+ * that made them. Shares identical gates within a module and keeps one driver per net.
+ */
+final class NetBuilder {
+    static final int NONE = -1;
+    static final int EXTERNAL = -2;
+    static final int CONSTANT = -3;
+    static final int LIMIT = 1_000_000;
+
+    /** A gate under construction. */
+    static final class GateB {
+        final GateFn fn;
+        final int[] in;
+        final int out;
+        final int stage;
+        final int module;
+        final Span span;
+
+        GateB(GateFn fn, int[] in, int out, int stage, int module, Span span) {
+            this.fn = fn;
+            this.in = in;
+            this.out = out;
+            this.stage = stage;
+            this.module = module;
+            this.span = span;
+        }
+    }
+
+    /** A latch under construction. */
+    record LatchB(int data, int enable, int out, int phase, int stage, int module, Span span) {
+    }
+
+    final List<String> names = new ArrayList<>();
+    final IntList netModule = new IntList();
+    final List<Span> netSpan = new ArrayList<>();
+    final IntList driver = new IntList();
+    final IntList reads = new IntList();
+    final List<Span> driverSpan = new ArrayList<>();
+    final List<GateB> gates = new ArrayList<>();
+    final List<LatchB> latches = new ArrayList<>();
+    final Map<Integer, Integer> complement = new HashMap<>();
+    final Map<Integer, Integer> complementSource = new HashMap<>();
+    private final Map<String, Integer> shared = new HashMap<>();
+    private final Diagnostics diags;
+    private int temps;
+
+    NetBuilder(Diagnostics diags) {
+        this.diags = diags;
+        int c0 = net("0", -1, Span.none());
+        int c1 = net("1", -1, Span.none());
+        driver.set(c0, CONSTANT);
+        driver.set(c1, CONSTANT);
+    }
+
+    int net(String name, int module, Span span) {
+        if (names.size() >= 4 * LIMIT) {
+            throw new TooLarge();
+        }
+        names.add(name);
+        netModule.add(module);
+        netSpan.add(span);
+        driver.add(NONE);
+        reads.add(0);
+        driverSpan.add(null);
+        return names.size() - 1;
+    }
+
+    int temp(String modulePath, int module) {
+        return net((modulePath.isEmpty() ? "" : modulePath + ".") + "$" + (temps++), module, Span.none());
+    }
+
+    boolean isTemp(int net) {
+        String n = names.get(net);
+        int dot = n.lastIndexOf('.');
+        return n.startsWith("$", dot + 1);
+    }
+
+    void drive(int net, int by, Span span) {
+        int d = driver.get(net);
+        if (d != NONE) {
+            Span first = driverSpan.get(net);
+            diags.error(span, "net '" + names.get(net) + "' has two drivers",
+                    d == EXTERNAL ? "it is a machine input or a port driven from outside"
+                            : "first driven at " + (first == null ? "another statement" : first) + "; a net takes one driver");
+            return;
+        }
+        driver.set(net, by);
+        driverSpan.set(net, span);
+    }
+
+    void read(int net) {
+        reads.set(net, reads.get(net) + 1);
+    }
+
+    /** A gate; identical gates of one module are shared. {@code dest} < 0 asks for a new net. */
+    int gate(GateFn fn, int stage, int[] in, int dest, int module, String modulePath, Span span) {
+        int[] key = in.clone();
+        if (fn != GateFn.NOT && fn != GateFn.BUF) {
+            Arrays.sort(key);
+        }
+        String k = fn.ordinal() + ":" + stage + ":" + module + ":" + Arrays.toString(key);
+        Integer existing = stage == -1 && fn == GateFn.BUF ? null : shared.get(k);
+        if (existing != null) {
+            if (dest < 0) {
+                return existing;
+            }
+            return wire(existing, dest, module, span);
+        }
+        if (gates.size() + latches.size() >= LIMIT) {
+            throw new TooLarge();
+        }
+        int out = dest >= 0 ? dest : temp(modulePath, module);
+        for (int i : in) {
+            read(i);
+        }
+        gates.add(new GateB(fn, in, out, stage, module, span));
+        drive(out, gates.size() - 1, span);
+        if (!(stage == -1 && fn == GateFn.BUF)) {
+            shared.put(k, out);
+        }
+        return out;
+    }
+
+    /** A plain connection from one net to another: no stage, no delay. */
+    int wire(int from, int dest, int module, Span span) {
+        return gate(GateFn.BUF, -1, new int[]{from}, dest, module, "", span);
+    }
+
+    int latch(int data, int enable, int out, int phase, int stage, int module, Span span) {
+        if (gates.size() + latches.size() >= LIMIT) {
+            throw new TooLarge();
+        }
+        read(data);
+        if (enable >= 0) {
+            read(enable);
+        }
+        latches.add(new LatchB(data, enable, out, phase, stage, module, span));
+        drive(out, -10 - (latches.size() - 1), span);
+        return out;
+    }
+
+    boolean isLatchOutput(int net) {
+        return driver.get(net) <= -10;
+    }
+
+    /** The complementary output of a flip-flop: the other plate, free of charge. */
+    int complementOf(int latchOut, int module) {
+        Integer c = complement.get(latchOut);
+        if (c != null) {
+            return c;
+        }
+        int n = net(names.get(latchOut) + "_n", netModule.get(latchOut), Span.none());
+        read(latchOut);
+        gates.add(new GateB(GateFn.NOT, new int[]{latchOut}, n, -1, netModule.get(latchOut), Span.none()));
+        drive(n, gates.size() - 1, Span.none());
+        complement.put(latchOut, n);
+        complementSource.put(n, latchOut);
+        return n;
+    }
+
+    /** Growable int array. */
+    static final class IntList {
+        private int[] a = new int[64];
+        private int n;
+
+        void add(int v) {
+            if (n == a.length) {
+                a = Arrays.copyOf(a, n * 2);
+            }
+            a[n++] = v;
+        }
+
+        int get(int i) {
+            return a[i];
+        }
+
+        void set(int i, int v) {
+            a[i] = v;
+        }
+
+        int size() {
+            return n;
+        }
+
+        int[] toArray() {
+            return Arrays.copyOf(a, n);
+        }
+    }
+}

@@ -1,0 +1,193 @@
+package org.thermion.elab;
+
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.Span;
+import org.thermion.lang.ast.Prop;
+import org.thermion.model.Envelope;
+import org.thermion.model.HeaterRating;
+import org.thermion.model.HeaterRule;
+import org.thermion.model.HeaterString;
+import org.thermion.model.TubeType;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Packs stage sections into envelopes (per module and tube type, a stage never split
+ * across two envelopes) and wires the envelopes' heaters into strings by the rules.
+ */
+final class Packer {
+    final List<Envelope> envelopes = new ArrayList<>();
+    final List<HeaterRule> rules = new ArrayList<>();
+    final List<HeaterString> strings = new ArrayList<>();
+    private final Parts parts;
+    private final Diagnostics diags;
+    private final Map<String, Integer> open = new HashMap<>();
+    private final Map<Integer, Integer> free = new HashMap<>();
+    private final List<Span> ruleSpans = new ArrayList<>();
+
+    Packer(Parts parts, Diagnostics diags) {
+        this.parts = parts;
+        this.diags = diags;
+    }
+
+    /** Places a stage instance needing {@code sections} of {@code tube} in module {@code module}; returns the envelope. */
+    int place(int tube, int module, int sections) {
+        TubeType t = parts.tubes.get(tube);
+        String key = tube + ":" + module;
+        Integer cur = open.get(key);
+        if (sections > t.sections()) {
+            int first = -1;
+            int left = sections;
+            while (left > 0) {
+                int e = newEnvelope(tube, module, Math.min(left, t.sections()));
+                first = first < 0 ? e : first;
+                left -= t.sections();
+            }
+            return first;
+        }
+        if (cur != null && free.get(cur) >= sections) {
+            Envelope e = envelopes.get(cur);
+            envelopes.set(cur, new Envelope(e.id(), e.designator(), e.tube(), e.module(), e.sectionsUsed() + sections));
+            free.put(cur, free.get(cur) - sections);
+            return cur;
+        }
+        int e = newEnvelope(tube, module, sections);
+        open.put(key, e);
+        return e;
+    }
+
+    private int newEnvelope(int tube, int module, int used) {
+        int id = envelopes.size();
+        envelopes.add(new Envelope(id, "V" + (id + 1), tube, module, used));
+        free.put(id, parts.tubes.get(tube).sections() - used);
+        return id;
+    }
+
+    /** Reads a {@code heaters on RAIL { ... }} block into rules. */
+    void readRules(Prop p) {
+        PropReader head = new PropReader(p, diags);
+        head.expectWord("on");
+        String railName = head.word("a rail name");
+        Span rs = head.lastSpan();
+        head.end();
+        if (railName == null) {
+            return;
+        }
+        int rail = parts.rail(railName, rs);
+        for (Prop q : p.block()) {
+            PropReader r = new PropReader(q, diags);
+            String kind = q.key().text();
+            boolean series;
+            int count = 1;
+            if (kind.equals("parallel")) {
+                series = false;
+            } else if (kind.equals("series")) {
+                series = true;
+                count = (int) r.whole("heaters per string", 1, 64);
+                r.expectWord("of");
+            } else {
+                parts.unknownKey(q, "heaters", List.of("parallel", "series"));
+                continue;
+            }
+            List<Integer> tubes = new ArrayList<>();
+            while (!r.atEnd() && !r.failed() && r.peek() instanceof org.thermion.lang.ast.Value.Word w
+                    && !List.of("at", "per", "across", "drop", "shunt").contains(w.text())) {
+                String name = r.word("a tube type");
+                int t = parts.tube(name, r.lastSpan());
+                if (t >= 0) {
+                    tubes.add(t);
+                }
+            }
+            if (tubes.isEmpty() && !r.failed()) {
+                diags.error(r.here(), "expected the tube types this rule wires", "e.g. `series 2 of 6AU6 6AL5`");
+                continue;
+            }
+            double volts = Double.NaN, drop = 0;
+            boolean perModule = true, shunt = false;
+            while (!r.atEnd() && !r.failed()) {
+                if (r.acceptWord("at")) {
+                    volts = r.positive(Unit.VOLT, "heater wiring voltage", false);
+                } else if (r.acceptWord("per")) {
+                    r.expectWord("module");
+                    perModule = true;
+                } else if (r.acceptWord("across")) {
+                    r.expectWord("machine");
+                    perModule = false;
+                } else if (r.acceptWord("drop")) {
+                    drop = r.positive(Unit.OHM, "dropping resistor", true);
+                } else if (r.acceptWord("shunt")) {
+                    shunt = true;
+                } else {
+                    r.end();
+                }
+            }
+            if (r.failed() || rail < 0) {
+                continue;
+            }
+            rules.add(new HeaterRule(rail, series, List.copyOf(tubes), count, perModule, volts, drop, shunt));
+            ruleSpans.add(q.span());
+        }
+    }
+
+    /** Forms strings from the envelopes; every envelope must be covered by some rule. */
+    void wire(Span machineSpan) {
+        boolean[] done = new boolean[envelopes.size()];
+        for (int ri = 0; ri < rules.size(); ri++) {
+            HeaterRule rule = rules.get(ri);
+            Map<Integer, List<Integer>> groups = new LinkedHashMap<>();
+            for (Envelope e : envelopes) {
+                if (!done[e.id()] && rule.tubes().contains(e.tube())) {
+                    done[e.id()] = true;
+                    groups.computeIfAbsent(rule.perModule() ? e.module() : -1, k -> new ArrayList<>()).add(e.id());
+                }
+            }
+            for (Map.Entry<Integer, List<Integer>> g : groups.entrySet()) {
+                List<Integer> ids = g.getValue();
+                int size = rule.series() ? rule.count() : 1;
+                for (int i = 0; i < ids.size(); i += size) {
+                    List<Integer> chunk = ids.subList(i, Math.min(ids.size(), i + size));
+                    List<HeaterRating> ratings = new ArrayList<>();
+                    boolean ok = true;
+                    for (int id : chunk) {
+                        TubeType t = parts.tubes.get(envelopes.get(id).tube());
+                        HeaterRating h = Double.isNaN(rule.volts()) ? t.defaultHeater() : t.heaterAt(rule.volts());
+                        if (h == null) {
+                            diags.error(ruleSpans.get(ri), "tube " + t.name() + " has no " + fmt(rule.volts()) + " V heater",
+                                    "its heater takes " + t.heaters().stream().map(x -> fmt(x.volts()) + " V").toList());
+                            ok = false;
+                            break;
+                        }
+                        ratings.add(h);
+                    }
+                    if (!ok) {
+                        break;
+                    }
+                    strings.add(new HeaterString(rule.rail(), List.copyOf(chunk), List.copyOf(ratings), rule.dropOhms(),
+                            rule.shunt(), g.getKey() >= 0 ? g.getKey() : envelopes.get(chunk.get(0)).module(), ri));
+                }
+            }
+        }
+        Map<Integer, Integer> missing = new LinkedHashMap<>();
+        for (Envelope e : envelopes) {
+            if (!done[e.id()]) {
+                missing.merge(e.tube(), 1, Integer::sum);
+            }
+        }
+        for (Map.Entry<Integer, Integer> m : missing.entrySet()) {
+            String t = parts.tubes.get(m.getKey()).name();
+            diags.error(machineSpan, "no heater arrangement for tube type " + t + " (" + m.getValue() + " envelopes)",
+                    "add `parallel " + t + "` or `series N of " + t + "` to a `heaters on RAIL` block");
+        }
+    }
+
+    static String fmt(double v) {
+        if (Double.isNaN(v)) {
+            return "?";
+        }
+        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+    }
+}

@@ -1,0 +1,275 @@
+package org.thermion.elab;
+
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.Span;
+import org.thermion.lang.ast.Prop;
+import org.thermion.lang.ast.Value;
+
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Reads the values of one property line left to right: quantities with units, words,
+ * whole numbers and ranges. Every mismatch is reported once, at the offending token.
+ */
+final class PropReader {
+    private static final Pattern GLUED = Pattern.compile("([0-9]+(?:\\.[0-9]+)?)([A-Za-z]+)");
+
+    private final Prop prop;
+    private final Diagnostics diags;
+    private final List<Value> values;
+    private int pos;
+    private boolean failed;
+
+    PropReader(Prop prop, Diagnostics diags) {
+        this.prop = prop;
+        this.diags = diags;
+        this.values = prop.values();
+    }
+
+    boolean failed() {
+        return failed;
+    }
+
+    boolean atEnd() {
+        return pos >= values.size();
+    }
+
+    Value peek() {
+        return atEnd() ? null : values.get(pos);
+    }
+
+    boolean peekWord(String w) {
+        Value v = peek();
+        return v instanceof Value.Word word && word.text().equals(w);
+    }
+
+    boolean peekSym(String s) {
+        Value v = peek();
+        return v instanceof Value.Sym sym && sym.text().equals(s);
+    }
+
+    Span here() {
+        Value v = peek();
+        if (v != null) {
+            return v.span();
+        }
+        Span s = prop.span();
+        return new Span(s.file(), s.endLine(), Math.max(1, s.endCol() - 1), s.endLine(), s.endCol());
+    }
+
+    private void fail(Span span, String message, String hint) {
+        if (!failed) {
+            diags.error(span, message, hint);
+        }
+        failed = true;
+    }
+
+    /** A quantity of the given dimension, in SI; NaN after an error. */
+    double quantity(Unit unit, String what) {
+        if (failed) {
+            return Double.NaN;
+        }
+        Value v = peek();
+        double sign = 1;
+        if (v instanceof Value.Sym s && s.text().equals("-")) {
+            sign = -1;
+            pos++;
+            v = peek();
+        }
+        if (v instanceof Value.Num n) {
+            pos++;
+            double x = parseDouble(n);
+            Value u = peek();
+            if (u instanceof Value.Word w && Unit.WORDS.containsKey(w.text())) {
+                pos++;
+                return sign * x * checkUnit(Unit.WORDS.get(w.text()), unit, w.span(), what);
+            }
+            fail(u == null ? n.span() : u.span(), what + " needs a unit", "write it with " + unit.example());
+            return Double.NaN;
+        }
+        if (v instanceof Value.Word w) {
+            Matcher m = GLUED.matcher(w.text());
+            if (m.matches() && Unit.WORDS.containsKey(m.group(2))) {
+                pos++;
+                double x = Double.parseDouble(m.group(1));
+                return sign * x * checkUnit(Unit.WORDS.get(m.group(2)), unit, w.span(), what);
+            }
+            if (m.matches()) {
+                fail(w.span(), "unknown unit '" + m.group(2) + "' in " + what, "write it with " + unit.example());
+                return Double.NaN;
+            }
+        }
+        fail(here(), "expected " + what + " (a number with " + unit.example() + ")" + found(v), null);
+        return Double.NaN;
+    }
+
+    private double checkUnit(Unit.Scaled got, Unit want, Span span, String what) {
+        if (got.unit() != want) {
+            fail(span, what + " is in the wrong unit: " + got.unit().name().toLowerCase() + "s given, "
+                    + want.name().toLowerCase() + "s expected", "write it with " + want.example());
+            return Double.NaN;
+        }
+        return got.factor();
+    }
+
+    /** A quantity that must be strictly positive (or zero when {@code zeroOk}). */
+    double positive(Unit unit, String what, boolean zeroOk) {
+        Span at = here();
+        double v = quantity(unit, what);
+        if (!Double.isNaN(v) && (v < 0 || (!zeroOk && v == 0))) {
+            fail(at, what + " is out of range: " + v, zeroOk ? "use a value of zero or more" : "use a value above zero");
+            return Double.NaN;
+        }
+        return v;
+    }
+
+    /** A plain number without unit; NaN after an error. */
+    double number(String what) {
+        if (failed) {
+            return Double.NaN;
+        }
+        Value v = peek();
+        if (v instanceof Value.Num n) {
+            pos++;
+            return parseDouble(n);
+        }
+        fail(here(), "expected " + what + " (a plain number)" + found(v), null);
+        return Double.NaN;
+    }
+
+    /** A whole number; -1 after an error. */
+    long whole(String what) {
+        if (failed) {
+            return -1;
+        }
+        Value v = peek();
+        if (v instanceof Value.Num n) {
+            pos++;
+            try {
+                return parseLong(n.text());
+            } catch (NumberFormatException e) {
+                fail(n.span(), "expected " + what + " as a whole number, found '" + n.text() + "'", null);
+                return -1;
+            }
+        }
+        fail(here(), "expected " + what + " (a whole number)" + found(v), null);
+        return -1;
+    }
+
+    /** A whole number within bounds. */
+    long whole(String what, long min, long max) {
+        Span at = here();
+        long n = whole(what);
+        if (!failed && (n < min || n > max)) {
+            fail(at, what + " is out of range: " + n, "use a value from " + min + " to " + max);
+            return -1;
+        }
+        return n;
+    }
+
+    /** A bare word; null after an error. */
+    String word(String what) {
+        if (failed) {
+            return null;
+        }
+        Value v = peek();
+        if (v instanceof Value.Word w) {
+            pos++;
+            return w.text();
+        }
+        if (v instanceof Value.Num n) {
+            pos++;
+            return n.text();
+        }
+        fail(here(), "expected " + what + found(v), null);
+        return null;
+    }
+
+    Span lastSpan() {
+        return pos == 0 ? prop.span() : values.get(pos - 1).span();
+    }
+
+    String string(String what) {
+        if (failed) {
+            return null;
+        }
+        Value v = peek();
+        if (v instanceof Value.Str s) {
+            pos++;
+            return s.text();
+        }
+        fail(here(), "expected " + what + " in quotes" + found(v), null);
+        return null;
+    }
+
+    void expectSym(String sym) {
+        if (failed) {
+            return;
+        }
+        if (peekSym(sym)) {
+            pos++;
+            return;
+        }
+        fail(here(), "expected '" + sym + "'" + found(peek()), null);
+    }
+
+    void expectWord(String w) {
+        if (failed) {
+            return;
+        }
+        if (peekWord(w)) {
+            pos++;
+            return;
+        }
+        fail(here(), "expected '" + w + "'" + found(peek()), null);
+    }
+
+    boolean acceptWord(String w) {
+        if (!failed && peekWord(w)) {
+            pos++;
+            return true;
+        }
+        return false;
+    }
+
+    boolean acceptSym(String s) {
+        if (!failed && peekSym(s)) {
+            pos++;
+            return true;
+        }
+        return false;
+    }
+
+    /** Reports leftovers after the expected values. */
+    void end() {
+        if (!failed && !atEnd()) {
+            fail(peek().span(), "unexpected '" + peek().text() + "' after the value of '" + prop.key().text() + "'",
+                    "one value per property line; start a new line for the next property");
+        }
+    }
+
+    private static String found(Value v) {
+        return v == null ? ", found end of line" : ", found '" + v.text() + "'";
+    }
+
+    private double parseDouble(Value.Num n) {
+        try {
+            return parseLong(n.text());
+        } catch (NumberFormatException e) {
+            return Double.parseDouble(n.text());
+        }
+    }
+
+    static long parseLong(String text) {
+        String t = text.replace("_", "");
+        if (t.startsWith("0x")) {
+            return Long.parseLong(t.substring(2), 16);
+        }
+        if (t.startsWith("0b")) {
+            return Long.parseLong(t.substring(2), 2);
+        }
+        return Long.parseLong(t);
+    }
+}

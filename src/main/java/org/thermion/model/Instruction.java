@@ -1,0 +1,7 @@
+package org.thermion.model;
+
+import java.util.List;
+
+/** One instruction: mnemonic, opcode and its meaning as register-transfer statements. */
+public record Instruction(String mnemonic, long opcode, List<Transfer> body) {
+}

@@ -1,0 +1,39 @@
+package org.thermion.model;
+
+import java.util.List;
+
+/**
+ * One logic function built from tube sections and resistors. Draws are per rail for the
+ * output low, output high, and always. Delays are in seconds and NaN when to be computed
+ * from the plate load and the driven capacitance. {@code sectionsPerInput} is true for
+ * stages that take one section per input (diode gates).
+ */
+public record StageType(
+        String name,
+        StageFunction function,
+        int tube,
+        int sections,
+        boolean sectionsPerInput,
+        int fanIn,
+        double loadOhms,
+        int loadRail,
+        List<RailDraw> drawLow,
+        List<RailDraw> drawHigh,
+        List<RailDraw> drawAlways,
+        double rise,
+        double fall,
+        double setup,
+        double outputOhmsLow,
+        double wiringFarads,
+        double gain,
+        String note) {
+
+    public boolean delayGiven() {
+        return !Double.isNaN(rise) && !Double.isNaN(fall);
+    }
+
+    /** Sections this stage uses for an instance with {@code inputs} inputs. */
+    public int sectionsFor(int inputs) {
+        return sectionsPerInput ? sections * Math.max(1, inputs) : sections;
+    }
+}
