@@ -27,6 +27,16 @@ final class Machines {
         return m;
     }
 
+    static Machine file(Path path) {
+        SourceSet sources = new SourceSet();
+        Diagnostics diags = new Diagnostics();
+        Machine m = new Elaborator(sources, diags).elaborate(path);
+        if (m == null || diags.hasErrors()) {
+            throw new AssertionError("machine does not elaborate: " + path);
+        }
+        return m;
+    }
+
     static int net(Machine m, String name) {
         String[] names = m.netlist().netNames();
         for (int i = 0; i < names.length; i++) {
