@@ -24,10 +24,31 @@ final class Machines {
         return check(m, src, d);
     }
 
+    /** Supplies and the operator-to-stage mapping every small test machine shares. */
+    static final String PRELUDE = """
+            rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
+            rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
+            rail heat  { voltage 12.6 V; source 0.02 ohm; limit 40 A }
+            heaters on heat {
+              parallel 12AU7 at 12.6 V
+              series 2 of 6AL5 6AU6 across machine
+            }
+            realize {
+              not pentode_inverter
+              nand pentode_nand2
+              nor triode_nor2
+              and diode_and
+              or diode_or
+              buffer cathode_follower
+              latch triode_flipflop
+            }
+            """;
+
+    /** Elaborates a small machine written after {@link #PRELUDE}. */
     static Machine fromText(String text) {
         SourceSet src = new SourceSet();
         Diagnostics d = new Diagnostics();
-        Machine m = new Elaborator(src, d).elaborateText(Path.of("test.machine"), text);
+        Machine m = new Elaborator(src, d).elaborateText(Path.of("test.machine"), PRELUDE + text);
         return check(m, src, d);
     }
 
