@@ -97,16 +97,17 @@ public final class Budget {
             String subject = "rail " + rail.name();
             if (line.over()) {
                 f.add(new Finding(Finding.Severity.ERROR, subject,
-                        "peak " + HeaterAnalysis.num(peak * 1e3) + " mA (heaters " + HeaterAnalysis.num(heat * 1e3)
-                                + " mA, plate and bias " + HeaterAnalysis.num(stage * 1e3) + " mA"
+                        "peak " + HeaterAnalysis.amps(peak) + " ("
+                                + (heat > 0 ? "heaters " + HeaterAnalysis.amps(heat) + ", " : "")
+                                + "plate and bias " + HeaterAnalysis.amps(stage)
                                 + (line.simulated() ? " in the simulation" : " with every stage at its highest draw")
-                                + ") exceeds its limit of " + HeaterAnalysis.num(rail.limitAmps() * 1e3) + " mA",
+                                + ") exceeds its limit of " + HeaterAnalysis.amps(rail.limitAmps()),
                         "raise the supply's rating or move load to another rail"));
             } else if (this.meter != null && line.limited() && heat + staticHighRail(r) > rail.limitAmps()) {
                 f.add(new Finding(Finding.Severity.WARNING, subject,
                         "with every stage at its highest draw the rail would take "
-                                + HeaterAnalysis.num((heat + staticHighRail(r)) * 1e3) + " mA, over its limit of "
-                                + HeaterAnalysis.num(rail.limitAmps() * 1e3) + " mA; the program run stays within it",
+                                + HeaterAnalysis.amps(heat + staticHighRail(r)) + ", over its limit of "
+                                + HeaterAnalysis.amps(rail.limitAmps()) + "; the program run stays within it",
                         "other programs or inputs may reach the limit"));
             }
         }
