@@ -76,11 +76,13 @@ final class BudgetReport {
                 m.envelopes().size(), m.heaterStrings().size(), m.rails().size()));
         h.add("  plate and bias current: lowest and highest = every stage instance at its lowest or highest draw");
         if (run != null) {
-            h.add(String.format(Locale.ROOT, "  simulated: %s%s, %d cycles (%d phases each), lane 0, latches start %s; "
-                            + "min, mean, peak over the phases, now = the last phase", run.program(),
-                    run.inputs() == null ? "" : " with inputs " + run.inputs(), run.cycles(), m.clock().phases(), run.init()));
+            h.add(String.format(Locale.ROOT, "  simulated: %s%s, %d cycles of %d phases, lane 0, latches start %s",
+                    run.program(), run.inputs() == null ? "" : " with inputs " + run.inputs(), run.cycles(),
+                    m.clock().phases(), run.init()));
+            h.add("    min, mean and peak over every phase; now = the last phase; cycles count from 0, phases from 1");
         }
-        h.add("  plate W is " + PLATE_NOTE);
+        h.add("  plate W is approximate: P = I x max(V - I x Rload, I x Ron) for the draw on the plate-load rail,");
+        h.add("    I x V for other positive rails, I x arc drop for a conducting thyratron; bias draws not counted");
         return h;
     }
 

@@ -1,0 +1,198 @@
+package org.thermion.cli;
+
+import org.junit.jupiter.api.Test;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+/** The budget command end to end, on small machines kept beside the golden files. */
+class BudgetCommandTest {
+    static final String DIR = Golden.DIR.toString();
+    static final String TINY = DIR + "/tiny.machine";
+    static final String TINY_ASM = DIR + "/tiny.asm";
+    static final String TINY_INPUTS = DIR + "/tiny-inputs.csv";
+    static final String LONE = DIR + "/lone-thyratron.machine";
+
+    record Result(int code, String out, String err) {
+    }
+
+    static Result run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.commandLine().setOut(new PrintWriter(out, true)).setErr(new PrintWriter(err, true)).execute(args);
+        return new Result(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void staticReportOfAPassingMachine() throws Exception {
+        Result r = run("budget", TINY);
+        assertThat(r.err()).isEmpty();
+        assertThat(r.code()).isEqualTo(ExitCodes.OK);
+        Golden.assertMatches("tiny-static.txt", r.out());
+    }
+
+    @Test
+    void simulatedReportWithProgramAndInputs() throws Exception {
+        Result r = run("budget", TINY, "--program", TINY_ASM, "--inputs", TINY_INPUTS, "--cycles", "16");
+        assertThat(r.err()).isEmpty();
+        assertThat(r.code()).isEqualTo(ExitCodes.OK);
+        Golden.assertMatches("tiny-run.txt", r.out());
+    }
+
+    @Test
+    void aLoneThyratronAndAnOverloadedRailFailTheCheck() throws Exception {
+        Result r = run("budget", LONE);
+        assertThat(r.code()).isEqualTo(ExitCodes.CHECK_FAILED);
+        Golden.assertMatches("lone-thyratron.txt", r.out());
+        // the caution closes the text report
+        assertThat(r.out().strip()).endsWith(BudgetReport.CAUTION);
+    }
+
+    @Test
+    void jsonFollowsItsSchemaStaticAndSimulated() throws Exception {
+        Object schema = Json.parse(Files.readString(Golden.DIR.resolve("budget.schema.json"), StandardCharsets.UTF_8));
+        for (String[] args : List.of(new String[] {"budget", TINY, "--format", "json"},
+                new String[] {"budget", LONE, "--format", "json"},
+                new String[] {"budget", TINY, "--format", "json", "--program", TINY_ASM, "--inputs", TINY_INPUTS, "--cycles", "16"})) {
+            Result r = run(args);
+            Object report = Json.parse(r.out());
+            assertThat(SchemaCheck.check(schema, report)).as(String.join(" ", args)).isEmpty();
+            Map<?, ?> top = (Map<?, ?>) report;
+            assertThat(top.get("caution")).isEqualTo(BudgetReport.CAUTION);
+            boolean simulated = top.get("simulation") != null;
+            Map<?, ?> tables = (Map<?, ?>) top.get("tables");
+            for (Object row : (List<?>) tables.get("rails")) {
+                assertThat(((Map<?, ?>) row).containsKey("peak_amps")).isEqualTo(simulated);
+            }
+            assertThat(top.get("check")).isEqualTo(r.code() == ExitCodes.CHECK_FAILED ? "failed" : "ok");
+        }
+    }
+
+    @Test
+    void jsonCarriesTheSameFiguresAsTheText() {
+        Map<?, ?> top = (Map<?, ?>) Json.parse(run("budget", LONE, "--format", "json").out());
+        Map<?, ?> tables = (Map<?, ?>) top.get("tables");
+        Map<?, ?> bplus = ((List<?>) tables.get("supply")).stream().map(x -> (Map<?, ?>) x)
+                .filter(x -> x.get("rail").equals("bplus")).findFirst().orElseThrow();
+        // two lamp drivers at 25 mA, four pentode_inverter stages at 2.4 mA (library draws): 59.6 mA
+        assertThat(((Number) bplus.get("peak_amps")).doubleValue()).isCloseTo(0.0596, within(1e-12));
+        assertThat(bplus.get("status")).isEqualTo("OVER");
+        List<?> findings = (List<?>) tables.get("findings");
+        assertThat(findings).hasSize(2);
+        Map<?, ?> lone = ((List<?>) tables.get("heater_strings")).stream().map(x -> (Map<?, ?>) x)
+                .filter(x -> x.get("heaters").equals("2D21")).findFirst().orElseThrow();
+        assertThat(((Number) lone.get("suggested_drop_ohms")).doubleValue()).isCloseTo(10.5, within(1e-9));
+        assertThat(((Number) lone.get("suggested_drop_watts")).doubleValue()).isCloseTo(3.78, within(1e-9));
+    }
+
+    @Test
+    void csvRecordsAllHaveTheSameFieldCount() {
+        Result r = run("budget", TINY, "--format", "csv", "--program", TINY_ASM, "--cycles", "8");
+        assertThat(r.code()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("\r\n");
+        List<List<String>> records = csv(r.out());
+        int width = records.get(0).size();
+        assertThat(records).allSatisfy(rec -> assertThat(rec).hasSize(width));
+        assertThat(records).anySatisfy(rec -> assertThat(rec.subList(0, 3)).containsExactly("report", "caution", BudgetReport.CAUTION));
+        List<String> header = records.stream().filter(x -> x.get(0).equals("table") && x.get(1).equals("rail")
+                && x.get(2).equals("volts") && x.get(3).equals("lowest_amps")).findFirst().orElseThrow();
+        List<String> bplus = records.stream().filter(x -> x.get(0).equals("rails") && x.get(1).equals("bplus"))
+                .findFirst().orElseThrow();
+        int peak = header.indexOf("peak_amps");
+        assertThat(peak).isPositive();
+        assertThat(Double.parseDouble(bplus.get(peak))).isPositive();
+    }
+
+    @Test
+    void aStimulusNamingNoInputIsBadInputWithACaret() throws Exception {
+        Path bad = Files.createTempFile("stim", ".csv");
+        try {
+            Files.writeString(bad, "cycle,a,flood\n0,1,0\n");
+            Result r = run("budget", TINY, "--program", TINY_ASM, "--inputs", bad.toString());
+            assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+            assertThat(r.out()).isEmpty();
+            assertThat(r.err()).isEqualTo(bad + ":1:9: error: no machine input named 'flood'\n"
+                    + "  cycle,a,flood\n"
+                    + "          ^~~~~\n"
+                    + "  = its inputs are a\n"
+                    + "1 error, 0 warnings\n");
+        } finally {
+            Files.delete(bad);
+        }
+    }
+
+    @Test
+    void aStimulusValueMustBeABit() throws Exception {
+        Path bad = Files.createTempFile("stim", ".csv");
+        try {
+            Files.writeString(bad, "cycle,a\n0,1\n3,2\n");
+            Result r = run("budget", TINY, "--program", TINY_ASM, "--inputs", bad.toString());
+            assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+            assertThat(r.err()).startsWith(bad + ":3:3: error: expected 0 or 1, not '2'");
+        } finally {
+            Files.delete(bad);
+        }
+    }
+
+    @Test
+    void usageProblemsAreBadInput() {
+        assertThat(run("budget", TINY, "--cycles", "0", "--program", TINY_ASM).code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(run("budget", TINY, "--init", "sideways", "--program", TINY_ASM).code()).isEqualTo(ExitCodes.BAD_INPUT);
+        Result r = run("budget", TINY, "--inputs", TINY_INPUTS);
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("--inputs needs --program");
+        assertThat(run("budget", DIR + "/no-such.machine").code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(run("budget", TINY, "--format", "yaml").code()).isEqualTo(ExitCodes.BAD_INPUT);
+    }
+
+    @Test
+    void helpDescribesTheOptions() {
+        Result r = run("budget", "--help");
+        assertThat(r.code()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("--program").contains("--inputs").contains("--cycles").contains("--format");
+    }
+
+    /** RFC 4180 records (quoted fields, doubled quotes, CRLF). */
+    static List<List<String>> csv(String text) {
+        List<List<String>> out = new ArrayList<>();
+        List<String> rec = new ArrayList<>();
+        StringBuilder f = new StringBuilder();
+        boolean quoted = false;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (quoted) {
+                if (c == '"' && i + 1 < text.length() && text.charAt(i + 1) == '"') {
+                    f.append('"');
+                    i++;
+                } else if (c == '"') {
+                    quoted = false;
+                } else {
+                    f.append(c);
+                }
+            } else if (c == '"') {
+                quoted = true;
+            } else if (c == ',') {
+                rec.add(f.toString());
+                f.setLength(0);
+            } else if (c == '\r' && i + 1 < text.length() && text.charAt(i + 1) == '\n') {
+                rec.add(f.toString());
+                f.setLength(0);
+                out.add(rec);
+                rec = new ArrayList<>();
+                i++;
+            } else {
+                f.append(c);
+            }
+        }
+        return out;
+    }
+}
