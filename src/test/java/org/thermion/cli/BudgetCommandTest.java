@@ -94,6 +94,30 @@ class BudgetCommandTest {
         assertThat(((Number) lone.get("suggested_drop_watts")).doubleValue()).isCloseTo(3.78, within(1e-9));
     }
 
+    /**
+     * Hand count for tiny.asm (LD a; ST lamp; JMP loop) with a = 1 from cycle 4 to 9. Library draws on
+     * bplus: triode_flipflop 3.2 mA always (six: ir[4], acc, lamp), diode_and 1.0 mA while its output is
+     * low, diode_or 0.6 mA while high, lamp_driver 25 mA while high. The instruction register loads at the
+     * end of phase 1, so phase 1 still decodes the previous word. Cycle 10 phase 1: ir = LD a, acc = 1,
+     * lamp = 1 (stored at cycle 7), a = 0: the ANDs st, jump, (sel==0 & a), (sel==1 & lamp) and wl are
+     * low, ld is high, src is low: 19.2 + 5 x 1.0 + 25 = 49.2 mA, above 47.8 (cycle 8.1), 48.8 (8.2, 9.1,
+     * 9.2). At the end (cycle 15 phase 2, LD a with a = 0, lamp off): 19.2 + 5 x 1.0 = 24.2 mA.
+     */
+    @Test
+    void simulatedCurrentsMatchAHandCount() {
+        Map<?, ?> top = (Map<?, ?>) Json.parse(run("budget", TINY, "--format", "json", "--program", TINY_ASM,
+                "--inputs", TINY_INPUTS, "--cycles", "16").out());
+        Map<?, ?> bplus = ((List<?>) ((Map<?, ?>) top.get("tables")).get("rails")).stream().map(x -> (Map<?, ?>) x)
+                .filter(x -> x.get("rail").equals("bplus")).findFirst().orElseThrow();
+        assertThat(((Number) bplus.get("peak_amps")).doubleValue()).isCloseTo(0.0492, within(1e-12));
+        assertThat(bplus.get("peak_cycle")).isEqualTo(10L);
+        assertThat(bplus.get("peak_phase")).isEqualTo(1L);
+        assertThat(((Number) bplus.get("now_amps")).doubleValue()).isCloseTo(0.0242, within(1e-12));
+        // lowest and highest: all six ANDs high and the OR low, or the reverse, with the lamp off or on
+        assertThat(((Number) bplus.get("lowest_amps")).doubleValue()).isCloseTo(0.0192, within(1e-12));
+        assertThat(((Number) bplus.get("highest_amps")).doubleValue()).isCloseTo(0.0192 + 0.006 + 0.0006 + 0.025, within(1e-12));
+    }
+
     @Test
     void csvRecordsAllHaveTheSameFieldCount() {
         Result r = run("budget", TINY, "--format", "csv", "--program", TINY_ASM, "--cycles", "8");
