@@ -84,6 +84,10 @@ public final class IsaRun {
         for (int o = 0; o < outputs.size(); o++) {
             last[o] = outState[o] >= 0 && isa.state(outState[o]);
         }
+        StringBuilder initial = new StringBuilder();
+        for (boolean b : last) {
+            initial.append(b ? '1' : '0');
+        }
         int phase = machine.pc().phase();
         List<OutputChange> changes = new ArrayList<>();
         List<WatchRow> rows = new ArrayList<>();
@@ -130,7 +134,7 @@ public final class IsaRun {
             st.append(isa.state(s) ? '1' : '0');
         }
         return new RunResult(cycles, stop, changes, List.of(), state.stream().map(StateBit::name).toList(),
-                st.toString(), isa.pc(), true, watchNames, rows);
+                st.toString(), isa.pc(), true, watchNames, rows, initial.toString());
     }
 
     private int inputIndex(String name) {

@@ -55,6 +55,10 @@ public final class LogicRun {
         applyInputs(in);
         sim.settle();
         OutputLog log = new OutputLog(sim, 0);
+        StringBuilder initial = new StringBuilder();
+        for (Port o : machine.outputs()) {
+            initial.append(OutputLog.level(sim, o.net(), 0));
+        }
         if (vcd != null) {
             vcd.begin(sim, vcdDate, version);
         }
@@ -146,7 +150,7 @@ public final class LogicRun {
             st.append(OutputLog.level(sim, b.net(), 0));
         }
         return new RunResult(cycles, stop, log.changes(), unknowns, state.stream().map(StateBit::name).toList(),
-                st.toString(), sim.pc(0), (sim.pcUnknown() & 1L) == 0, watchNames, rows);
+                st.toString(), sim.pc(0), (sim.pcUnknown() & 1L) == 0, watchNames, rows, initial.toString());
     }
 
     private boolean loadedNow(Latch l, int phase) {

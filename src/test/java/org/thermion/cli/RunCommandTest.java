@@ -66,6 +66,17 @@ class RunCommandTest {
     }
 
     @Test
+    void withRandomInitTheIsaLevelStartsFromTheStateTheLogicPowersUpIn() {
+        String stim = GOLDEN.resolve("every-op-stim.csv").toString();
+        Outcome logic = run("run", MACHINE, "programs/every-op.asm", "--inputs", stim, "--cycles", "120",
+                "--init", "random:7", "--format", "json", "--watch", "acc,carry,s3");
+        Outcome isa = run("run", MACHINE, "programs/every-op.asm", "--inputs", stim, "--cycles", "120",
+                "--init", "random:7", "--format", "json", "--watch", "acc,carry,s3", "--level", "isa");
+        assertThat(logic.code()).as(logic.err()).isZero();
+        assertThat(isa.out().replace("\"level\": \"isa\"", "\"level\": \"logic\"")).isEqualTo(logic.out());
+    }
+
+    @Test
     void aProgramThatSettlesStopsAtItsFixedPoint(@TempDir Path dir) throws IOException {
         Path prog = dir.resolve("settle.asm");
         Files.writeString(prog, "        LD low_sw\n        ST pump\nhere:   JMP here\n");
