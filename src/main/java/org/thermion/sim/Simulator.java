@@ -80,6 +80,7 @@ public final class Simulator {
     private final int pcPhase;
     private final int jumpNet;
     private final int[] targetNets;
+    private final long[] targetPlanes;
     private final int[] pcs = new int[LANES];
     private long pcUnknown;
     private boolean pcUniform;
@@ -173,13 +174,14 @@ public final class Simulator {
             pcMask = (1 << pc.width()) - 1;
             pcPhase = pc.phase();
             jumpNet = pc.jumpNet();
-            targetNets = pc.targetNets().clone();
+            targetNets = Arrays.copyOf(pc.targetNets(), Math.min(pc.targetNets().length, 31));
         } else {
             pcMask = 0;
             pcPhase = -1;
             jumpNet = -1;
             targetNets = new int[0];
         }
+        targetPlanes = new long[targetNets.length];
         Rom rom = machine.rom();
         hasRom = rom != null;
         dataNets = hasRom ? rom.dataNets().clone() : new int[0];
@@ -545,19 +547,22 @@ public final class Simulator {
             romDirty = true;
             return;
         }
+        // Lanes differ: gather the target bit planes once, then decide lane by lane.
+        int tn = targetNets.length;
+        long[] planes = targetPlanes;
+        for (int b = 0; b < tn; b++) {
+            planes[b] = val[targetNets[b]];
+        }
         long newUnknown = pcUnknown;
         for (int lane = 0; lane < LANES; lane++) {
             long bit = 1L << lane;
             int inc = (pcs[lane] + 1) & pcMask;
-            int tgt = target(lane);
-            boolean tgtUnknown = false;
-            if (threeValued) {
-                for (int t : targetNets) {
-                    if ((unk[t] & bit) != 0) {
-                        tgtUnknown = true;
-                    }
-                }
+            int tgt = 0;
+            for (int b = 0; b < tn; b++) {
+                tgt |= (int) ((planes[b] >>> lane) & 1L) << b;
             }
+            tgt &= pcMask;
+            boolean tgtUnknown = (tx & bit) != 0;
             if ((jx & bit) != 0) {
                 // Jump or not unknown: the PC is known only when both ways lead to the same address.
                 pcs[lane] = inc;
@@ -616,9 +621,10 @@ public final class Simulator {
         } else {
             Arrays.fill(romV, 0L);
             for (int lane = 0; lane < LANES; lane++) {
-                long word = romWord(pcs[lane]);
-                for (int b = 0; b < w; b++) {
-                    romV[b] |= ((word >>> b) & 1L) << lane;
+                long bit = 1L << lane;
+                // Visit only the word's one bits.
+                for (long word = romWord(pcs[lane]); word != 0; word &= word - 1) {
+                    romV[Long.numberOfTrailingZeros(word)] |= bit;
                 }
             }
             for (int b = 0; b < w; b++) {
