@@ -137,31 +137,16 @@ class BudgetCommandTest {
     }
 
     @Test
-    void aStimulusNamingNoInputIsBadInputWithACaret() throws Exception {
+    void aBadStimulusIsBadInputWithItsPlace() throws Exception {
+        // the stimulus reader (sim package) words the message; the command shows it with file:line:col and a caret
         Path bad = Files.createTempFile("stim", ".csv");
         try {
             Files.writeString(bad, "cycle,a,flood\n0,1,0\n");
             Result r = run("budget", TINY, "--program", TINY_ASM, "--inputs", bad.toString());
             assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
             assertThat(r.out()).isEmpty();
-            assertThat(r.err()).isEqualTo(bad + ":1:9: error: no machine input named 'flood'\n"
-                    + "  cycle,a,flood\n"
-                    + "          ^~~~~\n"
-                    + "  = its inputs are a\n"
-                    + "1 error, 0 warnings\n");
-        } finally {
-            Files.delete(bad);
-        }
-    }
-
-    @Test
-    void aStimulusValueMustBeABit() throws Exception {
-        Path bad = Files.createTempFile("stim", ".csv");
-        try {
-            Files.writeString(bad, "cycle,a\n0,1\n3,2\n");
-            Result r = run("budget", TINY, "--program", TINY_ASM, "--inputs", bad.toString());
-            assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
-            assertThat(r.err()).startsWith(bad + ":3:3: error: expected 0 or 1, not '2'");
+            assertThat(r.err()).startsWith(bad + ":1:9: error: ").contains("'flood'")
+                    .contains("\n  cycle,a,flood\n          ^~~~~\n");
         } finally {
             Files.delete(bad);
         }
