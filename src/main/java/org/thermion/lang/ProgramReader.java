@@ -116,8 +116,11 @@ public final class ProgramReader {
             radix = 2;
             s = s.substring(2);
         }
-        if (s.isEmpty()) {
-            diags.error(span(t, line), "number '" + t.getText() + "' has no digits", "write e.g. 0x1F, 0b101 or 31");
+        String digits = radix == 16 ? "[0-9a-fA-F]+" : radix == 2 ? "[01]+" : "[0-9]+";
+        if (!s.matches(digits)) {
+            String kind = radix == 16 ? "hexadecimal" : radix == 2 ? "binary" : "decimal";
+            diags.error(span(t, line), "'" + t.getText() + "' is not a " + kind + " number",
+                    "write numbers as 31, 0x1F or 0b11111 (underscores may separate digits)");
             throw new BadNumber();
         }
         BigInteger v = new BigInteger(s, radix);
