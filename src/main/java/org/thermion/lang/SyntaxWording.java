@@ -31,7 +31,7 @@ final class SyntaxWording {
     }
 
     private static String tidy(String expected) {
-        String e = expected.replace("{", "").replace("}", "").replace("NAME", "a name")
+        String e = expected.replace("{", "").replace("}", "").replace("'',", "").replace(", ''", "").replace("NAME", "a name")
                 .replace("NUMBER", "a number").replace("STRING", "a quoted string");
         if (e.length() > 90) {
             e = e.substring(0, 87) + "...";
@@ -40,7 +40,7 @@ final class SyntaxWording {
     }
 
     static String hint(String msg) {
-        if (msg.contains("'}'")) {
+        if (msg.contains("<EOF>") && msg.contains("'}'")) {
             return "check that every '{' has its '}'";
         }
         return null;
