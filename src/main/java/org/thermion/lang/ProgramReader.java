@@ -147,6 +147,32 @@ public final class ProgramReader {
         return new Span(file, line, a.getCharPositionInLine() + 1, line, b.getCharPositionInLine() + 1 + len);
     }
 
+    /** ANTLR's message in the tool's words; a line's end of input is the end of the line. */
+    static String reword(String msg, String found) {
+        String what = found == null ? "input" : "end of line".equals(found) ? found : "'" + found + "'";
+        if (msg.startsWith("token recognition error at: ")) {
+            return "unexpected character " + msg.substring("token recognition error at: ".length());
+        }
+        if (msg.startsWith("mismatched input") || msg.startsWith("extraneous input")) {
+            int exp = msg.indexOf(" expecting ");
+            if (exp < 0) {
+                return "syntax error: unexpected " + what;
+            }
+            String expected = msg.substring(exp + " expecting ".length()).replace("{", "").replace("}", "")
+                    .replace("<EOF>", "end of line").replace("DIRECTIVE", "a directive").replace("NAME", "a name")
+                    .replace("NUMBER", "a number");
+            return "syntax error: unexpected " + what + ", expected " + expected;
+        }
+        if (msg.startsWith("missing ")) {
+            int at = msg.indexOf(" at ");
+            return "syntax error: " + (at >= 0 ? msg.substring(0, at) : msg).replace("<EOF>", "end of line") + " here";
+        }
+        if (msg.startsWith("no viable alternative")) {
+            return "syntax error: cannot make sense of " + what + " here";
+        }
+        return "syntax error: " + msg.replace("<EOF>", "end of line");
+    }
+
     /** A number the reader already reported; the line is dropped. */
     private static final class BadNumber extends RuntimeException {
         BadNumber() {
@@ -176,9 +202,7 @@ public final class ProgramReader {
                 found = t.getType() == Token.EOF ? "end of line" : t.getText();
                 len = t.getType() == Token.EOF ? 1 : Math.max(1, t.getText().length());
             }
-            String message = SyntaxWording.reword(msg, found).replace("end of file", "end of line")
-                    .replace("DIRECTIVE", "a directive");
-            diags.error(new Span(file, line, col + 1, line, col + 1 + len), message, SHAPE);
+            diags.error(new Span(file, line, col + 1, line, col + 1 + len), reword(msg, found), SHAPE);
         }
     }
 }
