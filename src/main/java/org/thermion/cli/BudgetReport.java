@@ -79,7 +79,8 @@ final class BudgetReport {
             h.add(String.format(Locale.ROOT, "  simulated: %s%s, %d cycles of %d phases, lane 0, latches start %s",
                     run.program(), run.inputs() == null ? "" : " with inputs " + run.inputs(), run.cycles(),
                     m.clock().phases(), run.init()));
-            h.add("    min, mean and peak over every phase; now = the last phase; cycles count from 0, phases from 1");
+            h.add("    min, mean and peak over every phase; now = the last phase; cycles count from 0, phases from 1"
+                    + (run.init().startsWith("unknown") ? "; an unknown output counts at its low draw" : ""));
         }
         h.add("  plate W is approximate: P = I x max(V - I x Rload, I x Ron) for the draw on the plate-load rail,");
         h.add("    I x V for other positive rails, I x arc drop for a conducting thyratron; bias draws not counted");
@@ -305,6 +306,7 @@ final class BudgetReport {
                 .column("rail", "rail", TEXT)
                 .column("volts", "voltage", VOLTS)
                 .column("heater_amps", "heaters", AMPS)
+                .column("heater_watts", "heater W", WATTS)
                 .column("stage_amps", "plate+bias", AMPS)
                 .column("basis", "from", TEXT)
                 .column("peak_amps", "peak", AMPS)
@@ -315,7 +317,7 @@ final class BudgetReport {
                 .column("status", "status", TEXT);
         for (Budget.Supply s : b.supply()) {
             Rail rail = m.rails().get(s.rail());
-            t.row(rail.name(), rail.volts(), s.heaterAmps(), s.stageAmps(), s.simulated() ? "simulation" : "highest",
+            t.row(rail.name(), rail.volts(), s.heaterAmps(), b.heaters().railWatts(s.rail()), s.stageAmps(), s.simulated() ? "simulation" : "highest",
                     s.peakAmps(), s.limited() ? s.limitAmps() : Double.NaN, s.limited() ? s.marginAmps() : Double.NaN,
                     s.marginFraction() * 100, Math.copySign(s.voltsAtPeak(), rail.volts()),
                     s.over() ? "OVER" : s.limited() ? "ok" : "no limit");
