@@ -87,6 +87,12 @@ final class BudgetCommand implements Callable<Integer> {
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
+        if (program == null && inputs == null) {
+            var parsed = spec.commandLine().getParseResult();
+            if (parsed.hasMatchedOption("--cycles") || parsed.hasMatchedOption("--init")) {
+                err.println("note: --cycles and --init apply to a run; without --program or --inputs the budget is static");
+            }
+        }
         BudgetReport.Run run = null;
         CurrentMeter meter = null;
         if (program != null || inputs != null) {

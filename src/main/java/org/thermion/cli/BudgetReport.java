@@ -116,7 +116,8 @@ final class BudgetReport {
     }
 
     private ReportTable modules() {
-        ReportTable t = new ReportTable("modules", "modules")
+        ReportTable t = new ReportTable("modules",
+                "modules (heater A and W: the module's share of its strings; a string spanning modules counts in each)")
                 .column("module", "module", TEXT)
                 .column("tubes", "tubes", COUNT)
                 .column("sections_used", "used", COUNT)

@@ -118,6 +118,36 @@ class BudgetCommandTest {
         assertThat(((Number) bplus.get("highest_amps")).doubleValue()).isCloseTo(0.0192 + 0.006 + 0.0006 + 0.025, within(1e-12));
     }
 
+    /**
+     * A machine without a ROM runs on its stimulus alone. lone-thyratron.machine: two 6AU6 inverters
+     * na = !a, nb = !b, two more ya = !na, yb = !nb (pentode_inverter: 2.4 mA conducting, 0.05 mA cut off)
+     * and two lamp drivers on a and b (25 mA lit). a = b = 0: 2 x 0.05 + 2 x 2.4 = 4.9 mA;
+     * a = b = 1 from cycle 2: 2 x 2.4 + 2 x 0.05 + 2 x 25 = 54.9 mA, over the 40 mA limit.
+     */
+    @Test
+    void aStimulusAloneDrivesAMachineWithoutRom() throws Exception {
+        Path stim = Files.createTempFile("stim", ".csv");
+        try {
+            Files.writeString(stim, "cycle,a,b\n0,0,0\n2,1,1\n");
+            Result r = run("budget", LONE, "--inputs", stim.toString(), "--cycles", "4", "--format", "json");
+            assertThat(r.code()).isEqualTo(ExitCodes.CHECK_FAILED);
+            Map<?, ?> tables = (Map<?, ?>) ((Map<?, ?>) Json.parse(r.out())).get("tables");
+            Map<?, ?> bplus = ((List<?>) tables.get("rails")).stream().map(x -> (Map<?, ?>) x)
+                    .filter(x -> x.get("rail").equals("bplus")).findFirst().orElseThrow();
+            assertThat(((Number) bplus.get("min_amps")).doubleValue()).isCloseTo(0.0049, within(1e-12));
+            assertThat(((Number) bplus.get("peak_amps")).doubleValue()).isCloseTo(0.0549, within(1e-12));
+            assertThat(((Number) bplus.get("mean_amps")).doubleValue()).isCloseTo((0.0049 + 0.0549) / 2, within(1e-12));
+            assertThat(bplus.get("peak_cycle")).isEqualTo(2L);
+            assertThat(bplus.get("peak_phase")).isEqualTo(1L);
+            Map<?, ?> supply = ((List<?>) tables.get("supply")).stream().map(x -> (Map<?, ?>) x)
+                    .filter(x -> x.get("rail").equals("bplus")).findFirst().orElseThrow();
+            assertThat(supply.get("basis")).isEqualTo("simulation");
+            assertThat(supply.get("status")).isEqualTo("OVER");
+        } finally {
+            Files.delete(stim);
+        }
+    }
+
     @Test
     void csvRecordsAllHaveTheSameFieldCount() {
         Result r = run("budget", TINY, "--format", "csv", "--program", TINY_ASM, "--cycles", "8");
