@@ -22,6 +22,7 @@ import picocli.CommandLine.Spec;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.ZonedDateTime;
 import java.time.format.DateTimeFormatter;
@@ -100,6 +101,18 @@ final class RunCommand implements Callable<Integer> {
             if (level == Level.isa) {
                 return usage(err, "--vcd needs --level logic: the ISA level has no nets to dump", null);
             }
+            Path dir = vcd.toAbsolutePath().getParent();
+            if (dir == null || !Files.isDirectory(dir)) {
+                return usage(err, "cannot write the VCD to " + vcd + ": no such directory " + dir, null);
+            }
+            String fn = vcd.getFileName() == null ? "" : vcd.getFileName().toString();
+            if (Files.exists(vcd) && fn.matches(".*\\.(machine|asm|csv|hex)")) {
+                return usage(err, "refusing to write the VCD over " + vcd + ", which looks like a source file",
+                        "name a .vcd file for --vcd");
+            }
+            if (Files.isDirectory(vcd)) {
+                return usage(err, "cannot write the VCD to " + vcd + ": it is a directory", null);
+            }
         }
         if (vcdAll && vcd == null) {
             return usage(err, "--vcd-all needs --vcd FILE", null);
@@ -171,6 +184,8 @@ final class RunCommand implements Callable<Integer> {
                             .run(cycles, ZonedDateTime.now().format(DateTimeFormatter.RFC_1123_DATE_TIME),
                                     spec.root().version()[0]);
                     file.commit();
+                } catch (IOException | java.io.UncheckedIOException e) {
+                    return usage(err, "cannot write the VCD to " + vcd + ": " + e.getMessage(), null);
                 }
                 vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
                         + " nets and the pc)";

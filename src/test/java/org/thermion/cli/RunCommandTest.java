@@ -1,6 +1,7 @@
 package org.thermion.cli;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
 
 import java.io.IOException;
@@ -9,6 +10,7 @@ import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 
 import static org.assertj.core.api.Assertions.assertThat;
@@ -49,6 +51,7 @@ class RunCommandTest {
     }
 
     @Test
+    @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void logicAndIsaLevelsAgreeOnThePrograms() {
         String[][] cases = {
                 {"programs/pump.asm", STIM},
@@ -119,6 +122,11 @@ class RunCommandTest {
                 dir.resolve(".").resolve("s.csv").toString());
         assertThat(s.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(Files.readString(stim)).isEqualTo("cycle,manual\n0,1\n");
+        // An included part of a machine is not named on the command line, but it is a source all the same.
+        Path part = dir.resolve("part.machine");
+        Files.writeString(part, "# a part\n");
+        assertThat(run("run", MACHINE, prog.toString(), "--vcd", part.toString()).code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(Files.readString(part)).isEqualTo("# a part\n");
     }
 
     @Test
