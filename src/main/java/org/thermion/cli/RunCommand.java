@@ -150,6 +150,13 @@ final class RunCommand implements Callable<Integer> {
         if (asm == null || diags.hasErrors()) {
             return ExitCodes.BAD_INPUT;
         }
+        if (stim != null && stim.lastCycle() >= cycles) {
+            long first = stim.rows().stream().filter(r -> r.cycle() >= cycles).findFirst().orElseThrow().cycle();
+            err.println("warning: " + inputs + ": the rows from cycle " + first + " on come after the run's "
+                    + cycles + " cycles and never apply");
+            err.println("  = raise --cycles to reach them");
+            err.flush();
+        }
         RunResult result;
         String vcdNote = null;
         if (level == Level.isa) {
