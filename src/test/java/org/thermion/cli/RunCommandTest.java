@@ -51,6 +51,23 @@ class RunCommandTest {
     }
 
     @Test
+    void csvAndJsonCarryTheSameRun() throws IOException {
+        String[] args = {"run", MACHINE, "programs/pump.asm", "--inputs", STIM, "--cycles", "30", "--watch", "acc,s0"};
+        Outcome csv = run(concat(args, "--format", "csv"));
+        Outcome json = run(concat(args, "--format", "json"));
+        assertThat(csv.code()).isZero();
+        assertThat(json.code()).isZero();
+        golden("pump-30.csv", csv.out());
+        golden("pump-30.json", json.out());
+    }
+
+    private static String[] concat(String[] a, String... b) {
+        String[] r = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, r, a.length, b.length);
+        return r;
+    }
+
+    @Test
     @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void logicAndIsaLevelsAgreeOnThePrograms() {
         String[][] cases = {
