@@ -104,6 +104,8 @@ class RunCommandTest {
         assertThat(o.code()).as(o.err()).isZero();
         // Cycle 2 loads JMP into the instruction register; cycle 3 repeats it exactly: 4 cycles.
         assertThat(o.out()).contains("stop,4,,reason,fixed point at address 2");
+        Outcome isa = run("run", MACHINE, prog.toString(), "--format", "csv", "--level", "isa");
+        assertThat(isa.out()).isEqualTo(o.out());
     }
 
     @Test
