@@ -19,6 +19,7 @@ import org.thermion.model.Machine;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -57,6 +58,9 @@ public final class Assembler {
         String text;
         try {
             text = Files.readString(program, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            d.error(new Span(program, 0, 0, 0, 0), "cannot read program " + program + ": no such file", null);
+            return null;
         } catch (IOException e) {
             d.error(new Span(program, 0, 0, 0, 0), "cannot read program " + program + ": " + e.getMessage(), null);
             return null;
@@ -78,6 +82,11 @@ public final class Assembler {
         local.all().stream()
                 .sorted(Comparator.comparingInt((Diagnostic x) -> x.span().line()).thenComparingInt(x -> x.span().col()))
                 .forEach(d::add);
+        // Errors past the local limit were counted but not kept; hand on the count, so the
+        // summary still says how many there were (d keeps none of these: it is full by now).
+        for (int i = 0; i < local.dropped(); i++) {
+            d.add(Diagnostic.error(Span.none(), "error past the limit", null));
+        }
         return local.hasErrors() ? null : a;
     }
 
