@@ -65,7 +65,7 @@ final class RunCommand implements Callable<Integer> {
     String init;
 
     @Option(names = "--watch", paramLabel = "NET", split = ",",
-            description = "Nets to table per cycle, by name (acc, line[3], osel.term[5]; a bus name takes every bit).")
+            description = "Nets to table per cycle, by name (acc, line[3], lu.inv; a bus name takes every bit).")
     List<String> watch = new ArrayList<>();
 
     @Option(names = "--vcd", paramLabel = "FILE", description = "Write a value change dump (IEEE 1364) here.")
