@@ -37,6 +37,12 @@ class ThreeValuedWideGateTest {
             names.add("y_" + fn.name().toLowerCase());
             gates.add(new Gate(gates.size(), fn, new int[] {8, 9, 10}, out, -1, 0));
         }
+        // Four-input forms, the fourth input repeating a (AND, OR and their complements do not care).
+        for (int k = 0; k < 4; k++) {
+            int out = names.size();
+            names.add("y4_" + FNS[k].name().toLowerCase());
+            gates.add(new Gate(gates.size(), FNS[k], new int[] {8, 9, 10, 8}, out, -1, 0));
+        }
         int[] module = new int[names.size()];
         module[0] = -1;
         module[1] = -1;
@@ -99,14 +105,15 @@ class ThreeValuedWideGateTest {
         }
         sim.stepCycle();
         sim.settle();
-        for (int g = 0; g < FNS.length; g++) {
+        for (int g = 0; g < FNS.length + 4; g++) {
             int net = 11 + g;
+            GateFn fn = FNS[g % FNS.length];
             for (int lane = 0; lane < 27; lane++) {
                 boolean x = (sim.unknown(net) >>> lane & 1) == 1;
                 boolean one = (sim.value(net) >>> lane & 1) == 1;
                 char got = x ? 'X' : one ? '1' : '0';
-                assertThat(got).as("%s(%d,%d,%d)", FNS[g], digit(lane, 0), digit(lane, 1), digit(lane, 2))
-                        .isEqualTo(kleene(FNS[g], digit(lane, 0), digit(lane, 1), digit(lane, 2)));
+                assertThat(got).as("%s(%d,%d,%d) net %d", fn, digit(lane, 0), digit(lane, 1), digit(lane, 2), net)
+                        .isEqualTo(kleene(fn, digit(lane, 0), digit(lane, 1), digit(lane, 2)));
                 assertThat(x && one).isFalse();
             }
         }
@@ -128,10 +135,11 @@ class ThreeValuedWideGateTest {
         }
         sim.stepCycle();
         sim.settle();
-        for (int g = 0; g < FNS.length; g++) {
+        for (int g = 0; g < FNS.length + 4; g++) {
+            GateFn fn = FNS[g % FNS.length];
             for (int lane = 0; lane < 8; lane++) {
                 char got = (sim.value(11 + g) >>> lane & 1) == 1 ? '1' : '0';
-                assertThat(got).isEqualTo(kleene(FNS[g], lane & 1, lane >> 1 & 1, lane >> 2 & 1));
+                assertThat(got).isEqualTo(kleene(fn, lane & 1, lane >> 1 & 1, lane >> 2 & 1));
             }
         }
     }
