@@ -94,7 +94,7 @@ final class RunReport {
             t.print(out, "  ");
         }
         out.println();
-        out.println("final state:");
+        out.println("final state after " + r.cycles() + (r.cycles() == 1 ? " cycle:" : " cycles:"));
         Table t = new Table("state", "value");
         for (int i = 0; i < r.stateNames().size(); i++) {
             t.row(r.stateNames().get(i), String.valueOf(r.state().charAt(i)));

@@ -46,6 +46,10 @@ public final class Simulator {
     private static final int OP_NAND = 9;
     private static final int OP_NOR = 10;
     private static final int OP_XOR = 11;
+    private static final int OP_AND3 = 12;
+    private static final int OP_OR3 = 13;
+    private static final int OP_AND4 = 14;
+    private static final int OP_OR4 = 15;
 
     private final Machine machine;
     private final int phases;
@@ -59,6 +63,8 @@ public final class Simulator {
     private final int[] op;
     private final int[] in0;
     private final int[] in1;
+    private final int[] in2;
+    private final int[] in3;
     private final int[] listStart;
     private final int[] listEnd;
     private final int[] list;
@@ -113,6 +119,8 @@ public final class Simulator {
         op = new int[gateCount];
         in0 = new int[gateCount];
         in1 = new int[gateCount];
+        in2 = new int[gateCount];
+        in3 = new int[gateCount];
         listStart = new int[gateCount];
         listEnd = new int[gateCount];
         out = new int[gateCount];
@@ -133,6 +141,8 @@ public final class Simulator {
             listEnd[i] = at;
             in0[i] = ins.length > 0 ? ins[0] : Netlist.CONST0;
             in1[i] = ins.length > 1 ? ins[1] : Netlist.CONST0;
+            in2[i] = ins.length > 2 ? ins[2] : Netlist.CONST0;
+            in3[i] = ins.length > 3 ? ins[3] : Netlist.CONST0;
             op[i] = opcode(g, ins.length);
         }
 
@@ -207,8 +217,8 @@ public final class Simulator {
         return switch (g.fn()) {
             case BUF -> OP_BUF;
             case NOT -> OP_NOT;
-            case AND -> n == 1 ? OP_BUF : n == 2 ? OP_AND2 : OP_AND;
-            case OR -> n == 1 ? OP_BUF : n == 2 ? OP_OR2 : OP_OR;
+            case AND -> n == 1 ? OP_BUF : n == 2 ? OP_AND2 : n == 3 ? OP_AND3 : n == 4 ? OP_AND4 : OP_AND;
+            case OR -> n == 1 ? OP_BUF : n == 2 ? OP_OR2 : n == 3 ? OP_OR3 : n == 4 ? OP_OR4 : OP_OR;
             case NAND -> n == 1 ? OP_NOT : n == 2 ? OP_NAND2 : OP_NAND;
             case NOR -> n == 1 ? OP_NOT : n == 2 ? OP_NOR2 : OP_NOR;
             case XOR -> n == 1 ? OP_BUF : n == 2 ? OP_XOR2 : OP_XOR;
@@ -312,6 +322,8 @@ public final class Simulator {
         final int[] op = this.op;
         final int[] a = in0;
         final int[] b = in1;
+        final int[] c = in2;
+        final int[] d = in3;
         final int[] o = out;
         for (int g = 0, n = gateCount; g < n; g++) {
             long r;
@@ -336,6 +348,18 @@ public final class Simulator {
                     break;
                 case OP_XOR2:
                     r = v[a[g]] ^ v[b[g]];
+                    break;
+                case OP_AND3:
+                    r = v[a[g]] & v[b[g]] & v[c[g]];
+                    break;
+                case OP_OR3:
+                    r = v[a[g]] | v[b[g]] | v[c[g]];
+                    break;
+                case OP_AND4:
+                    r = v[a[g]] & v[b[g]] & v[c[g]] & v[d[g]];
+                    break;
+                case OP_OR4:
+                    r = v[a[g]] | v[b[g]] | v[c[g]] | v[d[g]];
                     break;
                 case OP_AND:
                     r = andList(v, g);
@@ -422,6 +446,8 @@ public final class Simulator {
                     rv = (v[in0[g]] ^ v[in1[g]]) & ~rx;
                     break;
                 }
+                case OP_AND3:
+                case OP_AND4:
                 case OP_AND:
                 case OP_NAND: {
                     long one = -1L;
@@ -432,9 +458,11 @@ public final class Simulator {
                         zero |= ~v[p] & ~x[p];
                     }
                     rx = ~zero & ~one;
-                    rv = code == OP_AND ? one : zero;
+                    rv = code == OP_NAND ? zero : one;
                     break;
                 }
+                case OP_OR3:
+                case OP_OR4:
                 case OP_OR:
                 case OP_NOR: {
                     long one = 0L;
@@ -445,7 +473,7 @@ public final class Simulator {
                         zero &= ~v[p] & ~x[p];
                     }
                     rx = ~zero & ~one;
-                    rv = code == OP_OR ? one : zero;
+                    rv = code == OP_NOR ? zero : one;
                     break;
                 }
                 case OP_XOR: {
