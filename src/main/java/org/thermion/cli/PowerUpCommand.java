@@ -1,6 +1,7 @@
 package org.thermion.cli;
 
 import org.thermion.model.Machine;
+import org.thermion.power.startup.BypassDelay;
 import org.thermion.power.startup.CurrentPlot;
 import org.thermion.power.startup.DrawMode;
 import org.thermion.power.startup.PowerUpOptions;
@@ -135,7 +136,8 @@ final class PowerUpCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         PowerUpResult result = net.solve(o);
-        PowerUpReport report = new PowerUpReport(result);
+        List<BypassDelay.Advice> advice = format == Format.csv ? List.of() : BypassDelay.suggest(net, o);
+        PowerUpReport report = new PowerUpReport(result, advice);
         if (csv != null) {
             String problem = writeAtomically(csv, report.csv(), loader, file);
             if (problem != null) {

@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.power.startup.BypassDelay;
 import org.thermion.power.startup.CurrentPlot;
 import org.thermion.power.startup.HeaterModel;
 import org.thermion.power.startup.HeaterWarmup;
@@ -21,9 +22,15 @@ final class PowerUpReport {
             + "codes and qualified practice.";
 
     private final PowerUpResult r;
+    private final List<BypassDelay.Advice> advice;
 
-    PowerUpReport(PowerUpResult r) {
+    PowerUpReport(PowerUpResult r, List<BypassDelay.Advice> advice) {
         this.r = r;
+        this.advice = advice;
+    }
+
+    private BypassDelay.Advice adviceFor(String softStart) {
+        return advice.stream().filter(a -> a.softStart().equals(softStart)).findFirst().orElse(null);
     }
 
     /** True when every check passed: supplies within limit, resistors within rating and bypassed, relay drivers sound. */
@@ -85,6 +92,13 @@ final class PowerUpReport {
                     + (Double.isInfinite(s.ratedWatts()) ? "" : s.withinRating() ? ": within its rating"
                     : ": OVER its " + Units.watts(s.ratedWatts()) + " rating")
                     + (Double.isInfinite(s.ratedWatts()) ? "" : String.format(Locale.ROOT, " (peak %.1f x rating)", s.peakWatts() / s.ratedWatts())));
+            BypassDelay.Advice a = adviceFor(s.name());
+            if (a != null) {
+                out.println("  delay     " + (Double.isNaN(a.settleSeconds()) ? "with the relay held open the current has not settled within "
+                        + Units.time(Math.max(60, r.options().seconds()))
+                        : "with the relay held open the current settles within 2 % of " + Units.amps(a.restingAmps()) + " by "
+                        + Units.time(a.settleSeconds()) + ";\n            bypassing later gains little, earlier raises the bypass peak"));
+            }
         }
         out.println();
         out.println("heaters:");
@@ -232,7 +246,12 @@ final class PowerUpReport {
                     .append(", \"thyratron\": ").append(s.thyratron()).append(", \"triggerSeconds\": ").append(num(s.triggerTime()))
                     .append(", \"bypassSeconds\": ").append(num(s.bypassTime())).append(", \"joules\": ").append(num(s.joules()))
                     .append(", \"peakWatts\": ").append(num(s.peakWatts())).append(", \"meanWatts\": ").append(num(s.meanWatts()))
-                    .append(", \"withinRating\": ").append(s.withinRating()).append("}");
+                    .append(", \"withinRating\": ").append(s.withinRating());
+            BypassDelay.Advice a = adviceFor(s.name());
+            if (a != null) {
+                b.append(", \"settleSeconds\": ").append(num(a.settleSeconds())).append(", \"restingAmps\": ").append(num(a.restingAmps()));
+            }
+            b.append("}");
         }
         b.append("\n");
         ind(b, 1).append("],\n");
