@@ -27,9 +27,9 @@ import java.util.concurrent.Callable;
 
 /** {@code powerup MACHINE}: the switch-on transient of every rail, the soft start and its relay driver. */
 @Command(name = "powerup", mixinStandardHelpOptions = true,
-        description = {"Simulate switch-on: heaters warming from cold, rail currents, the soft-start resistor and its",
-                "bypass relay, and the thyratron relay driver. Exit 1 when a supply goes into its current limit, a",
-                "soft-start resistor runs over its rating or is never bypassed, or the relay driver check fails."})
+        description = "Simulate switch-on: heaters warming from cold, rail currents, the soft-start resistor and its "
+                + "bypass relay, and the thyratron relay driver. Exit 1 when a supply goes into its current limit, a "
+                + "soft-start resistor runs over its rating or is never bypassed, or the relay driver check fails.")
 final class PowerUpCommand implements Callable<Integer> {
     @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
     Path file;
