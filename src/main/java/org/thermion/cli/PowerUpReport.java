@@ -186,13 +186,13 @@ final class PowerUpReport {
             ResistorSweep.Row row = s.rows().get(i);
             String verdict = !row.bypassed() ? "no bypass" : !row.withinLimit() ? "over limit" : !row.withinRating() ? "over rating"
                     : i == s.best() ? "<- best" : "ok";
-            t.row(Units.ohms(row.ohms()), Units.amps(row.switchOnPeak()), Units.amps(row.bypassPeak()), Units.amps(row.worstPeak()),
+            t.row(ohms(row.ohms()), Units.amps(row.switchOnPeak()), Units.amps(row.bypassPeak()), Units.amps(row.worstPeak()),
                     Units.time(row.bypassTime()), Units.watts(row.meanWatts()), joules(row.joules()), verdict);
         }
         t.print(out, "  ");
         ResistorSweep.Row best = s.recommended();
         out.println(best == null ? "  no value in the range keeps the supply within its limit and the resistor within its rating"
-                : "  recommended: " + Units.ohms(best.ohms()) + " (larger peak " + Units.amps(best.worstPeak()) + ", bypass at "
+                : "  recommended: " + ohms(best.ohms()) + " (larger peak " + Units.amps(best.worstPeak()) + ", bypass at "
                 + Units.time(best.bypassTime()) + ", mean " + Units.watts(best.meanWatts()) + " in the resistor)");
         out.println();
         wrap(out, CAUTION, 78);
@@ -297,7 +297,7 @@ final class PowerUpReport {
         b.append("],\n");
         kv(b, 1, "caution", str(CAUTION)).append("\n");
         b.append("}\n");
-        return b.toString();
+        return b.toString().replace("[\n  ]", "[]");
     }
 
     static String sweepJson(ResistorSweep.Result s) {
@@ -384,6 +384,14 @@ final class PowerUpReport {
 
     private static String f2(double v) {
         return String.format(Locale.ROOT, "%.2f", v);
+    }
+
+    /** Resistor values as swept: up to four significant figures, so close steps stay distinct. */
+    static String ohms(double v) {
+        if (v >= 1000) {
+            return Units.ohms(v);
+        }
+        return num(Double.parseDouble(String.format(Locale.ROOT, "%.4g", v))) + " ohm";
     }
 
     static String joules(double j) {
