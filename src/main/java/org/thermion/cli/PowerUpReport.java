@@ -101,6 +101,12 @@ final class PowerUpReport {
             }
         }
         out.println();
+        if (r.heaters().isEmpty()) {
+            out.println("heaters: none; the machine has no tubes");
+            out.println();
+            wrap(out, CAUTION, 78);
+            return;
+        }
         out.println("heaters:");
         Table h = new Table("tube", "rating", "string", "pos", "count", "95 % hot", "peak voltage", "at", "final");
         for (HeaterWarmup w : r.heaters()) {

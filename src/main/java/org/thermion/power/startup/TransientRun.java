@@ -306,6 +306,10 @@ final class TransientRun {
         observe(0, y, true);
         updateLimits(0);
         long[] nextSample = {1};
+        if (y.length == 0) {
+            // Nothing warms: the rails carry only what is always on, and nothing changes with time.
+            t = end;
+        }
         while (t < end) {
             double segEnd = end;
             for (int k = 0; k < ns; k++) {
