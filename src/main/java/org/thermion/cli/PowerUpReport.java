@@ -156,6 +156,10 @@ final class PowerUpReport {
                     continue;
                 }
                 out.println();
+                if (!(rt.worstPeak() > 0)) {
+                    out.println("rail " + rt.name() + ": no current during the run");
+                    continue;
+                }
                 List<CurrentPlot.Marker> marks = new ArrayList<>();
                 if (!Double.isNaN(rt.bypassTime())) {
                     marks.add(new CurrentPlot.Marker(rt.bypassTime(), "bypass " + Units.time(rt.bypassTime())));
