@@ -128,7 +128,7 @@ final class TimingCommand implements Callable<Integer> {
                 r.passes() ? "every path settles in time" : "a path does not settle in time");
         if (stages) {
             out.println();
-            out.println("stage delays (rise through the load, fall through the conducting tube; 'given' = declared):");
+            out.println("stage delays (declared, or ln 9 RC: through the load toward its rail, through the conducting tube the other way):");
             Table s = new Table("kind", "stage", "module", "output", "drives", "fan-out", "rise", "fall", "source");
             for (InstanceDelay d : r.instances()) {
                 s.row(d.kind(), d.stage(), d.module(), d.netName(), Units.farads(d.delay().farads()),

@@ -18,7 +18,8 @@ import java.util.List;
  * Static timing of a multi-phase machine.
  *
  * <p>Latches load at the end of their phase, so a latch's output changes at the end of
- * phase p, one latch delay later. Machine inputs are taken to change between cycles (at the
+ * phase p, one latch delay later (the slower of its rise and fall, since either plate of a
+ * flip-flop may be the one rising). Machine inputs are taken to change between cycles (at the
  * end of the last phase); the off-board ROM's data change when the program counter loads
  * (the end of {@code pc.phase()}), its access time not counted. A change launched at the
  * end of phase p runs through the combinational gates, each gate adding its rise or fall
@@ -175,8 +176,10 @@ public final class StaticTiming {
         Propagation p = new Propagation(netlist.netCount());
         for (Latch l : netlist.latches()) {
             if (l.phase() == launch) {
-                p.arr[RISE][l.output()] = latchDelay[l.id()].rise();
-                p.arr[FALL][l.output()] = latchDelay[l.id()].fall();
+                // Either plate of a flip-flop may be the one rising through its load: both
+                // edges of Q (and of its free complement) count the slower edge.
+                p.arr[RISE][l.output()] = latchDelay[l.id()].worst();
+                p.arr[FALL][l.output()] = latchDelay[l.id()].worst();
             }
         }
         if (launch == phases) {
