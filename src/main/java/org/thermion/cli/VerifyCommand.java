@@ -7,6 +7,7 @@ import org.thermion.verify.MutantOutcome;
 import org.thermion.verify.MutationReport;
 import org.thermion.verify.MutationRun;
 import org.thermion.verify.NetDiff;
+import org.thermion.verify.TraceLine;
 import org.thermion.verify.Verifier;
 import org.thermion.verify.VerifyReport;
 import picocli.CommandLine.Command;
@@ -206,6 +207,13 @@ final class VerifyCommand implements Callable<Integer> {
             }
             t.print(out, "    ");
         }
+        if (!c.trace().isEmpty()) {
+            out.println("  logic feeding it in this case (nearest first):");
+            for (TraceLine l : c.trace()) {
+                out.println("    " + "  ".repeat(Math.min(l.depth(), 6)) + l.net() + " = " + l.function() + "("
+                        + l.inputs() + ") = " + (l.value() ? "1" : "0") + "   [" + l.module() + "]");
+            }
+        }
     }
 
     private static void mutation(MutationReport mr, PrintWriter out) {
@@ -275,6 +283,12 @@ final class VerifyCommand implements Callable<Integer> {
             for (NetDiff d : c.nets()) {
                 j.begin().field("net", d.name()).field("module", d.module()).field("phase", d.phase())
                         .field("value", d.value()).field("other", d.other()).end();
+            }
+            j.endArray();
+            j.beginArray("trace");
+            for (TraceLine l : c.trace()) {
+                j.begin().field("depth", l.depth()).field("net", l.net()).field("module", l.module())
+                        .field("function", l.function()).field("inputs", l.inputs()).field("value", l.value()).end();
             }
             j.endArray().end();
         }

@@ -13,8 +13,10 @@ import java.util.List;
  * @param expected    the ISA's state after, {@code actual} the logic's
  * @param comparedWith what {@code nets} compares against: a passing case or the unmutated logic
  * @param nets        the first nets, in levelized order, that differ from that run
+ * @param trace       the gates feeding the pin at fault, nearest first, with their values in this case
  */
 public record Counterexample(String mnemonic, long opcode, long word, String operand, String item, String kind,
                              String explanation, String before, String inputs, String expected, String actual,
-                             int expectedPc, int actualPc, long cases, String comparedWith, List<NetDiff> nets) {
+                             int expectedPc, int actualPc, long cases, String comparedWith, List<NetDiff> nets,
+                             List<TraceLine> trace) {
 }

@@ -496,7 +496,8 @@ public final class Verifier {
         }
         return new Counterexample(ins.mnemonic(), ins.opcode(), b.word(lane), operandText(ins, b.word(lane)), item, kind,
                 explanation, stateText(b, lane), inputText(b, lane), afterText(e.state(), lane),
-                afterText(r.state, lane), expectedPc(e, lane), r.pc[lane], g.cases, compared, nets);
+                afterText(r.state, lane), expectedPc(e, lane), r.pc[lane], g.cases, compared, nets,
+                trace(pins, r.atPhase[phase], lane));
     }
 
     private record Neighbour(LogicRun.Result result, int lane, String change) {
@@ -539,8 +540,56 @@ public final class Verifier {
         if (good == 0) {
             return null;
         }
-        int p = Long.numberOfTrailingZeros(good);
+        // Prefer a neighbour where the item really changes (a write of a new value, a jump),
+        // so the comparison shows logic at work rather than a latch keeping its value.
+        long changes;
+        if (item < stateBits) {
+            changes = e.state()[item] ^ nb.state[item];
+        } else {
+            changes = e.jump();
+        }
+        int p = Long.numberOfTrailingZeros((good & changes) != 0 ? good & changes : good);
         return new Neighbour(r, p, change.get(p));
+    }
+
+    /**
+     * The gates feeding {@code pins}, breadth first from the pins (free wires followed without
+     * counting), each with its input values in the failing lane, at most {@code 3 x maxNets}.
+     */
+    private List<TraceLine> trace(int[] pins, long[] at, int lane) {
+        Netlist nl = machine.netlist();
+        int[] driver = new int[nl.netCount()];
+        java.util.Arrays.fill(driver, -1);
+        for (Gate g : nl.gates()) {
+            driver[g.output()] = g.id();
+        }
+        List<TraceLine> out = new ArrayList<>();
+        boolean[] seen = new boolean[nl.netCount()];
+        java.util.ArrayDeque<int[]> todo = new java.util.ArrayDeque<>();
+        for (int p : pins) {
+            if (p >= 0) {
+                todo.add(new int[]{p, 0});
+            }
+        }
+        int limit = 3 * Math.max(1, opt.maxNets());
+        while (!todo.isEmpty() && out.size() < limit) {
+            int[] e = todo.poll();
+            int n = e[0];
+            if (seen[n] || driver[n] < 0) {
+                continue;
+            }
+            seen[n] = true;
+            Gate g = nl.gates().get(driver[n]);
+            StringBuilder ins = new StringBuilder();
+            for (int i : g.inputs()) {
+                ins.append(ins.length() == 0 ? "" : " ").append(nl.netName(i)).append('=').append(b01(bit(at[i], lane)));
+                todo.add(new int[]{i, g.stage() < 0 ? e[1] : e[1] + 1});
+            }
+            String fn = g.stage() < 0 ? (g.fn() == org.thermion.model.GateFn.NOT ? "complement" : "wire")
+                    : g.fn().name().toLowerCase(Locale.ROOT);
+            out.add(new TraceLine(e[1], nl.netName(n), module(nl.netModule()[n]), fn, ins.toString(), bit(at[n], lane)));
+        }
+        return List.copyOf(out);
     }
 
     /** Nets in the fan-in of {@code pins}, back to latches, inputs and ROM data. */
