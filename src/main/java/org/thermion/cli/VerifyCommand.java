@@ -77,7 +77,8 @@ final class VerifyCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         ProgressLine progress = new ProgressLine(err);
-        Verifier.Options opt = new Verifier.Options(allTargets ? 16 : 4, samples, seed, decode, false, null, 8, null)
+        Verifier.Options opt = Verifier.Options.defaults().withDecode(decode, allTargets ? 16 : 4)
+                .withSampling(Verifier.EXHAUSTIVE_LIMIT, samples, seed)
                 .withProgress(mutate > 0 ? null : progress::update);
         VerifyReport r;
         try {

@@ -60,19 +60,30 @@ public final class Verifier {
      * @param stopAtFirst   stop at the first mismatch (fault seeding)
      * @param reference     the unmutated machine to compare nets with, or null
      * @param maxNets       nets listed per counterexample
+     * @param exhaustiveLimit beyond this many cases the check samples
      */
     public record Options(int allTargetBits, long sampleCases, long seed, String decodeName, boolean stopAtFirst,
-                          Machine reference, int maxNets, Progress progress) {
+                          Machine reference, int maxNets, Progress progress, long exhaustiveLimit) {
         public static Options defaults() {
-            return new Options(4, 1L << 22, 1, "line", false, null, 8, null);
+            return new Options(4, 1L << 22, 1, "line", false, null, 8, null, EXHAUSTIVE_LIMIT);
         }
 
         public Options withReference(Machine ref, boolean stop) {
-            return new Options(allTargetBits, sampleCases, seed, decodeName, stop, ref, maxNets, progress);
+            return new Options(allTargetBits, sampleCases, seed, decodeName, stop, ref, maxNets, progress, exhaustiveLimit);
         }
 
         public Options withProgress(Progress p) {
-            return new Options(allTargetBits, sampleCases, seed, decodeName, stopAtFirst, reference, maxNets, p);
+            return new Options(allTargetBits, sampleCases, seed, decodeName, stopAtFirst, reference, maxNets, p,
+                    exhaustiveLimit);
+        }
+
+        public Options withSampling(long limit, long samples, long newSeed) {
+            return new Options(allTargetBits, samples, newSeed, decodeName, stopAtFirst, reference, maxNets, progress, limit);
+        }
+
+        public Options withDecode(String name, int targetBits) {
+            return new Options(targetBits, sampleCases, seed, name, stopAtFirst, reference, maxNets, progress,
+                    exhaustiveLimit);
         }
     }
 
@@ -144,7 +155,7 @@ public final class Verifier {
         if (exhaustive) {
             for (int k = 0; k < plans.size(); k++) {
                 total += casesOf(k);
-                if (total > EXHAUSTIVE_LIMIT) {
+                if (total > opt.exhaustiveLimit()) {
                     exhaustive = false;
                     break;
                 }
