@@ -36,6 +36,10 @@ final class TimingCommand implements Callable<Integer> {
             description = "Clock period to test instead of the machine's own, with its unit (e.g. 50us, 0.2 ms).")
     String period;
 
+    @Option(names = "--rom-access", paramLabel = "T",
+            description = "Access time of the off-board ROM, from the PC loading to valid data (default: 0).")
+    String romAccess;
+
     @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (default: ${DEFAULT-VALUE}).")
     Format format = Format.text;
 
@@ -60,11 +64,19 @@ final class TimingCommand implements Callable<Integer> {
                 return ExitCodes.BAD_INPUT;
             }
         }
+        double access = 0;
+        if (romAccess != null) {
+            access = parseTime(romAccess);
+            if (Double.isNaN(access)) {
+                err.println("error: --rom-access '" + romAccess + "' is not a time; write a positive number with s, ms, us or ns (e.g. 2us)");
+                return ExitCodes.BAD_INPUT;
+            }
+        }
         Machine m = new MachineLoader().load(file, err, false);
         if (m == null) {
             return ExitCodes.BAD_INPUT;
         }
-        TimingReport r = new StaticTiming(m).analyse(Double.isNaN(t) ? m.clock().periodSeconds() : t);
+        TimingReport r = new StaticTiming(m, access).analyse(Double.isNaN(t) ? m.clock().periodSeconds() : t);
         switch (format) {
             case text -> text(r, out);
             case csv -> csv(r, out);
@@ -93,6 +105,9 @@ final class TimingCommand implements Callable<Integer> {
     private void text(TimingReport r, PrintWriter out) {
         out.printf(Locale.ROOT, "timing %s: %d phases, period %s, phase width %s%n", r.machine(), r.phases(),
                 Units.time(r.periodSeconds()), Units.time(r.phaseSeconds()));
+        out.println("  a change launched at the end of one phase (latch outputs after their delay; inputs at the end");
+        out.println("  of the last phase; ROM data when the PC loads) must reach each latch set-up before the end of");
+        out.println("  its loading phase: the next phase, or a whole cycle later for a latch of the same phase");
         out.println();
         Table t = new Table("phase", "launched", "span", "worst endpoint", "arrival", "budget", "slack", "result");
         for (PhaseTiming p : r.perPhase()) {

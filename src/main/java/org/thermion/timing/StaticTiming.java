@@ -21,7 +21,7 @@ import java.util.List;
  * phase p, one latch delay later (the slower of its rise and fall, since either plate of a
  * flip-flop may be the one rising). Machine inputs are taken to change between cycles (at the
  * end of the last phase); the off-board ROM's data change when the program counter loads
- * (the end of {@code pc.phase()}), its access time not counted. A change launched at the
+ * (the end of {@code pc.phase()}), after the ROM access time given (0 by default). A change launched at the
  * end of phase p runs through the combinational gates, each gate adding its rise or fall
  * delay according to the edge its output makes (inverting gates turn a falling input into
  * a rising output), and must reach every latch that loads on phase q - data and enable - a
@@ -42,9 +42,16 @@ public final class StaticTiming {
     private final int[] driverLatch;
     private final int[] driverInput;
     private final boolean[] romData;
+    private final double romAccess;
 
     public StaticTiming(Machine machine) {
+        this(machine, 0);
+    }
+
+    /** {@code romAccessSeconds}: time from the PC loading until the off-board ROM's data are valid. */
+    public StaticTiming(Machine machine, double romAccessSeconds) {
         this.machine = machine;
+        this.romAccess = romAccessSeconds;
         this.netlist = machine.netlist();
         DelayCalculator calc = new DelayCalculator(machine);
         gateDelay = calc.gates();
@@ -190,8 +197,8 @@ public final class StaticTiming {
         }
         if (machine.pc() != null && machine.rom() != null && launch == machine.pc().phase()) {
             for (int d : machine.rom().dataNets()) {
-                p.arr[RISE][d] = 0;
-                p.arr[FALL][d] = 0;
+                p.arr[RISE][d] = romAccess;
+                p.arr[FALL][d] = romAccess;
             }
         }
         for (Gate g : netlist.gates()) {

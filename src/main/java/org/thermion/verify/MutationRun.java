@@ -10,7 +10,8 @@ import java.util.List;
 
 /**
  * Fault seeding: applies single faults to copies of the logic and runs the full check on
- * each, stopping at the first mismatch. A mutant the check does not catch is equivalent when
+ * each, stopping at the first mismatch. A fault on a net that reaches no state bit, PC input or
+ * decode line cannot show and is reported equivalent without a run. A mutant the check does not catch is equivalent when
  * the check was exhaustive (no case of the plan shows a difference); it is reported as not
  * caught when the check only sampled.
  */
@@ -36,9 +37,18 @@ public final class MutationRun {
         List<MutantOutcome> outcomes = new ArrayList<>();
         int done = 0;
         for (Fault f : faults) {
+            String what = mut.describe(f);
+            if (!observed[mut.site(f)]) {
+                // Nothing the check observes can see this net: no case can differ, no run needed.
+                outcomes.add(new MutantOutcome(what, MutantOutcome.Status.UNUSED,
+                        machine.netlist().netName(mut.site(f)) + " reaches no state bit, pc or decode line"));
+                if (progress != null) {
+                    progress.update(++done, faults.size());
+                }
+                continue;
+            }
             Machine m = mut.apply(f);
             VerifyReport r = new Verifier(m, options.withReference(machine, true).withProgress(null)).run();
-            String what = mut.describe(f);
             if (!r.counterexamples().isEmpty()) {
                 Counterexample c = r.counterexamples().get(0);
                 String first = c.nets().isEmpty() ? "" : "; first differing net " + c.nets().get(0).name();
@@ -51,9 +61,6 @@ public final class MutationRun {
                         "decode lines: " + d.mnemonic() + ": " + d.problem()));
             } else if (!r.exhaustive()) {
                 outcomes.add(new MutantOutcome(what, MutantOutcome.Status.NOT_CAUGHT, r.cases() + " sampled cases"));
-            } else if (!observed[mut.site(f)]) {
-                outcomes.add(new MutantOutcome(what, MutantOutcome.Status.UNUSED,
-                        machine.netlist().netName(mut.site(f)) + " reaches no state bit, pc or decode line"));
             } else {
                 outcomes.add(new MutantOutcome(what, MutantOutcome.Status.EQUIVALENT, r.cases() + " cases, none differs"));
             }

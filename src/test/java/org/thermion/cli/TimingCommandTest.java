@@ -57,6 +57,17 @@ class TimingCommandTest {
     }
 
     @Test
+    void romAccessTimeDelaysTheRomDataPath() {
+        // The RC machine has no ROM: the option changes nothing there. The demo's phase-1 path
+        // starts at the ROM data, so its arrival is the access time given.
+        Run r = run("timing", "examples/pumpstation/pumpstation.machine", "--rom-access", "5us", "--format", "csv");
+        assertThat(r.code()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out().lines().filter(l -> l.startsWith("1,2,1,latch ir[")).findFirst().orElseThrow())
+                .contains(",rom,").contains(",0.000005,");
+        assertThat(run("timing", RC.toString(), "--rom-access", "soon").code()).isEqualTo(ExitCodes.BAD_INPUT);
+    }
+
+    @Test
     void theDemoMachineMeetsItsClock() {
         Run r = run("timing", "examples/pumpstation/pumpstation.machine");
         assertThat(r.code()).isEqualTo(ExitCodes.OK);
