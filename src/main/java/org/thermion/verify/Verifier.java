@@ -33,7 +33,8 @@ import java.util.regex.Pattern;
  *
  * <p>Decode lines - nets named {@code NAME[k]} (default {@code line}), the top-most such bus -
  * are read at the last phase's settle: each instruction must have exactly one line active in
- * all its cases, and no two instructions may share one.
+ * all its cases, and no two instructions may share one. An instruction whose meaning is empty
+ * (it does nothing) may instead have no line active in all its cases.
  *
  * <p>Each wrong item (a state bit or the PC) of an instruction is reported once, with the
  * number of cases it goes wrong in and one counterexample. The counterexample says what the
@@ -177,7 +178,7 @@ public final class Verifier {
                 Batch b = exhaustive ? exhaustiveBatch(k, c0, count) : sampleBatch(k, c0);
                 LogicRun.Result r = logic.run(b, false);
                 compare(k, b, c0, r, groups);
-                checkDecode(decode[k], b);
+                checkDecode(decode[k], b, plans.get(k).instruction().body().isEmpty());
                 done += Long.bitCount(b.valid);
                 if (opt.progress() != null) {
                     opt.progress().update(done, total);
@@ -352,10 +353,13 @@ public final class Verifier {
 
     private static final class DecodeState {
         int line = -1;
+        /** An instruction that does nothing showed no line (so far). */
+        boolean idle;
         String problem;
     }
 
-    private void checkDecode(DecodeState d, Batch b) {
+    /** {@code idle}: the instruction does nothing, so it may also have no line at all. */
+    private void checkDecode(DecodeState d, Batch b, boolean idle) {
         if (lineNets.length == 0 || d.problem != null) {
             return;
         }
@@ -368,6 +372,10 @@ public final class Verifier {
         }
         long none = ~seen1 & b.valid;
         long many = seen2 & b.valid;
+        if (idle && none == b.valid) {
+            d.idle = true;
+            return;
+        }
         if (none != 0) {
             d.problem = "no line active (" + caseText(b, Long.numberOfTrailingZeros(none)) + ")";
             return;
@@ -388,7 +396,7 @@ public final class Verifier {
             if (v == 0) {
                 continue;
             }
-            if (v != b.valid || (d.line >= 0 && d.line != i)) {
+            if (v != b.valid || (d.line >= 0 && d.line != i) || d.idle) {
                 int other = d.line >= 0 && d.line != i ? d.line : -1;
                 d.problem = "the active line depends on the case: " + lineNames[i]
                         + (other >= 0 ? " or " + lineNames[other] : " in some cases only");
@@ -417,6 +425,10 @@ public final class Verifier {
                         problem = lineNames[d.line] + " is also the line of " + plans.get(j).instruction().mnemonic();
                     }
                 }
+            }
+            if (problem == null && d.line < 0) {
+                out.add(new DecodeLine(ins.mnemonic(), ins.opcode(), "(none: does nothing)", null));
+                continue;
             }
             out.add(new DecodeLine(ins.mnemonic(), ins.opcode(), problem == null ? lineNames[d.line] : null, problem));
         }
