@@ -42,7 +42,8 @@ import java.util.regex.Pattern;
  * differ from a comparison run: the unmutated logic when a reference machine is given
  * (fault seeding), otherwise the nearest passing case - the same instruction with one
  * state bit, input or free word bit changed - restricted to the cone of logic feeding the
- * latch pin at fault.
+ * latch pin at fault, at the settle of the phase that loads it. A trace then lists the gates
+ * feeding that pin, nearest first, with the values they saw in the failing case.
  */
 public final class Verifier {
     /** Beyond this many cases the check samples. */
@@ -505,7 +506,7 @@ public final class Verifier {
             LogicRun ref = new LogicRun(opt.reference());
             LogicRun.Result rr = ref.run(b, true);
             compared = "the unmutated logic, same case";
-            nets = firstDifferences(r, rr, lane, lane, opt.reference().netlist().netCount(), null);
+            nets = firstDifferences(r, rr, lane, lane, opt.reference().netlist().netCount(), null, 0);
         } else {
             Neighbour nb = passingNeighbour(b, lane, g.item);
             if (nb == null) {
@@ -514,7 +515,7 @@ public final class Verifier {
             } else {
                 compared = "the passing case with " + nb.change;
                 boolean[] cone = cone(pins);
-                nets = firstDifferences(nb.result, nb.result, 0, nb.lane, machine.netlist().netCount(), cone);
+                nets = firstDifferences(nb.result, nb.result, 0, nb.lane, machine.netlist().netCount(), cone, phase);
             }
         }
         return new Counterexample(ins.mnemonic(), ins.opcode(), b.word(lane), operandText(ins, b.word(lane)), item, kind,
@@ -648,14 +649,18 @@ public final class Verifier {
     /**
      * The first nets, in levelized order phase by phase (latch outputs, inputs and ROM data
      * first, then gate outputs in evaluation order), where lane {@code la} of {@code a} and
-     * lane {@code lb} of {@code b} differ; only nets below {@code netLimit} and in {@code only}.
+     * lane {@code lb} of {@code b} differ; only nets below {@code netLimit} and in {@code only},
+     * and only at {@code onlyPhase} unless it is 0.
      */
     private List<NetDiff> firstDifferences(LogicRun.Result a, LogicRun.Result b, int la, int lb, int netLimit,
-                                           boolean[] only) {
+                                           boolean[] only, int onlyPhase) {
         Netlist nl = machine.netlist();
         int[] order = levelOrder(nl);
         List<NetDiff> out = new ArrayList<>();
         for (int p = 1; p < a.atPhase.length && out.size() < opt.maxNets(); p++) {
+            if (onlyPhase != 0 && p != onlyPhase) {
+                continue;
+            }
             for (int n : order) {
                 if (n >= netLimit || n <= Netlist.CONST1 || (only != null && !only[n])) {
                     continue;
