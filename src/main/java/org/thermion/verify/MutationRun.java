@@ -58,7 +58,7 @@ public final class MutationRun {
             } else if (!r.decodeOk()) {
                 DecodeLine d = r.decode().stream().filter(x -> !x.ok()).findFirst().orElseThrow();
                 outcomes.add(new MutantOutcome(what, MutantOutcome.Status.CAUGHT,
-                        "decode lines: " + d.mnemonic() + ": " + d.problem()));
+                        "decode lines: " + d.mnemonic() + ": " + d.problem().replaceFirst(" \\(word .*$", "")));
             } else if (!r.exhaustive()) {
                 outcomes.add(new MutantOutcome(what, MutantOutcome.Status.NOT_CAUGHT, r.cases() + " sampled cases"));
             } else {

@@ -28,7 +28,11 @@ class TimingCommandTest {
         // = 24.2 ns, period = 2 x (398 ns + 4 us set-up) = 8.80 us.
         Run r = run("timing", RC.toString(), "--stages");
         assertThat(r.code()).isEqualTo(ExitCodes.OK);
-        String golden = Files.readString(Path.of("src/test/resources/org/thermion/cli/timing-rc.txt"));
+        Path goldenFile = Path.of("src/test/resources/org/thermion/cli/timing-rc.txt");
+        if (Boolean.getBoolean("golden.update")) {
+            Files.writeString(goldenFile, r.out().replace("\r\n", "\n"));
+        }
+        String golden = Files.readString(goldenFile);
         assertThat(r.out().replace("\r\n", "\n")).isEqualTo(golden);
     }
 
