@@ -479,13 +479,14 @@ public final class Verifier {
         } else {
             phase = machine.pc().phase();
             long[] at = r.atPhase[phase];
-            boolean j = bit(at[machine.pc().jumpNet()], lane);
+            int jn = machine.pc().jumpNet();
+            boolean j = jn >= 0 && bit(at[jn], lane);
             boolean jx = bit(e.jump(), lane);
             if (j != jx) {
                 kind = "jump";
-                explanation = "jump net " + net(machine.pc().jumpNet()) + " = " + b01(j) + "; " + ins.mnemonic()
+                explanation = "jump net " + (jn >= 0 ? net(jn) : "(none)") + " = " + b01(j) + "; " + ins.mnemonic()
                         + (jx ? " jumps here" : " does not jump here");
-                pins = new int[]{machine.pc().jumpNet()};
+                pins = new int[]{jn};
             } else {
                 kind = "target";
                 int[] t = machine.pc().targetNets();
