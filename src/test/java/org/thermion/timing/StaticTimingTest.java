@@ -63,6 +63,32 @@ class StaticTimingTest {
     }
 
     @Test
+    void aLatchFeedingALatchOfItsOwnPhaseHasAWholeCycle() {
+        // y (phase 2) -> eight inverters -> w (phase 2): a whole cycle, two phase widths.
+        StringBuilder chain = new StringBuilder("latch y on phase 2 = e\n  net f[8]\n  f[0] = t_inv(y)\n");
+        for (int i = 1; i < 8; i++) {
+            chain.append("  f[").append(i).append("] = t_inv(f[").append(i - 1).append("])\n");
+        }
+        chain.append("  latch w on phase 2 = f[7]");
+        String text = CHAIN.replace("latch y on phase 2 = e", chain.toString())
+                .replace("outputs y", "outputs y w").replace("  out y\n", "  out y, w\n");
+        TimingReport r = new StaticTiming(TimingMachines.elaborate(text)).analyse();
+        // By hand: y launches after its slower edge, 2 us; each inverter pair adds 3 + 1 us: 2 + 16 = 18 us.
+        // It needs 2 x (18 + 4) / 2 = 22 us of period, as much as the path into latch a, 2 x (7 + 4).
+        assertThat(r.minPeriodSeconds()).isCloseTo(22e-6, within(1e-12));
+        PhaseTiming p2 = r.perPhase().get(1);
+        // The worst slack into phase 2 is still the one-phase path into y: 46 - 5 = 41 us.
+        assertThat(p2.endpoint()).isEqualTo("latch y");
+        assertThat(p2.slack()).isCloseTo(41e-6, within(1e-12));
+        // At 21 us: w has 21 - 4 - 18 = -1 us over its two phases, y 10.5 - 4 - 5 = +1.5 us, so w is
+        // now the worst into phase 2 (a, into phase 1, has 10.5 - 4 - 7 = -0.5 us).
+        TimingReport q = new StaticTiming(TimingMachines.elaborate(text)).analyse(21e-6);
+        assertThat(q.perPhase().get(1).endpoint()).isEqualTo("latch w");
+        assertThat(q.perPhase().get(1).span()).isEqualTo(2);
+        assertThat(q.perPhase().get(1).slack()).isCloseTo(-1e-6, within(1e-12));
+    }
+
+    @Test
     void aPeriodBelowTheCriticalPathFails() {
         Machine m = TimingMachines.elaborate(CHAIN);
         TimingReport r = new StaticTiming(m).analyse(21e-6);
