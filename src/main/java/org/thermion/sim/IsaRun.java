@@ -1,5 +1,6 @@
 package org.thermion.sim;
 
+import org.thermion.lang.Names;
 import org.thermion.model.Isa;
 import org.thermion.model.Machine;
 import org.thermion.model.Port;
@@ -59,7 +60,7 @@ public final class IsaRun {
     private String hint(String n) {
         List<String> names = new ArrayList<>(machine.isa().state().stream().map(StateBit::name).toList());
         machine.inputs().forEach(p -> names.add(p.name()));
-        String h = org.thermion.lang.Names.didYouMean(n, names);
+        String h = Names.didYouMean(n, names);
         return h == null ? "" : "; " + h;
     }
 

@@ -6,6 +6,7 @@ import org.thermion.model.Port;
 import org.thermion.model.StateBit;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -127,7 +128,7 @@ public final class LogicRun {
                 break;
             }
             snapshot(latches, after);
-            if (sim.pc(0) == pcStart && java.util.Arrays.equals(before, after) && (cursor == null || !cursor.pending())) {
+            if (sim.pc(0) == pcStart && Arrays.equals(before, after) && (cursor == null || !cursor.pending())) {
                 stop = "fixed point at address " + pcStart + ": the machine repeats cycle " + c
                         + " unchanged from here on";
                 break;
@@ -186,7 +187,7 @@ public final class LogicRun {
 
     /** Lane 0 of every latch (value and unknown) and of the PC's unknown flag, packed into words. */
     private void snapshot(List<Latch> latches, long[] into) {
-        java.util.Arrays.fill(into, 0L);
+        Arrays.fill(into, 0L);
         int half = (latches.size() + 63) / 64;
         for (int i = 0; i < latches.size(); i++) {
             int n = latches.get(i).output();

@@ -231,7 +231,7 @@ public final class Simulator {
 
     /**
      * Starts over: latches per {@code init}, PC 0 on every lane, cycle 0, next phase 1.
-     * Machine inputs keep the values last set; a loaded ROM stays loaded.
+     * Machine inputs keep the values last set; a loaded ROM, or a forced ROM word, stays.
      */
     public void reset(InitMode init) {
         threeValued = init instanceof InitMode.Unknown;
