@@ -211,7 +211,7 @@ final class RunCommand implements Callable<Integer> {
                     return usage(err, "cannot write the VCD to " + vcd + ": " + e.getMessage(), null);
                 }
                 vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
-                        + " nets and the pc)";
+                        + (m.pc() != null ? " nets and the pc)" : " nets)");
             }
         }
         new RunReport(m, program, level.name(), mode.toString(), result).print(out, format);
