@@ -32,9 +32,13 @@ import java.util.List;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
-/** {@code run MACHINE PROGRAM}: assemble a program and run it on the machine's logic or its ISA. */
+/**
+ * {@code run MACHINE [PROGRAM]}: assemble a program and run it on the machine's logic or its ISA.
+ * A machine without ROM and PC (a plain logic board) runs from its stimulus alone.
+ */
 @Command(name = "run", mixinStandardHelpOptions = true,
-        description = {"Run a program on a machine, cycle by cycle.",
+        description = {"Run a program on a machine, cycle by cycle (a machine without a ROM runs from its stimulus "
+                + "alone, without PROGRAM).",
                 "Prints every output change with its cycle and phase, the watched nets per cycle, and the final "
                         + "state. The run ends at the cycle limit or at a fixed point (a cycle that changes nothing "
                         + "while no stimulus row is still to come). Exit 1 when an unknown value reaches an output or "
@@ -45,7 +49,8 @@ final class RunCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
     Path machineFile;
 
-    @Parameters(index = "1", paramLabel = "PROGRAM", description = "The .asm program.")
+    @Parameters(index = "1", paramLabel = "PROGRAM", arity = "0..1",
+            description = "The .asm program (not for a machine without a ROM).")
     Path program;
 
     @Option(names = "--inputs", paramLabel = "STIM.csv",
@@ -89,7 +94,10 @@ final class RunCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         if (vcd != null) {
-            List<Path> named = new ArrayList<>(List.of(machineFile, program));
+            List<Path> named = new ArrayList<>(List.of(machineFile));
+            if (program != null) {
+                named.add(program);
+            }
             if (inputs != null) {
                 named.add(inputs);
             }
@@ -134,12 +142,20 @@ final class RunCommand implements Callable<Integer> {
         if (m == null) {
             return ExitCodes.BAD_INPUT;
         }
-        if (m.isa() == null || m.rom() == null || m.pc() == null) {
+        boolean programmable = m.isa() != null && m.rom() != null && m.pc() != null;
+        if (program != null && !programmable) {
             return usage(err, machineFile + ": machine " + m.name() + " needs an isa block, a rom and a pc to run programs",
-                    null);
+                    "leave out PROGRAM to run its logic from the stimulus alone");
+        }
+        if (program == null && m.rom() != null) {
+            return usage(err, "machine " + m.name() + " has a ROM: name the PROGRAM to run", null);
+        }
+        if (program == null && level == Level.isa) {
+            return usage(err, "--level isa needs a machine with an isa block and a PROGRAM", null);
         }
         Diagnostics diags = new Diagnostics();
-        Assembly asm = Assembler.assemble(m, program, loader.sources(), diags);
+        Assembly asm = program == null ? new Assembly(new long[0], List.of())
+                : Assembler.assemble(m, program, loader.sources(), diags);
         Stimulus stim = null;
         if (asm != null && inputs != null) {
             stim = new StimulusReader(m, loader.sources(), diags).read(inputs);
@@ -195,7 +211,7 @@ final class RunCommand implements Callable<Integer> {
                     return usage(err, "cannot write the VCD to " + vcd + ": " + e.getMessage(), null);
                 }
                 vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
-                        + " nets and the pc)";
+                        + (m.pc() != null ? " nets and the pc)" : " nets)");
             }
         }
         new RunReport(m, program, level.name(), mode.toString(), result).print(out, format);
@@ -212,10 +228,18 @@ final class RunCommand implements Callable<Integer> {
         Set<Integer> s = new LinkedHashSet<>();
         m.inputs().forEach(p -> s.add(p.net()));
         m.outputs().forEach(p -> s.add(p.net()));
-        m.isa().state().forEach(b -> s.add(b.net()));
-        s.add(m.pc().jumpNet());
-        for (int n : m.rom().dataNets()) {
-            s.add(n);
+        if (m.isa() != null) {
+            m.isa().state().forEach(b -> s.add(b.net()));
+        } else {
+            m.netlist().latches().forEach(l -> s.add(l.output()));
+        }
+        if (m.pc() != null) {
+            s.add(m.pc().jumpNet());
+        }
+        if (m.rom() != null) {
+            for (int n : m.rom().dataNets()) {
+                s.add(n);
+            }
         }
         s.addAll(watched);
         return new ArrayList<>(s);

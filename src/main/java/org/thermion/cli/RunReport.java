@@ -43,7 +43,8 @@ final class RunReport {
     }
 
     private void text(PrintWriter out) {
-        out.println("run " + machine.name() + ": program " + program + ", " + level + " level, init " + init);
+        out.println("run " + machine.name() + ": " + (program == null ? "no program" : "program " + program) + ", "
+                + level + " level, init " + init);
         out.println(r.cycles() + " cycles; stopped: " + r.stop());
         if (!init.equals("zero")) {
             StringBuilder sb = new StringBuilder("outputs at power-up:");
@@ -65,20 +66,27 @@ final class RunReport {
         }
         if (!r.watchNames().isEmpty()) {
             out.println();
-            out.println("watched, at the end of each cycle (pc: the instruction the cycle ran):");
-            String[] header = new String[r.watchNames().size() + 2];
+            boolean pc = machine.pc() != null;
+            int first = pc ? 2 : 1;
+            out.println(pc ? "watched, at the end of each cycle (pc: the instruction the cycle ran):"
+                    : "watched, at the end of each cycle:");
+            String[] header = new String[r.watchNames().size() + first];
             header[0] = "cycle";
-            header[1] = "pc";
+            if (pc) {
+                header[1] = "pc";
+            }
             for (int i = 0; i < r.watchNames().size(); i++) {
-                header[i + 2] = r.watchNames().get(i);
+                header[i + first] = r.watchNames().get(i);
             }
             Table t = new Table(header);
             for (WatchRow w : r.watch()) {
                 String[] row = new String[header.length];
                 row[0] = Long.toString(w.cycle());
-                row[1] = Integer.toString(w.pc());
+                if (pc) {
+                    row[1] = Integer.toString(w.pc());
+                }
                 for (int i = 0; i < w.values().length(); i++) {
-                    row[i + 2] = String.valueOf(w.values().charAt(i));
+                    row[i + first] = String.valueOf(w.values().charAt(i));
                 }
                 t.row(row);
             }
@@ -99,7 +107,9 @@ final class RunReport {
         for (int i = 0; i < r.stateNames().size(); i++) {
             t.row(r.stateNames().get(i), String.valueOf(r.state().charAt(i)));
         }
-        t.row("pc", pcText());
+        if (machine.pc() != null) {
+            t.row("pc", pcText());
+        }
         t.print(out, "  ");
     }
 
@@ -109,7 +119,9 @@ final class RunReport {
             row(out, "change", Long.toString(c.cycle()), Integer.toString(c.phase()), c.output(), String.valueOf(c.value()));
         }
         for (WatchRow w : r.watch()) {
-            row(out, "watch", Long.toString(w.cycle()), "", "pc", Integer.toString(w.pc()));
+            if (machine.pc() != null) {
+                row(out, "watch", Long.toString(w.cycle()), "", "pc", Integer.toString(w.pc()));
+            }
             for (int i = 0; i < w.values().length(); i++) {
                 row(out, "watch", Long.toString(w.cycle()), "", r.watchNames().get(i), String.valueOf(w.values().charAt(i)));
             }
@@ -121,7 +133,9 @@ final class RunReport {
         for (int i = 0; i < r.stateNames().size(); i++) {
             row(out, "state", Long.toString(r.cycles()), "", r.stateNames().get(i), String.valueOf(r.state().charAt(i)));
         }
-        row(out, "state", Long.toString(r.cycles()), "", "pc", r.pcKnown() ? Integer.toString(r.pc()) : "x");
+        if (machine.pc() != null) {
+            row(out, "state", Long.toString(r.cycles()), "", "pc", r.pcKnown() ? Integer.toString(r.pc()) : "x");
+        }
         row(out, "stop", Long.toString(r.cycles()), "", "reason", r.stop());
     }
 
@@ -144,7 +158,7 @@ final class RunReport {
     private void json(PrintWriter out) {
         StringBuilder sb = new StringBuilder("{\n");
         sb.append("  \"machine\": ").append(q(machine.name())).append(",\n");
-        sb.append("  \"program\": ").append(q(program.toString())).append(",\n");
+        sb.append("  \"program\": ").append(program == null ? "null" : q(program.toString())).append(",\n");
         sb.append("  \"level\": ").append(q(level)).append(",\n");
         sb.append("  \"init\": ").append(q(init)).append(",\n");
         sb.append("  \"cycles\": ").append(r.cycles()).append(",\n");
@@ -192,7 +206,8 @@ final class RunReport {
             sb.append(i == 0 ? "" : ", ").append(q(r.stateNames().get(i))).append(": ").append(val(r.state().charAt(i)));
         }
         sb.append("},\n");
-        sb.append("  \"pc\": ").append(r.pcKnown() ? Integer.toString(r.pc()) : "null").append('\n');
+        sb.append("  \"pc\": ").append(machine.pc() != null && r.pcKnown() ? Integer.toString(r.pc()) : "null")
+                .append('\n');
         sb.append("}\n");
         out.print(sb);
     }

@@ -11,7 +11,8 @@ import java.util.List;
 
 /**
  * Runs a program on the machine's logic, lane 0, cycle by cycle: inputs from a stimulus,
- * output changes logged, watched nets tabled, optionally a VCD. The run ends at the cycle
+ * output changes logged (in the phase whose latch loads cause them), watched nets tabled as
+ * they stand at the end of each cycle with the logic settled, optionally a VCD. The run ends at the cycle
  * limit, when the PC becomes unknown, or at a fixed point: a cycle that left every latch
  * and the PC as it found them while no stimulus row is still to come, so every later cycle
  * would repeat it.
@@ -79,6 +80,12 @@ public final class LogicRun {
         String stop = "cycle limit of " + maxCycles + " reached";
         long cycles = 0;
         int pcPhase = machine.pc() == null ? -1 : machine.pc().phase();
+        // Gate-driven outputs and watched nets are read with the logic settled after the loads,
+        // so a change a load causes is logged in the phase of that load.
+        boolean resettle = !watchNets.isEmpty();
+        for (int o : outputLatch) {
+            resettle |= o < 0;
+        }
         for (long c = 0; c < maxCycles; c++) {
             if (c > 0 && cursor != null && cursor.advance(c, in)) {
                 applyInputs(in);
@@ -87,10 +94,14 @@ public final class LogicRun {
             int pcStart = sim.pc(0);
             for (int p = 1; p <= sim.phases(); p++) {
                 sim.stepPhase();
-                log.observe(sim, c, p);
                 if (vcd != null) {
+                    // Before any second settle: the dump stamps gate values at the phase's start.
                     vcd.afterPhase(sim, c, p);
                 }
+                if (resettle) {
+                    sim.settle();
+                }
+                log.observe(sim, c, p);
                 if (sim.threeValued()) {
                     for (int o = 0; o < outputs.size(); o++) {
                         boolean x = (sim.unknown(outputs.get(o).net()) & 1L) != 0;
@@ -129,7 +140,8 @@ public final class LogicRun {
             }
             snapshot(latches, after);
             if (sim.pc(0) == pcStart && Arrays.equals(before, after) && (cursor == null || !cursor.pending())) {
-                stop = "fixed point at address " + pcStart + ": the machine repeats cycle " + c
+                stop = (machine.pc() == null ? "fixed point" : "fixed point at address " + pcStart)
+                        + ": the machine repeats cycle " + c
                         + " unchanged from here on";
                 break;
             }
@@ -145,7 +157,9 @@ public final class LogicRun {
         if (vcd != null) {
             vcd.finish(cycles);
         }
-        List<StateBit> state = machine.isa() == null ? List.of() : machine.isa().state();
+        // The ISA's state bits by name; a machine without an ISA shows every latch instead.
+        List<StateBit> state = machine.isa() != null ? machine.isa().state()
+                : latches.stream().map(l -> new StateBit(machine.netlist().netName(l.output()), l.output(), null)).toList();
         StringBuilder st = new StringBuilder();
         for (StateBit b : state) {
             st.append(OutputLog.level(sim, b.net(), 0));

@@ -82,12 +82,13 @@ public final class Simulator {
 
     // Program counter, per lane.
     private final boolean hasPc;
-    private final int pcMask;
     private final int pcPhase;
     private final int jumpNet;
     private final int[] targetNets;
-    private final long[] targetPlanes;
-    private final int[] pcs = new int[LANES];
+    // The PC as bit planes: bit i of pcPlanes[b] is bit b of lane i's PC, so a load is a few word
+    // operations per PC bit whatever the lanes do.
+    private final long[] pcPlanes;
+    private final int[] laneAddress = new int[LANES];
     private long pcUnknown;
     private boolean pcUniform;
 
@@ -181,17 +182,15 @@ public final class Simulator {
             if (pc.width() < 1 || pc.width() > 30) {
                 throw new IllegalArgumentException("program counter width " + pc.width() + " is outside 1..30");
             }
-            pcMask = (1 << pc.width()) - 1;
             pcPhase = pc.phase();
             jumpNet = pc.jumpNet();
             targetNets = Arrays.copyOf(pc.targetNets(), Math.min(pc.targetNets().length, 31));
         } else {
-            pcMask = 0;
             pcPhase = -1;
             jumpNet = -1;
             targetNets = new int[0];
         }
-        targetPlanes = new long[targetNets.length];
+        pcPlanes = new long[hasPc ? pc.width() : 0];
         Rom rom = machine.rom();
         hasRom = rom != null;
         dataNets = hasRom ? rom.dataNets().clone() : new int[0];
@@ -256,7 +255,7 @@ public final class Simulator {
         }
         val[Netlist.CONST1] = -1L;
         val[Netlist.CONST0] = 0L;
-        Arrays.fill(pcs, 0);
+        Arrays.fill(pcPlanes, 0L);
         pcUnknown = 0;
         pcUniform = true;
         cycle = 0;
@@ -558,73 +557,38 @@ public final class Simulator {
     private void loadPc() {
         long j = val[jumpNet];
         long jx = threeValued ? unk[jumpNet] : 0L;
-        boolean targetsUniform = true;
-        long tx = 0;
-        for (int t : targetNets) {
-            long tv = val[t];
-            if (tv != 0 && tv != -1L) {
-                targetsUniform = false;
-            }
-            if (threeValued) {
-                tx |= unk[t];
-            }
-        }
-        if (pcUniform && jx == 0 && tx == 0 && targetsUniform && (j == 0 || j == -1L)) {
-            int next = j == 0 ? (pcs[0] + 1) & pcMask : target(0);
-            Arrays.fill(pcs, next);
-            romDirty = true;
-            return;
-        }
-        // Lanes differ: gather the target bit planes once, then decide lane by lane.
+        long carry = -1L;
+        long diff = 0L;
+        long tx = 0L;
         int tn = targetNets.length;
-        long[] planes = targetPlanes;
-        for (int b = 0; b < tn; b++) {
-            planes[b] = val[targetNets[b]];
-        }
-        long newUnknown = pcUnknown;
-        for (int lane = 0; lane < LANES; lane++) {
-            long bit = 1L << lane;
-            int inc = (pcs[lane] + 1) & pcMask;
-            int tgt = 0;
-            for (int b = 0; b < tn; b++) {
-                tgt |= (int) ((planes[b] >>> lane) & 1L) << b;
-            }
-            tgt &= pcMask;
-            boolean tgtUnknown = (tx & bit) != 0;
-            if ((jx & bit) != 0) {
-                // Jump or not unknown: the PC is known only when both ways lead to the same address.
-                pcs[lane] = inc;
-                if (tgtUnknown || tgt != inc) {
-                    newUnknown |= bit;
+        for (int b = 0; b < pcPlanes.length; b++) {
+            long p = pcPlanes[b];
+            // PC + 1 by ripple carry, all lanes at once; the carry out of the top bit wraps away.
+            long inc = p ^ carry;
+            carry &= p;
+            long t = 0L;
+            if (b < tn) {
+                t = val[targetNets[b]];
+                if (threeValued) {
+                    tx |= unk[targetNets[b]];
                 }
-            } else if ((j & bit) != 0) {
-                pcs[lane] = tgt;
-                if (tgtUnknown) {
-                    newUnknown |= bit;
-                } else {
-                    newUnknown &= ~bit;
-                }
-            } else {
-                pcs[lane] = inc;
             }
+            diff |= t ^ inc;
+            // j is 0 on lanes where the jump is unknown, so those take PC + 1 here.
+            pcPlanes[b] = (j & t) | (~j & inc);
         }
-        pcUnknown = newUnknown;
+        long nu = (pcUnknown & ~j) | (j & tx);
+        // An unknown jump leaves the PC known only where target and PC + 1 agree.
+        nu |= jx & (tx | diff);
+        pcUnknown = nu;
         updateUniform();
         romDirty = true;
     }
 
-    private int target(int lane) {
-        int t = 0;
-        for (int b = 0; b < targetNets.length && b < 31; b++) {
-            t |= (int) ((val[targetNets[b]] >>> lane) & 1L) << b;
-        }
-        return t & pcMask;
-    }
-
     private void updateUniform() {
         boolean u = pcUnknown == 0;
-        for (int i = 1; i < LANES && u; i++) {
-            u = pcs[i] == pcs[0];
+        for (int b = 0; b < pcPlanes.length && u; b++) {
+            u = pcPlanes[b] == 0L || pcPlanes[b] == -1L;
         }
         pcUniform = u;
     }
@@ -641,17 +605,25 @@ public final class Simulator {
                 romX[b] = 0L;
             }
         } else if (pcUniform) {
-            long word = romWord(pcs[0]);
+            long word = romWord(pc(0));
             for (int b = 0; b < w; b++) {
                 romV[b] = -((word >>> b) & 1L);
                 romX[b] = 0L;
             }
         } else {
             Arrays.fill(romV, 0L);
+            // Addresses per lane from the PC planes, visiting only their one bits.
+            int[] addr = laneAddress;
+            Arrays.fill(addr, 0);
+            for (int b = 0; b < pcPlanes.length; b++) {
+                for (long p = pcPlanes[b]; p != 0; p &= p - 1) {
+                    addr[Long.numberOfTrailingZeros(p)] |= 1 << b;
+                }
+            }
             for (int lane = 0; lane < LANES; lane++) {
                 long bit = 1L << lane;
                 // Visit only the word's one bits.
-                for (long word = romWord(pcs[lane]); word != 0; word &= word - 1) {
+                for (long word = romWord(addr[lane]); word != 0; word &= word - 1) {
                     romV[Long.numberOfTrailingZeros(word)] |= bit;
                 }
             }
@@ -695,7 +667,11 @@ public final class Simulator {
 
     /** The program counter of one lane. */
     public int pc(int lane) {
-        return pcs[lane];
+        int a = 0;
+        for (int b = 0; b < pcPlanes.length; b++) {
+            a |= (int) ((pcPlanes[b] >>> lane) & 1L) << b;
+        }
+        return a;
     }
 
     /** Lanes whose program counter is unknown (after a jump decided by an X), else 0. */
@@ -705,7 +681,14 @@ public final class Simulator {
 
     /** Sets the program counter of one lane (taken mod 2^width); the lane's PC becomes known. */
     public void setPc(int lane, int pc) {
-        pcs[lane] = pc & pcMask;
+        long bit = 1L << lane;
+        for (int b = 0; b < pcPlanes.length; b++) {
+            if ((pc >>> b & 1) != 0) {
+                pcPlanes[b] |= bit;
+            } else {
+                pcPlanes[b] &= ~bit;
+            }
+        }
         pcUnknown &= ~(1L << lane);
         updateUniform();
         romDirty = true;

@@ -120,6 +120,22 @@ class RunCommandTest {
     }
 
     @Test
+    void aBoardWithoutRomRunsFromItsStimulusAlone(@TempDir Path dir) throws IOException {
+        Path stim = dir.resolve("codes.csv");
+        // Code 5 (bits 0 and 2) loaded in cycle 0, code 6 offered in cycle 3, loading stops in cycle 5.
+        Files.writeString(stim, "cycle,code[0],code[1],code[2],load\n0,1,0,1,1\n3,0,1,1,\n5,,,,0\n6,1,1,1,\n");
+        Outcome o = run("run", "examples/decoder-board/decoder-board.machine", "--inputs", stim.toString(),
+                "--format", "csv");
+        assertThat(o.code()).as(o.err()).isZero();
+        // The code latch loads at the end of phase 1; the decoded lamp follows in that same phase.
+        assertThat(o.out()).contains("change,0,1,lamp[5],1\r\n", "change,3,1,lamp[5],0\r\n",
+                "change,3,1,lamp[6],1\r\n");
+        // Code 7 in cycle 6 comes while load is 0: nothing changes, and the board is at a fixed point.
+        assertThat(o.out()).doesNotContain("lamp[7]").contains("stop,7,,reason,fixed point:");
+        assertThat(run("run", MACHINE).err()).contains("has a ROM: name the PROGRAM to run");
+    }
+
+    @Test
     void anUnknownWatchNameSuggestsTheNearest() {
         Outcome o = run("run", MACHINE, "programs/pump.asm", "--watch", "acc,acc_nxt");
         assertThat(o.code()).isEqualTo(ExitCodes.BAD_INPUT);
