@@ -6,7 +6,9 @@
 ;          ready = 1 after the first pass (set once, never cleared)
 ; Memory:  s0 = in_a AND NOT in_b (stored as in_a OR in_b, then cleared by R while in_b = 1)
 ;          s1 = NOT (in_a OR NOT in_b)    s2 = NOT (in_a AND NOT in_b)    s3 = NOT in_a
-;          carry = carry out of the addition in the pass before.
+;          carry = carry out of the addition in the pass before. The program never clears
+;          the carry: it relies on the reset state (run with --init zero). Started with
+;          --init unknown the first sum is unknown, as it would be on real flip-flops.
 ; One pass of the loop recomputes everything from the inputs; it loops forever.
 
 start:  NOP
