@@ -1,0 +1,111 @@
+package org.thermion.tui;
+
+import org.thermion.model.HeaterString;
+import org.thermion.model.Machine;
+import org.thermion.model.Rail;
+import org.thermion.power.CurrentMeter;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Power per module (tubes, heater current, plate-supply current now and peak) and per rail
+ * (now, peak, limit), from the current meter the session feeds every phase.
+ */
+final class PowerPanel {
+    private static final int MODULE = 14;
+    private static final int RAIL_COLUMNS = 17;
+
+    private PowerPanel() {
+    }
+
+    static int height(Session s) {
+        // header, modules, total; blank; header, rails; border
+        return 1 + s.modules().size() + 1 + 1 + 1 + s.machine().rails().size() + 2;
+    }
+
+    /** Rails not feeding heaters, the highest positive voltage (B+) first. */
+    static List<Integer> plateRails(Machine m) {
+        boolean[] heater = heaterRails(m);
+        List<Integer> r = new ArrayList<>();
+        for (int i = 0; i < m.rails().size(); i++) {
+            if (!heater[i]) {
+                r.add(i);
+            }
+        }
+        r.sort((a, b) -> {
+            double va = m.rails().get(a).volts();
+            double vb = m.rails().get(b).volts();
+            if ((va > 0) != (vb > 0)) {
+                return va > 0 ? -1 : 1;
+            }
+            return Double.compare(Math.abs(vb), Math.abs(va));
+        });
+        return r;
+    }
+
+    static boolean[] heaterRails(Machine m) {
+        boolean[] heater = new boolean[m.rails().size()];
+        for (HeaterString h : m.heaterStrings()) {
+            heater[h.rail()] = true;
+        }
+        return heater;
+    }
+
+    static void draw(Canvas c, Rect r, Session s) {
+        Machine m = s.machine();
+        CurrentMeter meter = s.meter();
+        c.box(r, "power \u00B7 mA now / peak");
+        Rect in = Canvas.inside(r);
+        Canvas cc = c.within(in);
+        List<Integer> rails = plateRails(m);
+        int fixed = 1 + MODULE + 6 + 9;
+        int shown = Math.max(1, Math.min(rails.size(), (in.width() - fixed) / RAIL_COLUMNS));
+        int col = in.col() + 1;
+        int row = in.row();
+        StringBuilder head = new StringBuilder(Canvas.pad("module", MODULE)).append(Canvas.padLeft("tubes", 6))
+                .append(Canvas.padLeft("heater A", 9));
+        for (int k = 0; k < shown && k < rails.size(); k++) {
+            head.append(Canvas.padLeft(m.rails().get(rails.get(k)).name() + " now", 10)).append(Canvas.padLeft("peak", 7));
+        }
+        cc.text(col, row++, head.toString(), Palette.DIM);
+        int tubes = 0;
+        double heater = 0;
+        for (ModuleLoad ml : s.modules()) {
+            tubes += ml.tubes();
+            heater += ml.heaterAmps();
+            StringBuilder b = new StringBuilder(Canvas.pad(ml.name(), MODULE)).append(Canvas.padLeft(Integer.toString(ml.tubes()), 6))
+                    .append(Canvas.padLeft(String.format("%.2f", ml.heaterAmps()), 9));
+            for (int k = 0; k < shown && k < rails.size(); k++) {
+                int rail = rails.get(k);
+                b.append(Canvas.padLeft(mA(meter.nowModule(ml.module(), rail)), 10))
+                        .append(Canvas.padLeft(mA(meter.peakModule(ml.module(), rail)), 7));
+            }
+            cc.text(col, row++, b.toString(), Palette.TEXT);
+        }
+        StringBuilder t = new StringBuilder(Canvas.pad("all modules", MODULE)).append(Canvas.padLeft(Integer.toString(tubes), 6))
+                .append(Canvas.padLeft(String.format("%.2f", heater), 9));
+        for (int k = 0; k < shown && k < rails.size(); k++) {
+            int rail = rails.get(k);
+            t.append(Canvas.padLeft(mA(meter.nowRail(rail)), 10)).append(Canvas.padLeft(mA(meter.peakRail(rail)), 7));
+        }
+        cc.text(col, row++, t.toString(), Palette.HEADING);
+        row++;
+        cc.text(col, row++, Canvas.pad("rail", MODULE) + Canvas.padLeft("volts", 6) + Canvas.padLeft("now", 9)
+                + Canvas.padLeft("peak", 9) + Canvas.padLeft("limit", 9) + Canvas.padLeft("peak/limit", 12), Palette.DIM);
+        for (int i = 0; i < m.rails().size(); i++) {
+            Rail rail = m.rails().get(i);
+            double peak = meter.peakRail(i);
+            double share = rail.limitAmps() > 0 ? peak / rail.limitAmps() : Double.NaN;
+            String line = Canvas.pad(rail.name(), MODULE) + Canvas.padLeft(String.format("%+.0f", rail.volts()), 6)
+                    + Canvas.padLeft(mA(meter.nowRail(i)), 9) + Canvas.padLeft(mA(peak), 9)
+                    + Canvas.padLeft(rail.limitAmps() > 0 ? mA(rail.limitAmps()) : "-", 9)
+                    + Canvas.padLeft(Double.isNaN(share) ? "-" : String.format("%.0f %%", share * 100), 12);
+            cc.text(col, row++, line, share > 1 ? Palette.STOPPED : Palette.TEXT);
+        }
+    }
+
+    static String mA(double amps) {
+        return String.format("%.1f", amps * 1000);
+    }
+}

@@ -1,0 +1,368 @@
+package org.thermion.tui;
+
+import org.thermion.asm.Assembly;
+import org.thermion.asm.ListingLine;
+import org.thermion.model.Instruction;
+import org.thermion.model.Machine;
+import org.thermion.model.Port;
+import org.thermion.power.CurrentMeter;
+import org.thermion.sim.InitMode;
+import org.thermion.sim.Simulator;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Deque;
+import java.util.List;
+
+/**
+ * Everything the terminal UI shows and changes, without a terminal: the machine and its
+ * simulator on one lane, the program listing, breakpoints, switch positions, the current
+ * meter and why the machine last stopped. Drawing code only reads it; key handling calls
+ * its commands. Tests drive it directly.
+ */
+public final class Session {
+    /** The lane the session runs; the simulator computes 64, the UI watches one. */
+    static final int LANE = 0;
+    private static final int CHANGE_LOG = 256;
+
+    private final Machine machine;
+    private final Assembly assembly;
+    private final Simulator sim;
+    private final InitMode init;
+    private final InputSchedule schedule;
+    private final List<DecodeLine> decode;
+    private final List<ModuleLoad> modules;
+    private final int[] listingIndexOfAddress;
+    private final boolean[] breakpoints;
+    private final boolean[] inputs;
+    private final Level[] lastOutputs;
+    private final int[] watched;
+    private final Deque<OutputChange> changes = new ArrayDeque<>();
+    private CurrentMeter meter;
+    private int scheduleNext;
+    private long outputChangeCount;
+    private boolean running;
+    private Stop stop;
+
+    public Session(Machine machine, Assembly assembly, String decodeName, InitMode init, InputSchedule schedule) {
+        this.machine = machine;
+        this.assembly = assembly;
+        this.init = init;
+        this.schedule = schedule;
+        this.sim = new Simulator(machine);
+        this.decode = DecodeLine.find(machine, decodeName);
+        this.modules = ModuleLoad.of(machine);
+        this.breakpoints = new boolean[Math.max(1, machine.rom().words())];
+        this.listingIndexOfAddress = new int[breakpoints.length];
+        Arrays.fill(listingIndexOfAddress, -1);
+        List<ListingLine> listing = assembly.listing();
+        for (int i = 0; i < listing.size(); i++) {
+            ListingLine l = listing.get(i);
+            if (l.hasWord() && l.address() >= 0 && l.address() < listingIndexOfAddress.length
+                    && listingIndexOfAddress[l.address()] < 0) {
+                listingIndexOfAddress[l.address()] = i;
+            }
+        }
+        this.inputs = new boolean[machine.inputs().size()];
+        this.lastOutputs = new Level[machine.outputs().size()];
+        this.watched = watchedNets(machine, decode);
+        sim.loadRom(assembly.words());
+        reset();
+    }
+
+    /** Nets whose turning unknown stops a run: outputs, the jump request and the decode lines. */
+    private static int[] watchedNets(Machine m, List<DecodeLine> decode) {
+        List<Integer> nets = new ArrayList<>();
+        for (Port p : m.outputs()) {
+            nets.add(p.net());
+        }
+        if (m.pc().jumpNet() >= 0) {
+            nets.add(m.pc().jumpNet());
+        }
+        for (DecodeLine d : decode) {
+            nets.add(d.net());
+        }
+        return nets.stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    // ---- commands -------------------------------------------------------------------
+
+    /** Latches to their power-up state, PC 0, cycle 0, meter cleared; switches stay where they are. */
+    public void reset() {
+        running = false;
+        sim.reset(init);
+        meter = new CurrentMeter(machine);
+        scheduleNext = 0;
+        changes.clear();
+        outputChangeCount = 0;
+        applySchedule();
+        pushInputs();
+        sim.settle();
+        meter.sample(sim, LANE);
+        for (int i = 0; i < lastOutputs.length; i++) {
+            lastOutputs[i] = level(machine.outputs().get(i).net());
+        }
+        stop = new Stop(Stop.Reason.RESET, "reset");
+    }
+
+    /** Runs the next clock phase. */
+    public void stepPhase() {
+        running = false;
+        phase();
+        stop = new Stop(Stop.Reason.STEPPED, "stepped one phase");
+    }
+
+    /** Runs phases until the current cycle is complete (a whole cycle from a cycle boundary). */
+    public void stepCycle() {
+        running = false;
+        runOneCycle();
+        stop = new Stop(Stop.Reason.STEPPED, "stepped one cycle");
+    }
+
+    /** Starts or pauses a run; {@link #run(long)} does the work between frames. */
+    public void toggleRun() {
+        if (running) {
+            running = false;
+            stop = new Stop(Stop.Reason.PAUSED, "paused");
+        } else {
+            running = true;
+        }
+    }
+
+    public boolean running() {
+        return running;
+    }
+
+    /**
+     * While running, runs up to {@code maxCycles} cycles, checking after each whether the
+     * PC reached a breakpoint or a watched net turned unknown; stops the run if so.
+     * Returns the cycles run.
+     */
+    public long run(long maxCycles) {
+        if (!running) {
+            return 0;
+        }
+        boolean watchUnknown = init instanceof InitMode.Unknown;
+        boolean[] unknownBefore = watchUnknown ? unknownWatched() : null;
+        long done = 0;
+        while (done < maxCycles) {
+            runOneCycle();
+            done++;
+            int pc = pc();
+            if (pc >= 0 && pc < breakpoints.length && breakpoints[pc]) {
+                running = false;
+                stop = new Stop(Stop.Reason.BREAKPOINT, "breakpoint at " + Hex.address(pc, machine));
+                break;
+            }
+            if (watchUnknown) {
+                int turned = newlyUnknown(unknownBefore);
+                if (turned >= 0) {
+                    running = false;
+                    stop = new Stop(Stop.Reason.UNKNOWN,
+                            "unknown value on " + machine.netlist().netName(turned));
+                    break;
+                }
+            }
+        }
+        return done;
+    }
+
+    /** Flips a switch and lets the logic settle so lamps and decode lines follow at once. */
+    public void toggleInput(int index) {
+        inputs[index] = !inputs[index];
+        pushInputs();
+        sim.settle();
+    }
+
+    public void toggleBreakpoint(int address) {
+        if (address >= 0 && address < breakpoints.length) {
+            breakpoints[address] = !breakpoints[address];
+        }
+    }
+
+    public void clearBreakpoints() {
+        Arrays.fill(breakpoints, false);
+    }
+
+    // ---- what the screen reads ------------------------------------------------------
+
+    public Machine machine() {
+        return machine;
+    }
+
+    public Assembly assembly() {
+        return assembly;
+    }
+
+    public Simulator simulator() {
+        return sim;
+    }
+
+    public CurrentMeter meter() {
+        return meter;
+    }
+
+    public List<DecodeLine> decodeLines() {
+        return decode;
+    }
+
+    public List<ModuleLoad> modules() {
+        return modules;
+    }
+
+    public Stop stop() {
+        return stop;
+    }
+
+    public InitMode initMode() {
+        return init;
+    }
+
+    public boolean breakpoint(int address) {
+        return address >= 0 && address < breakpoints.length && breakpoints[address];
+    }
+
+    public int breakpointCount() {
+        int n = 0;
+        for (boolean b : breakpoints) {
+            if (b) {
+                n++;
+            }
+        }
+        return n;
+    }
+
+    public boolean input(int index) {
+        return inputs[index];
+    }
+
+    public int pc() {
+        return sim.pc(LANE);
+    }
+
+    public long cycle() {
+        return sim.cycle();
+    }
+
+    public int nextPhase() {
+        return sim.nextPhase();
+    }
+
+    /** The listing line of an address, or -1 when the program has no word there. */
+    public int listingIndex(int address) {
+        return address >= 0 && address < listingIndexOfAddress.length ? listingIndexOfAddress[address] : -1;
+    }
+
+    /** The ROM word at the PC: the instruction being fetched or executed this cycle. */
+    public long wordAtPc() {
+        int pc = pc();
+        long[] words = assembly.words();
+        return pc >= 0 && pc < words.length ? words[pc] : 0;
+    }
+
+    /** The instruction at the PC, or null when its opcode is not in the ISA. */
+    public Instruction instructionAtPc() {
+        return machine.isa().byOpcode(machine.isa().opcode().extract(wordAtPc()));
+    }
+
+    /** True between phases of a cycle: the instruction at the PC has started. */
+    public boolean midCycle() {
+        return sim.nextPhase() != 1;
+    }
+
+    public Level level(int net) {
+        return Level.of(sim.value(net), sim.unknown(net), LANE);
+    }
+
+    public Level stateBit(int index) {
+        return level(machine.isa().state().get(index).net());
+    }
+
+    public Level output(int index) {
+        return level(machine.outputs().get(index).net());
+    }
+
+    /** The most recent output changes, oldest first. */
+    public List<OutputChange> outputChanges() {
+        return List.copyOf(changes);
+    }
+
+    /** Output changes since reset, including those the log no longer holds. */
+    public long outputChangeCount() {
+        return outputChangeCount;
+    }
+
+    // ---- internals ------------------------------------------------------------------
+
+    private void runOneCycle() {
+        do {
+            phase();
+        } while (sim.nextPhase() != 1);
+    }
+
+    private void phase() {
+        if (sim.nextPhase() == 1 && applySchedule()) {
+            pushInputs();
+        }
+        sim.stepPhase();
+        meter.sample(sim, LANE);
+        noteOutputs();
+    }
+
+    /** Applies stimulus rows due before the current cycle; true if any applied. */
+    private boolean applySchedule() {
+        boolean any = false;
+        List<InputSchedule.Row> rows = schedule.rows();
+        while (scheduleNext < rows.size() && rows.get(scheduleNext).cycle() <= sim.cycle()) {
+            Boolean[] v = rows.get(scheduleNext).values();
+            for (int i = 0; i < v.length && i < inputs.length; i++) {
+                if (v[i] != null) {
+                    inputs[i] = v[i];
+                }
+            }
+            scheduleNext++;
+            any = true;
+        }
+        return any;
+    }
+
+    private void pushInputs() {
+        for (int i = 0; i < inputs.length; i++) {
+            sim.setInput(i, inputs[i] ? -1L : 0L);
+        }
+    }
+
+    private void noteOutputs() {
+        for (int i = 0; i < lastOutputs.length; i++) {
+            Level now = level(machine.outputs().get(i).net());
+            if (now != lastOutputs[i]) {
+                lastOutputs[i] = now;
+                outputChangeCount++;
+                if (changes.size() == CHANGE_LOG) {
+                    changes.removeFirst();
+                }
+                int ran = sim.nextPhase() == 1 ? machine.clock().phases() : sim.nextPhase() - 1;
+                long cycle = sim.nextPhase() == 1 ? sim.cycle() - 1 : sim.cycle();
+                changes.addLast(new OutputChange(cycle, ran, machine.outputs().get(i).name(), now));
+            }
+        }
+    }
+
+    private boolean[] unknownWatched() {
+        boolean[] u = new boolean[watched.length];
+        for (int i = 0; i < watched.length; i++) {
+            u[i] = (sim.unknown(watched[i]) >>> LANE & 1L) != 0;
+        }
+        return u;
+    }
+
+    private int newlyUnknown(boolean[] before) {
+        for (int i = 0; i < watched.length; i++) {
+            if (!before[i] && (sim.unknown(watched[i]) >>> LANE & 1L) != 0) {
+                return watched[i];
+            }
+        }
+        return -1;
+    }
+}

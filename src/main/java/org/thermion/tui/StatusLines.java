@@ -1,0 +1,97 @@
+package org.thermion.tui;
+
+import org.thermion.asm.ListingLine;
+
+import java.util.List;
+
+/** The title line on top and the two status lines at the bottom. */
+final class StatusLines {
+    private StatusLines() {
+    }
+
+    static void title(Canvas c, int cols, Session s, String program, List<Panel> hidden) {
+        c.text(0, 0, " ".repeat(cols), Palette.TEXT, Palette.OVERLAY_BACKGROUND);
+        int x = c.text(1, 0, "THERMION", Palette.HEADING, Palette.OVERLAY_BACKGROUND);
+        x = c.text(x, 0, "  " + s.machine().name() + "  \u00B7  " + program + "  \u00B7  power-up state " + initName(s),
+                Palette.TEXT, Palette.OVERLAY_BACKGROUND);
+        if (!hidden.isEmpty()) {
+            StringBuilder b = new StringBuilder("hidden for want of room: ");
+            for (int i = 0; i < hidden.size(); i++) {
+                b.append(i == 0 ? "" : ", ").append(hidden.get(i).title);
+            }
+            String note = b.append(' ').toString();
+            int at = Math.max(x + 2, cols - note.length());
+            c.text(at, 0, Canvas.fit(note, cols - at), Palette.STOPPED, Palette.OVERLAY_BACKGROUND);
+        }
+    }
+
+    static String initName(Session s) {
+        Object m = s.initMode();
+        String n = m.getClass().getSimpleName().toLowerCase();
+        if (m instanceof org.thermion.sim.InitMode.Random) {
+            return "random:" + ((org.thermion.sim.InitMode.Random) m).seed();
+        }
+        return n;
+    }
+
+    static void status(Canvas c, int cols, int row, Session s, View v) {
+        c.text(0, row, " ".repeat(cols), Palette.TEXT, Palette.OVERLAY_BACKGROUND);
+        int phases = s.machine().clock().phases();
+        String where = String.format(" cycle %,d  phase %d of %d next  ", s.cycle(), s.nextPhase(), phases);
+        int x = c.text(0, row, where, Palette.TEXT, Palette.OVERLAY_BACKGROUND);
+        x = c.text(x, row, (s.midCycle() ? "in flight " : "next up ") + Hex.address(s.pc(), s.machine()) + " ",
+                Palette.LIT, Palette.OVERLAY_BACKGROUND);
+        x = c.text(x, row, Canvas.fit(instructionText(s), 24) + "   ", Palette.LIT, Palette.OVERLAY_BACKGROUND);
+        if (s.running()) {
+            String rate = v.cyclesPerSecond > 0 ? String.format("  %,.0f cycles/s", v.cyclesPerSecond) : "";
+            x = c.text(x, row, "\u25B6 running" + rate, Palette.RUNNING, Palette.OVERLAY_BACKGROUND);
+        } else {
+            x = c.text(x, row, "\u25A0 stopped: " + s.stop().text(), Palette.STOPPED, Palette.OVERLAY_BACKGROUND);
+        }
+        if (!v.message.isEmpty()) {
+            c.text(x + 3, row, Canvas.fit(v.message, Math.max(0, cols - x - 3)), Palette.KEY, Palette.OVERLAY_BACKGROUND);
+        }
+    }
+
+    /** The source of the instruction at the PC without its label and comment, or its opcode. */
+    static String instructionText(Session s) {
+        int idx = s.listingIndex(s.pc());
+        if (idx >= 0) {
+            ListingLine l = s.assembly().listing().get(idx);
+            String t = l.sourceText();
+            int semi = t.indexOf(';');
+            if (semi >= 0) {
+                t = t.substring(0, semi);
+            }
+            int colon = t.indexOf(':');
+            if (colon >= 0) {
+                t = t.substring(colon + 1);
+            }
+            return t.trim().replaceAll("\\s+", " ");
+        }
+        return "(no program word)";
+    }
+
+    static void keys(Canvas c, int cols, int row, int inputs, View v) {
+        c.text(0, row, " ".repeat(cols), Palette.TEXT, Palette.BACKGROUND);
+        String[][] hints;
+        if (v.mode == View.Mode.POWER_UP) {
+            hints = new String[][] {{"[ ]", "rail"}, {"w", "back"}, {"?", "help"}, {"q", "quit"}};
+        } else {
+            String sw = inputs == 0 ? "" : inputs == 1 ? "1" : "1-" + Keymap.INPUT_KEYS.charAt(Math.min(inputs, Keymap.INPUT_KEYS.length()) - 1);
+            hints = new String[][] {{"p", "phase"}, {"c", "cycle"}, {"Space", "run/pause"}, {"r", "reset"},
+                {sw, "switches"}, {"b", "breakpoint"}, {"w", "power-up"}, {"?", "help"}, {"q", "quit"}};
+        }
+        int x = 1;
+        for (String[] h : hints) {
+            if (h[0].isEmpty()) {
+                continue;
+            }
+            if (x + h[0].length() + h[1].length() + 2 > cols) {
+                break;
+            }
+            x = c.text(x, row, h[0], Palette.KEY);
+            x = c.text(x + 1, row, h[1], Palette.DIM) + 2;
+        }
+    }
+}
