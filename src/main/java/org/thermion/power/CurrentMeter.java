@@ -1,0 +1,238 @@
+package org.thermion.power;
+
+import org.thermion.model.Machine;
+import org.thermion.model.StageType;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.function.IntToLongFunction;
+
+/**
+ * Plate and bias current of a running machine, per module and per rail, fed one sample
+ * after every simulated phase. Each drawing stage instance contributes its stage's draw
+ * for its output value at that moment ({@link StageDraw}); the soft-start thyratron counts
+ * as conducting. Heater current is not included (it does not depend on the logic state;
+ * see {@link HeaterAnalysis}). Amperes, magnitudes. Every phase lasts the same time, so the
+ * mean over samples is the time average. Before the first sample every reading is NaN.
+ */
+public final class CurrentMeter {
+    private final int rails;
+    private final int modules;
+    /** Draw of every module on every rail with all net-following instances low, fixed ones in their state. */
+    private final double[] base;
+    /** Per net-following instance: its output net, and the draw it adds (module*rails+rail, amps) when high. */
+    private final int[] net;
+    private final int[][] deltaSlot;
+    private final double[][] deltaAmps;
+
+    private final double[] now;
+    private final double[] min;
+    private final double[] max;
+    private final double[] sum;
+    private final long[] maxCycle;
+    private final int[] maxPhase;
+    private final double[] railNow;
+    private final double[] railMin;
+    private final double[] railMax;
+    private final double[] railSum;
+    private final long[] railMaxCycle;
+    private final int[] railMaxPhase;
+    private long samples;
+    private long lastCycle = -1;
+    private int lastPhase;
+
+    public CurrentMeter(Machine m) {
+        rails = m.rails().size();
+        modules = m.modules().size();
+        base = new double[modules * rails];
+        List<DrawingInstance> all = DrawingInstances.of(m);
+        int following = (int) all.stream().filter(DrawingInstance::followsNet).count();
+        net = new int[following];
+        deltaSlot = new int[following][];
+        deltaAmps = new double[following][];
+        int k = 0;
+        for (DrawingInstance d : all) {
+            StageType st = m.stages().get(d.stage());
+            if (!d.followsNet()) {
+                for (int r = 0; r < rails; r++) {
+                    base[d.module() * rails + r] += StageDraw.amps(st, r, d.fixedHigh());
+                }
+                continue;
+            }
+            int n = 0;
+            int[] slots = new int[rails];
+            double[] amps = new double[rails];
+            for (int r = 0; r < rails; r++) {
+                double low = StageDraw.amps(st, r, false);
+                double high = StageDraw.amps(st, r, true);
+                base[d.module() * rails + r] += low;
+                if (high != low) {
+                    slots[n] = d.module() * rails + r;
+                    amps[n] = high - low;
+                    n++;
+                }
+            }
+            net[k] = d.net();
+            deltaSlot[k] = Arrays.copyOf(slots, n);
+            deltaAmps[k] = Arrays.copyOf(amps, n);
+            k++;
+        }
+        now = new double[base.length];
+        min = new double[base.length];
+        max = new double[base.length];
+        sum = new double[base.length];
+        maxCycle = new long[base.length];
+        maxPhase = new int[base.length];
+        railNow = new double[rails];
+        railMin = new double[rails];
+        railMax = new double[rails];
+        railSum = new double[rails];
+        railMaxCycle = new long[rails];
+        railMaxPhase = new int[rails];
+        reset();
+    }
+
+    /** Forgets every sample. */
+    public void reset() {
+        samples = 0;
+        lastCycle = -1;
+        lastPhase = 0;
+        Arrays.fill(now, Double.NaN);
+        Arrays.fill(railNow, Double.NaN);
+        Arrays.fill(sum, 0);
+        Arrays.fill(railSum, 0);
+    }
+
+    /**
+     * Records one sample: {@code valueOfNet} gives a net's lanes (bit i = lane i) after the
+     * phase settled, {@code cycle} (0-based) and {@code phase} (1-based) say when.
+     */
+    public void sample(IntToLongFunction valueOfNet, int lane, long cycle, int phase) {
+        if (lane < 0 || lane > 63) {
+            throw new IllegalArgumentException("lane must be 0..63, not " + lane);
+        }
+        System.arraycopy(base, 0, now, 0, base.length);
+        for (int i = 0; i < net.length; i++) {
+            if ((valueOfNet.applyAsLong(net[i]) >>> lane & 1L) != 0) {
+                int[] slots = deltaSlot[i];
+                double[] amps = deltaAmps[i];
+                for (int j = 0; j < slots.length; j++) {
+                    now[slots[j]] += amps[j];
+                }
+            }
+        }
+        Arrays.fill(railNow, 0);
+        for (int s = 0; s < now.length; s++) {
+            railNow[s % rails] += now[s];
+        }
+        boolean first = samples == 0;
+        for (int s = 0; s < now.length; s++) {
+            double a = now[s];
+            sum[s] += a;
+            if (first || a < min[s]) {
+                min[s] = a;
+            }
+            if (first || a > max[s]) {
+                max[s] = a;
+                maxCycle[s] = cycle;
+                maxPhase[s] = phase;
+            }
+        }
+        for (int r = 0; r < rails; r++) {
+            double a = railNow[r];
+            railSum[r] += a;
+            if (first || a < railMin[r]) {
+                railMin[r] = a;
+            }
+            if (first || a > railMax[r]) {
+                railMax[r] = a;
+                railMaxCycle[r] = cycle;
+                railMaxPhase[r] = phase;
+            }
+        }
+        samples++;
+        lastCycle = cycle;
+        lastPhase = phase;
+    }
+
+    /** Samples taken since construction or the last reset. */
+    public long samples() {
+        return samples;
+    }
+
+    /** Cycle (0-based) of the last sample, -1 before any. */
+    public long lastCycle() {
+        return lastCycle;
+    }
+
+    /** Phase (1-based) of the last sample, 0 before any. */
+    public int lastPhase() {
+        return lastPhase;
+    }
+
+    public double nowModule(int module, int rail) {
+        return now[slot(module, rail)];
+    }
+
+    public double minModule(int module, int rail) {
+        return samples == 0 ? Double.NaN : min[slot(module, rail)];
+    }
+
+    public double peakModule(int module, int rail) {
+        return samples == 0 ? Double.NaN : max[slot(module, rail)];
+    }
+
+    public double meanModule(int module, int rail) {
+        return samples == 0 ? Double.NaN : sum[slot(module, rail)] / samples;
+    }
+
+    /** Cycle (0-based) of a module's first peak on a rail, -1 before any sample. */
+    public long peakCycleModule(int module, int rail) {
+        return samples == 0 ? -1 : maxCycle[slot(module, rail)];
+    }
+
+    /** Phase (1-based) of a module's first peak on a rail, 0 before any sample. */
+    public int peakPhaseModule(int module, int rail) {
+        return samples == 0 ? 0 : maxPhase[slot(module, rail)];
+    }
+
+    public double nowRail(int rail) {
+        return railNow[checkRail(rail)];
+    }
+
+    public double minRail(int rail) {
+        return samples == 0 ? Double.NaN : railMin[checkRail(rail)];
+    }
+
+    public double peakRail(int rail) {
+        return samples == 0 ? Double.NaN : railMax[checkRail(rail)];
+    }
+
+    public double meanRail(int rail) {
+        return samples == 0 ? Double.NaN : railSum[checkRail(rail)] / samples;
+    }
+
+    /** Cycle (0-based) of the rail's first peak, -1 before any sample. */
+    public long peakCycle(int rail) {
+        return samples == 0 ? -1 : railMaxCycle[checkRail(rail)];
+    }
+
+    /** Phase (1-based) of the rail's first peak, 0 before any sample. */
+    public int peakPhase(int rail) {
+        return samples == 0 ? 0 : railMaxPhase[checkRail(rail)];
+    }
+
+    private int slot(int module, int rail) {
+        if (module < 0 || module >= modules) {
+            throw new IndexOutOfBoundsException("no module " + module);
+        }
+        return module * rails + checkRail(rail);
+    }
+
+    private int checkRail(int rail) {
+        if (rail < 0 || rail >= rails) {
+            throw new IndexOutOfBoundsException("no rail " + rail);
+        }
+        return rail;
+    }
+}

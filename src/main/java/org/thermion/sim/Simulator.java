@@ -1,0 +1,700 @@
+package org.thermion.sim;
+
+import org.thermion.model.Gate;
+import org.thermion.model.Latch;
+import org.thermion.model.Machine;
+import org.thermion.model.Netlist;
+import org.thermion.model.Port;
+import org.thermion.model.ProgramCounter;
+import org.thermion.model.Rom;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.SplittableRandom;
+
+/**
+ * Cycle-level simulator of an elaborated machine over 64 independent lanes.
+ *
+ * <p>The netlist is compiled once into flat arrays (an opcode, operand net indices and an
+ * output net index per gate) and evaluated in the gates' levelized order over {@code long}
+ * words, bit {@code i} of every word belonging to lane {@code i}. Each clock phase settles the
+ * logic, then loads that phase's latches (honouring their enables) and, on its phase, the
+ * off-board program counter. The off-board ROM drives its data nets from ROM[PC] per lane.
+ *
+ * <p>In {@link InitMode.Unknown} mode a second word per net marks the lanes where the net is
+ * unknown (X); the value word is then 0 on those lanes. Gates follow the exact three-valued
+ * rules (0 AND X = 0, 1 OR X = 1, X XOR anything = X).
+ *
+ * <p>A latch output net always holds the latch's stored value (a load shows at once);
+ * every gate-driven net holds its value from the last settle.
+ */
+public final class Simulator {
+    /** Lanes per word. */
+    public static final int LANES = 64;
+
+    // Opcodes of the compiled gates; two-input forms avoid the operand list.
+    private static final int OP_BUF = 0;
+    private static final int OP_NOT = 1;
+    private static final int OP_AND2 = 2;
+    private static final int OP_OR2 = 3;
+    private static final int OP_NAND2 = 4;
+    private static final int OP_NOR2 = 5;
+    private static final int OP_XOR2 = 6;
+    private static final int OP_AND = 7;
+    private static final int OP_OR = 8;
+    private static final int OP_NAND = 9;
+    private static final int OP_NOR = 10;
+    private static final int OP_XOR = 11;
+
+    private final Machine machine;
+    private final int phases;
+
+    // Net values: bit i = lane i. unk marks X lanes (Unknown mode only).
+    private final long[] val;
+    private final long[] unk;
+
+    // Compiled gates.
+    private final int gateCount;
+    private final int[] op;
+    private final int[] in0;
+    private final int[] in1;
+    private final int[] listStart;
+    private final int[] listEnd;
+    private final int[] list;
+    private final int[] out;
+
+    // Latches grouped by the phase that loads them (index 0 = phase 1).
+    private final int[][] phaseLatchData;
+    private final int[][] phaseLatchEnable;
+    private final int[][] phaseLatchOut;
+    private final int[] latchOut;
+    private final long[] stageV;
+    private final long[] stageX;
+
+    private final int[] inputNets;
+
+    // Program counter, per lane.
+    private final boolean hasPc;
+    private final int pcMask;
+    private final int pcPhase;
+    private final int jumpNet;
+    private final int[] targetNets;
+    private final int[] pcs = new int[LANES];
+    private long pcUnknown;
+    private boolean pcUniform;
+
+    // ROM.
+    private final boolean hasRom;
+    private final int[] dataNets;
+    private long[] romWords;
+    private final long[] romV;
+    private final long[] romX;
+    private long[] forced;
+    private boolean romDirty;
+
+    private boolean threeValued;
+    private long cycle;
+    private int nextPhase;
+    private long evaluations;
+
+    /** Compiles the machine's netlist; the simulator starts reset with all latches zero. */
+    public Simulator(Machine machine) {
+        this.machine = machine;
+        Netlist nl = machine.netlist();
+        int nets = nl.netCount();
+        this.val = new long[nets];
+        this.unk = new long[nets];
+        this.phases = Math.max(1, machine.clock().phases());
+
+        List<Gate> gates = nl.gates();
+        gateCount = gates.size();
+        op = new int[gateCount];
+        in0 = new int[gateCount];
+        in1 = new int[gateCount];
+        listStart = new int[gateCount];
+        listEnd = new int[gateCount];
+        out = new int[gateCount];
+        int total = 0;
+        for (Gate g : gates) {
+            total += g.inputs().length;
+        }
+        list = new int[total];
+        int at = 0;
+        for (int i = 0; i < gateCount; i++) {
+            Gate g = gates.get(i);
+            int[] ins = g.inputs();
+            out[i] = g.output();
+            listStart[i] = at;
+            for (int n : ins) {
+                list[at++] = n;
+            }
+            listEnd[i] = at;
+            in0[i] = ins.length > 0 ? ins[0] : Netlist.CONST0;
+            in1[i] = ins.length > 1 ? ins[1] : Netlist.CONST0;
+            op[i] = opcode(g, ins.length);
+        }
+
+        int maxPerPhase = 0;
+        List<List<Latch>> byPhase = new ArrayList<>();
+        for (int p = 0; p < phases; p++) {
+            byPhase.add(new ArrayList<>());
+        }
+        for (Latch l : nl.latches()) {
+            int p = l.phase() - 1;
+            if (p < 0 || p >= phases) {
+                throw new IllegalArgumentException("latch on net " + nl.netName(l.output()) + " loads on phase "
+                        + l.phase() + " but the clock has " + phases + " phases");
+            }
+            byPhase.get(p).add(l);
+        }
+        phaseLatchData = new int[phases][];
+        phaseLatchEnable = new int[phases][];
+        phaseLatchOut = new int[phases][];
+        for (int p = 0; p < phases; p++) {
+            List<Latch> ls = byPhase.get(p);
+            phaseLatchData[p] = ls.stream().mapToInt(Latch::data).toArray();
+            phaseLatchEnable[p] = ls.stream().mapToInt(Latch::enable).toArray();
+            phaseLatchOut[p] = ls.stream().mapToInt(Latch::output).toArray();
+            maxPerPhase = Math.max(maxPerPhase, ls.size());
+        }
+        latchOut = nl.latches().stream().mapToInt(Latch::output).toArray();
+        stageV = new long[maxPerPhase];
+        stageX = new long[maxPerPhase];
+
+        inputNets = machine.inputs().stream().mapToInt(Port::net).toArray();
+
+        ProgramCounter pc = machine.pc();
+        hasPc = pc != null;
+        if (hasPc) {
+            if (pc.width() < 1 || pc.width() > 30) {
+                throw new IllegalArgumentException("program counter width " + pc.width() + " is outside 1..30");
+            }
+            pcMask = (1 << pc.width()) - 1;
+            pcPhase = pc.phase();
+            jumpNet = pc.jumpNet();
+            targetNets = pc.targetNets().clone();
+        } else {
+            pcMask = 0;
+            pcPhase = -1;
+            jumpNet = -1;
+            targetNets = new int[0];
+        }
+        Rom rom = machine.rom();
+        hasRom = rom != null;
+        dataNets = hasRom ? rom.dataNets().clone() : new int[0];
+        romWords = new long[hasRom ? Math.max(0, rom.words()) : 0];
+        romV = new long[dataNets.length];
+        romX = new long[dataNets.length];
+        reset(new InitMode.Zero());
+    }
+
+    private static int opcode(Gate g, int n) {
+        if (n == 0) {
+            // Never produced by the elaborator; the list forms give the empty function's value.
+            return switch (g.fn()) {
+                case AND -> OP_AND;
+                case OR -> OP_OR;
+                case NAND -> OP_NAND;
+                case NOR -> OP_NOR;
+                case XOR -> OP_XOR;
+                case BUF -> OP_BUF;
+                case NOT -> OP_NOT;
+            };
+        }
+        return switch (g.fn()) {
+            case BUF -> OP_BUF;
+            case NOT -> OP_NOT;
+            case AND -> n == 1 ? OP_BUF : n == 2 ? OP_AND2 : OP_AND;
+            case OR -> n == 1 ? OP_BUF : n == 2 ? OP_OR2 : OP_OR;
+            case NAND -> n == 1 ? OP_NOT : n == 2 ? OP_NAND2 : OP_NAND;
+            case NOR -> n == 1 ? OP_NOT : n == 2 ? OP_NOR2 : OP_NOR;
+            case XOR -> n == 1 ? OP_BUF : n == 2 ? OP_XOR2 : OP_XOR;
+        };
+    }
+
+    public Machine machine() {
+        return machine;
+    }
+
+    /**
+     * Starts over: latches per {@code init}, PC 0 on every lane, cycle 0, next phase 1.
+     * Machine inputs keep the values last set; a loaded ROM stays loaded.
+     */
+    public void reset(InitMode init) {
+        threeValued = init instanceof InitMode.Unknown;
+        long[] inputs = new long[inputNets.length];
+        for (int i = 0; i < inputNets.length; i++) {
+            inputs[i] = val[inputNets[i]];
+        }
+        Arrays.fill(val, 0L);
+        Arrays.fill(unk, 0L);
+        for (int i = 0; i < inputNets.length; i++) {
+            val[inputNets[i]] = inputs[i];
+        }
+        if (init instanceof InitMode.Random r) {
+            SplittableRandom rng = new SplittableRandom(r.seed());
+            for (int n : latchOut) {
+                val[n] = rng.nextLong();
+            }
+        } else if (threeValued) {
+            for (int n : latchOut) {
+                unk[n] = -1L;
+            }
+        }
+        val[Netlist.CONST1] = -1L;
+        val[Netlist.CONST0] = 0L;
+        Arrays.fill(pcs, 0);
+        pcUnknown = 0;
+        pcUniform = true;
+        cycle = 0;
+        nextPhase = 1;
+        romDirty = true;
+    }
+
+    /** Loads the same ROM image into every lane; words past the end read 0. */
+    public void loadRom(long[] words) {
+        long[] w = new long[Math.max(romWords.length, 0)];
+        long mask = dataNets.length >= 64 ? -1L : (1L << dataNets.length) - 1;
+        for (int i = 0; i < w.length && i < words.length; i++) {
+            w[i] = words[i] & mask;
+        }
+        romWords = w;
+        romDirty = true;
+    }
+
+    /** Sets machine input {@code inputIndex} (index into {@code machine.inputs()}); bit i = lane i. */
+    public void setInput(int inputIndex, long lanes) {
+        int n = inputNets[inputIndex];
+        val[n] = lanes;
+        unk[n] = 0;
+    }
+
+    /** Sets a machine input by name on every lane. */
+    public void setInput(String name, boolean value) {
+        setInput(inputIndex(name), value ? -1L : 0L);
+    }
+
+    /** Index of a machine input by name; IllegalArgumentException when there is none. */
+    public int inputIndex(String name) {
+        List<Port> in = machine.inputs();
+        for (int i = 0; i < in.size(); i++) {
+            if (in.get(i).name().equals(name)) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException("machine " + machine.name() + " has no input '" + name + "'");
+    }
+
+    /** Evaluates the combinational logic in levelized order; loads nothing. */
+    public void settle() {
+        if (hasRom) {
+            if (romDirty) {
+                computeRom();
+            }
+            for (int b = 0; b < dataNets.length; b++) {
+                val[dataNets[b]] = romV[b];
+                unk[dataNets[b]] = romX[b];
+            }
+        }
+        if (threeValued) {
+            settle3();
+        } else {
+            settle2();
+        }
+        evaluations += gateCount;
+    }
+
+    private void settle2() {
+        final long[] v = val;
+        final int[] op = this.op;
+        final int[] a = in0;
+        final int[] b = in1;
+        final int[] o = out;
+        for (int g = 0, n = gateCount; g < n; g++) {
+            long r;
+            switch (op[g]) {
+                case OP_BUF:
+                    r = v[a[g]];
+                    break;
+                case OP_NOT:
+                    r = ~v[a[g]];
+                    break;
+                case OP_AND2:
+                    r = v[a[g]] & v[b[g]];
+                    break;
+                case OP_OR2:
+                    r = v[a[g]] | v[b[g]];
+                    break;
+                case OP_NAND2:
+                    r = ~(v[a[g]] & v[b[g]]);
+                    break;
+                case OP_NOR2:
+                    r = ~(v[a[g]] | v[b[g]]);
+                    break;
+                case OP_XOR2:
+                    r = v[a[g]] ^ v[b[g]];
+                    break;
+                case OP_AND:
+                    r = andList(v, g);
+                    break;
+                case OP_OR:
+                    r = orList(v, g);
+                    break;
+                case OP_NAND:
+                    r = ~andList(v, g);
+                    break;
+                case OP_NOR:
+                    r = ~orList(v, g);
+                    break;
+                case OP_XOR: {
+                    r = 0;
+                    for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
+                        r ^= v[list[k]];
+                    }
+                    break;
+                }
+                default:
+                    r = 0;
+                    break;
+            }
+            v[o[g]] = r;
+        }
+    }
+
+    private long andList(long[] v, int g) {
+        long r = -1L;
+        for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
+            r &= v[list[k]];
+        }
+        return r;
+    }
+
+    private long orList(long[] v, int g) {
+        long r = 0L;
+        for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
+            r |= v[list[k]];
+        }
+        return r;
+    }
+
+    // Three-valued settle. Invariant: val has 0 wherever unk has 1, so "known 1" is just val.
+    private void settle3() {
+        final long[] v = val;
+        final long[] x = unk;
+        for (int g = 0, n = gateCount; g < n; g++) {
+            long rv;
+            long rx;
+            int code = op[g];
+            switch (code) {
+                case OP_BUF:
+                    rv = v[in0[g]];
+                    rx = x[in0[g]];
+                    break;
+                case OP_NOT:
+                    rx = x[in0[g]];
+                    rv = ~v[in0[g]] & ~rx;
+                    break;
+                case OP_AND2:
+                case OP_NAND2: {
+                    int p = in0[g];
+                    int q = in1[g];
+                    long one = v[p] & v[q];
+                    long zero = (~v[p] & ~x[p]) | (~v[q] & ~x[q]);
+                    rx = ~zero & ~one;
+                    rv = code == OP_AND2 ? one : zero;
+                    break;
+                }
+                case OP_OR2:
+                case OP_NOR2: {
+                    int p = in0[g];
+                    int q = in1[g];
+                    long one = v[p] | v[q];
+                    long zero = ~v[p] & ~x[p] & ~v[q] & ~x[q];
+                    rx = ~zero & ~one;
+                    rv = code == OP_OR2 ? one : zero;
+                    break;
+                }
+                case OP_XOR2: {
+                    rx = x[in0[g]] | x[in1[g]];
+                    rv = (v[in0[g]] ^ v[in1[g]]) & ~rx;
+                    break;
+                }
+                case OP_AND:
+                case OP_NAND: {
+                    long one = -1L;
+                    long zero = 0L;
+                    for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
+                        int p = list[k];
+                        one &= v[p];
+                        zero |= ~v[p] & ~x[p];
+                    }
+                    rx = ~zero & ~one;
+                    rv = code == OP_AND ? one : zero;
+                    break;
+                }
+                case OP_OR:
+                case OP_NOR: {
+                    long one = 0L;
+                    long zero = -1L;
+                    for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
+                        int p = list[k];
+                        one |= v[p];
+                        zero &= ~v[p] & ~x[p];
+                    }
+                    rx = ~zero & ~one;
+                    rv = code == OP_OR ? one : zero;
+                    break;
+                }
+                case OP_XOR: {
+                    long r = 0L;
+                    long u = 0L;
+                    for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
+                        r ^= v[list[k]];
+                        u |= x[list[k]];
+                    }
+                    rx = u;
+                    rv = r & ~u;
+                    break;
+                }
+                default:
+                    rv = 0;
+                    rx = 0;
+                    break;
+            }
+            v[out[g]] = rv;
+            x[out[g]] = rx;
+        }
+    }
+
+    /**
+     * Runs the next phase: settle, then load that phase's latches (and the PC on its phase),
+     * all sampling the settled values at once; then advance the phase (and the cycle count
+     * after the last phase).
+     */
+    public void stepPhase() {
+        settle();
+        int p = nextPhase - 1;
+        int[] data = phaseLatchData[p];
+        int[] en = phaseLatchEnable[p];
+        int[] q = phaseLatchOut[p];
+        int n = data.length;
+        final long[] v = val;
+        final long[] x = unk;
+        if (threeValued) {
+            for (int i = 0; i < n; i++) {
+                long dv = v[data[i]];
+                long dx = x[data[i]];
+                long qv = v[q[i]];
+                long qx = x[q[i]];
+                long ev = en[i] < 0 ? -1L : v[en[i]];
+                long ex = en[i] < 0 ? 0L : x[en[i]];
+                long e0 = ~ev & ~ex;
+                // An unknown enable keeps the value only where data and the stored bit agree and are known.
+                long same = ~(dv ^ qv) & ~dx & ~qx;
+                stageV[i] = (ev & dv) | (e0 & qv) | (ex & same & qv);
+                stageX[i] = (ev & dx) | (e0 & qx) | (ex & ~same);
+            }
+        } else {
+            for (int i = 0; i < n; i++) {
+                long e = en[i] < 0 ? -1L : v[en[i]];
+                stageV[i] = (v[data[i]] & e) | (v[q[i]] & ~e);
+            }
+        }
+        if (hasPc && pcPhase == nextPhase) {
+            loadPc();
+        }
+        for (int i = 0; i < n; i++) {
+            v[q[i]] = stageV[i];
+        }
+        if (threeValued) {
+            for (int i = 0; i < n; i++) {
+                x[q[i]] = stageX[i];
+            }
+        }
+        nextPhase = nextPhase % phases + 1;
+        if (nextPhase == 1) {
+            cycle++;
+        }
+    }
+
+    /** Runs phases until the current cycle is complete. */
+    public void stepCycle() {
+        do {
+            stepPhase();
+        } while (nextPhase != 1);
+    }
+
+    private void loadPc() {
+        long j = val[jumpNet];
+        long jx = threeValued ? unk[jumpNet] : 0L;
+        boolean targetsUniform = true;
+        long tx = 0;
+        for (int t : targetNets) {
+            long tv = val[t];
+            if (tv != 0 && tv != -1L) {
+                targetsUniform = false;
+            }
+            if (threeValued) {
+                tx |= unk[t];
+            }
+        }
+        if (pcUniform && jx == 0 && tx == 0 && targetsUniform && (j == 0 || j == -1L)) {
+            int next = j == 0 ? (pcs[0] + 1) & pcMask : target(0);
+            Arrays.fill(pcs, next);
+            romDirty = true;
+            return;
+        }
+        long newUnknown = pcUnknown;
+        for (int lane = 0; lane < LANES; lane++) {
+            long bit = 1L << lane;
+            int inc = (pcs[lane] + 1) & pcMask;
+            int tgt = target(lane);
+            boolean tgtUnknown = false;
+            if (threeValued) {
+                for (int t : targetNets) {
+                    if ((unk[t] & bit) != 0) {
+                        tgtUnknown = true;
+                    }
+                }
+            }
+            if ((jx & bit) != 0) {
+                // Jump or not unknown: the PC is known only when both ways lead to the same address.
+                pcs[lane] = inc;
+                if (tgtUnknown || tgt != inc) {
+                    newUnknown |= bit;
+                }
+            } else if ((j & bit) != 0) {
+                pcs[lane] = tgt;
+                if (tgtUnknown) {
+                    newUnknown |= bit;
+                } else {
+                    newUnknown &= ~bit;
+                }
+            } else {
+                pcs[lane] = inc;
+            }
+        }
+        pcUnknown = newUnknown;
+        updateUniform();
+        romDirty = true;
+    }
+
+    private int target(int lane) {
+        int t = 0;
+        for (int b = 0; b < targetNets.length && b < 31; b++) {
+            t |= (int) ((val[targetNets[b]] >>> lane) & 1L) << b;
+        }
+        return t & pcMask;
+    }
+
+    private void updateUniform() {
+        boolean u = pcUnknown == 0;
+        for (int i = 1; i < LANES && u; i++) {
+            u = pcs[i] == pcs[0];
+        }
+        pcUniform = u;
+    }
+
+    private long romWord(int address) {
+        return address >= 0 && address < romWords.length ? romWords[address] : 0L;
+    }
+
+    private void computeRom() {
+        int w = dataNets.length;
+        if (forced != null) {
+            for (int b = 0; b < w; b++) {
+                romV[b] = b < forced.length ? forced[b] : 0L;
+                romX[b] = 0L;
+            }
+        } else if (pcUniform) {
+            long word = romWord(pcs[0]);
+            for (int b = 0; b < w; b++) {
+                romV[b] = -((word >>> b) & 1L);
+                romX[b] = 0L;
+            }
+        } else {
+            Arrays.fill(romV, 0L);
+            for (int lane = 0; lane < LANES; lane++) {
+                long word = romWord(pcs[lane]);
+                for (int b = 0; b < w; b++) {
+                    romV[b] |= ((word >>> b) & 1L) << lane;
+                }
+            }
+            for (int b = 0; b < w; b++) {
+                romX[b] = pcUnknown;
+                romV[b] &= ~pcUnknown;
+            }
+        }
+        romDirty = false;
+    }
+
+    /** Completed cycles since reset. */
+    public long cycle() {
+        return cycle;
+    }
+
+    /** The 1-based phase the next {@link #stepPhase()} runs. */
+    public int nextPhase() {
+        return nextPhase;
+    }
+
+    /** Clock phases per cycle. */
+    public int phases() {
+        return phases;
+    }
+
+    /** The net's value (bit i = lane i); 0 on lanes where it is unknown. */
+    public long value(int net) {
+        return val[net];
+    }
+
+    /** Lanes where the net is unknown (Unknown mode), else 0. */
+    public long unknown(int net) {
+        return unk[net];
+    }
+
+    /** True while simulating with three-valued logic. */
+    public boolean threeValued() {
+        return threeValued;
+    }
+
+    /** The program counter of one lane. */
+    public int pc(int lane) {
+        return pcs[lane];
+    }
+
+    /** Lanes whose program counter is unknown (after a jump decided by an X), else 0. */
+    public long pcUnknown() {
+        return pcUnknown;
+    }
+
+    /** Sets the program counter of one lane (taken mod 2^width); the lane's PC becomes known. */
+    public void setPc(int lane, int pc) {
+        pcs[lane] = pc & pcMask;
+        pcUnknown &= ~(1L << lane);
+        updateUniform();
+        romDirty = true;
+    }
+
+    /** Forces the stored value of latch {@code latchIndex} (index into the netlist's latches). */
+    public void setLatch(int latchIndex, long lanes) {
+        int n = latchOut[latchIndex];
+        val[n] = lanes;
+        unk[n] = 0L;
+    }
+
+    /**
+     * Drives the ROM data nets with a given word per lane instead of ROM[PC]: word bit b on lane i
+     * is {@code bitLanes[b] >>> i & 1}. {@code null} returns to ROM[PC].
+     */
+    public void forceRomWord(long[] bitLanes) {
+        forced = bitLanes == null ? null : bitLanes.clone();
+        romDirty = true;
+    }
+
+    /** Gate evaluations so far (each evaluates all 64 lanes at once). */
+    public long gateEvaluations() {
+        return evaluations;
+    }
+}
