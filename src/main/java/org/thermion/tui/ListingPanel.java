@@ -37,7 +37,7 @@ final class ListingPanel {
         Rect in = Canvas.inside(r);
         Canvas cc = c.within(in);
         int addrDigits = Hex.digits(s.machine().pc().width());
-        int wordDigits = Hex.digits(s.machine().rom().width());
+        int wordDigits = Math.max(4, Hex.digits(s.machine().rom().width()));
         String header = "  " + Canvas.pad("at", addrDigits) + " " + Canvas.pad("word", wordDigits) + "  source";
         cc.text(in.col(), in.row(), Canvas.pad(header, in.width()), Palette.DIM);
         int rows = rows(r);
@@ -62,7 +62,7 @@ final class ListingPanel {
             col = cc.text(col, row, pc, Palette.LIT, bg);
             if (l.hasWord()) {
                 col = cc.text(col, row, Hex.address(l.address(), s.machine()) + " ", Palette.DIM, bg);
-                col = cc.text(col, row, Hex.word(l.word(), s.machine()) + "  ", atPc ? Palette.LIT : Palette.DIM, bg);
+                col = cc.text(col, row, Canvas.pad(Hex.word(l.word(), s.machine()), wordDigits) + "  ", atPc ? Palette.LIT : Palette.DIM, bg);
             } else {
                 col += addrDigits + wordDigits + 3;
             }

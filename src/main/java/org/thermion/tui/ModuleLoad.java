@@ -1,45 +1,32 @@
 package org.thermion.tui;
 
-import org.thermion.model.Envelope;
-import org.thermion.model.HeaterRating;
-import org.thermion.model.HeaterString;
 import org.thermion.model.Machine;
 import org.thermion.model.ModuleInstance;
+import org.thermion.power.HeaterAnalysis;
+import org.thermion.power.TubeCount;
 
 import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The fixed part of a module's row in the power table: how many envelopes it holds and
- * the heater current they take at their wired ratings (a series string passes one current
- * through every heater, so each heater counts its own rated current).
+ * The fixed part of a module's row in the power table: its envelopes (from the tube count)
+ * and its share of the heater supply current (from the heater analysis, all heater rails).
  */
 public record ModuleLoad(int module, String name, int tubes, double heaterAmps) {
 
     /** One row per module instance that holds at least one envelope, top first. */
-    public static List<ModuleLoad> of(Machine m) {
-        int count = m.modules().size();
-        int[] tubes = new int[count];
-        double[] amps = new double[count];
-        double[] envelopeAmps = new double[m.envelopes().size()];
-        for (Envelope e : m.envelopes()) {
-            envelopeAmps[e.id()] = m.tubes().get(e.tube()).defaultHeater().amps();
-        }
-        for (HeaterString s : m.heaterStrings()) {
-            for (int i = 0; i < s.envelopes().size(); i++) {
-                HeaterRating r = s.ratings().get(i);
-                envelopeAmps[s.envelopes().get(i)] = r.amps();
-            }
-        }
-        for (Envelope e : m.envelopes()) {
-            tubes[e.module()]++;
-            amps[e.module()] += envelopeAmps[e.id()];
-        }
+    public static List<ModuleLoad> of(Machine m, TubeCount count, HeaterAnalysis heaters) {
         List<ModuleLoad> rows = new ArrayList<>();
         for (ModuleInstance mi : m.modules()) {
-            if (tubes[mi.id()] > 0) {
-                rows.add(new ModuleLoad(mi.id(), label(mi), tubes[mi.id()], amps[mi.id()]));
+            int tubes = count.module(mi.id()).envelopes();
+            if (tubes == 0) {
+                continue;
             }
+            double amps = 0;
+            for (int r = 0; r < m.rails().size(); r++) {
+                amps += heaters.moduleAmps(mi.id(), r);
+            }
+            rows.add(new ModuleLoad(mi.id(), label(mi), tubes, amps));
         }
         return List.copyOf(rows);
     }

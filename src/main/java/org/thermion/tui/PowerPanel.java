@@ -13,7 +13,7 @@ import java.util.List;
  * (now, peak, limit), from the current meter the session feeds every phase.
  */
 final class PowerPanel {
-    private static final int MODULE = 14;
+    private static final int MODULE = 13;
     private static final int RAIL_COLUMNS = 17;
 
     private PowerPanel() {
@@ -55,7 +55,7 @@ final class PowerPanel {
     static void draw(Canvas c, Rect r, Session s) {
         Machine m = s.machine();
         CurrentMeter meter = s.meter();
-        c.box(r, "power \u00B7 mA now / peak");
+        c.box(r, "power");
         Rect in = Canvas.inside(r);
         Canvas cc = c.within(in);
         List<Integer> rails = plateRails(m);
@@ -66,7 +66,7 @@ final class PowerPanel {
         StringBuilder head = new StringBuilder(Canvas.pad("module", MODULE)).append(Canvas.padLeft("tubes", 6))
                 .append(Canvas.padLeft("heater A", 9));
         for (int k = 0; k < shown && k < rails.size(); k++) {
-            head.append(Canvas.padLeft(m.rails().get(rails.get(k)).name() + " now", 10)).append(Canvas.padLeft("peak", 7));
+            head.append(Canvas.padLeft(m.rails().get(rails.get(k)).name() + " mA", 10)).append(Canvas.padLeft("peak", 7));
         }
         cc.text(col, row++, head.toString(), Palette.DIM);
         int tubes = 0;
@@ -91,18 +91,29 @@ final class PowerPanel {
         }
         cc.text(col, row++, t.toString(), Palette.HEADING);
         row++;
-        cc.text(col, row++, Canvas.pad("rail", MODULE) + Canvas.padLeft("volts", 6) + Canvas.padLeft("now", 9)
-                + Canvas.padLeft("peak", 9) + Canvas.padLeft("limit", 9) + Canvas.padLeft("peak/limit", 12), Palette.DIM);
+        cc.text(col, row++, Canvas.pad("rail", MODULE) + Canvas.padLeft("volts", 6) + Canvas.padLeft("heaters", 10)
+                + Canvas.padLeft("now", 10) + Canvas.padLeft("peak", 10) + Canvas.padLeft("limit", 9)
+                + Canvas.padLeft("peak use", 10), Palette.DIM);
         for (int i = 0; i < m.rails().size(); i++) {
             Rail rail = m.rails().get(i);
-            double peak = meter.peakRail(i);
+            double heat = s.heaters().railAmps(i);
+            double peak = heat + meter.peakRail(i);
             double share = rail.limitAmps() > 0 ? peak / rail.limitAmps() : Double.NaN;
-            String line = Canvas.pad(rail.name(), MODULE) + Canvas.padLeft(String.format("%+.0f", rail.volts()), 6)
-                    + Canvas.padLeft(mA(meter.nowRail(i)), 9) + Canvas.padLeft(mA(peak), 9)
-                    + Canvas.padLeft(rail.limitAmps() > 0 ? mA(rail.limitAmps()) : "-", 9)
-                    + Canvas.padLeft(Double.isNaN(share) ? "-" : String.format("%.0f %%", share * 100), 12);
+            String line = Canvas.pad(rail.name(), MODULE) + Canvas.padLeft(String.format("%+.1f", rail.volts()), 6)
+                    + Canvas.padLeft(heat > 0 ? amps(heat) : "-", 10)
+                    + Canvas.padLeft(amps(heat + meter.nowRail(i)), 10) + Canvas.padLeft(amps(peak), 10)
+                    + Canvas.padLeft(rail.limitAmps() > 0 ? amps(rail.limitAmps()) : "-", 9)
+                    + Canvas.padLeft(Double.isNaN(share) ? "-" : String.format("%.0f %%", share * 100), 10);
             cc.text(col, row++, line, share > 1 ? Palette.STOPPED : Palette.TEXT);
         }
+    }
+
+    /** Amperes with the unit a reader expects for the size: mA below one ampere. */
+    static String amps(double a) {
+        if (Double.isNaN(a)) {
+            return "-";
+        }
+        return Math.abs(a) < 1 ? String.format("%.1f mA", a * 1000) : String.format("%.2f A", a);
     }
 
     static String mA(double amps) {

@@ -6,6 +6,8 @@ import org.thermion.model.Instruction;
 import org.thermion.model.Machine;
 import org.thermion.model.Port;
 import org.thermion.power.CurrentMeter;
+import org.thermion.power.HeaterAnalysis;
+import org.thermion.power.TubeCount;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
 
@@ -33,6 +35,7 @@ public final class Session {
     private final InputSchedule schedule;
     private final List<DecodeLine> decode;
     private final List<ModuleLoad> modules;
+    private final HeaterAnalysis heaters;
     private final int[] listingIndexOfAddress;
     private final boolean[] breakpoints;
     private final boolean[] inputs;
@@ -52,7 +55,8 @@ public final class Session {
         this.schedule = schedule;
         this.sim = new Simulator(machine);
         this.decode = DecodeLine.find(machine, decodeName);
-        this.modules = ModuleLoad.of(machine);
+        this.heaters = new HeaterAnalysis(machine);
+        this.modules = ModuleLoad.of(machine, new TubeCount(machine), heaters);
         this.breakpoints = new boolean[Math.max(1, machine.rom().words())];
         this.listingIndexOfAddress = new int[breakpoints.length];
         Arrays.fill(listingIndexOfAddress, -1);
@@ -92,14 +96,18 @@ public final class Session {
     public void reset() {
         running = false;
         sim.reset(init);
-        meter = new CurrentMeter(machine);
+        if (meter == null) {
+            meter = new CurrentMeter(machine);
+        } else {
+            meter.reset();
+        }
         scheduleNext = 0;
         changes.clear();
         outputChangeCount = 0;
         applySchedule();
         pushInputs();
         sim.settle();
-        meter.sample(sim, LANE);
+        sample();
         for (int i = 0; i < lastOutputs.length; i++) {
             lastOutputs[i] = level(machine.outputs().get(i).net());
         }
@@ -110,6 +118,7 @@ public final class Session {
     public void stepPhase() {
         running = false;
         phase();
+        sim.settle();
         stop = new Stop(Stop.Reason.STEPPED, "stepped one phase");
     }
 
@@ -117,6 +126,7 @@ public final class Session {
     public void stepCycle() {
         running = false;
         runOneCycle();
+        sim.settle();
         stop = new Stop(Stop.Reason.STEPPED, "stepped one cycle");
     }
 
@@ -165,6 +175,8 @@ public final class Session {
                 }
             }
         }
+        // Lamps show the logic settled on what the latches now hold.
+        sim.settle();
         return done;
     }
 
@@ -205,6 +217,10 @@ public final class Session {
 
     public List<DecodeLine> decodeLines() {
         return decode;
+    }
+
+    public HeaterAnalysis heaters() {
+        return heaters;
     }
 
     public List<ModuleLoad> modules() {
@@ -306,8 +322,25 @@ public final class Session {
             pushInputs();
         }
         sim.stepPhase();
-        meter.sample(sim, LANE);
+        sample();
         noteOutputs();
+    }
+
+    /**
+     * Feeds the meter after a phase: gate outputs as they settled in it, latches as they
+     * loaded at its end, stamped with the phase just run (phase 0 before any ran).
+     */
+    private void sample() {
+        int next = sim.nextPhase();
+        long cycle = sim.cycle();
+        int phase;
+        if (next == 1) {
+            phase = cycle == 0 ? 0 : sim.phases();
+            cycle = Math.max(0, cycle - 1);
+        } else {
+            phase = next - 1;
+        }
+        meter.sample(sim::value, LANE, cycle, phase);
     }
 
     /** Applies stimulus rows due before the current cycle; true if any applied. */
