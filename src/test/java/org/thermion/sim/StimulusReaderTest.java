@@ -1,0 +1,74 @@
+package org.thermion.sim;
+
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.junit.jupiter.api.Test;
+import org.thermion.lang.DiagnosticPrinter;
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.SourceSet;
+import org.thermion.model.Machine;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Path;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** Stimulus files: what a good one means, and how a bad one is reported. */
+class StimulusReaderTest {
+    static final Machine DEMO = Machines.demo();
+
+    private static Stimulus parse(String text, Diagnostics d, SourceSet s) {
+        return new StimulusReader(DEMO, s, d).parse(Path.of("stim.csv"), text);
+    }
+
+    @Test
+    void rowsHoldTheirValuesFromTheirCycleOnAndEmptyFieldsKeepThePreviousValue() {
+        Diagnostics d = new Diagnostics();
+        Stimulus st = parse("cycle,low_sw,\"high_sw\"\r\n0,1,0\r\n5,,1\r\n\r\n9,0,\"0\"\r\n", d, new SourceSet());
+        assertThat(d.hasErrors()).isFalse();
+        assertThat(st.rows()).hasSize(3);
+        assertThat(st.lastCycle()).isEqualTo(9);
+        boolean[] in = new boolean[DEMO.inputs().size()];
+        Stimulus.Cursor c = st.cursor();
+        assertThat(c.advance(0, in)).isTrue();
+        assertThat(in[0]).isTrue();
+        assertThat(in[1]).isFalse();
+        assertThat(c.advance(4, in)).isFalse();
+        assertThat(c.advance(5, in)).isTrue();
+        assertThat(in[0]).as("kept from cycle 0").isTrue();
+        assertThat(in[1]).isTrue();
+        assertThat(c.pending()).isTrue();
+        c.advance(100, in);
+        assertThat(in[0]).isFalse();
+        assertThat(in[1]).isFalse();
+        assertThat(c.pending()).isFalse();
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', textBlock = """
+            no-cycle-column  | step,low_sw\\n0,1\\n
+            unknown-input    | cycle,low_sww\\n0,1\\n
+            duplicate-input  | cycle,manual,strobe,manual\\n0,1,0,1\\n
+            bad-value        | cycle,low_sw,high_sw\\n0,1,0\\n3,1,2\\n
+            bad-cycle        | cycle,low_sw\\n0,1\\nx3,0\\n
+            cycle-order      | cycle,low_sw\\n0,1\\n7,0\\n7,1\\n
+            too-few-fields   | cycle,low_sw,high_sw\\n0,1\\n
+            too-many-fields  | cycle,low_sw\\n0,1,1\\n
+            open-quote       | cycle,low_sw\\n0,"1\\n
+            after-quote      | cycle,low_sw\\n0,"1"x\\n
+            quote-inside     | cycle,low_sw\\n0,1"\\n
+            empty            | \\n
+            """)
+    void badStimulusIsReportedWithPlaceAndExpectation(String name, String escaped) throws IOException {
+        String text = escaped.replace("\\n", "\n");
+        Diagnostics d = new Diagnostics();
+        SourceSet s = new SourceSet();
+        Stimulus st = parse(text, d, s);
+        assertThat(st).isNull();
+        StringWriter w = new StringWriter();
+        new DiagnosticPrinter(s).print(d, new PrintWriter(w));
+        Golden.check("stimulus/" + name + ".txt", w.toString());
+    }
+}
