@@ -11,8 +11,9 @@ import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
+import org.thermion.sim.Stimulus;
+import org.thermion.sim.StimulusReader;
 import org.thermion.tui.DecodeLine;
-import org.thermion.tui.InputSchedule;
 import org.thermion.tui.PowerUpView;
 import org.thermion.tui.Session;
 import org.thermion.tui.TerminalUi;
@@ -69,7 +70,7 @@ public final class UiCommand implements Callable<Integer> {
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
-        Session session = open(machine, program, init, decodeNet, err);
+        Session session = open(machine, program, inputs, init, decodeNet, err);
         if (session == null) {
             return ExitCodes.BAD_INPUT;
         }
@@ -92,7 +93,8 @@ public final class UiCommand implements Callable<Integer> {
     }
 
     /** Loads the machine and program into a session, printing diagnostics; null on bad input. */
-    static Session open(Path machineFile, Path programFile, String initText, String decodeName, PrintWriter err) {
+    static Session open(Path machineFile, Path programFile, Path stimulusFile, String initText, String decodeName,
+                        PrintWriter err) {
         InitMode mode;
         try {
             mode = InitMode.parse(initText);
@@ -114,7 +116,16 @@ public final class UiCommand implements Callable<Integer> {
             err.flush();
             return null;
         }
-        return new Session(m, a, decodeName, mode, InputSchedule.none());
+        Stimulus stimulus = null;
+        if (stimulusFile != null) {
+            stimulus = new StimulusReader(m, loader.sources(), d).read(stimulusFile);
+            if (stimulus == null || d.hasErrors()) {
+                new DiagnosticPrinter(loader.sources()).print(d, err);
+                err.flush();
+                return null;
+            }
+        }
+        return new Session(m, a, decodeName, mode, stimulus);
     }
 
     /** Runs the screen until quit; the terminal is restored however the loop ends. */

@@ -10,6 +10,7 @@ import org.thermion.power.HeaterAnalysis;
 import org.thermion.power.TubeCount;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
+import org.thermion.sim.Stimulus;
 
 import java.util.ArrayDeque;
 import java.util.ArrayList;
@@ -32,7 +33,8 @@ public final class Session {
     private final Assembly assembly;
     private final Simulator sim;
     private final InitMode init;
-    private final InputSchedule schedule;
+    private final Stimulus stimulus;
+    private Stimulus.Cursor stimulusCursor;
     private final List<DecodeLine> decode;
     private final List<ModuleLoad> modules;
     private final HeaterAnalysis heaters;
@@ -41,18 +43,23 @@ public final class Session {
     private final boolean[] inputs;
     private final Level[] lastOutputs;
     private final int[] watched;
+    /** Per watched net: known at some time since reset. A net never known is unset, not lost. */
+    private final boolean[] everKnown;
     private final Deque<OutputChange> changes = new ArrayDeque<>();
     private CurrentMeter meter;
-    private int scheduleNext;
     private long outputChangeCount;
     private boolean running;
     private Stop stop;
 
-    public Session(Machine machine, Assembly assembly, String decodeName, InitMode init, InputSchedule schedule) {
+    /**
+     * A session on lane 0 of a new simulator. {@code stimulus} (null for none) sets inputs
+     * as cycles come; {@code decodeName} names the decode nets (see {@link DecodeLine}).
+     */
+    public Session(Machine machine, Assembly assembly, String decodeName, InitMode init, Stimulus stimulus) {
         this.machine = machine;
         this.assembly = assembly;
         this.init = init;
-        this.schedule = schedule;
+        this.stimulus = stimulus;
         this.sim = new Simulator(machine);
         this.decode = DecodeLine.find(machine, decodeName);
         this.heaters = new HeaterAnalysis(machine);
@@ -71,13 +78,15 @@ public final class Session {
         this.inputs = new boolean[machine.inputs().size()];
         this.lastOutputs = new Level[machine.outputs().size()];
         this.watched = watchedNets(machine, decode);
+        this.everKnown = new boolean[watched.length];
         sim.loadRom(assembly.words());
         reset();
     }
 
-    /** Nets whose turning unknown stops a run: outputs, the jump request and the decode lines. */
+    /** Nets whose turning unknown stops a run: state bits, outputs, the jump request and the decode lines. */
     private static int[] watchedNets(Machine m, List<DecodeLine> decode) {
         List<Integer> nets = new ArrayList<>();
+        m.isa().state().forEach(b -> nets.add(b.net()));
         for (Port p : m.outputs()) {
             nets.add(p.net());
         }
@@ -87,7 +96,7 @@ public final class Session {
         for (DecodeLine d : decode) {
             nets.add(d.net());
         }
-        return nets.stream().mapToInt(Integer::intValue).toArray();
+        return nets.stream().mapToInt(Integer::intValue).distinct().toArray();
     }
 
     // ---- commands -------------------------------------------------------------------
@@ -101,7 +110,7 @@ public final class Session {
         } else {
             meter.reset();
         }
-        scheduleNext = 0;
+        stimulusCursor = stimulus == null ? null : stimulus.cursor();
         changes.clear();
         outputChangeCount = 0;
         applySchedule();
@@ -111,6 +120,8 @@ public final class Session {
         for (int i = 0; i < lastOutputs.length; i++) {
             lastOutputs[i] = level(machine.outputs().get(i).net());
         }
+        Arrays.fill(everKnown, false);
+        lostKnowledge();
         stop = new Stop(Stop.Reason.RESET, "reset");
     }
 
@@ -120,6 +131,7 @@ public final class Session {
         phase();
         sim.settle();
         stop = new Stop(Stop.Reason.STEPPED, "stepped one phase");
+        unknownStop();
     }
 
     /** Runs phases until the current cycle is complete (a whole cycle from a cycle boundary). */
@@ -128,6 +140,7 @@ public final class Session {
         runOneCycle();
         sim.settle();
         stop = new Stop(Stop.Reason.STEPPED, "stepped one cycle");
+        unknownStop();
     }
 
     /** Starts or pauses a run; {@link #run(long)} does the work between frames. */
@@ -153,8 +166,7 @@ public final class Session {
         if (!running) {
             return 0;
         }
-        boolean watchUnknown = init instanceof InitMode.Unknown;
-        boolean[] unknownBefore = watchUnknown ? unknownWatched() : null;
+        boolean threeValued = sim.threeValued();
         long done = 0;
         while (done < maxCycles) {
             runOneCycle();
@@ -165,12 +177,10 @@ public final class Session {
                 stop = new Stop(Stop.Reason.BREAKPOINT, "breakpoint at " + Hex.address(pc, machine));
                 break;
             }
-            if (watchUnknown) {
-                int turned = newlyUnknown(unknownBefore);
-                if (turned >= 0) {
+            if (threeValued) {
+                sim.settle();
+                if (unknownStop()) {
                     running = false;
-                    stop = new Stop(Stop.Reason.UNKNOWN,
-                            "unknown value on " + machine.netlist().netName(turned));
                     break;
                 }
             }
@@ -178,6 +188,41 @@ public final class Session {
         // Lamps show the logic settled on what the latches now hold.
         sim.settle();
         return done;
+    }
+
+    /** After a step: if the PC or a watched net that was known went unknown, says so in the stop. */
+    private boolean unknownStop() {
+        if (!sim.threeValued()) {
+            return false;
+        }
+        if ((sim.pcUnknown() >>> LANE & 1L) != 0) {
+            stop = new Stop(Stop.Reason.UNKNOWN, "the PC is unknown: a jump was decided by an unknown value");
+            return true;
+        }
+        int lost = lostKnowledge();
+        if (lost >= 0) {
+            stop = new Stop(Stop.Reason.UNKNOWN, "unknown value on " + machine.netlist().netName(lost));
+            return true;
+        }
+        return false;
+    }
+
+    /** Updates which watched nets were known since reset; returns the first that had been known and now is not, or -1. */
+    private int lostKnowledge() {
+        int lost = -1;
+        for (int i = 0; i < watched.length; i++) {
+            boolean unknown = (sim.unknown(watched[i]) >>> LANE & 1L) != 0;
+            if (!unknown) {
+                everKnown[i] = true;
+            } else if (everKnown[i]) {
+                // Reported once; it counts again only after it has been known again.
+                everKnown[i] = false;
+                if (lost < 0) {
+                    lost = watched[i];
+                }
+            }
+        }
+        return lost;
     }
 
     /** Flips a switch and lets the logic settle so lamps and decode lines follow at once. */
@@ -343,21 +388,9 @@ public final class Session {
         meter.sample(sim::value, LANE, cycle, phase);
     }
 
-    /** Applies stimulus rows due before the current cycle; true if any applied. */
+    /** Applies stimulus rows due by the current cycle; true if an input changed. */
     private boolean applySchedule() {
-        boolean any = false;
-        List<InputSchedule.Row> rows = schedule.rows();
-        while (scheduleNext < rows.size() && rows.get(scheduleNext).cycle() <= sim.cycle()) {
-            Boolean[] v = rows.get(scheduleNext).values();
-            for (int i = 0; i < v.length && i < inputs.length; i++) {
-                if (v[i] != null) {
-                    inputs[i] = v[i];
-                }
-            }
-            scheduleNext++;
-            any = true;
-        }
-        return any;
+        return stimulusCursor != null && stimulusCursor.advance(sim.cycle(), inputs);
     }
 
     private void pushInputs() {
@@ -380,22 +413,5 @@ public final class Session {
                 changes.addLast(new OutputChange(cycle, ran, machine.outputs().get(i).name(), now));
             }
         }
-    }
-
-    private boolean[] unknownWatched() {
-        boolean[] u = new boolean[watched.length];
-        for (int i = 0; i < watched.length; i++) {
-            u[i] = (sim.unknown(watched[i]) >>> LANE & 1L) != 0;
-        }
-        return u;
-    }
-
-    private int newlyUnknown(boolean[] before) {
-        for (int i = 0; i < watched.length; i++) {
-            if (!before[i] && (sim.unknown(watched[i]) >>> LANE & 1L) != 0) {
-                return watched[i];
-            }
-        }
-        return -1;
     }
 }
