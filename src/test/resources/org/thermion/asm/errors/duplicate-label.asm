@@ -1,0 +1,4 @@
+; the same label twice
+loop:   LD   low_sw
+loop:   ST   pump
+        JMP  loop

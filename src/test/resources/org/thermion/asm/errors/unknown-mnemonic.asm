@@ -1,0 +1,4 @@
+; a misspelt mnemonic
+loop:   LDX  low_sw
+        STOR pump
+        JMP  loop
