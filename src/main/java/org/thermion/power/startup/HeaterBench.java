@@ -1,0 +1,89 @@
+package org.thermion.power.startup;
+
+import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
+import org.hipparchus.ode.ODEState;
+import org.hipparchus.ode.ODEStateAndDerivative;
+import org.hipparchus.ode.OrdinaryDifferentialEquation;
+import org.hipparchus.ode.events.Action;
+import org.hipparchus.ode.nonstiff.DormandPrince54Integrator;
+
+/**
+ * One heater on a bench supply: its equilibrium and its warm-up, integrated with an adaptive
+ * Dormand-Prince integrator and located with event detection. Used to calibrate heat capacity
+ * and by tests as an independent check of the thermal model.
+ */
+public final class HeaterBench {
+    private static final BracketingNthOrderBrentSolver BRENT = new BracketingNthOrderBrentSolver(1e-12, 1e-9, 1e-12, 5);
+    private static final double HOTTEST = 4000;
+
+    private HeaterBench() {
+    }
+
+    /** Result of a run: end time, temperature, electrical energy in and energy radiated (joules). */
+    public record Run(double seconds, double kelvin, double joulesIn, double joulesRadiated, boolean reached) {
+    }
+
+    /** Equilibrium temperature under {@code drive} (electrical power in = radiated). */
+    public static double equilibrium(HeaterModel h, HeaterDrive drive) {
+        return BRENT.solve(10_000, t -> {
+            double i = drive.amps(h.resistance(t));
+            return i * i * h.resistance(t) - h.radiated(t);
+        }, h.ambientKelvin(), HOTTEST);
+    }
+
+    /** Heater temperature at which the warm-up test's heater voltage reaches 80 % of rated. */
+    public static double eightyPercentKelvin(HeaterModel h) {
+        HeaterDrive d = HeaterDrive.warmupTest(h.rating());
+        double target = 0.8 * h.rating().volts();
+        return BRENT.solve(10_000, t -> d.amps(h.resistance(t)) * h.resistance(t) - target, h.ambientKelvin(), HOTTEST);
+    }
+
+    /** The standard warm-up time: seconds until the heater voltage reaches 80 % of rated in the test circuit. */
+    public static double warmupTime(HeaterModel h) {
+        Run r = runUntil(h, HeaterDrive.warmupTest(h.rating()), eightyPercentKelvin(h), 1e4);
+        return r.reached() ? r.seconds() : Double.NaN;
+    }
+
+    /** Seconds until the temperature rise reaches {@code fraction} of its final value under {@code drive}. */
+    public static double timeToFractionOfRise(HeaterModel h, HeaterDrive drive, double fraction) {
+        double tf = equilibrium(h, drive);
+        double target = h.ambientKelvin() + fraction * (tf - h.ambientKelvin());
+        Run r = runUntil(h, drive, target, 1e4);
+        return r.reached() ? r.seconds() : Double.NaN;
+    }
+
+    /** Runs from ambient for {@code seconds}. */
+    public static Run run(HeaterModel h, HeaterDrive drive, double seconds) {
+        return runUntil(h, drive, Double.POSITIVE_INFINITY, seconds);
+    }
+
+    /** Runs from ambient until the temperature reaches {@code targetKelvin} or {@code maxSeconds} pass. */
+    public static Run runUntil(HeaterModel h, HeaterDrive drive, double targetKelvin, double maxSeconds) {
+        OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
+            @Override
+            public int getDimension() {
+                return 3;
+            }
+
+            @Override
+            public double[] computeDerivatives(double t, double[] y) {
+                double r = h.resistance(y[0]);
+                double i = drive.amps(r);
+                double pin = i * i * r;
+                double prad = h.radiated(y[0]);
+                return new double[] {(pin - prad) / h.heatCapacity(), pin, prad};
+            }
+        };
+        DormandPrince54Integrator dp = new DormandPrince54Integrator(1e-9, Math.max(1e-3, maxSeconds / 50),
+                new double[] {1e-6, 1e-9, 1e-9}, new double[] {1e-9, 1e-9, 1e-9});
+        dp.setMaxEvaluations(2_000_000);
+        Threshold hit = null;
+        if (Double.isFinite(targetKelvin)) {
+            hit = new Threshold(s -> s.getPrimaryState()[0] - targetKelvin, Action.STOP, true);
+            dp.addEventDetector(hit);
+        }
+        ODEStateAndDerivative end = dp.integrate(ode, new ODEState(0, new double[] {h.ambientKelvin(), 0, 0}), maxSeconds);
+        double[] y = end.getPrimaryState();
+        return new Run(end.getTime(), y[0], y[1], y[2], hit != null && !Double.isNaN(hit.firstTime()));
+    }
+}

@@ -1,0 +1,71 @@
+package org.thermion.power.startup;
+
+import org.thermion.model.Relay;
+
+/**
+ * A thyratron driving a relay coil from a DC rail through a plate resistor. Once fired, a gas
+ * thyratron holds a nearly constant arc drop and its grid loses control, so the coil current
+ * is simply {@code (V_rail - V_arc) / (R_source + R_plate + R_coil)} and flows until the anode
+ * supply is broken: on a DC supply the average and peak tube currents are both that current.
+ *
+ * @param tube             thyratron type
+ * @param railName         the rail feeding the plate circuit
+ * @param railVolts        its voltage (magnitude)
+ * @param sourceOhms       its source resistance
+ * @param arcDropVolts     tube drop while conducting
+ * @param plateOhms        plate resistor
+ * @param relay            the relay's coil data
+ * @param coilVolts        voltage across the coil while conducting
+ * @param coilAmps         coil (and tube) current
+ * @param avgRatingAmps    the tube's average cathode current rating (NaN if unknown)
+ * @param peakRatingAmps   the tube's peak cathode current rating (NaN if unknown)
+ * @param fireTime         when the tube fired in the transient (NaN: not simulated or never)
+ * @param heatingSeconds   cathode heating time the tube asks before anode current (NaN if none declared)
+ */
+public record RelayDriverCheck(String tube, String railName, double railVolts, double sourceOhms, double arcDropVolts,
+                               double plateOhms, Relay relay, double coilVolts, double coilAmps, double avgRatingAmps,
+                               double peakRatingAmps, double fireTime, double heatingSeconds) {
+
+    /** Works out the coil circuit. */
+    public static RelayDriverCheck of(String tube, String railName, double railVolts, double sourceOhms,
+                                      double arcDropVolts, double plateOhms, Relay relay, double avgRatingAmps,
+                                      double peakRatingAmps, double fireTime, double heatingSeconds) {
+        double drive = Math.abs(railVolts) - arcDropVolts;
+        double amps = drive > 0 ? drive / (sourceOhms + plateOhms + relay.coilOhms()) : 0;
+        return new RelayDriverCheck(tube, railName, Math.abs(railVolts), sourceOhms, arcDropVolts, plateOhms, relay,
+                amps * relay.coilOhms(), amps, avgRatingAmps, peakRatingAmps, fireTime, heatingSeconds);
+    }
+
+    /** The coil reaches its pick-up voltage (with no pick-up declared: 75 % of rated, common practice). */
+    public boolean picksUp() {
+        double p = Double.isNaN(relay.pickupVolts()) ? 0.75 * relay.ratedVolts() : relay.pickupVolts();
+        return coilVolts >= p;
+    }
+
+    /** Coil voltage over rated. */
+    public double ratedRatio() {
+        return coilVolts / relay.ratedVolts();
+    }
+
+    /** Coil within +10 % of its rated voltage (common practice for continuous duty). */
+    public boolean coilNotOverdriven() {
+        return ratedRatio() <= 1.10;
+    }
+
+    public boolean averageOk() {
+        return Double.isNaN(avgRatingAmps) || coilAmps <= avgRatingAmps;
+    }
+
+    public boolean peakOk() {
+        return Double.isNaN(peakRatingAmps) || coilAmps <= peakRatingAmps;
+    }
+
+    /** The tube fired only after its required cathode heating time (true when either is unknown). */
+    public boolean heatedLongEnough() {
+        return Double.isNaN(fireTime) || Double.isNaN(heatingSeconds) || fireTime >= heatingSeconds;
+    }
+
+    public boolean ok() {
+        return picksUp() && coilNotOverdriven() && averageOk() && peakOk() && heatedLongEnough();
+    }
+}

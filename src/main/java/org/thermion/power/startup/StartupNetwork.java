@@ -1,0 +1,319 @@
+package org.thermion.power.startup;
+
+import org.thermion.model.BypassTrigger;
+import org.thermion.model.Envelope;
+import org.thermion.model.Gate;
+import org.thermion.model.HeaterRating;
+import org.thermion.model.HeaterString;
+import org.thermion.model.Latch;
+import org.thermion.model.Machine;
+import org.thermion.model.Rail;
+import org.thermion.model.RailDraw;
+import org.thermion.model.SoftStart;
+import org.thermion.model.StageType;
+import org.thermion.model.TubeType;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The machine's supplies reduced to what the power-up transient needs: calibrated heater models,
+ * heater strings grouped by identity (identical strings on one rail share one temperature
+ * trajectory, so a machine of a hundred strings of one kind integrates a handful of states),
+ * the plate and bias loads of every stage instance as conductances tied to the heater that warms
+ * their cathode, and the soft-start networks. Immutable once built; {@link #solve} may be called
+ * many times (a resistor sweep does).
+ *
+ * <p>Plate and bias loads are modelled as conductances {@code I_steady / V_rail}: stage currents
+ * are set mostly by load resistors, so they fall with the rail voltage. Each is scaled by the
+ * {@link Emission} factor of its envelope's heater.
+ */
+public final class StartupNetwork {
+    final Machine machine;
+    final ThermalAssumptions assumptions;
+    final DrawMode drawMode;
+    final Emission emission;
+    final List<HeaterModel> models;
+    final List<String> notes;
+
+    // heater states (one per position of each distinct string)
+    final int states;
+    final int[] stateModel;
+    final int[] stateGroup;
+    final int[] statePosition;
+    final double[] stateShunt;
+
+    // distinct strings
+    final int[] groupRail;
+    final int[] groupCount;
+    final double[] groupDrop;
+    final int[][] groupStates;
+    final String[] groupLabel;
+    final boolean[] groupMixed;
+
+    // per rail
+    final int[][] railGroups;
+    final int[][] plateState;
+    final double[][] plateSiemens;
+    final double[] alwaysSiemens;
+
+    // soft starts
+    final List<Soft> softs;
+
+    /** A soft-start network as the solver sees it. */
+    record Soft(String name, int rail, double declaredOhms, double ratedWatts, double delay, int thyState,
+                double warmFraction, int fromRail, double branchSiemens, double branchVolts, boolean picksUp,
+                double operate, RelayDriverCheck check) {
+        boolean thyratron() {
+            return thyState >= 0;
+        }
+    }
+
+    private StartupNetwork(Machine m, ThermalAssumptions a, DrawMode mode) {
+        this.machine = m;
+        this.assumptions = a;
+        this.drawMode = mode;
+        this.emission = new Emission(a);
+        List<String> noteList = new ArrayList<>();
+
+        // Heater models per tube type and rating.
+        Map<String, Integer> modelIndex = new LinkedHashMap<>();
+        List<HeaterModel> ml = new ArrayList<>();
+        // Distinct strings.
+        Map<String, Integer> groupIndex = new LinkedHashMap<>();
+        List<HeaterString> groupFirst = new ArrayList<>();
+        List<Integer> counts = new ArrayList<>();
+        int[] envString = new int[m.envelopes().size()];
+        int[] envPos = new int[m.envelopes().size()];
+        Arrays.fill(envString, -1);
+        for (HeaterString hs : m.heaterStrings()) {
+            StringBuilder key = new StringBuilder().append(hs.rail()).append('|').append(hs.dropOhms()).append('|')
+                    .append(hs.shunt());
+            for (int i = 0; i < hs.envelopes().size(); i++) {
+                Envelope e = m.envelopes().get(hs.envelopes().get(i));
+                HeaterRating r = hs.ratings().get(i);
+                key.append('|').append(e.tube()).append('@').append(r.volts()).append('/').append(r.amps());
+                String mk = e.tube() + "@" + r.volts() + "/" + r.amps();
+                if (!modelIndex.containsKey(mk)) {
+                    TubeType tt = m.tubes().get(e.tube());
+                    modelIndex.put(mk, ml.size());
+                    ml.add(HeaterCalibration.calibrate(tt, r, a));
+                    if (!tt.hasWarmup()) {
+                        noteList.add(tt.name() + ": no warm-up time declared; " + fmt(a.defaultWarmup())
+                                + " s assumed (the controlled-warm-up figure)");
+                    }
+                }
+            }
+            Integer g = groupIndex.get(key.toString());
+            if (g == null) {
+                g = groupFirst.size();
+                groupIndex.put(key.toString(), g);
+                groupFirst.add(hs);
+                counts.add(0);
+            }
+            counts.set(g, counts.get(g) + 1);
+            for (int i = 0; i < hs.envelopes().size(); i++) {
+                envString[hs.envelopes().get(i)] = g;
+                envPos[hs.envelopes().get(i)] = i;
+            }
+        }
+        this.models = List.copyOf(ml);
+        int ng = groupFirst.size();
+        groupRail = new int[ng];
+        groupCount = new int[ng];
+        groupDrop = new double[ng];
+        groupStates = new int[ng][];
+        groupLabel = new String[ng];
+        groupMixed = new boolean[ng];
+        List<int[]> st = new ArrayList<>();
+        List<Double> shunts = new ArrayList<>();
+        for (int g = 0; g < ng; g++) {
+            HeaterString hs = groupFirst.get(g);
+            groupRail[g] = hs.rail();
+            groupCount[g] = counts.get(g);
+            groupDrop[g] = hs.dropOhms();
+            double stringAmps = 0;
+            for (HeaterRating r : hs.ratings()) {
+                stringAmps = Math.max(stringAmps, r.amps());
+            }
+            groupStates[g] = new int[hs.envelopes().size()];
+            StringBuilder label = new StringBuilder();
+            java.util.Set<Integer> tubeTypes = new java.util.HashSet<>();
+            for (int i = 0; i < hs.envelopes().size(); i++) {
+                Envelope e = m.envelopes().get(hs.envelopes().get(i));
+                HeaterRating r = hs.ratings().get(i);
+                tubeTypes.add(e.tube());
+                int model = modelIndex.get(e.tube() + "@" + r.volts() + "/" + r.amps());
+                groupStates[g][i] = st.size();
+                st.add(new int[] {model, g, i});
+                shunts.add(hs.shunt() && r.amps() < stringAmps - 1e-12 ? r.volts() / (stringAmps - r.amps())
+                        : Double.POSITIVE_INFINITY);
+                label.append(i == 0 ? "" : " + ").append(m.tubes().get(e.tube()).name());
+            }
+            if (hs.dropOhms() > 0) {
+                label.append(" + ").append(fmt(hs.dropOhms())).append(" ohm");
+            }
+            groupLabel[g] = label.toString();
+            groupMixed[g] = tubeTypes.size() > 1;
+        }
+        states = st.size();
+        stateModel = new int[states];
+        stateGroup = new int[states];
+        statePosition = new int[states];
+        stateShunt = new double[states];
+        for (int s = 0; s < states; s++) {
+            stateModel[s] = st.get(s)[0];
+            stateGroup[s] = st.get(s)[1];
+            statePosition[s] = st.get(s)[2];
+            stateShunt[s] = shunts.get(s);
+        }
+        int nr = m.rails().size();
+        List<List<Integer>> rg = new ArrayList<>();
+        for (int r = 0; r < nr; r++) {
+            rg.add(new ArrayList<>());
+        }
+        for (int g = 0; g < ng; g++) {
+            rg.get(groupRail[g]).add(g);
+        }
+        railGroups = new int[nr][];
+        for (int r = 0; r < nr; r++) {
+            railGroups[r] = rg.get(r).stream().mapToInt(Integer::intValue).toArray();
+        }
+
+        // Plate and bias loads, summed per rail and per heater state.
+        int[] envState = new int[m.envelopes().size()];
+        for (int e = 0; e < envState.length; e++) {
+            envState[e] = envString[e] < 0 ? -1 : groupStates[envString[e]][envPos[e]];
+        }
+        List<Map<Integer, Double>> plate = new ArrayList<>();
+        for (int r = 0; r < nr; r++) {
+            plate.add(new HashMap<>());
+        }
+        for (Gate g : m.netlist().gates()) {
+            if (g.stage() >= 0) {
+                addDraw(m, m.stages().get(g.stage()), envState, m.gateEnvelope()[g.id()], plate);
+            }
+        }
+        for (Latch l : m.netlist().latches()) {
+            if (l.stage() >= 0) {
+                addDraw(m, m.stages().get(l.stage()), envState, m.latchEnvelope()[l.id()], plate);
+            }
+        }
+        plateState = new int[nr][];
+        plateSiemens = new double[nr][];
+        alwaysSiemens = new double[nr];
+        for (int r = 0; r < nr; r++) {
+            Map<Integer, Double> p = plate.get(r);
+            Double always = p.remove(-1);
+            alwaysSiemens[r] = always == null ? 0 : always;
+            int[] keys = p.keySet().stream().mapToInt(Integer::intValue).sorted().toArray();
+            plateState[r] = keys;
+            plateSiemens[r] = new double[keys.length];
+            for (int i = 0; i < keys.length; i++) {
+                plateSiemens[r][i] = p.get(keys[i]);
+            }
+        }
+
+        // Soft starts.
+        List<Soft> sl = new ArrayList<>();
+        for (SoftStart ss : m.softStarts()) {
+            double delay = Double.NaN;
+            int thy = -1;
+            double warm = Double.NaN, bs = 0, bv = 0;
+            int from = -1;
+            boolean picks = true;
+            RelayDriverCheck check = null;
+            if (ss.trigger() instanceof BypassTrigger.AfterDelay d) {
+                delay = d.seconds();
+            } else if (ss.trigger() instanceof BypassTrigger.ThyratronWarm tw) {
+                thy = envState[tw.envelope()];
+                if (thy < 0) {
+                    throw new IllegalArgumentException("soft start " + ss.name() + ": its thyratron has no heater string");
+                }
+                warm = tw.warmFraction();
+                from = tw.fromRail();
+                TubeType tube = m.tubes().get(tw.tube());
+                double arc = tube.arcDropVolts();
+                if (Double.isNaN(arc)) {
+                    arc = 10;
+                    noteList.add(tube.name() + ": no arc drop declared; 10 V assumed (8-12 V is typical of small gas thyratrons)");
+                }
+                Rail fr = m.rails().get(from);
+                check = RelayDriverCheck.of(tube.name(), fr.name(), fr.volts(), fr.sourceOhms(), arc, tw.plateOhms(),
+                        ss.relay(), tube.avgCathodeAmps(), tube.peakCathodeAmps(), Double.NaN, tube.warmupSeconds());
+                bs = 1 / (tw.plateOhms() + ss.relay().coilOhms());
+                bv = arc;
+                picks = check.picksUp();
+                if (!picks) {
+                    noteList.add("soft start " + ss.name() + ": the relay coil gets " + fmt(check.coilVolts())
+                            + " V, below its pick-up; the bypass never closes");
+                }
+            }
+            sl.add(new Soft(ss.name(), ss.rail(), ss.resistorOhms(), ss.ratedWatts(), delay, thy, warm, from, bs, bv,
+                    picks, ss.relay().operateSeconds(), check));
+        }
+        softs = List.copyOf(sl);
+        notes = List.copyOf(noteList);
+    }
+
+    /** Builds the network of {@code m} under the given assumptions. */
+    public static StartupNetwork of(Machine m, ThermalAssumptions a, DrawMode mode) {
+        return new StartupNetwork(m, a, mode);
+    }
+
+    /** Solves the transient. */
+    public PowerUpResult solve(PowerUpOptions o) {
+        for (String name : o.resistorOhms().keySet()) {
+            if (softs.stream().noneMatch(s -> s.name().equals(name))) {
+                throw new IllegalArgumentException("no soft start named '" + name + "'");
+            }
+        }
+        return new TransientRun(this, o).run();
+    }
+
+    /** Names of the soft-start networks, in machine order. */
+    public List<String> softStartNames() {
+        return softs.stream().map(Soft::name).toList();
+    }
+
+    /** Number of distinct heater trajectories integrated. */
+    public int heaterStates() {
+        return states;
+    }
+
+    /** Steady current a stage instance draws from a rail under the draw mode, amperes. */
+    double drawAmps(StageType st, int rail) {
+        double low = sum(st.drawLow(), rail), high = sum(st.drawHigh(), rail), always = sum(st.drawAlways(), rail);
+        return always + (drawMode == DrawMode.HIGHEST ? Math.max(low, high) : 0.5 * (low + high));
+    }
+
+    private void addDraw(Machine m, StageType st, int[] envState, int env, List<Map<Integer, Double>> plate) {
+        for (int r = 0; r < m.rails().size(); r++) {
+            double v = Math.abs(m.rails().get(r).volts());
+            double amps = drawAmps(st, r);
+            if (amps > 0 && v > 0) {
+                int s = env < 0 ? -1 : envState[env];
+                plate.get(r).merge(s, amps / v, Double::sum);
+            }
+        }
+    }
+
+    private static double sum(List<RailDraw> draws, int rail) {
+        double a = 0;
+        for (RailDraw d : draws) {
+            if (d.rail() == rail) {
+                a += d.amps();
+            }
+        }
+        return a;
+    }
+
+    static String fmt(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e9 ? String.valueOf((long) v)
+                : String.format(java.util.Locale.ROOT, "%.3g", v);
+    }
+}
