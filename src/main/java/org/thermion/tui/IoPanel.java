@@ -46,7 +46,7 @@ final class IoPanel {
         int logCol = outCol + outName + 5;
         int logWidth = in.right() - logCol;
         if (logWidth >= 18) {
-            cc.text(logCol, in.row(), "output changes", Palette.DIM);
+            cc.text(logCol, in.row(), Canvas.fit("output changes at cycle.phase", logWidth), Palette.DIM);
             List<OutputChange> changes = s.outputChanges();
             int rows = in.height() - 1;
             for (int i = 0; i < rows && i < changes.size(); i++) {

@@ -24,10 +24,12 @@ final class ListingPanel {
         int size = s.assembly().listing().size();
         int pcLine = s.listingIndex(s.pc());
         int target = v.followPc && pcLine >= 0 ? pcLine : v.cursor;
-        if (target < v.top) {
-            v.top = target;
-        } else if (target >= v.top + rows) {
-            v.top = target - rows + 1;
+        // A line brought into view keeps a few lines of context around it.
+        int margin = Math.min(3, (rows - 1) / 2);
+        if (target < v.top + margin) {
+            v.top = target - margin;
+        } else if (target >= v.top + rows - margin) {
+            v.top = target - rows + 1 + margin;
         }
         v.top = Math.max(0, Math.min(v.top, Math.max(0, size - rows)));
     }

@@ -20,8 +20,8 @@ final class PowerPanel {
     }
 
     static int height(Session s) {
-        // header, modules, total; blank; header, rails; border
-        return 1 + s.modules().size() + 1 + 1 + 1 + s.machine().rails().size() + 2;
+        // header, modules, total; blank; header, rails; when the peaks came; border
+        return 1 + s.modules().size() + 1 + 1 + 1 + s.machine().rails().size() + 1 + 2;
     }
 
     /** Rails not feeding heaters, the highest positive voltage (B+) first. */
@@ -106,6 +106,14 @@ final class PowerPanel {
                     + Canvas.padLeft(Double.isNaN(share) ? "-" : String.format("%.0f %%", share * 100), 10);
             cc.text(col, row++, line, share > 1 ? Palette.STOPPED : Palette.TEXT);
         }
+        StringBuilder when = new StringBuilder("peaks at cycle.phase:");
+        for (int rail : rails) {
+            if (meter.samples() > 0) {
+                when.append("  ").append(m.rails().get(rail).name()).append(' ')
+                        .append(meter.peakCycle(rail)).append('.').append(meter.peakPhase(rail));
+            }
+        }
+        cc.text(col, row, Canvas.fit(when.toString(), in.width() - 2), Palette.DIM);
     }
 
     /** Amperes with the unit a reader expects for the size: mA below one ampere. */

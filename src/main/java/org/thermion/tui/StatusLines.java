@@ -11,16 +11,21 @@ final class StatusLines {
 
     static void title(Canvas c, int cols, Session s, String program, List<Panel> hidden) {
         c.text(0, 0, " ".repeat(cols), Palette.TEXT, Palette.OVERLAY_BACKGROUND);
-        int x = c.text(1, 0, "THERMION", Palette.HEADING, Palette.OVERLAY_BACKGROUND);
-        x = c.text(x, 0, "  " + s.machine().name() + "  \u00B7  " + program + "  \u00B7  power-up state " + initName(s),
-                Palette.TEXT, Palette.OVERLAY_BACKGROUND);
+        String note = "";
         if (!hidden.isEmpty()) {
-            StringBuilder b = new StringBuilder("hidden for want of room: ");
+            StringBuilder b = new StringBuilder("hidden, too little room: ");
             for (int i = 0; i < hidden.size(); i++) {
                 b.append(i == 0 ? "" : ", ").append(hidden.get(i).title);
             }
-            String note = b.append(' ').toString();
-            int at = Math.max(x + 2, cols - note.length());
+            note = b.append(' ').toString();
+        }
+        // The note about hidden panels matters more than the names, so they give way to it.
+        int room = Math.max(0, cols - note.length() - 1);
+        int x = c.text(1, 0, Canvas.fit("THERMION", room - 1), Palette.HEADING, Palette.OVERLAY_BACKGROUND);
+        String names = "  " + s.machine().name() + " \u00B7 " + program + " \u00B7 latches start " + initName(s);
+        c.text(x, 0, Canvas.fit(names, Math.max(0, room - x)), Palette.TEXT, Palette.OVERLAY_BACKGROUND);
+        if (!note.isEmpty()) {
+            int at = Math.max(0, cols - note.length());
             c.text(at, 0, Canvas.fit(note, cols - at), Palette.STOPPED, Palette.OVERLAY_BACKGROUND);
         }
     }
@@ -38,18 +43,27 @@ final class StatusLines {
         c.text(0, row, " ".repeat(cols), Palette.TEXT, Palette.OVERLAY_BACKGROUND);
         int phases = s.machine().clock().phases();
         String where = String.format(" cycle %,d  phase %d of %d next  ", s.cycle(), s.nextPhase(), phases);
-        int x = c.text(0, row, where, Palette.TEXT, Palette.OVERLAY_BACKGROUND);
-        x = c.text(x, row, (s.midCycle() ? "in flight " : "next up ") + Hex.address(s.pc(), s.machine()) + " ",
-                Palette.LIT, Palette.OVERLAY_BACKGROUND);
-        x = c.text(x, row, Canvas.fit(instructionText(s), 24) + "   ", Palette.LIT, Palette.OVERLAY_BACKGROUND);
+        String at = Hex.address(s.pc(), s.machine()) + " " + instructionText(s);
+        String inst = (s.midCycle() ? "in flight " : "next up ") + at + "   ";
+        String state;
         if (s.running()) {
             String rate = v.cyclesPerSecond > 0 ? String.format("  %,.0f cycles/s", v.cyclesPerSecond) : "";
-            x = c.text(x, row, "\u25B6 running" + rate, Palette.RUNNING, Palette.OVERLAY_BACKGROUND);
+            state = "\u25B6 running" + rate;
         } else {
-            x = c.text(x, row, "\u25A0 stopped: " + s.stop().text(), Palette.STOPPED, Palette.OVERLAY_BACKGROUND);
+            state = "\u25A0 stopped: " + s.stop().text();
         }
-        if (!v.message.isEmpty()) {
-            c.text(x + 3, row, Canvas.fit(v.message, Math.max(0, cols - x - 3)), Palette.KEY, Palette.OVERLAY_BACKGROUND);
+        // Narrow windows lose the words around the instruction first, then the instruction.
+        if (where.length() + inst.length() + state.length() > cols) {
+            inst = at + "   ";
+        }
+        if (where.length() + inst.length() + state.length() > cols) {
+            inst = "";
+        }
+        int x = c.text(0, row, where, Palette.TEXT, Palette.OVERLAY_BACKGROUND);
+        x = c.text(x, row, inst, Palette.LIT, Palette.OVERLAY_BACKGROUND);
+        x = c.text(x, row, state, s.running() ? Palette.RUNNING : Palette.STOPPED, Palette.OVERLAY_BACKGROUND);
+        if (!v.message.isEmpty() && x + 3 < cols) {
+            c.text(x + 3, row, Canvas.fit(v.message, cols - x - 3), Palette.KEY, Palette.OVERLAY_BACKGROUND);
         }
     }
 
@@ -67,7 +81,8 @@ final class StatusLines {
             if (colon >= 0) {
                 t = t.substring(colon + 1);
             }
-            return t.trim().replaceAll("\\s+", " ");
+            String text = t.trim().replaceAll("\\s+", " ");
+            return Canvas.fit(text, 24);
         }
         return "(no program word)";
     }

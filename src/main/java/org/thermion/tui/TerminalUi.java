@@ -104,6 +104,10 @@ public final class TerminalUi {
         return view;
     }
 
+    PowerUpView powerUpView() {
+        return powerUp;
+    }
+
     /** Acts on one key. */
     public void handle(KeyStroke stroke) {
         Key key = Keymap.resolve(stroke, session.machine().inputs().size());

@@ -47,7 +47,18 @@ final class UiFixture {
         ui.draw();
     }
 
-    static Machine machine() {
+    /** The demo elaborated once for all tests: a Machine is immutable. */
+    private static Machine demo;
+    private static Assembly pump;
+
+    static synchronized Machine machine() {
+        if (demo == null) {
+            demo = elaborate();
+        }
+        return demo;
+    }
+
+    private static Machine elaborate() {
         SourceSet src = new SourceSet();
         Diagnostics d = new Diagnostics();
         Machine m = new Elaborator(src, d).elaborate(MACHINE);
@@ -68,9 +79,12 @@ final class UiFixture {
         return a;
     }
 
-    static Session session(InitMode init) {
+    static synchronized Session session(InitMode init) {
         Machine m = machine();
-        return new Session(m, program(m), DecodeLine.DEFAULT_NAME, init, null);
+        if (pump == null) {
+            pump = program(m);
+        }
+        return new Session(m, pump, DecodeLine.DEFAULT_NAME, init, null);
     }
 
     /** Presses each character of {@code keys} in turn, then draws. */
