@@ -16,7 +16,7 @@ decl        : INCLUDE STRING                                     # includeDecl
 // ---- generic properties: `key value value ... { nested }`
 prop        : ident value* propBlock? ;
 propBlock   : '{' sep? (prop (sep prop)*)? sep? '}' ;
-value       : NUMBER | ident | STRING | '-' | '..' | ':' | '=' | ',' | '.' | '*' | '+' | '[' | ']' ;
+value       : NUMBER | ident | keyword | STRING | '-' | '..' | ':' | '=' | ',' | '.' | '*' | '+' | '[' | ']' ;
 
 // ---- logic modules
 moduleBody  : sep? (mstmt (sep mstmt)*)? sep? ;
@@ -69,6 +69,8 @@ rexpr       : '(' rexpr ')'                             # rParen
             | ident                                     # rRef
             | NUMBER                                    # rNum
             ;
+
+keyword     : MODULE | ISA | INCLUDE | NET | USE | FOR | IF | ELSE ;
 
 // Soft keywords stay usable as names.
 ident       : NAME | ON | PHASE | WHEN | USING | AS | OP | CONST | LATCH | IN | OUT ;

@@ -130,14 +130,16 @@ public final class Elaborator {
         for (Value v : mb.inputs) {
             Signal s = topPort(scope, v, Signal.Kind.IN, "input");
             if (s != null) {
-                inputs.add(new Port(s.name(), s.nets()[0]));
+                addPorts(inputs, s);
             }
         }
         for (Value v : mb.outputs) {
             Signal s = topPort(scope, v, Signal.Kind.OUT, "output");
             if (s != null) {
-                outputs.add(new Port(s.name(), s.nets()[0]));
-                nb.read(s.nets()[0]);
+                addPorts(outputs, s);
+                for (int n : s.nets()) {
+                    nb.read(n);
+                }
             }
         }
         Rom rom = null;
@@ -260,6 +262,17 @@ public final class Elaborator {
                 List.copyOf(parts.rails), List.copyOf(packer.rules), List.copyOf(softStarts), List.copyOf(modules), netlist,
                 rom, pc, List.copyOf(inputs), List.copyOf(outputs), List.copyOf(packer.envelopes),
                 List.copyOf(packer.strings), isa, gateEnvOrdered, latchEnvelope);
+    }
+
+    /** A bus port becomes one machine bit per line: {@code code[0]}, {@code code[1]}, ... */
+    private static void addPorts(List<Port> into, Signal s) {
+        if (!s.bus()) {
+            into.add(new Port(s.name(), s.nets()[0]));
+            return;
+        }
+        for (int i = 0; i < s.width(); i++) {
+            into.add(new Port(s.name() + "[" + i + "]", s.nets()[i]));
+        }
     }
 
     private static int placeStage(Packer packer, Parts parts, int stage, int module, int inputs) {

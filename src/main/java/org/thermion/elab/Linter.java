@@ -66,7 +66,7 @@ final class Linter {
                 for (int n : s.nets()) {
                     boolean driven = nb.driver.get(n) != NetBuilder.NONE;
                     boolean read = nb.reads.get(n) > 0 || ex.driverOutputs.contains(n);
-                    if (driven && !read) {
+                    if (driven && !read && !tiedOff(n)) {
                         unused.add(n);
                     }
                     anyUsed |= driven || read;
@@ -104,6 +104,16 @@ final class Linter {
                 diags.warning(nb.netSpan.get(p.net()), "machine input '" + p.name() + "' is never read", null);
             }
         }
+    }
+
+    /** A net wired straight to a constant: a deliberate tie-off, not forgotten logic. */
+    private boolean tiedOff(int net) {
+        int d = nb.driver.get(net);
+        if (d < 0) {
+            return false;
+        }
+        NetBuilder.GateB g = nb.gates.get(d);
+        return g.stage < 0 && g.fn == org.thermion.model.GateFn.BUF && g.in[0] <= 1;
     }
 
     private boolean readInside(int net, int module) {

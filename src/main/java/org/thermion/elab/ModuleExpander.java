@@ -44,6 +44,8 @@ final class ModuleExpander {
     private final Deque<String> stack = new ArrayDeque<>();
     private final Set<String> reportedOps = new HashSet<>();
     private long iterations;
+    private long loopProduct = 1;
+    private boolean stopped;
 
     ModuleExpander(Declarations decls, Parts parts, Diagnostics diags, int phases) {
         this.decls = decls;
@@ -179,7 +181,7 @@ final class ModuleExpander {
 
     private void body(Frame f, List<ModuleStmt> stmts, boolean topLevel) {
         for (ModuleStmt s : stmts) {
-            if (diags.full()) {
+            if (diags.full() || stopped) {
                 return;
             }
             if (s instanceof ModuleStmt.Assign a) {
@@ -226,8 +228,17 @@ final class ModuleExpander {
             diags.error(fo.var().span(), "loop variable '" + var + "' hides a net of the same name", "choose another name for the loop variable");
             return;
         }
+        long count = Math.abs(to - from) + 1;
+        if (count > NetBuilder.LIMIT / loopProduct) {
+            diags.error(fo.span(), "generator would expand " + String.format("%,d", count * loopProduct)
+                            + " times (limit " + String.format("%,d", NetBuilder.LIMIT) + ")",
+                    "check the loop's range; a machine of this size is not what was meant");
+            stopped = true;
+            return;
+        }
         Long saved = f.consts.get(var);
         boolean fresh = activeLoops.add(var);
+        loopProduct *= count;
         long step = from <= to ? 1 : -1;
         for (long k = from; ; k += step) {
             if (++iterations > ITERATION_LIMIT) {
@@ -235,10 +246,11 @@ final class ModuleExpander {
             }
             f.consts.put(var, k);
             body(f, fo.body(), false);
-            if (k == to || diags.full()) {
+            if (k == to || diags.full() || stopped) {
                 break;
             }
         }
+        loopProduct /= count;
         if (fresh) {
             activeLoops.remove(var);
         }

@@ -40,24 +40,37 @@ final class Packer {
         String key = tube + ":" + module;
         Integer cur = open.get(key);
         if (sections > t.sections()) {
+            // A stage wider than one envelope (a many-input diode gate) spans envelopes densely.
             int first = -1;
             int left = sections;
+            if (cur != null && free.get(cur) > 0) {
+                int take = Math.min(left, free.get(cur));
+                use(cur, take);
+                first = cur;
+                left -= take;
+            }
             while (left > 0) {
-                int e = newEnvelope(tube, module, Math.min(left, t.sections()));
+                int take = Math.min(left, t.sections());
+                int e = newEnvelope(tube, module, take);
+                open.put(key, e);
                 first = first < 0 ? e : first;
-                left -= t.sections();
+                left -= take;
             }
             return first;
         }
         if (cur != null && free.get(cur) >= sections) {
-            Envelope e = envelopes.get(cur);
-            envelopes.set(cur, new Envelope(e.id(), e.designator(), e.tube(), e.module(), e.sectionsUsed() + sections));
-            free.put(cur, free.get(cur) - sections);
+            use(cur, sections);
             return cur;
         }
         int e = newEnvelope(tube, module, sections);
         open.put(key, e);
         return e;
+    }
+
+    private void use(int env, int sections) {
+        Envelope e = envelopes.get(env);
+        envelopes.set(env, new Envelope(e.id(), e.designator(), e.tube(), e.module(), e.sectionsUsed() + sections));
+        free.put(env, free.get(env) - sections);
     }
 
     private int newEnvelope(int tube, int module, int used) {

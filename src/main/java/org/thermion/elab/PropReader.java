@@ -119,7 +119,7 @@ final class PropReader {
         Span at = here();
         double v = quantity(unit, what);
         if (!Double.isNaN(v) && (v < 0 || (!zeroOk && v == 0))) {
-            fail(at, what + " is out of range: " + v, zeroOk ? "use a value of zero or more" : "use a value above zero");
+            fail(at, what + " is out of range: " + Packer.fmt(v) + " " + unit.symbol(), zeroOk ? "use a value of zero or more" : "use a value above zero");
             return Double.NaN;
         }
         return v;

@@ -23,6 +23,17 @@ enum Unit {
     record Scaled(Unit unit, double factor) {
     }
 
+    String symbol() {
+        return switch (this) {
+            case VOLT -> "V";
+            case AMPERE -> "A";
+            case SECOND -> "s";
+            case FARAD -> "F";
+            case OHM -> "ohm";
+            case WATT -> "W";
+        };
+    }
+
     String example() {
         return switch (this) {
             case VOLT -> "V or mV";

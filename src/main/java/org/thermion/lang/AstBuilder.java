@@ -87,7 +87,7 @@ final class AstBuilder {
         if (v.NUMBER() != null) {
             return new Value.Num(v.getText(), s);
         }
-        if (v.ident() != null) {
+        if (v.ident() != null || v.keyword() != null) {
             return new Value.Word(v.getText(), s);
         }
         if (v.STRING() != null) {

@@ -57,7 +57,11 @@ public final class MachineReader {
                     found = "end of line";
                 }
             }
-            String message = SyntaxWording.reword(msg, found);
+            String context = null;
+            if (recognizer instanceof org.antlr.v4.runtime.Parser p && p.getContext() != null) {
+                context = SyntaxWording.ruleName(p.getRuleNames()[p.getContext().getRuleIndex()]);
+            }
+            String message = SyntaxWording.reword(msg, found, context);
             diags.error(new Span(file, line, col + 1, line, col + 1 + len), message, SyntaxWording.hint(msg));
         }
     }

@@ -5,7 +5,20 @@ final class SyntaxWording {
     private SyntaxWording() {
     }
 
-    static String reword(String msg, String found) {
+    /** What a grammar rule is, in a builder's words. */
+    static String ruleName(String rule) {
+        return switch (rule) {
+            case "expr", "rexpr" -> "an expression";
+            case "prop", "propBlock", "value" -> "a property line";
+            case "mstmt", "moduleBody", "portDecl", "netDecl", "lvalue", "conn" -> "a module statement";
+            case "index", "width" -> "a bus index";
+            case "istmt", "isaBody", "rbody", "rstmt", "rtarget" -> "the isa block";
+            case "decl", "file" -> "a declaration";
+            default -> null;
+        };
+    }
+
+    static String reword(String msg, String found, String context) {
         String m = msg.replace("'\\n'", "end of line").replace("'\\r\\n'", "end of line")
                 .replace("<EOF>", "end of file").replace("NL", "end of line");
         if (m.startsWith("token recognition error at: ")) {
@@ -18,20 +31,25 @@ final class SyntaxWording {
             if ("end of line".equals(found) || "end of file".equals(found)) {
                 what = found;
             }
-            return "syntax error: unexpected " + what + (expected != null ? ", expected " + tidy(expected) : "");
+            String where = context == null ? "" : " in " + context;
+            if (expected != null && expected.startsWith("{") && expected.split(",").length > 6) {
+                return "syntax error: unexpected " + what + where;
+            }
+            return "syntax error: unexpected " + what + where + (expected != null ? ", expected " + tidy(expected) : "");
         }
         if (m.startsWith("missing ")) {
             int at = m.indexOf(" at ");
             return "syntax error: " + (at >= 0 ? m.substring(0, at) : m) + " here";
         }
         if (m.startsWith("no viable alternative")) {
-            return "syntax error: cannot make sense of " + (found == null ? "this" : "'" + found + "'") + " here";
+            return "syntax error: cannot make sense of " + (found == null ? "this" : "'" + found + "'")
+                    + (context == null ? " here" : " in " + context);
         }
         return "syntax error: " + m;
     }
 
     private static String tidy(String expected) {
-        String e = expected.replace("{", "").replace("}", "").replace("NAME", "a name")
+        String e = expected.replace("{", "").replace("}", "").replace("'',", "").replace(", ''", "").replace("  ", " ").trim().replace("NAME", "a name")
                 .replace("NUMBER", "a number").replace("STRING", "a quoted string");
         if (e.length() > 90) {
             e = e.substring(0, 87) + "...";
@@ -40,7 +58,7 @@ final class SyntaxWording {
     }
 
     static String hint(String msg) {
-        if (msg.contains("'}'")) {
+        if (msg.contains("<EOF>") && msg.contains("'}'")) {
             return "check that every '{' has its '}'";
         }
         return null;

@@ -1,0 +1,66 @@
+package org.thermion.cli;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** `check` as a user meets it: exit codes, where errors go, no stack traces. */
+class CheckCommandTest {
+    record Result(int code, String out, String err) {
+    }
+
+    static Result run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        CommandLine cl = Main.commandLine();
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        int code = cl.execute(args);
+        return new Result(code, out.toString(), err.toString());
+    }
+
+    @Test
+    void demoChecksCleanWithItsSummary() {
+        Result r = run("check", "examples/pumpstation/pumpstation.machine");
+        assertThat(r.code()).isZero();
+        assertThat(r.out()).contains("machine pumpstation", "stage instances", "tubes:", "12AU7", "heater strings:");
+        assertThat(r.err()).doesNotContain("error");
+    }
+
+    @Test
+    void brokenDescriptionExitsTwoWithPlaceAndCaret(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("bad.machine");
+        Files.writeString(f, """
+                rail heat { voltage 12.6 V }
+                module top {
+                  in a
+                  out y
+                  y = a &
+                }
+                """);
+        Result r = run("check", f.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains(f + ":5:").contains("^").doesNotContain("Exception").doesNotContain("\tat ");
+    }
+
+    @Test
+    void missingFileIsBadInputNotACrash() {
+        Result r = run("check", "no/such/file.machine");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("cannot read").contains("no such file");
+    }
+
+    @Test
+    void unknownOptionIsUsageError() {
+        Result r = run("check", "--frobnicate", "x.machine");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("error:");
+    }
+}
