@@ -1,0 +1,78 @@
+package org.thermion.cli;
+
+import java.io.BufferedWriter;
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.List;
+
+/**
+ * Files a command writes: never one the user named as an input, and always through a
+ * temporary file in the same directory moved into place, so no reader sees half a file.
+ */
+final class OutputFiles {
+    private OutputFiles() {
+    }
+
+    /** The input among {@code inputs} that {@code output} would overwrite, or null. */
+    static Path clash(Path output, List<Path> inputs) {
+        for (Path in : inputs) {
+            if (in != null && same(output, in)) {
+                return in;
+            }
+        }
+        return null;
+    }
+
+    private static boolean same(Path a, Path b) {
+        try {
+            if (Files.exists(a) && Files.exists(b)) {
+                return Files.isSameFile(a, b);
+            }
+        } catch (IOException e) {
+            // Fall back to comparing the names.
+        }
+        return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
+    }
+
+    /** A file being written: {@link #commit()} moves it into place, {@link #close()} without commit discards it. */
+    static final class Pending implements AutoCloseable {
+        private final Path target;
+        private final Path tmp;
+        private final BufferedWriter writer;
+        private boolean committed;
+
+        Pending(Path target) throws IOException {
+            this.target = target;
+            Path dir = target.toAbsolutePath().getParent();
+            this.tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
+            this.writer = Files.newBufferedWriter(tmp, StandardCharsets.US_ASCII);
+        }
+
+        Writer writer() {
+            return writer;
+        }
+
+        void commit() throws IOException {
+            writer.close();
+            try {
+                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
+            }
+            committed = true;
+        }
+
+        @Override
+        public void close() throws IOException {
+            if (!committed) {
+                writer.close();
+                Files.deleteIfExists(tmp);
+            }
+        }
+    }
+}

@@ -1,0 +1,210 @@
+package org.thermion.cli;
+
+import org.thermion.asm.Assembler;
+import org.thermion.asm.Assembly;
+import org.thermion.lang.DiagnosticPrinter;
+import org.thermion.lang.Diagnostics;
+import org.thermion.model.Machine;
+import org.thermion.sim.InitMode;
+import org.thermion.sim.IsaRun;
+import org.thermion.sim.LogicRun;
+import org.thermion.sim.NetLookup;
+import org.thermion.sim.RunResult;
+import org.thermion.sim.Stimulus;
+import org.thermion.sim.StimulusReader;
+import org.thermion.sim.VcdWriter;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.ZonedDateTime;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.Callable;
+
+/** {@code run MACHINE PROGRAM}: assemble a program and run it on the machine's logic or its ISA. */
+@Command(name = "run", mixinStandardHelpOptions = true,
+        description = {"Run a program on a machine, cycle by cycle.",
+                "Prints every output change with its cycle and phase, the watched nets per cycle, and the final "
+                        + "state. The run ends at the cycle limit or at a fixed point (a cycle that changes nothing "
+                        + "while no stimulus row is still to come). Exit 1 when an unknown value reaches an output or "
+                        + "the jump (with --init unknown)."})
+final class RunCommand implements Callable<Integer> {
+    enum Level { logic, isa }
+
+    @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
+    Path machineFile;
+
+    @Parameters(index = "1", paramLabel = "PROGRAM", description = "The .asm program.")
+    Path program;
+
+    @Option(names = "--inputs", paramLabel = "STIM.csv",
+            description = "Stimulus (CSV): header 'cycle' then input names; each row holds from its cycle on.")
+    Path inputs;
+
+    @Option(names = "--cycles", paramLabel = "N", defaultValue = "10000",
+            description = "Stop after N cycles at most (default ${DEFAULT-VALUE}).")
+    long cycles;
+
+    @Option(names = "--level", paramLabel = "LEVEL", defaultValue = "logic",
+            description = "logic (gates and latches) or isa (the instruction meanings); default ${DEFAULT-VALUE}.")
+    Level level;
+
+    @Option(names = "--init", paramLabel = "MODE", defaultValue = "zero",
+            description = "Power-up state of the latches: zero, random:SEED or unknown; default ${DEFAULT-VALUE}.")
+    String init;
+
+    @Option(names = "--watch", paramLabel = "NET", split = ",",
+            description = "Nets to table per cycle, by name (acc, line[3], osel.term[5]; a bus name takes every bit).")
+    List<String> watch = new ArrayList<>();
+
+    @Option(names = "--vcd", paramLabel = "FILE", description = "Write a value change dump (IEEE 1364) here.")
+    Path vcd;
+
+    @Option(names = "--vcd-all", description = "Dump every named net, not only inputs, outputs, state and watched nets.")
+    boolean vcdAll;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "text, csv or json; default ${DEFAULT-VALUE}.")
+    Format format;
+
+    @Mixin
+    CommonOptions common;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        if (vcd != null) {
+            List<Path> named = new ArrayList<>(List.of(machineFile, program));
+            if (inputs != null) {
+                named.add(inputs);
+            }
+            Path clash = OutputFiles.clash(vcd, named);
+            if (clash != null) {
+                return usage(err, "refusing to write the VCD over " + clash + ", which is an input of this run",
+                        "name another file for --vcd, e.g. --vcd run.vcd");
+            }
+            if (level == Level.isa) {
+                return usage(err, "--vcd needs --level logic: the ISA level has no nets to dump", null);
+            }
+        }
+        if (vcdAll && vcd == null) {
+            return usage(err, "--vcd-all needs --vcd FILE", null);
+        }
+        if (cycles < 1) {
+            return usage(err, "--cycles must be at least 1, found " + cycles, null);
+        }
+        InitMode mode;
+        try {
+            mode = InitMode.parse(init);
+        } catch (IllegalArgumentException e) {
+            return usage(err, "--init: " + e.getMessage(), null);
+        }
+        if (level == Level.isa && mode instanceof InitMode.Unknown) {
+            return usage(err, "--init unknown needs --level logic: the ISA level has no unknown values", null);
+        }
+        MachineLoader loader = new MachineLoader();
+        Machine m = loader.load(machineFile, err, false);
+        if (m == null) {
+            return ExitCodes.BAD_INPUT;
+        }
+        if (m.isa() == null || m.rom() == null || m.pc() == null) {
+            return usage(err, machineFile + ": machine " + m.name() + " needs an isa block, a rom and a pc to run programs",
+                    null);
+        }
+        Diagnostics diags = new Diagnostics();
+        Assembly asm = Assembler.assemble(m, program, loader.sources(), diags);
+        Stimulus stim = null;
+        if (asm != null && inputs != null) {
+            stim = new StimulusReader(m, loader.sources(), diags).read(inputs);
+        }
+        if (!diags.all().isEmpty()) {
+            new DiagnosticPrinter(loader.sources()).print(diags, err);
+        }
+        if (asm == null || diags.hasErrors()) {
+            return ExitCodes.BAD_INPUT;
+        }
+        RunResult result;
+        String vcdNote = null;
+        if (level == Level.isa) {
+            try {
+                result = new IsaRun(m, asm.words(), mode, stim, watch).run(cycles);
+            } catch (IllegalArgumentException e) {
+                return usage(err, "--watch: " + e.getMessage(), null);
+            }
+        } else {
+            NetLookup lookup = new NetLookup(m);
+            List<String> names = new ArrayList<>();
+            List<Integer> nets = new ArrayList<>();
+            for (String w : watch) {
+                List<Integer> found;
+                try {
+                    found = lookup.resolve(w.strip());
+                } catch (IllegalArgumentException e) {
+                    return usage(err, "--watch: " + e.getMessage(), "names are as 'check' lists them, e.g. acc, line[3]");
+                }
+                for (int n : found) {
+                    names.add(m.netlist().netName(n));
+                    nets.add(n);
+                }
+            }
+            if (vcd == null) {
+                result = new LogicRun(m, asm.words(), mode, stim, names, nets, null).run(cycles, "", "");
+            } else {
+                List<Integer> dumped = vcdAll ? VcdWriter.allNamedNets(m) : defaultDump(m, nets);
+                try (OutputFiles.Pending file = new OutputFiles.Pending(vcd)) {
+                    VcdWriter writer = new VcdWriter(m, dumped, 0, file.writer());
+                    result = new LogicRun(m, asm.words(), mode, stim, names, nets, writer)
+                            .run(cycles, ZonedDateTime.now().format(DateTimeFormatter.RFC_1123_DATE_TIME),
+                                    spec.root().version()[0]);
+                    file.commit();
+                }
+                vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
+                        + " nets and the pc)";
+            }
+        }
+        new RunReport(m, program, level.name(), mode.toString(), result).print(out, format);
+        if (vcdNote != null && format == Format.text) {
+            out.println();
+            out.println(vcdNote);
+        }
+        out.flush();
+        return result.unknowns().isEmpty() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
+    }
+
+    /** Inputs, outputs, ISA state, the jump, the ROM word, then the watched nets. */
+    private static List<Integer> defaultDump(Machine m, List<Integer> watched) {
+        Set<Integer> s = new LinkedHashSet<>();
+        m.inputs().forEach(p -> s.add(p.net()));
+        m.outputs().forEach(p -> s.add(p.net()));
+        m.isa().state().forEach(b -> s.add(b.net()));
+        s.add(m.pc().jumpNet());
+        for (int n : m.rom().dataNets()) {
+            s.add(n);
+        }
+        s.addAll(watched);
+        return new ArrayList<>(s);
+    }
+
+    private static int usage(PrintWriter err, String message, String hint) {
+        err.println("error: " + message);
+        if (hint != null) {
+            err.println("  = " + hint);
+        }
+        err.flush();
+        return ExitCodes.BAD_INPUT;
+    }
+}

@@ -1,0 +1,212 @@
+package org.thermion.cli;
+
+import org.thermion.model.Machine;
+import org.thermion.sim.OutputChange;
+import org.thermion.sim.RunResult;
+import org.thermion.sim.UnknownReport;
+import org.thermion.sim.WatchRow;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+
+/** Prints a program run: output changes, watched nets, unknown values, final state. */
+final class RunReport {
+    private final Machine machine;
+    private final Path program;
+    private final String level;
+    private final String init;
+    private final RunResult r;
+
+    RunReport(Machine machine, Path program, String level, String init, RunResult result) {
+        this.machine = machine;
+        this.program = program;
+        this.level = level;
+        this.init = init;
+        this.r = result;
+    }
+
+    void print(PrintWriter out, Format format) {
+        switch (format) {
+            case text -> text(out);
+            case csv -> csv(out);
+            case json -> json(out);
+        }
+    }
+
+    private String pcText() {
+        if (!r.pcKnown()) {
+            return "x";
+        }
+        int digits = (machine.pc().width() + 3) / 4;
+        return String.format("0x%0" + digits + "X (%d)", r.pc(), r.pc());
+    }
+
+    private void text(PrintWriter out) {
+        out.println("run " + machine.name() + ": program " + program + ", " + level + " level, init " + init);
+        out.println(r.cycles() + " cycles; stopped: " + r.stop());
+        out.println();
+        if (r.changes().isEmpty()) {
+            out.println("output changes: none");
+        } else {
+            out.println("output changes:");
+            Table t = new Table("cycle", "phase", "output", "value");
+            for (OutputChange c : r.changes()) {
+                t.row(Long.toString(c.cycle()), Integer.toString(c.phase()), c.output(), String.valueOf(c.value()));
+            }
+            t.print(out, "  ");
+        }
+        if (!r.watchNames().isEmpty()) {
+            out.println();
+            out.println("watched, at the end of each cycle (pc: the instruction the cycle ran):");
+            String[] header = new String[r.watchNames().size() + 2];
+            header[0] = "cycle";
+            header[1] = "pc";
+            for (int i = 0; i < r.watchNames().size(); i++) {
+                header[i + 2] = r.watchNames().get(i);
+            }
+            Table t = new Table(header);
+            for (WatchRow w : r.watch()) {
+                String[] row = new String[header.length];
+                row[0] = Long.toString(w.cycle());
+                row[1] = Integer.toString(w.pc());
+                for (int i = 0; i < w.values().length(); i++) {
+                    row[i + 2] = String.valueOf(w.values().charAt(i));
+                }
+                t.row(row);
+            }
+            t.print(out, "  ");
+        }
+        if (!r.unknowns().isEmpty()) {
+            out.println();
+            out.println("unknown values reached outputs or the jump:");
+            Table t = new Table("cycle", "phase", "net", "what");
+            for (UnknownReport u : r.unknowns()) {
+                t.row(Long.toString(u.cycle()), u.phase() == 0 ? "-" : Integer.toString(u.phase()), u.net(), u.what());
+            }
+            t.print(out, "  ");
+        }
+        out.println();
+        out.println("final state:");
+        Table t = new Table("state", "value");
+        for (int i = 0; i < r.stateNames().size(); i++) {
+            t.row(r.stateNames().get(i), String.valueOf(r.state().charAt(i)));
+        }
+        t.row("pc", pcText());
+        t.print(out, "  ");
+    }
+
+    private void csv(PrintWriter out) {
+        out.print("record,cycle,phase,name,value\r\n");
+        for (OutputChange c : r.changes()) {
+            row(out, "change", Long.toString(c.cycle()), Integer.toString(c.phase()), c.output(), String.valueOf(c.value()));
+        }
+        for (WatchRow w : r.watch()) {
+            row(out, "watch", Long.toString(w.cycle()), "", "pc", Integer.toString(w.pc()));
+            for (int i = 0; i < w.values().length(); i++) {
+                row(out, "watch", Long.toString(w.cycle()), "", r.watchNames().get(i), String.valueOf(w.values().charAt(i)));
+            }
+        }
+        for (UnknownReport u : r.unknowns()) {
+            row(out, "unknown", Long.toString(u.cycle()), u.phase() == 0 ? "" : Integer.toString(u.phase()), u.net(),
+                    u.what());
+        }
+        for (int i = 0; i < r.stateNames().size(); i++) {
+            row(out, "state", Long.toString(r.cycles()), "", r.stateNames().get(i), String.valueOf(r.state().charAt(i)));
+        }
+        row(out, "state", Long.toString(r.cycles()), "", "pc", r.pcKnown() ? Integer.toString(r.pc()) : "x");
+        row(out, "stop", Long.toString(r.cycles()), "", "reason", r.stop());
+    }
+
+    private static void row(PrintWriter out, String... fields) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < fields.length; i++) {
+            if (i > 0) {
+                sb.append(',');
+            }
+            String f = fields[i];
+            if (f.indexOf(',') >= 0 || f.indexOf('"') >= 0 || f.indexOf('\n') >= 0 || f.indexOf('\r') >= 0) {
+                sb.append('"').append(f.replace("\"", "\"\"")).append('"');
+            } else {
+                sb.append(f);
+            }
+        }
+        out.print(sb.append("\r\n"));
+    }
+
+    private void json(PrintWriter out) {
+        StringBuilder sb = new StringBuilder("{\n");
+        sb.append("  \"machine\": ").append(q(machine.name())).append(",\n");
+        sb.append("  \"program\": ").append(q(program.toString())).append(",\n");
+        sb.append("  \"level\": ").append(q(level)).append(",\n");
+        sb.append("  \"init\": ").append(q(init)).append(",\n");
+        sb.append("  \"cycles\": ").append(r.cycles()).append(",\n");
+        sb.append("  \"stop\": ").append(q(r.stop())).append(",\n");
+        sb.append("  \"changes\": [");
+        List<OutputChange> ch = r.changes();
+        for (int i = 0; i < ch.size(); i++) {
+            OutputChange c = ch.get(i);
+            sb.append(i == 0 ? "\n" : ",\n").append("    {\"cycle\": ").append(c.cycle()).append(", \"phase\": ")
+                    .append(c.phase()).append(", \"output\": ").append(q(c.output())).append(", \"value\": ")
+                    .append(val(c.value())).append('}');
+        }
+        sb.append(ch.isEmpty() ? "],\n" : "\n  ],\n");
+        sb.append("  \"watch\": {\"names\": [");
+        for (int i = 0; i < r.watchNames().size(); i++) {
+            sb.append(i == 0 ? "" : ", ").append(q(r.watchNames().get(i)));
+        }
+        sb.append("], \"rows\": [");
+        for (int i = 0; i < r.watch().size(); i++) {
+            WatchRow w = r.watch().get(i);
+            sb.append(i == 0 ? "\n" : ",\n").append("    {\"cycle\": ").append(w.cycle()).append(", \"pc\": ")
+                    .append(w.pc()).append(", \"values\": [");
+            for (int k = 0; k < w.values().length(); k++) {
+                sb.append(k == 0 ? "" : ", ").append(val(w.values().charAt(k)));
+            }
+            sb.append("]}");
+        }
+        sb.append(r.watch().isEmpty() ? "]},\n" : "\n  ]},\n");
+        sb.append("  \"unknowns\": [");
+        for (int i = 0; i < r.unknowns().size(); i++) {
+            UnknownReport u = r.unknowns().get(i);
+            sb.append(i == 0 ? "\n" : ",\n").append("    {\"cycle\": ").append(u.cycle()).append(", \"phase\": ")
+                    .append(u.phase() == 0 ? "null" : Integer.toString(u.phase())).append(", \"net\": ")
+                    .append(q(u.net())).append(", \"what\": ").append(q(u.what())).append('}');
+        }
+        sb.append(r.unknowns().isEmpty() ? "],\n" : "\n  ],\n");
+        sb.append("  \"state\": {");
+        for (int i = 0; i < r.stateNames().size(); i++) {
+            sb.append(i == 0 ? "" : ", ").append(q(r.stateNames().get(i))).append(": ").append(val(r.state().charAt(i)));
+        }
+        sb.append("},\n");
+        sb.append("  \"pc\": ").append(r.pcKnown() ? Integer.toString(r.pc()) : "null").append('\n');
+        sb.append("}\n");
+        out.print(sb);
+    }
+
+    /** 0 and 1 as numbers, unknown as the string "x". */
+    private static String val(char c) {
+        return c == 'x' ? "\"x\"" : String.valueOf(c);
+    }
+
+    static String q(String s) {
+        StringBuilder sb = new StringBuilder("\"");
+        for (char c : s.toCharArray()) {
+            switch (c) {
+                case '"' -> sb.append("\\\"");
+                case '\\' -> sb.append("\\\\");
+                case '\n' -> sb.append("\\n");
+                case '\r' -> sb.append("\\r");
+                case '\t' -> sb.append("\\t");
+                default -> {
+                    if (c < 0x20) {
+                        sb.append(String.format("\\u%04x", (int) c));
+                    } else {
+                        sb.append(c);
+                    }
+                }
+            }
+        }
+        return sb.append('"').toString();
+    }
+}

@@ -1,0 +1,194 @@
+package org.thermion.sim;
+
+import org.thermion.model.Latch;
+import org.thermion.model.Machine;
+import org.thermion.model.Port;
+import org.thermion.model.StateBit;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Runs a program on the machine's logic, lane 0, cycle by cycle: inputs from a stimulus,
+ * output changes logged, watched nets tabled, optionally a VCD. The run ends at the cycle
+ * limit, when the PC becomes unknown, or at a fixed point: a cycle that left every latch
+ * and the PC as it found them while no stimulus row is still to come, so every later cycle
+ * would repeat it.
+ */
+public final class LogicRun {
+    private final Machine machine;
+    private final Simulator sim;
+    private final Stimulus stimulus;
+    private final List<String> watchNames;
+    private final List<Integer> watchNets;
+    private final VcdWriter vcd;
+
+    /**
+     * @param stimulus   input rows, or null for all inputs 0
+     * @param watchNames names for the watch table, each with its net in {@code watchNets}
+     * @param vcd        a writer to feed, or null
+     */
+    public LogicRun(Machine machine, long[] rom, InitMode init, Stimulus stimulus, List<String> watchNames,
+                    List<Integer> watchNets, VcdWriter vcd) {
+        this.machine = machine;
+        this.sim = new Simulator(machine);
+        this.stimulus = stimulus;
+        this.watchNames = List.copyOf(watchNames);
+        this.watchNets = List.copyOf(watchNets);
+        this.vcd = vcd;
+        sim.loadRom(rom);
+        sim.reset(init);
+    }
+
+    public Simulator simulator() {
+        return sim;
+    }
+
+    /** Runs at most {@code maxCycles} cycles. {@code vcdDate} and {@code version} go into the VCD header. */
+    public RunResult run(long maxCycles, String vcdDate, String version) {
+        List<Port> inputs = machine.inputs();
+        boolean[] in = new boolean[inputs.size()];
+        Stimulus.Cursor cursor = stimulus == null ? null : stimulus.cursor();
+        if (cursor != null) {
+            cursor.advance(0, in);
+        }
+        applyInputs(in);
+        sim.settle();
+        OutputLog log = new OutputLog(sim, 0);
+        if (vcd != null) {
+            vcd.begin(sim, vcdDate, version);
+        }
+        List<Latch> latches = machine.netlist().latches();
+        long[] before = new long[(latches.size() + 63) / 64 * 2 + 1];
+        long[] after = new long[before.length];
+        List<UnknownReport> unknowns = new ArrayList<>();
+        List<Port> outputs = machine.outputs();
+        boolean[] outputKnown = new boolean[outputs.size()];
+        boolean[] outputReported = new boolean[outputs.size()];
+        for (int o = 0; o < outputs.size(); o++) {
+            outputKnown[o] = (sim.unknown(outputs.get(o).net()) & 1L) == 0;
+        }
+        int[] outputLatch = latchOf(outputs);
+        boolean jumpReported = false;
+        List<WatchRow> rows = new ArrayList<>();
+        String stop = "cycle limit of " + maxCycles + " reached";
+        long cycles = 0;
+        int pcPhase = machine.pc() == null ? -1 : machine.pc().phase();
+        for (long c = 0; c < maxCycles; c++) {
+            if (c > 0 && cursor != null && cursor.advance(c, in)) {
+                applyInputs(in);
+            }
+            snapshot(latches, before);
+            int pcStart = sim.pc(0);
+            for (int p = 1; p <= sim.phases(); p++) {
+                sim.stepPhase();
+                log.observe(sim, c, p);
+                if (vcd != null) {
+                    vcd.afterPhase(sim, c, p);
+                }
+                if (sim.threeValued()) {
+                    for (int o = 0; o < outputs.size(); o++) {
+                        boolean x = (sim.unknown(outputs.get(o).net()) & 1L) != 0;
+                        if (x && !outputReported[o]) {
+                            String what = null;
+                            if (outputKnown[o]) {
+                                what = "output becomes unknown";
+                            } else if (outputLatch[o] >= 0 && loadedNow(latches.get(outputLatch[o]), p)) {
+                                what = "output latch loaded with an unknown value";
+                            }
+                            if (what != null) {
+                                unknowns.add(new UnknownReport(c, p, outputs.get(o).name(), what));
+                                outputReported[o] = true;
+                            }
+                        }
+                        outputKnown[o] |= !x;
+                    }
+                    if (p == pcPhase && !jumpReported && (sim.unknown(machine.pc().jumpNet()) & 1L) != 0) {
+                        unknowns.add(new UnknownReport(c, p, machine.netlist().netName(machine.pc().jumpNet()),
+                                "jump decision unknown"));
+                        jumpReported = true;
+                    }
+                }
+            }
+            cycles = c + 1;
+            if (!watchNets.isEmpty()) {
+                StringBuilder sb = new StringBuilder(watchNets.size());
+                for (int n : watchNets) {
+                    sb.append(OutputLog.level(sim, n, 0));
+                }
+                rows.add(new WatchRow(c, pcStart, sb.toString()));
+            }
+            if ((sim.pcUnknown() & 1L) != 0) {
+                stop = "program counter unknown after cycle " + c;
+                break;
+            }
+            snapshot(latches, after);
+            if (sim.pc(0) == pcStart && java.util.Arrays.equals(before, after) && (cursor == null || !cursor.pending())) {
+                stop = "fixed point at address " + pcStart + ": the machine repeats cycle " + c
+                        + " unchanged from here on";
+                break;
+            }
+        }
+        if (sim.threeValued()) {
+            for (int o = 0; o < outputs.size(); o++) {
+                if (!outputReported[o] && (sim.unknown(outputs.get(o).net()) & 1L) != 0) {
+                    unknowns.add(new UnknownReport(cycles, 0, outputs.get(o).name(),
+                            "output still unknown at the end of the run"));
+                }
+            }
+        }
+        if (vcd != null) {
+            vcd.finish(cycles);
+        }
+        List<StateBit> state = machine.isa() == null ? List.of() : machine.isa().state();
+        StringBuilder st = new StringBuilder();
+        for (StateBit b : state) {
+            st.append(OutputLog.level(sim, b.net(), 0));
+        }
+        return new RunResult(cycles, stop, log.changes(), unknowns, state.stream().map(StateBit::name).toList(),
+                st.toString(), sim.pc(0), (sim.pcUnknown() & 1L) == 0, watchNames, rows);
+    }
+
+    private boolean loadedNow(Latch l, int phase) {
+        if (l.phase() != phase) {
+            return false;
+        }
+        if (l.enable() < 0) {
+            return true;
+        }
+        // An enable that is 1 or unknown may have loaded the latch.
+        return ((sim.value(l.enable()) | sim.unknown(l.enable())) & 1L) != 0;
+    }
+
+    private int[] latchOf(List<Port> outputs) {
+        int[] r = new int[outputs.size()];
+        List<Latch> latches = machine.netlist().latches();
+        for (int o = 0; o < r.length; o++) {
+            r[o] = -1;
+            for (int i = 0; i < latches.size(); i++) {
+                if (latches.get(i).output() == outputs.get(o).net()) {
+                    r[o] = i;
+                }
+            }
+        }
+        return r;
+    }
+
+    private void applyInputs(boolean[] in) {
+        for (int i = 0; i < in.length; i++) {
+            sim.setInput(i, in[i] ? -1L : 0L);
+        }
+    }
+
+    /** Lane 0 of every latch (value and unknown) and of the PC's unknown flag, packed into words. */
+    private void snapshot(List<Latch> latches, long[] into) {
+        java.util.Arrays.fill(into, 0L);
+        int half = (latches.size() + 63) / 64;
+        for (int i = 0; i < latches.size(); i++) {
+            int n = latches.get(i).output();
+            into[i >>> 6] |= (sim.value(n) & 1L) << (i & 63);
+            into[half + (i >>> 6)] |= (sim.unknown(n) & 1L) << (i & 63);
+        }
+        into[into.length - 1] = sim.pcUnknown() & 1L;
+    }
+}

@@ -1,0 +1,68 @@
+package org.thermion.sim;
+
+import org.thermion.lang.Names;
+import org.thermion.model.Machine;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Finds nets by the names of {@code Netlist.netNames()} ({@code acc}, {@code osel.term[3]}),
+ * or a whole bus by its base name ({@code line} for {@code line[0]..line[15]}).
+ */
+public final class NetLookup {
+    private final Map<String, Integer> byName = new HashMap<>();
+    private final Map<String, List<Integer>> buses = new LinkedHashMap<>();
+
+    public NetLookup(Machine machine) {
+        String[] names = machine.netlist().netNames();
+        for (int n = 2; n < names.length; n++) {
+            byName.put(names[n], n);
+            int open = names[n].lastIndexOf('[');
+            if (open > 0 && names[n].endsWith("]")) {
+                buses.computeIfAbsent(names[n].substring(0, open), k -> new ArrayList<>()).add(n);
+            }
+        }
+        for (List<Integer> bits : buses.values()) {
+            bits.sort((a, b) -> Integer.compare(bitIndex(names[a]), bitIndex(names[b])));
+        }
+    }
+
+    private static int bitIndex(String name) {
+        try {
+            return Integer.parseInt(name.substring(name.lastIndexOf('[') + 1, name.length() - 1));
+        } catch (NumberFormatException e) {
+            return Integer.MAX_VALUE;
+        }
+    }
+
+    /** True when the net's last name part is a temporary the elaborator made ({@code $7}). */
+    public static boolean temporary(String netName) {
+        int dot = netName.lastIndexOf('.');
+        return netName.startsWith("$", dot + 1);
+    }
+
+    /**
+     * The nets a name stands for: one net, or every bit of a bus, LSB first.
+     *
+     * @throws IllegalArgumentException naming the nearest known name when there is no such net
+     */
+    public List<Integer> resolve(String name) {
+        Integer n = byName.get(name);
+        if (n != null) {
+            return List.of(n);
+        }
+        List<Integer> bus = buses.get(name);
+        if (bus != null) {
+            return List.copyOf(bus);
+        }
+        List<String> candidates = new ArrayList<>(byName.keySet());
+        candidates.addAll(buses.keySet());
+        candidates.removeIf(NetLookup::temporary);
+        String hint = Names.didYouMean(name, candidates);
+        throw new IllegalArgumentException("no net named '" + name + "'" + (hint == null ? "" : "; " + hint));
+    }
+}

@@ -1,0 +1,259 @@
+package org.thermion.sim;
+
+import org.thermion.model.Latch;
+import org.thermion.model.Machine;
+import org.thermion.model.ModuleInstance;
+import org.thermion.model.Netlist;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Writes a value change dump (IEEE 1364-2005 clause 18) of chosen nets on one lane: one
+ * {@code $scope module} per module instance (the top scope is named after the machine), one
+ * one-bit {@code $var wire} per net, and the program counter as a vector in the top scope.
+ *
+ * <p>Time follows the clock: the logic settles at the start of each phase and the latches
+ * load at its end, so gate-driven nets change at phase starts and latch outputs at phase ends.
+ */
+public final class VcdWriter {
+    private static final Pattern BUS_BIT = Pattern.compile("([A-Za-z_][A-Za-z0-9_]*)\\[(\\d+)]");
+    private static final Pattern PLAIN = Pattern.compile("[A-Za-z_][A-Za-z0-9_$]*");
+
+    private final Machine machine;
+    private final Writer out;
+    private final int lane;
+    private final VcdTimebase time;
+    private final int[] nets;
+    private final boolean[] latched;
+    private final String[] ids;
+    private final char[] last;
+    private final boolean withPc;
+    private final String pcId;
+    private String lastPc;
+    private long now = -1;
+
+    /**
+     * @param nets the nets to dump, in the order they are declared within their scopes
+     * @param lane the lane whose values are dumped
+     */
+    public VcdWriter(Machine machine, List<Integer> nets, int lane, Writer out) {
+        this.machine = machine;
+        this.out = out;
+        this.lane = lane;
+        this.time = VcdTimebase.of(machine.clock());
+        this.nets = nets.stream().distinct().filter(n -> n > Netlist.CONST1).mapToInt(Integer::intValue).toArray();
+        BitSet latchNets = new BitSet();
+        for (Latch l : machine.netlist().latches()) {
+            latchNets.set(l.output());
+        }
+        this.latched = new boolean[this.nets.length];
+        this.ids = new String[this.nets.length];
+        this.last = new char[this.nets.length];
+        for (int i = 0; i < this.nets.length; i++) {
+            latched[i] = latchNets.get(this.nets[i]);
+            ids[i] = identifier(i);
+        }
+        this.withPc = machine.pc() != null;
+        this.pcId = identifier(this.nets.length);
+    }
+
+    /** The nets {@code --vcd-all} dumps: every net except the constants and the elaborator's temporaries. */
+    public static List<Integer> allNamedNets(Machine m) {
+        List<Integer> all = new ArrayList<>();
+        String[] names = m.netlist().netNames();
+        for (int n = Netlist.CONST1 + 1; n < names.length; n++) {
+            if (!NetLookup.temporary(names[n])) {
+                all.add(n);
+            }
+        }
+        return all;
+    }
+
+    /** A short identifier from the printable characters 33..126, unique per index. */
+    static String identifier(int index) {
+        StringBuilder sb = new StringBuilder();
+        int n = index;
+        do {
+            sb.append((char) (33 + n % 94));
+            n /= 94;
+        } while (n > 0);
+        return sb.toString();
+    }
+
+    public VcdTimebase timebase() {
+        return time;
+    }
+
+    /** Writes the header and the initial values ({@code $dumpvars} at time 0) from the simulator's present state. */
+    public void begin(Simulator sim, String date, String version) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("$date\n  ").append(date).append("\n$end\n");
+        sb.append("$version\n  ").append(version).append("\n$end\n");
+        sb.append("$timescale 1 ").append(time.unit()).append(" $end\n");
+        List<ModuleInstance> mods = machine.modules();
+        int[] netModule = machine.netlist().netModule();
+        for (ModuleInstance top : mods) {
+            if (top.parent() < 0) {
+                scope(sb, top, machine.name(), netModule, top == firstTop(mods));
+            }
+        }
+        sb.append("$enddefinitions $end\n");
+        sb.append("#0\n$dumpvars\n");
+        for (int i = 0; i < nets.length; i++) {
+            last[i] = OutputLog.level(sim, nets[i], lane);
+            sb.append(last[i]).append(ids[i]).append('\n');
+        }
+        if (withPc) {
+            lastPc = pcBits(sim);
+            sb.append('b').append(lastPc).append(' ').append(pcId).append('\n');
+        }
+        sb.append("$end\n");
+        now = 0;
+        write(sb);
+    }
+
+    private static ModuleInstance firstTop(List<ModuleInstance> mods) {
+        for (ModuleInstance m : mods) {
+            if (m.parent() < 0) {
+                return m;
+            }
+        }
+        return null;
+    }
+
+    private void scope(StringBuilder sb, ModuleInstance mod, String name, int[] netModule, boolean withPcHere) {
+        if (!hasVars(mod.id(), netModule) && !withPcHere) {
+            return;
+        }
+        sb.append("$scope module ").append(name).append(" $end\n");
+        String prefix = mod.path().isEmpty() ? "" : mod.path() + ".";
+        String[] names = machine.netlist().netNames();
+        for (int i = 0; i < nets.length; i++) {
+            if (netModule[nets[i]] == mod.id()) {
+                String local = names[nets[i]].startsWith(prefix) ? names[nets[i]].substring(prefix.length())
+                        : names[nets[i]];
+                sb.append("$var wire 1 ").append(ids[i]).append(' ').append(reference(local)).append(" $end\n");
+            }
+        }
+        if (withPcHere && withPc) {
+            sb.append("$var reg ").append(machine.pc().width()).append(' ').append(pcId).append(" pc [")
+                    .append(machine.pc().width() - 1).append(":0] $end\n");
+        }
+        for (ModuleInstance child : machine.modules()) {
+            if (child.parent() == mod.id()) {
+                scope(sb, child, child.leaf(), netModule, false);
+            }
+        }
+        sb.append("$upscope $end\n");
+    }
+
+    private boolean hasVars(int module, int[] netModule) {
+        for (int n : nets) {
+            if (netModule[n] == module) {
+                return true;
+            }
+        }
+        for (ModuleInstance child : machine.modules()) {
+            if (child.parent() == module && hasVars(child.id(), netModule)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** A reference as IEEE 1364 writes it: {@code name}, {@code bus [3]}, or an escaped identifier. */
+    static String reference(String local) {
+        Matcher m = BUS_BIT.matcher(local);
+        if (m.matches()) {
+            return m.group(1) + " [" + m.group(2) + "]";
+        }
+        if (PLAIN.matcher(local).matches()) {
+            return local;
+        }
+        return "\\" + local.replaceAll("\\s", "_");
+    }
+
+    private String pcBits(Simulator sim) {
+        int w = machine.pc().width();
+        if ((sim.pcUnknown() >>> lane & 1L) != 0) {
+            return "x".repeat(w);
+        }
+        String s = Integer.toBinaryString(sim.pc(lane));
+        return s.length() >= w ? s : "0".repeat(w - s.length()) + s;
+    }
+
+    /**
+     * Records the state after phase {@code phase} of cycle {@code cycle} has run: gate-driven nets
+     * at the phase's start, latch outputs and the PC at its end.
+     */
+    public void afterPhase(Simulator sim, long cycle, int phase) {
+        StringBuilder sb = new StringBuilder();
+        long start = time.phaseStart(cycle, phase);
+        long end = time.phaseEnd(cycle, phase);
+        for (int i = 0; i < nets.length; i++) {
+            if (!latched[i]) {
+                change(sb, i, sim, start);
+            }
+        }
+        for (int i = 0; i < nets.length; i++) {
+            if (latched[i]) {
+                change(sb, i, sim, end);
+            }
+        }
+        if (withPc) {
+            String pc = pcBits(sim);
+            if (!pc.equals(lastPc)) {
+                stamp(sb, end);
+                sb.append('b').append(pc).append(' ').append(pcId).append('\n');
+                lastPc = pc;
+            }
+        }
+        write(sb);
+    }
+
+    private void change(StringBuilder sb, int i, Simulator sim, long t) {
+        char v = OutputLog.level(sim, nets[i], lane);
+        if (v != last[i]) {
+            stamp(sb, t);
+            sb.append(v).append(ids[i]).append('\n');
+            last[i] = v;
+        }
+    }
+
+    private void stamp(StringBuilder sb, long t) {
+        if (t != now) {
+            if (t < now) {
+                throw new IllegalStateException("VCD time would go back from " + now + " to " + t);
+            }
+            sb.append('#').append(t).append('\n');
+            now = t;
+        }
+    }
+
+    /** Ends the dump at the end of cycle {@code cycles - 1}, so the last values have a duration. */
+    public void finish(long cycles) {
+        StringBuilder sb = new StringBuilder();
+        stamp(sb, Math.max(now, time.phaseStart(cycles, 1)));
+        write(sb);
+        try {
+            out.flush();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private void write(StringBuilder sb) {
+        try {
+            out.write(sb.toString());
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

@@ -1,0 +1,147 @@
+package org.thermion.cli;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Stream;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** The run command end to end on the demo machine and its programs. */
+class RunCommandTest {
+    static final String MACHINE = "examples/pumpstation/pumpstation.machine";
+    static final Path GOLDEN = Path.of("src", "test", "resources", "org", "thermion", "cli", "run");
+    static final String STIM = GOLDEN.resolve("pump-stim.csv").toString();
+
+    record Outcome(int code, String out, String err) {
+    }
+
+    static Outcome run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.commandLine().setOut(new PrintWriter(out)).setErr(new PrintWriter(err)).execute(args);
+        return new Outcome(code, out.toString(), err.toString());
+    }
+
+    static void golden(String name, String actual) throws IOException {
+        Path file = GOLDEN.resolve(name);
+        if (Boolean.getBoolean("golden.update")) {
+            Files.writeString(file, actual, StandardCharsets.UTF_8);
+        }
+        assertThat(file).as("golden %s (-Dgolden.update=true creates it)", file).exists();
+        assertThat(actual).isEqualTo(Files.readString(file, StandardCharsets.UTF_8));
+    }
+
+    @Test
+    void pumpProgramFollowsTheStimulus() throws IOException {
+        Outcome o = run("run", MACHINE, "programs/pump.asm", "--inputs", STIM, "--cycles", "200");
+        assertThat(o.code()).as(o.err()).isZero();
+        // By hand from pump.asm: the pass starting at cycle 20 (pc 0) reads low_sw dry and
+        // reaches ST pump, its sixth instruction, in cycle 25; the store loads on phase 2.
+        assertThat(o.out()).containsPattern("\\n  25 +2  pump +1\\n");
+        golden("pump.txt", o.out());
+    }
+
+    @Test
+    void logicAndIsaLevelsAgreeOnThePrograms() {
+        String[][] cases = {
+                {"programs/pump.asm", STIM},
+                {"programs/serial-add.asm", GOLDEN.resolve("serial-stim.csv").toString()},
+                {"programs/every-op.asm", GOLDEN.resolve("every-op-stim.csv").toString()},
+        };
+        for (String[] c : cases) {
+            Outcome logic = run("run", MACHINE, c[0], "--inputs", c[1], "--cycles", "300", "--format", "json");
+            Outcome isa = run("run", MACHINE, c[0], "--inputs", c[1], "--cycles", "300", "--format", "json",
+                    "--level", "isa");
+            assertThat(logic.code()).as(logic.err()).isZero();
+            assertThat(isa.code()).as(isa.err()).isZero();
+            assertThat(isa.out().replace("\"level\": \"isa\"", "\"level\": \"logic\"")).as(c[0]).isEqualTo(logic.out());
+        }
+    }
+
+    @Test
+    void aProgramThatSettlesStopsAtItsFixedPoint(@TempDir Path dir) throws IOException {
+        Path prog = dir.resolve("settle.asm");
+        Files.writeString(prog, "        LD low_sw\n        ST pump\nhere:   JMP here\n");
+        Outcome o = run("run", MACHINE, prog.toString(), "--format", "csv");
+        assertThat(o.code()).as(o.err()).isZero();
+        // Cycle 2 loads JMP into the instruction register; cycle 3 repeats it exactly: 4 cycles.
+        assertThat(o.out()).contains("stop,4,,reason,fixed point at address 2");
+    }
+
+    @Test
+    void anUnsetAccumulatorStoredToAnOutputIsReportedAndExitsOne(@TempDir Path dir) throws IOException {
+        Path prog = dir.resolve("unset.asm");
+        Files.writeString(prog, "        ST alarm\n        JMPC 0\n        JMP 0\n");
+        Outcome o = run("run", MACHINE, prog.toString(), "--init", "unknown", "--cycles", "6");
+        assertThat(o.code()).isEqualTo(ExitCodes.CHECK_FAILED);
+        assertThat(o.out()).containsPattern("0 +2 +alarm +output latch loaded with an unknown value");
+        assertThat(o.out()).containsPattern("1 +2 +jump +jump decision unknown");
+        assertThat(o.out()).contains("stopped: program counter unknown after cycle 1");
+    }
+
+    @Test
+    void anUnknownWatchNameSuggestsTheNearest() {
+        Outcome o = run("run", MACHINE, "programs/pump.asm", "--watch", "acc,acc_nxt");
+        assertThat(o.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(o.err()).contains("error: --watch: no net named 'acc_nxt'; did you mean 'acc_next'?");
+        assertThat(o.out()).isEmpty();
+    }
+
+    @Test
+    void theVcdNeverReplacesAnInput(@TempDir Path dir) throws IOException {
+        Path prog = dir.resolve("p.asm");
+        Files.writeString(prog, "loop: JMP loop\n");
+        Outcome o = run("run", MACHINE, prog.toString(), "--vcd", prog.toString());
+        assertThat(o.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(o.err()).contains("refusing to write the VCD over " + prog);
+        assertThat(Files.readString(prog)).isEqualTo("loop: JMP loop\n");
+        Path stim = dir.resolve("s.csv");
+        Files.writeString(stim, "cycle,manual\n0,1\n");
+        Outcome s = run("run", MACHINE, prog.toString(), "--inputs", stim.toString(), "--vcd",
+                dir.resolve(".").resolve("s.csv").toString());
+        assertThat(s.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(Files.readString(stim)).isEqualTo("cycle,manual\n0,1\n");
+    }
+
+    @Test
+    void theVcdIsWrittenWholeWithNoTemporaryLeft(@TempDir Path dir) throws IOException {
+        Path vcd = dir.resolve("run.vcd");
+        Files.writeString(vcd, "old");
+        Outcome o = run("run", MACHINE, "programs/pump.asm", "--cycles", "30", "--vcd", vcd.toString(), "--vcd-all");
+        assertThat(o.code()).as(o.err()).isZero();
+        String text = Files.readString(vcd);
+        assertThat(text).startsWith("$date").contains("$enddefinitions $end").contains("$scope module osel $end");
+        // 30 cycles of 100 us end at 3000 us: the last timestamp.
+        assertThat(text.substring(text.lastIndexOf('#'))).startsWith("#3000\n");
+        try (Stream<Path> files = Files.list(dir)) {
+            assertThat(files.map(p -> p.getFileName().toString())).containsExactly("run.vcd");
+        }
+    }
+
+    @Test
+    void badStimulusIsReportedWithItsPlace(@TempDir Path dir) throws IOException {
+        Path stim = dir.resolve("bad.csv");
+        Files.writeString(stim, "cycle,low_sw\n0,yes\n");
+        Outcome o = run("run", MACHINE, "programs/pump.asm", "--inputs", stim.toString());
+        assertThat(o.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(o.err()).contains(stim + ":2:3: error: expected 0 or 1 for input 'low_sw', found 'yes'")
+                .contains("  0,yes\n    ^~~\n");
+    }
+
+    @Test
+    void optionMistakesAreUsageErrors() {
+        assertThat(run("run", MACHINE, "programs/pump.asm", "--init", "random").err())
+                .contains("needs a seed: random:SEED");
+        assertThat(run("run", MACHINE, "programs/pump.asm", "--init", "unknown", "--level", "isa").code())
+                .isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(run("run", MACHINE, "programs/pump.asm", "--cycles", "0").code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(run("run", MACHINE, "programs/pump.asm", "--level", "gates").code()).isEqualTo(ExitCodes.BAD_INPUT);
+    }
+}
