@@ -2,6 +2,7 @@ package org.thermion.power;
 
 import org.thermion.model.Machine;
 import org.thermion.model.StageType;
+import org.thermion.sim.Simulator;
 
 import java.util.Arrays;
 import java.util.List;
@@ -9,7 +10,8 @@ import java.util.function.IntToLongFunction;
 
 /**
  * Plate and bias current of a running machine, per module and per rail, fed one sample
- * after every simulated phase. Each drawing stage instance contributes its stage's draw
+ * after every simulated phase, and each module's approximate plate dissipation
+ * ({@link PlateDissipation}). Each drawing stage instance contributes its stage's draw
  * for its output value at that moment ({@link StageDraw}); the soft-start thyratron counts
  * as conducting. Heater current is not included (it does not depend on the logic state;
  * see {@link HeaterAnalysis}). Amperes, magnitudes. Every phase lasts the same time, so the
@@ -17,10 +19,12 @@ import java.util.function.IntToLongFunction;
  */
 public final class CurrentMeter {
     private final int rails;
+    /** Channels per module: one per rail, then the module's plate dissipation in watts. */
+    private final int channels;
     private final int modules;
     /** Draw of every module on every rail with all net-following instances low, fixed ones in their state. */
     private final double[] base;
-    /** Per net-following instance: its output net, and the draw it adds (module*rails+rail, amps) when high. */
+    /** Per net-following instance: its output net, and what it adds (slot module*channels+channel, amps or watts) when high. */
     private final int[] net;
     private final int[][] deltaSlot;
     private final double[][] deltaAmps;
@@ -43,8 +47,9 @@ public final class CurrentMeter {
 
     public CurrentMeter(Machine m) {
         rails = m.rails().size();
+        channels = rails + 1;
         modules = m.modules().size();
-        base = new double[modules * rails];
+        base = new double[modules * channels];
         List<DrawingInstance> all = DrawingInstances.of(m);
         int following = (int) all.stream().filter(DrawingInstance::followsNet).count();
         net = new int[following];
@@ -55,19 +60,20 @@ public final class CurrentMeter {
             StageType st = m.stages().get(d.stage());
             if (!d.followsNet()) {
                 for (int r = 0; r < rails; r++) {
-                    base[d.module() * rails + r] += StageDraw.amps(st, r, d.fixedHigh());
+                    base[d.module() * channels + r] += StageDraw.amps(st, r, d.fixedHigh());
                 }
+                base[d.module() * channels + rails] += PlateDissipation.watts(m, st, d.fixedHigh());
                 continue;
             }
             int n = 0;
-            int[] slots = new int[rails];
-            double[] amps = new double[rails];
-            for (int r = 0; r < rails; r++) {
-                double low = StageDraw.amps(st, r, false);
-                double high = StageDraw.amps(st, r, true);
-                base[d.module() * rails + r] += low;
+            int[] slots = new int[channels];
+            double[] amps = new double[channels];
+            for (int c = 0; c < channels; c++) {
+                double low = c < rails ? StageDraw.amps(st, c, false) : PlateDissipation.watts(m, st, false);
+                double high = c < rails ? StageDraw.amps(st, c, true) : PlateDissipation.watts(m, st, true);
+                base[d.module() * channels + c] += low;
                 if (high != low) {
-                    slots[n] = d.module() * rails + r;
+                    slots[n] = d.module() * channels + c;
                     amps[n] = high - low;
                     n++;
                 }
@@ -104,6 +110,24 @@ public final class CurrentMeter {
     }
 
     /**
+     * Records a sample from a simulator after its {@code stepPhase()}: gate outputs as they
+     * settled in that phase, latch outputs as they loaded at its end. The sample is stamped
+     * with the phase just run and its cycle; before any phase ran, cycle 0 phase 0.
+     */
+    public void sample(Simulator sim, int lane) {
+        int next = sim.nextPhase();
+        long cycle = sim.cycle();
+        int phase;
+        if (next == 1) {
+            phase = cycle == 0 ? 0 : sim.phases();
+            cycle = Math.max(0, cycle - 1);
+        } else {
+            phase = next - 1;
+        }
+        sample(sim::value, lane, cycle, phase);
+    }
+
+    /**
      * Records one sample: {@code valueOfNet} gives a net's lanes (bit i = lane i) after the
      * phase settled, {@code cycle} (0-based) and {@code phase} (1-based) say when.
      */
@@ -123,7 +147,10 @@ public final class CurrentMeter {
         }
         Arrays.fill(railNow, 0);
         for (int s = 0; s < now.length; s++) {
-            railNow[s % rails] += now[s];
+            int c = s % channels;
+            if (c < rails) {
+                railNow[c] += now[s];
+            }
         }
         boolean first = samples == 0;
         for (int s = 0; s < now.length; s++) {
@@ -222,11 +249,34 @@ public final class CurrentMeter {
         return samples == 0 ? 0 : railMaxPhase[checkRail(rail)];
     }
 
+    /** A module's approximate plate dissipation at the last sample ({@link PlateDissipation}). */
+    public double nowPlateWatts(int module) {
+        return now[plateSlot(module)];
+    }
+
+    /** A module's time-averaged plate dissipation, the figure that heats its tubes. */
+    public double meanPlateWatts(int module) {
+        return samples == 0 ? Double.NaN : sum[plateSlot(module)] / samples;
+    }
+
+    public double peakPlateWatts(int module) {
+        return samples == 0 ? Double.NaN : max[plateSlot(module)];
+    }
+
+    private int plateSlot(int module) {
+        checkModule(module);
+        return module * channels + rails;
+    }
+
     private int slot(int module, int rail) {
+        checkModule(module);
+        return module * channels + checkRail(rail);
+    }
+
+    private void checkModule(int module) {
         if (module < 0 || module >= modules) {
             throw new IndexOutOfBoundsException("no module " + module);
         }
-        return module * rails + checkRail(rail);
     }
 
     private int checkRail(int rail) {

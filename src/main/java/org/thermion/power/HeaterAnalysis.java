@@ -236,7 +236,7 @@ public final class HeaterAnalysis {
                 HeaterRule rule = s.rule() >= 0 && s.rule() < m.heaterRules().size() ? m.heaterRules().get(s.rule()) : null;
                 if (rule != null && rule.series() && n < rule.count()) {
                     advice = "the rule strings " + rule.count() + " in series but only " + n
-                            + " heater(s) were left for this string; " + advice;
+                            + (n == 1 ? " heater was" : " heaters were") + " left for this string; " + advice;
                 }
                 findings.add(new Finding(h.overVoltage() ? Finding.Severity.ERROR : Finding.Severity.WARNING,
                         subject, what + ", outside the +-" + Math.round(TOLERANCE * 100) + " % band", advice));
@@ -269,6 +269,11 @@ public final class HeaterAnalysis {
         double a = Math.abs(v);
         String f = a >= 100 ? "%.0f" : a >= 10 ? "%.1f" : a >= 1 ? "%.2f" : "%.3f";
         return String.format(Locale.ROOT, f, v);
+    }
+
+    /** Amperes for a message: mA below 1 A. */
+    static String amps(double a) {
+        return Math.abs(a) < 1 ? num(a * 1e3) + " mA" : num(a) + " A";
     }
 
     static String pct(double fraction) {

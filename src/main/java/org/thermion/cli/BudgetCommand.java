@@ -1,0 +1,136 @@
+package org.thermion.cli;
+
+import org.thermion.asm.Assembler;
+import org.thermion.asm.Assembly;
+import org.thermion.lang.DiagnosticPrinter;
+import org.thermion.lang.Diagnostics;
+import org.thermion.model.Machine;
+import org.thermion.power.Budget;
+import org.thermion.power.CurrentMeter;
+import org.thermion.power.ProgramRun;
+import org.thermion.sim.InitMode;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+
+/**
+ * {@code budget MACHINE}: tube count, heater strings, plate and bias current and the supply
+ * check; with {@code --program} also the currents a simulated run draws. Exit 1 when a
+ * check fails (a rail over its limit, a heater outside its band, mixed heater currents).
+ */
+@Command(name = "budget", mixinStandardHelpOptions = true,
+        description = {"Tube and power budget of a machine: tubes per module and type, heater strings, "
+                + "plate and bias current per module and rail, and each rail's peak against its limit.",
+                "With --program the machine runs the program (simulator lane 0) and the report adds the now, "
+                        + "minimum, mean and peak current over every phase, and the cycle and phase of the peak.",
+                "Exit code 1 when a check fails: a rail over its limit, a heater over its rating band, "
+                        + "a string mixing heater currents without shunts."})
+final class BudgetCommand implements Callable<Integer> {
+    @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
+    Path machineFile;
+
+    @Option(names = "--program", paramLabel = "PROGRAM.asm", description = "Run this program and meter the currents.")
+    Path program;
+
+    @Option(names = "--inputs", paramLabel = "STIM.csv",
+            description = "Input bits during the run: CSV with a header `cycle,INPUT,...`, rows of a cycle and 0/1 values "
+                    + "holding from that cycle on.")
+    Path inputs;
+
+    @Option(names = "--cycles", paramLabel = "N", defaultValue = "1000",
+            description = "Machine cycles to run (default: ${DEFAULT-VALUE}).")
+    long cycles;
+
+    @Option(names = "--init", paramLabel = "MODE", defaultValue = "zero",
+            description = "Latches at power-up: zero, random:SEED or unknown (default: ${DEFAULT-VALUE}).")
+    String init;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "text, csv or json (default: ${DEFAULT-VALUE}).")
+    Format format;
+
+    @Mixin
+    CommonOptions common;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        if (cycles < 1) {
+            err.println("error: --cycles must be at least 1, not " + cycles);
+            err.flush();
+            return ExitCodes.BAD_INPUT;
+        }
+        InitMode mode;
+        try {
+            mode = InitMode.parse(init);
+        } catch (IllegalArgumentException e) {
+            err.println("error: --init: " + e.getMessage());
+            err.flush();
+            return ExitCodes.BAD_INPUT;
+        }
+        MachineLoader loader = new MachineLoader();
+        Machine m = loader.load(machineFile, err, false);
+        if (m == null) {
+            err.flush();
+            return ExitCodes.BAD_INPUT;
+        }
+        BudgetReport.Run run = null;
+        CurrentMeter meter = null;
+        if (program != null || inputs != null) {
+            if (program == null && m.rom() != null) {
+                err.println("error: --inputs needs --program: machine " + m.name() + " runs from a ROM");
+                err.flush();
+                return ExitCodes.BAD_INPUT;
+            }
+            Diagnostics diags = new Diagnostics();
+            long[] rom = null;
+            if (program != null) {
+                Assembly a = Assembler.assemble(m, program, loader.sources(), diags);
+                if (a == null || diags.hasErrors()) {
+                    new DiagnosticPrinter(loader.sources()).print(diags, err);
+                    err.flush();
+                    return ExitCodes.BAD_INPUT;
+                }
+                rom = a.words();
+            }
+            List<ProgramRun.InputChange> changes = List.of();
+            if (inputs != null) {
+                changes = StimulusCsv.read(inputs, m, loader.sources(), diags);
+                if (changes == null) {
+                    new DiagnosticPrinter(loader.sources()).print(diags, err);
+                    err.flush();
+                    return ExitCodes.BAD_INPUT;
+                }
+            }
+            if (!diags.all().isEmpty()) {
+                new DiagnosticPrinter(loader.sources()).print(diags, err);
+            }
+            meter = ProgramRun.run(m, rom, changes, cycles, mode);
+            run = new BudgetReport.Run(program == null ? null : program.toString(),
+                    inputs == null ? null : inputs.toString(), cycles, init);
+        }
+        Budget budget = new Budget(m, meter);
+        BudgetReport report = new BudgetReport(budget, run);
+        switch (format) {
+            case text -> ReportWriter.text(out, report.head(), report.tables(false), report.tail());
+            case csv -> ReportWriter.csv(out, report.fields(), report.tables(true));
+            case json -> ReportWriter.json(out, report.fields(), report.tables(true));
+            default -> throw new IllegalStateException("unknown format " + format);
+        }
+        out.flush();
+        err.flush();
+        return budget.failed() ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
+    }
+}

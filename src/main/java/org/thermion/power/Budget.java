@@ -1,0 +1,211 @@
+package org.thermion.power;
+
+import org.thermion.model.Machine;
+import org.thermion.model.Rail;
+import org.thermion.model.StageType;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A machine's tube and power budget: the tube count, the heater strings, plate and bias
+ * current per module and rail at every stage instance's lowest and highest possible draw
+ * (static), optionally the same measured over a simulation (a {@link CurrentMeter}), and
+ * the supply check: each rail's peak (heaters plus plate and bias) against its limit.
+ * The static lowest and highest add up each instance's own extremes, so they bound every
+ * state the logic can reach; the simulation shows the states a program really reaches.
+ */
+public final class Budget {
+
+    /**
+     * One rail's supply check. {@code stageAmps} is the plate and bias peak used: the
+     * simulation's when there is one, else the static highest. {@code voltsAtPeak} is the
+     * rail's voltage after its source resistance at that peak (magnitude).
+     */
+    public record Supply(int rail, double heaterAmps, double stageAmps, boolean simulated, double peakAmps,
+                         double limitAmps, double marginAmps, double voltsAtPeak) {
+        public boolean limited() {
+            return !Double.isInfinite(limitAmps) && !Double.isNaN(limitAmps);
+        }
+
+        public boolean over() {
+            return limited() && peakAmps > limitAmps;
+        }
+
+        /** Margin as a fraction of the limit; NaN without a limit. */
+        public double marginFraction() {
+            return limited() ? marginAmps / limitAmps : Double.NaN;
+        }
+    }
+
+    private final Machine m;
+    private final TubeCount tubes;
+    private final HeaterAnalysis heaters;
+    private final CurrentMeter meter;
+    private final double[][] low;
+    private final double[][] high;
+    private final boolean[][] draws;
+    private final double[][] plate;
+    private final List<Supply> supply;
+    private final List<Finding> findings;
+
+    /** The static budget, without a simulation. */
+    public Budget(Machine m) {
+        this(m, null);
+    }
+
+    /** The budget with a simulation's meter; {@code meter} may be null or hold no samples. */
+    public Budget(Machine m, CurrentMeter meter) {
+        this.m = m;
+        this.tubes = new TubeCount(m);
+        this.heaters = new HeaterAnalysis(m);
+        this.meter = meter != null && meter.samples() > 0 ? meter : null;
+        int mods = m.modules().size();
+        int rails = m.rails().size();
+        low = new double[mods][rails];
+        high = new double[mods][rails];
+        draws = new boolean[mods][rails];
+        plate = new double[mods][2];
+        for (DrawingInstance d : DrawingInstances.of(m)) {
+            StageType st = m.stages().get(d.stage());
+            for (int r = 0; r < rails; r++) {
+                if (d.followsNet()) {
+                    low[d.module()][r] += StageDraw.minAmps(st, r);
+                    high[d.module()][r] += StageDraw.maxAmps(st, r);
+                } else {
+                    double a = StageDraw.amps(st, r, d.fixedHigh());
+                    low[d.module()][r] += a;
+                    high[d.module()][r] += a;
+                }
+                draws[d.module()][r] |= StageDraw.drawsOn(st, r);
+            }
+            double pl = PlateDissipation.watts(m, st, false);
+            double ph = PlateDissipation.watts(m, st, true);
+            plate[d.module()][0] += d.followsNet() ? Math.min(pl, ph) : PlateDissipation.watts(m, st, d.fixedHigh());
+            plate[d.module()][1] += d.followsNet() ? Math.max(pl, ph) : PlateDissipation.watts(m, st, d.fixedHigh());
+        }
+        List<Supply> s = new ArrayList<>();
+        List<Finding> f = new ArrayList<>(heaters.findings());
+        for (int r = 0; r < rails; r++) {
+            Rail rail = m.rails().get(r);
+            double heat = heaters.railAmps(r);
+            double stage = this.meter != null ? this.meter.peakRail(r) : staticHighRail(r);
+            double peak = heat + stage;
+            Supply line = new Supply(r, heat, stage, this.meter != null, peak, rail.limitAmps(),
+                    rail.limitAmps() - peak, Math.abs(rail.volts()) - peak * rail.sourceOhms());
+            s.add(line);
+            String subject = "rail " + rail.name();
+            if (line.over()) {
+                f.add(new Finding(Finding.Severity.ERROR, subject,
+                        "peak " + HeaterAnalysis.amps(peak) + " ("
+                                + (heat > 0 ? "heaters " + HeaterAnalysis.amps(heat) + ", " : "")
+                                + "plate and bias " + HeaterAnalysis.amps(stage)
+                                + (line.simulated() ? " in the simulation" : " with every stage at its highest draw")
+                                + ") exceeds its limit of " + HeaterAnalysis.amps(rail.limitAmps()),
+                        "raise the supply's rating or move load to another rail"));
+            } else if (this.meter != null && line.limited() && heat + staticHighRail(r) > rail.limitAmps()) {
+                f.add(new Finding(Finding.Severity.WARNING, subject,
+                        "with every stage at its highest draw the rail would take "
+                                + HeaterAnalysis.amps(heat + staticHighRail(r)) + ", over its limit of "
+                                + HeaterAnalysis.amps(rail.limitAmps()) + "; the program run stays within it",
+                        "other programs or inputs may reach the limit"));
+            }
+        }
+        supply = List.copyOf(s);
+        findings = List.copyOf(f);
+    }
+
+    public Machine machine() {
+        return m;
+    }
+
+    public TubeCount tubes() {
+        return tubes;
+    }
+
+    public HeaterAnalysis heaters() {
+        return heaters;
+    }
+
+    /** The simulation's meter, or null for a static budget. */
+    public CurrentMeter meter() {
+        return meter;
+    }
+
+    public boolean simulated() {
+        return meter != null;
+    }
+
+    /** A module's plate and bias current on a rail with every instance at its lowest draw. */
+    public double staticLow(int module, int rail) {
+        return low[module][rail];
+    }
+
+    /** A module's plate and bias current on a rail with every instance at its highest draw. */
+    public double staticHigh(int module, int rail) {
+        return high[module][rail];
+    }
+
+    /** True when some stage instance of the module declares a draw on the rail. */
+    public boolean drawsOn(int module, int rail) {
+        return draws[module][rail];
+    }
+
+    /** True when some stage instance of the machine declares a draw on the rail. */
+    public boolean railHasDraws(int rail) {
+        for (boolean[] d : draws) {
+            if (d[rail]) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    public double staticLowRail(int rail) {
+        double a = 0;
+        for (double[] l : low) {
+            a += l[rail];
+        }
+        return a;
+    }
+
+    public double staticHighRail(int rail) {
+        double a = 0;
+        for (double[] h : high) {
+            a += h[rail];
+        }
+        return a;
+    }
+
+    /** A module's approximate plate dissipation with every instance at its lowest ({@code false}) or highest draw. */
+    public double staticPlateWatts(int module, boolean highest) {
+        return plate[module][highest ? 1 : 0];
+    }
+
+    /**
+     * Power a module takes from all supplies: its heater share plus plate and bias current
+     * times rail voltage, at the simulation's mean when there is one, else at the highest draw.
+     */
+    public double supplyWatts(int module) {
+        double w = heaters.moduleWatts(module);
+        for (int r = 0; r < m.rails().size(); r++) {
+            double a = meter != null ? meter.meanModule(module, r) : high[module][r];
+            w += a * Math.abs(m.rails().get(r).volts());
+        }
+        return w;
+    }
+
+    public List<Supply> supply() {
+        return supply;
+    }
+
+    /** Heater findings in string order, then supply findings in rail order. */
+    public List<Finding> findings() {
+        return findings;
+    }
+
+    /** True when a finding is an error: the check failed. */
+    public boolean failed() {
+        return findings.stream().anyMatch(Finding::isError);
+    }
+}
