@@ -257,7 +257,7 @@ final class TransientRun {
 
     private boolean railBypassed(int r) {
         for (int k = 0; k < ns; k++) {
-            if (net.softs.get(k).rail() == r && bypassed[k]) {
+            if (net.softs.get(k).rail() == r && bypassed[k] && ohms[k] > 0) {
                 return true;
             }
         }
