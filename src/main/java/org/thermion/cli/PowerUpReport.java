@@ -356,7 +356,7 @@ final class PowerUpReport {
     // ---- helpers -------------------------------------------------------------------------
 
     private static String g(double v) {
-        return String.format(Locale.ROOT, "%.6g", v);
+        return Double.isFinite(v) ? num(v) : "";
     }
 
     private static String f0(double v) {
