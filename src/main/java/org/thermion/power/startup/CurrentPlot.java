@@ -59,6 +59,22 @@ public final class CurrentPlot {
             max = Math.max(max, a);
         }
         boolean showLimit = Double.isFinite(limit) && limit > 0 && limit <= 1.25 * Math.max(max, 1e-12);
+        // Below an ampere the axis reads in milliamperes.
+        String unitLabel = "A";
+        double scale = 1;
+        if (Math.max(max, showLimit ? limit : 0) < 1) {
+            unitLabel = "mA";
+            scale = 1000;
+        }
+        if (scale != 1) {
+            double[] scaled = new double[amps.length];
+            for (int i = 0; i < amps.length; i++) {
+                scaled[i] = amps[i] * scale;
+            }
+            amps = scaled;
+            max *= scale;
+            limit *= scale;
+        }
         double top = Math.max(max, showLimit ? limit : 0);
         double yStep = niceStep(top > 0 ? top : 1, Math.max(2, Math.min(5, rows / 2)));
         double yMax = Math.ceil((top > 0 ? top : 1) / yStep - 1e-9) * yStep;
@@ -75,7 +91,6 @@ public final class CurrentPlot {
             labelAt[Math.min(rows, row)] = s;
             labelWidth = Math.max(labelWidth, s.length());
         }
-        String unitLabel = "A";
         labelWidth = Math.max(labelWidth, unitLabel.length());
         int cols = Math.max(8, width - labelWidth - (showLimit ? 9 : 4));
         double span = t1 - t0;

@@ -165,7 +165,7 @@ final class TransientRun {
                     bge = 0;
                     vn = vs / (1 + g * rser);
                 }
-                demand = (vs - vn) / rser;
+                demand = (g + bg) * vn - bge;   // the same as (vs - vn) / rser, without cancellation
             } else {
                 vn = vs;
                 demand = g * vs + Math.max(0, bg * vs - bge);
@@ -257,7 +257,7 @@ final class TransientRun {
 
     private boolean railBypassed(int r) {
         for (int k = 0; k < ns; k++) {
-            if (net.softs.get(k).rail() == r && bypassed[k]) {
+            if (net.softs.get(k).rail() == r && bypassed[k] && ohms[k] > 0) {
                 return true;
             }
         }

@@ -1,0 +1,224 @@
+package org.thermion.cli;
+
+import org.thermion.model.Machine;
+import org.thermion.power.startup.CurrentPlot;
+import org.thermion.power.startup.DrawMode;
+import org.thermion.power.startup.PowerUpOptions;
+import org.thermion.power.startup.PowerUpResult;
+import org.thermion.power.startup.ResistorSweep;
+import org.thermion.power.startup.StartupNetwork;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.List;
+import java.util.concurrent.Callable;
+
+/** {@code powerup MACHINE}: the switch-on transient of every rail, the soft start and its relay driver. */
+@Command(name = "powerup", mixinStandardHelpOptions = true,
+        description = {"Simulate switch-on: heaters warming from cold, rail currents, the soft-start resistor and its",
+                "bypass relay, and the thyratron relay driver. Exit 1 when a supply goes into its current limit, a",
+                "soft-start resistor runs over its rating or is never bypassed, or the relay driver check fails."})
+final class PowerUpCommand implements Callable<Integer> {
+    @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
+    Path file;
+
+    @Option(names = "--time", paramLabel = "T", description = "Simulated time with its unit (default: ${DEFAULT-VALUE}).",
+            defaultValue = "30s")
+    String time;
+
+    @Option(names = "--resistor", paramLabel = "[NAME=]R",
+            description = "Soft-start resistor instead of the declared one, with unit (2ohm, \"2 ohm\", 500mohm); NAME picks the soft start when there are several.")
+    List<String> resistors = List.of();
+
+    @Option(names = "--sweep", paramLabel = "[NAME=]RMIN..RMAX:STEP",
+            description = "Tabulate both current peaks against the resistor (e.g. 0.5ohm..5ohm:0.25ohm) and recommend a value.")
+    String sweep;
+
+    @Option(names = "--csv", paramLabel = "FILE", description = "Write the time series (RFC 4180) to FILE.")
+    Path csv;
+
+    @Option(names = "--format", paramLabel = "FORMAT", description = "text, json or csv (the time series on standard output); default ${DEFAULT-VALUE}.",
+            defaultValue = "text")
+    Format format;
+
+    @Option(names = "--draw", paramLabel = "MODE", description = "Steady stage draws: highest (of output low and high) or mean; default ${DEFAULT-VALUE}.",
+            defaultValue = "highest")
+    String draw;
+
+    @Option(names = "--width", paramLabel = "N", description = "Plot width in columns (default ${DEFAULT-VALUE}).", defaultValue = "78")
+    int width;
+
+    @Option(names = "--no-plot", description = "Leave out the current plots.")
+    boolean noPlot;
+
+    @Option(names = "--ascii", description = "Draw plots with ASCII characters only.")
+    boolean ascii;
+
+    @Mixin
+    CommonOptions common;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        PowerUpOptions o;
+        PowerUpArgs.Named<PowerUpArgs.Range> range = null;
+        List<PowerUpArgs.Named<Double>> rs;
+        DrawMode mode;
+        try {
+            double seconds = PowerUpArgs.seconds(time, "--time");
+            if (!(seconds > 0) || seconds > 3600) {
+                throw new IllegalArgumentException("--time must be above 0 and at most an hour, got '" + time + "'");
+            }
+            mode = switch (draw.toLowerCase(java.util.Locale.ROOT)) {
+                case "highest" -> DrawMode.HIGHEST;
+                case "mean" -> DrawMode.MEAN;
+                default -> throw new IllegalArgumentException("--draw takes highest or mean, got '" + draw + "'");
+            };
+            if (width < 30 || width > 400) {
+                throw new IllegalArgumentException("--width must be between 30 and 400 columns");
+            }
+            rs = resistors.stream().map(PowerUpArgs::resistor).toList();
+            if (sweep != null) {
+                range = PowerUpArgs.sweep(sweep);
+            }
+            o = PowerUpOptions.defaults().withSeconds(seconds).withDrawMode(mode)
+                    .withSampleSeconds(Math.max(0.001, seconds / 3000));
+        } catch (IllegalArgumentException e) {
+            err.println("error: " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        MachineLoader loader = new MachineLoader();
+        Machine m = loader.load(file, err, false);
+        if (m == null) {
+            return ExitCodes.BAD_INPUT;
+        }
+        if (m.softStarts().isEmpty() && (!rs.isEmpty() || range != null)) {
+            err.println("error: " + file + " declares no soft start, so --resistor and --sweep have nothing to change");
+            return ExitCodes.BAD_INPUT;
+        }
+        StartupNetwork net = StartupNetwork.of(m, o.assumptions(), mode);
+        try {
+            for (PowerUpArgs.Named<Double> r : rs) {
+                o = o.withResistor(softStartName(net, r.softStart(), "--resistor"), r.value());
+            }
+            if (range != null) {
+                String name = softStartName(net, range.softStart(), "--sweep");
+                double[] values = ResistorSweep.range(range.value().from(), range.value().to(), range.value().step());
+                ResistorSweep.Result sr = ResistorSweep.run(net, o, name, values);
+                if (format == Format.json) {
+                    out.print(PowerUpReport.sweepJson(sr));
+                } else if (format == Format.csv) {
+                    out.print(sweepCsv(sr));
+                } else {
+                    PowerUpReport.sweepText(out, sr);
+                }
+                out.flush();
+                return sr.recommended() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
+            }
+        } catch (IllegalArgumentException e) {
+            err.println("error: " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+        PowerUpResult result = net.solve(o);
+        PowerUpReport report = new PowerUpReport(result);
+        if (csv != null) {
+            String problem = writeAtomically(csv, report.csv(), loader, file);
+            if (problem != null) {
+                err.println("error: " + problem);
+                return ExitCodes.BAD_INPUT;
+            }
+        }
+        switch (format) {
+            case json -> out.print(report.json());
+            case csv -> out.print(report.csv());
+            default -> report.text(out, width, !noPlot, ascii ? CurrentPlot.Style.ASCII : CurrentPlot.Style.BLOCKS);
+        }
+        out.flush();
+        return report.ok() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
+    }
+
+    private String softStartName(StartupNetwork net, String given, String option) {
+        List<String> names = net.softStartNames();
+        if (given != null) {
+            if (!names.contains(given)) {
+                throw new IllegalArgumentException(option + ": no soft start named '" + given + "'; the machine has: " + String.join(", ", names));
+            }
+            return given;
+        }
+        if (names.size() > 1) {
+            throw new IllegalArgumentException(option + ": the machine has several soft starts (" + String.join(", ", names)
+                    + "); write NAME=VALUE");
+        }
+        return names.get(0);
+    }
+
+    private static String sweepCsv(ResistorSweep.Result s) {
+        StringBuilder b = new StringBuilder("ohms,switch_on_peak_A,bypass_peak_A,bypass_s,peak_demand_A,mean_W,peak_W,energy_J,feasible,recommended\r\n");
+        for (int i = 0; i < s.rows().size(); i++) {
+            ResistorSweep.Row r = s.rows().get(i);
+            b.append(String.join(",", g(r.ohms()), g(r.switchOnPeak()), g(r.bypassPeak()), g(r.bypassTime()), g(r.peakDemand()),
+                    g(r.meanWatts()), g(r.peakWatts()), g(r.joules()), String.valueOf(r.feasible()), String.valueOf(i == s.best())))
+                    .append("\r\n");
+        }
+        return b.toString();
+    }
+
+    private static String g(double v) {
+        return Double.isNaN(v) ? "" : String.format(java.util.Locale.ROOT, "%.6g", v);
+    }
+
+    /** Writes {@code text} to {@code target} through a temporary file and a rename; refuses to overwrite an input. */
+    static String writeAtomically(Path target, String text, MachineLoader loader, Path input) {
+        Path abs = target.toAbsolutePath().normalize();
+        if (loader.sources().line(abs, 1) != null || loader.sources().line(target.normalize(), 1) != null
+                || sameFile(abs, input)) {
+            return "refusing to write " + target + ": it is an input of this run";
+        }
+        Path dir = abs.getParent();
+        try {
+            if (dir != null && !Files.isDirectory(dir)) {
+                return "cannot write " + target + ": no directory " + dir;
+            }
+            if (Files.isDirectory(abs)) {
+                return "cannot write " + target + ": it is a directory";
+            }
+            Path tmp = Files.createTempFile(dir, "." + abs.getFileName(), ".tmp");
+            try {
+                Files.writeString(tmp, text, StandardCharsets.UTF_8);
+                try {
+                    Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+                } catch (AtomicMoveNotSupportedException e) {
+                    Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
+                }
+            } finally {
+                Files.deleteIfExists(tmp);
+            }
+            return null;
+        } catch (IOException e) {
+            return "cannot write " + target + ": " + e.getMessage();
+        }
+    }
+
+    private static boolean sameFile(Path a, Path b) {
+        try {
+            return Files.exists(a) && Files.exists(b) && Files.isSameFile(a, b);
+        } catch (IOException e) {
+            return false;
+        }
+    }
+}

@@ -1,0 +1,78 @@
+package org.thermion.power.startup;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Solves the transient for a range of soft-start resistor values and recommends the one that
+ * makes the larger of the two current peaks (switch-on, bypass) smallest, among the values whose
+ * supply stays within its current limit and whose resistor stays within its rating (mean
+ * dissipation while in circuit) and actually gets bypassed within the run.
+ */
+public final class ResistorSweep {
+    private ResistorSweep() {
+    }
+
+    /** One resistor value. */
+    public record Row(double ohms, double switchOnPeak, double bypassPeak, double bypassTime, double peakDemand,
+                      double meanWatts, double peakWatts, double joules, boolean withinLimit, boolean withinRating,
+                      boolean bypassed) {
+        public double worstPeak() {
+            return Double.isNaN(bypassPeak) ? switchOnPeak : Math.max(switchOnPeak, bypassPeak);
+        }
+
+        public boolean feasible() {
+            return withinLimit && withinRating && bypassed;
+        }
+    }
+
+    /** The table and the recommendation ({@code best} is -1 when no value is feasible). */
+    public record Result(String softStart, String rail, double limitAmps, double ratedWatts, List<Row> rows, int best) {
+        public Row recommended() {
+            return best < 0 ? null : rows.get(best);
+        }
+    }
+
+    /** The values {@code from, from + step, ...} up to {@code to} (inclusive, allowing for rounding). */
+    public static double[] range(double from, double to, double step) {
+        if (!(step > 0) || !(to >= from) || !(from >= 0)) {
+            throw new IllegalArgumentException("a sweep needs 0 <= from <= to and a positive step");
+        }
+        long count = (long) Math.floor((to - from) / step + 1e-9) + 1;
+        if (count > 10_000) {
+            throw new IllegalArgumentException("a sweep of " + count + " values is too many (at most 10000)");
+        }
+        double[] v = new double[(int) count];
+        for (int i = 0; i < count; i++) {
+            v[i] = from + i * step;
+        }
+        return v;
+    }
+
+    /** Runs the sweep on soft start {@code softStart} of {@code net}. */
+    public static Result run(StartupNetwork net, PowerUpOptions base, String softStart, double[] ohms) {
+        int k = net.softStartNames().indexOf(softStart);
+        if (k < 0) {
+            throw new IllegalArgumentException("no soft start named '" + softStart + "'");
+        }
+        StartupNetwork.Soft soft = net.softs.get(k);
+        int rail = soft.rail();
+        PowerUpOptions o = base.withSampleSeconds(0);
+        List<Row> rows = new ArrayList<>();
+        int best = -1;
+        for (double r : ohms) {
+            PowerUpResult res = net.solve(o.withResistor(softStart, r));
+            RailTransient rt = res.rail(rail);
+            SoftStartResult sr = res.softStarts().get(k);
+            boolean bypassed = r == 0 || sr.bypassed();
+            Row row = new Row(r, rt.switchOnPeak(), rt.bypassPeak(), sr.bypassTime(), rt.peakDemand(), sr.meanWatts(),
+                    sr.peakWatts(), sr.joules(), rt.withinLimit(), sr.withinRating(), bypassed);
+            rows.add(row);
+            if (row.feasible() && (best < 0 || row.worstPeak() < rows.get(best).worstPeak())) {
+                best = rows.size() - 1;
+            }
+        }
+        return new Result(softStart, net.machine.rails().get(rail).name(), net.machine.rails().get(rail).limitAmps(),
+                soft.ratedWatts(), List.copyOf(rows), best);
+    }
+}

@@ -1,0 +1,153 @@
+package org.thermion.cli;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+@Timeout(value = 60, unit = TimeUnit.SECONDS)
+class PowerUpCommandTest {
+    private static final Path DEMO = Path.of("examples", "pumpstation", "pumpstation.machine");
+
+    @TempDir
+    Path dir;
+
+    record Run(int code, String out, String err) {
+    }
+
+    private static Run run(String... args) {
+        StringWriter out = new StringWriter(), err = new StringWriter();
+        int code = Main.commandLine().setOut(new PrintWriter(out, true)).setErr(new PrintWriter(err, true)).execute(args);
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    /** 88 6AU6 inverters, heaters four to a string on 24 V behind a soft start bypassed after 10 s (our own scenario). */
+    private Path inverters() throws IOException {
+        StringBuilder chain = new StringBuilder();
+        String text = """
+                rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
+                rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
+                rail heat  { voltage 24 V; source 0.05 ohm; limit 40 A }
+                heaters on heat { series 4 of 6AU6 across machine }
+                softstart heat_soft on heat {
+                  resistor 5 ohm rated 150 W
+                  bypass after 10 s
+                }
+                realize { not pentode_inverter }
+                module chain {
+                  in a
+                  out y
+                  net n[87]
+                  n[0] = !a
+                  for k in 1..86 { n[k] = !n[k - 1] }
+                  y = !n[86]
+                }
+                machine inverters {
+                  clock { phases 1; period 100 us }
+                  top chain
+                  inputs a
+                  outputs y
+                }
+                """;
+        Path p = dir.resolve("inverters.machine");
+        Files.writeString(p, text + chain);
+        return p;
+    }
+
+    @Test
+    void reportsEveryPartOfTheDemoAndFailsItsOverloadedResistor() {
+        Run r = run("powerup", DEMO.toString());
+        // The demo's 0.4 ohm resistor averages more than its 100 W rating before the bypass, and the heater
+        // supply reaches its 40 A limit at the bypass: exit 1.
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.CHECK_FAILED);
+        assertThat(r.out()).contains("rails:", "soft start heater_soft on heat", "heaters:", "relay driver: 2D21",
+                "rail heat: current against time", "bypass", "caution:");
+        assertThat(r.out()).contains("OVER its 100 W rating");
+    }
+
+    @Test
+    void writesAnRfc4180TimeSeries() throws IOException {
+        Path csv = dir.resolve("heat.csv");
+        Run r = run("powerup", inverters().toString(), "--csv", csv.toString(), "--no-plot", "--time", "12s");
+        assertThat(r.code()).as(r.err() + r.out()).isIn(ExitCodes.OK, ExitCodes.CHECK_FAILED);
+        String text = Files.readString(csv);
+        String[] lines = text.split("\r\n", -1);
+        assertThat(lines[0]).startsWith("time_s,bplus_A,bias_A,heat_A,bplus_V,bias_V,heat_V,");
+        assertThat(lines[1]).startsWith("0,");
+        assertThat(text).doesNotContain("\n\n").endsWith("\r\n");
+        int columns = lines[0].split(",").length;
+        for (int i = 1; i < lines.length - 1; i++) {
+            assertThat(lines[i].split(",")).hasSize(columns);
+        }
+        assertThat(lines.length).isGreaterThan(1000);
+        assertThat(dir.toFile().list()).containsExactlyInAnyOrder("inverters.machine", "heat.csv");
+    }
+
+    @Test
+    void neverWritesOverTheMachineFile() throws IOException {
+        Path m = inverters();
+        String before = Files.readString(m);
+        Run r = run("powerup", m.toString(), "--csv", m.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("refusing to write");
+        assertThat(Files.readString(m)).isEqualTo(before);
+    }
+
+    @Test
+    void jsonSummaryCarriesPeaksAndTheCaution() throws IOException {
+        Run r = run("powerup", inverters().toString(), "--format", "json");
+        assertThat(r.out()).startsWith("{").contains("\"rails\"", "\"switchOnPeakAmps\"", "\"bypassSeconds\": 10.01",
+                "\"softStarts\"", "\"caution\"");
+        long open = r.out().chars().filter(c -> c == '{').count(), close = r.out().chars().filter(c -> c == '}').count();
+        assertThat(open).isEqualTo(close);
+        assertThat(r.out()).doesNotContain("NaN", "Infinity");
+    }
+
+    @Test
+    void sweepRecommendsTheBalancingResistor() throws IOException {
+        Run r = run("powerup", inverters().toString(), "--sweep", "1ohm..3ohm:0.25ohm");
+        assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
+        assertThat(r.out()).contains("<- best", "recommended: 1.75 ohm");
+    }
+
+    @Test
+    void resistorOverrideTakesUnitsInEitherSpelling() throws IOException {
+        Path m = inverters();
+        Run a = run("powerup", m.toString(), "--resistor", "2ohm", "--no-plot");
+        Run b = run("powerup", m.toString(), "--resistor", "2 ohm", "--no-plot");
+        assertThat(a.out()).contains("soft start heat_soft on heat: 2.00 ohm");
+        assertThat(a.out()).isEqualTo(b.out());
+    }
+
+    @Test
+    void aResistorWithoutUnitIsRefused() throws IOException {
+        Run r = run("powerup", inverters().toString(), "--resistor", "2");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).isEqualTo(golden("powerup-no-unit.txt"));
+    }
+
+    @Test
+    void aBadMachineShowsWhereAndExitsTwo() throws IOException {
+        Path bad = dir.resolve("bad.machine");
+        Files.writeString(bad, "rail heat { voltage 24 V; source 0.05 ohm; limit 40 X }\n");
+        Run r = run("powerup", bad.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("bad.machine:1:").doesNotContain("Exception");
+    }
+
+    private static String golden(String name) throws IOException {
+        try (InputStream in = PowerUpCommandTest.class.getResourceAsStream(name)) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+    }
+}

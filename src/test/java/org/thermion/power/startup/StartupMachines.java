@@ -1,0 +1,88 @@
+package org.thermion.power.startup;
+
+import org.thermion.elab.Elaborator;
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.SourceSet;
+import org.thermion.model.Machine;
+
+import java.nio.file.Path;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** Machine descriptions written for the power-up tests (our own scenarios). */
+final class StartupMachines {
+    private StartupMachines() {
+    }
+
+    /**
+     * A chain of {@code tubes} 6AU6 inverters (6.3 V 0.3 A heaters), heaters four to a string on
+     * a 24 V rail behind a soft-start resistor bypassed after {@code bypass}.
+     */
+    static String inverters(int tubes, String resistor, String bypass, String heaterLimit) {
+        return """
+                rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
+                rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
+                rail heat  { voltage 24 V; source 0.05 ohm; limit %s }
+
+                heaters on heat {
+                  series 4 of 6AU6 across machine
+                }
+
+                softstart heat_soft on heat {
+                  resistor %s rated 150 W
+                  bypass %s
+                }
+
+                realize { not pentode_inverter }
+
+                module chain {
+                  in a
+                  out y
+                  net n[%d]
+                  n[0] = !a
+                  for k in 1..%d {
+                    n[k] = !n[k - 1]
+                  }
+                  y = !n[%d]
+                }
+
+                machine inverters {
+                  clock { phases 1; period 100 us }
+                  top chain
+                  inputs a
+                  outputs y
+                }
+                """.formatted(heaterLimit, resistor, bypass, tubes - 1, tubes - 2, tubes - 2);
+    }
+
+    /** The inverter machine with its bypass worked by a 2D21 whose own heater sits on a stiff 6.3 V rail. */
+    static String invertersWithThyratron(int tubes, String plate) {
+        String base = inverters(tubes, "2 ohm", "when pilot_relay warm", "40 A");
+        return base.replace("rail bias ", """
+                rail pilot { voltage 6.3 V; source 0.01 ohm; limit 5 A }
+                rail relay { voltage 24 V; source 0 ohm; limit 500 mA }
+                stage pilot_relay : relay {
+                  tube 2D21
+                  sections 1
+                  fanin 1
+                  load %s from relay
+                  draw high relay 100 mA
+                  draw low relay 0 mA
+                }
+                rail bias """.formatted(plate)).replace("heaters on heat {", """
+                heaters on pilot {
+                  parallel 2D21
+                }
+                heaters on heat {""").replace("  bypass when", """
+                  relay { coil 100 ohm; rated 12 V; pickup 7.2 V; dropout 1.2 V; operate 10 ms }
+                  bypass when""");
+    }
+
+    static Machine elaborate(String text) {
+        Diagnostics d = new Diagnostics();
+        Machine m = new Elaborator(new SourceSet(), d).elaborateText(Path.of("test.machine"), text);
+        assertThat(d.hasErrors()).as(d.toString()).isFalse();
+        assertThat(m).isNotNull();
+        return m;
+    }
+}
