@@ -21,10 +21,9 @@ expr        : '(' expr ')'                                 # parenExpr
             ;
 
 DIRECTIVE   : '.' [A-Za-z_] [A-Za-z0-9_]* ;
-NUMBER      : '0' [xX] [0-9a-fA-F_]+
-            | '0' [bB] [01_]+
-            | [0-9] [0-9_]*
-            ;
+// Anything that starts with a digit is one number token (0x1F, 0b101, 31, 1_000); the
+// reader checks its digits, so `0x` or `12ab` get a clear message rather than a split token.
+NUMBER      : [0-9] [0-9a-zA-Z_]* ;
 NAME        : [A-Za-z_] [A-Za-z0-9_]* ;
 COMMENT     : ';' ~[\r\n]* -> skip ;
 WS          : [ \t\r\n]+ -> skip ;

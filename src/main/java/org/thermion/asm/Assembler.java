@@ -19,6 +19,7 @@ import org.thermion.model.Machine;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -57,6 +58,9 @@ public final class Assembler {
         String text;
         try {
             text = Files.readString(program, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            d.error(new Span(program, 0, 0, 0, 0), "cannot read program " + program + ": no such file", null);
+            return null;
         } catch (IOException e) {
             d.error(new Span(program, 0, 0, 0, 0), "cannot read program " + program + ": " + e.getMessage(), null);
             return null;

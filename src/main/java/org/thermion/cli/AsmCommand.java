@@ -58,6 +58,14 @@ final class AsmCommand implements Callable<Integer> {
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
+        if (output != null) {
+            Path dir = output.toAbsolutePath().getParent();
+            if (dir == null || !Files.isDirectory(dir)) {
+                err.println("error: cannot write " + output + ": directory " + dir + " does not exist");
+                err.flush();
+                return ExitCodes.BAD_INPUT;
+            }
+        }
         MachineLoader loader = new MachineLoader();
         Machine m = loader.load(machineFile, err, false);
         if (m == null) {

@@ -116,8 +116,11 @@ public final class ProgramReader {
             radix = 2;
             s = s.substring(2);
         }
-        if (s.isEmpty()) {
-            diags.error(span(t, line), "number '" + t.getText() + "' has no digits", "write e.g. 0x1F, 0b101 or 31");
+        String digits = radix == 16 ? "[0-9a-fA-F]+" : radix == 2 ? "[01]+" : "[0-9]+";
+        if (!s.matches(digits)) {
+            String kind = radix == 16 ? "hexadecimal" : radix == 2 ? "binary" : "decimal";
+            diags.error(span(t, line), "'" + t.getText() + "' is not a " + kind + " number",
+                    "write numbers as 31, 0x1F or 0b11111 (underscores may separate digits)");
             throw new BadNumber();
         }
         BigInteger v = new BigInteger(s, radix);
@@ -142,6 +145,32 @@ public final class ProgramReader {
         Token b = ctx.getStop() == null || ctx.getStop().getTokenIndex() < a.getTokenIndex() ? a : ctx.getStop();
         int len = b.getText() == null ? 1 : Math.max(1, b.getText().length());
         return new Span(file, line, a.getCharPositionInLine() + 1, line, b.getCharPositionInLine() + 1 + len);
+    }
+
+    /** ANTLR's message in the tool's words; a line's end of input is the end of the line. */
+    static String reword(String msg, String found) {
+        String what = found == null ? "input" : "end of line".equals(found) ? found : "'" + found + "'";
+        if (msg.startsWith("token recognition error at: ")) {
+            return "unexpected character " + msg.substring("token recognition error at: ".length());
+        }
+        if (msg.startsWith("mismatched input") || msg.startsWith("extraneous input")) {
+            int exp = msg.indexOf(" expecting ");
+            if (exp < 0) {
+                return "syntax error: unexpected " + what;
+            }
+            String expected = msg.substring(exp + " expecting ".length()).replace("{", "").replace("}", "")
+                    .replace("<EOF>", "end of line").replace("DIRECTIVE", "a directive").replace("NAME", "a name")
+                    .replace("NUMBER", "a number");
+            return "syntax error: unexpected " + what + ", expected " + expected;
+        }
+        if (msg.startsWith("missing ")) {
+            int at = msg.indexOf(" at ");
+            return "syntax error: " + (at >= 0 ? msg.substring(0, at) : msg).replace("<EOF>", "end of line") + " here";
+        }
+        if (msg.startsWith("no viable alternative")) {
+            return "syntax error: cannot make sense of " + what + " here";
+        }
+        return "syntax error: " + msg.replace("<EOF>", "end of line");
     }
 
     /** A number the reader already reported; the line is dropped. */
@@ -173,9 +202,7 @@ public final class ProgramReader {
                 found = t.getType() == Token.EOF ? "end of line" : t.getText();
                 len = t.getType() == Token.EOF ? 1 : Math.max(1, t.getText().length());
             }
-            String message = SyntaxWording.reword(msg, found).replace("end of file", "end of line")
-                    .replace("DIRECTIVE", "a directive");
-            diags.error(new Span(file, line, col + 1, line, col + 1 + len), message, SHAPE);
+            diags.error(new Span(file, line, col + 1, line, col + 1 + len), reword(msg, found), SHAPE);
         }
     }
 }

@@ -33,7 +33,7 @@ class AssemblerErrorsTest {
 
     @ParameterizedTest
     @ValueSource(strings = {"unknown-mnemonic", "too-wide", "undefined-label", "duplicate-label", "rom-too-large",
-            "syntax", "directives", "several"})
+            "syntax", "numbers", "directives", "several"})
     void printsTheGoldenDiagnostics(String name) throws IOException {
         String text = Files.readString(DIR.resolve(name + ".asm"), StandardCharsets.UTF_8);
         SourceSet src = new SourceSet();

@@ -32,6 +32,9 @@ abstract class Level {
 
     abstract long cycle();
 
+    /** The address of the next instruction. */
+    abstract int pc();
+
     abstract boolean stateBit(String isaName);
 
     boolean output(String name) {
@@ -89,6 +92,11 @@ abstract class Level {
         }
 
         @Override
+        int pc() {
+            return in.pc();
+        }
+
+        @Override
         boolean stateBit(String isaName) {
             return in.state(isaName);
         }
@@ -119,6 +127,11 @@ abstract class Level {
         @Override
         long cycle() {
             return sim.cycle();
+        }
+
+        @Override
+        int pc() {
+            return sim.pc(0);
         }
 
         @Override
