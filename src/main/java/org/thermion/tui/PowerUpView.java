@@ -23,8 +23,8 @@ import java.util.concurrent.TimeoutException;
  * opens, so the machine screen never waits for it.
  */
 public final class PowerUpView {
-    private static final String CAUTION = "B+, heater and mains supplies can injure or kill. These are planning "
-            + "estimates: confirm on the bench, and follow local codes and qualified practice.";
+    private static final String[] CAUTION = {"Caution: B+, heater and mains supplies can injure or kill.",
+        "These are planning estimates: confirm them on the bench; follow local codes and qualified practice."};
 
     private final Machine machine;
     private final PowerUpOptions options;
@@ -114,7 +114,7 @@ public final class PowerUpView {
             if (row >= in.bottom()) {
                 break;
             }
-            cc.text(in.col() + 1, row++, Canvas.fit(s, in.width() - 2), s == summary.get(summary.size() - 1) ? Palette.DIM : Palette.TEXT);
+            cc.text(in.col() + 1, row++, Canvas.fit(s, in.width() - 2), s.startsWith("Caution") || s == CAUTION[1] ? Palette.DIM : Palette.TEXT);
         }
     }
 
@@ -148,7 +148,7 @@ public final class PowerUpView {
         if (rt.secondsInLimit() > 0) {
             s.add(String.format("the supply held its limit for %s", seconds(rt.secondsInLimit())));
         }
-        s.add(CAUTION);
+        s.addAll(List.of(CAUTION));
         return s;
     }
 

@@ -28,7 +28,7 @@ class KeyHandlingTest {
         f.type("p");
         assertThat(f.session.nextPhase()).isEqualTo(2);
         assertThat(f.session.cycle()).isZero();
-        assertThat(f.line("cycle 0")).contains("phase 2 of 2 next").contains("in flight 00");
+        assertThat(f.status()).contains("phase 2 of 2 next").contains("in flight 00");
     }
 
     @Test
@@ -51,12 +51,12 @@ class KeyHandlingTest {
     void spaceAndGStartAndPauseARun() throws IOException {
         f.type(" ");
         assertThat(f.session.running()).isTrue();
-        assertThat(f.line("cycle")).contains("running");
+        assertThat(f.status()).contains("running");
         f.ui.runFor(5_000_000L);
         assertThat(f.session.cycle()).isPositive();
         f.type("g");
         assertThat(f.session.running()).isFalse();
-        assertThat(f.line("cycle")).contains("stopped: paused");
+        assertThat(f.status()).contains("stopped: paused");
     }
 
     @Test
@@ -65,7 +65,7 @@ class KeyHandlingTest {
         f.type("r");
         assertThat(f.session.cycle()).isZero();
         assertThat(f.session.pc()).isZero();
-        assertThat(f.line("cycle")).contains("stopped: reset");
+        assertThat(f.status()).contains("stopped: reset");
     }
 
     @Test
@@ -89,7 +89,7 @@ class KeyHandlingTest {
         f.type("b");
         assertThat(f.session.breakpoint(3)).isTrue();
         assertThat(f.line("ST   run")).startsWith(String.valueOf(Glyphs.CURSOR) + Glyphs.BREAKPOINT);
-        assertThat(f.line("cycle")).contains("breakpoint set at 03");
+        assertThat(f.status()).contains("breakpoint set at 03");
         f.type("b");
         assertThat(f.session.breakpoint(3)).isFalse();
     }

@@ -23,7 +23,7 @@ class ScreenTest {
         assertThat(f.text()).contains(Glyphs.LAMP_ON + " pump ").contains(Glyphs.LAMP_OFF + " alarm");
         assertThat(f.line("decode lines")).isNotEmpty();
         assertThat(f.text()).contains(Glyphs.LAMP_ON + " ST ").contains(Glyphs.LAMP_OFF + " LDN");
-        assertThat(f.line("cycle 6")).contains("next up 06 LD high_sw");
+        assertThat(f.status()).contains(" cycle 6 ").contains("next up 06 LD high_sw");
         assertThat(f.line("06 101")).contains(String.valueOf(Glyphs.PC_NEXT));
         // Power figures on screen are the meter's, in mA with one decimal.
         CurrentMeter meter = f.session.meter();
@@ -47,7 +47,7 @@ class ScreenTest {
             f.ui.runFor(1_000_000L);
         }
         f.ui.draw();
-        assertThat(f.line("cycle 8")).contains("stopped: breakpoint at 08").contains("next up 08 ST alarm");
+        assertThat(f.status()).contains(" cycle 8 ").contains("stopped: breakpoint at 08").contains("next up 08 ST alarm");
         assertThat(f.text()).contains(Glyphs.LAMP_OFF + " alarm");
         f.assertGolden("breakpoint-before-alarm.txt");
         f.type("c");
@@ -66,7 +66,7 @@ class ScreenTest {
             f.ui.runFor(1_000_000L);
         }
         f.ui.draw();
-        assertThat(f.line("cycle 2")).contains("stopped: unknown value on acc");
+        assertThat(f.status()).contains(" cycle 2 ").contains("stopped: unknown value on acc");
         f.assertGolden("unknown-reaches-acc.txt");
     }
 
@@ -83,7 +83,7 @@ class ScreenTest {
         assertThat(f.ui.powerUpView().await(Duration.ofSeconds(100))).isTrue();
         f.ui.draw();
         assertThat(f.line("power-up")).contains("rail heat");
-        assertThat(f.text()).contains("switch-on peak").contains("bypass relay closes at").contains("can injure or kill");
+        assertThat(f.text()).contains("switch-on peak").contains("heater_soft: 0.40 ohm").contains("can injure or kill");
         assertThat(f.text()).contains("\u2588");
         f.type("]");
         assertThat(f.line("power-up")).contains("rail relay");

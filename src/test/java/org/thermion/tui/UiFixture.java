@@ -122,6 +122,12 @@ final class UiFixture {
         return b.toString();
     }
 
+    /** The status line: cycle, phase, the instruction at the PC, running or why stopped. */
+    String status() {
+        String[] rows = text().split("\n", -1);
+        return rows[terminal.getTerminalSize().getRows() - 2];
+    }
+
     /** The row of the screen holding {@code needle}, or "" when none does. */
     String line(String needle) {
         for (String l : text().split("\n")) {
