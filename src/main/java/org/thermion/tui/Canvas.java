@@ -1,15 +1,14 @@
 package org.thermion.tui;
 
 import com.googlecode.lanterna.TextColor;
-import com.googlecode.lanterna.graphics.TextGraphics;
 
 /** Drawing on a screen in absolute cells, clipped to a rectangle; never writes outside it. */
 final class Canvas {
-    private final TextGraphics g;
+    private final Frame frame;
     private final Rect clip;
 
-    Canvas(TextGraphics g, Rect clip) {
-        this.g = g;
+    Canvas(Frame frame, Rect clip) {
+        this.frame = frame;
         this.clip = clip;
     }
 
@@ -18,7 +17,7 @@ final class Canvas {
         int r0 = Math.max(clip.row(), r.row());
         int c1 = Math.min(clip.right(), r.right());
         int r1 = Math.min(clip.bottom(), r.bottom());
-        return new Canvas(g, new Rect(c0, r0, Math.max(0, c1 - c0), Math.max(0, r1 - r0)));
+        return new Canvas(frame, new Rect(c0, r0, Math.max(0, c1 - c0), Math.max(0, r1 - r0)));
     }
 
     void fill(Rect r, TextColor bg) {
@@ -35,10 +34,8 @@ final class Canvas {
         }
         int start = Math.max(col, clip.col());
         int end = Math.min(col + s.length(), clip.right());
-        if (start < end) {
-            g.setForegroundColor(fg);
-            g.setBackgroundColor(bg);
-            g.putString(start, row, s.substring(start - col, end - col));
+        for (int x = start; x < end; x++) {
+            frame.put(x, row, frame.cells().of(s.charAt(x - col), fg, bg));
         }
         return col + s.length();
     }

@@ -93,6 +93,12 @@ final class Keymap {
         h.add(new HelpLine("?  h  F1", "this help; any key closes it"));
         h.add(new HelpLine("Esc", "close help or the power-up view"));
         h.add(new HelpLine("q  Ctrl-C", "quit"));
+        h.add(new HelpLine("", ""));
+        h.add(new HelpLine(Glyphs.LAMP_ON + " " + Glyphs.LAMP_OFF + " " + Glyphs.LAMP_UNKNOWN,
+                "lamp lit, dark, unknown (never set since power-up, or lost)"));
+        h.add(new HelpLine(Glyphs.SWITCH_ON + " " + Glyphs.SWITCH_OFF, "switch on, off"));
+        h.add(new HelpLine(Glyphs.PC + " " + Glyphs.PC_NEXT, "instruction in flight, next to be fetched"));
+        h.add(new HelpLine(Glyphs.BREAKPOINT + " " + Glyphs.CURSOR, "breakpoint, listing cursor"));
         return h;
     }
 }

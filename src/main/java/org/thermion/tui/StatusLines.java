@@ -93,18 +93,26 @@ final class StatusLines {
         if (v.mode == View.Mode.POWER_UP) {
             hints = new String[][] {{"[ ]", "rail"}, {"w", "back"}, {"?", "help"}, {"q", "quit"}};
         } else {
-            String sw = inputs == 0 ? "" : inputs == 1 ? "1" : "1-" + Keymap.INPUT_KEYS.charAt(Math.min(inputs, Keymap.INPUT_KEYS.length()) - 1);
+            String sw = inputs == 0 ? "" : inputs == 1 ? "1" : inputs <= 10 ? "1-" + Keymap.INPUT_KEYS.charAt(inputs - 1) : "1-0 !-)";
             hints = new String[][] {{"p", "phase"}, {"c", "cycle"}, {"Space", "run/pause"}, {"r", "reset"},
                 {sw, "switches"}, {"b", "breakpoint"}, {"w", "power-up"}, {"?", "help"}, {"q", "quit"}};
         }
-        int x = 1;
+        // Help and quit always stay; the others give way from the right on narrow windows.
+        int keep = 2;
+        int total = 1;
         for (String[] h : hints) {
-            if (h[0].isEmpty()) {
-                continue;
+            if (!h[0].isEmpty()) {
+                total += h[0].length() + h[1].length() + 3;
             }
-            if (x + h[0].length() + h[1].length() + 2 > cols) {
-                break;
-            }
+        }
+        List<String[]> shown = new java.util.ArrayList<>(List.of(hints));
+        shown.removeIf(h -> h[0].isEmpty());
+        while (total > cols && shown.size() > keep) {
+            String[] h = shown.remove(shown.size() - keep - 1);
+            total -= h[0].length() + h[1].length() + 3;
+        }
+        int x = 1;
+        for (String[] h : shown) {
             x = c.text(x, row, h[0], Palette.KEY);
             x = c.text(x + 1, row, h[1], Palette.DIM) + 2;
         }

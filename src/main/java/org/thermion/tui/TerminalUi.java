@@ -19,7 +19,7 @@ import java.util.List;
 public final class TerminalUi {
     static final long FRAME_NANOS = 40_000_000L;
     /** Share of a frame given to simulation while running; the rest draws and reads keys. */
-    static final long RUN_NANOS = 30_000_000L;
+    static final long RUN_NANOS = 34_000_000L;
     /** Cycles between clock reads while running; breakpoints are still checked every cycle. */
     static final long BATCH = 2_000;
 
@@ -29,6 +29,7 @@ public final class TerminalUi {
     private final String program;
     private final PowerUpView powerUp;
     private final List<Keymap.HelpLine> help;
+    private final Frame frame = new Frame(new Cells());
     private boolean quit;
     private long rateCycles;
     private long rateSince = System.nanoTime();
@@ -202,8 +203,11 @@ public final class TerminalUi {
         TerminalSize size = resized != null ? resized : screen.getTerminalSize();
         int cols = size.getColumns();
         int rows = size.getRows();
-        Canvas c = new Canvas(screen.newTextGraphics(), new Rect(0, 0, cols, rows));
-        c.fill(new Rect(0, 0, cols, rows), Palette.BACKGROUND);
+        if (resized != null) {
+            frame.invalidate();
+        }
+        frame.begin(cols, rows);
+        Canvas c = new Canvas(frame, new Rect(0, 0, cols, rows));
         Layout.Plan plan = Layout.plan(cols, rows, this::panelHeight);
         if (plan.tooSmall()) {
             tooSmall(c, cols, rows);
@@ -234,6 +238,7 @@ public final class TerminalUi {
         if (view.help && !plan.tooSmall()) {
             HelpOverlay.draw(c, cols, rows, help);
         }
+        frame.flush(screen);
         screen.setCursorPosition(null);
         screen.refresh();
     }
