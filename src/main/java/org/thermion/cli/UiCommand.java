@@ -32,9 +32,9 @@ import java.util.concurrent.Callable;
 
 /** {@code ui MACHINE PROGRAM}: step a program in the terminal, watching registers, decode lines and power. */
 @Command(name = "ui", mixinStandardHelpOptions = true,
-        description = {"Step and run a program on a machine in the terminal: the listing, every state bit,",
-            "the decode lines, switches and lamps, and the power drawn per module and rail.",
-            "Press ? inside for the keys."})
+        description = {"Step and run a program on a machine in the terminal: the listing, every state bit, "
+            + "the decode lines, switches and lamps, and the power drawn per module and rail.",
+            "Press ? inside for the keys; q or Ctrl-C quits."})
 public final class UiCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
     Path machine;

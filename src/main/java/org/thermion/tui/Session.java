@@ -177,8 +177,9 @@ public final class Session {
                 stop = new Stop(Stop.Reason.BREAKPOINT, "breakpoint at " + Hex.address(pc, machine));
                 break;
             }
+            // Latches hold what the cycle loaded; gate nets still show the phase just run,
+            // which is where an unknown value was used, so no extra settle is needed here.
             if (threeValued) {
-                sim.settle();
                 if (unknownStop()) {
                     running = false;
                     break;

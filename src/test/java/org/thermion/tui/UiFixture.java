@@ -47,15 +47,14 @@ final class UiFixture {
         ui.draw();
     }
 
-    /** The demo elaborated once for all tests: a Machine is immutable. */
-    private static Machine demo;
-    private static Assembly pump;
+    /** The demo and pump.asm, elaborated and assembled once for all tests: both are immutable. */
+    private static final class Demo {
+        static final Machine MACHINE = elaborate();
+        static final Assembly PUMP = program(MACHINE);
+    }
 
-    static synchronized Machine machine() {
-        if (demo == null) {
-            demo = elaborate();
-        }
-        return demo;
+    static Machine machine() {
+        return Demo.MACHINE;
     }
 
     private static Machine elaborate() {
@@ -79,12 +78,8 @@ final class UiFixture {
         return a;
     }
 
-    static synchronized Session session(InitMode init) {
-        Machine m = machine();
-        if (pump == null) {
-            pump = program(m);
-        }
-        return new Session(m, pump, DecodeLine.DEFAULT_NAME, init, null);
+    static Session session(InitMode init) {
+        return new Session(Demo.MACHINE, Demo.PUMP, DecodeLine.DEFAULT_NAME, init, null);
     }
 
     /** Presses each character of {@code keys} in turn, then draws. */
