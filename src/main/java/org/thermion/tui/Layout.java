@@ -37,8 +37,17 @@ final class Layout {
     private Layout() {
     }
 
-    /** Plans a screen of {@code cols} x {@code rows}; {@code heightFor(panel, width)} gives a panel's rows with border. */
+    /** Plans a screen where every panel needs its whole height. */
     static Plan plan(int cols, int rows, ToIntBiFunction<Panel, Integer> heightFor) {
+        return plan(cols, rows, heightFor, heightFor);
+    }
+
+    /**
+     * Plans a screen of {@code cols} x {@code rows}. {@code heightFor(panel, width)} gives the
+     * rows a panel wants with its border, {@code leastFor} the fewest it can show itself in
+     * (a panel that gets less than it wants draws its most important part).
+     */
+    static Plan plan(int cols, int rows, ToIntBiFunction<Panel, Integer> heightFor, ToIntBiFunction<Panel, Integer> leastFor) {
         Map<Panel, Rect> rects = new EnumMap<>(Panel.class);
         List<Panel> hidden = new ArrayList<>();
         if (cols < MIN_COLS || rows < MIN_ROWS) {
@@ -53,9 +62,13 @@ final class Layout {
         Map<Panel, Integer> heights = new EnumMap<>(Panel.class);
         for (Panel p : PRIORITY) {
             int h = heightFor.applyAsInt(p, sideWidth);
+            int least = Math.min(h, leastFor.applyAsInt(p, sideWidth));
             if (h <= room) {
                 heights.put(p, h);
                 room -= h;
+            } else if (least <= room) {
+                heights.put(p, least);
+                room -= least;
             } else {
                 hidden.add(p);
             }

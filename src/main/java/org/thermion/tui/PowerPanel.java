@@ -19,6 +19,11 @@ final class PowerPanel {
     private PowerPanel() {
     }
 
+    /** Rows with border for the module table alone, without the rail totals. */
+    static int leastHeight(Session s) {
+        return 1 + s.modules().size() + 1 + 2;
+    }
+
     static int height(Session s) {
         // header, modules, total; blank; header, rails; when the peaks came; border
         return 1 + s.modules().size() + 1 + 1 + 1 + s.machine().rails().size() + 1 + 2;
@@ -55,8 +60,10 @@ final class PowerPanel {
     static void draw(Canvas c, Rect r, Session s) {
         Machine m = s.machine();
         CurrentMeter meter = s.meter();
-        c.box(r, "power");
         Rect in = Canvas.inside(r);
+        // The rail totals come whole or not at all; the line of peak times may go.
+        boolean showRails = in.height() >= height(s) - 2 - 1;
+        c.box(r, showRails ? "power" : "power \u00B7 rail totals need more rows");
         Canvas cc = c.within(in);
         List<Integer> rails = plateRails(m);
         int fixed = 1 + MODULE + 6 + 9;
@@ -90,21 +97,29 @@ final class PowerPanel {
             t.append(Canvas.padLeft(mA(meter.nowRail(rail)), 10)).append(Canvas.padLeft(mA(meter.peakRail(rail)), 7));
         }
         cc.text(col, row++, t.toString(), Palette.HEADING);
+        if (!showRails) {
+            return;
+        }
         row++;
-        cc.text(col, row++, Canvas.pad("rail", MODULE) + Canvas.padLeft("volts", 6) + Canvas.padLeft("heaters", 10)
-                + Canvas.padLeft("now", 10) + Canvas.padLeft("peak", 10) + Canvas.padLeft("limit", 9)
-                + Canvas.padLeft("peak use", 10), Palette.DIM);
+        // Narrow panels leave out the voltage and the heater share; "now" and "peak" include heaters.
+        boolean full = in.width() >= 70;
+        cc.text(col, row++, Canvas.pad("rail", full ? MODULE : 10) + (full ? Canvas.padLeft("volts", 6) + Canvas.padLeft("heaters", 10) : "")
+                + Canvas.padLeft("now", 10) + Canvas.padLeft("peak", 10) + Canvas.padLeft("limit", full ? 9 : 10)
+                + Canvas.padLeft(full ? "peak use" : "use", full ? 10 : 7), Palette.DIM);
         for (int i = 0; i < m.rails().size(); i++) {
             Rail rail = m.rails().get(i);
             double heat = s.heaters().railAmps(i);
             double peak = heat + meter.peakRail(i);
             double share = rail.limitAmps() > 0 ? peak / rail.limitAmps() : Double.NaN;
-            String line = Canvas.pad(rail.name(), MODULE) + Canvas.padLeft(String.format("%+.1f", rail.volts()), 6)
-                    + Canvas.padLeft(heat > 0 ? amps(heat) : "-", 10)
+            String line = Canvas.pad(rail.name(), full ? MODULE : 10)
+                    + (full ? Canvas.padLeft(String.format("%+.1f", rail.volts()), 6) + Canvas.padLeft(heat > 0 ? amps(heat) : "-", 10) : "")
                     + Canvas.padLeft(amps(heat + meter.nowRail(i)), 10) + Canvas.padLeft(amps(peak), 10)
-                    + Canvas.padLeft(rail.limitAmps() > 0 ? amps(rail.limitAmps()) : "-", 9)
-                    + Canvas.padLeft(Double.isNaN(share) ? "-" : String.format("%.0f %%", share * 100), 10);
+                    + Canvas.padLeft(rail.limitAmps() > 0 ? amps(rail.limitAmps()) : "-", full ? 9 : 10)
+                    + Canvas.padLeft(Double.isNaN(share) ? "-" : String.format("%.0f %%", share * 100), full ? 10 : 7);
             cc.text(col, row++, line, share > 1 ? Palette.STOPPED : Palette.TEXT);
+        }
+        if (row >= in.bottom()) {
+            return;
         }
         StringBuilder when = new StringBuilder("peaks at cycle.phase:");
         for (int rail : rails) {

@@ -208,7 +208,8 @@ public final class TerminalUi {
         }
         frame.begin(cols, rows);
         Canvas c = new Canvas(frame, new Rect(0, 0, cols, rows));
-        Layout.Plan plan = Layout.plan(cols, rows, this::panelHeight);
+        Layout.Plan plan = Layout.plan(cols, rows, this::panelHeight,
+                (p, w) -> p == Panel.POWER ? PowerPanel.leastHeight(session) : panelHeight(p, w));
         if (plan.tooSmall()) {
             tooSmall(c, cols, rows);
         } else if (view.mode == View.Mode.POWER_UP) {

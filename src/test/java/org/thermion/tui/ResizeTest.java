@@ -17,12 +17,17 @@ class ResizeTest {
                 .contains("switches and lamps").contains("power").doesNotContain("hidden");
 
         f.resize(80, 40);
-        assertThat(f.line("THERMION")).contains("hidden, too little room: power");
-        assertThat(f.text()).contains("decode lines").contains("switches and lamps").contains(Glyphs.LAMP_ON + " pump");
+        // Narrow: one column; the power panel keeps its module table and leaves out the rail totals.
+        assertThat(f.line("THERMION")).doesNotContain("hidden");
+        assertThat(f.text()).contains("decode lines").contains("switches and lamps").contains(Glyphs.LAMP_ON + " pump")
+                .contains("power \u00B7 rail totals need more rows").contains("all modules");
         f.assertGolden("narrow-80x40.txt");
 
+        f.resize(80, 30);
+        assertThat(f.line("THERMION")).contains("hidden, too little room: power");
+
         f.resize(70, 20);
-        assertThat(f.line("THERMION")).contains("hidden, too little room");
+        assertThat(f.line("THERMION")).contains("hidden, too little room: switches and lamps, power");
         assertThat(f.text()).contains("state").contains("program");
 
         f.resize(50, 12);
