@@ -82,6 +82,11 @@ public final class Assembler {
         local.all().stream()
                 .sorted(Comparator.comparingInt((Diagnostic x) -> x.span().line()).thenComparingInt(x -> x.span().col()))
                 .forEach(d::add);
+        // Errors past the local limit were counted but not kept; hand on the count, so the
+        // summary still says how many there were (d keeps none of these: it is full by now).
+        for (int i = 0; i < local.dropped(); i++) {
+            d.add(Diagnostic.error(Span.none(), "error past the limit", null));
+        }
         return local.hasErrors() ? null : a;
     }
 

@@ -7,7 +7,8 @@ import picocli.CommandLine.Command;
 @Command(name = "thermion", mixinStandardHelpOptions = true, version = "thermion 0.1.0",
         description = "Workbench for one-bit vacuum-tube control processors.",
         subcommands = {CheckCommand.class, AsmCommand.class, RunCommand.class, BudgetCommand.class,
-            PowerUpCommand.class, UiCommand.class, CommandLine.HelpCommand.class})
+            PowerUpCommand.class, TimingCommand.class, VerifyCommand.class, UiCommand.class,
+            CommandLine.HelpCommand.class})
 public final class Main implements java.util.concurrent.Callable<Integer> {
 
     @CommandLine.Spec

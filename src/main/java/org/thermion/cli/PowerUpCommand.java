@@ -1,6 +1,7 @@
 package org.thermion.cli;
 
 import org.thermion.model.Machine;
+import org.thermion.power.startup.BypassDelay;
 import org.thermion.power.startup.CurrentPlot;
 import org.thermion.power.startup.DrawMode;
 import org.thermion.power.startup.PowerUpOptions;
@@ -26,9 +27,9 @@ import java.util.concurrent.Callable;
 
 /** {@code powerup MACHINE}: the switch-on transient of every rail, the soft start and its relay driver. */
 @Command(name = "powerup", mixinStandardHelpOptions = true,
-        description = {"Simulate switch-on: heaters warming from cold, rail currents, the soft-start resistor and its",
-                "bypass relay, and the thyratron relay driver. Exit 1 when a supply goes into its current limit, a",
-                "soft-start resistor runs over its rating or is never bypassed, or the relay driver check fails."})
+        description = "Simulate switch-on: heaters warming from cold, rail currents, the soft-start resistor and its "
+                + "bypass relay, and the thyratron relay driver. Exit 1 when a supply goes into its current limit, a "
+                + "soft-start resistor runs over its rating or is never bypassed, or the relay driver check fails.")
 final class PowerUpCommand implements Callable<Integer> {
     @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
     Path file;
@@ -135,7 +136,8 @@ final class PowerUpCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         PowerUpResult result = net.solve(o);
-        PowerUpReport report = new PowerUpReport(result);
+        List<BypassDelay.Advice> advice = format == Format.csv ? List.of() : BypassDelay.suggest(net, o);
+        PowerUpReport report = new PowerUpReport(result, advice);
         if (csv != null) {
             String problem = writeAtomically(csv, report.csv(), loader, file);
             if (problem != null) {

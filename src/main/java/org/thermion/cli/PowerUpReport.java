@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.power.startup.BypassDelay;
 import org.thermion.power.startup.CurrentPlot;
 import org.thermion.power.startup.HeaterModel;
 import org.thermion.power.startup.HeaterWarmup;
@@ -21,9 +22,15 @@ final class PowerUpReport {
             + "codes and qualified practice.";
 
     private final PowerUpResult r;
+    private final List<BypassDelay.Advice> advice;
 
-    PowerUpReport(PowerUpResult r) {
+    PowerUpReport(PowerUpResult r, List<BypassDelay.Advice> advice) {
         this.r = r;
+        this.advice = advice;
+    }
+
+    private BypassDelay.Advice adviceFor(String softStart) {
+        return advice.stream().filter(a -> a.softStart().equals(softStart)).findFirst().orElse(null);
     }
 
     /** True when every check passed: supplies within limit, resistors within rating and bypassed, relay drivers sound. */
@@ -85,8 +92,21 @@ final class PowerUpReport {
                     + (Double.isInfinite(s.ratedWatts()) ? "" : s.withinRating() ? ": within its rating"
                     : ": OVER its " + Units.watts(s.ratedWatts()) + " rating")
                     + (Double.isInfinite(s.ratedWatts()) ? "" : String.format(Locale.ROOT, " (peak %.1f x rating)", s.peakWatts() / s.ratedWatts())));
+            BypassDelay.Advice a = adviceFor(s.name());
+            if (a != null) {
+                out.println("  delay     " + (Double.isNaN(a.settleSeconds()) ? "with the relay held open the current has not settled within "
+                        + Units.time(Math.max(60, r.options().seconds()))
+                        : "with the relay held open the current settles within 2 % of " + Units.amps(a.restingAmps()) + " by "
+                        + Units.time(a.settleSeconds()) + ";\n            bypassing later gains little, earlier raises the bypass peak"));
+            }
         }
         out.println();
+        if (r.heaters().isEmpty()) {
+            out.println("heaters: none; the machine has no tubes");
+            out.println();
+            wrap(out, CAUTION, 78);
+            return;
+        }
         out.println("heaters:");
         Table h = new Table("tube", "rating", "string", "pos", "count", "95 % hot", "peak voltage", "at", "final");
         for (HeaterWarmup w : r.heaters()) {
@@ -136,6 +156,10 @@ final class PowerUpReport {
                     continue;
                 }
                 out.println();
+                if (!(rt.worstPeak() > 0)) {
+                    out.println("rail " + rt.name() + ": no current during the run");
+                    continue;
+                }
                 List<CurrentPlot.Marker> marks = new ArrayList<>();
                 if (!Double.isNaN(rt.bypassTime())) {
                     marks.add(new CurrentPlot.Marker(rt.bypassTime(), "bypass " + Units.time(rt.bypassTime())));
@@ -172,13 +196,13 @@ final class PowerUpReport {
             ResistorSweep.Row row = s.rows().get(i);
             String verdict = !row.bypassed() ? "no bypass" : !row.withinLimit() ? "over limit" : !row.withinRating() ? "over rating"
                     : i == s.best() ? "<- best" : "ok";
-            t.row(Units.ohms(row.ohms()), Units.amps(row.switchOnPeak()), Units.amps(row.bypassPeak()), Units.amps(row.worstPeak()),
+            t.row(ohms(row.ohms()), Units.amps(row.switchOnPeak()), Units.amps(row.bypassPeak()), Units.amps(row.worstPeak()),
                     Units.time(row.bypassTime()), Units.watts(row.meanWatts()), joules(row.joules()), verdict);
         }
         t.print(out, "  ");
         ResistorSweep.Row best = s.recommended();
         out.println(best == null ? "  no value in the range keeps the supply within its limit and the resistor within its rating"
-                : "  recommended: " + Units.ohms(best.ohms()) + " (larger peak " + Units.amps(best.worstPeak()) + ", bypass at "
+                : "  recommended: " + ohms(best.ohms()) + " (larger peak " + Units.amps(best.worstPeak()) + ", bypass at "
                 + Units.time(best.bypassTime()) + ", mean " + Units.watts(best.meanWatts()) + " in the resistor)");
         out.println();
         wrap(out, CAUTION, 78);
@@ -232,7 +256,12 @@ final class PowerUpReport {
                     .append(", \"thyratron\": ").append(s.thyratron()).append(", \"triggerSeconds\": ").append(num(s.triggerTime()))
                     .append(", \"bypassSeconds\": ").append(num(s.bypassTime())).append(", \"joules\": ").append(num(s.joules()))
                     .append(", \"peakWatts\": ").append(num(s.peakWatts())).append(", \"meanWatts\": ").append(num(s.meanWatts()))
-                    .append(", \"withinRating\": ").append(s.withinRating()).append("}");
+                    .append(", \"withinRating\": ").append(s.withinRating());
+            BypassDelay.Advice a = adviceFor(s.name());
+            if (a != null) {
+                b.append(", \"settleSeconds\": ").append(num(a.settleSeconds())).append(", \"restingAmps\": ").append(num(a.restingAmps()));
+            }
+            b.append("}");
         }
         b.append("\n");
         ind(b, 1).append("],\n");
@@ -278,7 +307,7 @@ final class PowerUpReport {
         b.append("],\n");
         kv(b, 1, "caution", str(CAUTION)).append("\n");
         b.append("}\n");
-        return b.toString();
+        return b.toString().replace("[\n  ]", "[]");
     }
 
     static String sweepJson(ResistorSweep.Result s) {
@@ -365,6 +394,14 @@ final class PowerUpReport {
 
     private static String f2(double v) {
         return String.format(Locale.ROOT, "%.2f", v);
+    }
+
+    /** Resistor values as swept: up to four significant figures, so close steps stay distinct. */
+    static String ohms(double v) {
+        if (v >= 1000) {
+            return Units.ohms(v);
+        }
+        return num(Double.parseDouble(String.format(Locale.ROOT, "%.4g", v))) + " ohm";
     }
 
     static String joules(double j) {

@@ -292,7 +292,9 @@ public final class Elaborator {
             s = new Signal(s.name(), s.nets(), s.decl(), Signal.Kind.OUT, s.bus());
         }
         if (s == null || (s.kind() != Signal.Kind.IN && s.kind() != Signal.Kind.OUT)) {
-            List<String> ports = scope.values().stream().filter(x -> x.kind() == kind).map(Signal::name).toList();
+            List<String> ports = scope.values().stream()
+                    .filter(x -> x.kind() == kind || (kind == Signal.Kind.OUT && topOutputs.contains(x.name())))
+                    .map(Signal::name).toList();
             diags.error(at, "unknown " + what + " '" + name + "': the top module has no such " + (kind == Signal.Kind.IN ? "input" : "output") + " port",
                     Declarations.hintFor(name, ports, "its " + (kind == Signal.Kind.IN ? "inputs" : "outputs") + " are: " + String.join(", ", ports)));
             return null;

@@ -108,7 +108,7 @@ final class Packer {
             }
             List<Integer> tubes = new ArrayList<>();
             while (!r.atEnd() && !r.failed() && r.peek() instanceof org.thermion.lang.ast.Value.Word w
-                    && !List.of("at", "per", "across", "drop", "shunt").contains(w.text())) {
+                    && !List.of("at", "per", "across", "drop", "shunt", "rest").contains(w.text())) {
                 String name = r.word("a tube type");
                 int t = parts.tube(name, r.lastSpan());
                 if (t >= 0) {
@@ -119,7 +119,7 @@ final class Packer {
                 diags.error(r.here(), "expected the tube types this rule wires", "e.g. `series 2 of 6AU6 6AL5`");
                 continue;
             }
-            double volts = Double.NaN, drop = 0;
+            double volts = Double.NaN, drop = 0, restDrop = 0;
             boolean perModule = true, shunt = false;
             while (!r.atEnd() && !r.failed()) {
                 if (r.acceptWord("at")) {
@@ -132,6 +132,9 @@ final class Packer {
                     perModule = false;
                 } else if (r.acceptWord("drop")) {
                     drop = r.positive(Unit.OHM, "dropping resistor", true);
+                } else if (r.acceptWord("rest")) {
+                    r.expectWord("drop");
+                    restDrop = r.positive(Unit.OHM, "dropping resistor for the last string", false);
                 } else if (r.acceptWord("shunt")) {
                     shunt = true;
                 } else {
@@ -141,7 +144,7 @@ final class Packer {
             if (r.failed() || rail < 0) {
                 continue;
             }
-            rules.add(new HeaterRule(rail, series, List.copyOf(tubes), count, perModule, volts, drop, shunt));
+            rules.add(new HeaterRule(rail, series, List.copyOf(tubes), count, perModule, volts, drop, shunt, restDrop));
             ruleSpans.add(q.span());
         }
     }
@@ -179,7 +182,8 @@ final class Packer {
                     if (!ok) {
                         break;
                     }
-                    strings.add(new HeaterString(rule.rail(), List.copyOf(chunk), List.copyOf(ratings), rule.dropOhms(),
+                    double drop = chunk.size() < size && rule.restDropOhms() > 0 ? rule.restDropOhms() : rule.dropOhms();
+                    strings.add(new HeaterString(rule.rail(), List.copyOf(chunk), List.copyOf(ratings), drop,
                             rule.shunt(), g.getKey() >= 0 ? g.getKey() : envelopes.get(chunk.get(0)).module(), ri));
                 }
             }

@@ -23,14 +23,14 @@ class AssemblerRobustnessTest {
     static final String ALPHABET = "abcLDSTJMPNOR_0123456789xb:;.=+-*/() \t\n@,";
 
     @Test
-    @Timeout(20)
+    @Timeout(60)
     void mutantsGiveDiagnosticsNeverExceptions() throws IOException {
         Machine m = DemoMachine.load();
         SplittableRandom rng = new SplittableRandom(7);
         int withErrors = 0;
         for (String name : new String[] {"pump.asm", "serial-add.asm", "every-op.asm"}) {
             String original = Files.readString(Path.of("programs", name));
-            for (int k = 0; k < 400; k++) {
+            for (int k = 0; k < 250; k++) {
                 String text = mutate(original, rng);
                 Diagnostics d = new Diagnostics();
                 Assembly a = Assembler.assembleText(m, Path.of("mutant.asm"), text, new SourceSet(), d);
@@ -44,8 +44,8 @@ class AssemblerRobustnessTest {
                 }
             }
         }
-        // About half the edits land in comments and change nothing (577 of 1200 broke the program when written).
-        assertThat(withErrors).as("the mutations do break programs").isGreaterThan(400);
+        // About half the edits land in comments and change nothing (577 of 1200 broke the program in a run of 400 a program).
+        assertThat(withErrors).as("the mutations do break programs").isGreaterThan(250);
     }
 
     static String mutate(String s, SplittableRandom rng) {

@@ -114,6 +114,17 @@ class AssemblerTest {
     }
 
     @Test
+    void manyErrorsAreCountedPastTheLimit() {
+        Diagnostics d = new Diagnostics();
+        Assembly a = Assembler.assembleText(m, Path.of("many.asm"), "LDX 1\n".repeat(25), new SourceSet(), d);
+        assertThat(a).isNull();
+        assertThat(d.errorCount()).isEqualTo(25);
+        assertThat(d.all()).hasSize(Diagnostics.LIMIT);
+        assertThat(d.dropped()).isEqualTo(25 - Diagnostics.LIMIT);
+        assertThat(d.all().get(0).span().line()).isEqualTo(1);
+    }
+
+    @Test
     void everyOpUsesEveryOpcode() {
         Diagnostics d = new Diagnostics();
         Assembly a = Assembler.assemble(m, Path.of("programs", "every-op.asm"), d);

@@ -13,10 +13,14 @@ import org.hipparchus.ode.nonstiff.DormandPrince54Integrator;
  * and by tests as an independent check of the thermal model.
  */
 public final class HeaterBench {
-    private static final BracketingNthOrderBrentSolver BRENT = new BracketingNthOrderBrentSolver(1e-12, 1e-9, 1e-12, 5);
     private static final double HOTTEST = 4000;
 
     private HeaterBench() {
+    }
+
+    /** A fresh solver per use: Hipparchus solvers count their evaluations, so they are not shared. */
+    private static BracketingNthOrderBrentSolver brent() {
+        return new BracketingNthOrderBrentSolver(1e-12, 1e-9, 1e-12, 5);
     }
 
     /** Result of a run: end time, temperature, electrical energy in and energy radiated (joules). */
@@ -25,7 +29,7 @@ public final class HeaterBench {
 
     /** Equilibrium temperature under {@code drive} (electrical power in = radiated). */
     public static double equilibrium(HeaterModel h, HeaterDrive drive) {
-        return BRENT.solve(10_000, t -> {
+        return brent().solve(10_000, t -> {
             double i = drive.amps(h.resistance(t));
             return i * i * h.resistance(t) - h.radiated(t);
         }, h.ambientKelvin(), HOTTEST);
@@ -35,7 +39,7 @@ public final class HeaterBench {
     public static double eightyPercentKelvin(HeaterModel h) {
         HeaterDrive d = HeaterDrive.warmupTest(h.rating());
         double target = 0.8 * h.rating().volts();
-        return BRENT.solve(10_000, t -> d.amps(h.resistance(t)) * h.resistance(t) - target, h.ambientKelvin(), HOTTEST);
+        return brent().solve(10_000, t -> d.amps(h.resistance(t)) * h.resistance(t) - target, h.ambientKelvin(), HOTTEST);
     }
 
     /** The standard warm-up time: seconds until the heater voltage reaches 80 % of rated in the test circuit. */

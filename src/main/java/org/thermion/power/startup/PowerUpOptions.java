@@ -5,10 +5,11 @@ import java.util.Map;
 /**
  * What to solve: simulated seconds, soft-start resistor overrides by soft-start name (ohms;
  * 0 removes the resistor), the steady draw assumption, the spacing of recorded samples
- * (0: record nothing but the summary) and the thermal assumptions.
+ * (0: record nothing but the summary), the thermal assumptions, and whether to hold every bypass
+ * relay open for the whole run (to see where the current behind the resistors settles).
  */
 public record PowerUpOptions(double seconds, Map<String, Double> resistorOhms, DrawMode drawMode, double sampleSeconds,
-                             ThermalAssumptions assumptions) {
+                             ThermalAssumptions assumptions, boolean holdBypass) {
 
     public PowerUpOptions {
         if (!(seconds > 0) || Double.isInfinite(seconds)) {
@@ -27,28 +28,32 @@ public record PowerUpOptions(double seconds, Map<String, Double> resistorOhms, D
 
     /** 30 s, the declared resistors, highest draws, a sample every 10 ms, standard assumptions. */
     public static PowerUpOptions defaults() {
-        return new PowerUpOptions(30, Map.of(), DrawMode.HIGHEST, 0.01, ThermalAssumptions.standard());
+        return new PowerUpOptions(30, Map.of(), DrawMode.HIGHEST, 0.01, ThermalAssumptions.standard(), false);
     }
 
     public PowerUpOptions withSeconds(double s) {
-        return new PowerUpOptions(s, resistorOhms, drawMode, sampleSeconds, assumptions);
+        return new PowerUpOptions(s, resistorOhms, drawMode, sampleSeconds, assumptions, holdBypass);
     }
 
     public PowerUpOptions withResistor(String softStart, double ohms) {
         Map<String, Double> m = new java.util.LinkedHashMap<>(resistorOhms);
         m.put(softStart, ohms);
-        return new PowerUpOptions(seconds, m, drawMode, sampleSeconds, assumptions);
+        return new PowerUpOptions(seconds, m, drawMode, sampleSeconds, assumptions, holdBypass);
     }
 
     public PowerUpOptions withDrawMode(DrawMode d) {
-        return new PowerUpOptions(seconds, resistorOhms, d, sampleSeconds, assumptions);
+        return new PowerUpOptions(seconds, resistorOhms, d, sampleSeconds, assumptions, holdBypass);
     }
 
     public PowerUpOptions withSampleSeconds(double s) {
-        return new PowerUpOptions(seconds, resistorOhms, drawMode, s, assumptions);
+        return new PowerUpOptions(seconds, resistorOhms, drawMode, s, assumptions, holdBypass);
+    }
+
+    public PowerUpOptions withHoldBypass(boolean hold) {
+        return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, assumptions, hold);
     }
 
     public PowerUpOptions withAssumptions(ThermalAssumptions a) {
-        return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, a);
+        return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, a, holdBypass);
     }
 }

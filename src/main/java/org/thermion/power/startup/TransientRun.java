@@ -296,6 +296,8 @@ final class TransientRun {
             StartupNetwork.Soft s = net.softs.get(k);
             if (ohms[k] == 0) {
                 bypassed[k] = true;   // no resistor: nothing to bypass
+            } else if (o.holdBypass()) {
+                bypassAt[k] = Double.NaN;
             } else if (!s.thyratron()) {
                 bypassAt[k] = s.delay() + s.operate();
             }
@@ -304,6 +306,10 @@ final class TransientRun {
         observe(0, y, true);
         updateLimits(0);
         long[] nextSample = {1};
+        if (y.length == 0) {
+            // Nothing warms: the rails carry only what is always on, and nothing changes with time.
+            t = end;
+        }
         while (t < end) {
             double segEnd = end;
             for (int k = 0; k < ns; k++) {
@@ -378,7 +384,7 @@ final class TransientRun {
                 if (thyIndex[k] >= 0 && !Double.isNaN(thy.get(thyIndex[k]).firstTime())) {
                     fired[k] = true;
                     fireTime[k] = thy.get(thyIndex[k]).firstTime();
-                    if (net.softs.get(k).picksUp()) {
+                    if (net.softs.get(k).picksUp() && !o.holdBypass()) {
                         bypassAt[k] = fireTime[k] + net.softs.get(k).operate();
                     }
                 }

@@ -143,6 +143,27 @@ class PowerUpSolverTest {
     }
 
     @Test
+    void theFastHeaterOfAMixedStringRunsOverItsRatingWhileTheSlowOneWarms() {
+        // Mullard Outlook, Feb 1963 (r-type.org/addtext/add126.htm): in a mixed series string a fast heater
+        // can briefly run well over its rating during warm-up.
+        PowerUpResult r = PowerUpSolver.solve(StartupMachines.elaborate(StartupMachines.mixedString()),
+                PowerUpOptions.defaults());
+        HeaterWarmup worst = r.worstMixedOverVoltage();
+        assertThat(worst).isNotNull();
+        assertThat(worst.tube()).isEqualTo("6AU6");
+        assertThat(worst.mixed()).isTrue();
+        assertThat(worst.peakVoltRatio()).isGreaterThan(1.10);
+        assertThat(worst.peakVoltTime()).isGreaterThan(0).isLessThan(15);
+        // The series current is shared, so the two voltages add up to what the string gets.
+        double sum = 0;
+        for (HeaterWarmup w : r.heaters()) {
+            sum += w.finalVolts();
+        }
+        RailTransient heat = heat(r);
+        assertThat(sum).isCloseTo(12.6 - 0.05 * heat.finalAmps(), within(1e-9));
+    }
+
+    @Test
     void aCurrentLimitHoldsTheSupplyAtItsLimit() {
         PowerUpResult r = PowerUpSolver.solve(inverters("5 ohm", "20 A"), PowerUpOptions.defaults());
         RailTransient h = heat(r);

@@ -78,6 +78,45 @@ final class StartupMachines {
                   bypass when""");
     }
 
+    /** A 6AU6 in series with a slow heater of our own type (30 s warm-up) on 12.6 V. */
+    static String mixedString() {
+        return """
+                tube SLOW6 {
+                  kind triode
+                  sections 1
+                  heater 6.3 V 300 mA
+                  warmup 30 s
+                  source "a test type of our own: a slow heater"
+                }
+                stage slow_follower : buffer {
+                  tube SLOW6
+                  sections 1
+                  fanin 1
+                  load 10 k from bias
+                  draw always bplus 3.0 mA
+                  draw always bias 3.0 mA
+                }
+                rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
+                rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
+                rail heat  { voltage 12.6 V; source 0.05 ohm; limit 40 A }
+                heaters on heat { series 2 of 6AU6 SLOW6 across machine }
+                realize { not pentode_inverter }
+                module pair {
+                  in a
+                  out y
+                  net n
+                  n = !a
+                  y = slow_follower(n)
+                }
+                machine mixed {
+                  clock { phases 1; period 100 us }
+                  top pair
+                  inputs a
+                  outputs y
+                }
+                """;
+    }
+
     static Machine elaborate(String text) {
         Diagnostics d = new Diagnostics();
         Machine m = new Elaborator(new SourceSet(), d).elaborateText(Path.of("test.machine"), text);
