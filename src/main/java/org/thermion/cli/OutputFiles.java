@@ -8,7 +8,10 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.util.List;
+import java.util.Set;
 
 /**
  * Files a command writes: never one the user named as an input, and always through a
@@ -50,7 +53,21 @@ final class OutputFiles {
             this.target = target;
             Path dir = target.toAbsolutePath().getParent();
             this.tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
+            keepUsualPermissions(target, tmp);
             this.writer = Files.newBufferedWriter(tmp, StandardCharsets.US_ASCII);
+        }
+
+        /** Temporary files are private to the owner; the finished file reads like any other. */
+        private static void keepUsualPermissions(Path target, Path tmp) {
+            try {
+                if (Files.getFileStore(tmp).supportsFileAttributeView("posix")) {
+                    Set<PosixFilePermission> perms = Files.exists(target) ? Files.getPosixFilePermissions(target)
+                            : PosixFilePermissions.fromString("rw-r--r--");
+                    Files.setPosixFilePermissions(tmp, perms);
+                }
+            } catch (IOException | UnsupportedOperationException e) {
+                // Permissions stay as created; the contents are unaffected.
+            }
         }
 
         Writer writer() {

@@ -22,6 +22,7 @@ import picocli.CommandLine.Spec;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.ZonedDateTime;
 import java.time.format.DateTimeFormatter;
@@ -64,7 +65,7 @@ final class RunCommand implements Callable<Integer> {
     String init;
 
     @Option(names = "--watch", paramLabel = "NET", split = ",",
-            description = "Nets to table per cycle, by name (acc, line[3], osel.term[5]; a bus name takes every bit).")
+            description = "Nets to table per cycle, by name (acc, line[3], lu.inv; a bus name takes every bit).")
     List<String> watch = new ArrayList<>();
 
     @Option(names = "--vcd", paramLabel = "FILE", description = "Write a value change dump (IEEE 1364) here.")
@@ -99,6 +100,18 @@ final class RunCommand implements Callable<Integer> {
             }
             if (level == Level.isa) {
                 return usage(err, "--vcd needs --level logic: the ISA level has no nets to dump", null);
+            }
+            Path dir = vcd.toAbsolutePath().getParent();
+            if (dir == null || !Files.isDirectory(dir)) {
+                return usage(err, "cannot write the VCD to " + vcd + ": no such directory " + dir, null);
+            }
+            String fn = vcd.getFileName() == null ? "" : vcd.getFileName().toString();
+            if (Files.exists(vcd) && fn.matches(".*\\.(machine|asm|csv|hex)")) {
+                return usage(err, "refusing to write the VCD over " + vcd + ", which looks like a source file",
+                        "name a .vcd file for --vcd");
+            }
+            if (Files.isDirectory(vcd)) {
+                return usage(err, "cannot write the VCD to " + vcd + ": it is a directory", null);
             }
         }
         if (vcdAll && vcd == null) {
@@ -137,6 +150,13 @@ final class RunCommand implements Callable<Integer> {
         if (asm == null || diags.hasErrors()) {
             return ExitCodes.BAD_INPUT;
         }
+        if (stim != null && stim.lastCycle() >= cycles) {
+            long first = stim.rows().stream().filter(r -> r.cycle() >= cycles).findFirst().orElseThrow().cycle();
+            err.println("warning: " + inputs + ": the rows from cycle " + first + " on come after the run's "
+                    + cycles + " cycles and never apply");
+            err.println("  = raise --cycles to reach them");
+            err.flush();
+        }
         RunResult result;
         String vcdNote = null;
         if (level == Level.isa) {
@@ -171,6 +191,8 @@ final class RunCommand implements Callable<Integer> {
                             .run(cycles, ZonedDateTime.now().format(DateTimeFormatter.RFC_1123_DATE_TIME),
                                     spec.root().version()[0]);
                     file.commit();
+                } catch (IOException | java.io.UncheckedIOException e) {
+                    return usage(err, "cannot write the VCD to " + vcd + ": " + e.getMessage(), null);
                 }
                 vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
                         + " nets and the pc)";

@@ -45,6 +45,13 @@ final class RunReport {
     private void text(PrintWriter out) {
         out.println("run " + machine.name() + ": program " + program + ", " + level + " level, init " + init);
         out.println(r.cycles() + " cycles; stopped: " + r.stop());
+        if (!init.equals("zero")) {
+            StringBuilder sb = new StringBuilder("outputs at power-up:");
+            for (int i = 0; i < machine.outputs().size(); i++) {
+                sb.append(' ').append(machine.outputs().get(i).name()).append('=').append(r.initialOutputs().charAt(i));
+            }
+            out.println(sb);
+        }
         out.println();
         if (r.changes().isEmpty()) {
             out.println("output changes: none");
@@ -87,7 +94,7 @@ final class RunReport {
             t.print(out, "  ");
         }
         out.println();
-        out.println("final state:");
+        out.println("final state after " + r.cycles() + (r.cycles() == 1 ? " cycle:" : " cycles:"));
         Table t = new Table("state", "value");
         for (int i = 0; i < r.stateNames().size(); i++) {
             t.row(r.stateNames().get(i), String.valueOf(r.state().charAt(i)));
@@ -142,6 +149,12 @@ final class RunReport {
         sb.append("  \"init\": ").append(q(init)).append(",\n");
         sb.append("  \"cycles\": ").append(r.cycles()).append(",\n");
         sb.append("  \"stop\": ").append(q(r.stop())).append(",\n");
+        sb.append("  \"initial\": {");
+        for (int i = 0; i < machine.outputs().size(); i++) {
+            sb.append(i == 0 ? "" : ", ").append(q(machine.outputs().get(i).name())).append(": ")
+                    .append(val(r.initialOutputs().charAt(i)));
+        }
+        sb.append("},\n");
         sb.append("  \"changes\": [");
         List<OutputChange> ch = r.changes();
         for (int i = 0; i < ch.size(); i++) {

@@ -1,5 +1,6 @@
 package org.thermion.sim;
 
+import org.thermion.lang.Names;
 import org.thermion.model.Isa;
 import org.thermion.model.Machine;
 import org.thermion.model.Port;
@@ -13,13 +14,16 @@ import java.util.List;
 /**
  * Runs a program on the instruction-set level: the isa block's meanings, one instruction
  * per cycle, no gates. Output changes are stamped with the phase the PC loads on (the phase
- * the logic executes in). Ends like {@link LogicRun}: cycle limit or fixed point.
+ * the logic executes in). Ends like {@link LogicRun}: cycle limit or fixed point, where a
+ * fixed point is a cycle that ran the same word as the one before it and changed no state
+ * bit and not the PC (so it ends on the cycle the logic, with its instruction register, does).
  */
 public final class IsaRun {
     private final Machine machine;
     private final IsaInterpreter isa;
     private final Stimulus stimulus;
     private final List<String> watchNames;
+    private final long[] rom;
 
     /**
      * @param init zero, or random:SEED for the state the logic level would power up in (lane 0);
@@ -34,7 +38,8 @@ public final class IsaRun {
         this.isa = new IsaInterpreter(machine);
         this.stimulus = stimulus;
         this.watchNames = List.copyOf(watchNames);
-        isa.loadRom(Arrays.copyOf(rom, Math.min(rom.length, machine.rom().words())));
+        this.rom = Arrays.copyOf(rom, Math.min(rom.length, machine.rom().words()));
+        isa.loadRom(this.rom);
         isa.reset();
         if (init instanceof InitMode.Random) {
             Simulator s = new Simulator(machine);
@@ -55,7 +60,7 @@ public final class IsaRun {
     private String hint(String n) {
         List<String> names = new ArrayList<>(machine.isa().state().stream().map(StateBit::name).toList());
         machine.inputs().forEach(p -> names.add(p.name()));
-        String h = org.thermion.lang.Names.didYouMean(n, names);
+        String h = Names.didYouMean(n, names);
         return h == null ? "" : "; " + h;
     }
 
@@ -84,12 +89,17 @@ public final class IsaRun {
         for (int o = 0; o < outputs.size(); o++) {
             last[o] = outState[o] >= 0 && isa.state(outState[o]);
         }
+        StringBuilder initial = new StringBuilder();
+        for (boolean b : last) {
+            initial.append(b ? '1' : '0');
+        }
         int phase = machine.pc().phase();
         List<OutputChange> changes = new ArrayList<>();
         List<WatchRow> rows = new ArrayList<>();
         String stop = "cycle limit of " + maxCycles + " reached";
         long cycles = 0;
         boolean[] before = new boolean[state.size()];
+        long lastWord = -1;
         for (long c = 0; c < maxCycles; c++) {
             if (c > 0 && cursor != null && cursor.advance(c, in)) {
                 applyInputs(in);
@@ -115,7 +125,11 @@ public final class IsaRun {
                 }
                 rows.add(new WatchRow(c, pcStart, sb.toString()));
             }
-            boolean same = isa.pc() == pcStart;
+            // As the logic's instruction register must first take the repeated word, a cycle counts as
+            // repeating only when it ran the same word as the cycle before it.
+            long word = pcStart < rom.length ? rom[pcStart] : 0L;
+            boolean same = isa.pc() == pcStart && word == lastWord;
+            lastWord = word;
             for (int s = 0; s < before.length && same; s++) {
                 same = before[s] == isa.state(s);
             }
@@ -130,7 +144,7 @@ public final class IsaRun {
             st.append(isa.state(s) ? '1' : '0');
         }
         return new RunResult(cycles, stop, changes, List.of(), state.stream().map(StateBit::name).toList(),
-                st.toString(), isa.pc(), true, watchNames, rows);
+                st.toString(), isa.pc(), true, watchNames, rows, initial.toString());
     }
 
     private int inputIndex(String name) {

@@ -6,6 +6,7 @@ import org.thermion.model.Port;
 import org.thermion.model.StateBit;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -55,6 +56,10 @@ public final class LogicRun {
         applyInputs(in);
         sim.settle();
         OutputLog log = new OutputLog(sim, 0);
+        StringBuilder initial = new StringBuilder();
+        for (Port o : machine.outputs()) {
+            initial.append(OutputLog.level(sim, o.net(), 0));
+        }
         if (vcd != null) {
             vcd.begin(sim, vcdDate, version);
         }
@@ -123,7 +128,7 @@ public final class LogicRun {
                 break;
             }
             snapshot(latches, after);
-            if (sim.pc(0) == pcStart && java.util.Arrays.equals(before, after) && (cursor == null || !cursor.pending())) {
+            if (sim.pc(0) == pcStart && Arrays.equals(before, after) && (cursor == null || !cursor.pending())) {
                 stop = "fixed point at address " + pcStart + ": the machine repeats cycle " + c
                         + " unchanged from here on";
                 break;
@@ -146,7 +151,7 @@ public final class LogicRun {
             st.append(OutputLog.level(sim, b.net(), 0));
         }
         return new RunResult(cycles, stop, log.changes(), unknowns, state.stream().map(StateBit::name).toList(),
-                st.toString(), sim.pc(0), (sim.pcUnknown() & 1L) == 0, watchNames, rows);
+                st.toString(), sim.pc(0), (sim.pcUnknown() & 1L) == 0, watchNames, rows, initial.toString());
     }
 
     private boolean loadedNow(Latch l, int phase) {
@@ -182,7 +187,7 @@ public final class LogicRun {
 
     /** Lane 0 of every latch (value and unknown) and of the PC's unknown flag, packed into words. */
     private void snapshot(List<Latch> latches, long[] into) {
-        java.util.Arrays.fill(into, 0L);
+        Arrays.fill(into, 0L);
         int half = (latches.size() + 63) / 64;
         for (int i = 0; i < latches.size(); i++) {
             int n = latches.get(i).output();

@@ -62,7 +62,20 @@ public final class NetLookup {
         List<String> candidates = new ArrayList<>(byName.keySet());
         candidates.addAll(buses.keySet());
         candidates.removeIf(NetLookup::temporary);
-        String hint = Names.didYouMean(name, candidates);
+        String hint = null;
+        int dot = name.lastIndexOf('.');
+        if (dot >= 0) {
+            // A port of an instance is joined to the net outside it, which keeps the outer name.
+            String leaf = name.substring(dot + 1);
+            String outer = candidates.stream().filter(c -> c.equals(leaf) || c.endsWith("." + leaf))
+                    .min((a, b) -> Integer.compare(a.length(), b.length())).orElse(null);
+            if (outer != null) {
+                hint = "a port takes the name of the net it is connected to: did you mean '" + outer + "'?";
+            }
+        }
+        if (hint == null) {
+            hint = Names.didYouMean(name, candidates);
+        }
         throw new IllegalArgumentException("no net named '" + name + "'" + (hint == null ? "" : "; " + hint));
     }
 }

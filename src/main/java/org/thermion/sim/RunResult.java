@@ -14,8 +14,9 @@ import java.util.List;
  * @param pc         the final program counter; {@code pcKnown} false when it is unknown
  * @param watchNames the watched names, in the order of {@link WatchRow#values()}
  * @param watch      one row per cycle when names are watched
+ * @param initialOutputs the machine outputs at power-up, one '0', '1' or 'x' each (machine order)
  */
 public record RunResult(long cycles, String stop, List<OutputChange> changes, List<UnknownReport> unknowns,
                         List<String> stateNames, String state, int pc, boolean pcKnown,
-                        List<String> watchNames, List<WatchRow> watch) {
+                        List<String> watchNames, List<WatchRow> watch, String initialOutputs) {
 }

@@ -46,6 +46,10 @@ public final class Simulator {
     private static final int OP_NAND = 9;
     private static final int OP_NOR = 10;
     private static final int OP_XOR = 11;
+    private static final int OP_AND3 = 12;
+    private static final int OP_OR3 = 13;
+    private static final int OP_AND4 = 14;
+    private static final int OP_OR4 = 15;
 
     private final Machine machine;
     private final int phases;
@@ -59,6 +63,8 @@ public final class Simulator {
     private final int[] op;
     private final int[] in0;
     private final int[] in1;
+    private final int[] in2;
+    private final int[] in3;
     private final int[] listStart;
     private final int[] listEnd;
     private final int[] list;
@@ -76,11 +82,13 @@ public final class Simulator {
 
     // Program counter, per lane.
     private final boolean hasPc;
-    private final int pcMask;
     private final int pcPhase;
     private final int jumpNet;
     private final int[] targetNets;
-    private final int[] pcs = new int[LANES];
+    // The PC as bit planes: bit i of pcPlanes[b] is bit b of lane i's PC, so a load is a few word
+    // operations per PC bit whatever the lanes do.
+    private final long[] pcPlanes;
+    private final int[] laneAddress = new int[LANES];
     private long pcUnknown;
     private boolean pcUniform;
 
@@ -112,6 +120,8 @@ public final class Simulator {
         op = new int[gateCount];
         in0 = new int[gateCount];
         in1 = new int[gateCount];
+        in2 = new int[gateCount];
+        in3 = new int[gateCount];
         listStart = new int[gateCount];
         listEnd = new int[gateCount];
         out = new int[gateCount];
@@ -132,6 +142,8 @@ public final class Simulator {
             listEnd[i] = at;
             in0[i] = ins.length > 0 ? ins[0] : Netlist.CONST0;
             in1[i] = ins.length > 1 ? ins[1] : Netlist.CONST0;
+            in2[i] = ins.length > 2 ? ins[2] : Netlist.CONST0;
+            in3[i] = ins.length > 3 ? ins[3] : Netlist.CONST0;
             op[i] = opcode(g, ins.length);
         }
 
@@ -170,16 +182,15 @@ public final class Simulator {
             if (pc.width() < 1 || pc.width() > 30) {
                 throw new IllegalArgumentException("program counter width " + pc.width() + " is outside 1..30");
             }
-            pcMask = (1 << pc.width()) - 1;
             pcPhase = pc.phase();
             jumpNet = pc.jumpNet();
-            targetNets = pc.targetNets().clone();
+            targetNets = Arrays.copyOf(pc.targetNets(), Math.min(pc.targetNets().length, 31));
         } else {
-            pcMask = 0;
             pcPhase = -1;
             jumpNet = -1;
             targetNets = new int[0];
         }
+        pcPlanes = new long[hasPc ? pc.width() : 0];
         Rom rom = machine.rom();
         hasRom = rom != null;
         dataNets = hasRom ? rom.dataNets().clone() : new int[0];
@@ -205,8 +216,8 @@ public final class Simulator {
         return switch (g.fn()) {
             case BUF -> OP_BUF;
             case NOT -> OP_NOT;
-            case AND -> n == 1 ? OP_BUF : n == 2 ? OP_AND2 : OP_AND;
-            case OR -> n == 1 ? OP_BUF : n == 2 ? OP_OR2 : OP_OR;
+            case AND -> n == 1 ? OP_BUF : n == 2 ? OP_AND2 : n == 3 ? OP_AND3 : n == 4 ? OP_AND4 : OP_AND;
+            case OR -> n == 1 ? OP_BUF : n == 2 ? OP_OR2 : n == 3 ? OP_OR3 : n == 4 ? OP_OR4 : OP_OR;
             case NAND -> n == 1 ? OP_NOT : n == 2 ? OP_NAND2 : OP_NAND;
             case NOR -> n == 1 ? OP_NOT : n == 2 ? OP_NOR2 : OP_NOR;
             case XOR -> n == 1 ? OP_BUF : n == 2 ? OP_XOR2 : OP_XOR;
@@ -219,7 +230,7 @@ public final class Simulator {
 
     /**
      * Starts over: latches per {@code init}, PC 0 on every lane, cycle 0, next phase 1.
-     * Machine inputs keep the values last set; a loaded ROM stays loaded.
+     * Machine inputs keep the values last set; a loaded ROM, or a forced ROM word, stays.
      */
     public void reset(InitMode init) {
         threeValued = init instanceof InitMode.Unknown;
@@ -244,7 +255,7 @@ public final class Simulator {
         }
         val[Netlist.CONST1] = -1L;
         val[Netlist.CONST0] = 0L;
-        Arrays.fill(pcs, 0);
+        Arrays.fill(pcPlanes, 0L);
         pcUnknown = 0;
         pcUniform = true;
         cycle = 0;
@@ -310,6 +321,8 @@ public final class Simulator {
         final int[] op = this.op;
         final int[] a = in0;
         final int[] b = in1;
+        final int[] c = in2;
+        final int[] d = in3;
         final int[] o = out;
         for (int g = 0, n = gateCount; g < n; g++) {
             long r;
@@ -334,6 +347,18 @@ public final class Simulator {
                     break;
                 case OP_XOR2:
                     r = v[a[g]] ^ v[b[g]];
+                    break;
+                case OP_AND3:
+                    r = v[a[g]] & v[b[g]] & v[c[g]];
+                    break;
+                case OP_OR3:
+                    r = v[a[g]] | v[b[g]] | v[c[g]];
+                    break;
+                case OP_AND4:
+                    r = v[a[g]] & v[b[g]] & v[c[g]] & v[d[g]];
+                    break;
+                case OP_OR4:
+                    r = v[a[g]] | v[b[g]] | v[c[g]] | v[d[g]];
                     break;
                 case OP_AND:
                     r = andList(v, g);
@@ -420,6 +445,8 @@ public final class Simulator {
                     rv = (v[in0[g]] ^ v[in1[g]]) & ~rx;
                     break;
                 }
+                case OP_AND3:
+                case OP_AND4:
                 case OP_AND:
                 case OP_NAND: {
                     long one = -1L;
@@ -430,9 +457,11 @@ public final class Simulator {
                         zero |= ~v[p] & ~x[p];
                     }
                     rx = ~zero & ~one;
-                    rv = code == OP_AND ? one : zero;
+                    rv = code == OP_NAND ? zero : one;
                     break;
                 }
+                case OP_OR3:
+                case OP_OR4:
                 case OP_OR:
                 case OP_NOR: {
                     long one = 0L;
@@ -443,7 +472,7 @@ public final class Simulator {
                         zero &= ~v[p] & ~x[p];
                     }
                     rx = ~zero & ~one;
-                    rv = code == OP_OR ? one : zero;
+                    rv = code == OP_NOR ? zero : one;
                     break;
                 }
                 case OP_XOR: {
@@ -528,70 +557,38 @@ public final class Simulator {
     private void loadPc() {
         long j = val[jumpNet];
         long jx = threeValued ? unk[jumpNet] : 0L;
-        boolean targetsUniform = true;
-        long tx = 0;
-        for (int t : targetNets) {
-            long tv = val[t];
-            if (tv != 0 && tv != -1L) {
-                targetsUniform = false;
-            }
-            if (threeValued) {
-                tx |= unk[t];
-            }
-        }
-        if (pcUniform && jx == 0 && tx == 0 && targetsUniform && (j == 0 || j == -1L)) {
-            int next = j == 0 ? (pcs[0] + 1) & pcMask : target(0);
-            Arrays.fill(pcs, next);
-            romDirty = true;
-            return;
-        }
-        long newUnknown = pcUnknown;
-        for (int lane = 0; lane < LANES; lane++) {
-            long bit = 1L << lane;
-            int inc = (pcs[lane] + 1) & pcMask;
-            int tgt = target(lane);
-            boolean tgtUnknown = false;
-            if (threeValued) {
-                for (int t : targetNets) {
-                    if ((unk[t] & bit) != 0) {
-                        tgtUnknown = true;
-                    }
+        long carry = -1L;
+        long diff = 0L;
+        long tx = 0L;
+        int tn = targetNets.length;
+        for (int b = 0; b < pcPlanes.length; b++) {
+            long p = pcPlanes[b];
+            // PC + 1 by ripple carry, all lanes at once; the carry out of the top bit wraps away.
+            long inc = p ^ carry;
+            carry &= p;
+            long t = 0L;
+            if (b < tn) {
+                t = val[targetNets[b]];
+                if (threeValued) {
+                    tx |= unk[targetNets[b]];
                 }
             }
-            if ((jx & bit) != 0) {
-                // Jump or not unknown: the PC is known only when both ways lead to the same address.
-                pcs[lane] = inc;
-                if (tgtUnknown || tgt != inc) {
-                    newUnknown |= bit;
-                }
-            } else if ((j & bit) != 0) {
-                pcs[lane] = tgt;
-                if (tgtUnknown) {
-                    newUnknown |= bit;
-                } else {
-                    newUnknown &= ~bit;
-                }
-            } else {
-                pcs[lane] = inc;
-            }
+            diff |= t ^ inc;
+            // j is 0 on lanes where the jump is unknown, so those take PC + 1 here.
+            pcPlanes[b] = (j & t) | (~j & inc);
         }
-        pcUnknown = newUnknown;
+        long nu = (pcUnknown & ~j) | (j & tx);
+        // An unknown jump leaves the PC known only where target and PC + 1 agree.
+        nu |= jx & (tx | diff);
+        pcUnknown = nu;
         updateUniform();
         romDirty = true;
     }
 
-    private int target(int lane) {
-        int t = 0;
-        for (int b = 0; b < targetNets.length && b < 31; b++) {
-            t |= (int) ((val[targetNets[b]] >>> lane) & 1L) << b;
-        }
-        return t & pcMask;
-    }
-
     private void updateUniform() {
         boolean u = pcUnknown == 0;
-        for (int i = 1; i < LANES && u; i++) {
-            u = pcs[i] == pcs[0];
+        for (int b = 0; b < pcPlanes.length && u; b++) {
+            u = pcPlanes[b] == 0L || pcPlanes[b] == -1L;
         }
         pcUniform = u;
     }
@@ -608,17 +605,26 @@ public final class Simulator {
                 romX[b] = 0L;
             }
         } else if (pcUniform) {
-            long word = romWord(pcs[0]);
+            long word = romWord(pc(0));
             for (int b = 0; b < w; b++) {
                 romV[b] = -((word >>> b) & 1L);
                 romX[b] = 0L;
             }
         } else {
             Arrays.fill(romV, 0L);
+            // Addresses per lane from the PC planes, visiting only their one bits.
+            int[] addr = laneAddress;
+            Arrays.fill(addr, 0);
+            for (int b = 0; b < pcPlanes.length; b++) {
+                for (long p = pcPlanes[b]; p != 0; p &= p - 1) {
+                    addr[Long.numberOfTrailingZeros(p)] |= 1 << b;
+                }
+            }
             for (int lane = 0; lane < LANES; lane++) {
-                long word = romWord(pcs[lane]);
-                for (int b = 0; b < w; b++) {
-                    romV[b] |= ((word >>> b) & 1L) << lane;
+                long bit = 1L << lane;
+                // Visit only the word's one bits.
+                for (long word = romWord(addr[lane]); word != 0; word &= word - 1) {
+                    romV[Long.numberOfTrailingZeros(word)] |= bit;
                 }
             }
             for (int b = 0; b < w; b++) {
@@ -661,7 +667,11 @@ public final class Simulator {
 
     /** The program counter of one lane. */
     public int pc(int lane) {
-        return pcs[lane];
+        int a = 0;
+        for (int b = 0; b < pcPlanes.length; b++) {
+            a |= (int) ((pcPlanes[b] >>> lane) & 1L) << b;
+        }
+        return a;
     }
 
     /** Lanes whose program counter is unknown (after a jump decided by an X), else 0. */
@@ -671,7 +681,14 @@ public final class Simulator {
 
     /** Sets the program counter of one lane (taken mod 2^width); the lane's PC becomes known. */
     public void setPc(int lane, int pc) {
-        pcs[lane] = pc & pcMask;
+        long bit = 1L << lane;
+        for (int b = 0; b < pcPlanes.length; b++) {
+            if ((pc >>> b & 1) != 0) {
+                pcPlanes[b] |= bit;
+            } else {
+                pcPlanes[b] &= ~bit;
+            }
+        }
         pcUnknown &= ~(1L << lane);
         updateUniform();
         romDirty = true;

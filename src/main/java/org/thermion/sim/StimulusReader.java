@@ -38,12 +38,18 @@ public final class StimulusReader {
         String text;
         try {
             text = Files.readString(file, StandardCharsets.UTF_8);
+        } catch (java.nio.file.NoSuchFileException e) {
+            diags.error(new Span(file, 0, 0, 0, 0), "cannot read stimulus file " + file + ": no such file");
+            return null;
+        } catch (java.nio.file.AccessDeniedException e) {
+            diags.error(new Span(file, 0, 0, 0, 0), "cannot read stimulus file " + file + ": permission denied");
+            return null;
+        } catch (java.nio.charset.MalformedInputException e) {
+            diags.error(new Span(file, 0, 0, 0, 0), "stimulus file " + file + " is not UTF-8 text");
+            return null;
         } catch (IOException e) {
             diags.error(new Span(file, 0, 0, 0, 0), "cannot read stimulus file " + file + ": "
                     + (e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage()));
-            return null;
-        } catch (java.io.UncheckedIOException e) {
-            diags.error(new Span(file, 0, 0, 0, 0), "stimulus file " + file + " is not UTF-8 text");
             return null;
         }
         return parse(file, text);

@@ -1,6 +1,7 @@
 package org.thermion.cli;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
 
 import java.io.IOException;
@@ -9,6 +10,7 @@ import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
 
 import static org.assertj.core.api.Assertions.assertThat;
@@ -49,6 +51,24 @@ class RunCommandTest {
     }
 
     @Test
+    void csvAndJsonCarryTheSameRun() throws IOException {
+        String[] args = {"run", MACHINE, "programs/pump.asm", "--inputs", STIM, "--cycles", "30", "--watch", "acc,s0"};
+        Outcome csv = run(concat(args, "--format", "csv"));
+        Outcome json = run(concat(args, "--format", "json"));
+        assertThat(csv.code()).isZero();
+        assertThat(json.code()).isZero();
+        golden("pump-30.csv", csv.out());
+        golden("pump-30.json", json.out());
+    }
+
+    private static String[] concat(String[] a, String... b) {
+        String[] r = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, r, a.length, b.length);
+        return r;
+    }
+
+    @Test
+    @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void logicAndIsaLevelsAgreeOnThePrograms() {
         String[][] cases = {
                 {"programs/pump.asm", STIM},
@@ -66,6 +86,17 @@ class RunCommandTest {
     }
 
     @Test
+    void withRandomInitTheIsaLevelStartsFromTheStateTheLogicPowersUpIn() {
+        String stim = GOLDEN.resolve("every-op-stim.csv").toString();
+        Outcome logic = run("run", MACHINE, "programs/every-op.asm", "--inputs", stim, "--cycles", "120",
+                "--init", "random:7", "--format", "json", "--watch", "acc,carry,s3");
+        Outcome isa = run("run", MACHINE, "programs/every-op.asm", "--inputs", stim, "--cycles", "120",
+                "--init", "random:7", "--format", "json", "--watch", "acc,carry,s3", "--level", "isa");
+        assertThat(logic.code()).as(logic.err()).isZero();
+        assertThat(isa.out().replace("\"level\": \"isa\"", "\"level\": \"logic\"")).isEqualTo(logic.out());
+    }
+
+    @Test
     void aProgramThatSettlesStopsAtItsFixedPoint(@TempDir Path dir) throws IOException {
         Path prog = dir.resolve("settle.asm");
         Files.writeString(prog, "        LD low_sw\n        ST pump\nhere:   JMP here\n");
@@ -73,6 +104,8 @@ class RunCommandTest {
         assertThat(o.code()).as(o.err()).isZero();
         // Cycle 2 loads JMP into the instruction register; cycle 3 repeats it exactly: 4 cycles.
         assertThat(o.out()).contains("stop,4,,reason,fixed point at address 2");
+        Outcome isa = run("run", MACHINE, prog.toString(), "--format", "csv", "--level", "isa");
+        assertThat(isa.out()).isEqualTo(o.out());
     }
 
     @Test
@@ -108,6 +141,11 @@ class RunCommandTest {
                 dir.resolve(".").resolve("s.csv").toString());
         assertThat(s.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(Files.readString(stim)).isEqualTo("cycle,manual\n0,1\n");
+        // An included part of a machine is not named on the command line, but it is a source all the same.
+        Path part = dir.resolve("part.machine");
+        Files.writeString(part, "# a part\n");
+        assertThat(run("run", MACHINE, prog.toString(), "--vcd", part.toString()).code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(Files.readString(part)).isEqualTo("# a part\n");
     }
 
     @Test

@@ -53,9 +53,20 @@ class VcdWriterTest {
         assertThat(r.at("pumpstation.pc[7:0]", 100)).isEqualTo("00000001");
         assertThat(r.at("pumpstation.pc[7:0]", 399)).isEqualTo("00000010");
         // Nets of a module instance sit in its scope with the local name.
-        assertThat(r.vars).containsKey("pumpstation.lu.inv").containsKey("pumpstation.osel.term[5]");
+        String inner = innerBusBit(m);
+        assertThat(r.vars).containsKey("pumpstation.lu.inv").containsKey("pumpstation." + inner);
         assertThat(r.vars.keySet()).noneMatch(k -> k.contains("$"));
         assertThat(r.lastTime).isEqualTo(400);
+    }
+
+    /** Some bus bit inside a module instance (e.g. osel.pick[5]), found rather than named, as the demo evolves. */
+    static String innerBusBit(Machine m) {
+        for (String n : m.netlist().netNames()) {
+            if (n.contains(".") && n.endsWith("]") && !NetLookup.temporary(n)) {
+                return n;
+            }
+        }
+        throw new AssertionError("the demo has no bus inside a module instance");
     }
 
     @Test
