@@ -9,6 +9,8 @@ import org.thermion.power.Budget;
 import org.thermion.power.CurrentMeter;
 import org.thermion.power.ProgramRun;
 import org.thermion.sim.InitMode;
+import org.thermion.sim.Stimulus;
+import org.thermion.sim.StimulusReader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -18,7 +20,6 @@ import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.concurrent.Callable;
 
 /**
@@ -86,6 +87,12 @@ final class BudgetCommand implements Callable<Integer> {
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
+        if (program == null && inputs == null) {
+            var parsed = spec.commandLine().getParseResult();
+            if (parsed.hasMatchedOption("--cycles") || parsed.hasMatchedOption("--init")) {
+                err.println("note: --cycles and --init apply to a run; without --program or --inputs the budget is static");
+            }
+        }
         BudgetReport.Run run = null;
         CurrentMeter meter = null;
         if (program != null || inputs != null) {
@@ -105,10 +112,10 @@ final class BudgetCommand implements Callable<Integer> {
                 }
                 rom = a.words();
             }
-            List<ProgramRun.InputChange> changes = List.of();
+            Stimulus stimulus = null;
             if (inputs != null) {
-                changes = StimulusCsv.read(inputs, m, loader.sources(), diags);
-                if (changes == null) {
+                stimulus = new StimulusReader(m, loader.sources(), diags).read(inputs);
+                if (stimulus == null) {
                     new DiagnosticPrinter(loader.sources()).print(diags, err);
                     err.flush();
                     return ExitCodes.BAD_INPUT;
@@ -117,7 +124,7 @@ final class BudgetCommand implements Callable<Integer> {
             if (!diags.all().isEmpty()) {
                 new DiagnosticPrinter(loader.sources()).print(diags, err);
             }
-            meter = ProgramRun.run(m, rom, changes, cycles, mode);
+            meter = ProgramRun.run(m, rom, stimulus, cycles, mode);
             run = new BudgetReport.Run(program == null ? null : program.toString(),
                     inputs == null ? null : inputs.toString(), cycles, init);
         }

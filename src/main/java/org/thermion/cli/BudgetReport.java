@@ -76,11 +76,14 @@ final class BudgetReport {
                 m.envelopes().size(), m.heaterStrings().size(), m.rails().size()));
         h.add("  plate and bias current: lowest and highest = every stage instance at its lowest or highest draw");
         if (run != null) {
-            h.add(String.format(Locale.ROOT, "  simulated: %s%s, %d cycles (%d phases each), lane 0, latches start %s; "
-                            + "min, mean, peak over the phases, now = the last phase", run.program(),
-                    run.inputs() == null ? "" : " with inputs " + run.inputs(), run.cycles(), m.clock().phases(), run.init()));
+            h.add(String.format(Locale.ROOT, "  simulated: %s%s, %d cycles of %d phases, lane 0, latches start %s",
+                    run.program(), run.inputs() == null ? "" : " with inputs " + run.inputs(), run.cycles(),
+                    m.clock().phases(), run.init()));
+            h.add("    min, mean and peak over every phase; now = the last phase; cycles count from 0, phases from 1"
+                    + (run.init().startsWith("unknown") ? "; an unknown output counts at its low draw" : ""));
         }
-        h.add("  plate W is " + PLATE_NOTE);
+        h.add("  plate W is approximate: P = I x max(V - I x Rload, I x Ron) for the draw on the plate-load rail,");
+        h.add("    I x V for other positive rails, I x arc drop for a conducting thyratron; bias draws not counted");
         return h;
     }
 
@@ -113,7 +116,8 @@ final class BudgetReport {
     }
 
     private ReportTable modules() {
-        ReportTable t = new ReportTable("modules", "modules")
+        ReportTable t = new ReportTable("modules",
+                "modules (heater A and W: the module's share of its strings; a string spanning modules counts in each)")
                 .column("module", "module", TEXT)
                 .column("tubes", "tubes", COUNT)
                 .column("sections_used", "used", COUNT)
@@ -303,6 +307,7 @@ final class BudgetReport {
                 .column("rail", "rail", TEXT)
                 .column("volts", "voltage", VOLTS)
                 .column("heater_amps", "heaters", AMPS)
+                .column("heater_watts", "heater W", WATTS)
                 .column("stage_amps", "plate+bias", AMPS)
                 .column("basis", "from", TEXT)
                 .column("peak_amps", "peak", AMPS)
@@ -313,7 +318,7 @@ final class BudgetReport {
                 .column("status", "status", TEXT);
         for (Budget.Supply s : b.supply()) {
             Rail rail = m.rails().get(s.rail());
-            t.row(rail.name(), rail.volts(), s.heaterAmps(), s.stageAmps(), s.simulated() ? "simulation" : "highest",
+            t.row(rail.name(), rail.volts(), s.heaterAmps(), b.heaters().railWatts(s.rail()), s.stageAmps(), s.simulated() ? "simulation" : "highest",
                     s.peakAmps(), s.limited() ? s.limitAmps() : Double.NaN, s.limited() ? s.marginAmps() : Double.NaN,
                     s.marginFraction() * 100, Math.copySign(s.voltsAtPeak(), rail.volts()),
                     s.over() ? "OVER" : s.limited() ? "ok" : "no limit");

@@ -1,14 +1,18 @@
 package org.thermion.cli;
 
 import java.io.PrintWriter;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
 /**
  * Writes a report (named fields, tables, closing lines) as text, as RFC 4180 CSV or as
- * JSON. CSV: one block per table, each a header row then data rows, the first field
- * naming the table; rows are padded to one width so every record has as many fields.
+ * JSON. CSV: first the report's fields as {@code report,FIELD,VALUE} records (nested
+ * fields as {@code FIELD.KEY}), then one block per table: a header record whose first field
+ * is {@code table}, then data records whose first field names the table. Records are
+ * padded to one width so every record has as many fields. Lines end in CRLF.
  */
 final class ReportWriter {
     private ReportWriter() {
@@ -38,7 +42,13 @@ final class ReportWriter {
         }
         record(out, width, "table", "field", "value");
         for (Map.Entry<String, Object> f : fields.entrySet()) {
-            record(out, width, "report", f.getKey(), f.getValue() == null ? "" : f.getValue().toString());
+            if (f.getValue() instanceof Map<?, ?> sub) {
+                for (Map.Entry<?, ?> e : sub.entrySet()) {
+                    record(out, width, "report", f.getKey() + "." + e.getKey(), raw(e.getValue()));
+                }
+            } else {
+                record(out, width, "report", f.getKey(), raw(f.getValue()));
+            }
         }
         for (ReportTable t : tables) {
             String[] h = new String[t.columns.size() + 1];
@@ -129,16 +139,12 @@ final class ReportWriter {
         }
     }
 
-    /** Shortest round-trip decimal, without an exponent for everyday magnitudes. */
+    /** A plain decimal of nine significant figures: enough for any planning figure, free of binary noise. */
     static String num(double d) {
-        if (d == Math.rint(d) && Math.abs(d) < 1e15) {
-            return String.valueOf((long) d);
+        if (d == 0) {
+            return "0";
         }
-        String s = Double.toString(d);
-        if (s.contains("E")) {
-            s = new java.math.BigDecimal(s).toPlainString();
-        }
-        return s;
+        return new BigDecimal(d).round(new MathContext(9)).stripTrailingZeros().toPlainString();
     }
 
     private static String raw(Object v) {

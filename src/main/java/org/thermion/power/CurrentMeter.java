@@ -16,6 +16,8 @@ import java.util.function.IntToLongFunction;
  * as conducting. Heater current is not included (it does not depend on the logic state;
  * see {@link HeaterAnalysis}). Amperes, magnitudes. Every phase lasts the same time, so the
  * mean over samples is the time average. Before the first sample every reading is NaN.
+ * A net the simulator holds unknown (three-valued mode) reads 0, so its stage counts at
+ * its output-low draw.
  */
 public final class CurrentMeter {
     private final int rails;

@@ -236,7 +236,9 @@ public final class HeaterAnalysis {
                 HeaterRule rule = s.rule() >= 0 && s.rule() < m.heaterRules().size() ? m.heaterRules().get(s.rule()) : null;
                 if (rule != null && rule.series() && n < rule.count()) {
                     advice = "the rule strings " + rule.count() + " in series but only " + n
-                            + (n == 1 ? " heater was" : " heaters were") + " left for this string; " + advice;
+                            + (n == 1 ? " heater was" : " heaters were") + " left for this string; " + advice
+                            + (suggestion != null ? "; declare it with `rest drop " + num(suggestion.ohms())
+                            + " ohm` on the rule" : "");
                 }
                 findings.add(new Finding(h.overVoltage() ? Finding.Severity.ERROR : Finding.Severity.WARNING,
                         subject, what + ", outside the +-" + Math.round(TOLERANCE * 100) + " % band", advice));

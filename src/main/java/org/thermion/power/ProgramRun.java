@@ -3,24 +3,19 @@ package org.thermion.power;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
-
-import java.util.Comparator;
-import java.util.List;
+import org.thermion.sim.Stimulus;
 
 /**
  * Runs a machine on a ROM image for a number of cycles on simulator lane 0 and meters its
- * plate and bias current after every phase. Input changes apply at the start of their
- * cycle (0-based) and hold until changed; inputs start at 0.
+ * plate and bias current after every phase. A stimulus row applies at the start of its
+ * cycle (0-based) and holds until changed; inputs start at 0.
  */
 public final class ProgramRun {
     private ProgramRun() {
     }
 
-    /** An input bit set to {@code value} from cycle {@code cycle} on; {@code input} indexes machine.inputs(). */
-    public record InputChange(long cycle, int input, boolean value) {
-    }
-
-    public static CurrentMeter run(Machine m, long[] rom, List<InputChange> changes, long cycles, InitMode init) {
+    /** Runs {@code cycles} cycles; {@code rom} and {@code stimulus} may be null (no ROM image, inputs at 0). */
+    public static CurrentMeter run(Machine m, long[] rom, Stimulus stimulus, long cycles, InitMode init) {
         if (cycles < 1) {
             throw new IllegalArgumentException("cycles must be at least 1, not " + cycles);
         }
@@ -29,13 +24,14 @@ public final class ProgramRun {
         if (rom != null) {
             sim.loadRom(rom);
         }
-        List<InputChange> sorted = changes.stream().sorted(Comparator.comparingLong(InputChange::cycle)).toList();
+        Stimulus.Cursor cursor = stimulus == null ? null : stimulus.cursor();
+        boolean[] inputs = new boolean[m.inputs().size()];
         CurrentMeter meter = new CurrentMeter(m);
-        int next = 0;
         for (long c = 0; c < cycles; c++) {
-            while (next < sorted.size() && sorted.get(next).cycle() <= c) {
-                InputChange ch = sorted.get(next++);
-                sim.setInput(ch.input(), ch.value() ? -1L : 0L);
+            if (cursor != null && cursor.advance(c, inputs)) {
+                for (int i = 0; i < inputs.length; i++) {
+                    sim.setInput(i, inputs[i] ? -1L : 0L);
+                }
             }
             for (int p = 0; p < m.clock().phases(); p++) {
                 sim.stepPhase();

@@ -274,4 +274,18 @@ class HeaterAnalysisTest {
         int soft = m.modules().stream().filter(x -> x.type().equals("softstart")).findFirst().orElseThrow().id();
         assertThat(h.moduleAmps(soft, m.railIndex("heat"))).isCloseTo(1.2, within(1e-9));
     }
+
+    @Test
+    void followingTheAdviceFixesTheLoneThyratron() {
+        // `rest drop 10.5 ohm` gives the shorter last string its own dropper: 12.6 V / (10.5 + 10.5) ohm = 0.6 A
+        Machine m = Machines.of(LONE_THYRATRON.replace("series 2 of 2D21 across machine",
+                "series 2 of 2D21 across machine rest drop 10.5 ohm"));
+        HeaterAnalysis h = new HeaterAnalysis(m);
+        HeaterAnalysis.StringResult lone = h.strings().stream()
+                .filter(s -> m.tubes().get(s.heaters().get(0).tube()).name().equals("2D21")).findFirst().orElseThrow();
+        assertThat(lone.amps()).isCloseTo(0.6, within(1e-9));
+        assertThat(lone.heaters().get(0).volts()).isCloseTo(6.3, within(1e-9));
+        assertThat(lone.dropWatts()).isCloseTo(3.78, within(1e-9));
+        assertThat(h.findings()).isEmpty();
+    }
 }
