@@ -1,9 +1,12 @@
 package org.thermion.tui;
 
-import org.thermion.model.HeaterString;
 import org.thermion.model.Machine;
 import org.thermion.model.Rail;
+import org.thermion.model.RailDraw;
+import org.thermion.model.StageType;
 import org.thermion.power.CurrentMeter;
+import org.thermion.power.DrawingInstance;
+import org.thermion.power.DrawingInstances;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -29,32 +32,41 @@ final class PowerPanel {
         return 1 + s.modules().size() + 1 + 1 + 1 + s.machine().rails().size() + 1 + 2;
     }
 
-    /** Rails not feeding heaters, the highest positive voltage (B+) first. */
+    /**
+     * Rails some stage instance draws from (plate, bias, relay coils, the soft-start thyratron), in the machine's
+     * order but with the highest positive voltage (B+) first.
+     */
     static List<Integer> plateRails(Machine m) {
-        boolean[] heater = heaterRails(m);
+        boolean[] drawn = new boolean[m.rails().size()];
+        for (DrawingInstance d : DrawingInstances.of(m)) {
+            mark(drawn, m.stages().get(d.stage()));
+        }
         List<Integer> r = new ArrayList<>();
-        for (int i = 0; i < m.rails().size(); i++) {
-            if (!heater[i]) {
+        int bplus = -1;
+        for (int i = 0; i < drawn.length; i++) {
+            if (drawn[i] && (bplus < 0 || m.rails().get(i).volts() > m.rails().get(bplus).volts())) {
+                bplus = i;
+            }
+        }
+        if (bplus >= 0) {
+            r.add(bplus);
+        }
+        for (int i = 0; i < drawn.length; i++) {
+            if (drawn[i] && i != bplus) {
                 r.add(i);
             }
         }
-        r.sort((a, b) -> {
-            double va = m.rails().get(a).volts();
-            double vb = m.rails().get(b).volts();
-            if ((va > 0) != (vb > 0)) {
-                return va > 0 ? -1 : 1;
-            }
-            return Double.compare(Math.abs(vb), Math.abs(va));
-        });
         return r;
     }
 
-    static boolean[] heaterRails(Machine m) {
-        boolean[] heater = new boolean[m.rails().size()];
-        for (HeaterString h : m.heaterStrings()) {
-            heater[h.rail()] = true;
+    private static void mark(boolean[] drawn, StageType st) {
+        for (List<RailDraw> draws : List.of(st.drawLow(), st.drawHigh(), st.drawAlways())) {
+            for (RailDraw d : draws) {
+                if (d.amps() != 0) {
+                    drawn[d.rail()] = true;
+                }
+            }
         }
-        return heater;
     }
 
     static void draw(Canvas c, Rect r, Session s) {

@@ -83,7 +83,7 @@ class ScreenTest {
         assertThat(f.ui.powerUpView().await(Duration.ofSeconds(100))).isTrue();
         f.ui.draw();
         assertThat(f.line("power-up")).contains("rail heat");
-        assertThat(f.text()).contains("switch-on peak").contains("heater_soft: 0.40 ohm").contains("can injure or kill");
+        assertThat(f.text()).contains("switch-on peak").containsPattern("heater_soft: [0-9.]+ ohm, [0-9]+ J").contains("can injure or kill");
         assertThat(f.text()).contains("\u2588");
         f.type("]");
         assertThat(f.line("power-up")).contains("rail relay");
