@@ -1,5 +1,8 @@
 package org.thermion.cli;
 
+import org.thermion.tui.DecodeLine;
+import org.thermion.tui.Session;
+
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintWriter;
@@ -7,14 +10,54 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 
-/** What the command does with no arguments: the bundled example machine. */
+/**
+ * What the command does with no arguments, on the bundled example (the pump station and
+ * pump.asm): on a terminal it opens the UI; without one (piped, CI) it runs the program
+ * headless through a day of switch changes (programs/pump-day.csv) and prints the output
+ * changes and the power budget.
+ */
 final class DefaultRun {
+    /** Cycles of the headless run: the stimulus's last change, then a few passes more. */
+    static final String CYCLES = "450";
+
     private DefaultRun() {
     }
 
     static int run(PrintWriter out, PrintWriter err) {
         Path machine = BundledExample.machine();
-        return Main.commandLine().setOut(out).setErr(err).execute("check", machine.toString());
+        Path program = BundledExample.program("pump.asm");
+        if (UiCommand.whyNoTerminal() == null) {
+            Session s = UiCommand.open(machine, program, null, "zero", DecodeLine.DEFAULT_NAME, err);
+            if (s == null) {
+                return ExitCodes.INTERNAL;
+            }
+            try {
+                return UiCommand.show(s, program.getFileName().toString());
+            } catch (IOException e) {
+                err.println("error: the terminal failed: " + e.getMessage());
+                err.flush();
+                return ExitCodes.INTERNAL;
+            }
+        }
+        return headless(machine, program, BundledExample.program("pump-day.csv"), out, err);
+    }
+
+    static int headless(Path machine, Path program, Path stimulus, PrintWriter out, PrintWriter err) {
+        out.println("No terminal here, so no screen: running the bundled example instead. On a terminal,");
+        out.println("thermion without arguments opens the UI on it (or: thermion ui MACHINE PROGRAM).");
+        out.println();
+        out.println("Machine " + machine + ", program " + program + ", switches from " + stimulus.getFileName()
+                + ", " + CYCLES + " cycles.");
+        out.println();
+        out.flush();
+        int run = Main.commandLine().setOut(out).setErr(err).execute("run", machine.toString(), program.toString(),
+                "--inputs", stimulus.toString(), "--cycles", CYCLES);
+        out.println();
+        out.flush();
+        int budget = Main.commandLine().setOut(out).setErr(err).execute("budget", machine.toString(),
+                "--program", program.toString(), "--inputs", stimulus.toString(), "--cycles", CYCLES);
+        out.flush();
+        return Math.max(run, budget);
     }
 
     /** The bundled example, from the working tree when present, else unpacked from the jar. */
@@ -29,19 +72,39 @@ final class DefaultRun {
             try {
                 Path dir = Files.createTempDirectory("thermion-example");
                 for (String f : FILES) {
-                    try (InputStream in = DefaultRun.class.getResourceAsStream("/examples/pumpstation/" + f)) {
-                        if (in == null) {
-                            throw new IllegalStateException("bundled example missing from the jar: " + f);
-                        }
-                        Files.copy(in, dir.resolve(f), StandardCopyOption.REPLACE_EXISTING);
-                    }
-                    dir.resolve(f).toFile().deleteOnExit();
+                    unpack("/examples/pumpstation/" + f, dir.resolve(f));
                 }
                 dir.toFile().deleteOnExit();
                 return dir.resolve(FILES[0]);
             } catch (IOException e) {
                 throw new IllegalStateException("cannot unpack the bundled example: " + e.getMessage(), e);
             }
+        }
+
+        /** A file of programs/, from the working tree when present, else unpacked from the jar. */
+        static Path program(String name) {
+            Path local = Path.of("programs", name);
+            if (Files.isRegularFile(local)) {
+                return local;
+            }
+            try {
+                Path dir = Files.createTempDirectory("thermion-program");
+                dir.toFile().deleteOnExit();
+                return unpack("/programs/" + name, dir.resolve(name));
+            } catch (IOException e) {
+                throw new IllegalStateException("cannot unpack the bundled program: " + e.getMessage(), e);
+            }
+        }
+
+        private static Path unpack(String resource, Path to) throws IOException {
+            try (InputStream in = DefaultRun.class.getResourceAsStream(resource)) {
+                if (in == null) {
+                    throw new IllegalStateException("bundled example missing from the jar: " + resource);
+                }
+                Files.copy(in, to, StandardCopyOption.REPLACE_EXISTING);
+            }
+            to.toFile().deleteOnExit();
+            return to;
         }
     }
 }

@@ -1,0 +1,146 @@
+package org.thermion.cli;
+
+import com.googlecode.lanterna.screen.Screen;
+import com.googlecode.lanterna.screen.TerminalScreen;
+import com.googlecode.lanterna.terminal.DefaultTerminalFactory;
+import com.googlecode.lanterna.terminal.Terminal;
+import com.googlecode.lanterna.terminal.ansi.UnixLikeTerminal;
+import org.thermion.asm.Assembler;
+import org.thermion.asm.Assembly;
+import org.thermion.lang.DiagnosticPrinter;
+import org.thermion.lang.Diagnostics;
+import org.thermion.model.Machine;
+import org.thermion.sim.InitMode;
+import org.thermion.sim.Stimulus;
+import org.thermion.sim.StimulusReader;
+import org.thermion.tui.DecodeLine;
+import org.thermion.tui.PowerUpView;
+import org.thermion.tui.Session;
+import org.thermion.tui.TerminalUi;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+
+/** {@code ui MACHINE PROGRAM}: step a program in the terminal, watching registers, decode lines and power. */
+@Command(name = "ui", mixinStandardHelpOptions = true,
+        description = {"Step and run a program on a machine in the terminal: the listing, every state bit, "
+            + "the decode lines, switches and lamps, and the power drawn per module and rail.",
+            "Press ? inside for the keys; q or Ctrl-C quits."})
+public final class UiCommand implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
+    Path machine;
+
+    @Parameters(index = "1", paramLabel = "PROGRAM", description = "The .asm program to load into the ROM.")
+    Path program;
+
+    @Option(names = "--inputs", paramLabel = "STIM.csv",
+            description = "Input changes by cycle (cycle, then one column per named input); the switches still flip them.")
+    Path inputs;
+
+    @Option(names = "--init", paramLabel = "MODE", defaultValue = "zero",
+            description = "Power-up state of the latches: zero, random:SEED or unknown (default: ${DEFAULT-VALUE}).")
+    String init;
+
+    @Option(names = "--decode-net", paramLabel = "NAME", defaultValue = DecodeLine.DEFAULT_NAME,
+            description = "Decode lines are the top module's nets NAME[k], k an opcode (default: ${DEFAULT-VALUE}).")
+    String decodeNet;
+
+    @Mixin
+    CommonOptions common;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        PrintWriter err = spec.commandLine().getErr();
+        String why = whyNoTerminal();
+        if (why != null) {
+            err.println("error: ui needs an interactive terminal, but " + why + ".");
+            err.println("Run it in a terminal window; for a run without a screen use the other commands (see thermion --help).");
+            err.flush();
+            return ExitCodes.BAD_INPUT;
+        }
+        Session session = open(machine, program, inputs, init, decodeNet, err);
+        if (session == null) {
+            return ExitCodes.BAD_INPUT;
+        }
+        return show(session, program.getFileName().toString());
+    }
+
+    /** Null when this process runs on a terminal, else the reason it does not. */
+    static String whyNoTerminal() {
+        String term = System.getenv("TERM");
+        if (System.console() == null) {
+            return "standard input or output is not a terminal (piped or redirected)";
+        }
+        if (term == null || term.isBlank()) {
+            return "TERM is not set";
+        }
+        if (term.equals("dumb")) {
+            return "TERM is 'dumb', which cannot place text on the screen";
+        }
+        return null;
+    }
+
+    /** Loads the machine and program into a session, printing diagnostics; null on bad input. */
+    static Session open(Path machineFile, Path programFile, Path stimulusFile, String initText, String decodeName,
+                        PrintWriter err) {
+        InitMode mode;
+        try {
+            mode = InitMode.parse(initText);
+        } catch (IllegalArgumentException e) {
+            err.println("error: --init: " + e.getMessage());
+            err.flush();
+            return null;
+        }
+        MachineLoader loader = new MachineLoader();
+        Machine m = loader.load(machineFile, err, false);
+        if (m == null) {
+            err.flush();
+            return null;
+        }
+        Diagnostics d = loader.diagnostics();
+        Assembly a = Assembler.assemble(m, programFile, d);
+        if (a == null || d.hasErrors()) {
+            new DiagnosticPrinter(loader.sources()).print(d, err);
+            err.flush();
+            return null;
+        }
+        Stimulus stimulus = null;
+        if (stimulusFile != null) {
+            stimulus = new StimulusReader(m, loader.sources(), d).read(stimulusFile);
+            if (stimulus == null || d.hasErrors()) {
+                new DiagnosticPrinter(loader.sources()).print(d, err);
+                err.flush();
+                return null;
+            }
+        }
+        return new Session(m, a, decodeName, mode, stimulus);
+    }
+
+    /** Runs the screen until quit; the terminal is restored however the loop ends. */
+    static int show(Session session, String programName) throws IOException {
+        Terminal terminal = new DefaultTerminalFactory(System.out, System.in, StandardCharsets.UTF_8)
+                .setForceTextTerminal(true)
+                .setUnixTerminalCtrlCBehaviour(UnixLikeTerminal.CtrlCBehaviour.TRAP)
+                .createTerminal();
+        Screen screen = new TerminalScreen(terminal);
+        screen.startScreen();
+        try {
+            new TerminalUi(screen, session, programName, new PowerUpView(session.machine())).loop();
+        } finally {
+            screen.stopScreen();
+        }
+        return ExitCodes.OK;
+    }
+}

@@ -1,0 +1,104 @@
+package org.thermion.tui;
+
+import com.googlecode.lanterna.input.KeyStroke;
+import com.googlecode.lanterna.input.KeyType;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The keys and what they do; the help overlay is printed from the same table, so it
+ * cannot drift from the code. Switch keys are the digits, then the shifted digits.
+ */
+final class Keymap {
+    /** Keys that flip the machine's inputs, in input order. */
+    static final String INPUT_KEYS = "1234567890!@#$%^&*()";
+
+    /** A line of help: the keys as written on the overlay, and what they do. */
+    record HelpLine(String keys, String meaning) {
+    }
+
+    private Keymap() {
+    }
+
+    /** The key's command, or null for a key that does nothing. */
+    static Key resolve(KeyStroke k, int inputCount) {
+        KeyType t = k.getKeyType();
+        if (t == KeyType.Character) {
+            char c = k.getCharacter();
+            if (k.isCtrlDown()) {
+                return c == 'c' || c == 'C' ? new Key(Command.QUIT, 0) : null;
+            }
+            int input = INPUT_KEYS.indexOf(c);
+            if (input >= 0) {
+                return input < inputCount ? new Key(Command.TOGGLE_INPUT, input) : null;
+            }
+            switch (c) {
+                case 'p': return of(Command.STEP_PHASE);
+                case 'c': return of(Command.STEP_CYCLE);
+                case ' ': case 'g': return of(Command.RUN_PAUSE);
+                case 'r': return of(Command.RESET);
+                case 'b': return of(Command.BREAKPOINT);
+                case 'B': return of(Command.CLEAR_BREAKPOINTS);
+                case 'k': return of(Command.CURSOR_UP);
+                case 'j': return of(Command.CURSOR_DOWN);
+                case '.': return of(Command.CURSOR_TO_PC);
+                case 'w': return of(Command.POWER_UP_VIEW);
+                case ']': return of(Command.NEXT_RAIL);
+                case '[': return of(Command.PREVIOUS_RAIL);
+                case '?': case 'h': return of(Command.HELP);
+                case 'q': return of(Command.QUIT);
+                default: return null;
+            }
+        }
+        switch (t) {
+            case Enter: return of(Command.STEP_CYCLE);
+            case ArrowUp: return of(Command.CURSOR_UP);
+            case ArrowDown: return of(Command.CURSOR_DOWN);
+            case PageUp: return of(Command.PAGE_UP);
+            case PageDown: return of(Command.PAGE_DOWN);
+            case Home: return of(Command.FIRST_LINE);
+            case End: return of(Command.LAST_LINE);
+            case ArrowRight: return of(Command.NEXT_RAIL);
+            case ArrowLeft: return of(Command.PREVIOUS_RAIL);
+            case F1: return of(Command.HELP);
+            case Escape: return of(Command.CLOSE);
+            case EOF: return of(Command.QUIT);
+            default: return null;
+        }
+    }
+
+    private static Key of(Command c) {
+        return new Key(c, 0);
+    }
+
+    /** Every key, for the help overlay. */
+    static List<HelpLine> help(List<String> inputNames) {
+        List<HelpLine> h = new ArrayList<>();
+        h.add(new HelpLine("p", "step one clock phase"));
+        h.add(new HelpLine("c  Enter", "step one cycle (one instruction)"));
+        h.add(new HelpLine("Space  g", "run / pause"));
+        h.add(new HelpLine("r", "reset: latches to power-up state, PC 0"));
+        for (int i = 0; i < inputNames.size(); i++) {
+            String key = i < INPUT_KEYS.length() ? String.valueOf(INPUT_KEYS.charAt(i)) : "-";
+            h.add(new HelpLine(key, "flip switch " + inputNames.get(i)));
+        }
+        h.add(new HelpLine("b", "set or clear a breakpoint on the cursor line"));
+        h.add(new HelpLine("B", "clear every breakpoint"));
+        h.add(new HelpLine("Up Down  k j", "move the listing cursor"));
+        h.add(new HelpLine("PgUp PgDn Home End", "move the cursor by pages, to the ends"));
+        h.add(new HelpLine(".", "cursor to the PC"));
+        h.add(new HelpLine("w", "power-up view (rail current from switch-on); again to leave"));
+        h.add(new HelpLine("[ ]  Left Right", "previous / next rail in the power-up view"));
+        h.add(new HelpLine("?  h  F1", "this help; any key closes it"));
+        h.add(new HelpLine("Esc", "close help or the power-up view"));
+        h.add(new HelpLine("q  Ctrl-C", "quit"));
+        h.add(new HelpLine("", ""));
+        h.add(new HelpLine(Glyphs.LAMP_ON + " " + Glyphs.LAMP_OFF + " " + Glyphs.LAMP_UNKNOWN,
+                "lamp lit, dark, unknown (never set since power-up, or lost)"));
+        h.add(new HelpLine(Glyphs.SWITCH_ON + " " + Glyphs.SWITCH_OFF, "switch on, off"));
+        h.add(new HelpLine(Glyphs.PC + " " + Glyphs.PC_NEXT, "instruction in flight, next to be fetched"));
+        h.add(new HelpLine(Glyphs.BREAKPOINT + " " + Glyphs.CURSOR, "breakpoint, listing cursor"));
+        return h;
+    }
+}

@@ -1,0 +1,418 @@
+package org.thermion.tui;
+
+import org.thermion.asm.Assembly;
+import org.thermion.asm.ListingLine;
+import org.thermion.model.Instruction;
+import org.thermion.model.Machine;
+import org.thermion.model.Port;
+import org.thermion.power.CurrentMeter;
+import org.thermion.power.HeaterAnalysis;
+import org.thermion.power.TubeCount;
+import org.thermion.sim.InitMode;
+import org.thermion.sim.Simulator;
+import org.thermion.sim.Stimulus;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Deque;
+import java.util.List;
+
+/**
+ * Everything the terminal UI shows and changes, without a terminal: the machine and its
+ * simulator on one lane, the program listing, breakpoints, switch positions, the current
+ * meter and why the machine last stopped. Drawing code only reads it; key handling calls
+ * its commands. Tests drive it directly.
+ */
+public final class Session {
+    /** The lane the session runs; the simulator computes 64, the UI watches one. */
+    static final int LANE = 0;
+    private static final int CHANGE_LOG = 256;
+
+    private final Machine machine;
+    private final Assembly assembly;
+    private final Simulator sim;
+    private final InitMode init;
+    private final Stimulus stimulus;
+    private Stimulus.Cursor stimulusCursor;
+    private final List<DecodeLine> decode;
+    private final List<ModuleLoad> modules;
+    private final HeaterAnalysis heaters;
+    private final int[] listingIndexOfAddress;
+    private final boolean[] breakpoints;
+    private final boolean[] inputs;
+    private final Level[] lastOutputs;
+    private final int[] watched;
+    /** Per watched net: known at some time since reset. A net never known is unset, not lost. */
+    private final boolean[] everKnown;
+    private final Deque<OutputChange> changes = new ArrayDeque<>();
+    private CurrentMeter meter;
+    private long outputChangeCount;
+    private boolean running;
+    private Stop stop;
+
+    /**
+     * A session on lane 0 of a new simulator. {@code stimulus} (null for none) sets inputs
+     * as cycles come; {@code decodeName} names the decode nets (see {@link DecodeLine}).
+     */
+    public Session(Machine machine, Assembly assembly, String decodeName, InitMode init, Stimulus stimulus) {
+        this.machine = machine;
+        this.assembly = assembly;
+        this.init = init;
+        this.stimulus = stimulus;
+        this.sim = new Simulator(machine);
+        this.decode = DecodeLine.find(machine, decodeName);
+        this.heaters = new HeaterAnalysis(machine);
+        this.modules = ModuleLoad.of(machine, new TubeCount(machine), heaters);
+        this.breakpoints = new boolean[Math.max(1, machine.rom().words())];
+        this.listingIndexOfAddress = new int[breakpoints.length];
+        Arrays.fill(listingIndexOfAddress, -1);
+        List<ListingLine> listing = assembly.listing();
+        for (int i = 0; i < listing.size(); i++) {
+            ListingLine l = listing.get(i);
+            if (l.hasWord() && l.address() >= 0 && l.address() < listingIndexOfAddress.length
+                    && listingIndexOfAddress[l.address()] < 0) {
+                listingIndexOfAddress[l.address()] = i;
+            }
+        }
+        this.inputs = new boolean[machine.inputs().size()];
+        this.lastOutputs = new Level[machine.outputs().size()];
+        this.watched = watchedNets(machine, decode);
+        this.everKnown = new boolean[watched.length];
+        sim.loadRom(assembly.words());
+        reset();
+    }
+
+    /** Nets whose turning unknown stops a run: state bits, outputs, the jump request and the decode lines. */
+    private static int[] watchedNets(Machine m, List<DecodeLine> decode) {
+        List<Integer> nets = new ArrayList<>();
+        m.isa().state().forEach(b -> nets.add(b.net()));
+        for (Port p : m.outputs()) {
+            nets.add(p.net());
+        }
+        if (m.pc().jumpNet() >= 0) {
+            nets.add(m.pc().jumpNet());
+        }
+        for (DecodeLine d : decode) {
+            nets.add(d.net());
+        }
+        return nets.stream().mapToInt(Integer::intValue).distinct().toArray();
+    }
+
+    // ---- commands -------------------------------------------------------------------
+
+    /** Latches to their power-up state, PC 0, cycle 0, meter cleared; switches stay where they are. */
+    public void reset() {
+        running = false;
+        sim.reset(init);
+        if (meter == null) {
+            meter = new CurrentMeter(machine);
+        } else {
+            meter.reset();
+        }
+        stimulusCursor = stimulus == null ? null : stimulus.cursor();
+        changes.clear();
+        outputChangeCount = 0;
+        applySchedule();
+        pushInputs();
+        sim.settle();
+        sample();
+        for (int i = 0; i < lastOutputs.length; i++) {
+            lastOutputs[i] = level(machine.outputs().get(i).net());
+        }
+        Arrays.fill(everKnown, false);
+        lostKnowledge();
+        stop = new Stop(Stop.Reason.RESET, "reset");
+    }
+
+    /** Runs the next clock phase. */
+    public void stepPhase() {
+        running = false;
+        phase();
+        sim.settle();
+        stop = new Stop(Stop.Reason.STEPPED, "stepped one phase");
+        unknownStop();
+    }
+
+    /** Runs phases until the current cycle is complete (a whole cycle from a cycle boundary). */
+    public void stepCycle() {
+        running = false;
+        runOneCycle();
+        sim.settle();
+        stop = new Stop(Stop.Reason.STEPPED, "stepped one cycle");
+        unknownStop();
+    }
+
+    /** Starts or pauses a run; {@link #run(long)} does the work between frames. */
+    public void toggleRun() {
+        if (running) {
+            running = false;
+            stop = new Stop(Stop.Reason.PAUSED, "paused");
+        } else {
+            running = true;
+        }
+    }
+
+    public boolean running() {
+        return running;
+    }
+
+    /**
+     * While running, runs up to {@code maxCycles} cycles, checking after each whether the
+     * PC reached a breakpoint or a watched net turned unknown; stops the run if so.
+     * Returns the cycles run.
+     */
+    public long run(long maxCycles) {
+        if (!running) {
+            return 0;
+        }
+        boolean threeValued = sim.threeValued();
+        long done = 0;
+        while (done < maxCycles) {
+            runOneCycle();
+            done++;
+            int pc = pc();
+            if (pc >= 0 && pc < breakpoints.length && breakpoints[pc]) {
+                running = false;
+                stop = new Stop(Stop.Reason.BREAKPOINT, "breakpoint at " + Hex.address(pc, machine));
+                break;
+            }
+            // Latches hold what the cycle loaded; gate nets still show the phase just run,
+            // which is where an unknown value was used, so no extra settle is needed here.
+            if (threeValued) {
+                if (unknownStop()) {
+                    running = false;
+                    break;
+                }
+            }
+        }
+        // Lamps show the logic settled on what the latches now hold.
+        sim.settle();
+        return done;
+    }
+
+    /** After a step: if the PC or a watched net that was known went unknown, says so in the stop. */
+    private boolean unknownStop() {
+        if (!sim.threeValued()) {
+            return false;
+        }
+        if ((sim.pcUnknown() >>> LANE & 1L) != 0) {
+            stop = new Stop(Stop.Reason.UNKNOWN, "the PC is unknown: a jump was decided by an unknown value");
+            return true;
+        }
+        int lost = lostKnowledge();
+        if (lost >= 0) {
+            stop = new Stop(Stop.Reason.UNKNOWN, "unknown value on " + machine.netlist().netName(lost));
+            return true;
+        }
+        return false;
+    }
+
+    /** Updates which watched nets were known since reset; returns the first that had been known and now is not, or -1. */
+    private int lostKnowledge() {
+        int lost = -1;
+        for (int i = 0; i < watched.length; i++) {
+            boolean unknown = (sim.unknown(watched[i]) >>> LANE & 1L) != 0;
+            if (!unknown) {
+                everKnown[i] = true;
+            } else if (everKnown[i]) {
+                // Reported once; it counts again only after it has been known again.
+                everKnown[i] = false;
+                if (lost < 0) {
+                    lost = watched[i];
+                }
+            }
+        }
+        return lost;
+    }
+
+    /** Flips a switch and lets the logic settle so lamps and decode lines follow at once. */
+    public void toggleInput(int index) {
+        inputs[index] = !inputs[index];
+        pushInputs();
+        sim.settle();
+    }
+
+    public void toggleBreakpoint(int address) {
+        if (address >= 0 && address < breakpoints.length) {
+            breakpoints[address] = !breakpoints[address];
+        }
+    }
+
+    public void clearBreakpoints() {
+        Arrays.fill(breakpoints, false);
+    }
+
+    // ---- what the screen reads ------------------------------------------------------
+
+    public Machine machine() {
+        return machine;
+    }
+
+    public Assembly assembly() {
+        return assembly;
+    }
+
+    public Simulator simulator() {
+        return sim;
+    }
+
+    public CurrentMeter meter() {
+        return meter;
+    }
+
+    public List<DecodeLine> decodeLines() {
+        return decode;
+    }
+
+    public HeaterAnalysis heaters() {
+        return heaters;
+    }
+
+    public List<ModuleLoad> modules() {
+        return modules;
+    }
+
+    public Stop stop() {
+        return stop;
+    }
+
+    public InitMode initMode() {
+        return init;
+    }
+
+    public boolean breakpoint(int address) {
+        return address >= 0 && address < breakpoints.length && breakpoints[address];
+    }
+
+    public int breakpointCount() {
+        int n = 0;
+        for (boolean b : breakpoints) {
+            if (b) {
+                n++;
+            }
+        }
+        return n;
+    }
+
+    public boolean input(int index) {
+        return inputs[index];
+    }
+
+    public int pc() {
+        return sim.pc(LANE);
+    }
+
+    public long cycle() {
+        return sim.cycle();
+    }
+
+    public int nextPhase() {
+        return sim.nextPhase();
+    }
+
+    /** The listing line of an address, or -1 when the program has no word there. */
+    public int listingIndex(int address) {
+        return address >= 0 && address < listingIndexOfAddress.length ? listingIndexOfAddress[address] : -1;
+    }
+
+    /** The ROM word at the PC: the instruction being fetched or executed this cycle. */
+    public long wordAtPc() {
+        int pc = pc();
+        long[] words = assembly.words();
+        return pc >= 0 && pc < words.length ? words[pc] : 0;
+    }
+
+    /** The instruction at the PC, or null when its opcode is not in the ISA. */
+    public Instruction instructionAtPc() {
+        return machine.isa().byOpcode(machine.isa().opcode().extract(wordAtPc()));
+    }
+
+    /** True between phases of a cycle: the instruction at the PC has started. */
+    public boolean midCycle() {
+        return sim.nextPhase() != 1;
+    }
+
+    public Level level(int net) {
+        return Level.of(sim.value(net), sim.unknown(net), LANE);
+    }
+
+    public Level stateBit(int index) {
+        return level(machine.isa().state().get(index).net());
+    }
+
+    public Level output(int index) {
+        return level(machine.outputs().get(index).net());
+    }
+
+    /** The most recent output changes, oldest first. */
+    public List<OutputChange> outputChanges() {
+        return List.copyOf(changes);
+    }
+
+    /** Output changes since reset, including those the log no longer holds. */
+    public long outputChangeCount() {
+        return outputChangeCount;
+    }
+
+    // ---- internals ------------------------------------------------------------------
+
+    private void runOneCycle() {
+        do {
+            phase();
+        } while (sim.nextPhase() != 1);
+    }
+
+    private void phase() {
+        if (sim.nextPhase() == 1 && applySchedule()) {
+            pushInputs();
+        }
+        sim.stepPhase();
+        sample();
+        noteOutputs();
+    }
+
+    /**
+     * Feeds the meter after a phase: gate outputs as they settled in it, latches as they
+     * loaded at its end, stamped with the phase just run (phase 0 before any ran).
+     */
+    private void sample() {
+        int next = sim.nextPhase();
+        long cycle = sim.cycle();
+        int phase;
+        if (next == 1) {
+            phase = cycle == 0 ? 0 : sim.phases();
+            cycle = Math.max(0, cycle - 1);
+        } else {
+            phase = next - 1;
+        }
+        meter.sample(sim::value, LANE, cycle, phase);
+    }
+
+    /** Applies stimulus rows due by the current cycle; true if an input changed. */
+    private boolean applySchedule() {
+        return stimulusCursor != null && stimulusCursor.advance(sim.cycle(), inputs);
+    }
+
+    private void pushInputs() {
+        for (int i = 0; i < inputs.length; i++) {
+            sim.setInput(i, inputs[i] ? -1L : 0L);
+        }
+    }
+
+    private void noteOutputs() {
+        for (int i = 0; i < lastOutputs.length; i++) {
+            Level now = level(machine.outputs().get(i).net());
+            if (now != lastOutputs[i]) {
+                lastOutputs[i] = now;
+                outputChangeCount++;
+                if (changes.size() == CHANGE_LOG) {
+                    changes.removeFirst();
+                }
+                int ran = sim.nextPhase() == 1 ? machine.clock().phases() : sim.nextPhase() - 1;
+                long cycle = sim.nextPhase() == 1 ? sim.cycle() - 1 : sim.cycle();
+                changes.addLast(new OutputChange(cycle, ran, machine.outputs().get(i).name(), now));
+            }
+        }
+    }
+}

@@ -1,0 +1,299 @@
+package org.thermion.tui;
+
+import com.googlecode.lanterna.TerminalSize;
+import com.googlecode.lanterna.input.KeyStroke;
+import com.googlecode.lanterna.screen.Screen;
+import org.thermion.asm.ListingLine;
+import org.thermion.model.Port;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The terminal screen over a {@link Session}: turns keys into session commands, runs the
+ * machine in batches between frames while it is running, and draws about 25 frames a
+ * second. {@link #handle} and {@link #draw} work on any Lanterna screen, so tests drive a
+ * virtual terminal with them; {@link #loop} is the real thing.
+ */
+public final class TerminalUi {
+    static final long FRAME_NANOS = 40_000_000L;
+    /** Share of a frame given to simulation while running; the rest draws and reads keys. */
+    static final long RUN_NANOS = 34_000_000L;
+    /** Cycles between clock reads while running; breakpoints are still checked every cycle. */
+    static final long BATCH = 2_000;
+
+    private final Screen screen;
+    private final Session session;
+    private final View view = new View();
+    private final String program;
+    private final PowerUpView powerUp;
+    private final List<Keymap.HelpLine> help;
+    private final Frame frame = new Frame(new Cells());
+    private boolean quit;
+    private long rateCycles;
+    private long rateSince = System.nanoTime();
+
+    public TerminalUi(Screen screen, Session session, String program, PowerUpView powerUp) {
+        this.screen = screen;
+        this.session = session;
+        this.program = program;
+        this.powerUp = powerUp;
+        List<String> names = new ArrayList<>();
+        for (Port p : session.machine().inputs()) {
+            names.add(p.name());
+        }
+        this.help = Keymap.help(names);
+        int first = session.listingIndex(session.pc());
+        view.cursor = Math.max(0, first);
+    }
+
+    /** Reads keys, runs and draws until quit. The caller owns starting and stopping the screen. */
+    public void loop() throws IOException {
+        draw();
+        while (!quit) {
+            long start = System.nanoTime();
+            KeyStroke k;
+            while (!quit && (k = screen.pollInput()) != null) {
+                handle(k);
+            }
+            if (quit) {
+                break;
+            }
+            runFor(RUN_NANOS);
+            draw();
+            long left = FRAME_NANOS - (System.nanoTime() - start);
+            if (left > 0) {
+                try {
+                    Thread.sleep(left / 1_000_000L, (int) (left % 1_000_000L));
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                }
+            }
+        }
+    }
+
+    /** While the session runs, runs it for about {@code nanos}; returns the cycles run. */
+    long runFor(long nanos) {
+        if (!session.running()) {
+            view.cyclesPerSecond = 0;
+            rateCycles = 0;
+            rateSince = System.nanoTime();
+            return 0;
+        }
+        long start = System.nanoTime();
+        long done = 0;
+        while (session.running() && System.nanoTime() - start < nanos) {
+            done += session.run(BATCH);
+        }
+        rateCycles += done;
+        long now = System.nanoTime();
+        if (now - rateSince >= 500_000_000L) {
+            view.cyclesPerSecond = rateCycles * 1e9 / (now - rateSince);
+            rateCycles = 0;
+            rateSince = now;
+        }
+        return done;
+    }
+
+    public boolean quitRequested() {
+        return quit;
+    }
+
+    View view() {
+        return view;
+    }
+
+    PowerUpView powerUpView() {
+        return powerUp;
+    }
+
+    /** Acts on one key. */
+    public void handle(KeyStroke stroke) {
+        Key key = Keymap.resolve(stroke, session.machine().inputs().size());
+        if (view.help) {
+            view.help = false;
+            if (key != null && key.command() == Command.QUIT && stroke.isCtrlDown()) {
+                quit = true;
+            }
+            return;
+        }
+        if (key == null) {
+            view.message = "that key does nothing here; ? lists the keys";
+            return;
+        }
+        view.message = "";
+        List<ListingLine> listing = session.assembly().listing();
+        int last = Math.max(0, listing.size() - 1);
+        switch (key.command()) {
+            case STEP_PHASE -> {
+                session.stepPhase();
+                view.followPc = true;
+            }
+            case STEP_CYCLE -> {
+                session.stepCycle();
+                view.followPc = true;
+            }
+            case RUN_PAUSE -> {
+                session.toggleRun();
+                view.followPc = true;
+            }
+            case RESET -> {
+                session.reset();
+                view.followPc = true;
+            }
+            case TOGGLE_INPUT -> session.toggleInput(key.arg());
+            case BREAKPOINT -> {
+                ListingLine l = listing.isEmpty() ? null : listing.get(view.cursor);
+                if (l == null || !l.hasWord()) {
+                    view.message = "no instruction on this line for a breakpoint";
+                } else {
+                    session.toggleBreakpoint(l.address());
+                    view.message = (session.breakpoint(l.address()) ? "breakpoint set at " : "breakpoint cleared at ")
+                            + Hex.address(l.address(), session.machine());
+                }
+            }
+            case CLEAR_BREAKPOINTS -> {
+                session.clearBreakpoints();
+                view.message = "every breakpoint cleared";
+            }
+            case CURSOR_UP -> moveCursor(view.cursor - 1, last);
+            case CURSOR_DOWN -> moveCursor(view.cursor + 1, last);
+            case PAGE_UP -> moveCursor(view.cursor - pageRows(), last);
+            case PAGE_DOWN -> moveCursor(view.cursor + pageRows(), last);
+            case FIRST_LINE -> moveCursor(0, last);
+            case LAST_LINE -> moveCursor(last, last);
+            case CURSOR_TO_PC -> {
+                int pcLine = session.listingIndex(session.pc());
+                if (pcLine >= 0) {
+                    moveCursor(pcLine, last);
+                }
+                view.followPc = true;
+            }
+            case POWER_UP_VIEW -> {
+                view.mode = view.mode == View.Mode.MAIN ? View.Mode.POWER_UP : View.Mode.MAIN;
+                if (view.mode == View.Mode.POWER_UP) {
+                    powerUp.start();
+                }
+            }
+            case NEXT_RAIL -> view.rail++;
+            case PREVIOUS_RAIL -> view.rail--;
+            case HELP -> view.help = true;
+            case CLOSE -> view.mode = View.Mode.MAIN;
+            case QUIT -> quit = true;
+            default -> {
+            }
+        }
+    }
+
+    private void moveCursor(int to, int last) {
+        view.cursor = Math.max(0, Math.min(last, to));
+        view.followPc = false;
+    }
+
+    private int pageRows() {
+        TerminalSize size = screen.getTerminalSize();
+        return Math.max(1, size.getRows() - 8);
+    }
+
+    /** Draws one frame, following a resize first. */
+    public void draw() throws IOException {
+        TerminalSize resized = screen.doResizeIfNecessary();
+        TerminalSize size = resized != null ? resized : screen.getTerminalSize();
+        int cols = size.getColumns();
+        int rows = size.getRows();
+        if (resized != null) {
+            frame.invalidate();
+        }
+        frame.begin(cols, rows);
+        Canvas c = new Canvas(frame, new Rect(0, 0, cols, rows));
+        Layout.Plan plan = Layout.plan(cols, rows, this::panelHeight,
+                (p, w) -> p == Panel.POWER ? PowerPanel.leastHeight(session) : panelHeight(p, w));
+        if (plan.tooSmall()) {
+            tooSmall(c, cols, rows);
+        } else if (view.mode == View.Mode.POWER_UP) {
+            StatusLines.title(c, cols, session, program, List.of());
+            powerUp.draw(c, new Rect(0, 1, cols, rows - 3), view);
+            StatusLines.status(c, cols, rows - 2, session, view);
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view);
+        } else {
+            StatusLines.title(c, cols, session, program, plan.hidden());
+            ListingPanel.draw(c, plan.rect(Panel.LISTING), session, view);
+            if (plan.shows(Panel.STATE)) {
+                LampGrid.draw(c, plan.rect(Panel.STATE), "state", stateNames(), stateLevels(), "the ISA names no state bits");
+            }
+            if (plan.shows(Panel.DECODE)) {
+                LampGrid.draw(c, plan.rect(Panel.DECODE), "decode lines", decodeNames(), decodeLevels(),
+                        "no decode nets of the name given were found in the top module");
+            }
+            if (plan.shows(Panel.IO)) {
+                IoPanel.draw(c, plan.rect(Panel.IO), session);
+            }
+            if (plan.shows(Panel.POWER)) {
+                PowerPanel.draw(c, plan.rect(Panel.POWER), session);
+            }
+            StatusLines.status(c, cols, rows - 2, session, view);
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view);
+        }
+        if (view.help && !plan.tooSmall()) {
+            HelpOverlay.draw(c, cols, rows, help);
+        }
+        frame.flush(screen);
+        screen.setCursorPosition(null);
+        screen.refresh();
+    }
+
+    private void tooSmall(Canvas c, int cols, int rows) {
+        String[] lines = {
+            "This window is " + cols + " \u00D7 " + rows + ".",
+            "Thermion needs at least " + Layout.MIN_COLS + " \u00D7 " + Layout.MIN_ROWS + ".",
+            "Enlarge it, or press q to quit."};
+        int top = Math.max(0, rows / 2 - 1);
+        for (int i = 0; i < lines.length; i++) {
+            String l = Canvas.fit(lines[i], cols);
+            c.text(Math.max(0, (cols - l.length()) / 2), top + i, l, i == 2 ? Palette.KEY : Palette.TEXT);
+        }
+    }
+
+    private int panelHeight(Panel p, int width) {
+        switch (p) {
+            case STATE:
+                return LampGrid.height(stateNames(), width);
+            case DECODE:
+                return LampGrid.height(decodeNames(), width);
+            case IO:
+                return IoPanel.height(session);
+            case POWER:
+                return PowerPanel.height(session);
+            default:
+                return 0;
+        }
+    }
+
+    private List<String> stateNames() {
+        List<String> n = new ArrayList<>();
+        session.machine().isa().state().forEach(b -> n.add(b.name()));
+        return n;
+    }
+
+    private List<Level> stateLevels() {
+        List<Level> l = new ArrayList<>();
+        for (int i = 0; i < session.machine().isa().state().size(); i++) {
+            l.add(session.stateBit(i));
+        }
+        return l;
+    }
+
+    private List<String> decodeNames() {
+        List<String> n = new ArrayList<>();
+        session.decodeLines().forEach(d -> n.add(d.mnemonic()));
+        return n;
+    }
+
+    private List<Level> decodeLevels() {
+        List<Level> l = new ArrayList<>();
+        session.decodeLines().forEach(d -> l.add(session.level(d.net())));
+        return l;
+    }
+}
