@@ -2,6 +2,7 @@ package org.thermion.asm;
 
 import org.thermion.lang.Diagnostic;
 import org.thermion.lang.Diagnostics;
+import org.thermion.lang.Names;
 import org.thermion.lang.ProgramReader;
 import org.thermion.lang.SourceSet;
 import org.thermion.lang.Span;
@@ -15,6 +16,7 @@ import org.thermion.model.Instruction;
 import org.thermion.model.Isa;
 import org.thermion.model.IsaField;
 import org.thermion.model.Machine;
+import org.thermion.model.Meanings;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -201,7 +203,7 @@ public final class Assembler {
                 }
             }
             default -> {
-                String near = Suggest.nearest(w, DIRECTIVES, 1);
+                String near = Names.nearestWord(w, DIRECTIVES, 1);
                 diags.error(d.word().span(), "unknown directive '." + d.word().text() + "'",
                         near != null ? "did you mean '." + near + "'?"
                                 : "the directives are .at ADDRESS, .const NAME = VALUE and .word VALUE");
@@ -235,7 +237,7 @@ public final class Assembler {
         Instruction ins = isa.byMnemonic(m.text());
         if (ins == null) {
             List<String> known = isa.instructions().stream().map(Instruction::mnemonic).toList();
-            String near = Suggest.nearest(m.text(), known, 2);
+            String near = Names.nearestWord(m.text(), known, 2);
             diags.error(m.span(), "unknown mnemonic '" + m.text() + "'",
                     near != null ? "did you mean '" + near + "'?" : "the " + isa.instructions().size() + " instructions are " + String.join(" ", known));
             return null;
@@ -278,7 +280,7 @@ public final class Assembler {
 
     /** Stores to an input, or to an address nothing is mapped at, change nothing: say so. */
     private void warnAboutBit(Instruction ins, AsmExpr operand, long address) {
-        if (!OperandRule.writesSelected(ins.body())) {
+        if (!Meanings.writesSelected(ins.body())) {
             return;
         }
         AddressedBit b = symbols.bitAt(address);

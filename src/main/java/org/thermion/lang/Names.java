@@ -2,7 +2,7 @@ package org.thermion.lang;
 
 import java.util.Collection;
 
-/** Suggests the nearest known name for a misspelt one (edit distance). */
+/** Suggests the nearest known name for a misspelt one (edit distance, case ignored). */
 public final class Names {
     private Names() {
     }
@@ -22,12 +22,45 @@ public final class Names {
         return bestD <= allowed ? best : null;
     }
 
+    /**
+     * The nearest of a short list of short words (mnemonics, directives), or null: at most
+     * {@code maxEdits} edits and at most half the word's length; among equally near words
+     * the one sharing the longest beginning, then the first alphabetically, so {@code STOR}
+     * suggests {@code ST} rather than {@code OR}.
+     */
+    public static String nearestWord(String word, Collection<String> known, int maxEdits) {
+        String w = word.toLowerCase();
+        String best = null;
+        int bestD = Integer.MAX_VALUE;
+        int bestP = -1;
+        for (String k : known) {
+            String c = k.toLowerCase();
+            int d = distance(w, c);
+            int p = commonPrefix(w, c);
+            if (d < bestD || (d == bestD && (p > bestP || (p == bestP && k.compareTo(best) < 0)))) {
+                best = k;
+                bestD = d;
+                bestP = p;
+            }
+        }
+        return bestD <= Math.min(maxEdits, Math.max(1, w.length() / 2)) ? best : null;
+    }
+
     /** A "did you mean" hint or null. */
     public static String didYouMean(String name, Collection<String> candidates) {
         String n = nearest(name, candidates);
         return n == null ? null : "did you mean '" + n + "'?";
     }
 
+    private static int commonPrefix(String a, String b) {
+        int n = 0;
+        while (n < a.length() && n < b.length() && a.charAt(n) == b.charAt(n)) {
+            n++;
+        }
+        return n;
+    }
+
+    /** Levenshtein distance. */
     static int distance(String a, String b) {
         int[] prev = new int[b.length() + 1];
         int[] cur = new int[b.length() + 1];

@@ -3,6 +3,7 @@ package org.thermion.verify;
 import org.thermion.model.Instruction;
 import org.thermion.model.Isa;
 import org.thermion.model.IsaField;
+import org.thermion.model.Meanings;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -26,11 +27,11 @@ public record OperandPlan(Instruction instruction, long[] words, long freeMask, 
         long opMask = op.place(-1L);
         long base = op.place(ins.opcode());
         long selMask = 0;
-        if (isa.selectField() >= 0 && IsaLanes.usesSelect(ins)) {
+        if (isa.selectField() >= 0 && Meanings.usesSelected(ins.body())) {
             selMask = isa.fields().get(isa.selectField()).place(-1L);
         }
         long targetMask = 0;
-        for (int f : IsaLanes.jumpFields(ins.body())) {
+        for (int f : Meanings.jumpFields(ins.body())) {
             targetMask |= isa.fields().get(f).place(-1L);
         }
         targetMask &= ~selMask & ~opMask;

@@ -6,6 +6,7 @@ import org.thermion.model.Instruction;
 import org.thermion.model.Isa;
 import org.thermion.model.Latch;
 import org.thermion.model.Machine;
+import org.thermion.model.Meanings;
 import org.thermion.model.ModuleInstance;
 import org.thermion.model.Netlist;
 import org.thermion.model.Port;
@@ -721,7 +722,7 @@ public final class Verifier {
 
     private String operandText(Instruction ins, long word) {
         List<String> parts = new ArrayList<>();
-        if (isa.selectField() >= 0 && IsaLanes.usesSelect(ins)) {
+        if (isa.selectField() >= 0 && Meanings.usesSelected(ins.body())) {
             long a = isa.fields().get(isa.selectField()).extract(word);
             String name = "unmapped";
             for (AddressedBit ab : isa.bitMap()) {
@@ -731,7 +732,7 @@ public final class Verifier {
             }
             parts.add(isa.fields().get(isa.selectField()).name() + " " + a + " (" + name + ")");
         }
-        for (int f : IsaLanes.jumpFields(ins.body())) {
+        for (int f : Meanings.jumpFields(ins.body())) {
             parts.add(String.format(Locale.ROOT, "%s 0x%X", isa.fields().get(f).name(), isa.fields().get(f).extract(word)));
         }
         return parts.isEmpty() ? "-" : String.join(", ", parts);
