@@ -227,16 +227,16 @@ final class PowerUpReport {
     String json() {
         StringBuilder b = new StringBuilder();
         b.append("{\n");
-        kv(b, 1, "machine", str(r.machine())).append(",\n");
+        kv(b, 1, "machine", ReportJson.quote(r.machine())).append(",\n");
         kv(b, 1, "seconds", num(r.options().seconds())).append(",\n");
-        kv(b, 1, "drawMode", str(r.options().drawMode().name().toLowerCase(Locale.ROOT))).append(",\n");
+        kv(b, 1, "drawMode", ReportJson.quote(r.options().drawMode().name().toLowerCase(Locale.ROOT))).append(",\n");
         kv(b, 1, "ok", String.valueOf(ok())).append(",\n");
         ind(b, 1).append("\"rails\": [");
         boolean first = true;
         for (RailTransient rt : r.rails()) {
             b.append(first ? "\n" : ",\n");
             first = false;
-            ind(b, 2).append("{\"name\": ").append(str(rt.name())).append(", \"volts\": ").append(num(rt.volts()))
+            ind(b, 2).append("{\"name\": ").append(ReportJson.quote(rt.name())).append(", \"volts\": ").append(num(rt.volts()))
                     .append(", \"limitAmps\": ").append(num(rt.limitAmps()))
                     .append(", \"switchOnPeakAmps\": ").append(num(rt.switchOnPeak())).append(", \"switchOnPeakSeconds\": ").append(num(rt.switchOnTime()))
                     .append(", \"bypassPeakAmps\": ").append(num(rt.bypassPeak())).append(", \"bypassPeakSeconds\": ").append(num(rt.bypassPeakTime()))
@@ -251,7 +251,7 @@ final class PowerUpReport {
         for (SoftStartResult s : r.softStarts()) {
             b.append(first ? "\n" : ",\n");
             first = false;
-            ind(b, 2).append("{\"name\": ").append(str(s.name())).append(", \"rail\": ").append(str(r.rail(s.rail()).name()))
+            ind(b, 2).append("{\"name\": ").append(ReportJson.quote(s.name())).append(", \"rail\": ").append(ReportJson.quote(r.rail(s.rail()).name()))
                     .append(", \"ohms\": ").append(num(s.ohms())).append(", \"ratedWatts\": ").append(num(s.ratedWatts()))
                     .append(", \"thyratron\": ").append(s.thyratron()).append(", \"triggerSeconds\": ").append(num(s.triggerTime()))
                     .append(", \"bypassSeconds\": ").append(num(s.bypassTime())).append(", \"joules\": ").append(num(s.joules()))
@@ -270,9 +270,9 @@ final class PowerUpReport {
         for (HeaterWarmup w : r.heaters()) {
             b.append(first ? "\n" : ",\n");
             first = false;
-            ind(b, 2).append("{\"tube\": ").append(str(w.tube())).append(", \"ratedVolts\": ").append(num(w.ratedVolts()))
-                    .append(", \"ratedAmps\": ").append(num(w.ratedAmps())).append(", \"rail\": ").append(str(r.rail(w.rail()).name()))
-                    .append(", \"string\": ").append(str(w.string())).append(", \"position\": ").append(w.position())
+            ind(b, 2).append("{\"tube\": ").append(ReportJson.quote(w.tube())).append(", \"ratedVolts\": ").append(num(w.ratedVolts()))
+                    .append(", \"ratedAmps\": ").append(num(w.ratedAmps())).append(", \"rail\": ").append(ReportJson.quote(r.rail(w.rail()).name()))
+                    .append(", \"string\": ").append(ReportJson.quote(w.string())).append(", \"position\": ").append(w.position())
                     .append(", \"count\": ").append(w.count()).append(", \"mixed\": ").append(w.mixed())
                     .append(", \"warmSeconds\": ").append(num(w.warmSeconds())).append(", \"peakVoltRatio\": ").append(num(w.peakVoltRatio()))
                     .append(", \"peakVoltSeconds\": ").append(num(w.peakVoltTime())).append(", \"finalVolts\": ").append(num(w.finalVolts()))
@@ -282,14 +282,14 @@ final class PowerUpReport {
         ind(b, 1).append("],\n");
         kv(b, 1, "allWarmSeconds", num(r.allWarmSeconds())).append(",\n");
         HeaterWarmup worst = r.worstMixedOverVoltage();
-        kv(b, 1, "worstMixedOverVoltage", worst == null ? "null" : "{\"tube\": " + str(worst.tube()) + ", \"string\": " + str(worst.string())
+        kv(b, 1, "worstMixedOverVoltage", worst == null ? "null" : "{\"tube\": " + ReportJson.quote(worst.tube()) + ", \"string\": " + ReportJson.quote(worst.string())
                 + ", \"peakVoltRatio\": " + num(worst.peakVoltRatio()) + ", \"seconds\": " + num(worst.peakVoltTime()) + "}").append(",\n");
         ind(b, 1).append("\"relayDrivers\": [");
         first = true;
         for (RelayDriverCheck c : r.relayChecks()) {
             b.append(first ? "\n" : ",\n");
             first = false;
-            ind(b, 2).append("{\"tube\": ").append(str(c.tube())).append(", \"rail\": ").append(str(c.railName()))
+            ind(b, 2).append("{\"tube\": ").append(ReportJson.quote(c.tube())).append(", \"rail\": ").append(ReportJson.quote(c.railName()))
                     .append(", \"railVolts\": ").append(num(c.railVolts())).append(", \"arcDropVolts\": ").append(num(c.arcDropVolts()))
                     .append(", \"plateOhms\": ").append(num(c.plateOhms())).append(", \"coilOhms\": ").append(num(c.relay().coilOhms()))
                     .append(", \"coilVolts\": ").append(num(c.coilVolts())).append(", \"coilAmps\": ").append(num(c.coilAmps()))
@@ -302,18 +302,18 @@ final class PowerUpReport {
         ind(b, 1).append("],\n");
         ind(b, 1).append("\"notes\": [");
         for (int i = 0; i < r.notes().size(); i++) {
-            b.append(i == 0 ? "" : ", ").append(str(r.notes().get(i)));
+            b.append(i == 0 ? "" : ", ").append(ReportJson.quote(r.notes().get(i)));
         }
         b.append("],\n");
-        kv(b, 1, "caution", str(CAUTION)).append("\n");
+        kv(b, 1, "caution", ReportJson.quote(CAUTION)).append("\n");
         b.append("}\n");
         return b.toString().replace("[\n  ]", "[]");
     }
 
     static String sweepJson(ResistorSweep.Result s) {
         StringBuilder b = new StringBuilder("{\n");
-        kv(b, 1, "softStart", str(s.softStart())).append(",\n");
-        kv(b, 1, "rail", str(s.rail())).append(",\n");
+        kv(b, 1, "softStart", ReportJson.quote(s.softStart())).append(",\n");
+        kv(b, 1, "rail", ReportJson.quote(s.rail())).append(",\n");
         kv(b, 1, "limitAmps", num(s.limitAmps())).append(",\n");
         kv(b, 1, "ratedWatts", num(s.ratedWatts())).append(",\n");
         ind(b, 1).append("\"rows\": [");
@@ -329,7 +329,7 @@ final class PowerUpReport {
         b.append("\n");
         ind(b, 1).append("],\n");
         kv(b, 1, "recommendedOhms", s.recommended() == null ? "null" : num(s.recommended().ohms())).append(",\n");
-        kv(b, 1, "caution", str(CAUTION)).append("\n}\n");
+        kv(b, 1, "caution", ReportJson.quote(CAUTION)).append("\n}\n");
         return b.toString();
     }
 
@@ -368,18 +368,7 @@ final class PowerUpReport {
     }
 
     private static void row(StringBuilder b, List<String> cells) {
-        for (int i = 0; i < cells.size(); i++) {
-            if (i > 0) {
-                b.append(',');
-            }
-            String c = cells.get(i);
-            if (c.contains(",") || c.contains("\"") || c.contains("\n") || c.contains("\r")) {
-                b.append('"').append(c.replace("\"", "\"\"")).append('"');
-            } else {
-                b.append(c);
-            }
-        }
-        b.append("\r\n");
+        b.append(ReportCsv.row(cells.toArray(String[]::new))).append("\r\n");
     }
 
     // ---- helpers -------------------------------------------------------------------------
@@ -413,7 +402,7 @@ final class PowerUpReport {
     }
 
     private static StringBuilder kv(StringBuilder b, int level, String key, String value) {
-        return ind(b, level).append(str(key)).append(": ").append(value);
+        return ind(b, level).append(ReportJson.quote(key)).append(": ").append(value);
     }
 
     static String num(double v) {
@@ -431,26 +420,5 @@ final class PowerUpReport {
             }
         }
         return mant + exp;
-    }
-
-    static String str(String s) {
-        StringBuilder b = new StringBuilder("\"");
-        for (char c : s.toCharArray()) {
-            switch (c) {
-                case '"' -> b.append("\\\"");
-                case '\\' -> b.append("\\\\");
-                case '\n' -> b.append("\\n");
-                case '\r' -> b.append("\\r");
-                case '\t' -> b.append("\\t");
-                default -> {
-                    if (c < 0x20) {
-                        b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
-                    } else {
-                        b.append(c);
-                    }
-                }
-            }
-        }
-        return b.append('"').toString();
     }
 }

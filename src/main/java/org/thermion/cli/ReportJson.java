@@ -90,29 +90,30 @@ final class ReportJson {
     }
 
     private void string(String s) {
-        if (s == null) {
-            sb.append("null");
-            return;
-        }
-        sb.append('"');
+        sb.append(s == null ? "null" : quote(s));
+    }
+
+    /** {@code s} as a JSON string: quoted, with quote, backslash and control characters escaped. */
+    static String quote(String s) {
+        StringBuilder b = new StringBuilder("\"");
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);
             switch (c) {
-                case '"' -> sb.append("\\\"");
-                case '\\' -> sb.append("\\\\");
-                case '\n' -> sb.append("\\n");
-                case '\r' -> sb.append("\\r");
-                case '\t' -> sb.append("\\t");
+                case '"' -> b.append("\\\"");
+                case '\\' -> b.append("\\\\");
+                case '\n' -> b.append("\\n");
+                case '\r' -> b.append("\\r");
+                case '\t' -> b.append("\\t");
                 default -> {
                     if (c < 0x20) {
-                        sb.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
+                        b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
                     } else {
-                        sb.append(c);
+                        b.append(c);
                     }
                 }
             }
         }
-        sb.append('"');
+        return b.append('"').toString();
     }
 
     static String number(double v) {

@@ -72,19 +72,19 @@ final class ReportWriter {
         StringBuilder b = new StringBuilder("{\n");
         boolean first = true;
         for (Map.Entry<String, Object> f : fields.entrySet()) {
-            b.append(first ? "" : ",\n").append("  ").append(quote(f.getKey())).append(": ");
+            b.append(first ? "" : ",\n").append("  ").append(ReportJson.quote(f.getKey())).append(": ");
             value(b, f.getValue(), "  ");
             first = false;
         }
         b.append(first ? "" : ",\n").append("  \"tables\": {");
         for (int ti = 0; ti < tables.size(); ti++) {
             ReportTable t = tables.get(ti);
-            b.append(ti == 0 ? "\n" : ",\n").append("    ").append(quote(t.name)).append(": [");
+            b.append(ti == 0 ? "\n" : ",\n").append("    ").append(ReportJson.quote(t.name)).append(": [");
             for (int ri = 0; ri < t.rows.size(); ri++) {
                 Object[] r = t.rows.get(ri);
                 b.append(ri == 0 ? "\n" : ",\n").append("      {");
                 for (int i = 0; i < r.length; i++) {
-                    b.append(i == 0 ? "" : ", ").append(quote(t.columns.get(i).key())).append(": ");
+                    b.append(i == 0 ? "" : ", ").append(ReportJson.quote(t.columns.get(i).key())).append(": ");
                     cell(b, r[i], t.columns.get(i).kind());
                 }
                 b.append('}');
@@ -106,13 +106,13 @@ final class ReportWriter {
             b.append('{');
             boolean first = true;
             for (Map.Entry<?, ?> e : m.entrySet()) {
-                b.append(first ? "" : ", ").append(quote(e.getKey().toString())).append(": ");
+                b.append(first ? "" : ", ").append(ReportJson.quote(e.getKey().toString())).append(": ");
                 value(b, e.getValue(), indent);
                 first = false;
             }
             b.append('}');
         } else {
-            b.append(quote(v.toString()));
+            b.append(ReportJson.quote(v.toString()));
         }
     }
 
@@ -120,7 +120,7 @@ final class ReportWriter {
         if (v == null) {
             b.append("null");
         } else if (kind == ReportTable.Kind.TEXT) {
-            b.append(quote(v.toString()));
+            b.append(ReportJson.quote(v.toString()));
         } else {
             number(b, (Number) v);
         }
@@ -168,39 +168,10 @@ final class ReportWriter {
                 b.append(',');
             }
             if (i < cells.length) {
-                b.append(csvField(cells[i]));
+                b.append(ReportCsv.field(cells[i]));
             }
         }
         out.print(b);
         out.print("\r\n");
-    }
-
-    private static String csvField(String s) {
-        if (s.indexOf(',') >= 0 || s.indexOf('"') >= 0 || s.indexOf('\n') >= 0 || s.indexOf('\r') >= 0) {
-            return '"' + s.replace("\"", "\"\"") + '"';
-        }
-        return s;
-    }
-
-    static String quote(String s) {
-        StringBuilder b = new StringBuilder("\"");
-        for (int i = 0; i < s.length(); i++) {
-            char c = s.charAt(i);
-            switch (c) {
-                case '"' -> b.append("\\\"");
-                case '\\' -> b.append("\\\\");
-                case '\n' -> b.append("\\n");
-                case '\r' -> b.append("\\r");
-                case '\t' -> b.append("\\t");
-                default -> {
-                    if (c < 0x20) {
-                        b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
-                    } else {
-                        b.append(c);
-                    }
-                }
-            }
-        }
-        return b.append('"').toString();
     }
 }

@@ -140,32 +140,20 @@ final class RunReport {
     }
 
     private static void row(PrintWriter out, String... fields) {
-        StringBuilder sb = new StringBuilder();
-        for (int i = 0; i < fields.length; i++) {
-            if (i > 0) {
-                sb.append(',');
-            }
-            String f = fields[i];
-            if (f.indexOf(',') >= 0 || f.indexOf('"') >= 0 || f.indexOf('\n') >= 0 || f.indexOf('\r') >= 0) {
-                sb.append('"').append(f.replace("\"", "\"\"")).append('"');
-            } else {
-                sb.append(f);
-            }
-        }
-        out.print(sb.append("\r\n"));
+        out.print(ReportCsv.row(fields) + "\r\n");
     }
 
     private void json(PrintWriter out) {
         StringBuilder sb = new StringBuilder("{\n");
-        sb.append("  \"machine\": ").append(q(machine.name())).append(",\n");
-        sb.append("  \"program\": ").append(program == null ? "null" : q(program.toString())).append(",\n");
-        sb.append("  \"level\": ").append(q(level)).append(",\n");
-        sb.append("  \"init\": ").append(q(init)).append(",\n");
+        sb.append("  \"machine\": ").append(ReportJson.quote(machine.name())).append(",\n");
+        sb.append("  \"program\": ").append(program == null ? "null" : ReportJson.quote(program.toString())).append(",\n");
+        sb.append("  \"level\": ").append(ReportJson.quote(level)).append(",\n");
+        sb.append("  \"init\": ").append(ReportJson.quote(init)).append(",\n");
         sb.append("  \"cycles\": ").append(r.cycles()).append(",\n");
-        sb.append("  \"stop\": ").append(q(r.stop())).append(",\n");
+        sb.append("  \"stop\": ").append(ReportJson.quote(r.stop())).append(",\n");
         sb.append("  \"initial\": {");
         for (int i = 0; i < machine.outputs().size(); i++) {
-            sb.append(i == 0 ? "" : ", ").append(q(machine.outputs().get(i).name())).append(": ")
+            sb.append(i == 0 ? "" : ", ").append(ReportJson.quote(machine.outputs().get(i).name())).append(": ")
                     .append(val(r.initialOutputs().charAt(i)));
         }
         sb.append("},\n");
@@ -174,13 +162,13 @@ final class RunReport {
         for (int i = 0; i < ch.size(); i++) {
             OutputChange c = ch.get(i);
             sb.append(i == 0 ? "\n" : ",\n").append("    {\"cycle\": ").append(c.cycle()).append(", \"phase\": ")
-                    .append(c.phase()).append(", \"output\": ").append(q(c.output())).append(", \"value\": ")
+                    .append(c.phase()).append(", \"output\": ").append(ReportJson.quote(c.output())).append(", \"value\": ")
                     .append(val(c.value())).append('}');
         }
         sb.append(ch.isEmpty() ? "],\n" : "\n  ],\n");
         sb.append("  \"watch\": {\"names\": [");
         for (int i = 0; i < r.watchNames().size(); i++) {
-            sb.append(i == 0 ? "" : ", ").append(q(r.watchNames().get(i)));
+            sb.append(i == 0 ? "" : ", ").append(ReportJson.quote(r.watchNames().get(i)));
         }
         sb.append("], \"rows\": [");
         for (int i = 0; i < r.watch().size(); i++) {
@@ -198,12 +186,12 @@ final class RunReport {
             UnknownReport u = r.unknowns().get(i);
             sb.append(i == 0 ? "\n" : ",\n").append("    {\"cycle\": ").append(u.cycle()).append(", \"phase\": ")
                     .append(u.phase() == 0 ? "null" : Integer.toString(u.phase())).append(", \"net\": ")
-                    .append(q(u.net())).append(", \"what\": ").append(q(u.what())).append('}');
+                    .append(ReportJson.quote(u.net())).append(", \"what\": ").append(ReportJson.quote(u.what())).append('}');
         }
         sb.append(r.unknowns().isEmpty() ? "],\n" : "\n  ],\n");
         sb.append("  \"state\": {");
         for (int i = 0; i < r.stateNames().size(); i++) {
-            sb.append(i == 0 ? "" : ", ").append(q(r.stateNames().get(i))).append(": ").append(val(r.state().charAt(i)));
+            sb.append(i == 0 ? "" : ", ").append(ReportJson.quote(r.stateNames().get(i))).append(": ").append(val(r.state().charAt(i)));
         }
         sb.append("},\n");
         sb.append("  \"pc\": ").append(machine.pc() != null && r.pcKnown() ? Integer.toString(r.pc()) : "null")
@@ -215,26 +203,5 @@ final class RunReport {
     /** 0 and 1 as numbers, unknown as the string "x". */
     private static String val(char c) {
         return c == 'x' ? "\"x\"" : String.valueOf(c);
-    }
-
-    static String q(String s) {
-        StringBuilder sb = new StringBuilder("\"");
-        for (char c : s.toCharArray()) {
-            switch (c) {
-                case '"' -> sb.append("\\\"");
-                case '\\' -> sb.append("\\\\");
-                case '\n' -> sb.append("\\n");
-                case '\r' -> sb.append("\\r");
-                case '\t' -> sb.append("\\t");
-                default -> {
-                    if (c < 0x20) {
-                        sb.append(String.format("\\u%04x", (int) c));
-                    } else {
-                        sb.append(c);
-                    }
-                }
-            }
-        }
-        return sb.append('"').toString();
     }
 }
