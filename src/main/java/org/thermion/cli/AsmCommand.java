@@ -1,11 +1,8 @@
 package org.thermion.cli;
 
-import org.thermion.asm.Assembler;
 import org.thermion.asm.Assembly;
 import org.thermion.asm.IntelHex;
 import org.thermion.asm.Listing;
-import org.thermion.lang.DiagnosticPrinter;
-import org.thermion.lang.Diagnostics;
 import org.thermion.model.Machine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -17,10 +14,8 @@ import picocli.CommandLine.Spec;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.concurrent.Callable;
 
@@ -52,7 +47,8 @@ final class AsmCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        if (output != null && (sameFile(output, machineFile) || sameFile(output, program) || isSource(output))) {
+        if (output != null && (OutputFiles.clash(output, List.of(machineFile, program)) != null
+                || OutputFiles.isExistingSource(output, ".machine", ".asm"))) {
             err.println("error: refusing to write the HEX image over " + output + ", a source file");
             err.println("  = name another output file, e.g. -o " + hexNameFor(program));
             err.flush();
@@ -71,20 +67,17 @@ final class AsmCommand implements Callable<Integer> {
         if (m == null) {
             return ExitCodes.BAD_INPUT;
         }
-        Diagnostics diags = new Diagnostics();
-        Assembly a = Assembler.assemble(m, program, loader.sources(), diags);
-        if (!diags.all().isEmpty()) {
-            new DiagnosticPrinter(loader.sources()).print(diags, err);
-        }
-        if (a == null) {
+        ProgramInput in = ProgramInput.read(m, program, null, loader, err);
+        if (in == null) {
             return ExitCodes.BAD_INPUT;
         }
+        Assembly a = in.assembly();
         List<String> hex = IntelHex.encode(a.words(), m.isa().wordBits());
         if (listing) {
             Listing.render(a, m.isa().wordBits(), m.pc().width()).forEach(out::println);
         }
         if (output != null) {
-            writeAtomically(output, String.join("\n", hex) + "\n");
+            OutputFiles.write(output, String.join("\n", hex) + "\n", StandardCharsets.US_ASCII);
             long used = a.listing().stream().filter(l -> l.hasWord()).count();
             if (!listing) {
                 out.println(program + ": " + used + " of " + a.words().length + " ROM words used, Intel HEX written to " + output);
@@ -96,38 +89,9 @@ final class AsmCommand implements Callable<Integer> {
         return ExitCodes.OK;
     }
 
-    private static boolean sameFile(Path a, Path b) throws IOException {
-        if (Files.exists(a) && Files.exists(b)) {
-            return Files.isSameFile(a, b);
-        }
-        return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
-    }
-
-    /** Existing descriptions and programs are never replaced by an image. */
-    private static boolean isSource(Path p) {
-        String n = p.getFileName() == null ? "" : p.getFileName().toString();
-        return Files.exists(p) && (n.endsWith(".machine") || n.endsWith(".asm"));
-    }
-
     private static String hexNameFor(Path program) {
         String n = program.getFileName().toString();
         int dot = n.lastIndexOf('.');
         return (dot > 0 ? n.substring(0, dot) : n) + ".hex";
-    }
-
-    /** Writes beside the target, then renames over it, so a reader never sees half a file. */
-    private static void writeAtomically(Path target, String text) throws IOException {
-        Path dir = target.toAbsolutePath().getParent();
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
-        try {
-            Files.writeString(tmp, text, StandardCharsets.US_ASCII);
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
     }
 }

@@ -1,16 +1,10 @@
 package org.thermion.cli;
 
-import org.thermion.asm.Assembler;
-import org.thermion.asm.Assembly;
-import org.thermion.lang.DiagnosticPrinter;
-import org.thermion.lang.Diagnostics;
 import org.thermion.model.Machine;
 import org.thermion.power.Budget;
 import org.thermion.power.CurrentMeter;
 import org.thermion.power.ProgramRun;
 import org.thermion.sim.InitMode;
-import org.thermion.sim.Stimulus;
-import org.thermion.sim.StimulusReader;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -101,30 +95,12 @@ final class BudgetCommand implements Callable<Integer> {
                 err.flush();
                 return ExitCodes.BAD_INPUT;
             }
-            Diagnostics diags = new Diagnostics();
-            long[] rom = null;
-            if (program != null) {
-                Assembly a = Assembler.assemble(m, program, loader.sources(), diags);
-                if (a == null || diags.hasErrors()) {
-                    new DiagnosticPrinter(loader.sources()).print(diags, err);
-                    err.flush();
-                    return ExitCodes.BAD_INPUT;
-                }
-                rom = a.words();
+            ProgramInput in = ProgramInput.read(m, program, inputs, loader, err);
+            if (in == null) {
+                err.flush();
+                return ExitCodes.BAD_INPUT;
             }
-            Stimulus stimulus = null;
-            if (inputs != null) {
-                stimulus = new StimulusReader(m, loader.sources(), diags).read(inputs);
-                if (stimulus == null) {
-                    new DiagnosticPrinter(loader.sources()).print(diags, err);
-                    err.flush();
-                    return ExitCodes.BAD_INPUT;
-                }
-            }
-            if (!diags.all().isEmpty()) {
-                new DiagnosticPrinter(loader.sources()).print(diags, err);
-            }
-            meter = ProgramRun.run(m, rom, stimulus, cycles, mode);
+            meter = ProgramRun.run(m, in.rom(), in.stimulus(), cycles, mode);
             run = new BudgetReport.Run(program == null ? null : program.toString(),
                     inputs == null ? null : inputs.toString(), cycles, init);
         }

@@ -3,6 +3,7 @@ package org.thermion.cli;
 import java.io.BufferedWriter;
 import java.io.IOException;
 import java.io.Writer;
+import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
@@ -42,6 +43,28 @@ final class OutputFiles {
         return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
     }
 
+    /** True when {@code p} exists and its name ends in one of {@code endings}: a source, never replaced by an output. */
+    static boolean isExistingSource(Path p, String... endings) {
+        String n = p.getFileName() == null ? "" : p.getFileName().toString();
+        if (!Files.exists(p)) {
+            return false;
+        }
+        for (String e : endings) {
+            if (n.endsWith(e)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Writes {@code text} to {@code target} in {@code charset}, all at once or not at all. */
+    static void write(Path target, String text, Charset charset) throws IOException {
+        try (Pending file = new Pending(target, charset)) {
+            file.writer().write(text);
+            file.commit();
+        }
+    }
+
     /** A file being written: {@link #commit()} moves it into place, {@link #close()} without commit discards it. */
     static final class Pending implements AutoCloseable {
         private final Path target;
@@ -49,12 +72,17 @@ final class OutputFiles {
         private final BufferedWriter writer;
         private boolean committed;
 
+        /** An ASCII file (a VCD, an Intel HEX image). */
         Pending(Path target) throws IOException {
+            this(target, StandardCharsets.US_ASCII);
+        }
+
+        Pending(Path target, Charset charset) throws IOException {
             this.target = target;
             Path dir = target.toAbsolutePath().getParent();
             this.tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
             keepUsualPermissions(target, tmp);
-            this.writer = Files.newBufferedWriter(tmp, StandardCharsets.US_ASCII);
+            this.writer = Files.newBufferedWriter(tmp, charset);
         }
 
         /** Temporary files are private to the owner; the finished file reads like any other. */

@@ -18,10 +18,8 @@ import picocli.CommandLine.Model.CommandSpec;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.concurrent.Callable;
 
@@ -188,7 +186,7 @@ final class PowerUpCommand implements Callable<Integer> {
     static String writeAtomically(Path target, String text, MachineLoader loader, Path input) {
         Path abs = target.toAbsolutePath().normalize();
         if (loader.sources().line(abs, 1) != null || loader.sources().line(target.normalize(), 1) != null
-                || sameFile(abs, input)) {
+                || OutputFiles.clash(abs, List.of(input)) != null) {
             return "refusing to write " + target + ": it is an input of this run";
         }
         Path dir = abs.getParent();
@@ -199,28 +197,10 @@ final class PowerUpCommand implements Callable<Integer> {
             if (Files.isDirectory(abs)) {
                 return "cannot write " + target + ": it is a directory";
             }
-            Path tmp = Files.createTempFile(dir, "." + abs.getFileName(), ".tmp");
-            try {
-                Files.writeString(tmp, text, StandardCharsets.UTF_8);
-                try {
-                    Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-                } catch (AtomicMoveNotSupportedException e) {
-                    Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
-                }
-            } finally {
-                Files.deleteIfExists(tmp);
-            }
+            OutputFiles.write(abs, text, StandardCharsets.UTF_8);
             return null;
         } catch (IOException e) {
             return "cannot write " + target + ": " + e.getMessage();
-        }
-    }
-
-    private static boolean sameFile(Path a, Path b) {
-        try {
-            return Files.exists(a) && Files.exists(b) && Files.isSameFile(a, b);
-        } catch (IOException e) {
-            return false;
         }
     }
 }

@@ -1,9 +1,6 @@
 package org.thermion.cli;
 
-import org.thermion.asm.Assembler;
 import org.thermion.asm.Assembly;
-import org.thermion.lang.DiagnosticPrinter;
-import org.thermion.lang.Diagnostics;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.IsaRun;
@@ -11,7 +8,6 @@ import org.thermion.sim.LogicRun;
 import org.thermion.sim.NetLookup;
 import org.thermion.sim.RunResult;
 import org.thermion.sim.Stimulus;
-import org.thermion.sim.StimulusReader;
 import org.thermion.sim.VcdWriter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -113,8 +109,7 @@ final class RunCommand implements Callable<Integer> {
             if (dir == null || !Files.isDirectory(dir)) {
                 return usage(err, "cannot write the VCD to " + vcd + ": no such directory " + dir, null);
             }
-            String fn = vcd.getFileName() == null ? "" : vcd.getFileName().toString();
-            if (Files.exists(vcd) && fn.matches(".*\\.(machine|asm|csv|hex)")) {
+            if (OutputFiles.isExistingSource(vcd, ".machine", ".asm", ".csv", ".hex")) {
                 return usage(err, "refusing to write the VCD over " + vcd + ", which looks like a source file",
                         "name a .vcd file for --vcd");
             }
@@ -153,19 +148,12 @@ final class RunCommand implements Callable<Integer> {
         if (program == null && level == Level.isa) {
             return usage(err, "--level isa needs a machine with an isa block and a PROGRAM", null);
         }
-        Diagnostics diags = new Diagnostics();
-        Assembly asm = program == null ? new Assembly(new long[0], List.of())
-                : Assembler.assemble(m, program, loader.sources(), diags);
-        Stimulus stim = null;
-        if (asm != null && inputs != null) {
-            stim = new StimulusReader(m, loader.sources(), diags).read(inputs);
-        }
-        if (!diags.all().isEmpty()) {
-            new DiagnosticPrinter(loader.sources()).print(diags, err);
-        }
-        if (asm == null || diags.hasErrors()) {
+        ProgramInput in = ProgramInput.read(m, program, inputs, loader, err);
+        if (in == null) {
             return ExitCodes.BAD_INPUT;
         }
+        Assembly asm = program == null ? new Assembly(new long[0], List.of()) : in.assembly();
+        Stimulus stim = in.stimulus();
         if (stim != null && stim.lastCycle() >= cycles) {
             long first = stim.rows().stream().filter(r -> r.cycle() >= cycles).findFirst().orElseThrow().cycle();
             err.println("warning: " + inputs + ": the rows from cycle " + first + " on come after the run's "
