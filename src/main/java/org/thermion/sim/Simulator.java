@@ -101,14 +101,33 @@ public final class Simulator {
     private long[] forced;
     private boolean romDirty;
 
+    private final Settle compiled;
     private boolean threeValued;
     private long cycle;
     private int nextPhase;
     private long evaluations;
 
+    /**
+     * Two-valued combinational evaluation supplied from outside (the generated straight-line
+     * engine of {@code org.thermion.sim.compiled}): gates in the netlist's order over the
+     * value words, exactly as the array engine evaluates them.
+     */
+    public interface Settle {
+        void settle(long[] values);
+    }
+
     /** Compiles the machine's netlist; the simulator starts reset with all latches zero. */
     public Simulator(Machine machine) {
+        this(machine, null);
+    }
+
+    /**
+     * As {@link #Simulator(Machine)}, but two-valued settles run {@code twoValued} instead of
+     * the array loop (null: the array loop). Three-valued settles always use the array engine.
+     */
+    public Simulator(Machine machine, Settle twoValued) {
         this.machine = machine;
+        this.compiled = twoValued;
         Netlist nl = machine.netlist();
         int nets = nl.netCount();
         this.val = new long[nets];
@@ -228,6 +247,11 @@ public final class Simulator {
         return machine;
     }
 
+    /** True when two-valued settles run a supplied engine rather than the array loop. */
+    public boolean compiledEngine() {
+        return compiled != null;
+    }
+
     /**
      * Starts over: latches per {@code init}, PC 0 on every lane, cycle 0, next phase 1.
      * Machine inputs keep the values last set; a loaded ROM, or a forced ROM word, stays.
@@ -310,6 +334,8 @@ public final class Simulator {
         }
         if (threeValued) {
             settle3();
+        } else if (compiled != null) {
+            compiled.settle(val);
         } else {
             settle2();
         }
