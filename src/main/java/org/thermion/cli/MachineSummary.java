@@ -51,15 +51,16 @@ final class MachineSummary {
         out.println();
         out.println("tubes by module:");
         Table t = new Table("module", "type", "tubes", "sections used", "spare");
+        // Envelopes grouped by module in one pass (a scan of all envelopes per module was
+        // quadratic in the machine's size).
+        Map<Integer, Map<Integer, int[]>> byModule = new java.util.HashMap<>();
+        for (Envelope e : m.envelopes()) {
+            int[] c = byModule.computeIfAbsent(e.module(), k -> new TreeMap<>()).computeIfAbsent(e.tube(), k -> new int[2]);
+            c[0]++;
+            c[1] += e.sectionsUsed();
+        }
         for (ModuleInstance mi : m.modules()) {
-            Map<Integer, int[]> per = new TreeMap<>();
-            for (Envelope e : m.envelopes()) {
-                if (e.module() == mi.id()) {
-                    int[] c = per.computeIfAbsent(e.tube(), k -> new int[2]);
-                    c[0]++;
-                    c[1] += e.sectionsUsed();
-                }
-            }
+            Map<Integer, int[]> per = byModule.getOrDefault(mi.id(), Map.of());
             for (Map.Entry<Integer, int[]> e : per.entrySet()) {
                 TubeType tt = m.tubes().get(e.getKey());
                 int[] c = e.getValue();

@@ -179,11 +179,20 @@ public final class Elaborator {
                 }
             }
         }
+        // Nets driven from outside: a set, not a search of the input and ROM lists per port bit.
+        java.util.Set<Integer> outsideDriven = new java.util.HashSet<>();
+        for (Port p : inputs) {
+            outsideDriven.add(p.net());
+        }
+        if (rom != null) {
+            for (int x : rom.dataNets()) {
+                outsideDriven.add(x);
+            }
+        }
         for (Signal s : scope.values()) {
             if (s.kind() == Signal.Kind.IN) {
                 for (int n : s.nets()) {
-                    if (nb.driver.get(n) == NetBuilder.EXTERNAL && inputs.stream().noneMatch(p -> p.net() == n)
-                            && (rom == null || java.util.Arrays.stream(rom.dataNets()).noneMatch(x -> x == n))) {
+                    if (nb.driver.get(n) == NetBuilder.EXTERNAL && !outsideDriven.contains(n)) {
                         diags.error(s.decl(), "input port '" + s.name() + "' of the top module is driven by nothing",
                                 "list it under `inputs` in the machine block, or name it as the ROM's `data`");
                         break;

@@ -73,6 +73,13 @@ final class Levelizer {
 
     private void reportLoops(int[] pending) {
         Set<Integer> reported = new HashSet<>();
+        // Each gate is walked at most once: walkedBy[g] is the start whose walk passed g and
+        // at[g] its position there. A walk that runs into an earlier walk would only find the
+        // loop that walk found, which has a reported gate, so it stops. (Searching the walk's
+        // own list for repeats, and re-walking shared tails, was quadratic in the loop's reach.)
+        int[] walkedBy = new int[pending.length];
+        int[] at = new int[pending.length];
+        java.util.Arrays.fill(walkedBy, -1);
         for (int start = 0; start < pending.length && !diags.full(); start++) {
             if (pending[start] == 0 || reported.contains(start)) {
                 continue;
@@ -80,7 +87,14 @@ final class Levelizer {
             List<Integer> path = new ArrayList<>();
             List<Integer> seenAt = new ArrayList<>();
             int g = start;
-            while (!seenAt.contains(g)) {
+            boolean joined = false;
+            while (walkedBy[g] != start) {
+                if (walkedBy[g] >= 0) {
+                    joined = true;
+                    break;
+                }
+                walkedBy[g] = start;
+                at[g] = seenAt.size();
                 seenAt.add(g);
                 int next = -1;
                 for (int in : nb.gates.get(g).in) {
@@ -95,10 +109,10 @@ final class Levelizer {
                 }
                 g = next;
             }
-            int from = seenAt.indexOf(g);
-            if (from < 0) {
+            if (joined) {
                 continue;
             }
+            int from = at[g];
             List<Integer> cycle = new ArrayList<>(seenAt.subList(from, seenAt.size()));
             if (cycle.stream().anyMatch(reported::contains)) {
                 continue;

@@ -116,47 +116,74 @@ final class Linter {
         return g.stage < 0 && g.fn == org.thermion.model.GateFn.BUF && g.in[0] <= 1;
     }
 
+    /**
+     * True when a gate or latch of {@code module} reads {@code net}, or a child instance it is
+     * passed to reads it inside. Answered from indexes built once (reads per module and net,
+     * children per module and port net) and memoized, so the lint pass stays linear: a scan
+     * of every gate, latch and instance per port net was quadratic in the machine's size.
+     */
     private boolean readInside(int net, int module) {
         if (nb.reads.get(net) == 0) {
             return false;
         }
-        for (NetBuilder.GateB g : moduleGates(module)) {
-            for (int in : g.in) {
-                if (in == net) {
-                    return true;
+        if (readBy == null) {
+            index();
+        }
+        long key = key(module, net);
+        Boolean known = memo.get(key);
+        if (known != null) {
+            return known;
+        }
+        boolean used = readBy.contains(key);
+        if (!used) {
+            // Passed on to a child instance counts as use.
+            for (int child : passedTo.getOrDefault(key, List.of())) {
+                if (readInside(net, child)) {
+                    used = true;
+                    break;
                 }
             }
         }
-        for (NetBuilder.LatchB l : nb.latches) {
-            if (l.module() == module && (l.data() == net || l.enable() == net)) {
-                return true;
+        memo.put(key, used);
+        return used;
+    }
+
+    /** One long per (module, net), scrambled by an odd multiplier (a bijection) so Long's hash spreads well. */
+    private static long key(int module, int net) {
+        return (((long) module << 32) | (net & 0xffffffffL)) * 0x9E3779B97F4A7C15L;
+    }
+
+    /** (module, net) pairs where a gate or latch of the module reads the net. */
+    private Set<Long> readBy;
+    /** (module, net) -> child instances of the module that have the net among their ports. */
+    private Map<Long, List<Integer>> passedTo;
+    private final Map<Long, Boolean> memo = new java.util.HashMap<>();
+
+    private void index() {
+        readBy = new HashSet<>();
+        for (NetBuilder.GateB g : nb.gates) {
+            for (int in : g.in) {
+                readBy.add(key(g.module, in));
             }
         }
-        // Passed on to a child instance counts as use.
+        for (NetBuilder.LatchB l : nb.latches) {
+            readBy.add(key(l.module(), l.data()));
+            readBy.add(key(l.module(), l.enable()));
+        }
+        passedTo = new java.util.HashMap<>();
         for (ModuleInstance mi : ex.modules) {
-            if (mi.parent() == module) {
-                for (Signal s : ex.ports.getOrDefault(mi.id(), List.of())) {
-                    for (int n : s.nets()) {
-                        if (n == net && readInside(net, mi.id())) {
-                            return true;
-                        }
+            if (mi.parent() < 0) {
+                continue;
+            }
+            for (Signal s : ex.ports.getOrDefault(mi.id(), List.of())) {
+                for (int n : s.nets()) {
+                    List<Integer> kids = passedTo.computeIfAbsent(key(mi.parent(), n), k -> new ArrayList<>());
+                    if (kids.isEmpty() || kids.get(kids.size() - 1) != mi.id()) {
+                        kids.add(mi.id());
                     }
                 }
             }
         }
-        return false;
-    }
-
-    private Map<Integer, List<NetBuilder.GateB>> gatesByModule;
-
-    private List<NetBuilder.GateB> moduleGates(int module) {
-        if (gatesByModule == null) {
-            gatesByModule = new java.util.HashMap<>();
-            for (NetBuilder.GateB g : nb.gates) {
-                gatesByModule.computeIfAbsent(g.module, k -> new ArrayList<>()).add(g);
-            }
-        }
-        return gatesByModule.getOrDefault(module, List.of());
     }
 
     private String qualified(int module, String name) {

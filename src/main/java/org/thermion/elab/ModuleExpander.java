@@ -898,6 +898,9 @@ final class ModuleExpander {
         List<Logic> flat = new ArrayList<>();
         flatten(and, operands, flat);
         List<Integer> nets = new ArrayList<>();
+        // A set beside the list: the list keeps first-seen order, the set keeps the duplicate
+        // test constant-time (List.contains made wide ANDs and ORs quadratic in their operands).
+        Set<Integer> seen = new HashSet<>();
         for (Logic o : flat) {
             if (o instanceof Logic.Const c) {
                 if (c.value() != and) {
@@ -913,7 +916,7 @@ final class ModuleExpander {
                 }
                 continue;
             }
-            if (!nets.contains(n)) {
+            if (seen.add(n)) {
                 nets.add(n);
             }
         }

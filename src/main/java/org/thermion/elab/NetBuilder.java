@@ -53,7 +53,7 @@ final class NetBuilder {
     final List<LatchB> latches = new ArrayList<>();
     final Map<Integer, Integer> complement = new HashMap<>();
     final Map<Integer, Integer> complementSource = new HashMap<>();
-    private final Map<String, Integer> shared = new HashMap<>();
+    private final Map<GateKey, Integer> shared = new HashMap<>();
     private final Diagnostics diags;
     private int temps;
 
@@ -111,7 +111,7 @@ final class NetBuilder {
         if (fn != GateFn.NOT && fn != GateFn.BUF) {
             Arrays.sort(key);
         }
-        String k = fn.ordinal() + ":" + stage + ":" + module + ":" + Arrays.toString(key);
+        GateKey k = new GateKey(fn.ordinal(), stage, module, key);
         Integer existing = stage == -1 && fn == GateFn.BUF ? null : shared.get(k);
         if (existing != null) {
             if (dest < 0) {
@@ -169,6 +169,45 @@ final class NetBuilder {
         complement.put(latchOut, n);
         complementSource.put(n, latchOut);
         return n;
+    }
+
+    /**
+     * What makes two gates the same: function, stage, module and (sorted) inputs. A record
+     * with a mixed hash; the text key it replaces hashed so unevenly on large machines that
+     * its buckets turned into trees.
+     */
+    private static final class GateKey {
+        private final int fn;
+        private final int stage;
+        private final int module;
+        private final int[] in;
+        private final int hash;
+
+        GateKey(int fn, int stage, int module, int[] in) {
+            this.fn = fn;
+            this.stage = stage;
+            this.module = module;
+            this.in = in;
+            long h = fn * 0x9E3779B97F4A7C15L + stage;
+            h = h * 0xC2B2AE3D27D4EB4FL + module;
+            for (int i : in) {
+                h = h * 0x9E3779B97F4A7C15L + i;
+            }
+            h ^= h >>> 31;
+            h *= 0xBF58476D1CE4E5B9L;
+            this.hash = (int) (h ^ (h >>> 32));
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof GateKey g && g.hash == hash && g.fn == fn && g.stage == stage && g.module == module
+                    && Arrays.equals(g.in, in);
+        }
+
+        @Override
+        public int hashCode() {
+            return hash;
+        }
     }
 
     /** Growable int array. */

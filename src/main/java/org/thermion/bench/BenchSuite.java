@@ -1,0 +1,141 @@
+package org.thermion.bench;
+
+import org.thermion.model.Machine;
+import org.thermion.sim.Simulator;
+import org.thermion.sim.compiled.Engine;
+import org.thermion.sim.compiled.StraightLineCompiler;
+import org.thermion.synth.SyntheticMachine;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Consumer;
+
+/**
+ * The whole benchmark in one run: for the demo and each synthetic size, elaboration time,
+ * heap per stage instance, and the speed of each engine on one lane and on 64 lanes,
+ * beside the straight-line reference (the generated settle called alone). Each figure is
+ * set against its target.
+ */
+public final class BenchSuite {
+    /** Targets of the speed-and-scale issue. */
+    static final double ENGINE_VS_REFERENCE = 0.5;
+    static final double GATE_EVALS_10K = 2e8;
+    static final double LANES_GAIN = 40;
+    static final double ELAB_100K_SECONDS = 2;
+    static final double ELAB_GROWTH = 12;
+    static final double HEAP_PER_STAGE = 2048;
+
+    /** The engine users get when they choose none. */
+    public static final Engine DEFAULT_ENGINE = Engine.ARRAY;
+
+    private final Path demo;
+    private final List<Integer> sizes;
+    private final List<Engine> engines;
+    private final boolean quick;
+    private final Measure measure;
+    private final Consumer<String> progress;
+
+    public BenchSuite(Path demo, List<Integer> sizes, List<Engine> engines, boolean quick, double seconds,
+                      Consumer<String> progress) {
+        this.demo = demo;
+        this.sizes = sizes;
+        this.engines = engines;
+        this.quick = quick;
+        this.measure = new Measure(seconds);
+        this.progress = progress;
+    }
+
+    public List<BenchRow> run() {
+        List<BenchRow> rows = new ArrayList<>();
+        List<Measure.Source> sources = new ArrayList<>();
+        sources.add(new Measure.Source("demo", demo, null));
+        for (int n : sizes) {
+            SyntheticMachine sm = SyntheticMachine.ofSize(n);
+            sources.add(new Measure.Source(label(n), null, sm.text()));
+        }
+        double elab10k = Double.NaN;
+        double elab100k = Double.NaN;
+        for (Measure.Source s : sources) {
+            progress.accept("measuring " + s.label());
+            Machine m = s.elaborate();
+            int stages = m.stageInstanceCount();
+            String who = s.label();
+            rows.add(BenchRow.info(who, "stage instances", stages, ""));
+            rows.add(BenchRow.info(who, "gates in the netlist (with free wires)", m.netlist().gates().size(), ""));
+            int runs = quick ? 1 : (stages >= 50_000 ? 2 : 3);
+            double t = Measure.elaborateSeconds(s, 1, runs);
+            if (who.equals(label(100_000))) {
+                elab100k = t;
+                rows.add(BenchRow.target(who, "parse + elaborate", t, "s", ELAB_100K_SECONDS, true, "2 s"));
+            } else {
+                rows.add(BenchRow.info(who, "parse + elaborate", t, "s"));
+            }
+            if (who.equals(label(10_000))) {
+                elab10k = t;
+            }
+            Machine[] hold = new Machine[1];
+            m = null;
+            long bytes = Measure.retainedBytes(s::elaborate, x -> hold[0] = x);
+            m = hold[0];
+            rows.add(BenchRow.target(who, "heap per stage instance", (double) bytes / stages, "B", HEAP_PER_STAGE, true, "2 KB"));
+            speeds(rows, who, m, stages);
+        }
+        if (!Double.isNaN(elab10k) && !Double.isNaN(elab100k)) {
+            rows.add(BenchRow.target("scale", "elaborate time 10^5 / 10^4", elab100k / elab10k, "x", ELAB_GROWTH, true, "12 x"));
+        }
+        return rows;
+    }
+
+    private void speeds(List<BenchRow> rows, String who, Machine m, int stages) {
+        int gates = m.netlist().gates().size();
+        double reference = Double.NaN;
+        Consumer<long[]> settle = null;
+        if (StraightLineCompiler.available()) {
+            long t0 = System.nanoTime();
+            settle = StraightLineCompiler.compileConsumer(m.netlist());
+            rows.add(BenchRow.info(who, "straight-line: generate + compile", (System.nanoTime() - t0) * 1e-9, "s"));
+            Measure.Speed ref = measure.reference(settle, m.netlist().netCount(), gates);
+            reference = ref.gateEvaluationsPerSecond();
+            rows.add(BenchRow.info(who, "straight-line reference: gate evals/s", reference, "/s"));
+        } else {
+            rows.add(BenchRow.missing(who, "straight-line reference", StraightLineCompiler.unavailableReason()));
+        }
+        boolean heldToRatio = who.equals("demo") || who.equals(label(10_000));
+        for (Engine e : engines) {
+            if (e == Engine.COMPILED && settle == null) {
+                rows.add(BenchRow.missing(who, "compiled engine", StraightLineCompiler.unavailableReason()));
+                continue;
+            }
+            Consumer<long[]> s = settle;
+            Simulator sim = e == Engine.COMPILED ? new Simulator(m, s::accept) : new Simulator(m);
+            String name = e.word() + (e == DEFAULT_ENGINE ? " (default)" : "");
+            Measure.Speed one = measure.run(sim, false, 17);
+            Measure.Speed all = measure.run(sim, true, 17);
+            rows.add(BenchRow.info(who, name + ", 1 lane: cycles/s", one.cyclesPerSecond(), "/s"));
+            double evals1 = one.gateEvaluationsPerSecond();
+            if (who.equals(label(10_000))) {
+                rows.add(BenchRow.target(who, name + ", 1 lane: gate evals/s", evals1, "/s", GATE_EVALS_10K, false, "2e8 /s (guide)"));
+            } else {
+                rows.add(BenchRow.info(who, name + ", 1 lane: gate evals/s", evals1, "/s"));
+            }
+            double lane64 = all.gateEvaluationsPerSecond() * Simulator.LANES;
+            rows.add(BenchRow.info(who, name + ", 64 lanes: cycles/s", all.cyclesPerSecond(), "/s"));
+            rows.add(BenchRow.info(who, name + ", 64 lanes: lane-evals/s", lane64, "/s"));
+            rows.add(BenchRow.target(who, name + ", 64 lanes / 1 lane (lane-evals)", lane64 / evals1, "x", LANES_GAIN, false, "40 x"));
+            if (!Double.isNaN(reference)) {
+                double ratio = evals1 / reference;
+                if (e == DEFAULT_ENGINE && heldToRatio) {
+                    rows.add(BenchRow.target(who, name + " / straight-line reference", ratio, "x", ENGINE_VS_REFERENCE, false, "0.5 x"));
+                } else {
+                    rows.add(BenchRow.info(who, name + " / straight-line reference", ratio, "x"));
+                }
+            }
+        }
+    }
+
+    /** The label of a synthetic machine of {@code n} stage instances. */
+    public static String label(int n) {
+        return "synth " + n;
+    }
+}

@@ -1,0 +1,172 @@
+package org.thermion.bench;
+
+import org.thermion.elab.Elaborator;
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.SourceSet;
+import org.thermion.model.Machine;
+import org.thermion.sim.InitMode;
+import org.thermion.sim.Simulator;
+
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryMXBean;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.SplittableRandom;
+import java.util.function.Consumer;
+import java.util.function.Supplier;
+
+/**
+ * The measurements {@code bench} makes, each with a warm-up first: elaboration time,
+ * retained heap, simulation speed of an engine, and the straight-line settle alone.
+ */
+public final class Measure {
+    private final double seconds;
+
+    /** {@code seconds}: how long each speed measurement runs (warm-up takes as long again). */
+    public Measure(double seconds) {
+        this.seconds = seconds;
+    }
+
+    /** A machine description to elaborate: from a file, or from text. */
+    public record Source(String label, Path file, String text) {
+        public Machine elaborate() {
+            Diagnostics d = new Diagnostics();
+            Elaborator e = new Elaborator(new SourceSet(), d);
+            Machine m = text == null ? e.elaborate(file) : e.elaborateText(Path.of(label + ".machine"), text);
+            if (m == null || d.hasErrors()) {
+                throw new IllegalStateException(label + " did not elaborate (" + d.errorCount() + " errors); run `check` on it");
+            }
+            return m;
+        }
+    }
+
+    /** Best wall time of parse + elaborate over {@code runs} runs after {@code warm} warm-up runs, in seconds. */
+    public static double elaborateSeconds(Source s, int warm, int runs) {
+        for (int i = 0; i < warm; i++) {
+            s.elaborate();
+        }
+        double best = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < runs; i++) {
+            long t0 = System.nanoTime();
+            s.elaborate();
+            best = Math.min(best, (System.nanoTime() - t0) * 1e-9);
+        }
+        return best;
+    }
+
+    /** Heap the machine retains, in bytes: used heap after full collections, with and without it held. */
+    public static long retainedBytes(Supplier<Machine> make, Consumer<Machine> keep) {
+        MemoryMXBean mx = ManagementFactory.getMemoryMXBean();
+        long before = settledHeap(mx);
+        Machine m = make.get();
+        long after = settledHeap(mx);
+        keep.accept(m);
+        return Math.max(0, after - before);
+    }
+
+    private static long settledHeap(MemoryMXBean mx) {
+        long used = Long.MAX_VALUE;
+        for (int i = 0; i < 4; i++) {
+            System.gc();
+            used = Math.min(used, mx.getHeapMemoryUsage().getUsed());
+        }
+        return used;
+    }
+
+    /** A speed: work done per second of one run. */
+    public record Speed(long cycles, long gateEvaluations, double seconds) {
+        public double cyclesPerSecond() {
+            return cycles / seconds;
+        }
+
+        public double gateEvaluationsPerSecond() {
+            return gateEvaluations / seconds;
+        }
+    }
+
+    /**
+     * Runs the machine on {@code sim} with a random ROM: on every lane alike ({@code lanes64}
+     * false: one program, one set of inputs, so one lane's worth of distinct work) or with
+     * independent random inputs per lane (the lanes' program counters soon part ways).
+     */
+    public Speed run(Simulator sim, boolean lanes64, long seed) {
+        Machine m = sim.machine();
+        SplittableRandom rnd = new SplittableRandom(seed);
+        if (m.rom() != null) {
+            long[] rom = new long[m.rom().words()];
+            for (int i = 0; i < rom.length; i++) {
+                rom[i] = rnd.nextLong();
+            }
+            sim.loadRom(rom);
+        }
+        sim.reset(lanes64 ? new InitMode.Random(seed) : new InitMode.Zero());
+        int inputs = m.inputs().size();
+        long[][] stimulus = new long[64][inputs];
+        for (long[] row : stimulus) {
+            for (int i = 0; i < inputs; i++) {
+                row[i] = lanes64 ? rnd.nextLong() : (rnd.nextBoolean() ? -1L : 0L);
+            }
+        }
+        timed(sim, stimulus, seconds);
+        return timed(sim, stimulus, seconds);
+    }
+
+    private static Speed timed(Simulator sim, long[][] stimulus, double seconds) {
+        long budget = (long) (seconds * 1e9);
+        long cycles = 0;
+        long evals0 = sim.gateEvaluations();
+        long t0 = System.nanoTime();
+        long t;
+        int batch = 16;
+        do {
+            for (int k = 0; k < batch; k++) {
+                long[] row = stimulus[(int) (cycles & 63)];
+                for (int i = 0; i < row.length; i++) {
+                    sim.setInput(i, row[i]);
+                }
+                sim.stepCycle();
+                cycles++;
+            }
+            t = System.nanoTime() - t0;
+            if (t < budget / 8) {
+                batch = Math.min(batch * 2, 1 << 16);
+            }
+        } while (t < budget);
+        return new Speed(cycles, sim.gateEvaluations() - evals0, t * 1e-9);
+    }
+
+    /** The straight-line settle alone, called in a loop over one value array: settles and gate evaluations per second. */
+    public Speed reference(Consumer<long[]> settle, int nets, int gates) {
+        long[] v = new long[nets];
+        SplittableRandom rnd = new SplittableRandom(5);
+        for (int i = 0; i < nets; i++) {
+            v[i] = rnd.nextLong();
+        }
+        v[0] = 0;
+        v[1] = -1L;
+        long[] start = Arrays.copyOf(v, nets);
+        referenceLoop(settle, v, seconds);
+        System.arraycopy(start, 0, v, 0, nets);
+        Speed s = referenceLoop(settle, v, seconds);
+        return new Speed(s.cycles(), s.cycles() * gates, s.seconds());
+    }
+
+    private static Speed referenceLoop(Consumer<long[]> settle, long[] v, double seconds) {
+        long budget = (long) (seconds * 1e9);
+        long n = 0;
+        long t0 = System.nanoTime();
+        long t;
+        int batch = 16;
+        do {
+            for (int k = 0; k < batch; k++) {
+                settle.accept(v);
+            }
+            n += batch;
+            t = System.nanoTime() - t0;
+            if (t < budget / 8) {
+                batch = Math.min(batch * 2, 1 << 16);
+            }
+        } while (t < budget);
+        return new Speed(n, 0, t * 1e-9);
+    }
+}

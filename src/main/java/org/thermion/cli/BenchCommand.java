@@ -1,0 +1,158 @@
+package org.thermion.cli;
+
+import org.thermion.bench.BenchRow;
+import org.thermion.bench.BenchSuite;
+import org.thermion.sim.compiled.Engine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+/** {@code bench}: speed and scale of elaboration and simulation, against their targets. */
+@Command(name = "bench", mixinStandardHelpOptions = true,
+        description = {"Measure elaboration time, heap per stage instance and simulation speed of each engine",
+                "on the demo and on synthetic machines, beside the straight-line reference; each figure",
+                "is shown against its target. One run, with warm-up; takes a minute or two (--quick: seconds)."})
+final class BenchCommand implements Callable<Integer> {
+    @Option(names = "--sizes", split = ",", paramLabel = "N",
+            description = "Synthetic machine sizes in stage instances (default: 1000,10000,100000).")
+    List<Integer> sizes;
+
+    @Option(names = "--engine", split = ",", paramLabel = "ENGINE",
+            description = "Engines to measure: array, compiled (default: both).")
+    List<String> engines;
+
+    @Option(names = "--quick", description = "Short runs: sizes 1000,10000 unless given, 0.2 s per speed.")
+    boolean quick;
+
+    @Option(names = "--seconds", paramLabel = "S", description = "Seconds per speed measurement (default 1, --quick 0.2).")
+    Double seconds;
+
+    @Option(names = "--machine", paramLabel = "FILE", description = "The machine measured as 'demo' (default: the bundled example).")
+    Path demo;
+
+    @Option(names = "--format", paramLabel = "FORMAT", description = "text or json (default text).")
+    Format format = Format.text;
+
+    @Mixin
+    CommonOptions common;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        if (format == Format.csv) {
+            throw new Failures.BadInput("error: bench prints text or json, not csv");
+        }
+        List<Integer> n = sizes != null ? sizes : quick ? List.of(1000, 10_000) : List.of(1000, 10_000, 100_000);
+        for (int s : n) {
+            if (s < 200 || s > 2_000_000) {
+                throw new Failures.BadInput("error: --sizes takes stage counts from 200 to 2000000, not " + s);
+            }
+        }
+        List<Engine> es = new ArrayList<>();
+        try {
+            for (String e : engines == null ? List.of("array", "compiled") : engines) {
+                es.add(Engine.parse(e));
+            }
+        } catch (IllegalArgumentException e) {
+            throw new Failures.BadInput("error: " + e.getMessage());
+        }
+        double secs = seconds != null ? seconds : quick ? 0.2 : 1.0;
+        if (!(secs > 0 && secs <= 60)) {
+            throw new Failures.BadInput("error: --seconds takes a time from 0 to 60 s");
+        }
+        Path machine = demo != null ? demo : DefaultRun.BundledExample.machine();
+        if (!Files.isRegularFile(machine)) {
+            throw new Failures.BadInput("error: no such machine file: " + machine);
+        }
+        BenchSuite suite = new BenchSuite(machine, n, es, quick, secs, msg -> {
+            err.println(msg);
+            err.flush();
+        });
+        List<BenchRow> rows = suite.run();
+        if (format == Format.json) {
+            printJson(out, rows);
+        } else {
+            printText(out, rows);
+        }
+        out.flush();
+        return ExitCodes.OK;
+    }
+
+    private static void printText(PrintWriter out, List<BenchRow> rows) {
+        Table t = new Table("machine", "measurement", "value", "target", "verdict");
+        for (BenchRow r : rows) {
+            t.row(r.machine(), r.measure(), value(r), r.target() == null ? "" : r.target(), r.note());
+        }
+        t.print(out, "");
+        out.println();
+        out.println("gate evals: netlist gates evaluated per second, each over a 64-bit word; lane-evals count each of the");
+        out.println("64 lanes. 1 lane: every lane runs the same inputs; 64 lanes: independent random inputs per lane.");
+        out.println("Default engine: " + BenchSuite.DEFAULT_ENGINE.word() + ". verify cases/s and powerup solve times: not available"
+                + " in this build.");
+    }
+
+    static String value(BenchRow r) {
+        double v = r.value();
+        if (Double.isNaN(v)) {
+            return "n/a";
+        }
+        return switch (r.unit()) {
+            case "s" -> Units.time(v);
+            case "B" -> String.format(Locale.ROOT, "%.0f B", v);
+            case "x" -> String.format(Locale.ROOT, "%.2f x", v);
+            case "/s" -> String.format(Locale.ROOT, "%.3g /s", v);
+            default -> v == Math.rint(v) ? String.format(Locale.ROOT, "%.0f", v) : String.format(Locale.ROOT, "%.3g", v);
+        };
+    }
+
+    private static void printJson(PrintWriter out, List<BenchRow> rows) {
+        StringBuilder b = new StringBuilder("{\n  \"defaultEngine\": ").append(quote(BenchSuite.DEFAULT_ENGINE.word()))
+                .append(",\n  \"rows\": [\n");
+        for (int i = 0; i < rows.size(); i++) {
+            BenchRow r = rows.get(i);
+            b.append("    {\"machine\": ").append(quote(r.machine()))
+                    .append(", \"measure\": ").append(quote(r.measure()))
+                    .append(", \"value\": ").append(Double.isNaN(r.value()) ? "null" : String.format(Locale.ROOT, "%.6g", r.value()))
+                    .append(", \"unit\": ").append(quote(r.unit()))
+                    .append(", \"target\": ").append(r.target() == null ? "null" : quote(r.target()))
+                    .append(", \"met\": ").append(r.met() == null ? "null" : r.met().toString())
+                    .append(", \"note\": ").append(quote(r.note())).append('}')
+                    .append(i + 1 < rows.size() ? ",\n" : "\n");
+        }
+        b.append("  ]\n}");
+        out.println(b);
+    }
+
+    static String quote(String s) {
+        StringBuilder b = new StringBuilder("\"");
+        for (char c : s.toCharArray()) {
+            switch (c) {
+                case '"' -> b.append("\\\"");
+                case '\\' -> b.append("\\\\");
+                case '\n' -> b.append("\\n");
+                default -> {
+                    if (c < 0x20) {
+                        b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
+                    } else {
+                        b.append(c);
+                    }
+                }
+            }
+        }
+        return b.append('"').toString();
+    }
+}
