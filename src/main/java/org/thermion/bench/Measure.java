@@ -54,14 +54,21 @@ public final class Measure {
         return best;
     }
 
-    /** Heap the machine retains, in bytes: used heap after full collections, with and without it held. */
-    public static long retainedBytes(Supplier<Machine> make, Consumer<Machine> keep) {
+    /**
+     * Heap one machine retains, in bytes: used heap after full collections, before and while
+     * {@code copies} elaborated copies are held (copies make small machines stand out of the
+     * collector's noise), divided by the copies.
+     */
+    public static double retainedBytes(Supplier<Machine> make, int copies, Consumer<Machine> keep) {
         MemoryMXBean mx = ManagementFactory.getMemoryMXBean();
         long before = settledHeap(mx);
-        Machine m = make.get();
+        Machine[] held = new Machine[copies];
+        for (int i = 0; i < copies; i++) {
+            held[i] = make.get();
+        }
         long after = settledHeap(mx);
-        keep.accept(m);
-        return Math.max(0, after - before);
+        keep.accept(held[0]);
+        return Math.max(0, after - before) / (double) copies;
     }
 
     private static long settledHeap(MemoryMXBean mx) {
@@ -90,6 +97,11 @@ public final class Measure {
      * independent random inputs per lane (the lanes' program counters soon part ways).
      */
     public Speed run(Simulator sim, boolean lanes64, long seed) {
+        return run(sim, lanes64, seed, WARM_SETTLES);
+    }
+
+    /** As {@link #run(Simulator, boolean, long)}, warming up for at least {@code warmSettles} settles. */
+    public Speed run(Simulator sim, boolean lanes64, long seed, long warmSettles) {
         Machine m = sim.machine();
         SplittableRandom rnd = new SplittableRandom(seed);
         if (m.rom() != null) {
@@ -107,9 +119,28 @@ public final class Measure {
                 row[i] = lanes64 ? rnd.nextLong() : (rnd.nextBoolean() ? -1L : 0L);
             }
         }
-        timed(sim, stimulus, seconds);
+        // The array engine's single loop compiles early; the generated code needs its full count.
+        double limit = sim.compiledEngine() ? WARM_LIMIT_SECONDS : Math.max(2, 5 * seconds);
+        warm(() -> timed(sim, stimulus, seconds).cycles() * Math.max(1, m.clock().phases()), warmSettles, limit);
         return timed(sim, stimulus, seconds);
     }
+
+    /**
+     * Runs warm-up rounds (one at least) until the JIT has had its chance: {@code minSettles}
+     * settles, within {@code limit} seconds. The generated code needs
+     * {@value #WARM_SETTLES}: each of its methods runs once per settle, and the JIT compiles a
+     * method only after thousands of calls.
+     */
+    private static void warm(java.util.function.LongSupplier round, long minSettles, double limit) {
+        long settles = 0;
+        long t0 = System.nanoTime();
+        do {
+            settles += round.getAsLong();
+        } while (settles < minSettles && (System.nanoTime() - t0) * 1e-9 < limit);
+    }
+
+    static final long WARM_SETTLES = 12_000;
+    static final double WARM_LIMIT_SECONDS = 30;
 
     private static Speed timed(Simulator sim, long[][] stimulus, double seconds) {
         long budget = (long) (seconds * 1e9);
@@ -135,6 +166,15 @@ public final class Measure {
         return new Speed(cycles, sim.gateEvaluations() - evals0, t * 1e-9);
     }
 
+    /** The engine's settle alone (no latches, PC or ROM), called in a loop: settles and gate evaluations per second. */
+    public Speed settleOnly(Simulator sim) {
+        int gates = sim.machine().netlist().gates().size();
+        warm(() -> referenceLoop(v -> sim.settle(), null, seconds).cycles(),
+                WARM_SETTLES, sim.compiledEngine() ? WARM_LIMIT_SECONDS : Math.max(2, 5 * seconds));
+        Speed s = referenceLoop(v -> sim.settle(), null, seconds);
+        return new Speed(s.cycles(), s.cycles() * gates, s.seconds());
+    }
+
     /** The straight-line settle alone, called in a loop over one value array: settles and gate evaluations per second. */
     public Speed reference(Consumer<long[]> settle, int nets, int gates) {
         long[] v = new long[nets];
@@ -145,7 +185,7 @@ public final class Measure {
         v[0] = 0;
         v[1] = -1L;
         long[] start = Arrays.copyOf(v, nets);
-        referenceLoop(settle, v, seconds);
+        warm(() -> referenceLoop(settle, v, seconds).cycles(), WARM_SETTLES, WARM_LIMIT_SECONDS);
         System.arraycopy(start, 0, v, 0, nets);
         Speed s = referenceLoop(settle, v, seconds);
         return new Speed(s.cycles(), s.cycles() * gates, s.seconds());

@@ -37,6 +37,11 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--seconds", paramLabel = "S", description = "Seconds per speed measurement (default 1, --quick 0.2).")
     Double seconds;
 
+    @Option(names = "--compile-max", paramLabel = "GATES",
+            description = "Largest netlist, in gates, given the straight-line reference and the compiled engine"
+                    + " (generating and compiling Java costs seconds per 10^4 gates; default 30000).")
+    int compileMax = 30_000;
+
     @Option(names = "--machine", paramLabel = "FILE", description = "The machine measured as 'demo' (default: the bundled example).")
     Path demo;
 
@@ -78,7 +83,7 @@ final class BenchCommand implements Callable<Integer> {
         if (!Files.isRegularFile(machine)) {
             throw new Failures.BadInput("error: no such machine file: " + machine);
         }
-        BenchSuite suite = new BenchSuite(machine, n, es, quick, secs, msg -> {
+        BenchSuite suite = new BenchSuite(machine, n, es, quick, secs, compileMax, msg -> {
             err.println(msg);
             err.flush();
         });
