@@ -32,8 +32,15 @@ public final class LogicRun {
      */
     public LogicRun(Machine machine, long[] rom, InitMode init, Stimulus stimulus, List<String> watchNames,
                     List<Integer> watchNets, VcdWriter vcd) {
+        this(new Simulator(machine), rom, init, stimulus, watchNames, watchNets, vcd);
+    }
+
+    /** As above, on a simulator already built (the engine the user chose). */
+    public LogicRun(Simulator sim, long[] rom, InitMode init, Stimulus stimulus, List<String> watchNames,
+                    List<Integer> watchNets, VcdWriter vcd) {
+        Machine machine = sim.machine();
         this.machine = machine;
-        this.sim = new Simulator(machine);
+        this.sim = sim;
         this.stimulus = stimulus;
         this.watchNames = List.copyOf(watchNames);
         this.watchNets = List.copyOf(watchNets);
