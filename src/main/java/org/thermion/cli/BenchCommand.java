@@ -131,7 +131,7 @@ final class BenchCommand implements Callable<Integer> {
             BenchRow r = rows.get(i);
             b.append("    {\"machine\": ").append(quote(r.machine()))
                     .append(", \"measure\": ").append(quote(r.measure()))
-                    .append(", \"value\": ").append(Double.isNaN(r.value()) ? "null" : String.format(Locale.ROOT, "%.6g", r.value()))
+                    .append(", \"value\": ").append(Double.isNaN(r.value()) ? "null" : number(r.value()))
                     .append(", \"unit\": ").append(quote(r.unit()))
                     .append(", \"target\": ").append(r.target() == null ? "null" : quote(r.target()))
                     .append(", \"met\": ").append(r.met() == null ? "null" : r.met().toString())
@@ -140,6 +140,14 @@ final class BenchCommand implements Callable<Integer> {
         }
         b.append("  ]\n}");
         out.println(b);
+    }
+
+    /** A JSON number: whole values as integers, others to six significant figures. */
+    static String number(double v) {
+        if (v == Math.rint(v) && Math.abs(v) < 1e15) {
+            return String.valueOf((long) v);
+        }
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString();
     }
 
     static String quote(String s) {

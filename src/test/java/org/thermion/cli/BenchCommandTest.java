@@ -1,0 +1,43 @@
+package org.thermion.cli;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
+
+import java.util.concurrent.TimeUnit;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** `bench` in its shortest form: every figure present with its target; no timing is asserted. */
+class BenchCommandTest {
+
+    @Test
+    @Timeout(value = 120, unit = TimeUnit.SECONDS)
+    void jsonReportHasEveryMeasurementWithItsTarget() {
+        CheckCommandTest.Result r = CheckCommandTest.run("bench", "--sizes", "400", "--seconds", "0.05", "--engine", "array",
+                "--compile-max", "0", "--format", "json");
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).startsWith("{").contains("\"defaultEngine\": \"array\"")
+                .contains("\"machine\": \"demo\"", "\"machine\": \"synth 400\"")
+                .contains("\"measure\": \"stage instances\", \"value\": 400,")
+                .contains("\"measure\": \"heap per stage instance\"", "\"target\": \"<= 2 KB\"")
+                .contains("\"measure\": \"array (default), 64 lanes / 1 lane (lane-evals)\"", "\"target\": \">= 40 x\"")
+                .contains("skipped: 137 gates is past --compile-max 0");
+    }
+
+    @Test
+    void textTableNamesTheTargets() {
+        CheckCommandTest.Result r = CheckCommandTest.run("bench", "--sizes", "300", "--seconds", "0.02", "--engine", "array",
+                "--compile-max", "0");
+        assertThat(r.code()).as(r.err()).isZero();
+        assertThat(r.out()).contains("machine", "measurement", "target", "verdict", "synth 300", "parse + elaborate")
+                .contains("Default engine: array");
+    }
+
+    @Test
+    void badOptionsExitTwo() {
+        assertThat(CheckCommandTest.run("bench", "--sizes", "5").code()).isEqualTo(ExitCodes.BAD_INPUT);
+        CheckCommandTest.Result r = CheckCommandTest.run("bench", "--engine", "fast");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("choose array or compiled").doesNotContain("Exception");
+    }
+}
