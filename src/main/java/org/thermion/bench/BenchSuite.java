@@ -1,6 +1,10 @@
 package org.thermion.bench;
 
 import org.thermion.model.Machine;
+import org.thermion.power.startup.PowerUpOptions;
+import org.thermion.power.startup.PowerUpSolver;
+import org.thermion.power.startup.ResistorSweep;
+import org.thermion.power.startup.StartupNetwork;
 import org.thermion.sim.Simulator;
 import org.thermion.sim.compiled.Engine;
 import org.thermion.sim.compiled.StraightLineCompiler;
@@ -85,6 +89,8 @@ public final class BenchSuite {
             rows.add(BenchRow.target(who, "heap per stage instance", bytes / stages, "B", HEAP_PER_STAGE, true, "2 KB"));
             speeds(rows, who, m, stages);
         }
+        powerUp(rows, sources.get(0).elaborate());
+        rows.add(BenchRow.missing("demo", "verify: cases/s", "not available: org.thermion.verify is not in this build"));
         if (!Double.isNaN(elab10k) && !Double.isNaN(elab100k)) {
             rows.add(BenchRow.target("scale", "elaborate time 10^5 / 10^4", elab100k / elab10k, "x", ELAB_GROWTH, true, "12 x"));
         }
@@ -161,6 +167,35 @@ public final class BenchSuite {
                 }
             }
         }
+    }
+
+    /** Power-up solve times on the demo: 30 s of switch-on, and a 50-point soft-start resistor sweep. */
+    private void powerUp(List<BenchRow> rows, Machine demo) {
+        progress.accept("measuring powerup on the demo");
+        PowerUpOptions o = PowerUpOptions.defaults().withSeconds(30);
+        double single = best(() -> PowerUpSolver.solve(demo, o), quick ? 1 : 3);
+        rows.add(BenchRow.info("demo", "powerup: solve 30 s", single, "s"));
+        if (demo.softStarts().isEmpty()) {
+            rows.add(BenchRow.missing("demo", "powerup: 50-point sweep", "the machine has no soft start"));
+            return;
+        }
+        StartupNetwork net = StartupNetwork.of(demo, o.assumptions(), o.drawMode());
+        String name = demo.softStarts().get(0).name();
+        double[] ohms = ResistorSweep.range(0.05, 2.5, 0.05);
+        double sweep = best(() -> ResistorSweep.run(net, o, name, ohms), 1);
+        rows.add(BenchRow.info("demo", "powerup: sweep of " + ohms.length + " resistor values, 30 s each", sweep, "s"));
+    }
+
+    /** Best wall time of {@code runs} runs after one warm-up run, in seconds. */
+    private static double best(Runnable r, int runs) {
+        r.run();
+        double best = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < runs; i++) {
+            long t0 = System.nanoTime();
+            r.run();
+            best = Math.min(best, (System.nanoTime() - t0) * 1e-9);
+        }
+        return best;
     }
 
     /** The label of a synthetic machine of {@code n} stage instances. */
