@@ -136,6 +136,58 @@ public final class SyntheticMachine {
         line(b, "  inputs x0 x1 x2 x3 x4 x5");
         line(b, "  outputs y0 y1 y2 y3");
         line(b, "}");
+        line(b, "");
+        isa(b);
+        return b.toString();
+    }
+
+    /**
+     * The instruction set, as far as it can be stated over the one state bit the ISA sees (the
+     * accumulator): the slice-steering opcodes change only datapath latches, which it does not
+     * name; opcode 2 loads the accumulator from the datapath and is left out, having no meaning
+     * in these terms. Enough for programs to assemble and for control flow to be checked.
+     */
+    private void isa(StringBuilder b) {
+        line(b, "isa %s {", name());
+        line(b, "  word 12");
+        line(b, "  field opcode 11..8");
+        line(b, "  field operand 7..0");
+        line(b, "  field sel 3..0");
+        line(b, "  opcode opcode");
+        line(b, "  target operand");
+        line(b, "  select sel");
+        line(b, "  state acc = acc");
+        line(b, "  op IDLE 0x0 { }");
+        line(b, "  op SHIFT 0x1 { }");
+        line(b, "  op SHOW 0x3 { }");
+        line(b, "  op SHOWB 0x4 { }");
+        for (int k = 5; k <= 12; k++) {
+            line(b, "  op MIX%d 0x%X { }", k, k);
+        }
+        line(b, "  op JMP 0xD { pc <- operand }");
+        line(b, "  op JMPA 0xE { if acc { pc <- operand } }");
+        line(b, "  op JMPNA 0xF { if !acc { pc <- operand } }");
+        line(b, "}");
+    }
+
+    /**
+     * A program for this machine: an endless loop that shifts the ring and steers the slices.
+     * (The assembler gives these opcodes no operand, their meanings naming no field; the slices'
+     * operand inputs then read 0.)
+     */
+    public String program() {
+        StringBuilder b = new StringBuilder();
+        line(b, "; Endless loop for %s: shift the ring bus through the slices, steer them, show a result.", name());
+        line(b, "loop:   SHIFT");
+        line(b, "        MIX5");
+        line(b, "        SHIFT");
+        line(b, "        MIX9");
+        line(b, "        SHOW");
+        line(b, "        SHIFT");
+        line(b, "        MIX12");
+        line(b, "        SHOWB");
+        line(b, "        JMPA  loop");
+        line(b, "        JMP   loop");
         return b.toString();
     }
 
