@@ -94,10 +94,11 @@ class CompiledEngineTest {
     @Test
     @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void largeNetlistsSplitIntoManyMethodsAndClasses() {
-        Machine m = synthetic(20_000);
+        Machine m = synthetic(10_000);
         StraightLineSource src = new StraightLineSource(m.netlist(), "x.y");
-        // 20,000 stages need several 8000-gate classes and many methods under the bytecode limit.
-        assertThat(src.units().size()).isGreaterThan(3);
+        // 10,000 stages (9376 gates) need two 8000-gate classes, the entry class, and many methods
+        // under the bytecode limit (at most about 400 gates each).
+        assertThat(src.units()).hasSize(3);
         assertThat(src.methods()).isGreaterThan(m.netlist().gates().size() / 400);
         differential(m, 11, 20);
     }
