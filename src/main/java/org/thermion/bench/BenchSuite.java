@@ -9,6 +9,7 @@ import org.thermion.sim.Simulator;
 import org.thermion.sim.compiled.Engine;
 import org.thermion.sim.compiled.StraightLineCompiler;
 import org.thermion.synth.SyntheticMachine;
+import org.thermion.verify.Verifier;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -89,8 +90,9 @@ public final class BenchSuite {
             rows.add(BenchRow.target(who, "heap per stage instance", bytes / stages, "B", HEAP_PER_STAGE, true, "2 KB"));
             speeds(rows, who, m, stages);
         }
-        powerUp(rows, sources.get(0).elaborate());
-        rows.add(BenchRow.missing("demo", "verify: cases/s", "not available: org.thermion.verify is not in this build"));
+        Machine demoMachine = sources.get(0).elaborate();
+        verify(rows, demoMachine);
+        powerUp(rows, demoMachine);
         if (!Double.isNaN(elab10k) && !Double.isNaN(elab100k)) {
             rows.add(BenchRow.target("scale", "elaborate time 10^5 / 10^4", elab100k / elab10k, "x", ELAB_GROWTH, true, "12 x"));
         }
@@ -167,6 +169,19 @@ public final class BenchSuite {
                 }
             }
         }
+    }
+
+    /** Exhaustive verification of the demo against its ISA: cases per second (best run after a warm-up). */
+    private void verify(List<BenchRow> rows, Machine demo) {
+        if (demo.isa() == null) {
+            rows.add(BenchRow.missing("demo", "verify: cases/s", "the machine declares no isa"));
+            return;
+        }
+        progress.accept("measuring verify on the demo");
+        long[] cases = new long[1];
+        double t = best(() -> cases[0] = new Verifier(demo, Verifier.Options.defaults()).run().cases(), quick ? 1 : 3);
+        rows.add(BenchRow.info("demo", "verify: " + cases[0] + " cases", t, "s"));
+        rows.add(BenchRow.info("demo", "verify: cases/s", cases[0] / t, "/s"));
     }
 
     /** Power-up solve times on the demo: 30 s of switch-on, and a 50-point soft-start resistor sweep. */

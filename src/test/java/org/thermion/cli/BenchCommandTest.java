@@ -21,7 +21,8 @@ class BenchCommandTest {
                 .contains("\"measure\": \"stage instances\", \"value\": 400,")
                 .contains("\"measure\": \"heap per stage instance\"", "\"target\": \"<= 2 KB\"")
                 .contains("\"measure\": \"array (default), 64 lanes / 1 lane (lane-evals)\"", "\"target\": \">= 40 x\"")
-                .contains("skipped: 137 gates is past --compile-max 0");
+                .contains("skipped: 137 gates is past --compile-max 0")
+                .contains("\"measure\": \"verify: cases/s\"", "\"measure\": \"powerup: solve 30 s\"");
     }
 
     @Test
