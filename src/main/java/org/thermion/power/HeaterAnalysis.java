@@ -103,41 +103,65 @@ public final class HeaterAnalysis {
 
     /** A module's share of a rail's heater current. */
     public double moduleAmps(int module, int rail) {
-        double a = 0;
-        for (StringResult s : strings) {
-            if (s.string().rail() == rail) {
-                for (Heater h : s.heaters()) {
-                    if (h.module() == module) {
-                        a += h.railAmps();
-                    }
-                }
-            }
-        }
-        return a;
+        shares();
+        return module >= 0 && module < shareAmps.length && rail >= 0 && rail < shareAmps[module].length
+                ? shareAmps[module][rail] : 0;
     }
 
     /** A module's share of heater power, all rails. */
     public double moduleWatts(int module) {
-        double w = 0;
-        for (StringResult s : strings) {
-            for (Heater h : s.heaters()) {
-                if (h.module() == module) {
-                    w += h.railAmps() * s.railVolts();
-                }
-            }
-        }
-        return w;
+        shares();
+        return module >= 0 && module < shareWatts.length ? shareWatts[module] : 0;
     }
 
     /** Strings with at least one heater in a module (a string spanning modules counts in each). */
     public int moduleStrings(int module) {
-        int n = 0;
+        shares();
+        return module >= 0 && module < shareStrings.length ? shareStrings[module] : 0;
+    }
+
+    // Per-module shares, summed once over the strings in string and heater order (the order the
+    // per-call scans used, so the sums are the same to the last bit). Scanning every string for
+    // each module was quadratic in the machine's size.
+    private double[][] shareAmps;
+    private double[] shareWatts;
+    private int[] shareStrings;
+
+    private void shares() {
+        if (shareWatts != null) {
+            return;
+        }
+        int modules = m.modules().size();
+        int rails = m.rails().size();
         for (StringResult s : strings) {
-            if (s.heaters().stream().anyMatch(h -> h.module() == module)) {
-                n++;
+            rails = Math.max(rails, s.string().rail() + 1);
+            for (Heater h : s.heaters()) {
+                modules = Math.max(modules, h.module() + 1);
             }
         }
-        return n;
+        double[][] amps = new double[modules][rails];
+        double[] watts = new double[modules];
+        int[] count = new int[modules];
+        int[] seenIn = new int[modules];
+        java.util.Arrays.fill(seenIn, -1);
+        for (StringResult s : strings) {
+            int rail = s.string().rail();
+            for (Heater h : s.heaters()) {
+                int mod = h.module();
+                if (mod < 0) {
+                    continue;
+                }
+                amps[mod][rail] += h.railAmps();
+                watts[mod] += h.railAmps() * s.railVolts();
+                if (seenIn[mod] != s.index()) {
+                    seenIn[mod] = s.index();
+                    count[mod]++;
+                }
+            }
+        }
+        shareAmps = amps;
+        shareStrings = count;
+        shareWatts = watts;
     }
 
     /** Every string's findings, in string order. */
