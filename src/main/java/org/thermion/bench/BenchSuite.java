@@ -99,9 +99,12 @@ public final class BenchSuite {
         return rows;
     }
 
+    /** One engine's figures on one machine. */
+    private record EngineRun(Engine engine, Measure.Speed one, Measure.Speed all, double logic) {
+    }
+
     private void speeds(List<BenchRow> rows, String who, Machine m, int stages) {
         int gates = m.netlist().gates().size();
-        double reference = Double.NaN;
         Consumer<long[]> settle = null;
         if (gates > compileMax) {
             rows.add(BenchRow.missing(who, "straight-line reference and compiled engine",
@@ -110,13 +113,10 @@ public final class BenchSuite {
             long t0 = System.nanoTime();
             settle = StraightLineCompiler.compileConsumer(m.netlist());
             rows.add(BenchRow.info(who, "straight-line: generate + compile", (System.nanoTime() - t0) * 1e-9, "s"));
-            Measure.Speed ref = measure.reference(settle, m.netlist().netCount(), gates);
-            reference = ref.gateEvaluationsPerSecond();
-            rows.add(BenchRow.info(who, "straight-line reference: gate evals/s", reference, "/s"));
         } else {
             rows.add(BenchRow.missing(who, "straight-line reference", StraightLineCompiler.unavailableReason()));
         }
-        boolean heldToRatio = who.equals("demo") || who.equals(label(10_000));
+        List<EngineRun> runs = new ArrayList<>();
         for (Engine e : engines) {
             if (e == Engine.COMPILED && settle == null) {
                 if (gates <= compileMax) {
@@ -126,47 +126,65 @@ public final class BenchSuite {
             }
             Consumer<long[]> s = settle;
             Simulator sim = e == Engine.COMPILED ? new Simulator(m, s::accept) : new Simulator(m);
-            String name = e.word() + (e == DEFAULT_ENGINE ? " (default)" : "");
             Measure.Speed one = measure.run(sim, false, 17);
             Measure.Speed all = measure.run(sim, true, 17);
-            double logic = measure.settleOnly(sim).gateEvaluationsPerSecond();
-            rows.add(BenchRow.info(who, name + ", settle alone: gate evals/s", logic, "/s"));
-            // Share of a one-lane cycle spent outside the logic: latch loads, PC, ROM, inputs.
-            double outside = 1 - one.gateEvaluationsPerSecond() / logic;
-            rows.add(BenchRow.info(who, name + ", 1 lane: cycles/s", one.cyclesPerSecond(), "/s"));
-            double evals1 = one.gateEvaluationsPerSecond();
-            if (who.equals(label(10_000))) {
-                BenchRow r = BenchRow.target(who, name + ", 1 lane: gate evals/s", evals1, "/s", GATE_EVALS_10K, false, "2e8 /s (guide)");
+            runs.add(new EngineRun(e, one, all, measure.settleOnly(sim).gateEvaluationsPerSecond()));
+        }
+        // The reference last: the compiled engine runs the same generated classes, so by now the
+        // JIT has compiled all of them (a big netlist's methods take seconds of compile time).
+        double reference = Double.NaN;
+        if (settle != null) {
+            reference = measure.reference(settle, m.netlist().netCount(), gates).gateEvaluationsPerSecond();
+            rows.add(BenchRow.info(who, "straight-line reference: gate evals/s", reference, "/s"));
+        }
+        boolean heldToRatio = who.equals("demo") || who.equals(label(10_000));
+        for (EngineRun run : runs) {
+            engineRows(rows, who, run, reference, heldToRatio);
+        }
+    }
+
+    private static void engineRows(List<BenchRow> rows, String who, EngineRun run, double reference, boolean heldToRatio) {
+        Engine e = run.engine();
+        Measure.Speed one = run.one();
+        Measure.Speed all = run.all();
+        double logic = run.logic();
+        String name = e.word() + (e == DEFAULT_ENGINE ? " (default)" : "");
+        rows.add(BenchRow.info(who, name + ", settle alone: gate evals/s", logic, "/s"));
+        // Share of a one-lane cycle spent outside the logic: latch loads, PC, ROM, inputs.
+        double outside = 1 - one.gateEvaluationsPerSecond() / logic;
+        rows.add(BenchRow.info(who, name + ", 1 lane: cycles/s", one.cyclesPerSecond(), "/s"));
+        double evals1 = one.gateEvaluationsPerSecond();
+        if (who.equals(label(10_000))) {
+            BenchRow r = BenchRow.target(who, name + ", 1 lane: gate evals/s", evals1, "/s", GATE_EVALS_10K, false, "2e8 /s (guide)");
+            if (Boolean.FALSE.equals(r.met())) {
+                r = r.withNote(String.format(java.util.Locale.ROOT, "settle alone %.3g /s; %.0f %% of a cycle outside logic",
+                        logic, 100 * Math.max(0, outside)));
+            }
+            rows.add(r);
+        } else {
+            rows.add(BenchRow.info(who, name + ", 1 lane: gate evals/s", evals1, "/s"));
+        }
+        double lane64 = all.gateEvaluationsPerSecond() * Simulator.LANES;
+        rows.add(BenchRow.info(who, name + ", 64 lanes: cycles/s", all.cyclesPerSecond(), "/s"));
+        rows.add(BenchRow.info(who, name + ", 64 lanes: lane-evals/s", lane64, "/s"));
+        BenchRow lanes = BenchRow.target(who, name + ", 64 lanes / 1 lane (lane-evals)", lane64 / evals1, "x", LANES_GAIN, false, "40 x");
+        if (Boolean.FALSE.equals(lanes.met())) {
+            lanes = lanes.withNote(String.format(java.util.Locale.ROOT,
+                    "%.1f us/cycle with lanes parted vs %.1f us alike (per-lane PC and ROM)",
+                    1e6 / all.cyclesPerSecond(), 1e6 / one.cyclesPerSecond()));
+        }
+        rows.add(lanes);
+        if (!Double.isNaN(reference)) {
+            double ratio = evals1 / reference;
+            if (e == DEFAULT_ENGINE && heldToRatio) {
+                BenchRow r = BenchRow.target(who, name + " / straight-line reference", ratio, "x", ENGINE_VS_REFERENCE, false, "0.5 x");
                 if (Boolean.FALSE.equals(r.met())) {
-                    r = r.withNote(String.format(java.util.Locale.ROOT, "settle alone %.3g /s; %.0f %% of a cycle outside logic",
-                            logic, 100 * Math.max(0, outside)));
+                    r = r.withNote(String.format(java.util.Locale.ROOT,
+                            "settle alone %.2f x (gate dispatch); %.0f %% of a cycle outside logic", logic / reference, 100 * Math.max(0, outside)));
                 }
                 rows.add(r);
             } else {
-                rows.add(BenchRow.info(who, name + ", 1 lane: gate evals/s", evals1, "/s"));
-            }
-            double lane64 = all.gateEvaluationsPerSecond() * Simulator.LANES;
-            rows.add(BenchRow.info(who, name + ", 64 lanes: cycles/s", all.cyclesPerSecond(), "/s"));
-            rows.add(BenchRow.info(who, name + ", 64 lanes: lane-evals/s", lane64, "/s"));
-            BenchRow lanes = BenchRow.target(who, name + ", 64 lanes / 1 lane (lane-evals)", lane64 / evals1, "x", LANES_GAIN, false, "40 x");
-            if (Boolean.FALSE.equals(lanes.met())) {
-                lanes = lanes.withNote(String.format(java.util.Locale.ROOT,
-                        "%.1f us/cycle with lanes parted vs %.1f us alike (per-lane PC and ROM)",
-                        1e6 / all.cyclesPerSecond(), 1e6 / one.cyclesPerSecond()));
-            }
-            rows.add(lanes);
-            if (!Double.isNaN(reference)) {
-                double ratio = evals1 / reference;
-                if (e == DEFAULT_ENGINE && heldToRatio) {
-                    BenchRow r = BenchRow.target(who, name + " / straight-line reference", ratio, "x", ENGINE_VS_REFERENCE, false, "0.5 x");
-                    if (Boolean.FALSE.equals(r.met())) {
-                        r = r.withNote(String.format(java.util.Locale.ROOT,
-                                "settle alone %.2f x (gate dispatch); %.0f %% of a cycle outside logic", logic / reference, 100 * Math.max(0, outside)));
-                    }
-                    rows.add(r);
-                } else {
-                    rows.add(BenchRow.info(who, name + " / straight-line reference", ratio, "x"));
-                }
+                rows.add(BenchRow.info(who, name + " / straight-line reference", ratio, "x"));
             }
         }
     }
