@@ -125,13 +125,13 @@ public final class Measure {
 
     /** Measuring rounds; the best counts, so a round slowed by other work on the machine does not. */
     static final int ROUNDS = 5;
-    static final long WARM_SETTLES = 12_000;
+    static final long WARM_SETTLES = 30_000;
     static final double WARM_LIMIT_SECONDS = 30;
 
     /**
      * Warms up, then measures: {@code round} does work for the given seconds and says how much.
      * Warm-up runs until the JIT has had its chance: at least {@code minSettles} settles
-     * ({@code settlesPerUnit} per unit of work) and two rounds in a row no faster than the best
+     * ({@code settlesPerUnit} per unit of work) and three rounds in a row no faster than the best
      * so far, within {@code limit} seconds. The generated code needs {@value #WARM_SETTLES}
      * settles: each of its methods runs once per settle, and the JIT compiles a method only
      * after thousands of calls. Then the best of {@value #ROUNDS} rounds.
@@ -151,7 +151,7 @@ public final class Measure {
             } else {
                 stale++;
             }
-        } while ((settles < minSettles || stale < 2) && (System.nanoTime() - t0) * 1e-9 < limit);
+        } while ((settles < minSettles || stale < 3) && (System.nanoTime() - t0) * 1e-9 < limit);
         Speed top = null;
         for (int i = 0; i < ROUNDS; i++) {
             Speed s = round.apply(slice);
