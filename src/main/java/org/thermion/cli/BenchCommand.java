@@ -124,17 +124,17 @@ final class BenchCommand implements Callable<Integer> {
     }
 
     private static void printJson(PrintWriter out, List<BenchRow> rows) {
-        StringBuilder b = new StringBuilder("{\n  \"defaultEngine\": ").append(quote(BenchSuite.DEFAULT_ENGINE.word()))
+        StringBuilder b = new StringBuilder("{\n  \"defaultEngine\": ").append(ReportJson.quote(BenchSuite.DEFAULT_ENGINE.word()))
                 .append(",\n  \"rows\": [\n");
         for (int i = 0; i < rows.size(); i++) {
             BenchRow r = rows.get(i);
-            b.append("    {\"machine\": ").append(quote(r.machine()))
-                    .append(", \"measure\": ").append(quote(r.measure()))
+            b.append("    {\"machine\": ").append(ReportJson.quote(r.machine()))
+                    .append(", \"measure\": ").append(ReportJson.quote(r.measure()))
                     .append(", \"value\": ").append(Double.isNaN(r.value()) ? "null" : number(r.value()))
-                    .append(", \"unit\": ").append(quote(r.unit()))
-                    .append(", \"target\": ").append(r.target() == null ? "null" : quote(r.target()))
+                    .append(", \"unit\": ").append(ReportJson.quote(r.unit()))
+                    .append(", \"target\": ").append(r.target() == null ? "null" : ReportJson.quote(r.target()))
                     .append(", \"met\": ").append(r.met() == null ? "null" : r.met().toString())
-                    .append(", \"note\": ").append(quote(r.note())).append('}')
+                    .append(", \"note\": ").append(ReportJson.quote(r.note())).append('}')
                     .append(i + 1 < rows.size() ? ",\n" : "\n");
         }
         b.append("  ]\n}");
@@ -147,24 +147,5 @@ final class BenchCommand implements Callable<Integer> {
             return String.valueOf((long) v);
         }
         return new java.math.BigDecimal(v).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString();
-    }
-
-    static String quote(String s) {
-        StringBuilder b = new StringBuilder("\"");
-        for (char c : s.toCharArray()) {
-            switch (c) {
-                case '"' -> b.append("\\\"");
-                case '\\' -> b.append("\\\\");
-                case '\n' -> b.append("\\n");
-                default -> {
-                    if (c < 0x20) {
-                        b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
-                    } else {
-                        b.append(c);
-                    }
-                }
-            }
-        }
-        return b.append('"').toString();
     }
 }
