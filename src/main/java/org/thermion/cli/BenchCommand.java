@@ -19,9 +19,9 @@ import java.util.concurrent.Callable;
 
 /** {@code bench}: speed and scale of elaboration and simulation, against their targets. */
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = {"Measure elaboration time, heap per stage instance and simulation speed of each engine",
-                "on the demo and on synthetic machines, beside the straight-line reference; each figure",
-                "is shown against its target. One run, with warm-up; takes a minute or two (--quick: seconds)."})
+        description = "Measure elaboration time, heap per stage instance and simulation speed of each engine"
+                + " on the demo and on synthetic machines, beside the straight-line reference; each figure"
+                + " is shown against its target. One run, with warm-up; takes a minute or two (--quick: seconds).")
 final class BenchCommand implements Callable<Integer> {
     @Option(names = "--sizes", split = ",", paramLabel = "N",
             description = "Synthetic machine sizes in stage instances (default: 1000,10000,100000).")

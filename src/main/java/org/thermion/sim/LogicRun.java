@@ -72,8 +72,6 @@ public final class LogicRun {
             vcd.begin(sim, vcdDate, version);
         }
         List<Latch> latches = machine.netlist().latches();
-        long[] before = new long[(latches.size() + 63) / 64 * 2 + 1];
-        long[] after = new long[before.length];
         List<UnknownReport> unknowns = new ArrayList<>();
         List<Port> outputs = machine.outputs();
         boolean[] outputKnown = new boolean[outputs.size()];
@@ -97,7 +95,8 @@ public final class LogicRun {
             if (c > 0 && cursor != null && cursor.advance(c, in)) {
                 applyInputs(in);
             }
-            snapshot(latches, before);
+            sim.clearLatchChanges();
+            long pcUnknownBefore = sim.pcUnknown() & 1L;
             int pcStart = sim.pc(0);
             for (int p = 1; p <= sim.phases(); p++) {
                 sim.stepPhase();
@@ -145,8 +144,9 @@ public final class LogicRun {
                 stop = "program counter unknown after cycle " + c;
                 break;
             }
-            snapshot(latches, after);
-            if (sim.pc(0) == pcStart && Arrays.equals(before, after) && (cursor == null || !cursor.pending())) {
+            // Each latch loads once a cycle, so no change during the cycle means the same state after it.
+            boolean still = (sim.latchChanges() & 1L) == 0 && (sim.pcUnknown() & 1L) == pcUnknownBefore;
+            if (sim.pc(0) == pcStart && still && (cursor == null || !cursor.pending())) {
                 stop = (machine.pc() == null ? "fixed point" : "fixed point at address " + pcStart)
                         + ": the machine repeats cycle " + c
                         + " unchanged from here on";
@@ -206,15 +206,4 @@ public final class LogicRun {
         }
     }
 
-    /** Lane 0 of every latch (value and unknown) and of the PC's unknown flag, packed into words. */
-    private void snapshot(List<Latch> latches, long[] into) {
-        Arrays.fill(into, 0L);
-        int half = (latches.size() + 63) / 64;
-        for (int i = 0; i < latches.size(); i++) {
-            int n = latches.get(i).output();
-            into[i >>> 6] |= (sim.value(n) & 1L) << (i & 63);
-            into[half + (i >>> 6)] |= (sim.unknown(n) & 1L) << (i & 63);
-        }
-        into[into.length - 1] = sim.pcUnknown() & 1L;
-    }
 }

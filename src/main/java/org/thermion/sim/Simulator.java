@@ -105,6 +105,7 @@ public final class Simulator {
     private boolean threeValued;
     private long cycle;
     private int nextPhase;
+    private long latchChanges;
     private long evaluations;
 
     /**
@@ -559,18 +560,32 @@ public final class Simulator {
         if (hasPc && pcPhase == nextPhase) {
             loadPc();
         }
+        long changed = 0L;
         for (int i = 0; i < n; i++) {
+            changed |= v[q[i]] ^ stageV[i];
             v[q[i]] = stageV[i];
         }
         if (threeValued) {
             for (int i = 0; i < n; i++) {
+                changed |= x[q[i]] ^ stageX[i];
                 x[q[i]] = stageX[i];
             }
         }
+        latchChanges |= changed;
         nextPhase = nextPhase % phases + 1;
         if (nextPhase == 1) {
             cycle++;
         }
+    }
+
+    /** Lanes in which some latch changed its stored value since the last {@link #clearLatchChanges()}. */
+    public long latchChanges() {
+        return latchChanges;
+    }
+
+    /** Starts a new watch for latch changes (a fixed point is a cycle without any). */
+    public void clearLatchChanges() {
+        latchChanges = 0L;
     }
 
     /** Runs phases until the current cycle is complete. */
