@@ -118,6 +118,26 @@ final class Parts {
         return i;
     }
 
+    /**
+     * A rail a stage draws from. A library stage naming a rail the machine lacks is reported
+     * where the machine uses the stage, since that is the line the user can change.
+     */
+    private final java.util.Set<String> missingRails = new java.util.HashSet<>();
+
+    private int stageRail(String rail, Span at, String stage, Prop decl, Span use) {
+        if (railIndex.containsKey(rail) || !decl.span().file().equals(SourceLoader.LIBRARY) || use == null
+                || !use.isKnown()) {
+            return rail(rail, at);
+        }
+        if (!missingRails.add(stage + " " + rail)) {
+            return -1;
+        }
+        diags.error(use, "library stage '" + stage + "' draws from rail '" + rail + "', which this machine does not declare",
+                "declare `rail " + rail + " { voltage ... }` (library stages expect rails bplus, bias and relay), "
+                        + "or declare a stage of your own");
+        return -1;
+    }
+
     int tube(String name, Span at) {
         Integer i = tubeIndex.get(name);
         if (i != null) {
@@ -213,7 +233,7 @@ final class Parts {
                     Declarations.hintFor(name, new ArrayList<>(decls.stages.keySet()), "declare it with `stage " + name + " : FUNCTION { ... }`"));
             return -1;
         }
-        StageType s = buildStage(name, p);
+        StageType s = buildStage(name, p, at);
         if (s == null) {
             stageIndex.put(name, -1);
             return -1;
@@ -227,7 +247,7 @@ final class Parts {
         return decls.stages.containsKey(name);
     }
 
-    private StageType buildStage(String name, Prop p) {
+    private StageType buildStage(String name, Prop p, Span use) {
         PropReader head = new PropReader(p, diags);
         head.word("stage name");
         head.expectSym(":");
@@ -272,7 +292,7 @@ final class Parts {
                     r.expectWord("from");
                     String rail = r.word("a rail name");
                     if (rail != null) {
-                        loadRail = rail(rail, r.lastSpan());
+                        loadRail = stageRail(rail, r.lastSpan(), name, p, use);
                     }
                 }
                 case "draw" -> {
@@ -284,7 +304,7 @@ final class Parts {
                     if (state == null || rail == null || Double.isNaN(a)) {
                         break;
                     }
-                    int ri = rail(rail, rs);
+                    int ri = stageRail(rail, rs, name, p, use);
                     List<RailDraw> into = switch (state) {
                         case "low" -> low;
                         case "high" -> high;
