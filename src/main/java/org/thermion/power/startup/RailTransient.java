@@ -5,7 +5,7 @@ package org.thermion.power.startup;
  *
  * @param rail            rail index in the machine
  * @param name            rail name
- * @param volts           the rail's nominal voltage (magnitude)
+ * @param volts           the rail's nominal voltage, signed as declared
  * @param limitAmps       its current limit (infinite when none)
  * @param t               sample times (a bypass shows as two samples at the same time)
  * @param amps            rail current at each sample

@@ -462,7 +462,7 @@ final class TransientRun {
             for (StartupNetwork.Soft s : net.softs) {
                 load |= s.thyratron() && s.fromRail() == r;
             }
-            rails.add(new RailTransient(r, rail.name(), Math.abs(rail.volts()), rail.limitAmps(), t, a, v, peakOn[r],
+            rails.add(new RailTransient(r, rail.name(), rail.volts(), rail.limitAmps(), t, a, v, peakOn[r],
                     peakOnTime[r], peakBy[r], peakByTime[r], bt, peakDemand[r], inLimit[r], railAmps[r],
                     railHasSoft(r), load));
         }
