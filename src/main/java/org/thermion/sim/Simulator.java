@@ -88,7 +88,8 @@ public final class Simulator {
     // The PC as bit planes: bit i of pcPlanes[b] is bit b of lane i's PC, so a load is a few word
     // operations per PC bit whatever the lanes do.
     private final long[] pcPlanes;
-    private final int[] laneAddress = new int[LANES];
+    // Scratch for the per-lane ROM read: 64 rows of a bit matrix.
+    private final long[] laneMatrix = new long[LANES];
     private long pcUnknown;
     private boolean pcUniform;
 
@@ -652,25 +653,23 @@ public final class Simulator {
                 romX[b] = 0L;
             }
         } else {
-            Arrays.fill(romV, 0L);
-            // Addresses per lane from the PC planes, visiting only their one bits.
-            int[] addr = laneAddress;
-            Arrays.fill(addr, 0);
-            for (int b = 0; b < pcPlanes.length; b++) {
-                for (long p = pcPlanes[b]; p != 0; p &= p - 1) {
-                    addr[Long.numberOfTrailingZeros(p)] |= 1 << b;
-                }
-            }
+            // PC planes to one address per lane, a ROM read per lane, the words back to bit planes:
+            // two 64 x 64 bit transposes instead of loops over single bits.
+            long[] m = laneMatrix;
+            int pw = pcPlanes.length;
+            System.arraycopy(pcPlanes, 0, m, 0, pw);
+            BitMatrix.transposeFromRows(m, pw);
+            long[] rw = romWords;
+            int words = rw.length;
             for (int lane = 0; lane < LANES; lane++) {
-                long bit = 1L << lane;
-                // Visit only the word's one bits.
-                for (long word = romWord(addr[lane]); word != 0; word &= word - 1) {
-                    romV[Long.numberOfTrailingZeros(word)] |= bit;
-                }
+                long a = m[lane];
+                m[lane] = a < words ? rw[(int) a] : 0L;
             }
+            BitMatrix.transposeToRows(m, Math.min(w, LANES));
+            long known = ~pcUnknown;
             for (int b = 0; b < w; b++) {
                 romX[b] = pcUnknown;
-                romV[b] &= ~pcUnknown;
+                romV[b] = b < LANES ? m[b] & known : 0L;
             }
         }
         romDirty = false;
