@@ -102,6 +102,8 @@ public final class Simulator {
     private long[] forced;
     private boolean romDirty;
 
+    // The two-valued gates regrouped into runs of one shape.
+    private final GateProgram program;
     private final Settle compiled;
     private boolean threeValued;
     private long cycle;
@@ -167,6 +169,8 @@ public final class Simulator {
             in3[i] = ins.length > 3 ? ins[3] : Netlist.CONST0;
             op[i] = opcode(g, ins.length);
         }
+
+        program = new GateProgram(nl);
 
         int maxPerPhase = 0;
         List<List<Latch>> byPhase = new ArrayList<>();
@@ -344,91 +348,125 @@ public final class Simulator {
         evaluations += gateCount;
     }
 
+    // Two-valued settle: one tight loop per run of gates of one shape (see GateProgram).
     private void settle2() {
         final long[] v = val;
-        final int[] op = this.op;
-        final int[] a = in0;
-        final int[] b = in1;
-        final int[] c = in2;
-        final int[] d = in3;
-        final int[] o = out;
-        for (int g = 0, n = gateCount; g < n; g++) {
-            long r;
-            switch (op[g]) {
-                case OP_BUF:
-                    r = v[a[g]];
-                    break;
-                case OP_NOT:
-                    r = ~v[a[g]];
-                    break;
-                case OP_AND2:
-                    r = v[a[g]] & v[b[g]];
-                    break;
-                case OP_OR2:
-                    r = v[a[g]] | v[b[g]];
-                    break;
-                case OP_NAND2:
-                    r = ~(v[a[g]] & v[b[g]]);
-                    break;
-                case OP_NOR2:
-                    r = ~(v[a[g]] | v[b[g]]);
-                    break;
-                case OP_XOR2:
-                    r = v[a[g]] ^ v[b[g]];
-                    break;
-                case OP_AND3:
-                    r = v[a[g]] & v[b[g]] & v[c[g]];
-                    break;
-                case OP_OR3:
-                    r = v[a[g]] | v[b[g]] | v[c[g]];
-                    break;
-                case OP_AND4:
-                    r = v[a[g]] & v[b[g]] & v[c[g]] & v[d[g]];
-                    break;
-                case OP_OR4:
-                    r = v[a[g]] | v[b[g]] | v[c[g]] | v[d[g]];
-                    break;
-                case OP_AND:
-                    r = andList(v, g);
-                    break;
-                case OP_OR:
-                    r = orList(v, g);
-                    break;
-                case OP_NAND:
-                    r = ~andList(v, g);
-                    break;
-                case OP_NOR:
-                    r = ~orList(v, g);
-                    break;
-                case OP_XOR: {
-                    r = 0;
-                    for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
-                        r ^= v[list[k]];
+        final int[] c = program.code;
+        final int[] shape = program.runShape;
+        final int[] start = program.runStart;
+        for (int r = 0, runs = shape.length; r < runs; r++) {
+            int p = start[r];
+            final int e = start[r + 1];
+            switch (shape[r]) {
+                case GateProgram.BUF:
+                    for (; p < e; p += 2) {
+                        v[c[p]] = v[c[p + 1]];
                     }
                     break;
-                }
+                case GateProgram.NOT:
+                    for (; p < e; p += 2) {
+                        v[c[p]] = ~v[c[p + 1]];
+                    }
+                    break;
+                case GateProgram.AND2:
+                    for (; p < e; p += 3) {
+                        v[c[p]] = v[c[p + 1]] & v[c[p + 2]];
+                    }
+                    break;
+                case GateProgram.OR2:
+                    for (; p < e; p += 3) {
+                        v[c[p]] = v[c[p + 1]] | v[c[p + 2]];
+                    }
+                    break;
+                case GateProgram.NAND2:
+                    for (; p < e; p += 3) {
+                        v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]]);
+                    }
+                    break;
+                case GateProgram.NOR2:
+                    for (; p < e; p += 3) {
+                        v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]]);
+                    }
+                    break;
+                case GateProgram.XOR2:
+                    for (; p < e; p += 3) {
+                        v[c[p]] = v[c[p + 1]] ^ v[c[p + 2]];
+                    }
+                    break;
+                case GateProgram.AND3:
+                    for (; p < e; p += 4) {
+                        v[c[p]] = v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]];
+                    }
+                    break;
+                case GateProgram.OR3:
+                    for (; p < e; p += 4) {
+                        v[c[p]] = v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]];
+                    }
+                    break;
+                case GateProgram.NAND3:
+                    for (; p < e; p += 4) {
+                        v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]]);
+                    }
+                    break;
+                case GateProgram.NOR3:
+                    for (; p < e; p += 4) {
+                        v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]]);
+                    }
+                    break;
+                case GateProgram.AND4:
+                    for (; p < e; p += 5) {
+                        v[c[p]] = v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]] & v[c[p + 4]];
+                    }
+                    break;
+                case GateProgram.OR4:
+                    for (; p < e; p += 5) {
+                        v[c[p]] = v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]] | v[c[p + 4]];
+                    }
+                    break;
+                case GateProgram.NAND4:
+                    for (; p < e; p += 5) {
+                        v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]] & v[c[p + 4]]);
+                    }
+                    break;
+                case GateProgram.NOR4:
+                    for (; p < e; p += 5) {
+                        v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]] | v[c[p + 4]]);
+                    }
+                    break;
                 default:
-                    r = 0;
+                    listRun(v, c, shape[r], p, e);
                     break;
             }
-            v[o[g]] = r;
         }
     }
 
-    private long andList(long[] v, int g) {
-        long r = -1L;
-        for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
-            r &= v[list[k]];
+    // A run of list-shaped gates: output, operand count, operands.
+    private static void listRun(long[] v, int[] c, int shape, int p, int e) {
+        while (p < e) {
+            int o = c[p];
+            int k = p + 2;
+            int end = k + c[p + 1];
+            long r;
+            if (shape == GateProgram.AND_N || shape == GateProgram.NAND_N) {
+                r = -1L;
+                for (; k < end; k++) {
+                    r &= v[c[k]];
+                }
+            } else {
+                r = 0L;
+                if (shape == GateProgram.XOR_N) {
+                    for (; k < end; k++) {
+                        r ^= v[c[k]];
+                    }
+                } else {
+                    for (; k < end; k++) {
+                        r |= v[c[k]];
+                    }
+                }
+            }
+            v[o] = shape == GateProgram.NAND_N || shape == GateProgram.NOR_N ? ~r : r;
+            p = end;
         }
-        return r;
-    }
-
-    private long orList(long[] v, int g) {
-        long r = 0L;
-        for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
-            r |= v[list[k]];
-        }
-        return r;
     }
 
     // Three-valued settle. Invariant: val has 0 wherever unk has 1, so "known 1" is just val.
