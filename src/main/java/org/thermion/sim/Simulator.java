@@ -348,7 +348,8 @@ public final class Simulator {
         evaluations += gateCount;
     }
 
-    // Two-valued settle: one tight loop per run of gates of one shape (see GateProgram).
+    // Two-valued settle: one tight loop per run of gates of one shape (see GateProgram), each
+    // loop a small method of its own so the JIT optimises it alone.
     private void settle2() {
         final long[] v = val;
         final int[] c = program.code;
@@ -356,87 +357,115 @@ public final class Simulator {
         final int[] start = program.runStart;
         for (int r = 0, runs = shape.length; r < runs; r++) {
             int p = start[r];
-            final int e = start[r + 1];
+            int e = start[r + 1];
             switch (shape[r]) {
-                case GateProgram.BUF:
-                    for (; p < e; p += 2) {
-                        v[c[p]] = v[c[p + 1]];
-                    }
-                    break;
-                case GateProgram.NOT:
-                    for (; p < e; p += 2) {
-                        v[c[p]] = ~v[c[p + 1]];
-                    }
-                    break;
-                case GateProgram.AND2:
-                    for (; p < e; p += 3) {
-                        v[c[p]] = v[c[p + 1]] & v[c[p + 2]];
-                    }
-                    break;
-                case GateProgram.OR2:
-                    for (; p < e; p += 3) {
-                        v[c[p]] = v[c[p + 1]] | v[c[p + 2]];
-                    }
-                    break;
-                case GateProgram.NAND2:
-                    for (; p < e; p += 3) {
-                        v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]]);
-                    }
-                    break;
-                case GateProgram.NOR2:
-                    for (; p < e; p += 3) {
-                        v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]]);
-                    }
-                    break;
-                case GateProgram.XOR2:
-                    for (; p < e; p += 3) {
-                        v[c[p]] = v[c[p + 1]] ^ v[c[p + 2]];
-                    }
-                    break;
-                case GateProgram.AND3:
-                    for (; p < e; p += 4) {
-                        v[c[p]] = v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]];
-                    }
-                    break;
-                case GateProgram.OR3:
-                    for (; p < e; p += 4) {
-                        v[c[p]] = v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]];
-                    }
-                    break;
-                case GateProgram.NAND3:
-                    for (; p < e; p += 4) {
-                        v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]]);
-                    }
-                    break;
-                case GateProgram.NOR3:
-                    for (; p < e; p += 4) {
-                        v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]]);
-                    }
-                    break;
-                case GateProgram.AND4:
-                    for (; p < e; p += 5) {
-                        v[c[p]] = v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]] & v[c[p + 4]];
-                    }
-                    break;
-                case GateProgram.OR4:
-                    for (; p < e; p += 5) {
-                        v[c[p]] = v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]] | v[c[p + 4]];
-                    }
-                    break;
-                case GateProgram.NAND4:
-                    for (; p < e; p += 5) {
-                        v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]] & v[c[p + 4]]);
-                    }
-                    break;
-                case GateProgram.NOR4:
-                    for (; p < e; p += 5) {
-                        v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]] | v[c[p + 4]]);
-                    }
-                    break;
-                default:
-                    listRun(v, c, shape[r], p, e);
-                    break;
+                case GateProgram.BUF -> runBuf(v, c, p, e);
+                case GateProgram.NOT -> runNot(v, c, p, e);
+                case GateProgram.AND2 -> runAnd2(v, c, p, e);
+                case GateProgram.OR2 -> runOr2(v, c, p, e);
+                case GateProgram.NAND2 -> runNand2(v, c, p, e);
+                case GateProgram.NOR2 -> runNor2(v, c, p, e);
+                case GateProgram.XOR2 -> runXor2(v, c, p, e);
+                case GateProgram.AND3 -> runAnd3(v, c, p, e);
+                case GateProgram.OR3 -> runOr3(v, c, p, e);
+                case GateProgram.NAND3 -> runNand3(v, c, p, e);
+                case GateProgram.NOR3 -> runNor3(v, c, p, e);
+                case GateProgram.AND4 -> runAnd4(v, c, p, e);
+                case GateProgram.OR4 -> runOr4(v, c, p, e);
+                case GateProgram.NAND4 -> runNand4(v, c, p, e);
+                case GateProgram.NOR4 -> runNor4(v, c, p, e);
+                default -> listRun(v, c, shape[r], p, e);
             }
+        }
+    }
+
+    private static void runBuf(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 2) {
+            v[c[p]] = v[c[p + 1]];
+        }
+    }
+
+    private static void runNot(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 2) {
+            v[c[p]] = ~v[c[p + 1]];
+        }
+    }
+
+    private static void runAnd2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = v[c[p + 1]] & v[c[p + 2]];
+        }
+    }
+
+    private static void runOr2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = v[c[p + 1]] | v[c[p + 2]];
+        }
+    }
+
+    private static void runNand2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]]);
+        }
+    }
+
+    private static void runNor2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]]);
+        }
+    }
+
+    private static void runXor2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = v[c[p + 1]] ^ v[c[p + 2]];
+        }
+    }
+
+    private static void runAnd3(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 4) {
+            v[c[p]] = v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]];
+        }
+    }
+
+    private static void runOr3(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 4) {
+            v[c[p]] = v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]];
+        }
+    }
+
+    private static void runNand3(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 4) {
+            v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]]);
+        }
+    }
+
+    private static void runNor3(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 4) {
+            v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]]);
+        }
+    }
+
+    private static void runAnd4(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 5) {
+            v[c[p]] = v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]] & v[c[p + 4]];
+        }
+    }
+
+    private static void runOr4(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 5) {
+            v[c[p]] = v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]] | v[c[p + 4]];
+        }
+    }
+
+    private static void runNand4(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 5) {
+            v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]] & v[c[p + 4]]);
+        }
+    }
+
+    private static void runNor4(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 5) {
+            v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]] | v[c[p + 4]]);
         }
     }
 
