@@ -16,9 +16,10 @@ import java.util.SplittableRandom;
 /**
  * Cycle-level simulator of an elaborated machine over 64 independent lanes.
  *
- * <p>The netlist is compiled once into flat arrays (an opcode, operand net indices and an
- * output net index per gate) and evaluated in the gates' levelized order over {@code long}
- * words, bit {@code i} of every word belonging to lane {@code i}. Each clock phase settles the
+ * <p>The netlist is compiled once into flat arrays and evaluated over {@code long} words, bit
+ * {@code i} of every word belonging to lane {@code i}: two-valued settles run a
+ * {@link GateProgram} (runs of gates of one shape, one tight loop each), three-valued settles
+ * an opcode per gate in the gates' levelized order. Each clock phase settles the
  * logic, then loads that phase's latches (honouring their enables) and, on its phase, the
  * off-board program counter. The off-board ROM drives its data nets from ROM[PC] per lane.
  *
@@ -58,13 +59,11 @@ public final class Simulator {
     private final long[] val;
     private final long[] unk;
 
-    // Compiled gates.
+    // Compiled gates in the netlist's order, for the three-valued settle.
     private final int gateCount;
     private final int[] op;
     private final int[] in0;
     private final int[] in1;
-    private final int[] in2;
-    private final int[] in3;
     private final int[] listStart;
     private final int[] listEnd;
     private final int[] list;
@@ -143,8 +142,6 @@ public final class Simulator {
         op = new int[gateCount];
         in0 = new int[gateCount];
         in1 = new int[gateCount];
-        in2 = new int[gateCount];
-        in3 = new int[gateCount];
         listStart = new int[gateCount];
         listEnd = new int[gateCount];
         out = new int[gateCount];
@@ -165,8 +162,6 @@ public final class Simulator {
             listEnd[i] = at;
             in0[i] = ins.length > 0 ? ins[0] : Netlist.CONST0;
             in1[i] = ins.length > 1 ? ins[1] : Netlist.CONST0;
-            in2[i] = ins.length > 2 ? ins[2] : Netlist.CONST0;
-            in3[i] = ins.length > 3 ? ins[3] : Netlist.CONST0;
             op[i] = opcode(g, ins.length);
         }
 
