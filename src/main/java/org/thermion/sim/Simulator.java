@@ -16,9 +16,10 @@ import java.util.SplittableRandom;
 /**
  * Cycle-level simulator of an elaborated machine over 64 independent lanes.
  *
- * <p>The netlist is compiled once into flat arrays (an opcode, operand net indices and an
- * output net index per gate) and evaluated in the gates' levelized order over {@code long}
- * words, bit {@code i} of every word belonging to lane {@code i}. Each clock phase settles the
+ * <p>The netlist is compiled once into flat arrays and evaluated over {@code long} words, bit
+ * {@code i} of every word belonging to lane {@code i}: two-valued settles run a
+ * {@link GateProgram} (runs of gates of one shape, one tight loop each), three-valued settles
+ * an opcode per gate in the gates' levelized order. Each clock phase settles the
  * logic, then loads that phase's latches (honouring their enables) and, on its phase, the
  * off-board program counter. The off-board ROM drives its data nets from ROM[PC] per lane.
  *
@@ -58,13 +59,11 @@ public final class Simulator {
     private final long[] val;
     private final long[] unk;
 
-    // Compiled gates.
+    // Compiled gates in the netlist's order, for the three-valued settle.
     private final int gateCount;
     private final int[] op;
     private final int[] in0;
     private final int[] in1;
-    private final int[] in2;
-    private final int[] in3;
     private final int[] listStart;
     private final int[] listEnd;
     private final int[] list;
@@ -88,7 +87,8 @@ public final class Simulator {
     // The PC as bit planes: bit i of pcPlanes[b] is bit b of lane i's PC, so a load is a few word
     // operations per PC bit whatever the lanes do.
     private final long[] pcPlanes;
-    private final int[] laneAddress = new int[LANES];
+    // Scratch for the per-lane ROM read: 64 rows of a bit matrix.
+    private final long[] laneMatrix = new long[LANES];
     private long pcUnknown;
     private boolean pcUniform;
 
@@ -101,6 +101,8 @@ public final class Simulator {
     private long[] forced;
     private boolean romDirty;
 
+    // The two-valued gates regrouped into runs of one shape.
+    private final GateProgram program;
     private final Settle compiled;
     private boolean threeValued;
     private long cycle;
@@ -140,8 +142,6 @@ public final class Simulator {
         op = new int[gateCount];
         in0 = new int[gateCount];
         in1 = new int[gateCount];
-        in2 = new int[gateCount];
-        in3 = new int[gateCount];
         listStart = new int[gateCount];
         listEnd = new int[gateCount];
         out = new int[gateCount];
@@ -162,10 +162,10 @@ public final class Simulator {
             listEnd[i] = at;
             in0[i] = ins.length > 0 ? ins[0] : Netlist.CONST0;
             in1[i] = ins.length > 1 ? ins[1] : Netlist.CONST0;
-            in2[i] = ins.length > 2 ? ins[2] : Netlist.CONST0;
-            in3[i] = ins.length > 3 ? ins[3] : Netlist.CONST0;
             op[i] = opcode(g, ins.length);
         }
+
+        program = new GateProgram(nl);
 
         int maxPerPhase = 0;
         List<List<Latch>> byPhase = new ArrayList<>();
@@ -343,91 +343,154 @@ public final class Simulator {
         evaluations += gateCount;
     }
 
+    // Two-valued settle: one tight loop per run of gates of one shape (see GateProgram), each
+    // loop a small method of its own so the JIT optimises it alone.
     private void settle2() {
         final long[] v = val;
-        final int[] op = this.op;
-        final int[] a = in0;
-        final int[] b = in1;
-        final int[] c = in2;
-        final int[] d = in3;
-        final int[] o = out;
-        for (int g = 0, n = gateCount; g < n; g++) {
-            long r;
-            switch (op[g]) {
-                case OP_BUF:
-                    r = v[a[g]];
-                    break;
-                case OP_NOT:
-                    r = ~v[a[g]];
-                    break;
-                case OP_AND2:
-                    r = v[a[g]] & v[b[g]];
-                    break;
-                case OP_OR2:
-                    r = v[a[g]] | v[b[g]];
-                    break;
-                case OP_NAND2:
-                    r = ~(v[a[g]] & v[b[g]]);
-                    break;
-                case OP_NOR2:
-                    r = ~(v[a[g]] | v[b[g]]);
-                    break;
-                case OP_XOR2:
-                    r = v[a[g]] ^ v[b[g]];
-                    break;
-                case OP_AND3:
-                    r = v[a[g]] & v[b[g]] & v[c[g]];
-                    break;
-                case OP_OR3:
-                    r = v[a[g]] | v[b[g]] | v[c[g]];
-                    break;
-                case OP_AND4:
-                    r = v[a[g]] & v[b[g]] & v[c[g]] & v[d[g]];
-                    break;
-                case OP_OR4:
-                    r = v[a[g]] | v[b[g]] | v[c[g]] | v[d[g]];
-                    break;
-                case OP_AND:
-                    r = andList(v, g);
-                    break;
-                case OP_OR:
-                    r = orList(v, g);
-                    break;
-                case OP_NAND:
-                    r = ~andList(v, g);
-                    break;
-                case OP_NOR:
-                    r = ~orList(v, g);
-                    break;
-                case OP_XOR: {
-                    r = 0;
-                    for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
-                        r ^= v[list[k]];
-                    }
-                    break;
-                }
-                default:
-                    r = 0;
-                    break;
+        final int[] c = program.code;
+        final int[] shape = program.runShape;
+        final int[] start = program.runStart;
+        for (int r = 0, runs = shape.length; r < runs; r++) {
+            int p = start[r];
+            int e = start[r + 1];
+            switch (shape[r]) {
+                case GateProgram.BUF -> runBuf(v, c, p, e);
+                case GateProgram.NOT -> runNot(v, c, p, e);
+                case GateProgram.AND2 -> runAnd2(v, c, p, e);
+                case GateProgram.OR2 -> runOr2(v, c, p, e);
+                case GateProgram.NAND2 -> runNand2(v, c, p, e);
+                case GateProgram.NOR2 -> runNor2(v, c, p, e);
+                case GateProgram.XOR2 -> runXor2(v, c, p, e);
+                case GateProgram.AND3 -> runAnd3(v, c, p, e);
+                case GateProgram.OR3 -> runOr3(v, c, p, e);
+                case GateProgram.NAND3 -> runNand3(v, c, p, e);
+                case GateProgram.NOR3 -> runNor3(v, c, p, e);
+                case GateProgram.AND4 -> runAnd4(v, c, p, e);
+                case GateProgram.OR4 -> runOr4(v, c, p, e);
+                case GateProgram.NAND4 -> runNand4(v, c, p, e);
+                case GateProgram.NOR4 -> runNor4(v, c, p, e);
+                default -> listRun(v, c, shape[r], p, e);
             }
-            v[o[g]] = r;
         }
     }
 
-    private long andList(long[] v, int g) {
-        long r = -1L;
-        for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
-            r &= v[list[k]];
+    private static void runBuf(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 2) {
+            v[c[p]] = v[c[p + 1]];
         }
-        return r;
     }
 
-    private long orList(long[] v, int g) {
-        long r = 0L;
-        for (int k = listStart[g], e = listEnd[g]; k < e; k++) {
-            r |= v[list[k]];
+    private static void runNot(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 2) {
+            v[c[p]] = ~v[c[p + 1]];
         }
-        return r;
+    }
+
+    private static void runAnd2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = v[c[p + 1]] & v[c[p + 2]];
+        }
+    }
+
+    private static void runOr2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = v[c[p + 1]] | v[c[p + 2]];
+        }
+    }
+
+    private static void runNand2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]]);
+        }
+    }
+
+    private static void runNor2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]]);
+        }
+    }
+
+    private static void runXor2(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 3) {
+            v[c[p]] = v[c[p + 1]] ^ v[c[p + 2]];
+        }
+    }
+
+    private static void runAnd3(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 4) {
+            v[c[p]] = v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]];
+        }
+    }
+
+    private static void runOr3(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 4) {
+            v[c[p]] = v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]];
+        }
+    }
+
+    private static void runNand3(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 4) {
+            v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]]);
+        }
+    }
+
+    private static void runNor3(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 4) {
+            v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]]);
+        }
+    }
+
+    private static void runAnd4(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 5) {
+            v[c[p]] = v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]] & v[c[p + 4]];
+        }
+    }
+
+    private static void runOr4(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 5) {
+            v[c[p]] = v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]] | v[c[p + 4]];
+        }
+    }
+
+    private static void runNand4(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 5) {
+            v[c[p]] = ~(v[c[p + 1]] & v[c[p + 2]] & v[c[p + 3]] & v[c[p + 4]]);
+        }
+    }
+
+    private static void runNor4(long[] v, int[] c, int p, int e) {
+        for (; p < e; p += 5) {
+            v[c[p]] = ~(v[c[p + 1]] | v[c[p + 2]] | v[c[p + 3]] | v[c[p + 4]]);
+        }
+    }
+
+    // A run of list-shaped gates: output, operand count, operands.
+    private static void listRun(long[] v, int[] c, int shape, int p, int e) {
+        while (p < e) {
+            int o = c[p];
+            int k = p + 2;
+            int end = k + c[p + 1];
+            long r;
+            if (shape == GateProgram.AND_N || shape == GateProgram.NAND_N) {
+                r = -1L;
+                for (; k < end; k++) {
+                    r &= v[c[k]];
+                }
+            } else {
+                r = 0L;
+                if (shape == GateProgram.XOR_N) {
+                    for (; k < end; k++) {
+                        r ^= v[c[k]];
+                    }
+                } else {
+                    for (; k < end; k++) {
+                        r |= v[c[k]];
+                    }
+                }
+            }
+            v[o] = shape == GateProgram.NAND_N || shape == GateProgram.NOR_N ? ~r : r;
+            p = end;
+        }
     }
 
     // Three-valued settle. Invariant: val has 0 wherever unk has 1, so "known 1" is just val.
@@ -652,25 +715,23 @@ public final class Simulator {
                 romX[b] = 0L;
             }
         } else {
-            Arrays.fill(romV, 0L);
-            // Addresses per lane from the PC planes, visiting only their one bits.
-            int[] addr = laneAddress;
-            Arrays.fill(addr, 0);
-            for (int b = 0; b < pcPlanes.length; b++) {
-                for (long p = pcPlanes[b]; p != 0; p &= p - 1) {
-                    addr[Long.numberOfTrailingZeros(p)] |= 1 << b;
-                }
-            }
+            // PC planes to one address per lane, a ROM read per lane, the words back to bit planes:
+            // two 64 x 64 bit transposes instead of loops over single bits.
+            long[] m = laneMatrix;
+            int pw = pcPlanes.length;
+            System.arraycopy(pcPlanes, 0, m, 0, pw);
+            BitMatrix.transposeFromRows(m, pw);
+            long[] rw = romWords;
+            int words = rw.length;
             for (int lane = 0; lane < LANES; lane++) {
-                long bit = 1L << lane;
-                // Visit only the word's one bits.
-                for (long word = romWord(addr[lane]); word != 0; word &= word - 1) {
-                    romV[Long.numberOfTrailingZeros(word)] |= bit;
-                }
+                long a = m[lane];
+                m[lane] = a < words ? rw[(int) a] : 0L;
             }
+            BitMatrix.transposeToRows(m, Math.min(w, LANES));
+            long known = ~pcUnknown;
             for (int b = 0; b < w; b++) {
                 romX[b] = pcUnknown;
-                romV[b] &= ~pcUnknown;
+                romV[b] = b < LANES ? m[b] & known : 0L;
             }
         }
         romDirty = false;
