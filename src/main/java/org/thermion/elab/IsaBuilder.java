@@ -1,14 +1,12 @@
 package org.thermion.elab;
 
 import org.thermion.lang.Diagnostics;
-import org.thermion.lang.Names;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Decl;
 import org.thermion.lang.ast.IsaOp;
 import org.thermion.lang.ast.Prop;
 import org.thermion.lang.ast.RtExpr;
 import org.thermion.lang.ast.RtStmt;
-import org.thermion.lang.ast.Value;
 import org.thermion.model.AddressedBit;
 import org.thermion.model.Instruction;
 import org.thermion.model.Isa;
@@ -377,13 +375,4 @@ final class IsaBuilder {
         return null;
     }
 
-    @SuppressWarnings("unused")
-    private static String near(String n, List<String> c) {
-        return Names.nearest(n, c);
-    }
-
-    @SuppressWarnings("unused")
-    private static List<String> words(List<Value> v) {
-        return v.stream().map(Value::text).toList();
-    }
 }

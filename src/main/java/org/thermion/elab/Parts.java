@@ -1,7 +1,6 @@
 package org.thermion.elab;
 
 import org.thermion.lang.Diagnostics;
-import org.thermion.lang.Names;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Prop;
 import org.thermion.model.HeaterRating;
@@ -358,8 +357,4 @@ final class Parts {
         return new ArrayList<>(decls.stages.keySet());
     }
 
-    @SuppressWarnings("unused")
-    private String nearest(String n, List<String> c) {
-        return Names.nearest(n, c);
-    }
 }

@@ -2,7 +2,6 @@ package org.thermion.lang;
 
 import org.antlr.v4.runtime.ParserRuleContext;
 import org.antlr.v4.runtime.Token;
-import org.antlr.v4.runtime.tree.TerminalNode;
 import org.thermion.lang.ast.Decl;
 import org.thermion.lang.ast.Expr;
 import org.thermion.lang.ast.Ident;
@@ -314,11 +313,6 @@ final class AstBuilder {
         int len = t.getText() == null ? 1 : Math.max(1, t.getText().length());
         return new Span(file, t.getLine(), t.getCharPositionInLine() + 1, t.getLine(),
                 t.getCharPositionInLine() + 1 + len);
-    }
-
-    @SuppressWarnings("unused")
-    private static String text(TerminalNode n) {
-        return n == null ? null : n.getText();
     }
 
     private static String unquote(String s) {
