@@ -5,14 +5,8 @@ import com.googlecode.lanterna.screen.TerminalScreen;
 import com.googlecode.lanterna.terminal.DefaultTerminalFactory;
 import com.googlecode.lanterna.terminal.Terminal;
 import com.googlecode.lanterna.terminal.ansi.UnixLikeTerminal;
-import org.thermion.asm.Assembler;
-import org.thermion.asm.Assembly;
-import org.thermion.lang.DiagnosticPrinter;
-import org.thermion.lang.Diagnostics;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
-import org.thermion.sim.Stimulus;
-import org.thermion.sim.StimulusReader;
 import org.thermion.tui.DecodeLine;
 import org.thermion.tui.PowerUpView;
 import org.thermion.tui.Session;
@@ -109,23 +103,12 @@ public final class UiCommand implements Callable<Integer> {
             err.flush();
             return null;
         }
-        Diagnostics d = loader.diagnostics();
-        Assembly a = Assembler.assemble(m, programFile, d);
-        if (a == null || d.hasErrors()) {
-            new DiagnosticPrinter(loader.sources()).print(d, err);
+        ProgramInput in = ProgramInput.read(m, programFile, stimulusFile, loader, err);
+        if (in == null) {
             err.flush();
             return null;
         }
-        Stimulus stimulus = null;
-        if (stimulusFile != null) {
-            stimulus = new StimulusReader(m, loader.sources(), d).read(stimulusFile);
-            if (stimulus == null || d.hasErrors()) {
-                new DiagnosticPrinter(loader.sources()).print(d, err);
-                err.flush();
-                return null;
-            }
-        }
-        return new Session(m, a, decodeName, mode, stimulus);
+        return new Session(m, in.assembly(), decodeName, mode, in.stimulus());
     }
 
     /** Runs the screen until quit; the terminal is restored however the loop ends. */

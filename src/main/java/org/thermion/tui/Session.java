@@ -377,16 +377,7 @@ public final class Session {
      * loaded at its end, stamped with the phase just run (phase 0 before any ran).
      */
     private void sample() {
-        int next = sim.nextPhase();
-        long cycle = sim.cycle();
-        int phase;
-        if (next == 1) {
-            phase = cycle == 0 ? 0 : sim.phases();
-            cycle = Math.max(0, cycle - 1);
-        } else {
-            phase = next - 1;
-        }
-        meter.sample(sim::value, LANE, cycle, phase);
+        meter.sample(sim, LANE);
     }
 
     /** Applies stimulus rows due by the current cycle; true if an input changed. */
