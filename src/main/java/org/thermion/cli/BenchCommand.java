@@ -28,7 +28,7 @@ final class BenchCommand implements Callable<Integer> {
     List<Integer> sizes;
 
     @Option(names = "--engine", split = ",", paramLabel = "ENGINE",
-            description = "Engines to measure: array, compiled (default: both).")
+            description = "Engines to measure: compiled, array (default: both).")
     List<String> engines;
 
     @Option(names = "--quick", description = "Short runs: sizes 1000,10000 unless given, 0.2 s per speed.")
@@ -39,8 +39,8 @@ final class BenchCommand implements Callable<Integer> {
 
     @Option(names = "--compile-max", paramLabel = "GATES",
             description = "Largest netlist, in gates, given the straight-line reference and the compiled engine"
-                    + " (generating and compiling Java costs seconds per 10^4 gates; default 30000).")
-    int compileMax = 30_000;
+                    + " (the reference's warm-up takes seconds per 10^5 gates; default 200000).")
+    int compileMax = 200_000;
 
     @Option(names = "--machine", paramLabel = "FILE", description = "The machine measured as 'demo' (default: the bundled example).")
     Path demo;
@@ -70,7 +70,11 @@ final class BenchCommand implements Callable<Integer> {
         List<Engine> es = new ArrayList<>();
         try {
             for (String e : engines == null ? List.of("array", "compiled") : engines) {
-                es.add(Engine.parse(e));
+                Engine en = Engine.parse(e);
+                if (en == Engine.AUTO) {
+                    throw new IllegalArgumentException("auto is a choice between engines, not one to measure: choose compiled or array");
+                }
+                es.add(en);
             }
         } catch (IllegalArgumentException e) {
             throw new Failures.BadInput("error: " + e.getMessage());
@@ -106,7 +110,8 @@ final class BenchCommand implements Callable<Integer> {
         out.println();
         out.println("gate evals: netlist gates evaluated per second, each over a 64-bit word; lane-evals count each of the");
         out.println("64 lanes. 1 lane: every lane runs the same inputs; 64 lanes: independent random inputs per lane.");
-        out.println("Default engine: " + BenchSuite.DEFAULT_ENGINE.word() + ".");
+        out.println("Default engine: auto, which takes the compiled engine for small machines and for long runs "
+                + "like these (see run --help).");
     }
 
     static String value(BenchRow r) {
@@ -124,7 +129,7 @@ final class BenchCommand implements Callable<Integer> {
     }
 
     private static void printJson(PrintWriter out, List<BenchRow> rows) {
-        StringBuilder b = new StringBuilder("{\n  \"defaultEngine\": ").append(ReportJson.quote(BenchSuite.DEFAULT_ENGINE.word()))
+        StringBuilder b = new StringBuilder("{\n  \"defaultEngine\": ").append(ReportJson.quote(Engine.DEFAULT.word()))
                 .append(",\n  \"rows\": [\n");
         for (int i = 0; i < rows.size(); i++) {
             BenchRow r = rows.get(i);

@@ -3,6 +3,7 @@ package org.thermion.power;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
+import org.thermion.sim.compiled.Engine;
 import org.thermion.sim.Stimulus;
 
 /**
@@ -19,7 +20,7 @@ public final class ProgramRun {
         if (cycles < 1) {
             throw new IllegalArgumentException("cycles must be at least 1, not " + cycles);
         }
-        Simulator sim = new Simulator(m);
+        Simulator sim = Engine.DEFAULT.simulator(m, cycles);
         sim.reset(init);
         if (rom != null) {
             sim.loadRom(rom);

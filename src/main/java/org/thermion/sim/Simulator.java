@@ -74,6 +74,9 @@ public final class Simulator {
     private final int[][] phaseLatchEnable;
     private final int[][] phaseLatchOut;
     private final int[] latchOut;
+    // Per phase: no latch's data or enable is a latch output, so loads need no staging.
+    private final boolean[] phaseDirect;
+    private final LatchLoad[] phaseLoad;
     private final long[] stageV;
     private final long[] stageX;
 
@@ -91,13 +94,15 @@ public final class Simulator {
     private final long[] laneMatrix = new long[LANES];
     private long pcUnknown;
     private boolean pcUniform;
+    // Lane 0's PC, kept beside pcUniform.
+    private int pcAddress;
 
     // ROM.
     private final boolean hasRom;
     private final int[] dataNets;
     private long[] romWords;
-    private final long[] romV;
-    private final long[] romX;
+    // True when the last ROM read may have left X on the data nets.
+    private boolean romUnknownShown;
     private long[] forced;
     private boolean romDirty;
 
@@ -129,6 +134,23 @@ public final class Simulator {
      * the array loop (null: the array loop). Three-valued settles always use the array engine.
      */
     public Simulator(Machine machine, Settle twoValued) {
+        this(machine, twoValued, null);
+    }
+
+    /**
+     * Two-valued latch loads of one phase supplied from outside: every latch of the phase (in the
+     * netlist's order) takes its data where its enable is 1, at once; returns the lanes in which
+     * some latch changed. Used only for phases whose latches read no latch output directly.
+     */
+    public interface LatchLoad {
+        long load(long[] values);
+    }
+
+    /**
+     * As {@link #Simulator(Machine, Settle)}, with {@code loads[p]} (may be null, as may the
+     * array) loading phase p + 1's latches in two-valued runs.
+     */
+    public Simulator(Machine machine, Settle twoValued, LatchLoad[] loads) {
         this.machine = machine;
         this.compiled = twoValued;
         Netlist nl = machine.netlist();
@@ -191,6 +213,23 @@ public final class Simulator {
             maxPerPhase = Math.max(maxPerPhase, ls.size());
         }
         latchOut = nl.latches().stream().mapToInt(Latch::output).toArray();
+        phaseDirect = new boolean[phases];
+        boolean[] isLatchOut = new boolean[nets];
+        for (int q : latchOut) {
+            isLatchOut[q] = true;
+        }
+        for (int p = 0; p < phases; p++) {
+            boolean direct = true;
+            for (int i = 0; i < phaseLatchData[p].length; i++) {
+                int e = phaseLatchEnable[p][i];
+                direct &= !isLatchOut[phaseLatchData[p][i]] && (e < 0 || !isLatchOut[e]);
+            }
+            phaseDirect[p] = direct;
+        }
+        phaseLoad = new LatchLoad[phases];
+        for (int p = 0; p < phases && loads != null && p < loads.length; p++) {
+            phaseLoad[p] = phaseDirect[p] ? loads[p] : null;
+        }
         stageV = new long[maxPerPhase];
         stageX = new long[maxPerPhase];
 
@@ -215,8 +254,7 @@ public final class Simulator {
         hasRom = rom != null;
         dataNets = hasRom ? rom.dataNets().clone() : new int[0];
         romWords = new long[hasRom ? Math.max(0, rom.words()) : 0];
-        romV = new long[dataNets.length];
-        romX = new long[dataNets.length];
+
         reset(new InitMode.Zero());
     }
 
@@ -246,6 +284,15 @@ public final class Simulator {
 
     public Machine machine() {
         return machine;
+    }
+
+    /** Clock phases whose two-valued latch loads run supplied code rather than the array loop. */
+    public int suppliedLoadPhases() {
+        int n = 0;
+        for (LatchLoad l : phaseLoad) {
+            n += l != null ? 1 : 0;
+        }
+        return n;
     }
 
     /** True when two-valued settles run a supplied engine rather than the array loop. */
@@ -283,6 +330,7 @@ public final class Simulator {
         Arrays.fill(pcPlanes, 0L);
         pcUnknown = 0;
         pcUniform = true;
+        pcAddress = 0;
         cycle = 0;
         nextPhase = 1;
         romDirty = true;
@@ -324,14 +372,9 @@ public final class Simulator {
 
     /** Evaluates the combinational logic in levelized order; loads nothing. */
     public void settle() {
-        if (hasRom) {
-            if (romDirty) {
-                computeRom();
-            }
-            for (int b = 0; b < dataNets.length; b++) {
-                val[dataNets[b]] = romV[b];
-                unk[dataNets[b]] = romX[b];
-            }
+        // Only the ROM drives its data nets, so they change only when the ROM word does.
+        if (hasRom && romDirty) {
+            computeRom();
         }
         if (threeValued) {
             settle3();
@@ -614,6 +657,14 @@ public final class Simulator {
                 stageV[i] = (ev & dv) | (e0 & qv) | (ex & same & qv);
                 stageX[i] = (ev & dx) | (e0 & qx) | (ex & ~same);
             }
+        } else if (phaseDirect[p]) {
+            if (hasPc && pcPhase == nextPhase) {
+                loadPc();
+            }
+            LatchLoad l = phaseLoad[p];
+            latchChanges |= l != null ? l.load(v) : loadDirect(v, data, en, q);
+            advance();
+            return;
         } else {
             for (int i = 0; i < n; i++) {
                 long e = en[i] < 0 ? -1L : v[en[i]];
@@ -635,10 +686,28 @@ public final class Simulator {
             }
         }
         latchChanges |= changed;
+        advance();
+    }
+
+    private void advance() {
         nextPhase = nextPhase % phases + 1;
         if (nextPhase == 1) {
             cycle++;
         }
+    }
+
+    // Two-valued loads where no latch of the phase reads another's output: each latch commits at once.
+    private static long loadDirect(long[] v, int[] data, int[] en, int[] q) {
+        long changed = 0L;
+        for (int i = 0, n = data.length; i < n; i++) {
+            int o = q[i];
+            long old = v[o];
+            int ei = en[i];
+            long nv = ei < 0 ? v[data[i]] : (v[data[i]] & v[ei]) | (old & ~v[ei]);
+            changed |= old ^ nv;
+            v[o] = nv;
+        }
+        return changed;
     }
 
     /** Lanes in which some latch changed its stored value since the last {@link #clearLatchChanges()}. */
@@ -659,12 +728,19 @@ public final class Simulator {
     }
 
     private void loadPc() {
+        if (!threeValued) {
+            loadPc2();
+            return;
+        }
         long j = val[jumpNet];
         long jx = threeValued ? unk[jumpNet] : 0L;
         long carry = -1L;
         long diff = 0L;
         long tx = 0L;
         int tn = targetNets.length;
+        // Whether every lane holds the same PC, and lane 0's PC, found on the way.
+        long spread = 0L;
+        int address = 0;
         for (int b = 0; b < pcPlanes.length; b++) {
             long p = pcPlanes[b];
             // PC + 1 by ripple carry, all lanes at once; the carry out of the top bit wraps away.
@@ -679,13 +755,51 @@ public final class Simulator {
             }
             diff |= t ^ inc;
             // j is 0 on lanes where the jump is unknown, so those take PC + 1 here.
-            pcPlanes[b] = (j & t) | (~j & inc);
+            long np = (j & t) | (~j & inc);
+            pcPlanes[b] = np;
+            spread |= np ^ (np >> 63);
+            address |= (int) (np & 1L) << b;
         }
         long nu = (pcUnknown & ~j) | (j & tx);
         // An unknown jump leaves the PC known only where target and PC + 1 agree.
         nu |= jx & (tx | diff);
         pcUnknown = nu;
-        updateUniform();
+        pcUniform = spread == 0L && nu == 0L;
+        pcAddress = address;
+        romDirty = true;
+    }
+
+    // Two-valued PC load: no X anywhere, so pcUnknown stays 0.
+    private void loadPc2() {
+        final long[] v = val;
+        final long[] planes = pcPlanes;
+        final int[] tg = targetNets;
+        long j = v[jumpNet];
+        long nj = ~j;
+        long carry = -1L;
+        long spread = 0L;
+        int address = 0;
+        int w = planes.length;
+        int tn = Math.min(tg.length, w);
+        int b = 0;
+        for (; b < tn; b++) {
+            long p = planes[b];
+            long np = (j & v[tg[b]]) | (nj & (p ^ carry));
+            carry &= p;
+            planes[b] = np;
+            spread |= np ^ (np >> 63);
+            address |= ((int) np & 1) << b;
+        }
+        for (; b < w; b++) {
+            long p = planes[b];
+            long np = nj & (p ^ carry);
+            carry &= p;
+            planes[b] = np;
+            spread |= np ^ (np >> 63);
+            address |= ((int) np & 1) << b;
+        }
+        pcUniform = spread == 0L && pcUnknown == 0L;
+        pcAddress = address;
         romDirty = true;
     }
 
@@ -695,6 +809,7 @@ public final class Simulator {
             u = pcPlanes[b] == 0L || pcPlanes[b] == -1L;
         }
         pcUniform = u;
+        pcAddress = pc(0);
     }
 
     private long romWord(int address) {
@@ -705,14 +820,22 @@ public final class Simulator {
         int w = dataNets.length;
         if (forced != null) {
             for (int b = 0; b < w; b++) {
-                romV[b] = b < forced.length ? forced[b] : 0L;
-                romX[b] = 0L;
+                val[dataNets[b]] = b < forced.length ? forced[b] : 0L;
+                unk[dataNets[b]] = 0L;
             }
         } else if (pcUniform) {
-            long word = romWord(pc(0));
+            // Every lane reads one word; the X words are already 0 unless the last read had an unknown PC.
+            long word = romWord(pcAddress);
+            final long[] v = val;
+            final int[] d = dataNets;
             for (int b = 0; b < w; b++) {
-                romV[b] = -((word >>> b) & 1L);
-                romX[b] = 0L;
+                v[d[b]] = -((word >>> b) & 1L);
+            }
+            if (romUnknownShown) {
+                for (int b = 0; b < w; b++) {
+                    unk[d[b]] = 0L;
+                }
+                romUnknownShown = false;
             }
         } else {
             // PC planes to one address per lane, a ROM read per lane, the words back to bit planes:
@@ -730,9 +853,10 @@ public final class Simulator {
             BitMatrix.transposeToRows(m, Math.min(w, LANES));
             long known = ~pcUnknown;
             for (int b = 0; b < w; b++) {
-                romX[b] = pcUnknown;
-                romV[b] = b < LANES ? m[b] & known : 0L;
+                unk[dataNets[b]] = pcUnknown;
+                val[dataNets[b]] = b < LANES ? m[b] & known : 0L;
             }
+            romUnknownShown |= pcUnknown != 0L;
         }
         romDirty = false;
     }

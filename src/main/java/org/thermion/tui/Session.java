@@ -10,6 +10,7 @@ import org.thermion.power.HeaterAnalysis;
 import org.thermion.power.TubeCount;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
+import org.thermion.sim.compiled.Engine;
 import org.thermion.sim.Stimulus;
 
 import java.util.ArrayDeque;
@@ -60,7 +61,7 @@ public final class Session {
         this.assembly = assembly;
         this.init = init;
         this.stimulus = stimulus;
-        this.sim = new Simulator(machine);
+        this.sim = Engine.DEFAULT.simulator(machine);
         this.decode = DecodeLine.find(machine, decodeName);
         this.heaters = new HeaterAnalysis(machine);
         this.modules = ModuleLoad.of(machine, new TubeCount(machine), heaters);

@@ -7,6 +7,7 @@ import org.thermion.model.Machine;
 import org.thermion.model.Netlist;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
+import org.thermion.sim.compiled.Engine;
 
 /**
  * Runs the logic one machine cycle on a batch: all latches 0 except the ISA's state bits,
@@ -22,7 +23,7 @@ final class LogicRun {
 
     LogicRun(Machine machine) {
         this.machine = machine;
-        this.sim = new Simulator(machine);
+        this.sim = Engine.DEFAULT.simulator(machine);
         Netlist nl = machine.netlist();
         int[] latchOf = new int[nl.netCount()];
         java.util.Arrays.fill(latchOf, -1);

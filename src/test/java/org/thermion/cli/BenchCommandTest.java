@@ -16,22 +16,22 @@ class BenchCommandTest {
         CheckCommandTest.Result r = CheckCommandTest.run("bench", "--sizes", "400", "--seconds", "0.05", "--engine", "array",
                 "--compile-max", "0", "--format", "json");
         assertThat(r.code()).as(r.err()).isZero();
-        assertThat(r.out()).startsWith("{").contains("\"defaultEngine\": \"array\"")
+        assertThat(r.out()).startsWith("{").contains("\"defaultEngine\": \"auto\"")
                 .contains("\"machine\": \"demo\"", "\"machine\": \"synth 400\"")
                 .contains("\"measure\": \"stage instances\", \"value\": 400,")
                 .contains("\"measure\": \"heap per stage instance\"", "\"target\": \"<= 2 KB\"")
-                .contains("\"measure\": \"array (default), 64 lanes / 1 lane (lane-evals)\"", "\"target\": \">= 40 x\"")
+                .contains("\"measure\": \"array, 64 lanes / 1 lane (lane-evals)\"", "\"target\": \">= 40 x\"")
                 .contains("skipped: 137 gates is past --compile-max 0")
                 .contains("\"measure\": \"verify: cases/s\"", "\"measure\": \"powerup: solve 30 s\"");
     }
 
     @Test
     void textTableNamesTheTargets() {
-        CheckCommandTest.Result r = CheckCommandTest.run("bench", "--sizes", "300", "--seconds", "0.02", "--engine", "array",
-                "--compile-max", "0");
+        CheckCommandTest.Result r = CheckCommandTest.run("bench", "--sizes", "300", "--seconds", "0.02", "--engine", "compiled");
         assertThat(r.code()).as(r.err()).isZero();
         assertThat(r.out()).contains("machine", "measurement", "target", "verdict", "synth 300", "parse + elaborate")
-                .contains("Default engine: array");
+                .contains("straight-line reference: gate evals/s", "compiled (default) / straight-line reference")
+                .contains("Default engine: auto");
     }
 
     @Test
@@ -39,6 +39,7 @@ class BenchCommandTest {
         assertThat(CheckCommandTest.run("bench", "--sizes", "5").code()).isEqualTo(ExitCodes.BAD_INPUT);
         CheckCommandTest.Result r = CheckCommandTest.run("bench", "--engine", "fast");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
-        assertThat(r.err()).contains("choose array or compiled").doesNotContain("Exception");
+        assertThat(r.err()).contains("choose auto, compiled or array").doesNotContain("Exception");
+        assertThat(CheckCommandTest.run("bench", "--engine", "auto").err()).contains("not one to measure");
     }
 }

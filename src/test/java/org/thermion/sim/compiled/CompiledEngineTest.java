@@ -1,17 +1,21 @@
 package org.thermion.sim.compiled;
 
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 import org.thermion.elab.Elaborator;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.SourceSet;
+import org.thermion.model.Gate;
+import org.thermion.model.GateFn;
 import org.thermion.model.Machine;
+import org.thermion.model.Netlist;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
 import org.thermion.synth.SyntheticMachine;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.SplittableRandom;
 import java.util.concurrent.TimeUnit;
 
@@ -38,9 +42,8 @@ class CompiledEngineTest {
 
     /** Runs both engines in lock step from the same random start, ROM and inputs; compares all nets each phase. */
     static void differential(Machine m, long seed, int cycles) {
-        Assumptions.assumeTrue(StraightLineCompiler.available(), "needs a JDK");
         Simulator array = new Simulator(m);
-        Simulator compiled = new Simulator(m, StraightLineCompiler.compile(m.netlist()));
+        Simulator compiled = Engine.COMPILED.simulator(m);
         SplittableRandom rnd = new SplittableRandom(seed);
         long[] rom = new long[m.rom().words()];
         for (int i = 0; i < rom.length; i++) {
@@ -60,6 +63,7 @@ class CompiledEngineTest {
             for (int p = 0; p < m.clock().phases(); p++) {
                 array.stepPhase();
                 compiled.stepPhase();
+                assertThat(compiled.latchChanges()).isEqualTo(array.latchChanges());
                 for (int n = 0; n < nets; n++) {
                     if (array.value(n) != compiled.value(n)) {
                         throw new AssertionError("seed " + seed + ": net " + m.netlist().netName(n) + " differs at cycle "
@@ -80,6 +84,8 @@ class CompiledEngineTest {
     @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void demoAgreesWithTheArrayEngineOverRandomRuns() {
         Machine m = demo();
+        // Both phases' latches load through generated code.
+        assertThat(Engine.COMPILED.simulator(m).suppliedLoadPhases()).isEqualTo(2);
         for (long seed : new long[]{1, 2, 3}) {
             differential(m, seed, 500);
         }
@@ -95,28 +101,89 @@ class CompiledEngineTest {
     @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void largeNetlistsSplitIntoManyMethodsAndClasses() {
         Machine m = synthetic(10_000);
-        StraightLineSource src = new StraightLineSource(m.netlist(), "x.y");
-        // 10,000 stages (9376 gates) need two 8000-gate classes, the entry class, and many methods
-        // under the bytecode limit (at most about 400 gates each).
-        assertThat(src.units()).hasSize(3);
-        assertThat(src.methods()).isGreaterThan(m.netlist().gates().size() / 400);
+        StraightLineCompiler.Generated g = StraightLineCompiler.generate(m.netlist());
+        // 10,000 stages (9376 gates) need two 6000-gate classes and the entry class, and many
+        // methods under the bytecode limit (at most about 400 gates each).
+        assertThat(g.classes()).hasSize(3);
+        assertThat(g.methods()).isGreaterThan(m.netlist().gates().size() / 400);
         differential(m, 11, 20);
     }
 
+    /** Every function at every width from 0 to 6 inputs, against the array engine's opcodes. */
     @Test
-    void statementsMeanWhatTheArrayEngineComputes() {
-        StringBuilder b = new StringBuilder();
-        StraightLineSource.statement(b, new org.thermion.model.Gate(0, org.thermion.model.GateFn.NAND, new int[]{4, 5, 6}, 9, 0, 0));
-        StraightLineSource.statement(b, new org.thermion.model.Gate(1, org.thermion.model.GateFn.NOT, new int[]{9}, 10, 0, 0));
-        StraightLineSource.statement(b, new org.thermion.model.Gate(2, org.thermion.model.GateFn.XOR, new int[]{2, 3}, 11, 0, 0));
-        assertThat(b.toString()).isEqualTo("        v[9] = ~(v[4] & v[5] & v[6]);\n        v[10] = ~v[9];\n"
-                + "        v[11] = v[2] ^ v[3];\n");
+    void everyGateShapeMeansWhatTheArrayEngineComputes() {
+        List<Gate> gates = new ArrayList<>();
+        int inputs = 8;
+        int net = 2 + inputs;
+        for (GateFn fn : GateFn.values()) {
+            for (int width = 0; width <= 6; width++) {
+                int[] in = new int[width];
+                for (int k = 0; k < width; k++) {
+                    in[k] = 2 + (k * 3 + width) % inputs;
+                }
+                gates.add(new Gate(gates.size(), fn, in, net++, 0, 0));
+            }
+        }
+        String[] names = new String[net];
+        for (int n = 0; n < net; n++) {
+            names[n] = "n" + n;
+        }
+        Netlist nl = new Netlist(names, new int[net], gates, List.of());
+        java.util.function.Consumer<long[]> settle = StraightLineCompiler.compileConsumer(nl);
+        SplittableRandom rnd = new SplittableRandom(3);
+        for (int trial = 0; trial < 20; trial++) {
+            long[] v = new long[net];
+            v[Netlist.CONST1] = -1L;
+            for (int i = 0; i < inputs; i++) {
+                v[2 + i] = rnd.nextLong();
+            }
+            settle.accept(v);
+            for (Gate g : gates) {
+                assertThat(v[g.output()]).as("%s of %d inputs", g.fn(), g.inputs().length).isEqualTo(expected(g, v));
+            }
+        }
+    }
+
+    private static long expected(Gate g, long[] v) {
+        int[] in = g.inputs();
+        long and = -1L;
+        long or = 0L;
+        long xor = 0L;
+        for (int n : in) {
+            and &= v[n];
+            or |= v[n];
+            xor ^= v[n];
+        }
+        long first = in.length == 0 ? 0L : v[in[0]];
+        return switch (g.fn()) {
+            case BUF -> first;
+            case NOT -> ~first;
+            case AND -> and;
+            case OR -> or;
+            case NAND -> ~and;
+            case NOR -> ~or;
+            case XOR -> xor;
+        };
+    }
+
+    @Test
+    void autoCompilesSmallMachinesAndLongRuns() {
+        Machine small = demo();
+        assertThat(Engine.AUTO.forRun(small, 0)).isEqualTo(Engine.COMPILED);
+        Machine big = synthetic(10_000);
+        // 9376 gates: the JIT's warm-up of the generated code outweighs a run of 10^4 cycles.
+        assertThat(Engine.AUTO.forRun(big, 10_000)).isEqualTo(Engine.ARRAY);
+        assertThat(Engine.AUTO.forRun(big, 2_000_000)).isEqualTo(Engine.COMPILED);
+        assertThat(Engine.ARRAY.forRun(small, 0)).isEqualTo(Engine.ARRAY);
+        assertThat(Engine.AUTO.simulator(big, 10).compiledEngine()).isFalse();
+        assertThat(Engine.AUTO.simulator(small, 10).compiledEngine()).isTrue();
     }
 
     @Test
     void engineWordsParse() {
         assertThat(Engine.parse("compiled")).isEqualTo(Engine.COMPILED);
         assertThat(Engine.parse("Array")).isEqualTo(Engine.ARRAY);
-        assertThatThrownBy(() -> Engine.parse("fast")).hasMessageContaining("choose array or compiled");
+        assertThat(Engine.parse("auto")).isEqualTo(Engine.DEFAULT);
+        assertThatThrownBy(() -> Engine.parse("fast")).hasMessageContaining("choose auto, compiled or array");
     }
 }
