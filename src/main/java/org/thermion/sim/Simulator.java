@@ -254,7 +254,6 @@ public final class Simulator {
         hasRom = rom != null;
         dataNets = hasRom ? rom.dataNets().clone() : new int[0];
         romWords = new long[hasRom ? Math.max(0, rom.words()) : 0];
-
         reset(new InitMode.Zero());
     }
 
