@@ -189,7 +189,8 @@ public final class BenchSuite {
                 BenchRow r = BenchRow.target(who, name + " / straight-line reference", ratio, "x", ENGINE_VS_REFERENCE, false, "0.5 x");
                 if (Boolean.FALSE.equals(r.met())) {
                     r = r.withNote(String.format(java.util.Locale.ROOT,
-                            "settle alone %.2f x (gate dispatch); %.0f %% of a cycle outside logic", logic / reference, 100 * Math.max(0, outside)));
+                            "settle alone %.2f x; %.0f %% of a cycle outside the logic (latch loads, PC, ROM read, inputs)",
+                            logic / reference, 100 * Math.max(0, outside)));
                 }
                 rows.add(r);
             } else {
