@@ -25,7 +25,7 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /** The regrouped two-valued gate program settles to exactly what the netlist's own order gives. */
-class GateProgramTest {
+public class GateProgramTest {
     @Test
     void demoSettlesLikeTheNetlistOrder() {
         Machine m = Machines.demo();
@@ -144,8 +144,8 @@ class GateProgramTest {
         }
     }
 
-    // Each gate by its definition over 64 lanes.
-    private static long eval(Gate g, long[] v) {
+    /** Each gate by its definition over 64 lanes (the engines' tests check against it). */
+    public static long eval(Gate g, long[] v) {
         int[] in = g.inputs();
         long and = -1L;
         long or = 0L;
