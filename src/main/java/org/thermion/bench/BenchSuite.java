@@ -132,8 +132,7 @@ public final class BenchSuite {
                 continue;
             }
             Consumer<long[]> s = settle;
-            Simulator sim = e == Engine.COMPILED ? new Simulator(m, (Simulator.Settle) s,
-                    StraightLineCompiler.latchLoads(m.netlist(), Math.max(1, m.clock().phases()))) : new Simulator(m);
+            Simulator sim = e == Engine.COMPILED ? new Simulator(m, (Simulator.Settle) s, StraightLineCompiler.latchLoads(m)) : new Simulator(m);
             Measure.Speed one = measure.run(sim, false, 17);
             Measure.Speed all = measure.run(sim, true, 17);
             runs.add(new EngineRun(e, one, all, measure.settleOnly(sim).gateEvaluationsPerSecond()));

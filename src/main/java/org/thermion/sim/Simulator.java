@@ -727,19 +727,21 @@ public final class Simulator {
     }
 
     private void loadPc() {
-        if (!threeValued) {
+        if (threeValued) {
+            loadPc3();
+        } else {
             loadPc2();
-            return;
         }
+    }
+
+    // Three-valued PC load: an unknown jump or target leaves lanes' PCs unknown.
+    private void loadPc3() {
         long j = val[jumpNet];
-        long jx = threeValued ? unk[jumpNet] : 0L;
+        long jx = unk[jumpNet];
         long carry = -1L;
         long diff = 0L;
         long tx = 0L;
         int tn = targetNets.length;
-        // Whether every lane holds the same PC, and lane 0's PC, found on the way.
-        long spread = 0L;
-        int address = 0;
         for (int b = 0; b < pcPlanes.length; b++) {
             long p = pcPlanes[b];
             // PC + 1 by ripple carry, all lanes at once; the carry out of the top bit wraps away.
@@ -748,27 +750,22 @@ public final class Simulator {
             long t = 0L;
             if (b < tn) {
                 t = val[targetNets[b]];
-                if (threeValued) {
-                    tx |= unk[targetNets[b]];
-                }
+                tx |= unk[targetNets[b]];
             }
             diff |= t ^ inc;
             // j is 0 on lanes where the jump is unknown, so those take PC + 1 here.
-            long np = (j & t) | (~j & inc);
-            pcPlanes[b] = np;
-            spread |= np ^ (np >> 63);
-            address |= (int) (np & 1L) << b;
+            pcPlanes[b] = (j & t) | (~j & inc);
         }
         long nu = (pcUnknown & ~j) | (j & tx);
         // An unknown jump leaves the PC known only where target and PC + 1 agree.
         nu |= jx & (tx | diff);
         pcUnknown = nu;
-        pcUniform = spread == 0L && nu == 0L;
-        pcAddress = address;
+        updateUniform();
         romDirty = true;
     }
 
-    // Two-valued PC load: no X anywhere, so pcUnknown stays 0.
+    // Two-valued PC load: no X anywhere, so pcUnknown stays 0; finds whether every lane holds
+    // the same PC, and lane 0's PC, on the way (what updateUniform would find).
     private void loadPc2() {
         final long[] v = val;
         final long[] planes = pcPlanes;

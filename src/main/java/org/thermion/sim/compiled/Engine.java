@@ -68,7 +68,6 @@ public enum Engine {
         if (forRun(machine, cycles) == ARRAY) {
             return new Simulator(machine);
         }
-        return new Simulator(machine, StraightLineCompiler.compile(machine.netlist()),
-                StraightLineCompiler.latchLoads(machine.netlist(), Math.max(1, machine.clock().phases())));
+        return new Simulator(machine, StraightLineCompiler.compile(machine.netlist()), StraightLineCompiler.latchLoads(machine));
     }
 }

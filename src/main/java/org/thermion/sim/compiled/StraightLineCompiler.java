@@ -5,6 +5,7 @@ import org.objectweb.asm.MethodVisitor;
 import org.objectweb.asm.Opcodes;
 import org.thermion.model.Gate;
 import org.thermion.model.Latch;
+import org.thermion.model.Machine;
 import org.thermion.model.Netlist;
 import org.thermion.sim.Simulator;
 
@@ -154,11 +155,12 @@ public final class StraightLineCompiler {
      * each latch {@code q = en ? d : q}, committed at once, the changed lanes ORed together. Right
      * only where no latch of the phase reads another's output, which the simulator checks.
      */
-    public static Simulator.LatchLoad[] latchLoads(Netlist netlist, int phases) {
+    public static Simulator.LatchLoad[] latchLoads(Machine machine) {
+        int phases = Math.max(1, machine.clock().phases());
         Simulator.LatchLoad[] loads = new Simulator.LatchLoad[phases];
         for (int p = 0; p < phases; p++) {
             List<Latch> ls = new ArrayList<>();
-            for (Latch l : netlist.latches()) {
+            for (Latch l : machine.netlist().latches()) {
                 if (l.phase() == p + 1) {
                     ls.add(l);
                 }
