@@ -1,11 +1,13 @@
 package org.thermion.sim;
 
 /**
- * Transposes a 64 x 64 bit matrix held as 64 {@code long} rows (bit c of row r is element
- * (r, c)), in place, by recursive block swaps: first the off-diagonal 32 x 32 blocks trade
- * places, then within each quarter the 16 x 16 blocks, and so on down to single bits, six
- * steps of 32 word swaps each. The simulator turns lane-major words (one per lane) into
- * bit planes (one per bit, bit i = lane i) and back this way without a per-bit loop.
+ * Reads a table once per lane with lanes held as bit planes (bit i of a word belongs to lane
+ * i): the simulator's ROM read when the lanes' program counters differ. A 64 x 64 bit matrix
+ * held as 64 {@code long} rows is transposed by block swaps: the 32 x 32 off-diagonal blocks
+ * trade places, then within each quarter the 16 x 16 blocks, and so on down to single bits.
+ * Each step swaps bit j of the row index with bit j of the column index; the steps commute,
+ * and a transpose stopped after the steps below some width leaves the matrix in packed fields
+ * of that width, which is all a narrow index or a narrow word needs.
  */
 final class BitMatrix {
     // MASKS[s] has the bits whose column index has bit (5 - s) clear: the low half of each block.
@@ -21,54 +23,111 @@ final class BitMatrix {
     private BitMatrix() {
     }
 
-    /** Transposes the 64 rows {@code a[0..63]} in place: afterwards bit r of {@code a[c]} is the former bit c of {@code a[r]}. */
-    static void transpose64(long[] a) {
-        for (int s = 0, j = 32; s < 6; s++, j >>>= 1) {
-            long m = MASKS[s];
-            for (int r = 0; r < 64; r = (r + j + 1) & ~j) {
-                // Row r's high block (columns c + j) trades with row r + j's low block (columns c).
-                long t = ((a[r] >>> j) ^ a[r + j]) & m;
-                a[r] ^= t << j;
-                a[r + j] ^= t;
-            }
-        }
-    }
-    /*
-     * Each step swaps bit j of the row index with bit j of the column index; these swaps
-     * commute, so they may run in any order. The narrow forms below exploit that: where a
-     * step pairs a data row with an all-zero one it becomes a plain split or merge, and the
-     * full swaps are confined to the few rows that carry data.
-     */
-
     /**
-     * Transposes a matrix whose rows {@code rows..63} are zero: on entry only {@code a[0..rows-1]}
-     * are read, on return all 64 rows hold the transpose (only its low {@code rows} columns can be set).
+     * Looks up one table word per lane, all in bit planes: bit i of {@code planes[b]} is bit b of
+     * lane i's index ({@code indexBits} planes); on return bit i of {@code out[b]} is bit b of
+     * lane i's word ({@code dataBits} planes, at most 64; words must fit in them). Indices past
+     * the table read 0. {@code scratch} takes 64 words.
+     *
+     * <p>Only the swap steps below the index width are run on the way in, which leaves the
+     * indices packed side by side (field k of row r is lane r + gk's index), and only those below
+     * the data width on the way out, each lane's word dropped into its field of a packed row.
      */
-    static void transposeFromRows(long[] a, int rows) {
-        int k = span(rows);
-        java.util.Arrays.fill(a, rows, k, 0L);
-        swaps(a, k);
-        for (int j = k, s = 5 - Integer.numberOfTrailingZeros(k); j < 64; j <<= 1, s--) {
-            long m = MASKS[s];
-            for (int r = 0; r < j; r++) {
-                a[r + j] = (a[r] >>> j) & m;
-                a[r] &= m;
-            }
+    static void lookup(long[] planes, int indexBits, long[] table, int dataBits, long[] scratch, long[] out) {
+        if (indexBits <= 8 && dataBits <= 16) {
+            lookupByte(planes, indexBits, table, dataBits, scratch, out);
+            return;
         }
+        int g = span(indexBits);
+        System.arraycopy(planes, 0, scratch, 0, indexBits);
+        java.util.Arrays.fill(scratch, indexBits, g, 0L);
+        swaps(scratch, g);
+        long fieldMask = g == 64 ? -1L : (1L << g) - 1;
+        int f = span(dataBits);
+        int n = table.length;
+        for (int r = 0; r < f; r++) {
+            long row = 0L;
+            for (int lane = r; lane < 64; lane += f) {
+                long a = (scratch[lane & (g - 1)] >>> (lane & -g)) & fieldMask;
+                row |= (a < n ? table[(int) a] : 0L) << (lane & -f);
+            }
+            out[r] = row;
+        }
+        swaps(out, f);
     }
 
-    /**
-     * Transposes a matrix in which only the low {@code cols} columns can be set: on return
-     * {@code a[0..cols-1]} hold the transpose's rows (the rest of {@code a} is left as scratch).
-     */
-    static void transposeToRows(long[] a, int cols) {
-        int k = span(cols);
-        for (int j = 32; j >= k; j >>>= 1) {
-            for (int r = 0; r < j; r++) {
-                a[r] |= a[r + j] << j;
+    // The common shape (PC of at most 8 bits, words of at most 16) with every step written out,
+    // which the JIT turns into straight code about twice as fast as the general loops.
+    private static void lookupByte(long[] planes, int indexBits, long[] table, int dataBits, long[] in, long[] out) {
+        System.arraycopy(planes, 0, in, 0, indexBits);
+        java.util.Arrays.fill(in, indexBits, 8, 0L);
+        swaps8(in);
+        // Byte k of in[r] is now lane r + 8k's index.
+        int n = table.length;
+        if (dataBits <= 8) {
+            for (int r = 0; r < 8; r++) {
+                long x = in[r];
+                out[r] = word(table, n, x) | word(table, n, x >>> 8) << 8 | word(table, n, x >>> 16) << 16
+                        | word(table, n, x >>> 24) << 24 | word(table, n, x >>> 32) << 32
+                        | word(table, n, x >>> 40) << 40 | word(table, n, x >>> 48) << 48 | word(table, n, x >>> 56) << 56;
             }
+            swaps8(out);
+            return;
         }
-        swaps(a, k);
+        for (int r = 0; r < 8; r++) {
+            long x = in[r];
+            // Row r takes lanes r, r + 16, r + 32, r + 48; row r + 8 the lanes 8 further on.
+            out[r] = word(table, n, x) | word(table, n, x >>> 16) << 16 | word(table, n, x >>> 32) << 32
+                    | word(table, n, x >>> 48) << 48;
+            out[r + 8] = word(table, n, x >>> 8) | word(table, n, x >>> 24) << 16 | word(table, n, x >>> 40) << 32
+                    | word(table, n, x >>> 56) << 48;
+        }
+        swaps16(out);
+    }
+
+    private static long word(long[] table, int n, long index) {
+        int a = (int) index & 0xFF;
+        return a < n ? table[a] : 0L;
+    }
+
+    // swaps(a, 8) and swaps(a, 16) written out.
+    private static void swaps8(long[] a) {
+        for (int r = 0; r < 4; r++) {
+            swap(a, r, 4, MASKS[3]);
+        }
+        swap(a, 0, 2, MASKS[4]);
+        swap(a, 1, 2, MASKS[4]);
+        swap(a, 4, 2, MASKS[4]);
+        swap(a, 5, 2, MASKS[4]);
+        for (int r = 0; r < 8; r += 2) {
+            swap(a, r, 1, MASKS[5]);
+        }
+    }
+
+    private static void swaps16(long[] a) {
+        for (int r = 0; r < 8; r++) {
+            swap(a, r, 8, MASKS[2]);
+        }
+        for (int r = 0; r < 16; r += 8) {
+            swap(a, r, 4, MASKS[3]);
+            swap(a, r + 1, 4, MASKS[3]);
+            swap(a, r + 2, 4, MASKS[3]);
+            swap(a, r + 3, 4, MASKS[3]);
+        }
+        for (int r = 0; r < 16; r += 4) {
+            swap(a, r, 2, MASKS[4]);
+            swap(a, r + 1, 2, MASKS[4]);
+        }
+        for (int r = 0; r < 16; r += 2) {
+            swap(a, r, 1, MASKS[5]);
+        }
+    }
+
+    // Row r's high block (columns c + j) trades with row r + j's low block (columns c).
+    private static void swap(long[] a, int r, int j, long m) {
+        long t = ((a[r] >>> j) ^ a[r + j]) & m;
+        a[r] ^= t << j;
+        a[r + j] ^= t;
     }
 
     // Smallest power of two at least n (1..64).
@@ -81,9 +140,7 @@ final class BitMatrix {
         for (int j = k >>> 1; j >= 1; j >>>= 1) {
             long m = MASKS[5 - Integer.numberOfTrailingZeros(j)];
             for (int r = 0; r < k; r = (r + j + 1) & ~j) {
-                long t = ((a[r] >>> j) ^ a[r + j]) & m;
-                a[r] ^= t << j;
-                a[r + j] ^= t;
+                swap(a, r, j, m);
             }
         }
     }

@@ -58,6 +58,8 @@ public final class Simulator {
     // Net values: bit i = lane i. unk marks X lanes (Unknown mode only).
     private final long[] val;
     private final long[] unk;
+    // Where each net's words lie in val and unk.
+    private final int[] slot;
 
     // Compiled gates in the netlist's order, for the three-valued settle.
     private final int gateCount;
@@ -92,15 +94,25 @@ public final class Simulator {
     private final long[] pcPlanes;
     // Scratch for the per-lane ROM read: 64 rows of a bit matrix.
     private final long[] laneMatrix = new long[LANES];
+    private final long[] laneScratch = new long[LANES];
     private long pcUnknown;
     private boolean pcUniform;
-    // Lane 0's PC, kept beside pcUniform.
+    // Lane 0's PC, kept beside pcUniform; while every lane holds it, it alone is current and the
+    // planes may lag (planesStale), so a load with no parting lanes is a scalar add or copy.
     private int pcAddress;
+    private boolean planesStale;
+    private final int pcMask;
 
     // ROM.
     private final boolean hasRom;
     private final int[] dataNets;
     private long[] romWords;
+    // Where the data nets are consecutive from dataBase and the table is small: every word as the
+    // values its data nets take on every lane (0 or -1 a bit), word after word, so a read shared
+    // by all lanes is one array copy. Otherwise null.
+    private long[] romPlanes;
+    private final int dataBase;
+    private static final int PLANE_TABLE_MAX = 1 << 16;
     // True when the last ROM read may have left X on the data nets.
     private boolean romUnknownShown;
     private long[] forced;
@@ -159,6 +171,12 @@ public final class Simulator {
         this.unk = new long[nets];
         this.phases = Math.max(1, machine.clock().phases());
 
+        program = new GateProgram(nl);
+        // The array engine's values lie in the order its program touches them; generated code
+        // is written against the netlist's numbering, so it keeps that.
+        slot = twoValued == null ? program.renumber(nets, leadingNets(machine)) : identity(nets);
+        final int[] sl = slot;
+
         List<Gate> gates = nl.gates();
         gateCount = gates.size();
         op = new int[gateCount];
@@ -176,18 +194,16 @@ public final class Simulator {
         for (int i = 0; i < gateCount; i++) {
             Gate g = gates.get(i);
             int[] ins = g.inputs();
-            out[i] = g.output();
+            out[i] = sl[g.output()];
             listStart[i] = at;
             for (int n : ins) {
-                list[at++] = n;
+                list[at++] = sl[n];
             }
             listEnd[i] = at;
-            in0[i] = ins.length > 0 ? ins[0] : Netlist.CONST0;
-            in1[i] = ins.length > 1 ? ins[1] : Netlist.CONST0;
+            in0[i] = ins.length > 0 ? sl[ins[0]] : Netlist.CONST0;
+            in1[i] = ins.length > 1 ? sl[ins[1]] : Netlist.CONST0;
             op[i] = opcode(g, ins.length);
         }
-
-        program = new GateProgram(nl);
 
         int maxPerPhase = 0;
         List<List<Latch>> byPhase = new ArrayList<>();
@@ -207,12 +223,12 @@ public final class Simulator {
         phaseLatchOut = new int[phases][];
         for (int p = 0; p < phases; p++) {
             List<Latch> ls = byPhase.get(p);
-            phaseLatchData[p] = ls.stream().mapToInt(Latch::data).toArray();
-            phaseLatchEnable[p] = ls.stream().mapToInt(Latch::enable).toArray();
-            phaseLatchOut[p] = ls.stream().mapToInt(Latch::output).toArray();
+            phaseLatchData[p] = ls.stream().mapToInt(l -> sl[l.data()]).toArray();
+            phaseLatchEnable[p] = ls.stream().mapToInt(l -> l.enable() < 0 ? l.enable() : sl[l.enable()]).toArray();
+            phaseLatchOut[p] = ls.stream().mapToInt(l -> sl[l.output()]).toArray();
             maxPerPhase = Math.max(maxPerPhase, ls.size());
         }
-        latchOut = nl.latches().stream().mapToInt(Latch::output).toArray();
+        latchOut = nl.latches().stream().mapToInt(l -> sl[l.output()]).toArray();
         phaseDirect = new boolean[phases];
         boolean[] isLatchOut = new boolean[nets];
         for (int q : latchOut) {
@@ -233,7 +249,7 @@ public final class Simulator {
         stageV = new long[maxPerPhase];
         stageX = new long[maxPerPhase];
 
-        inputNets = machine.inputs().stream().mapToInt(Port::net).toArray();
+        inputNets = machine.inputs().stream().mapToInt(in -> sl[in.net()]).toArray();
 
         ProgramCounter pc = machine.pc();
         hasPc = pc != null;
@@ -242,19 +258,42 @@ public final class Simulator {
                 throw new IllegalArgumentException("program counter width " + pc.width() + " is outside 1..30");
             }
             pcPhase = pc.phase();
-            jumpNet = pc.jumpNet();
-            targetNets = Arrays.copyOf(pc.targetNets(), Math.min(pc.targetNets().length, 31));
+            jumpNet = sl[pc.jumpNet()];
+            targetNets = Arrays.stream(pc.targetNets()).limit(31).map(n -> sl[n]).toArray();
         } else {
             pcPhase = -1;
             jumpNet = -1;
             targetNets = new int[0];
         }
         pcPlanes = new long[hasPc ? pc.width() : 0];
+        pcMask = (int) ((1L << pcPlanes.length) - 1);
         Rom rom = machine.rom();
         hasRom = rom != null;
-        dataNets = hasRom ? rom.dataNets().clone() : new int[0];
+        dataNets = hasRom ? Arrays.stream(rom.dataNets()).map(n -> sl[n]).toArray() : new int[0];
         romWords = new long[hasRom ? Math.max(0, rom.words()) : 0];
+        dataBase = consecutive(dataNets) ? dataNets[0] : -1;
+        romPlanes = planes(romWords);
         reset(new InitMode.Zero());
+    }
+
+    // Constants first (the program names them 0 and 1), then the ROM's data nets side by side
+    // (a shared ROM read is one array copy), then the inputs.
+    private static int[] leadingNets(Machine machine) {
+        java.util.stream.IntStream.Builder b = java.util.stream.IntStream.builder();
+        b.add(Netlist.CONST0).add(Netlist.CONST1);
+        if (machine.rom() != null) {
+            Arrays.stream(machine.rom().dataNets()).forEach(b::add);
+        }
+        machine.inputs().forEach(p -> b.add(p.net()));
+        return b.build().toArray();
+    }
+
+    private static int[] identity(int n) {
+        int[] a = new int[n];
+        for (int i = 0; i < n; i++) {
+            a[i] = i;
+        }
+        return a;
     }
 
     private static int opcode(Gate g, int n) {
@@ -330,6 +369,7 @@ public final class Simulator {
         pcUnknown = 0;
         pcUniform = true;
         pcAddress = 0;
+        planesStale = false;
         cycle = 0;
         nextPhase = 1;
         romDirty = true;
@@ -343,7 +383,31 @@ public final class Simulator {
             w[i] = words[i] & mask;
         }
         romWords = w;
+        romPlanes = planes(w);
         romDirty = true;
+    }
+
+    private long[] planes(long[] words) {
+        int width = dataNets.length;
+        if (dataBase < 0 || (long) words.length * width > PLANE_TABLE_MAX) {
+            return null;
+        }
+        long[] p = new long[words.length * width];
+        for (int a = 0; a < words.length; a++) {
+            for (int b = 0; b < width; b++) {
+                p[a * width + b] = -((words[a] >>> b) & 1L);
+            }
+        }
+        return p;
+    }
+
+    private static boolean consecutive(int[] nets) {
+        for (int i = 1; i < nets.length; i++) {
+            if (nets[i] != nets[0] + i) {
+                return false;
+            }
+        }
+        return nets.length > 0;
     }
 
     /** Sets machine input {@code inputIndex} (index into {@code machine.inputs()}); bit i = lane i. */
@@ -372,8 +436,15 @@ public final class Simulator {
     /** Evaluates the combinational logic in levelized order; loads nothing. */
     public void settle() {
         // Only the ROM drives its data nets, so they change only when the ROM word does.
-        if (hasRom && romDirty) {
-            computeRom();
+        if (romDirty && hasRom) {
+            int a = pcAddress;
+            int w = dataNets.length;
+            if (pcUniform && romPlanes != null && forced == null && !romUnknownShown && a < romWords.length) {
+                System.arraycopy(romPlanes, a * w, val, dataBase, w);
+                romDirty = false;
+            } else {
+                computeRom();
+            }
         }
         if (threeValued) {
             settle3();
@@ -689,9 +760,12 @@ public final class Simulator {
     }
 
     private void advance() {
-        nextPhase = nextPhase % phases + 1;
-        if (nextPhase == 1) {
+        // A compare, not a remainder: this runs every phase.
+        if (nextPhase == phases) {
+            nextPhase = 1;
             cycle++;
+        } else {
+            nextPhase++;
         }
     }
 
@@ -736,6 +810,7 @@ public final class Simulator {
 
     // Three-valued PC load: an unknown jump or target leaves lanes' PCs unknown.
     private void loadPc3() {
+        freshPlanes();
         long j = val[jumpNet];
         long jx = unk[jumpNet];
         long carry = -1L;
@@ -764,13 +839,35 @@ public final class Simulator {
         romDirty = true;
     }
 
-    // Two-valued PC load: no X anywhere, so pcUnknown stays 0; finds whether every lane holds
-    // the same PC, and lane 0's PC, on the way (what updateUniform would find).
+    // Two-valued PC load: no X anywhere, so pcUnknown stays 0. Where every lane holds one PC and
+    // jumps alike, a scalar step; otherwise the planes, finding on the way whether every lane
+    // holds the same PC, and lane 0's PC (what updateUniform would find).
     private void loadPc2() {
         final long[] v = val;
-        final long[] planes = pcPlanes;
         final int[] tg = targetNets;
         long j = v[jumpNet];
+        romDirty = true;
+        if (pcUniform && (j == 0L || j == -1L)) {
+            if (j == 0L) {
+                pcAddress = (pcAddress + 1) & pcMask;
+                planesStale = true;
+                return;
+            }
+            int target = 0;
+            long spread = 0L;
+            for (int b = 0, tn = Math.min(tg.length, pcPlanes.length); b < tn; b++) {
+                long t = v[tg[b]];
+                spread |= t ^ (t >> 63);
+                target |= ((int) t & 1) << b;
+            }
+            if (spread == 0L) {
+                pcAddress = target;
+                planesStale = true;
+                return;
+            }
+        }
+        freshPlanes();
+        final long[] planes = pcPlanes;
         long nj = ~j;
         long carry = -1L;
         long spread = 0L;
@@ -796,7 +893,16 @@ public final class Simulator {
         }
         pcUniform = spread == 0L && pcUnknown == 0L;
         pcAddress = address;
-        romDirty = true;
+    }
+
+    // Brings the planes up to the scalar PC that every lane holds.
+    private void freshPlanes() {
+        if (planesStale) {
+            for (int b = 0; b < pcPlanes.length; b++) {
+                pcPlanes[b] = -(long) ((pcAddress >>> b) & 1);
+            }
+            planesStale = false;
+        }
     }
 
     private void updateUniform() {
@@ -834,19 +940,9 @@ public final class Simulator {
                 romUnknownShown = false;
             }
         } else {
-            // PC planes to one address per lane, a ROM read per lane, the words back to bit planes:
-            // two 64 x 64 bit transposes instead of loops over single bits.
+            // A ROM read per lane, from PC planes to data planes through partial bit transposes.
             long[] m = laneMatrix;
-            int pw = pcPlanes.length;
-            System.arraycopy(pcPlanes, 0, m, 0, pw);
-            BitMatrix.transposeFromRows(m, pw);
-            long[] rw = romWords;
-            int words = rw.length;
-            for (int lane = 0; lane < LANES; lane++) {
-                long a = m[lane];
-                m[lane] = a < words ? rw[(int) a] : 0L;
-            }
-            BitMatrix.transposeToRows(m, Math.min(w, LANES));
+            BitMatrix.lookup(pcPlanes, pcPlanes.length, romWords, Math.min(w, LANES), laneScratch, m);
             long known = ~pcUnknown;
             for (int b = 0; b < w; b++) {
                 unk[dataNets[b]] = pcUnknown;
@@ -874,12 +970,12 @@ public final class Simulator {
 
     /** The net's value (bit i = lane i); 0 on lanes where it is unknown. */
     public long value(int net) {
-        return val[net];
+        return val[slot[net]];
     }
 
     /** Lanes where the net is unknown (Unknown mode), else 0. */
     public long unknown(int net) {
-        return unk[net];
+        return unk[slot[net]];
     }
 
     /** True while simulating with three-valued logic. */
@@ -889,6 +985,9 @@ public final class Simulator {
 
     /** The program counter of one lane. */
     public int pc(int lane) {
+        if (planesStale) {
+            return pcAddress;
+        }
         int a = 0;
         for (int b = 0; b < pcPlanes.length; b++) {
             a |= (int) ((pcPlanes[b] >>> lane) & 1L) << b;
@@ -903,6 +1002,7 @@ public final class Simulator {
 
     /** Sets the program counter of one lane (taken mod 2^width); the lane's PC becomes known. */
     public void setPc(int lane, int pc) {
+        freshPlanes();
         long bit = 1L << lane;
         for (int b = 0; b < pcPlanes.length; b++) {
             if ((pc >>> b & 1) != 0) {

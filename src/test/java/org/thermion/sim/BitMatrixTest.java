@@ -9,66 +9,53 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 class BitMatrixTest {
     @Test
-    void transposeMatchesTheBitByBitDefinition() {
-        SplittableRandom rnd = new SplittableRandom(11);
-        for (int trial = 0; trial < 20; trial++) {
-            long[] a = new long[64];
-            for (int r = 0; r < 64; r++) {
-                a[r] = rnd.nextLong();
-            }
-            long[] expected = new long[64];
-            for (int r = 0; r < 64; r++) {
-                for (int c = 0; c < 64; c++) {
-                    if ((a[r] >>> c & 1L) != 0) {
-                        expected[c] |= 1L << r;
+    void aLaneReadsTheWordAtItsOwnIndex() {
+        // Lane 5 holds index 3 (planes 0 and 1), every other lane index 0.
+        long[] planes = {1L << 5, 1L << 5, 0L};
+        long[] table = {0b0001, 0b0010, 0b0100, 0b1010};
+        long[] out = new long[64];
+        BitMatrix.lookup(planes, 3, table, 4, new long[64], out);
+        assertEquals(~(1L << 5), out[0], "bit 0 of word 0 on every lane but 5");
+        assertEquals(1L << 5, out[1]);
+        assertEquals(0L, out[2]);
+        assertEquals(1L << 5, out[3]);
+    }
+
+    @Test
+    void lookupReadsEachLanesWordAsTheDefinitionSays() {
+        SplittableRandom rnd = new SplittableRandom(12);
+        long[] scratch = new long[64];
+        for (int indexBits = 1; indexBits <= 20; indexBits++) {
+            for (int dataBits = 1; dataBits <= 64; dataBits += dataBits < 17 ? 1 : 7) {
+                long keep = dataBits == 64 ? -1L : (1L << dataBits) - 1;
+                // Tables shorter and longer than the index range: indices past the end read 0.
+                int words = 1 + rnd.nextInt(Math.min(1 << indexBits, 4096) + 40);
+                long[] table = new long[words];
+                for (int i = 0; i < words; i++) {
+                    table[i] = rnd.nextLong() & keep;
+                }
+                long[] planes = new long[indexBits];
+                for (int b = 0; b < indexBits; b++) {
+                    planes[b] = rnd.nextLong();
+                }
+                long[] expected = new long[dataBits];
+                for (int lane = 0; lane < 64; lane++) {
+                    int index = 0;
+                    for (int b = 0; b < indexBits; b++) {
+                        index |= (int) (planes[b] >>> lane & 1L) << b;
+                    }
+                    long word = index < words ? table[index] : 0L;
+                    for (int b = 0; b < dataBits; b++) {
+                        expected[b] |= (word >>> b & 1L) << lane;
                     }
                 }
-            }
-            long[] t = a.clone();
-            BitMatrix.transpose64(t);
-            assertArrayEquals(expected, t);
-            BitMatrix.transpose64(t);
-            assertArrayEquals(a, t, "transposing twice gives the matrix back");
-        }
-    }
-
-    @Test
-    void aSingleBitMovesToTheMirroredPlace() {
-        long[] a = new long[64];
-        a[3] = 1L << 50;
-        BitMatrix.transpose64(a);
-        for (int r = 0; r < 64; r++) {
-            assertEquals(r == 50 ? 1L << 3 : 0L, a[r], "row " + r);
-        }
-    }
-
-    @Test
-    void narrowFormsAgreeWithTheFullTranspose() {
-        SplittableRandom rnd = new SplittableRandom(12);
-        for (int n = 1; n <= 64; n++) {
-            long keep = n == 64 ? -1L : (1L << n) - 1;
-            long[] rows = new long[64];
-            long[] cols = new long[64];
-            for (int r = 0; r < 64; r++) {
-                rows[r] = r < n ? rnd.nextLong() : 0L;
-                cols[r] = rnd.nextLong() & keep;
-            }
-            long[] full = rows.clone();
-            BitMatrix.transpose64(full);
-            long[] narrow = rows.clone();
-            // Rows past n hold garbage on entry: they must not be read.
-            for (int r = n; r < 64; r++) {
-                narrow[r] = rnd.nextLong();
-            }
-            BitMatrix.transposeFromRows(narrow, n);
-            assertArrayEquals(full, narrow, "from " + n + " rows");
-
-            long[] fullCols = cols.clone();
-            BitMatrix.transpose64(fullCols);
-            long[] narrowCols = cols.clone();
-            BitMatrix.transposeToRows(narrowCols, n);
-            for (int r = 0; r < n; r++) {
-                assertEquals(fullCols[r], narrowCols[r], "to " + n + " rows, row " + r);
+                long[] out = new long[64];
+                long[] before = planes.clone();
+                BitMatrix.lookup(planes, indexBits, table, dataBits, scratch, out);
+                for (int b = 0; b < dataBits; b++) {
+                    assertEquals(expected[b], out[b], indexBits + "-bit index, " + dataBits + "-bit words, plane " + b);
+                }
+                assertArrayEquals(before, planes, "the index planes are left alone");
             }
         }
     }

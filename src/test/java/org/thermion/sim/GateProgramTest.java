@@ -36,6 +36,24 @@ public class GateProgramTest {
     }
 
     @Test
+    void renumberingIsAPermutationWithTheLeadingNetsFirst() {
+        Machine m = Machines.demo();
+        int nets = m.netlist().netCount();
+        int[] data = m.rom().dataNets();
+        int[] leading = {Netlist.CONST0, Netlist.CONST1, data[3], data[0]};
+        int[] slot = new GateProgram(m.netlist()).renumber(nets, leading);
+        assertEquals(0, slot[Netlist.CONST0]);
+        assertEquals(1, slot[Netlist.CONST1]);
+        assertEquals(2, slot[data[3]]);
+        assertEquals(3, slot[data[0]]);
+        boolean[] taken = new boolean[nets];
+        for (int n = 0; n < nets; n++) {
+            assertFalse(taken[slot[n]], "slot " + slot[n] + " given twice");
+            taken[slot[n]] = true;
+        }
+    }
+
+    @Test
     void syntheticMachineSettlesLikeTheNetlistOrder() {
         Diagnostics d = new Diagnostics();
         Machine m = new Elaborator(new SourceSet(), d)

@@ -32,20 +32,32 @@ class LogicVersusIsaTest {
             for (int lane = 0; lane < 64; lane++) {
                 programs[lane] = randomRom(m, rng);
             }
-            compare(m, programs, rng, "run " + run);
+            compare(m, programs, rng, "run " + run, 0);
         }
     }
 
     @Test
     @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void oneProgramOnAllLanesWithDifferentInputsSoThePcsDrift() {
+        sharedProgram(SEED + 1, "shared run ", 0);
+    }
+
+    @Test
+    @Timeout(value = 60, unit = TimeUnit.SECONDS)
+    void lanesThatRunAlikeThenPartKeepTheirOwnPcs() {
+        // Alike, every lane holds one PC (the simulator's scalar path, jumps included); then the
+        // lanes' inputs differ and their PCs part.
+        sharedProgram(SEED + 2, "alike-then-parted run ", CYCLES / 2);
+    }
+
+    private static void sharedProgram(long seed, String what, int alike) {
         Machine m = Machines.demo();
-        SplittableRandom rng = new SplittableRandom(SEED + 1);
+        SplittableRandom rng = new SplittableRandom(seed);
         for (int run = 0; run < 8; run++) {
             long[] rom = randomRom(m, rng);
             long[][] programs = new long[64][];
             java.util.Arrays.fill(programs, rom);
-            compare(m, programs, rng, "shared run " + run);
+            compare(m, programs, rng, what + run, alike);
         }
     }
 
@@ -58,8 +70,11 @@ class LogicVersusIsaTest {
         return rom;
     }
 
-    /** Lanes run programs[lane]; when every lane has the same ROM it is loaded, else forced per lane. */
-    private static void compare(Machine m, long[][] programs, SplittableRandom rng, String what) {
+    /**
+     * Lanes run programs[lane]; when every lane has the same ROM it is loaded, else forced per lane.
+     * Before cycle {@code alike} every lane gets the same inputs.
+     */
+    private static void compare(Machine m, long[][] programs, SplittableRandom rng, String what, int alike) {
         boolean shared = true;
         for (long[] p : programs) {
             shared &= p == programs[0];
@@ -80,7 +95,7 @@ class LogicVersusIsaTest {
         int width = m.rom().width();
         for (int c = 0; c < CYCLES; c++) {
             for (int i = 0; i < inputs; i++) {
-                long lanes = rng.nextLong();
+                long lanes = c < alike ? (rng.nextBoolean() ? -1L : 0L) : rng.nextLong();
                 sim.setInput(i, lanes);
                 for (int lane = 0; lane < 64; lane++) {
                     ref[lane].setInput(i, (lanes >>> lane & 1) == 1);
