@@ -111,7 +111,7 @@ final class BenchCommand implements Callable<Integer> {
         out.println("gate evals: netlist gates evaluated per second, each over a 64-bit word; lane-evals count each of the");
         out.println("64 lanes. 1 lane: every lane runs the same inputs; 64 lanes: independent random inputs per lane.");
         out.println("Default engine: auto, which takes the compiled engine for small machines and for long runs "
-                + "like these (see run --help).");
+                + "like these short of the largest netlists (see run --help).");
     }
 
     static String value(BenchRow r) {

@@ -81,7 +81,7 @@ final class RunCommand implements Callable<Integer> {
 
     @Option(names = "--engine", paramLabel = "ENGINE", defaultValue = "auto",
             description = "compiled (the logic as generated straight-line bytecode), array (flat gate arrays) or auto "
-                    + "(compiled for small machines and long runs, array otherwise); default ${DEFAULT-VALUE}. "
+                    + "(compiled for small machines, and for long runs on all but the largest, array otherwise); default ${DEFAULT-VALUE}. "
                     + "All give the same results; unknown-mode runs use the array engine.")
     String engine;
 

@@ -10,7 +10,7 @@ import java.util.Locale;
  * straight-line bytecode (milliseconds to generate, then the JIT's warm-up); {@code array}
  * walks the flat gate arrays; {@code auto}, the default, takes the compiled engine where it
  * pays: on small netlists, whose generated code the JIT compiles at once, and on long runs,
- * which repay the warm-up of a big one. All give identical results; three-valued settles
+ * which repay the warm-up of a big one, short of the very largest. All give identical results; three-valued settles
  * always run on the array engine's loop.
  */
 public enum Engine {
@@ -25,8 +25,16 @@ public enum Engine {
      * 10^4 cycles on (at 9376 gates the array engine still won a 10^5-cycle run).
      */
     static final int SMALL_GATES = 4000;
-    /** Runs of at least this many gate evaluations take the compiled engine at any size. */
+    /** Runs of at least this many gate evaluations take the compiled engine, up to {@link #LARGE_GATES}. */
     static final double LONG_RUN_EVALUATIONS = 2e10;
+    /**
+     * Past this many gates the array engine is the faster one even once warm: measured by
+     * {@code bench}, the compiled engine still ran 1.26 x the array engine's cycles/s at 46,888
+     * gates but 0.83 x at 93,792, where its machine code (megabytes, read once per settle)
+     * streams through the instruction cache while the array engine, its nets numbered in the
+     * order it reads them, keeps to the data caches.
+     */
+    static final int LARGE_GATES = 60_000;
     /** A run length long enough that {@code auto} compiles any netlist ({@link #forRun}). */
     public static final long LONG_RUN_CYCLES = 100_000_000L;
 
@@ -53,9 +61,13 @@ public enum Engine {
         if (this != AUTO) {
             return this;
         }
-        int gates = machine.netlist().gates().size();
-        double evaluations = (double) gates * Math.max(1, machine.clock().phases()) * cycles;
-        return gates <= SMALL_GATES || evaluations >= LONG_RUN_EVALUATIONS ? COMPILED : ARRAY;
+        return choose(machine.netlist().gates().size(), machine.clock().phases(), cycles);
+    }
+
+    /** What {@code auto} takes for {@code cycles} cycles of a netlist of {@code gates} gates and {@code phases} phases. */
+    static Engine choose(int gates, int phases, long cycles) {
+        double evaluations = (double) gates * Math.max(1, phases) * cycles;
+        return gates <= SMALL_GATES || evaluations >= LONG_RUN_EVALUATIONS && gates <= LARGE_GATES ? COMPILED : ARRAY;
     }
 
     /** A simulator of {@code machine} on this engine, for a run of unknown length. */

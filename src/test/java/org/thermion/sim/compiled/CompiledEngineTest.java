@@ -162,6 +162,14 @@ class CompiledEngineTest {
     }
 
     @Test
+    void autoLeavesTheLargestNetlistsToTheArrayEngineEvenOnLongRuns() {
+        assertThat(Engine.choose(46_888, 2, 1_000_000)).isEqualTo(Engine.COMPILED);
+        assertThat(Engine.choose(93_792, 2, 1_000_000)).isEqualTo(Engine.ARRAY);
+        assertThat(Engine.choose(93_792, 2, 10)).isEqualTo(Engine.ARRAY);
+        assertThat(Engine.choose(137, 2, 1)).isEqualTo(Engine.COMPILED);
+    }
+
+    @Test
     void engineWordsParse() {
         assertThat(Engine.parse("compiled")).isEqualTo(Engine.COMPILED);
         assertThat(Engine.parse("Array")).isEqualTo(Engine.ARRAY);
