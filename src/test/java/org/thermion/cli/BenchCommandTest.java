@@ -22,7 +22,8 @@ class BenchCommandTest {
                 .contains("\"measure\": \"heap per stage instance\"", "\"target\": \"<= 2 KB\"")
                 .contains("\"measure\": \"array, 64 lanes / 1 lane (lane-evals)\"", "\"target\": \">= 40 x\"")
                 .contains("skipped: 137 gates is past --compile-max 0")
-                .contains("\"measure\": \"verify: cases/s\"", "\"measure\": \"powerup: solve 30 s\"");
+                .contains("\"measure\": \"verify: cases/s\"", "\"measure\": \"powerup: solve 30 s\"", "\"target\": \"<= 0.2 s\"")
+                .contains("\"target\": \"<= 2 s\"");
     }
 
     @Test
