@@ -6,6 +6,7 @@ import java.util.List;
 
 /** An aligned text table: text columns left, numeric columns right. */
 public final class Table {
+    private static final java.util.regex.Pattern NUMBER = java.util.regex.Pattern.compile("[-+]?[0-9.,]+\\s*[a-zA-Z%]*");
     private final String[] header;
     private final List<String[]> rows = new ArrayList<>();
 
@@ -28,7 +29,7 @@ public final class Table {
         for (String[] r : rows) {
             for (int i = 0; i < r.length && i < w.length; i++) {
                 w[i] = Math.max(w[i], r[i].length());
-                if (!r[i].isEmpty() && !r[i].matches("[-+]?[0-9.,]+\\s*[a-zA-Z%]*")) {
+                if (numeric[i] && !r[i].isEmpty() && !NUMBER.matcher(r[i]).matches()) {
                     numeric[i] = false;
                 }
             }
