@@ -80,15 +80,21 @@ final class MachineSummary {
         out.println();
         out.println("heater strings:");
         Map<String, int[]> strings = new TreeMap<>();
+        // A big machine has tens of thousands of heaters but few distinct voltages: format each once.
+        Map<Double, String> voltText = new java.util.HashMap<>();
         for (HeaterString s : m.heaterStrings()) {
             StringBuilder key = new StringBuilder(m.rails().get(s.rail()).name()).append(": ");
             key.append(s.envelopes().size() == 1 ? "single " : s.envelopes().size() + " in series: ");
             Map<String, Integer> kinds = new TreeMap<>();
             for (int i = 0; i < s.envelopes().size(); i++) {
                 kinds.merge(m.tubes().get(m.envelopes().get(s.envelopes().get(i)).tube()).name() + " at "
-                        + Units.volts(s.ratings().get(i).volts()), 1, Integer::sum);
+                        + voltText.computeIfAbsent(s.ratings().get(i).volts(), Units::volts), 1, Integer::sum);
             }
-            key.append(kinds.entrySet().stream().map(e -> e.getValue() + " x " + e.getKey()).reduce((a, b) -> a + " + " + b).orElse(""));
+            String sep = "";
+            for (Map.Entry<String, Integer> e : kinds.entrySet()) {
+                key.append(sep).append(e.getValue()).append(" x ").append(e.getKey());
+                sep = " + ";
+            }
             strings.computeIfAbsent(key.toString(), k -> new int[1])[0]++;
         }
         for (Map.Entry<String, int[]> e : strings.entrySet()) {
