@@ -190,7 +190,8 @@ final class RunCommand implements Callable<Integer> {
                 return usage(err, "--watch: " + e.getMessage(), null);
             }
         } else {
-            NetLookup lookup = new NetLookup(m);
+            // Indexing every net's name takes a moment on a big machine: only when asked for.
+            NetLookup lookup = watch.isEmpty() ? null : new NetLookup(m);
             List<String> names = new ArrayList<>();
             List<Integer> nets = new ArrayList<>();
             for (String w : watch) {
