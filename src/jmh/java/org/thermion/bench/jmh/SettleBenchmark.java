@@ -16,6 +16,7 @@ import org.thermion.bench.Measure;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
+import org.thermion.sim.compiled.Engine;
 import org.thermion.sim.compiled.StraightLineCompiler;
 import org.thermion.synth.SyntheticMachine;
 
@@ -27,7 +28,9 @@ import java.util.function.Consumer;
 /**
  * The hot loops under JMH: one settle of the array engine, of the compiled engine through
  * the simulator, of the straight-line code called alone, and a whole machine cycle on each
- * engine. Scores are per operation; divide the gate count by them for gate evaluations/s.
+ * engine as {@code run} builds it (the compiled one with its generated latch loads), with
+ * every lane alike ({@code lanes=1}) or the lanes' PCs parted by random latches ({@code lanes=64}).
+ * Scores are per operation; divide the gate count by them for gate evaluations/s.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -39,6 +42,10 @@ public class SettleBenchmark {
     /** "demo" (the bundled example, run from the repository root) or a synthetic size. */
     @Param({"demo", "10000"})
     public String machine;
+
+    /** "1": every lane alike (latches start zero); "64": random latches part the lanes. */
+    @Param({"1", "64"})
+    public String lanes;
 
     private Simulator array;
     private Simulator compiled;
@@ -52,8 +59,8 @@ public class SettleBenchmark {
                 : new Measure.Source(machine, null, SyntheticMachine.ofSize(Integer.parseInt(machine)).text());
         Machine m = src.elaborate();
         straight = StraightLineCompiler.compileConsumer(m.netlist());
-        array = new Simulator(m);
-        compiled = new Simulator(m, straight::accept);
+        array = Engine.ARRAY.simulator(m);
+        compiled = Engine.COMPILED.simulator(m);
         SplittableRandom rnd = new SplittableRandom(3);
         long[] rom = new long[m.rom().words()];
         for (int i = 0; i < rom.length; i++) {
@@ -61,7 +68,7 @@ public class SettleBenchmark {
         }
         for (Simulator s : new Simulator[]{array, compiled}) {
             s.loadRom(rom);
-            s.reset(new InitMode.Random(3));
+            s.reset(lanes.equals("1") ? new InitMode.Zero() : new InitMode.Random(3));
         }
         values = new long[m.netlist().netCount()];
         for (int i = 2; i < values.length; i++) {
