@@ -128,26 +128,17 @@ final class GateProgram {
                 slot[n] = next++;
             }
         }
-        int[] operands = new int[code.length];
-        int count = 0;
         for (int r = 0; r < runShape.length; r++) {
             boolean list = runShape[r] >= AND_N;
             for (int p = runStart[r], e = runStart[r + 1]; p < e; ) {
                 int end = list ? p + 2 + code[p + 1] : p + 1 + arity(runShape[r]);
                 // Inputs before the output: a gate's inputs were touched first.
                 for (int k = list ? p + 2 : p + 1; k < end; k++) {
-                    operands[count++] = k;
+                    next = place(code, k, slot, next);
                 }
-                operands[count++] = p;
+                next = place(code, p, slot, next);
                 p = end;
             }
-        }
-        for (int i = 0; i < count; i++) {
-            int n = code[operands[i]];
-            if (slot[n] < 0) {
-                slot[n] = next++;
-            }
-            code[operands[i]] = slot[n];
         }
         for (int n = 0; n < nets; n++) {
             if (slot[n] < 0) {
@@ -155,6 +146,16 @@ final class GateProgram {
             }
         }
         return slot;
+    }
+
+    // Gives the net at code[k] the next slot if it has none yet, and writes its slot there.
+    private static int place(int[] code, int k, int[] slot, int next) {
+        int n = code[k];
+        if (slot[n] < 0) {
+            slot[n] = next++;
+        }
+        code[k] = slot[n];
+        return next;
     }
 
     /** Runs in the program. */

@@ -437,14 +437,7 @@ public final class Simulator {
     public void settle() {
         // Only the ROM drives its data nets, so they change only when the ROM word does.
         if (romDirty && hasRom) {
-            int a = pcAddress;
-            int w = dataNets.length;
-            if (pcUniform && romPlanes != null && forced == null && !romUnknownShown && a < romWords.length) {
-                System.arraycopy(romPlanes, a * w, val, dataBase, w);
-                romDirty = false;
-            } else {
-                computeRom();
-            }
+            computeRom();
         }
         if (threeValued) {
             settle3();
@@ -918,39 +911,55 @@ public final class Simulator {
         return address >= 0 && address < romWords.length ? romWords[address] : 0L;
     }
 
+    // Kept small, so the JIT inlines it into settle(); the rarer reads are methods of their own.
     private void computeRom() {
         int w = dataNets.length;
         if (forced != null) {
-            for (int b = 0; b < w; b++) {
-                val[dataNets[b]] = b < forced.length ? forced[b] : 0L;
-                unk[dataNets[b]] = 0L;
-            }
-        } else if (pcUniform) {
-            // Every lane reads one word; the X words are already 0 unless the last read had an unknown PC.
-            long word = romWord(pcAddress);
-            final long[] v = val;
-            final int[] d = dataNets;
-            for (int b = 0; b < w; b++) {
-                v[d[b]] = -((word >>> b) & 1L);
-            }
-            if (romUnknownShown) {
-                for (int b = 0; b < w; b++) {
-                    unk[d[b]] = 0L;
-                }
-                romUnknownShown = false;
-            }
+            romForced(w);
+        } else if (!pcUniform) {
+            romPerLane(w);
+        } else if (romPlanes != null && !romUnknownShown && pcAddress < romWords.length) {
+            // Every lane reads one word, and no X is left on the data nets from an unknown PC.
+            System.arraycopy(romPlanes, pcAddress * w, val, dataBase, w);
         } else {
-            // A ROM read per lane, from PC planes to data planes through partial bit transposes.
-            long[] m = laneMatrix;
-            BitMatrix.lookup(pcPlanes, pcPlanes.length, romWords, Math.min(w, LANES), laneScratch, m);
-            long known = ~pcUnknown;
-            for (int b = 0; b < w; b++) {
-                unk[dataNets[b]] = pcUnknown;
-                val[dataNets[b]] = b < LANES ? m[b] & known : 0L;
-            }
-            romUnknownShown |= pcUnknown != 0L;
+            romShared(w);
         }
         romDirty = false;
+    }
+
+    private void romForced(int w) {
+        for (int b = 0; b < w; b++) {
+            val[dataNets[b]] = b < forced.length ? forced[b] : 0L;
+            unk[dataNets[b]] = 0L;
+        }
+    }
+
+    // Every lane reads one word; the X words are already 0 unless the last read had an unknown PC.
+    private void romShared(int w) {
+        long word = romWord(pcAddress);
+        final long[] v = val;
+        final int[] d = dataNets;
+        for (int b = 0; b < w; b++) {
+            v[d[b]] = -((word >>> b) & 1L);
+        }
+        if (romUnknownShown) {
+            for (int b = 0; b < w; b++) {
+                unk[d[b]] = 0L;
+            }
+            romUnknownShown = false;
+        }
+    }
+
+    // A ROM read per lane, from PC planes to data planes through partial bit transposes.
+    private void romPerLane(int w) {
+        long[] m = laneMatrix;
+        BitMatrix.lookup(pcPlanes, pcPlanes.length, romWords, Math.min(w, LANES), laneScratch, m);
+        long known = ~pcUnknown;
+        for (int b = 0; b < w; b++) {
+            unk[dataNets[b]] = pcUnknown;
+            val[dataNets[b]] = b < LANES ? m[b] & known : 0L;
+        }
+        romUnknownShown |= pcUnknown != 0L;
     }
 
     /** Completed cycles since reset. */
