@@ -41,7 +41,13 @@ final class HeaterState {
 
     /** Sets resistance (with its shunt) from the wire temperature in {@code y}. */
     void resist(double[] y) {
-        double rh = model.resistance(y[wire]);
+        double k = y[wire];
+        if (!(k > 0 && k < 1e5)) {
+            throw new TransientFailure("heater of " + model.tube() + " (" + StartupNetwork.fmt(model.rating().volts())
+                    + " V " + StartupNetwork.fmt(model.rating().amps()) + " A): its temperature left the model's range ("
+                    + StartupNetwork.fmt(k) + " K): check the voltage of its rail and its dropping resistor");
+        }
+        double rh = model.resistance(k);
         ohms = rh;
         elementOhms = Double.isInfinite(shuntOhms) ? rh : rh * shuntOhms / (rh + shuntOhms);
     }

@@ -92,6 +92,11 @@ final class RailState {
             double gt = g + bg;
             vn = gt > 0 ? Math.min(vs, (a + bge) / gt) : vs;
         }
+        if (!Double.isFinite(a) || !Double.isFinite(vn)) {
+            throw new TransientFailure("rail " + rail.name() + ": the circuit has no finite solution (" + fmtV(vs)
+                    + " V through " + fmtV(rser) + " ohm to " + fmtV(g) + " S of load): check the rail's voltage, source "
+                    + "resistance and soft-start resistor");
+        }
         amps = a;
         volts = vn;
         demand = ask;
@@ -101,6 +106,10 @@ final class RailState {
         for (SoftStartState s : series) {
             s.dissipate(a);
         }
+    }
+
+    private static String fmtV(double v) {
+        return StartupNetwork.fmt(v);
     }
 
     /** A soft-start resistor sits in this rail. */

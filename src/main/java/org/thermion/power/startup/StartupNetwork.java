@@ -81,6 +81,7 @@ public final class StartupNetwork {
         List<String> noteList = new ArrayList<>();
 
         // Heater models per tube type and rating.
+        checkFinite(m);
         Map<String, Integer> modelIndex = new LinkedHashMap<>();
         List<HeaterModel> ml = new ArrayList<>();
         // Distinct strings.
@@ -258,6 +259,41 @@ public final class StartupNetwork {
         }
         softs = List.copyOf(sl);
         notes = List.copyOf(noteList);
+    }
+
+    /** Every value the transient uses must be a finite number: an infinity leaves no solution. */
+    private static void checkFinite(Machine m) {
+        List<String> bad = new ArrayList<>();
+        for (Rail r : m.rails()) {
+            if (!Double.isFinite(r.volts()) || !Double.isFinite(r.sourceOhms()) || Double.isNaN(r.limitAmps())) {
+                bad.add("rail " + r.name() + " (voltage " + r.volts() + " V, source " + r.sourceOhms() + " ohm, limit "
+                        + r.limitAmps() + " A)");
+            }
+        }
+        for (SoftStart s : m.softStarts()) {
+            if (!Double.isFinite(s.resistorOhms())) {
+                bad.add("soft start " + s.name() + " (resistor " + s.resistorOhms() + " ohm)");
+            }
+        }
+        for (StageType st : m.stages()) {
+            for (List<RailDraw> ds : List.of(st.drawLow(), st.drawHigh(), st.drawAlways())) {
+                for (RailDraw d : ds) {
+                    if (!Double.isFinite(d.amps())) {
+                        bad.add("stage " + st.name() + " (draw " + d.amps() + " A from rail "
+                                + m.rails().get(d.rail()).name() + ")");
+                    }
+                }
+            }
+        }
+        for (HeaterString hs : m.heaterStrings()) {
+            if (!Double.isFinite(hs.dropOhms())) {
+                bad.add("a heater string on rail " + m.rails().get(hs.rail()).name() + " (dropping resistor "
+                        + hs.dropOhms() + " ohm)");
+            }
+        }
+        if (!bad.isEmpty()) {
+            throw new TransientFailure("the power-up model needs finite values; not finite: " + String.join("; ", bad));
+        }
     }
 
     /** Builds the network of {@code m} under the given assumptions. */

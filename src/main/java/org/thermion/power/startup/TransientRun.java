@@ -1,5 +1,6 @@
 package org.thermion.power.startup;
 
+import org.hipparchus.exception.MathRuntimeException;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
@@ -94,7 +95,11 @@ final class TransientRun {
 
         @Override
         public double[] computeDerivatives(double t, double[] y) {
-            evaluate(y);
+            try {
+                evaluate(y);
+            } catch (TransientFailure e) {
+                throw new TransientFailure("at t = " + StartupNetwork.fmt(t) + " s, " + e.getMessage());
+            }
             double[] d = new double[dimension];
             for (HeaterState h : heaters) {
                 h.derivatives(y, d);
@@ -154,7 +159,11 @@ final class TransientRun {
             }
         }
         double t = 0;
-        observe(0, y, true);
+        try {
+            observe(0, y, true);
+        } catch (TransientFailure e) {
+            throw new TransientFailure("at switch-on, " + e.getMessage());
+        }
         updateLimits(0);
         long[] nextSample = {1};
         if (heaters.length == 0) {
@@ -211,7 +220,13 @@ final class TransientRun {
                     observe(tc, in.getCurrentState().getPrimaryState(), false);
                 }
             });
-            ODEStateAndDerivative fin = dp.integrate(ode, new ODEState(t, y), segEnd);
+            ODEStateAndDerivative fin;
+            try {
+                fin = dp.integrate(ode, new ODEState(t, y), segEnd);
+            } catch (MathRuntimeException e) {
+                throw new TransientFailure("the heater temperatures could not be integrated beyond t = "
+                        + StartupNetwork.fmt(t) + " s (" + e.getMessage() + "): check the rails' voltages and resistances");
+            }
             evaluations += dp.getEvaluations();
             t = fin.getTime();
             y = fin.getPrimaryState().clone();
