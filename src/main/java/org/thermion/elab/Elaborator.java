@@ -360,7 +360,7 @@ public final class Elaborator {
                                 int module = modules.size();
                                 modules.add(new ModuleInstance(module, name, "softstart", 0));
                                 int env = packer.place(st.tube(), module, st.sections());
-                                trigger = new BypassTrigger.ThyratronWarm(env, st.tube(), st.loadOhms(), st.loadRail(), 0.9);
+                                trigger = new BypassTrigger.ThyratronWarm(env, st.tube(), st.loadOhms(), st.loadRail());
                             }
                         }
                     } else {

@@ -66,7 +66,7 @@ public final class StartupNetwork {
 
     /** A soft-start network as the solver sees it. */
     record Soft(String name, int rail, double declaredOhms, double ratedWatts, double delay, int thyState,
-                double warmFraction, int fromRail, double branchSiemens, double branchVolts, boolean picksUp,
+                int fromRail, double branchSiemens, double branchVolts, boolean picksUp,
                 double operate, RelayDriverCheck check) {
         boolean thyratron() {
             return thyState >= 0;
@@ -224,7 +224,7 @@ public final class StartupNetwork {
         for (SoftStart ss : m.softStarts()) {
             double delay = Double.NaN;
             int thy = -1;
-            double warm = Double.NaN, bs = 0, bv = 0;
+            double bs = 0, bv = 0;
             int from = -1;
             boolean picks = true;
             RelayDriverCheck check = null;
@@ -235,7 +235,6 @@ public final class StartupNetwork {
                 if (thy < 0) {
                     throw new IllegalArgumentException("soft start " + ss.name() + ": its thyratron has no heater string");
                 }
-                warm = tw.warmFraction();
                 from = tw.fromRail();
                 TubeType tube = m.tubes().get(tw.tube());
                 double arc = tube.arcDropVolts();
@@ -246,6 +245,11 @@ public final class StartupNetwork {
                 Rail fr = m.rails().get(from);
                 check = RelayDriverCheck.of(tube.name(), fr.name(), fr.volts(), fr.sourceOhms(), arc, tw.plateOhms(),
                         ss.relay(), tube.avgCathodeAmps(), tube.peakCathodeAmps(), Double.NaN, tube.warmupSeconds());
+                if (tube.warmupSeconds() > 0) {
+                    noteList.add(tube.name() + " of soft start " + ss.name() + ": its anode has rail " + fr.name()
+                            + "'s voltage from switch-on, before its rated " + fmt(tube.warmupSeconds())
+                            + " s of cathode heating (a rating a builder may knowingly bend)");
+                }
                 bs = 1 / (tw.plateOhms() + ss.relay().coilOhms());
                 bv = arc;
                 picks = check.picksUp();
@@ -254,7 +258,7 @@ public final class StartupNetwork {
                             + " V, below its pick-up; the bypass never closes");
                 }
             }
-            sl.add(new Soft(ss.name(), ss.rail(), ss.resistorOhms(), ss.ratedWatts(), delay, thy, warm, from, bs, bv,
+            sl.add(new Soft(ss.name(), ss.rail(), ss.resistorOhms(), ss.ratedWatts(), delay, thy, from, bs, bv,
                     picks, ss.relay().operateSeconds(), check));
         }
         softs = List.copyOf(sl);
