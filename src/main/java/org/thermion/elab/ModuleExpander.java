@@ -328,7 +328,7 @@ final class ModuleExpander {
         int stage;
         if (l.stage() != null) {
             stage = parts.stage(l.stage().text(), l.stage().span());
-            if (stage >= 0 && parts.stages.get(stage).function() != StageFunction.LATCH) {
+            if (stage >= 0 && parts.stages.get(stage).function().role() != StageFunction.Role.STORAGE) {
                 diags.error(l.stage().span(), "stage '" + l.stage().text() + "' is not a latch or flip-flop",
                         "name a stage whose function is latch");
                 stage = -1;
@@ -749,9 +749,8 @@ final class ModuleExpander {
         }
         StageType st = parts.stages.get(s);
         int max = st.fanIn();
-        int min = st.function() == StageFunction.NOT || st.function() == StageFunction.BUFFER || st.function().isDriver()
-                || st.function() == StageFunction.LATCH ? 1 : 2;
-        if (st.function() == StageFunction.LATCH) {
+        int min = st.function().minInputs();
+        if (!st.function().callable()) {
             diags.error(c.span(), "stage '" + name + "' is a latch; declare it with a `latch` line", null);
             return null;
         }
@@ -815,21 +814,7 @@ final class ModuleExpander {
                 in[i] = emit(f, c.args().get(i), -1, span);
             }
             StageType st = parts.stages.get(c.stage());
-            GateFn fn = switch (st.function()) {
-                case NOT -> GateFn.NOT;
-                case NAND -> GateFn.NAND;
-                case NOR -> GateFn.NOR;
-                case AND -> GateFn.AND;
-                case OR -> GateFn.OR;
-                case XOR -> GateFn.XOR;
-                default -> GateFn.BUF;
-            };
-            if (in.length == 1 && (fn == GateFn.NAND || fn == GateFn.NOR)) {
-                fn = GateFn.NOT;
-            } else if (in.length == 1 && (fn == GateFn.AND || fn == GateFn.OR)) {
-                fn = GateFn.BUF;
-            }
-            int out = nb.gate(fn, c.stage(), in, dest, f.module, f.path, span);
+            int out = nb.gate(st.function().gate(in.length), c.stage(), in, dest, f.module, f.path, span);
             if (st.function().isDriver()) {
                 driverOutputs.add(out);
             }
