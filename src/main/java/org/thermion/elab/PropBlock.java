@@ -43,7 +43,7 @@ final class PropBlock {
             Span earlier = seen.putIfAbsent(key, q.key().span());
             if (earlier != null && !p.repeatable()) {
                 diags.error(q.key().span(), "'" + key + "' given twice in " + title,
-                        "first given at line " + earlier.line() + "; keep one");
+                        "first given at line " + earlier.line() + ", column " + earlier.col() + "; keep one");
                 continue;
             }
             if (q.hasBlock() && p.block() == null) {

@@ -1,6 +1,7 @@
 package org.thermion.elab;
 
 import org.thermion.lang.Diagnostics;
+import org.thermion.lang.Names;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Prop;
 import org.thermion.lang.ast.Value;
@@ -161,6 +162,12 @@ final class PropReader {
             if (v instanceof Value.Sym s && s.text().equals(",")) {
                 pos++;
             } else if ((v instanceof Value.Word || v instanceof Value.Num) && !stop.contains(v.text())) {
+                String option = v.text().matches(".*[0-9].*") ? null : Names.nearestWord(v.text(), stop, 2);
+                if (option != null) {
+                    // Part names carry digits (12AU7, T1); a plain word near an option is a slip.
+                    fail(v.span(), "unexpected '" + v.text() + "'", "did you mean '" + option + "'?");
+                    return;
+                }
                 got.add(v);
                 pos++;
             } else {

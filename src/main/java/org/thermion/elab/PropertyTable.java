@@ -47,13 +47,13 @@ final class PropertyTable {
                     .byDefault("triode"),
             Property.of("sections", "sections in one envelope", whole("number of sections", 1, 4)).byDefault(1)
                     .source("receiving tubes hold at most four sections (common practice)"),
-            Property.of("heater", "heater rating, one line per wiring (series or parallel pins)",
+            Property.of("heater", "heater rating; one line per wiring, series or parallel pins",
                     q("heater voltage", Unit.VOLT, above(0, 200)), q("current", "heater current", Unit.AMPERE, above(0, 20)))
                     .required("heater 6.3 V 300 mA").many()
                     .source("the data sheet; " + PLAUSIBLE + "s 200 V and 20 A"),
             Property.of("warmup", "heater warm-up time", q("warm-up time", Unit.SECOND, above(0, 600)))
                     .byDefault("the heater model's standard warm-up").source(PLAUSIBLE + " of 10 minutes"),
-            Property.of("coldratio", "hot-to-cold heater resistance ratio", plain("cold-to-hot resistance ratio", from(1, 30)))
+            Property.of("coldratio", "hot-to-cold heater resistance ratio", plain("hot-to-cold resistance ratio", from(1, 30)))
                     .byDefault("from the tungsten table (about 7)").source("tungsten between room temperature and 1400 K; "
                             + PLAUSIBLE),
             Property.of("cgk", "grid-cathode capacitance per section", q("grid-cathode capacitance", Unit.FARAD, from(0, 1e-9)))

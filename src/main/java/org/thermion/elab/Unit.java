@@ -87,9 +87,10 @@ enum Unit {
             return Double.isNaN(x) ? "?" : x > 0 ? "infinite" : "-infinite";
         }
         double a = Math.abs(x);
+        BigDecimal d = new BigDecimal(x).round(new MathContext(4)).stripTrailingZeros();
         if (a != 0 && (a >= 1e6 || a < 1e-3)) {
-            return String.format(Locale.ROOT, "%.3e", x);
+            return d.toString().replace("E+", "e").replace("E", "e");
         }
-        return new BigDecimal(x).round(new MathContext(4)).stripTrailingZeros().toPlainString();
+        return d.toPlainString();
     }
 }
