@@ -3,7 +3,6 @@ package org.thermion.cli;
 import org.thermion.model.Machine;
 import org.thermion.power.Budget;
 import org.thermion.power.CurrentMeter;
-import org.thermion.power.ProgramRun;
 import org.thermion.sim.InitMode;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -100,7 +99,7 @@ final class BudgetCommand implements Callable<Integer> {
                 err.flush();
                 return ExitCodes.BAD_INPUT;
             }
-            meter = ProgramRun.run(m, in.rom(), in.stimulus(), cycles, mode);
+            meter = CurrentMeter.ofRun(m, in.rom(), in.stimulus(), cycles, mode);
             run = new BudgetReport.Run(program == null ? null : program.toString(),
                     inputs == null ? null : inputs.toString(), cycles, init);
         }
