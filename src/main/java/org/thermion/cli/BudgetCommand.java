@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.cli.report.Format;
 import org.thermion.model.Machine;
 import org.thermion.power.Budget;
 import org.thermion.power.CurrentMeter;
@@ -105,12 +106,7 @@ final class BudgetCommand implements Callable<Integer> {
         }
         Budget budget = new Budget(m, meter);
         BudgetReport report = new BudgetReport(budget, run);
-        switch (format) {
-            case text -> ReportWriter.text(out, report.head(), report.tables(false), report.tail());
-            case csv -> ReportWriter.csv(out, report.fields(), report.tables(true));
-            case json -> ReportWriter.json(out, report.fields(), report.tables(true));
-            default -> throw new IllegalStateException("unknown format " + format);
-        }
+        format.write(out, report.report());
         out.flush();
         err.flush();
         return budget.failed() ? ExitCodes.CHECK_FAILED : ExitCodes.OK;

@@ -69,10 +69,14 @@ public final class VcdWriter {
     /** Groups each module's bus bits into vectors where they form one run of indices; the rest stay bits. */
     private void declare(int[] dumped, BitSet latchNets) {
         int[] netModule = machine.netlist().netModule();
+        Map<Integer, String> prefixes = new java.util.HashMap<>();
+        for (ModuleInstance mod : machine.modules()) {
+            prefixes.put(mod.id(), mod.path().isEmpty() ? "" : mod.path() + ".");
+        }
         Map<String, TreeMap<Integer, Integer>> buses = new LinkedHashMap<>();
         List<Object> order = new ArrayList<>();
         for (int n : dumped) {
-            String local = local(n);
+            String local = local(n, prefixes);
             Matcher mt = BUS_BIT.matcher(local);
             if (mt.matches()) {
                 String key = netModule[n] + "/" + mt.group(1);
@@ -89,7 +93,7 @@ public final class VcdWriter {
         }
         for (Object o : order) {
             if (o instanceof Integer n) {
-                scalar(n, latchNets, netModule);
+                scalar(n, latchNets, netModule, prefixes);
                 continue;
             }
             TreeMap<Integer, Integer> bits = buses.get((String) o);
@@ -101,7 +105,7 @@ public final class VcdWriter {
                 alike &= latchNets.get(n) == latched;
             }
             if (bits.size() < 2 || hi - lo + 1 != bits.size() || !alike) {
-                bits.values().forEach(n -> scalar(n, latchNets, netModule));
+                bits.values().forEach(n -> scalar(n, latchNets, netModule, prefixes));
                 continue;
             }
             int first = bits.firstEntry().getValue();
@@ -112,21 +116,16 @@ public final class VcdWriter {
         }
     }
 
-    private void scalar(int n, BitSet latchNets, int[] netModule) {
-        vars.add(new Var(identifier(vars.size()), new int[] {n}, latchNets.get(n), netModule[n], reference(local(n))));
+    private void scalar(int n, BitSet latchNets, int[] netModule, Map<Integer, String> prefixes) {
+        vars.add(new Var(identifier(vars.size()), new int[] {n}, latchNets.get(n), netModule[n],
+                reference(local(n, prefixes))));
     }
 
-    /** The net's name within its module's scope. */
-    private String local(int net) {
+    /** The net's name within its module's scope ({@code prefixes}: each module's path and a dot, by id). */
+    private String local(int net, Map<Integer, String> prefixes) {
         String name = machine.netlist().netName(net);
-        int module = machine.netlist().netModule()[net];
-        for (ModuleInstance mod : machine.modules()) {
-            if (mod.id() == module) {
-                String prefix = mod.path().isEmpty() ? "" : mod.path() + ".";
-                return name.startsWith(prefix) ? name.substring(prefix.length()) : name;
-            }
-        }
-        return name;
+        String prefix = prefixes.getOrDefault(machine.netlist().netModule(net), "");
+        return name.startsWith(prefix) ? name.substring(prefix.length()) : name;
     }
 
     /** The dump as a run observer on {@code sim}: header at the run's start, changes each phase, the end. */
@@ -184,10 +183,10 @@ public final class VcdWriter {
         sb.append("$version\n  ").append(version).append("\n$end\n");
         sb.append("$timescale 1 ").append(time.unit()).append(" $end\n");
         List<ModuleInstance> mods = machine.modules();
-        int[] netModule = machine.netlist().netModule();
+        Tree tree = new Tree();
         for (ModuleInstance top : mods) {
             if (top.parent() < 0) {
-                scope(sb, top, machine.name(), netModule, top == firstTop(mods));
+                scope(sb, tree, top, machine.name(), top == firstTop(mods));
             }
         }
         sb.append("$enddefinitions $end\n");
@@ -214,41 +213,48 @@ public final class VcdWriter {
         return null;
     }
 
-    private void scope(StringBuilder sb, ModuleInstance mod, String name, int[] netModule, boolean withPcHere) {
-        if (!hasVars(mod.id(), netModule) && !withPcHere) {
+    /** The module tree once: each module's variables and children, and whether anything is dumped under it. */
+    private final class Tree {
+        final Map<Integer, List<Var>> varsOf = new java.util.HashMap<>();
+        final Map<Integer, List<ModuleInstance>> children = new java.util.HashMap<>();
+        final java.util.Set<Integer> dumped = new java.util.HashSet<>();
+
+        Tree() {
+            for (Var v : vars) {
+                varsOf.computeIfAbsent(v.module(), k -> new ArrayList<>()).add(v);
+            }
+            Map<Integer, Integer> parent = new java.util.HashMap<>();
+            for (ModuleInstance m : machine.modules()) {
+                children.computeIfAbsent(m.parent(), k -> new ArrayList<>()).add(m);
+                parent.put(m.id(), m.parent());
+            }
+            for (Integer m : varsOf.keySet()) {
+                // Mark the module and its ancestors; stop where a mark already stands.
+                Integer p = m;
+                while (p != null && p >= 0 && dumped.add(p)) {
+                    p = parent.get(p);
+                }
+            }
+        }
+    }
+
+    private void scope(StringBuilder sb, Tree tree, ModuleInstance mod, String name, boolean withPcHere) {
+        if (!tree.dumped.contains(mod.id()) && !withPcHere) {
             return;
         }
         sb.append("$scope module ").append(name).append(" $end\n");
-        for (Var v : vars) {
-            if (v.module() == mod.id()) {
-                sb.append("$var wire ").append(v.nets().length).append(' ').append(v.id()).append(' ')
-                        .append(v.reference()).append(" $end\n");
-            }
+        for (Var v : tree.varsOf.getOrDefault(mod.id(), List.of())) {
+            sb.append("$var wire ").append(v.nets().length).append(' ').append(v.id()).append(' ')
+                    .append(v.reference()).append(" $end\n");
         }
         if (withPcHere && withPc) {
             sb.append("$var reg ").append(machine.pc().width()).append(' ').append(pcId).append(" pc [")
                     .append(machine.pc().width() - 1).append(":0] $end\n");
         }
-        for (ModuleInstance child : machine.modules()) {
-            if (child.parent() == mod.id()) {
-                scope(sb, child, child.leaf(), netModule, false);
-            }
+        for (ModuleInstance child : tree.children.getOrDefault(mod.id(), List.of())) {
+            scope(sb, tree, child, child.leaf(), false);
         }
         sb.append("$upscope $end\n");
-    }
-
-    private boolean hasVars(int module, int[] netModule) {
-        for (Var v : vars) {
-            if (v.module() == module) {
-                return true;
-            }
-        }
-        for (ModuleInstance child : machine.modules()) {
-            if (child.parent() == module && hasVars(child.id(), netModule)) {
-                return true;
-            }
-        }
-        return false;
     }
 
     /** A reference as IEEE 1364 writes it: {@code name}, {@code bus [3]}, or an escaped identifier. */

@@ -30,7 +30,7 @@ public record DecodeLamp(String mnemonic, long opcode, int net) {
         for (Instruction ins : byCode) {
             String wanted = name + "[" + ins.opcode() + "]";
             for (int net = 0; net < n.netCount(); net++) {
-                if (n.netModule()[net] == top && wanted.equals(n.netName(net))) {
+                if (n.netModule(net) == top && wanted.equals(n.netName(net))) {
                     lines.add(new DecodeLamp(ins.mnemonic(), ins.opcode(), net));
                     break;
                 }

@@ -613,7 +613,7 @@ public final class Verifier {
             }
             String fn = g.stage() < 0 ? (g.fn() == org.thermion.model.GateFn.NOT ? "complement" : "wire")
                     : g.fn().name().toLowerCase(Locale.ROOT);
-            out.add(new TraceLine(e[1], nl.netName(n), module(nl.netModule()[n]), fn, ins.toString(), bit(at[n], lane)));
+            out.add(new TraceLine(e[1], nl.netName(n), module(nl.netModule(n)), fn, ins.toString(), bit(at[n], lane)));
         }
         return List.copyOf(out);
     }
@@ -670,7 +670,7 @@ public final class Verifier {
                 boolean va = bit(a.atPhase[p][n], la);
                 boolean vb = bit(b.atPhase[p][n], lb);
                 if (va != vb) {
-                    out.add(new NetDiff(n, nl.netName(n), module(nl.netModule()[n]), p, va, vb));
+                    out.add(new NetDiff(n, nl.netName(n), module(nl.netModule(n)), p, va, vb));
                     if (out.size() >= opt.maxNets()) {
                         break;
                     }
