@@ -66,6 +66,10 @@ public final class Elaborator {
         }
         try {
             return buildChecked(decls, files);
+        } catch (ElaborationInterrupted e) {
+            Thread.currentThread().interrupt();
+            diags.error(firstSpan(files), "elaboration stopped: interrupted", null);
+            return null;
         } catch (TooLarge e) {
             diags.error(firstSpan(files), "expansion stopped: the description grows past " + NetBuilder.LIMIT
                     + " stage instances (or its loops past 10,000,000 steps)",
@@ -111,11 +115,11 @@ public final class Elaborator {
         if (top == null) {
             return null;
         }
-        ModuleExpander ex = new ModuleExpander(decls, parts, diags, mb.phases);
-        Map<String, Signal> scope = ex.expandTop(top);
+        ModuleExpansion ex = ModuleExpansion.of(top, decls, parts, diags, mb.phases);
+        Map<String, Signal> scope = ex.topScope;
         NetBuilder nb = ex.nb;
         topOutputs = new java.util.HashSet<>();
-        for (Signal s : ex.ports.get(0)) {
+        for (Signal s : ex.tree.ports.get(0)) {
             if (s.kind() == Signal.Kind.OUT) {
                 topOutputs.add(s.name());
             }
@@ -212,7 +216,7 @@ public final class Elaborator {
         }
 
         Packer packer = new Packer(parts, diags);
-        List<ModuleInstance> modules = new ArrayList<>(ex.modules);
+        List<ModuleInstance> modules = new ArrayList<>(ex.tree.modules);
         List<SoftStart> softStarts = new ArrayList<>();
         int[] gateEnvelope = new int[nb.gates.size()];
         int[] latchEnvelope = new int[nb.latches.size()];
@@ -245,7 +249,7 @@ public final class Elaborator {
         if (order == null) {
             return null;
         }
-        new Linter(nb, ex, diags, inputs).run();
+        new Linter(nb, ex.tree, ex.mapper.driverOutputs, diags, inputs).run();
         if (diags.hasErrors()) {
             return null;
         }

@@ -187,7 +187,7 @@ public final class Simulator {
         out = new int[gateCount];
         int total = 0;
         for (Gate g : gates) {
-            total += g.inputs().length;
+            total += g.arity();
         }
         list = new int[total];
         int at = 0;

@@ -154,8 +154,9 @@ public final class StaticTiming {
             if (pc.jumpNet() >= 0) {
                 list.add(new Endpoint(pc.jumpNet(), pc.phase(), 0, "pc (jump)"));
             }
-            for (int i = 0; i < pc.targetNets().length; i++) {
-                list.add(new Endpoint(pc.targetNets()[i], pc.phase(), 0, "pc (target bit " + i + ")"));
+            int[] targets = pc.targetNets();
+            for (int i = 0; i < targets.length; i++) {
+                list.add(new Endpoint(targets[i], pc.phase(), 0, "pc (target bit " + i + ")"));
             }
         }
         return list;
@@ -249,7 +250,7 @@ public final class StaticTiming {
     private PathStep step(int net, int edge, double delay, double arrival) {
         char c = edge == RISE ? 'r' : 'f';
         String netName = netlist.netName(net);
-        String module = module(netlist.netModule()[net]);
+        String module = module(netlist.netModule(net));
         if (driverGate[net] >= 0) {
             Gate g = netlist.gates().get(driverGate[net]);
             if (g.stage() < 0) {

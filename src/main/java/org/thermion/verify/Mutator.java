@@ -52,8 +52,8 @@ public final class Mutator {
             if (to != null) {
                 all.add(new Fault.SwapFunction(g.id(), g.fn(), to));
             }
-            for (int pin = 0; pin < g.inputs().length; pin++) {
-                int in = g.inputs()[pin];
+            for (int pin = 0; pin < g.arity(); pin++) {
+                int in = g.input(pin);
                 if (in <= Netlist.CONST1) {
                     continue;
                 }
@@ -119,7 +119,7 @@ public final class Mutator {
         }
         if (f instanceof Fault.InvertInput i) {
             Gate g = nl.gates().get(i.gate());
-            return "gate driving " + nl.netName(g.output()) + ": input " + nl.netName(g.inputs()[i.pin()]) + " inverted";
+            return "gate driving " + nl.netName(g.output()) + ": input " + nl.netName(g.input(i.pin())) + " inverted";
         }
         if (f instanceof Fault.MoveWire w) {
             Gate g = nl.gates().get(w.gate());
@@ -170,7 +170,7 @@ public final class Mutator {
             gates.set(s.gate(), new Gate(g.id(), s.to(), g.inputs(), g.output(), g.stage(), g.module()));
         } else if (f instanceof Fault.InvertInput i) {
             Gate g = gates.get(i.gate());
-            int inv = addNet(names, modules, nl.netName(g.inputs()[i.pin()]) + "~", g.module());
+            int inv = addNet(names, modules, nl.netName(g.input(i.pin())) + "~", g.module());
             int[] ins = g.inputs().clone();
             Gate not = new Gate(-1, GateFn.NOT, new int[]{ins[i.pin()]}, inv, -1, g.module());
             ins[i.pin()] = inv;

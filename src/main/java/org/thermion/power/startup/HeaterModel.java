@@ -135,11 +135,6 @@ public final class HeaterModel {
         return radiationK * (t2 * t2 - a2 * a2);
     }
 
-    /** dT/dt when the heater carries {@code amps}. */
-    public double heatingRate(double kelvin, double amps) {
-        return (amps * amps * resistance(kelvin) - radiated(kelvin)) / heatCapacity;
-    }
-
     /** Temperature as a fraction of the operating temperature. */
     public double fraction(double kelvin) {
         return kelvin / hotKelvin;

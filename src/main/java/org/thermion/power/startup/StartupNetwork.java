@@ -195,12 +195,12 @@ public final class StartupNetwork {
         }
         for (Gate g : m.netlist().gates()) {
             if (g.stage() >= 0) {
-                addDraw(m, m.stages().get(g.stage()), envState, m.gateEnvelope()[g.id()], plate);
+                addDraw(m, m.stages().get(g.stage()), envState, m.gateEnvelope(g.id()), plate);
             }
         }
         for (Latch l : m.netlist().latches()) {
             if (l.stage() >= 0) {
-                addDraw(m, m.stages().get(l.stage()), envState, m.latchEnvelope()[l.id()], plate);
+                addDraw(m, m.stages().get(l.stage()), envState, m.latchEnvelope(l.id()), plate);
             }
         }
         plateState = new int[nr][];

@@ -172,4 +172,17 @@ class PowerUpSolverTest {
         assertThat(h.withinLimit()).isFalse();
         assertThat(h.secondsInLimit()).isGreaterThan(0).isLessThan(5);
     }
+
+    @Test
+    void twoThyratronsThatFireInTheSameStepBothCloseTheirBypass() {
+        // Two 2D21 heaters on one parallel rail share one trajectory: their firing events fall in one step.
+        Machine m = StartupMachines.elaborate(StartupMachines.twoThyratronRails(88));
+        PowerUpResult r = PowerUpSolver.solve(m, PowerUpOptions.defaults());
+        assertThat(r.softStarts()).hasSize(2);
+        SoftStartResult a = r.softStarts().get(0), b = r.softStarts().get(1);
+        assertThat(a.bypassed()).isTrue();
+        assertThat(b.bypassed()).isTrue();
+        assertThat(a.triggerTime()).isCloseTo(b.triggerTime(), within(1e-6));   // the event solver's accuracy
+        assertThat(r.relayChecks()).allSatisfy(c -> assertThat(c.fireTime()).isFinite());
+    }
 }
