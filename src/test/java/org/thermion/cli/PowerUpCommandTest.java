@@ -179,7 +179,7 @@ class PowerUpCommandTest {
         Files.writeString(m, Files.readString(m).replace("resistor 5 ohm", "resistor 1e400 ohm"));
         Run r = run("powerup", m.toString(), "--no-plot");
         assertThat(r.code()).isEqualTo(2);
-        assertThat(r.err()).contains("error: ").contains("heat_soft").doesNotContain("internal error");
+        assertThat(r.err()).contains("error: ").contains("resistor").doesNotContain("internal error");
     }
 
     @Test
