@@ -28,7 +28,6 @@ final class Parts {
     final List<Rail> rails = new ArrayList<>();
     final Map<String, Integer> railIndex = new LinkedHashMap<>();
     final Map<String, Integer> realize = new HashMap<>();
-    final Map<String, Span> realizeSpan = new HashMap<>();
     private final Map<String, Integer> tubeIndex = new HashMap<>();
     private final Map<String, Integer> stageIndex = new HashMap<>();
     /** Library stages already reported for a rail the machine lacks: one error each. */
@@ -77,7 +76,6 @@ final class Parts {
                 continue;
             }
             realize.put(op, s);
-            realizeSpan.put(op, at);
         }
     }
 
@@ -213,7 +211,7 @@ final class Parts {
         if (tube < 0) {
             return null;
         }
-        double ron = b.has("ron") ? b.num("ron") : Double.isNaN(load) ? 1000 : load / 10;
+        double ron = b.has("ron") ? b.num("ron") : Double.isNaN(load) ? PropertyTable.RON_WITHOUT_LOAD : load / PropertyTable.RON_LOAD_RATIO;
         PropLine note = b.line("note");
         return new StageType(name, function, tube, (int) b.num("sections"), sections != null && sections.has("per"),
                 b.has("fanin") ? (int) b.num("fanin") : function.defaultFanIn, Double.isNaN(load) ? 0 : load, loadRail,

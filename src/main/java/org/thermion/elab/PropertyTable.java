@@ -33,6 +33,10 @@ final class PropertyTable {
     }
 
     private static final String PLAUSIBLE = "plausibility limit";
+    /** A conducting stage's output resistance is its plate load over this ratio (common practice). */
+    static final double RON_LOAD_RATIO = 10;
+    /** ... or this many ohms for a stage without a load resistor. */
+    static final double RON_WITHOUT_LOAD = 1000;
 
     static final PropertyTable RAIL = new PropertyTable("rail", "rail NAME { ... }",
             Property.of("voltage", "rail voltage, signed", q("rail voltage", Unit.VOLT, from(-10e3, 10e3)))
@@ -100,8 +104,9 @@ final class PropertyTable {
             Property.of("setup", "time an input must be steady before the phase ends (latches)",
                     q("set-up time", Unit.SECOND, from(0, 10))).byDefault(0).source(PLAUSIBLE),
             Property.of("ron", "output resistance of the conducting tube", q("conducting output resistance", Unit.OHM, above(0, 100e6)))
-                    .byDefault("load / 10, or 1 k without a load").source("a conducting triode pulls ten times harder than "
-                            + "its plate load (common practice)"),
+                    .byDefault("load / " + Unit.number(RON_LOAD_RATIO) + ", or " + Unit.OHM.format(RON_WITHOUT_LOAD)
+                            + " without a load").source("a conducting tube pulls about ten times harder than its plate "
+                            + "load (common practice)"),
             Property.of("wiring", "wiring capacitance per connection", q("wiring capacitance", Unit.FARAD, from(0, 1e-6)))
                     .byDefault(0).source(PLAUSIBLE),
             Property.of("gain", "voltage gain, for the Miller capacitance of the next grid", plain("stage gain", from(-1e4, 1e4)))
