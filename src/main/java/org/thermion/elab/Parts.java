@@ -196,9 +196,13 @@ final class Parts {
         int loadRail = loadLine == null ? -1 : stageRail(loadLine.word("rail"), loadLine.span("rail"), name, p, use);
         List<RailDraw> low = new ArrayList<>(), high = new ArrayList<>(), always = new ArrayList<>();
         for (PropLine d : b.lines("draw")) {
+            String state = d.word("state");
+            if (state.equals("conducting")) {
+                state = conductingState(function, d.span("state"));
+            }
             int ri = stageRail(d.word("rail"), d.span("rail"), name, p, use);
-            if (ri >= 0) {
-                List<RailDraw> into = d.word("state").equals("low") ? low : d.word("state").equals("high") ? high : always;
+            if (ri >= 0 && state != null) {
+                List<RailDraw> into = state.equals("low") ? low : state.equals("high") ? high : always;
                 into.add(new RailDraw(ri, d.num("amps")));
             }
         }
@@ -217,6 +221,20 @@ final class Parts {
                 b.has("fanin") ? (int) b.num("fanin") : function.defaultFanIn, Double.isNaN(load) ? 0 : load, loadRail,
                 List.copyOf(low), List.copyOf(high), List.copyOf(always), rise, fall, b.num("setup"), ron, b.num("wiring"),
                 b.num("gain"), note == null ? "" : note.word("value"));
+    }
+
+    /** The output state ({@code low}, {@code high}, {@code always}) in which a stage of {@code f} conducts; null when reported. */
+    private String conductingState(StageFunction f, Span at) {
+        return switch (f.conducts()) {
+            case OUTPUT_LOW -> "low";
+            case OUTPUT_HIGH -> "high";
+            case ALWAYS -> "always";
+            case DEPENDS -> {
+                diags.error(at, "a stage of function '" + f.word() + "' conducts in either output state, depending on its circuit",
+                        "write `draw low ...` or `draw high ...`");
+                yield null;
+            }
+        };
     }
 
     /** The stage realizing an operator, or -1 when none is mapped. */
