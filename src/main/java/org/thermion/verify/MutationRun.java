@@ -56,7 +56,7 @@ public final class MutationRun {
                         String.format(java.util.Locale.ROOT, "%s word 0x%X: %s %s%s", c.mnemonic(), c.word(), c.item(),
                                 c.kind(), first)));
             } else if (!r.decodeOk()) {
-                DecodeLine d = r.decode().stream().filter(x -> !x.ok()).findFirst().orElseThrow();
+                DecodeVerdict d = r.decode().stream().filter(x -> !x.ok()).findFirst().orElseThrow();
                 outcomes.add(new MutantOutcome(what, MutantOutcome.Status.CAUGHT,
                         "decode lines: " + d.mnemonic() + ": " + d.problem().replaceFirst(" \\(word .*$", "")));
             } else if (!r.exhaustive()) {
