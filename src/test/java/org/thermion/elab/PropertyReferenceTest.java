@@ -30,7 +30,7 @@ class PropertyReferenceTest {
 
     @Test
     void docsPropertiesMdIsTheRenderedReference() {
-        Golden.assertMatches(Path.of("docs/properties.md"), PropertyReference.markdown());
+        Golden.assertMatches(Path.of("src/docs/properties.md"), PropertyReference.markdown());
     }
 
     @Test
