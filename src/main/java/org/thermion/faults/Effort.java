@@ -8,5 +8,5 @@ package org.thermion.faults;
  */
 public record Effort(int maxSteps, int maxCycles, int candidates, int searchStates) {
     /** What the bundled examples need, with room to spare. */
-    public static final Effort DEFAULT = new Effort(200, 16, 64, 20_000);
+    public static final Effort DEFAULT = new Effort(200, 16, 64, 4_000);
 }

@@ -96,7 +96,8 @@ public final class PlanGenerator {
             int next = -1;
             for (int i : open) {
                 if (proof[i].end() == StateSearch.End.EXHAUSTED) {
-                    outcome[i] = proof[i].provoked() ? Outcome.REDUNDANT : Outcome.NOT_CONTROLLABLE;
+                    outcome[i] = proof[i].blurred() ? Outcome.UNKNOWN_STATE
+                        : proof[i].provoked() ? Outcome.REDUNDANT : Outcome.NOT_CONTROLLABLE;
                 } else if (proof[i].end() == StateSearch.End.BUDGET || searched[i] || steps.size() >= effort.maxSteps()) {
                     outcome[i] = Outcome.ABORTED;
                 } else if (next < 0) {
@@ -148,7 +149,7 @@ public final class PlanGenerator {
         return false;
     }
 
-    /** Cycles with the same settings become one step: only the last cycle's lamps matter. */
+    /** Runs of cycles with the same settings become one step: the search's path shows the fault at its last cycle. */
     private static List<Step> merge(List<boolean[]> cycles) {
         List<Step> out = new ArrayList<>();
         int k = 0;
@@ -157,14 +158,7 @@ public final class PlanGenerator {
             while (e < cycles.size() && Arrays.equals(cycles.get(e), cycles.get(k))) {
                 e++;
             }
-            // Lamps are read at the end of each step: a run may merge only at the very end.
-            if (e == cycles.size()) {
-                out.add(new Step(cycles.get(k), e - k));
-            } else {
-                for (int i = k; i < e; i++) {
-                    out.add(new Step(cycles.get(i), 1));
-                }
-            }
+            out.add(new Step(cycles.get(k), e - k));
             k = e;
         }
         return out;

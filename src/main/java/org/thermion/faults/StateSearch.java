@@ -11,7 +11,9 @@ import java.util.Map;
  * machine's, one whole cycle per move with every switch setting. It finds the shortest run of
  * cycles after which some lamp tells the two apart, or, when every reachable pair has been
  * visited without that, proves that no sequence of steps can (and says whether the fault's
- * wires ever took the other value on the way: if not, the fault cannot be provoked).
+ * wires ever took the other value on the way: if not, the fault cannot be provoked; and
+ * whether a lamp the good machine shows was ever unknown in the faulty one: then the fault
+ * keeps the machine from leaving its unknown power-up state there).
  * Sixty-four (pair, setting) moves are simulated at once, one per lane.
  */
 final class StateSearch {
@@ -19,7 +21,7 @@ final class StateSearch {
     enum End { FOUND, EXHAUSTED, BUDGET }
 
     /** The result: how it ended, the settings cycle by cycle when found, and whether the fault was ever provoked. */
-    record Result(End end, List<boolean[]> cycles, boolean provoked) {
+    record Result(End end, List<boolean[]> cycles, boolean provoked, boolean blurred, int visited) {
     }
 
     private final FaultSimulator sim;
@@ -76,6 +78,7 @@ final class StateSearch {
         parent.add(new int[] {-1, -1});
         seen.put(new Pair(start), 0);
         boolean provoked = false;
+        boolean blurred = false;
         int ns = settings.size();
         long[] kg = new long[kw];
         long[] kf = new long[kw];
@@ -119,6 +122,7 @@ final class StateSearch {
                 b.settle();
                 provoked |= (provoked(fault, g) & live) != 0L;
                 long det = differs(c, g, b) & live;
+                blurred |= (blurs(c, g, b) & live) != 0L;
                 if (det != 0L) {
                     int l = Long.numberOfTrailingZeros(det);
                     long mv = m0 + l;
@@ -128,7 +132,7 @@ final class StateSearch {
                         path.add(settings.get(parent.get(n)[1]));
                     }
                     java.util.Collections.reverse(path);
-                    return new Result(End.FOUND, path, true);
+                    return new Result(End.FOUND, path, true, blurred, nodes.size());
                 }
                 for (int l = 0; l < lanes; l++) {
                     long mv = m0 + l;
@@ -140,7 +144,7 @@ final class StateSearch {
                     Pair p = new Pair(k);
                     if (!seen.containsKey(p)) {
                         if (nodes.size() >= budget) {
-                            return new Result(End.BUDGET, List.of(), provoked);
+                            return new Result(End.BUDGET, List.of(), provoked, blurred, nodes.size());
                         }
                         seen.put(p, nodes.size());
                         nodes.add(k);
@@ -150,7 +154,7 @@ final class StateSearch {
             }
             head = layerEnd;
         }
-        return new Result(complete ? End.EXHAUSTED : End.BUDGET, List.of(), provoked);
+        return new Result(complete ? End.EXHAUSTED : End.BUDGET, List.of(), provoked, blurred, nodes.size());
     }
 
     private static void see(LaneMachine g, long live, long[] seen0, long[] seen1) {
@@ -176,6 +180,15 @@ final class StateSearch {
         for (Lamp l : c.lamps()) {
             int s = l.slot();
             d |= (g.v[s] ^ b.v[s]) & ~g.x[s] & ~b.x[s];
+        }
+        return d;
+    }
+
+    /** Lanes where a lamp is known in the good machine and unknown in the faulty one. */
+    static long blurs(Circuit c, LaneMachine g, LaneMachine b) {
+        long d = 0L;
+        for (Lamp l : c.lamps()) {
+            d |= ~g.x[l.slot()] & b.x[l.slot()];
         }
         return d;
     }

@@ -24,7 +24,9 @@ class PlanGeneratorTest {
             }
             assertThat(stuckDetected).isEqualTo(22);
             assertThat(plan.count(Outcome.ABORTED)).isZero();
-            System.out.println("c17 plan: " + plan.steps() + " " + plan.counts());
+            double random = RandomSequences.median(sim, plan.faults(), plan.count(Outcome.DETECTED), 1, 400);
+            System.out.println("c17 plan: " + plan.steps() + " " + plan.counts() + "; random sequences need " + random);
+            assertThat((double) plan.steps().size()).isLessThanOrEqualTo(random / 2);
         }
     }
 
@@ -39,6 +41,9 @@ class PlanGeneratorTest {
             System.out.println("demo plan: " + plan.steps().size() + " steps " + plan.counts() + " of "
                     + plan.faults().size() + " in " + (System.nanoTime() - t0) / 1e6 + " ms " + plan.steps());
             assertThat(plan.count(Outcome.DETECTED)).isGreaterThan(plan.faults().size() / 2);
+            double random = RandomSequences.median(sim, plan.faults(), plan.count(Outcome.DETECTED), 16, 400);
+            System.out.println("demo: random sequences need " + random + " steps for the same coverage");
+            assertThat((double) plan.steps().size()).isLessThanOrEqualTo(random / 2);
         }
     }
 }
