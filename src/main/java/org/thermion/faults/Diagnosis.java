@@ -1,5 +1,6 @@
 package org.thermion.faults;
 
+import java.nio.ByteBuffer;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
@@ -47,13 +48,13 @@ public final class Diagnosis {
             System.arraycopy(e[s], 0, good, s * lamps, lamps);
         }
         byte[][] resp = sim.responses(faults.all(), steps);
-        Map<Key, List<Fault>> byResponse = new HashMap<>();
-        List<Key> order = new ArrayList<>();
-        Key goodKey = new Key(good);
+        Map<ByteBuffer, List<Fault>> byResponse = new HashMap<>();
+        List<ByteBuffer> order = new ArrayList<>();
+        ByteBuffer goodKey = ByteBuffer.wrap(good);
         byResponse.put(goodKey, new ArrayList<>());
         order.add(goodKey);
         for (Fault f : faults.all()) {
-            Key k = new Key(resp[f.id()]);
+            ByteBuffer k = ByteBuffer.wrap(resp[f.id()]);
             List<Fault> members = byResponse.get(k);
             if (members == null) {
                 members = new ArrayList<>();
@@ -63,13 +64,13 @@ public final class Diagnosis {
             members.add(f);
         }
         List<Suspect> cls = new ArrayList<>();
-        for (Key k : order) {
+        for (ByteBuffer k : order) {
             cls.add(new Suspect(0, 0, 0, 0, byResponse.get(k), k.equals(goodKey)));
         }
         this.classes = cls;
         this.responses = new ArrayList<>();
-        for (Key k : order) {
-            responses.add(k.bytes);
+        for (ByteBuffer k : order) {
+            responses.add(k.array());
         }
     }
 
@@ -289,18 +290,5 @@ public final class Diagnosis {
             effects.add(faults.effect(f));
         }
         return effects.size();
-    }
-
-    /** A response as a hash key. */
-    private record Key(byte[] bytes) {
-        @Override
-        public boolean equals(Object o) {
-            return o instanceof Key k && Arrays.equals(k.bytes, bytes);
-        }
-
-        @Override
-        public int hashCode() {
-            return Arrays.hashCode(bytes);
-        }
     }
 }

@@ -1,7 +1,7 @@
 package org.thermion.faults;
 
+import java.nio.LongBuffer;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -67,7 +67,7 @@ final class StateSearch {
         int kw = g.keyWords();
         List<long[]> nodes = new ArrayList<>();
         List<int[]> parent = new ArrayList<>();
-        Map<Pair, Integer> seen = new HashMap<>();
+        Map<LongBuffer, Integer> seen = new HashMap<>();
         long[] start = new long[2 * kw];
         long[] key = new long[kw];
         good.stateKey(gl, key);
@@ -76,7 +76,7 @@ final class StateSearch {
         System.arraycopy(key, 0, start, kw, kw);
         nodes.add(start);
         parent.add(new int[] {-1, -1});
-        seen.put(new Pair(start), 0);
+        seen.put(LongBuffer.wrap(start), 0);
         boolean provoked = false;
         boolean blurred = false;
         int ns = settings.size();
@@ -141,7 +141,7 @@ final class StateSearch {
                     b.stateKey(l, kf);
                     System.arraycopy(kg, 0, k, 0, kw);
                     System.arraycopy(kf, 0, k, kw, kw);
-                    Pair p = new Pair(k);
+                    LongBuffer p = LongBuffer.wrap(k);
                     if (!seen.containsKey(p)) {
                         if (nodes.size() >= budget) {
                             return new Result(End.BUDGET, List.of(), provoked, blurred, nodes.size());
@@ -191,18 +191,5 @@ final class StateSearch {
             d |= ~g.x[l.slot()] & b.x[l.slot()];
         }
         return d;
-    }
-
-    /** A visited pair of states as a hash key. */
-    private record Pair(long[] words) {
-        @Override
-        public boolean equals(Object o) {
-            return o instanceof Pair p && Arrays.equals(p.words, words);
-        }
-
-        @Override
-        public int hashCode() {
-            return Arrays.hashCode(words);
-        }
     }
 }
