@@ -4,7 +4,6 @@ import org.thermion.lang.Diagnostics;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Expr;
 import org.thermion.lang.ast.Index;
-import org.thermion.model.StageFunction;
 import org.thermion.model.StageType;
 
 import java.util.ArrayList;
@@ -208,9 +207,8 @@ final class ExpressionLowering {
         }
         StageType st = parts.stages.get(s);
         int max = st.fanIn();
-        int min = st.function() == StageFunction.NOT || st.function() == StageFunction.BUFFER || st.function().isDriver()
-                || st.function() == StageFunction.LATCH ? 1 : 2;
-        if (st.function() == StageFunction.LATCH) {
+        int min = st.function().minInputs();
+        if (!st.function().callable()) {
             diags.error(c.span(), "stage '" + name + "' is a latch; declare it with a `latch` line", null);
             return null;
         }

@@ -64,21 +64,7 @@ final class StageMapper {
             in[i] = emit(f, c.args().get(i), -1, span);
         }
         StageType st = parts.stages.get(c.stage());
-        GateFn fn = switch (st.function()) {
-            case NOT -> GateFn.NOT;
-            case NAND -> GateFn.NAND;
-            case NOR -> GateFn.NOR;
-            case AND -> GateFn.AND;
-            case OR -> GateFn.OR;
-            case XOR -> GateFn.XOR;
-            default -> GateFn.BUF;
-        };
-        if (in.length == 1 && (fn == GateFn.NAND || fn == GateFn.NOR)) {
-            fn = GateFn.NOT;
-        } else if (in.length == 1 && (fn == GateFn.AND || fn == GateFn.OR)) {
-            fn = GateFn.BUF;
-        }
-        int out = nb.gate(fn, c.stage(), in, dest, f.module, f.path, span);
+        int out = nb.gate(st.function().gate(in.length), c.stage(), in, dest, f.module, f.path, span);
         if (st.function().isDriver()) {
             driverOutputs.add(out);
         }

@@ -36,10 +36,9 @@ public record RelayDriverCheck(String tube, String railName, double railVolts, d
                 amps * relay.coilOhms(), amps, avgRatingAmps, peakRatingAmps, fireTime, heatingSeconds);
     }
 
-    /** The coil reaches its pick-up voltage (with no pick-up declared: 75 % of rated, common practice). */
+    /** The coil reaches its pick-up voltage (a relay without one declared has {@link Relay#PICKUP_FRACTION} of rated). */
     public boolean picksUp() {
-        double p = Double.isNaN(relay.pickupVolts()) ? 0.75 * relay.ratedVolts() : relay.pickupVolts();
-        return coilVolts >= p;
+        return coilVolts >= relay.pickupVolts();
     }
 
     /** Coil voltage over rated. */
