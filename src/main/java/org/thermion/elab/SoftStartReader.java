@@ -19,9 +19,6 @@ import java.util.List;
  * and heated like any stage.
  */
 final class SoftStartReader {
-    /** The thyratron fires when its cathode reaches this fraction of full emission (from memory). */
-    static final double FIRING_EMISSION = 0.9;
-
     private final Parts parts;
     private final Packer packer;
     private final Diagnostics diags;
@@ -74,7 +71,7 @@ final class SoftStartReader {
         int module = modules.size();
         modules.add(new ModuleInstance(module, name, "softstart", 0));
         int env = packer.place(st.tube(), module, st.sections());
-        return new BypassTrigger.ThyratronWarm(env, st.tube(), st.loadOhms(), st.loadRail(), FIRING_EMISSION);
+        return new BypassTrigger.ThyratronWarm(env, st.tube(), st.loadOhms(), st.loadRail());
     }
 
     private static Relay relay(PropBlock r) {
