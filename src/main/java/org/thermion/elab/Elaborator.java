@@ -218,16 +218,9 @@ public final class Elaborator {
         Packer packer = new Packer(parts, diags);
         List<ModuleInstance> modules = new ArrayList<>(ex.tree.modules);
         List<SoftStart> softStarts = new ArrayList<>();
-        int[] gateEnvelope = new int[nb.gates.size()];
-        int[] latchEnvelope = new int[nb.latches.size()];
-        for (int i = 0; i < nb.gates.size(); i++) {
-            NetBuilder.GateB g = nb.gates.get(i);
-            gateEnvelope[i] = g.stage < 0 ? -1 : placeStage(packer, parts, g.stage, g.module, g.in.length);
-        }
-        for (int i = 0; i < nb.latches.size(); i++) {
-            NetBuilder.LatchB l = nb.latches.get(i);
-            latchEnvelope[i] = l.stage() < 0 ? -1 : placeStage(packer, parts, l.stage(), l.module(), 1);
-        }
+        StagePlacement placed = StagePlacement.place(nb, parts, packer);
+        int[] gateEnvelope = placed.gateEnvelope;
+        int[] latchEnvelope = placed.latchEnvelope;
         SoftStartReader softStartReader = new SoftStartReader(parts, packer, diags);
         for (Prop p : decls.softStarts.values()) {
             SoftStart ss = softStartReader.read(p, modules);
@@ -283,11 +276,6 @@ public final class Elaborator {
         for (int i = 0; i < s.width(); i++) {
             into.add(new Port(s.name() + "[" + i + "]", s.nets()[i]));
         }
-    }
-
-    private static int placeStage(Packer packer, Parts parts, int stage, int module, int inputs) {
-        StageType st = parts.stages.get(stage);
-        return packer.place(st.tube(), module, st.sectionsFor(inputs));
     }
 
     private java.util.Set<String> topOutputs = java.util.Set.of();

@@ -64,6 +64,11 @@ final class ExpressionLowering {
                 if (pb == null) {
                     return null;
                 }
+                if (pb.size() > ConstantFolder.MAX_WIDTH - bits.size()) {
+                    diags.error(c.span(), "concatenation is wider than " + ConstantFolder.MAX_WIDTH + " bits",
+                            "no bus is wider than " + ConstantFolder.MAX_WIDTH + " bits; slice the parts");
+                    return null;
+                }
                 bits.addAll(pb);
             }
             return new Lowered.Bits(bits);

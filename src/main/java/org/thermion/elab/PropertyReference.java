@@ -6,7 +6,7 @@ import java.util.Map;
 /**
  * The language reference for property blocks, rendered from the {@link PropertyTable}s as
  * Markdown: one table per block kind with each key's values, units, allowed range, default
- * and source. {@code docs/properties.md} is this text; a test keeps the two equal.
+ * and source. {@code src/docs/properties.md} is this text; a test keeps the two equal.
  */
 public final class PropertyReference {
     private PropertyReference() {
