@@ -13,6 +13,11 @@ public final class SourceSet {
         lines.put(file, text.lines().toList());
     }
 
+    /** Every file whose text is kept here. */
+    public java.util.Set<Path> files() {
+        return java.util.Collections.unmodifiableSet(lines.keySet());
+    }
+
     /** The 1-based line of a file, or null when unknown. */
     public String line(Path file, int line) {
         List<String> l = lines.get(file);
