@@ -31,14 +31,15 @@ public final class MachineReader {
             return new SourceFile(file, List.of());
         }
         List<Diagnostic> errors = new ArrayList<>();
-        MachineParser.FileContext tree = parse(file, text, 1, errors);
+        MachineParser.FileContext tree = parse(file, text, 1, true, errors);
         if (errors.isEmpty()) {
             return new AstBuilder(file, diags).file(tree);
         }
         int reported = 0;
-        for (Chunks.Chunk c : Chunks.of(text)) {
+        List<Chunks.Chunk> chunks = Chunks.of(text);
+        for (Chunks.Chunk c : chunks) {
             List<Diagnostic> own = new ArrayList<>();
-            parse(file, text.substring(c.start(), c.end()), c.line(), own);
+            parse(file, text.substring(c.start(), c.end()), c.line(), c.end() == text.length(), own);
             if (!own.isEmpty()) {
                 diags.add(own.get(0));
                 reported++;
@@ -50,11 +51,12 @@ public final class MachineReader {
         return new SourceFile(file, List.of());
     }
 
-    private static MachineParser.FileContext parse(Path file, String text, int firstLine, List<Diagnostic> errors) {
+    /** {@code last}: the text runs to the end of the file (else its end is where the next declaration begins). */
+    private static MachineParser.FileContext parse(Path file, String text, int firstLine, boolean last, List<Diagnostic> errors) {
         MachineLexer lexer = new MachineLexer(CharStreams.fromString(text, file.toString()));
         lexer.setLine(firstLine);
         MachineParser parser = new MachineParser(new CommonTokenStream(lexer));
-        SyntaxErrors listener = new SyntaxErrors(file, errors);
+        SyntaxErrors listener = new SyntaxErrors(file, last ? "end of file" : "the next declaration", errors);
         lexer.removeErrorListeners();
         parser.removeErrorListeners();
         lexer.addErrorListener(listener);
@@ -66,9 +68,11 @@ public final class MachineReader {
     static final class SyntaxErrors extends BaseErrorListener {
         private final Path file;
         private final List<Diagnostic> errors;
+        private final String end;
 
-        SyntaxErrors(Path file, List<Diagnostic> errors) {
+        SyntaxErrors(Path file, String end, List<Diagnostic> errors) {
             this.file = file;
+            this.end = end;
             this.errors = errors;
         }
 
@@ -78,7 +82,7 @@ public final class MachineReader {
             int len = 1;
             String found = null;
             if (offending instanceof Token t && t.getText() != null) {
-                found = t.getType() == Token.EOF ? "end of file" : t.getText();
+                found = t.getType() == Token.EOF ? end : t.getText();
                 len = Math.max(1, t.getText().length());
                 if (t.getType() == MachineLexer.NL) {
                     found = "end of line";
@@ -98,8 +102,13 @@ public final class MachineReader {
             if (recognizer instanceof org.antlr.v4.runtime.Parser p && p.getContext() != null) {
                 context = SyntaxWording.ruleName(p.getRuleNames()[p.getContext().getRuleIndex()]);
             }
-            String message = SyntaxWording.reword(msg, found, context);
-            errors.add(Diagnostic.error(new Span(file, line, col + 1, line, col + 1 + len), message, SyntaxWording.hint(msg)));
+            boolean atEnd = offending instanceof Token t && t.getType() == Token.EOF;
+            String message = atEnd && !msg.startsWith("missing ")
+                    ? "syntax error: " + ("end of file".equals(end) ? "the file ends" : "the next declaration begins")
+                            + " before the block is closed"
+                    : SyntaxWording.reword(msg.replace("<EOF>", end), found, context);
+            String hint = atEnd ? "check that every '{' has its '}'" : SyntaxWording.hint(msg);
+            errors.add(Diagnostic.error(new Span(file, line, col + 1, line, col + 1 + len), message, hint));
         }
 
         private static Token lastToken(TokenStream tokens, int eof) {
