@@ -13,7 +13,7 @@ import static org.assertj.core.api.Assertions.within;
  * flip-flop (triode_flipflop: 3.2 mA always). A hand count of conducting inverters per
  * word gives bplus = 3.2 mA + 2.4 mA x conducting + 0.05 mA x cut off.
  */
-class ProgramRunTest {
+class MeteredRunTest {
     static String rommed(String bplusLimit) {
         return """
                 rail bplus { voltage 48 V; source 4 ohm; limit %s }
@@ -53,7 +53,7 @@ class ProgramRunTest {
         int bplus = m.railIndex("bplus");
         int bias = m.railIndex("bias");
         // words 00, 01, 11, 10: 0, 1, 2, 1 inverters conducting (an input high drives its output low)
-        CurrentMeter meter = ProgramRun.run(m, new long[] {0b00, 0b01, 0b11, 0b10}, null, 4, new InitMode.Zero());
+        CurrentMeter meter = CurrentMeter.ofRun(m, new long[] {0b00, 0b01, 0b11, 0b10}, null, 4, new InitMode.Zero());
         double none = 3.2e-3 + 2 * 0.05e-3;        // 3.30 mA
         double one = 3.2e-3 + 2.4e-3 + 0.05e-3;    // 5.65 mA
         double two = 3.2e-3 + 2 * 2.4e-3;          // 8.00 mA
@@ -89,7 +89,7 @@ class ProgramRunTest {
     @Test
     void aRailOverItsLimitFailsTheCheck() {
         Machine m = Machines.of(rommed("5 mA"));
-        Budget b = new Budget(m, ProgramRun.run(m, new long[] {0b00, 0b01, 0b11, 0b10}, null, 4, new InitMode.Zero()));
+        Budget b = new Budget(m, CurrentMeter.ofRun(m, new long[] {0b00, 0b01, 0b11, 0b10}, null, 4, new InitMode.Zero()));
         Budget.Supply s = b.supply().get(m.railIndex("bplus"));
         assertThat(s.simulated()).isTrue();
         assertThat(s.peakAmps()).isCloseTo(8.0e-3, within(1e-12));
@@ -105,7 +105,7 @@ class ProgramRunTest {
     void aProgramThatStaysLowPassesButTheWorstCaseIsWarned() {
         // 00 and 01 only: peak 5.65 mA under a 7 mA limit, while all-high would be 8 mA
         Machine m = Machines.of(rommed("7 mA"));
-        Budget b = new Budget(m, ProgramRun.run(m, new long[] {0b00, 0b01, 0b01, 0b00}, null, 4, new InitMode.Zero()));
+        Budget b = new Budget(m, CurrentMeter.ofRun(m, new long[] {0b00, 0b01, 0b01, 0b00}, null, 4, new InitMode.Zero()));
         assertThat(b.failed()).isFalse();
         assertThat(b.findings()).singleElement().satisfies(f -> {
             assertThat(f.severity()).isEqualTo(Finding.Severity.WARNING);

@@ -12,7 +12,7 @@ import java.util.List;
  * One decode line of the top module: the net {@code NAME[k]} whose index k is the opcode of
  * an ISA instruction, labelled with that instruction's mnemonic.
  */
-public record DecodeLine(String mnemonic, long opcode, int net) {
+public record DecodeLamp(String mnemonic, long opcode, int net) {
 
     /** The decode net name used when none is given. */
     public static final String DEFAULT_NAME = "line";
@@ -21,17 +21,17 @@ public record DecodeLine(String mnemonic, long opcode, int net) {
      * Finds the decode lines named {@code name[k]} in the top module, in opcode order.
      * Instructions without such a net are left out: the machine may decode them elsewhere.
      */
-    public static List<DecodeLine> find(Machine m, String name) {
+    public static List<DecodeLamp> find(Machine m, String name) {
         int top = topModule(m);
         Netlist n = m.netlist();
-        List<DecodeLine> lines = new ArrayList<>();
+        List<DecodeLamp> lines = new ArrayList<>();
         List<Instruction> byCode = new ArrayList<>(m.isa().instructions());
         byCode.sort((a, b) -> Long.compare(a.opcode(), b.opcode()));
         for (Instruction ins : byCode) {
             String wanted = name + "[" + ins.opcode() + "]";
             for (int net = 0; net < n.netCount(); net++) {
                 if (n.netModule(net) == top && wanted.equals(n.netName(net))) {
-                    lines.add(new DecodeLine(ins.mnemonic(), ins.opcode(), net));
+                    lines.add(new DecodeLamp(ins.mnemonic(), ins.opcode(), net));
                     break;
                 }
             }

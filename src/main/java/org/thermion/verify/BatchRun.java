@@ -7,6 +7,9 @@ import org.thermion.model.Machine;
 import org.thermion.model.Netlist;
 import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
+import org.thermion.sim.run.LogicLane;
+import org.thermion.sim.run.RunDriver;
+import org.thermion.sim.run.RunObserver;
 import org.thermion.sim.compiled.Engine;
 
 /**
@@ -14,16 +17,22 @@ import org.thermion.sim.compiled.Engine;
  * which take the batch's values; the ROM data nets carry each lane's instruction word; the
  * PC starts at 0. With {@code snapshot} it keeps every net's value at each phase's settle.
  */
-final class LogicRun {
+final class BatchRun {
     private final Machine machine;
     private final Simulator sim;
+    private final RunDriver driver;
+    private final RunDriver snapshots;
+    private final Snapshots snapshot = new Snapshots();
     private final int[] stateLatch;
     private final int romWidth;
     private final boolean[] gateDriven;
 
-    LogicRun(Machine machine) {
+    BatchRun(Machine machine) {
         this.machine = machine;
         this.sim = Engine.DEFAULT.simulator(machine);
+        LogicLane lane = new LogicLane(sim);
+        this.driver = new RunDriver(lane, machine.inputs().size(), null);
+        this.snapshots = new RunDriver(lane, machine.inputs().size(), null).observe(snapshot);
         Netlist nl = machine.netlist();
         int[] latchOf = new int[nl.netCount()];
         java.util.Arrays.fill(latchOf, -1);
@@ -79,21 +88,12 @@ final class LogicRun {
         sim.forceRomWord(romWidth == b.wordBits.length ? b.wordBits : java.util.Arrays.copyOf(b.wordBits, romWidth));
         int phases = sim.phases();
         Result r = new Result();
-        int nets = machine.netlist().netCount();
         if (snapshot) {
             r.atPhase = new long[phases + 1][];
-        }
-        for (int p = 1; p <= phases; p++) {
-            long[] pre = snapshot ? values(nets) : null;
-            sim.stepPhase();
-            if (snapshot) {
-                long[] at = new long[nets];
-                for (int n = 0; n < nets; n++) {
-                    // Gate outputs hold this settle's value; latch outputs already hold the load.
-                    at[n] = gateDriven[n] ? sim.value(n) : pre[n];
-                }
-                r.atPhase[p] = at;
-            }
+            this.snapshot.into = r;
+            snapshots.run(1);
+        } else {
+            driver.run(1);
         }
         r.state = new long[stateLatch.length];
         for (int s = 0; s < stateLatch.length; s++) {
@@ -109,6 +109,28 @@ final class LogicRun {
     /** The value of {@code net} after the last settle (gate-driven nets) or now (latches). */
     long value(int net) {
         return sim.value(net);
+    }
+
+    /** Keeps every net's value at each phase's settle: gate outputs as settled, latch outputs as before the loads. */
+    private final class Snapshots implements RunObserver {
+        Result into;
+        private long[] pre;
+
+        @Override
+        public void beforePhase(long cycle, int phase) {
+            pre = values(machine.netlist().netCount());
+        }
+
+        @Override
+        public void phaseRan(long cycle, int phase) {
+            int nets = pre.length;
+            long[] at = new long[nets];
+            for (int n = 0; n < nets; n++) {
+                // Gate outputs hold this settle's value; latch outputs already hold the load.
+                at[n] = gateDriven[n] ? sim.value(n) : pre[n];
+            }
+            into.atPhase[phase] = at;
+        }
     }
 
     private long[] values(int nets) {
