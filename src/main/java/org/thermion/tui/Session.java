@@ -240,10 +240,6 @@ public final class Session {
         return assembly;
     }
 
-    public Simulator simulator() {
-        return sim;
-    }
-
     public CurrentMeter meter() {
         return meter;
     }
