@@ -28,7 +28,6 @@ final class Parts {
     final List<Rail> rails = new ArrayList<>();
     final Map<String, Integer> railIndex = new LinkedHashMap<>();
     final Map<String, Integer> realize = new HashMap<>();
-    final Map<String, Span> realizeSpan = new HashMap<>();
     private final Map<String, Integer> tubeIndex = new HashMap<>();
     private final Map<String, Integer> stageIndex = new HashMap<>();
     /** Library stages already reported for a rail the machine lacks: one error each. */
@@ -77,7 +76,6 @@ final class Parts {
                 continue;
             }
             realize.put(op, s);
-            realizeSpan.put(op, at);
         }
     }
 
@@ -198,9 +196,13 @@ final class Parts {
         int loadRail = loadLine == null ? -1 : stageRail(loadLine.word("rail"), loadLine.span("rail"), name, p, use);
         List<RailDraw> low = new ArrayList<>(), high = new ArrayList<>(), always = new ArrayList<>();
         for (PropLine d : b.lines("draw")) {
+            String state = d.word("state");
+            if (state.equals("conducting")) {
+                state = conductingState(function, d.span("state"));
+            }
             int ri = stageRail(d.word("rail"), d.span("rail"), name, p, use);
-            if (ri >= 0) {
-                List<RailDraw> into = d.word("state").equals("low") ? low : d.word("state").equals("high") ? high : always;
+            if (ri >= 0 && state != null) {
+                List<RailDraw> into = state.equals("low") ? low : state.equals("high") ? high : always;
                 into.add(new RailDraw(ri, d.num("amps")));
             }
         }
@@ -213,12 +215,26 @@ final class Parts {
         if (tube < 0) {
             return null;
         }
-        double ron = b.has("ron") ? b.num("ron") : Double.isNaN(load) ? 1000 : load / 10;
+        double ron = b.has("ron") ? b.num("ron") : Double.isNaN(load) ? PropertyTable.RON_WITHOUT_LOAD : load / PropertyTable.RON_LOAD_RATIO;
         PropLine note = b.line("note");
         return new StageType(name, function, tube, (int) b.num("sections"), sections != null && sections.has("per"),
                 b.has("fanin") ? (int) b.num("fanin") : function.defaultFanIn, Double.isNaN(load) ? 0 : load, loadRail,
                 List.copyOf(low), List.copyOf(high), List.copyOf(always), rise, fall, b.num("setup"), ron, b.num("wiring"),
                 b.num("gain"), note == null ? "" : note.word("value"));
+    }
+
+    /** The output state ({@code low}, {@code high}, {@code always}) in which a stage of {@code f} conducts; null when reported. */
+    private String conductingState(StageFunction f, Span at) {
+        return switch (f.conducts()) {
+            case OUTPUT_LOW -> "low";
+            case OUTPUT_HIGH -> "high";
+            case ALWAYS -> "always";
+            case DEPENDS -> {
+                diags.error(at, "a stage of function '" + f.word() + "' conducts in either output state, depending on its circuit",
+                        "write `draw low ...` or `draw high ...`");
+                yield null;
+            }
+        };
     }
 
     /** The stage realizing an operator, or -1 when none is mapped. */

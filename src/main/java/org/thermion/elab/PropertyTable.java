@@ -33,6 +33,10 @@ final class PropertyTable {
     }
 
     private static final String PLAUSIBLE = "plausibility limit";
+    /** A conducting stage's output resistance is its plate load over this ratio (common practice). */
+    static final double RON_LOAD_RATIO = 10;
+    /** ... or this many ohms for a stage without a load resistor. */
+    static final double RON_WITHOUT_LOAD = 1000;
 
     static final PropertyTable RAIL = new PropertyTable("rail", "rail NAME { ... }",
             Property.of("voltage", "rail voltage, signed", q("rail voltage", Unit.VOLT, from(-10e3, 10e3)))
@@ -86,8 +90,9 @@ final class PropertyTable {
             Property.of("load", "plate (or cathode) load resistor and the rail it returns to",
                     q("plate load", Unit.OHM, above(0, 100e6)), new Slot.Word("from"), name("rail", "a rail name", List.of()))
                     .byDefault("none").source(PLAUSIBLE + " of 100 M"),
-            Property.of("draw", "current drawn from a rail with the output low, high, or always",
-                    name("state", "output state", List.of("low", "high", "always")), name("rail", "a rail name", List.of()),
+            Property.of("draw", "current drawn from a rail with the output low, high, always, or while the circuit "
+                            + "conducts (" + conductingStates() + ")",
+                    name("state", "output state", List.of("low", "high", "always", "conducting")), name("rail", "a rail name", List.of()),
                     q("amps", "current drawn", Unit.AMPERE, from(0, 100)))
                     .many().byDefault("nothing").source("worked out beside each library stage; " + PLAUSIBLE),
             Property.of("rise", "output rise time, when given rather than computed", q("rise time", Unit.SECOND, from(0, 10)))
@@ -100,8 +105,9 @@ final class PropertyTable {
             Property.of("setup", "time an input must be steady before the phase ends (latches)",
                     q("set-up time", Unit.SECOND, from(0, 10))).byDefault(0).source(PLAUSIBLE),
             Property.of("ron", "output resistance of the conducting tube", q("conducting output resistance", Unit.OHM, above(0, 100e6)))
-                    .byDefault("load / 10, or 1 k without a load").source("a conducting triode pulls ten times harder than "
-                            + "its plate load (common practice)"),
+                    .byDefault("load / " + Unit.number(RON_LOAD_RATIO) + ", or " + Unit.OHM.format(RON_WITHOUT_LOAD)
+                            + " without a load").source("a conducting tube pulls about ten times harder than its plate "
+                            + "load (common practice)"),
             Property.of("wiring", "wiring capacitance per connection", q("wiring capacitance", Unit.FARAD, from(0, 1e-6)))
                     .byDefault(0).source(PLAUSIBLE),
             Property.of("gain", "voltage gain, for the Miller capacitance of the next grid", plain("stage gain", from(-1e4, 1e4)))
@@ -211,6 +217,21 @@ final class PropertyTable {
                     name("stage", "a stage name", List.of())).byDefault("none: an error where one is needed"));
         }
         return out.toArray(new Property[0]);
+    }
+
+    /** "low for not, nand; high for or, ...", from each function's definition. */
+    private static String conductingStates() {
+        StringBuilder b = new StringBuilder();
+        for (StageFunction.Conducts c : StageFunction.Conducts.values()) {
+            List<String> fns = Arrays.stream(StageFunction.values()).filter(f -> f.conducts() == c).map(StageFunction::word)
+                    .toList();
+            if (!fns.isEmpty() && c != StageFunction.Conducts.DEPENDS) {
+                String state = c == StageFunction.Conducts.OUTPUT_LOW ? "low" : c == StageFunction.Conducts.OUTPUT_HIGH
+                        ? "high" : "always";
+                b.append(b.length() > 0 ? "; " : "").append(state).append(" for ").append(String.join(", ", fns));
+            }
+        }
+        return b.toString();
     }
 
     private static String percentOfRated(double fraction) {

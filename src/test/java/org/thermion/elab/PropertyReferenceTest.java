@@ -61,9 +61,7 @@ class PropertyReferenceTest {
                 module top { in a; out y; y = !a }
                 machine m { top top; inputs a; outputs y }
                 """;
-        Diagnostics d = new Diagnostics();
-        Machine m = new Elaborator(new SourceSet(), d).elaborateText(Path.of("defaults.machine"), text);
-        assertThat(d.all()).isEmpty();
+        Machine m = elaborateClean(text);
         assertThat(m.clock().phases()).isEqualTo(2);
         assertThat(m.clock().periodSeconds()).isEqualTo(100e-6);
         var st = m.stages().get(0);
@@ -72,5 +70,34 @@ class PropertyReferenceTest {
         assertThat(st.gain()).isEqualTo(1.0);
         assertThat(m.rails().get(0).sourceOhms()).isZero();
         assertThat(m.rails().get(0).limitAmps()).isInfinite();
+    }
+
+    @Test
+    void drawConductingMeansTheStateInWhichTheFunctionsCircuitConducts() {
+        String text = """
+                rail bplus { voltage 48 V }
+                rail bias { voltage -24 V }
+                rail heat { voltage 6.3 V }
+                heaters on heat { parallel 6AU6 6AL5 }
+                stage inv : not { tube 6AU6; load 22 k from bplus; draw conducting bplus 2 mA }
+                stage dor : or { tube 6AL5; sections 1 per input; fanin 2; load 100 k from bias; draw conducting bias 0.6 mA }
+                realize { not inv; or dor }
+                module top { in a, b; out y, z; y = !a; z = a | b }
+                machine m { top top; inputs a b; outputs y z }
+                """;
+        Machine m = elaborateClean(text);
+        for (var st : m.stages()) {
+            // an inverter's tube pulls its plate low; a diode OR's pull-down carries current with the output high
+            var drawn = st.name().equals("inv") ? st.drawLow() : st.drawHigh();
+            assertThat(drawn).as(st.name()).hasSize(1);
+            assertThat(st.drawAlways()).isEmpty();
+        }
+    }
+
+    private static Machine elaborateClean(String text) {
+        Diagnostics d = new Diagnostics();
+        Machine m = new Elaborator(new SourceSet(), d).elaborateText(Path.of("snippet.machine"), text);
+        assertThat(d.all()).isEmpty();
+        return m;
     }
 }
