@@ -47,7 +47,7 @@ public final class TubeLibrary {
         triodeFit(new KorenTriode("5670", 35, 1.3, 600, 300, 300, g, 1.5,
                 "fitted to operating points from memory; plate rating 1.5 W from memory"),
                 selfBiasedTriode(150, 240, 8.2e-3, 5.5e-3, 35, "from memory"));
-        pentodeFit(new KorenPentode("6AU6", 25, 1.35, 900, 2500, 100, PENTODE_KVB, g, 3.5, 0.75,
+        pentodeFit(new KorenPentode("6AU6", 33, 1.35, 1200, 1100, 250, PENTODE_KVB, g, 3.5, 0.75,
                 "fitted to RCA 6AU6 typical operation at 100 V and cut-off points (from memory); "
                         + "knee Kvb 20 V and ratings 3.5 W / 0.75 W from memory"),
                 List.of("mu", "kg1", "kg2", "kp"),
@@ -56,7 +56,7 @@ public final class TubeLibrary {
                         FitPoint.selfBiased(100, 100, 150, TRANSCONDUCTANCE, 3.9e-3, "RCA 6AU6, from memory"),
                         FitPoint.fixed(100, 100, -4.2, PLATE_CURRENT, 10e-6, "RCA 6AU6 cut-off, from memory"),
                         FitPoint.fixed(250, 150, -6.5, PLATE_CURRENT, 10e-6, "RCA 6AU6 cut-off, from memory")));
-        pentodeFit(new KorenPentode("6AK5", 20, 1.35, 700, 2000, 100, PENTODE_KVB, g, 1.7, 0.5,
+        pentodeFit(new KorenPentode("6AK5", 33, 1.35, 800, 800, 140, PENTODE_KVB, g, 1.7, 0.5,
                 "fitted to typical operation from memory; knee and ratings from memory"),
                 List.of("mu", "kg1", "kg2", "kp"),
                 List.of(FitPoint.selfBiased(120, 120, 200, PLATE_CURRENT, 7.5e-3, "from memory"),
