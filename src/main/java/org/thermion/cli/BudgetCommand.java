@@ -1,9 +1,9 @@
 package org.thermion.cli;
 
+import org.thermion.cli.report.Format;
 import org.thermion.model.Machine;
 import org.thermion.power.Budget;
 import org.thermion.power.CurrentMeter;
-import org.thermion.power.ProgramRun;
 import org.thermion.sim.InitMode;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -100,18 +100,13 @@ final class BudgetCommand implements Callable<Integer> {
                 err.flush();
                 return ExitCodes.BAD_INPUT;
             }
-            meter = ProgramRun.run(m, in.rom(), in.stimulus(), cycles, mode);
+            meter = CurrentMeter.ofRun(m, in.rom(), in.stimulus(), cycles, mode);
             run = new BudgetReport.Run(program == null ? null : program.toString(),
                     inputs == null ? null : inputs.toString(), cycles, init);
         }
         Budget budget = new Budget(m, meter);
         BudgetReport report = new BudgetReport(budget, run);
-        switch (format) {
-            case text -> ReportWriter.text(out, report.head(), report.tables(false), report.tail());
-            case csv -> ReportWriter.csv(out, report.fields(), report.tables(true));
-            case json -> ReportWriter.json(out, report.fields(), report.tables(true));
-            default -> throw new IllegalStateException("unknown format " + format);
-        }
+        format.write(out, report.report());
         out.flush();
         err.flush();
         return budget.failed() ? ExitCodes.CHECK_FAILED : ExitCodes.OK;

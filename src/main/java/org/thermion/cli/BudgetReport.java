@@ -8,6 +8,10 @@ import org.thermion.power.CurrentMeter;
 import org.thermion.power.Finding;
 import org.thermion.power.HeaterAnalysis;
 import org.thermion.power.TubeCount;
+import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Numbers;
+import org.thermion.cli.report.Report;
+import org.thermion.cli.report.Table;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -15,13 +19,13 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import static org.thermion.cli.ReportTable.Kind.AMPS;
-import static org.thermion.cli.ReportTable.Kind.COUNT;
-import static org.thermion.cli.ReportTable.Kind.OHMS;
-import static org.thermion.cli.ReportTable.Kind.PERCENT;
-import static org.thermion.cli.ReportTable.Kind.TEXT;
-import static org.thermion.cli.ReportTable.Kind.VOLTS;
-import static org.thermion.cli.ReportTable.Kind.WATTS;
+import static org.thermion.cli.report.Unit.AMPS;
+import static org.thermion.cli.report.Unit.COUNT;
+import static org.thermion.cli.report.Unit.OHMS;
+import static org.thermion.cli.report.Unit.PERCENT;
+import static org.thermion.cli.report.Unit.TEXT;
+import static org.thermion.cli.report.Unit.VOLTS;
+import static org.thermion.cli.report.Unit.WATTS;
 
 /** The tables of a budget report, one content for text, CSV and JSON. */
 final class BudgetReport {
@@ -43,13 +47,17 @@ final class BudgetReport {
         this.run = b.simulated() ? run : null;
     }
 
-    /** The report's named fields (JSON top level, CSV "report" records). */
-    Map<String, Object> fields() {
-        Map<String, Object> f = new LinkedHashMap<>();
-        f.put("machine", m.name());
-        f.put("check", b.failed() ? "failed" : "ok");
-        f.put("tubes", m.envelopes().size());
-        f.put("heater_strings", m.heaterStrings().size());
+    /** The schema version of budget's JSON ({@code org/thermion/schema/budget.schema.json}). */
+    static final int VERSION = 2;
+
+    /** The whole report: facts for every format, explanations and findings for people. */
+    Report report() {
+        Report r = new Report("budget", VERSION);
+        r.field("machine", m.name());
+        r.field("check", b.failed() ? "failed" : "ok");
+        r.field("tubes", m.envelopes().size());
+        r.field("heater_strings", m.heaterStrings().size());
+        r.field("simulated", run != null);
         if (run != null) {
             Map<String, Object> s = new LinkedHashMap<>();
             s.put("program", run.program());
@@ -57,20 +65,25 @@ final class BudgetReport {
             s.put("cycles", run.cycles());
             s.put("lane", 0);
             s.put("init", run.init());
-            f.put("simulation", s);
+            r.field("simulation", s);
         } else {
-            f.put("simulation", null);
+            r.field("simulation", new Absent("not simulated"));
         }
-        f.put("plate_dissipation", PLATE_NOTE);
-        f.put("caution", CAUTION);
-        return f;
+        r.field("plate_dissipation", PLATE_NOTE);
+        r.field("caution", CAUTION);
+        r.text(head());
+        for (Table t : List.of(modules(), tubes(), heaterStrings(), moduleRails(), rails(), supply(), findings())) {
+            r.table(t);
+        }
+        r.text(b.failed() ? "check failed" : "check passed", "", CAUTION);
+        return r;
     }
 
     static final String PLATE_NOTE = "approximate: P = I x max(V - I x Rload, I x Ron) for the draw on the plate-load "
             + "rail, I x V for other positive rails, I x arc drop for a conducting thyratron; bias-rail draws are "
             + "resistor losses and not counted";
 
-    List<String> head() {
+    private List<String> head() {
         List<String> h = new ArrayList<>();
         h.add(String.format(Locale.ROOT, "budget of machine %s: %d tubes, %d heater strings, %d rails", m.name(),
                 m.envelopes().size(), m.heaterStrings().size(), m.rails().size()));
@@ -81,57 +94,34 @@ final class BudgetReport {
                     m.clock().phases(), run.init()));
             h.add("    min, mean and peak over every phase; now = the last phase; cycles count from 0, phases from 1"
                     + (run.init().startsWith("unknown") ? "; an unknown output counts at its low draw" : ""));
+        } else {
+            h.add("  not simulated: give --program (and --inputs) to meter the currents of a run");
         }
         h.add("  plate W is approximate: P = I x max(V - I x Rload, I x Ron) for the draw on the plate-load rail,");
         h.add("    I x V for other positive rails, I x arc drop for a conducting thyratron; bias draws not counted");
+        h.add("");
         return h;
     }
 
-    List<String> tail() {
-        List<String> t = new ArrayList<>();
-        List<Finding> f = b.findings();
-        long errors = f.stream().filter(Finding::isError).count();
-        long warnings = f.stream().filter(x -> x.severity() == Finding.Severity.WARNING).count();
-        t.add(String.format(Locale.ROOT, "findings: %d errors, %d warnings, %d notes", errors, warnings,
-                f.size() - errors - warnings));
-        for (Finding x : f) {
-            t.add("  " + x.severity().name().toLowerCase(Locale.ROOT) + ": " + x.subject() + ": " + x.message());
-            if (x.advice() != null) {
-                t.add("    = " + x.advice());
-            }
-        }
-        t.add(b.failed() ? "check failed" : "check passed");
-        t.add("");
-        t.add(CAUTION);
-        return t;
-    }
-
-    /** Every table; {@code withFindings} false for text, which lists findings after the tables. */
-    List<ReportTable> tables(boolean withFindings) {
-        List<ReportTable> t = new ArrayList<>(List.of(modules(), tubes(), heaterStrings(), moduleRails(), rails(), supply()));
-        if (withFindings) {
-            t.add(findings());
-        }
-        return t;
-    }
-
-    private ReportTable modules() {
-        ReportTable t = new ReportTable("modules",
-                "modules (heater A and W: the module's share of its strings; a string spanning modules counts in each)")
+    private Table modules() {
+        Table t = new Table("modules", "modules")
                 .column("module", "module", TEXT)
                 .column("tubes", "tubes", COUNT)
-                .column("sections_used", "used", COUNT)
-                .column("sections_spare", "spare", COUNT)
-                .column("heater_strings", "strings", COUNT)
-                .column("heater_amps", "heater A", AMPS)
-                .column("heater_watts", "heater W", WATTS)
-                .column("plate_watts_lowest", "plate W lowest", WATTS)
-                .column("plate_watts_highest", "plate W highest", WATTS);
+                .column("sections_used", "used", COUNT, "tube sections in use")
+                .column("sections_spare", "spare", COUNT, "tube sections left free")
+                .column("heater_strings", "strings", COUNT, "heater strings holding one of its tubes")
+                .column("heater", "heater", AMPS, "the module's share of its strings' current at the rail's nominal voltage "
+                        + "(a string spanning modules counts in each)")
+                .column("heater", "heater", WATTS, "the module's share of its strings' power")
+                .column("plate_lowest", "plate low", WATTS, "plate dissipation, every stage at its lowest draw")
+                .column("plate_highest", "plate high", WATTS, "plate dissipation, every stage at its highest draw");
         CurrentMeter meter = b.meter();
         if (meter != null) {
-            t.column("plate_watts_mean", "plate W mean", WATTS).column("plate_watts_peak", "plate W peak", WATTS);
+            t.column("plate_mean", "plate mean", WATTS, "plate dissipation, mean over the run")
+                    .column("plate_peak", "plate peak", WATTS, "plate dissipation, highest phase of the run");
         }
-        t.column("supply_watts", meter != null ? "supply W mean" : "supply W highest", WATTS);
+        t.column("supply", "supply", WATTS, meter != null ? "heaters plus the run's mean plate and bias draw"
+                : "heaters plus every stage at its highest draw");
         double[] sum = new double[8];
         for (ModuleInstance mi : m.modules()) {
             TubeCount.Row c = b.tubes().module(mi.id());
@@ -159,15 +149,15 @@ final class BudgetReport {
                 b.tubes().sectionsSpare(), m.heaterStrings().size(), sum[0], sum[1], sum[2], sum[3]));
         if (meter != null) {
             total.add(sum[4]);
-            total.add(Double.NaN);
+            total.add(Absent.NONE);
         }
         total.add(sum[5]);
         t.row(total.toArray());
         return t;
     }
 
-    private ReportTable tubes() {
-        ReportTable t = new ReportTable("tubes", "tubes by module and type")
+    private Table tubes() {
+        Table t = new Table("tubes", "tubes by module and type")
                 .column("module", "module", TEXT)
                 .column("type", "type", TEXT)
                 .column("tubes", "tubes", COUNT)
@@ -185,21 +175,22 @@ final class BudgetReport {
     }
 
     /** Strings with the same wiring and results share a row, with their count. */
-    private ReportTable heaterStrings() {
-        ReportTable t = new ReportTable("heater_strings", "heater strings (in series across their rail; identical strings counted together)")
+    private Table heaterStrings() {
+        Table t = new Table("heater_strings", "heater strings (in series across their rail at its nominal voltage; "
+                + "identical strings counted together)")
                 .column("rail", "rail", TEXT)
-                .column("count", "count", COUNT)
+                .column("count", "count", COUNT, "identical strings")
                 .column("heaters", "heaters", TEXT)
-                .column("rated_volts", "rated", VOLTS)
-                .column("string_amps", "current", AMPS)
+                .column("rated", "rated", VOLTS, "sum of the heaters' rated voltages")
+                .column("string", "current", AMPS, "string current, heaters at their hot resistance")
                 .column("heater_volts", "each heater gets", TEXT)
-                .column("worst_deviation_percent", "worst", PERCENT)
-                .column("drop_ohms", "dropper", OHMS)
-                .column("drop_watts", "dropper W", WATTS)
+                .column("worst_deviation", "worst", PERCENT, "the heater furthest from its rated voltage")
+                .column("dropper", "dropper", OHMS, "declared series resistor")
+                .column("dropper", "dropper", WATTS, "its dissipation")
                 .column("shunts", "shunts", TEXT)
-                .column("suggested_drop_ohms", "suggest", OHMS)
-                .column("suggested_drop_watts", "suggest W", WATTS)
-                .column("first_string", "first", COUNT)
+                .column("suggested_dropper", "suggest", OHMS, "a dropper that would bring the string to its rating")
+                .column("suggested_dropper", "suggest", WATTS, "its dissipation")
+                .column("first_string", "first", COUNT, "number of the first such string (from 1)")
                 .column("status", "status", TEXT);
         Map<String, List<HeaterAnalysis.StringResult>> groups = new LinkedHashMap<>();
         for (HeaterAnalysis.StringResult s : b.heaters().strings()) {
@@ -219,11 +210,11 @@ final class BudgetReport {
             for (HeaterAnalysis.Heater h : s.heaters()) {
                 String name = m.tubes().get(h.tube()).name();
                 types.append(types.length() == 0 ? "" : " + ").append(name);
-                volts.append(volts.length() == 0 ? "" : ", ").append(Units.volts(h.volts()))
+                volts.append(volts.length() == 0 ? "" : ", ").append(Numbers.si(h.volts(), VOLTS))
                         .append(String.format(Locale.ROOT, " (%+.1f %%)", h.deviation() * 100));
                 if (h.shunted()) {
-                    shunts.append(shunts.length() == 0 ? "" : ", ").append(name).append(' ').append(Units.ohms(h.shuntOhms()))
-                            .append(' ').append(Units.watts(h.shuntWatts()));
+                    shunts.append(shunts.length() == 0 ? "" : ", ").append(name).append(' ').append(Numbers.si(h.shuntOhms(), OHMS))
+                            .append(' ').append(Numbers.si(h.shuntWatts(), WATTS));
                 }
                 if (Math.abs(h.deviation()) > Math.abs(worst)) {
                     worst = h.deviation();
@@ -232,20 +223,20 @@ final class BudgetReport {
             String status = s.findings().stream().anyMatch(Finding::isError) ? "error"
                     : s.findings().stream().anyMatch(f -> f.severity() == Finding.Severity.WARNING) ? "warning" : "ok";
             t.row(m.rails().get(s.string().rail()).name(), g.size(), types.toString(), s.ratedVolts(), s.amps(),
-                    volts.toString(), worst * 100, s.string().dropOhms() > 0 ? s.string().dropOhms() : Double.NaN,
-                    s.string().dropOhms() > 0 ? s.dropWatts() : Double.NaN, shunts.length() == 0 ? null : shunts.toString(),
-                    s.suggestion() == null ? Double.NaN : s.suggestion().ohms(),
-                    s.suggestion() == null ? Double.NaN : s.suggestion().watts(), s.index() + 1, status);
+                    volts.toString(), worst * 100, s.string().dropOhms() > 0 ? s.string().dropOhms() : Absent.NONE,
+                    s.string().dropOhms() > 0 ? s.dropWatts() : Absent.NONE, shunts.length() == 0 ? Absent.NONE : shunts.toString(),
+                    s.suggestion() == null ? Absent.NONE : s.suggestion().ohms(),
+                    s.suggestion() == null ? Absent.NONE : s.suggestion().watts(), s.index() + 1, status);
         }
         return t;
     }
 
-    private ReportTable moduleRails() {
-        ReportTable t = new ReportTable("module_rails", "plate and bias current by module")
+    private Table moduleRails() {
+        Table t = new Table("module_rails", "plate and bias current by module")
                 .column("module", "module", TEXT)
                 .column("rail", "rail", TEXT)
-                .column("lowest_amps", "lowest", AMPS)
-                .column("highest_amps", "highest", AMPS);
+                .column("lowest", "lowest", AMPS, "every stage at its lowest draw")
+                .column("highest", "highest", AMPS, "every stage at its highest draw");
         CurrentMeter meter = b.meter();
         if (meter != null) {
             dynamicColumns(t);
@@ -268,21 +259,21 @@ final class BudgetReport {
         return t;
     }
 
-    private static void dynamicColumns(ReportTable t) {
-        t.column("now_amps", "now", AMPS)
-                .column("min_amps", "min", AMPS)
-                .column("mean_amps", "mean", AMPS)
-                .column("peak_amps", "peak", AMPS)
-                .column("peak_cycle", "peak cycle", COUNT)
-                .column("peak_phase", "phase", COUNT);
+    private static void dynamicColumns(Table t) {
+        t.column("now", "now", AMPS, "in the run's last phase")
+                .column("min", "min", AMPS, "lowest over the run's phases")
+                .column("mean", "mean", AMPS, "mean over the run's phases")
+                .column("peak", "peak", AMPS, "highest over the run's phases")
+                .column("peak_cycle", "peak cycle", COUNT, "cycle of the peak (from 0)")
+                .column("peak_phase", "phase", COUNT, "phase of the peak (from 1)");
     }
 
-    private ReportTable rails() {
-        ReportTable t = new ReportTable("rails", "plate and bias current by rail")
+    private Table rails() {
+        Table t = new Table("rails", "plate and bias current by rail")
                 .column("rail", "rail", TEXT)
-                .column("volts", "voltage", VOLTS)
-                .column("lowest_amps", "lowest", AMPS)
-                .column("highest_amps", "highest", AMPS);
+                .column("nominal", "voltage", VOLTS)
+                .column("lowest", "lowest", AMPS, "every stage at its lowest draw")
+                .column("highest", "highest", AMPS, "every stage at its highest draw");
         CurrentMeter meter = b.meter();
         if (meter != null) {
             dynamicColumns(t);
@@ -302,32 +293,32 @@ final class BudgetReport {
         return t;
     }
 
-    private ReportTable supply() {
-        ReportTable t = new ReportTable("supply", "supply check (peak = heaters + plate and bias)")
+    private Table supply() {
+        Table t = new Table("supply", "supply check (peak = heaters + plate and bias)")
                 .column("rail", "rail", TEXT)
-                .column("volts", "voltage", VOLTS)
-                .column("heater_amps", "heaters", AMPS)
-                .column("heater_watts", "heater W", WATTS)
-                .column("stage_amps", "plate+bias", AMPS)
-                .column("basis", "from", TEXT)
-                .column("peak_amps", "peak", AMPS)
-                .column("limit_amps", "limit", AMPS)
-                .column("margin_amps", "margin", AMPS)
-                .column("margin_percent", "margin %", PERCENT)
-                .column("volts_at_peak", "V at peak", VOLTS)
+                .column("nominal", "voltage", VOLTS)
+                .column("heaters", "heaters", AMPS, "heater strings at the rail's nominal voltage")
+                .column("heaters", "heaters", WATTS)
+                .column("stages", "plate+bias", AMPS)
+                .column("basis", "from", TEXT, "highest: every stage at its highest draw; simulation: the run's peak")
+                .column("peak", "peak", AMPS, "heaters plus plate and bias")
+                .column("limit", "limit", AMPS, "the supply's current limit")
+                .column("margin", "margin", AMPS, "limit less peak")
+                .column("margin", "margin", PERCENT, "margin as a share of the limit")
+                .column("at_peak", "at peak", VOLTS, "the rail's voltage at the peak, after its source resistance")
                 .column("status", "status", TEXT);
         for (Budget.Supply s : b.supply()) {
             Rail rail = m.rails().get(s.rail());
             t.row(rail.name(), rail.volts(), s.heaterAmps(), b.heaters().railWatts(s.rail()), s.stageAmps(), s.simulated() ? "simulation" : "highest",
-                    s.peakAmps(), s.limited() ? s.limitAmps() : Double.NaN, s.limited() ? s.marginAmps() : Double.NaN,
-                    s.marginFraction() * 100, Math.copySign(s.voltsAtPeak(), rail.volts()),
+                    s.peakAmps(), s.limited() ? s.limitAmps() : NO_LIMIT, s.limited() ? s.marginAmps() : NO_LIMIT,
+                    s.limited() ? (Object) (s.marginFraction() * 100) : NO_LIMIT, Math.copySign(s.voltsAtPeak(), rail.volts()),
                     s.over() ? "OVER" : s.limited() ? "ok" : "no limit");
         }
         return t;
     }
 
-    private ReportTable findings() {
-        ReportTable t = new ReportTable("findings", "findings")
+    private Table findings() {
+        Table t = new Table("findings", "findings")
                 .column("severity", "severity", TEXT)
                 .column("subject", "subject", TEXT)
                 .column("message", "message", TEXT)
@@ -337,6 +328,8 @@ final class BudgetReport {
         }
         return t;
     }
+
+    private static final Absent NO_LIMIT = new Absent("no limit");
 
     static String label(ModuleInstance mi) {
         return mi.path().isEmpty() ? "(top) " + mi.type() : mi.path() + " (" + mi.type() + ")";

@@ -138,7 +138,7 @@ final class PowerUpReport {
             out.println();
             out.println("relay driver: " + c.tube() + " from " + c.railName() + " " + Units.volts(c.railVolts()) + " through "
                     + Units.ohms(c.plateOhms()) + ", coil " + Units.ohms(c.relay().coilOhms()) + ", arc drop " + Units.volts(c.arcDropVolts()));
-            double pick = Double.isNaN(c.relay().pickupVolts()) ? 0.75 * c.relay().ratedVolts() : c.relay().pickupVolts();
+            double pick = c.relay().pickupVolts();
             out.println("  coil      " + Units.volts(c.coilVolts()) + String.format(Locale.ROOT, " (%.0f %% of rated %s), pick-up %s: ",
                     100 * c.ratedRatio(), Units.volts(c.relay().ratedVolts()), Units.volts(pick))
                     + (!c.picksUp() ? "DOES NOT PICK UP" : !c.coilNotOverdriven() ? "OVERDRIVEN (over +10 %)" : "ok"));

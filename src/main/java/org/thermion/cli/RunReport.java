@@ -85,8 +85,8 @@ final class RunReport {
                 if (pc) {
                     row[1] = Integer.toString(w.pc());
                 }
-                for (int i = 0; i < w.values().length(); i++) {
-                    row[i + first] = String.valueOf(w.values().charAt(i));
+                for (int i = 0; i < w.values().size(); i++) {
+                    row[i + first] = w.values().get(i);
                 }
                 t.row(row);
             }
@@ -122,8 +122,8 @@ final class RunReport {
             if (machine.pc() != null) {
                 row(out, "watch", Long.toString(w.cycle()), "", "pc", Integer.toString(w.pc()));
             }
-            for (int i = 0; i < w.values().length(); i++) {
-                row(out, "watch", Long.toString(w.cycle()), "", r.watchNames().get(i), String.valueOf(w.values().charAt(i)));
+            for (int i = 0; i < w.values().size(); i++) {
+                row(out, "watch", Long.toString(w.cycle()), "", r.watchNames().get(i), w.values().get(i));
             }
         }
         for (UnknownReport u : r.unknowns()) {
@@ -175,8 +175,8 @@ final class RunReport {
             WatchRow w = r.watch().get(i);
             sb.append(i == 0 ? "\n" : ",\n").append("    {\"cycle\": ").append(w.cycle()).append(", \"pc\": ")
                     .append(w.pc()).append(", \"values\": [");
-            for (int k = 0; k < w.values().length(); k++) {
-                sb.append(k == 0 ? "" : ", ").append(val(w.values().charAt(k)));
+            for (int k = 0; k < w.values().size(); k++) {
+                sb.append(k == 0 ? "" : ", ").append(val(w.values().get(k)));
             }
             sb.append("]}");
         }
@@ -203,5 +203,10 @@ final class RunReport {
     /** 0 and 1 as numbers, unknown as the string "x". */
     private static String val(char c) {
         return c == 'x' ? "\"x\"" : String.valueOf(c);
+    }
+
+    /** A bit as 0 or 1 (an unknown one as "x"); a bus or PC value (hex) as a string. */
+    private static String val(String v) {
+        return v.length() == 1 ? val(v.charAt(0)) : ReportJson.quote(v);
     }
 }

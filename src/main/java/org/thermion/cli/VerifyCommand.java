@@ -2,7 +2,7 @@ package org.thermion.cli;
 
 import org.thermion.model.Machine;
 import org.thermion.verify.Counterexample;
-import org.thermion.verify.DecodeLine;
+import org.thermion.verify.DecodeVerdict;
 import org.thermion.verify.MutantOutcome;
 import org.thermion.verify.MutationReport;
 import org.thermion.verify.MutationRun;
@@ -162,7 +162,7 @@ final class VerifyCommand implements Callable<Integer> {
             out.println();
             out.println("decode lines (" + r.decodeName() + "[k], exactly one per instruction):");
             Table t = new Table("mnemonic", "opcode", "line", "check");
-            for (DecodeLine d : r.decode()) {
+            for (DecodeVerdict d : r.decode()) {
                 t.row(d.mnemonic(), String.format(Locale.ROOT, "0x%X", d.opcode()), d.net() == null ? "-" : d.net(),
                         d.ok() ? "ok" : "FAILS: " + d.problem());
             }
@@ -267,7 +267,7 @@ final class VerifyCommand implements Callable<Integer> {
         r.notes().forEach(j::element);
         j.endArray();
         j.beginArray("decode");
-        for (DecodeLine d : r.decode()) {
+        for (DecodeVerdict d : r.decode()) {
             j.begin().field("mnemonic", d.mnemonic()).field("opcode", d.opcode()).field("line", d.net())
                     .field("ok", d.ok()).field("problem", d.problem()).end();
         }

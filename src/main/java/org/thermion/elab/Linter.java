@@ -18,13 +18,15 @@ import java.util.Set;
  */
 final class Linter {
     private final NetBuilder nb;
-    private final ModuleExpander ex;
+    private final InstanceTree ex;
+    private final Set<Integer> driverOutputs;
     private final Diagnostics diags;
     private final List<Port> inputs;
 
-    Linter(NetBuilder nb, ModuleExpander ex, Diagnostics diags, List<Port> inputs) {
+    Linter(NetBuilder nb, InstanceTree ex, Set<Integer> driverOutputs, Diagnostics diags, List<Port> inputs) {
         this.nb = nb;
         this.ex = ex;
+        this.driverOutputs = driverOutputs;
         this.diags = diags;
         this.inputs = inputs;
     }
@@ -65,7 +67,7 @@ final class Linter {
                 boolean anyUsed = false;
                 for (int n : s.nets()) {
                     boolean driven = nb.driver.get(n) != NetBuilder.NONE;
-                    boolean read = nb.reads.get(n) > 0 || ex.driverOutputs.contains(n);
+                    boolean read = nb.reads.get(n) > 0 || driverOutputs.contains(n);
                     if (driven && !read && !tiedOff(n)) {
                         unused.add(n);
                     }

@@ -157,7 +157,7 @@ final class NetBuilder {
     }
 
     /** The complementary output of a flip-flop: the other plate, free of charge. */
-    int complementOf(int latchOut, int module) {
+    int complementOf(int latchOut) {
         Integer c = complement.get(latchOut);
         if (c != null) {
             return c;
@@ -169,6 +169,14 @@ final class NetBuilder {
         complement.put(latchOut, n);
         complementSource.put(n, latchOut);
         return n;
+    }
+
+    /** Makes gate {@code g} a free connection from {@code from}: an inverter that proved needless. */
+    void rewire(int g, int from) {
+        GateB old = gates.get(g);
+        reads.set(old.in[0], reads.get(old.in[0]) - 1);
+        read(from);
+        gates.set(g, new GateB(GateFn.BUF, new int[]{from}, old.out, -1, old.module, old.span));
     }
 
     /**
@@ -228,10 +236,6 @@ final class NetBuilder {
 
         void set(int i, int v) {
             a[i] = v;
-        }
-
-        int size() {
-            return n;
         }
 
         int[] toArray() {

@@ -11,4 +11,7 @@ import java.util.List;
  */
 public record HeaterRule(int rail, boolean series, List<Integer> tubes, int count, boolean perModule,
                          double volts, double dropOhms, boolean shunt, double restDropOhms) {
+    public HeaterRule {
+        tubes = List.copyOf(tubes);
+    }
 }

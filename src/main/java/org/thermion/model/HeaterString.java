@@ -9,4 +9,8 @@ import java.util.List;
  */
 public record HeaterString(int rail, List<Integer> envelopes, List<HeaterRating> ratings, double dropOhms,
                            boolean shunt, int module, int rule) {
+    public HeaterString {
+        envelopes = List.copyOf(envelopes);
+        ratings = List.copyOf(ratings);
+    }
 }

@@ -4,4 +4,7 @@ import java.util.List;
 
 /** One instruction: mnemonic, opcode and its meaning as register-transfer statements. */
 public record Instruction(String mnemonic, long opcode, List<Transfer> body) {
+    public Instruction {
+        body = List.copyOf(body);
+    }
 }

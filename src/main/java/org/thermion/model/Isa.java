@@ -9,6 +9,13 @@ import java.util.List;
 public record Isa(int wordBits, List<IsaField> fields, int opcodeField, int targetField,
                   List<StateBit> state, List<AddressedBit> bitMap, int selectField, List<Instruction> instructions) {
 
+    public Isa {
+        fields = List.copyOf(fields);
+        state = List.copyOf(state);
+        bitMap = List.copyOf(bitMap);
+        instructions = List.copyOf(instructions);
+    }
+
     public IsaField opcode() {
         return fields.get(opcodeField);
     }

@@ -26,6 +26,43 @@ public record Machine(
         int[] gateEnvelope,
         int[] latchEnvelope) {
 
+    public Machine {
+        tubes = List.copyOf(tubes);
+        stages = List.copyOf(stages);
+        rails = List.copyOf(rails);
+        heaterRules = List.copyOf(heaterRules);
+        softStarts = List.copyOf(softStarts);
+        modules = List.copyOf(modules);
+        inputs = List.copyOf(inputs);
+        outputs = List.copyOf(outputs);
+        envelopes = List.copyOf(envelopes);
+        heaterStrings = List.copyOf(heaterStrings);
+        gateEnvelope = gateEnvelope.clone();
+        latchEnvelope = latchEnvelope.clone();
+    }
+
+    /** A copy of the envelope of every gate (-1: none); loops read {@link #gateEnvelope(int)}. */
+    @Override
+    public int[] gateEnvelope() {
+        return gateEnvelope.clone();
+    }
+
+    /** A copy of the envelope of every latch (-1: none); loops read {@link #latchEnvelope(int)}. */
+    @Override
+    public int[] latchEnvelope() {
+        return latchEnvelope.clone();
+    }
+
+    /** The envelope that holds gate {@code gate}, -1 for none. */
+    public int gateEnvelope(int gate) {
+        return gateEnvelope[gate];
+    }
+
+    /** The envelope that holds latch {@code latch}, -1 for none. */
+    public int latchEnvelope(int latch) {
+        return latchEnvelope[latch];
+    }
+
     /** Stage instances: every gate and latch realized by a stage (free cells excluded). */
     public int stageInstanceCount() {
         int n = 0;

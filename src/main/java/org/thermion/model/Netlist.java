@@ -6,11 +6,31 @@ import java.util.List;
  * The flat netlist. Nets are numbered; net 0 is constant 0 and net 1 constant 1.
  * {@code netModule[n]} is the module instance whose scope holds net n.
  * Gates are in levelized order: each gate's inputs are driven by constants, inputs,
- * latches or earlier gates.
+ * latches or earlier gates. Arrays are copied in and handed out as copies: loops read
+ * {@link #netName(int)} and {@link #netModule(int)}.
  */
 public record Netlist(String[] netNames, int[] netModule, List<Gate> gates, List<Latch> latches) {
     public static final int CONST0 = 0;
     public static final int CONST1 = 1;
+
+    public Netlist {
+        netNames = netNames.clone();
+        netModule = netModule.clone();
+        gates = List.copyOf(gates);
+        latches = List.copyOf(latches);
+    }
+
+    /** A copy of the net names. */
+    @Override
+    public String[] netNames() {
+        return netNames.clone();
+    }
+
+    /** A copy of the module of every net. */
+    @Override
+    public int[] netModule() {
+        return netModule.clone();
+    }
 
     public int netCount() {
         return netNames.length;
@@ -18,5 +38,10 @@ public record Netlist(String[] netNames, int[] netModule, List<Gate> gates, List
 
     public String netName(int net) {
         return netNames[net];
+    }
+
+    /** The module instance whose scope holds {@code net}. */
+    public int netModule(int net) {
+        return netModule[net];
     }
 }

@@ -19,5 +19,9 @@ public sealed interface Transfer {
 
     /** {@code if cond { ... } else { ... }}. */
     record When(Rtl cond, List<Transfer> then, List<Transfer> otherwise) implements Transfer {
+        public When {
+            then = List.copyOf(then);
+            otherwise = List.copyOf(otherwise);
+        }
     }
 }

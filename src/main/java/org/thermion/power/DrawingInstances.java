@@ -26,13 +26,13 @@ public final class DrawingInstances {
         for (Gate g : m.netlist().gates()) {
             if (g.stage() >= 0) {
                 out.add(new DrawingInstance(DrawingInstance.Kind.GATE, g.id(), g.stage(), g.module(),
-                        m.gateEnvelope()[g.id()], g.output(), false));
+                        m.gateEnvelope(g.id()), g.output(), false));
             }
         }
         for (Latch l : m.netlist().latches()) {
             if (l.stage() >= 0) {
                 out.add(new DrawingInstance(DrawingInstance.Kind.LATCH, l.id(), l.stage(), l.module(),
-                        m.latchEnvelope()[l.id()], l.output(), false));
+                        m.latchEnvelope(l.id()), l.output(), false));
             }
         }
         for (int i = 0; i < m.softStarts().size(); i++) {

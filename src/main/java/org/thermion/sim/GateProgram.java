@@ -76,7 +76,7 @@ final class GateProgram {
         int runs = 0;
         for (int i = 0; i < n; i++) {
             int g = order[i];
-            size += words(shape[g], gates.get(g).inputs().length);
+            size += words(shape[g], gates.get(g).arity());
             if (i == 0 || shape[order[i - 1]] != shape[g]) {
                 runs++;
             }
@@ -270,7 +270,7 @@ final class GateProgram {
     }
 
     private static int shape(Gate g) {
-        int n = g.inputs().length;
+        int n = g.arity();
         return switch (g.fn()) {
             case BUF -> BUF;
             case NOT -> NOT;

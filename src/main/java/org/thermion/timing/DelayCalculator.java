@@ -108,7 +108,7 @@ public final class DelayCalculator {
             return new StageDelay(0, 0, 0, 0, true, true, "free");
         }
         StageType st = machine.stages().get(g.stage());
-        return delay(st, st.sectionsFor(g.inputs().length), g.output());
+        return delay(st, st.sectionsFor(g.arity()), g.output());
     }
 
     /** The delay of latch {@code l} from its loading edge to its output settling. */

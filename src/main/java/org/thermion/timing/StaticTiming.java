@@ -1,7 +1,6 @@
 package org.thermion.timing;
 
 import org.thermion.model.Gate;
-import org.thermion.model.GateFn;
 import org.thermion.model.Latch;
 import org.thermion.model.Machine;
 import org.thermion.model.ModuleInstance;
@@ -155,8 +154,9 @@ public final class StaticTiming {
             if (pc.jumpNet() >= 0) {
                 list.add(new Endpoint(pc.jumpNet(), pc.phase(), 0, "pc (jump)"));
             }
-            for (int i = 0; i < pc.targetNets().length; i++) {
-                list.add(new Endpoint(pc.targetNets()[i], pc.phase(), 0, "pc (target bit " + i + ")"));
+            int[] targets = pc.targetNets();
+            for (int i = 0; i < targets.length; i++) {
+                list.add(new Endpoint(targets[i], pc.phase(), 0, "pc (target bit " + i + ")"));
             }
         }
         return list;
@@ -209,7 +209,7 @@ public final class StaticTiming {
                 int bestEdge = -1;
                 for (int in : g.inputs()) {
                     for (int edge = RISE; edge <= FALL; edge++) {
-                        if (!causes(g.fn(), edge, out)) {
+                        if (!g.fn().causes(edge == RISE, out == RISE)) {
                             continue;
                         }
                         double a = p.arr[edge][in];
@@ -228,15 +228,6 @@ public final class StaticTiming {
             }
         }
         return p;
-    }
-
-    /** True when an input edge can cause the output edge of a gate computing {@code fn}. */
-    static boolean causes(GateFn fn, int inEdge, int outEdge) {
-        return switch (fn) {
-            case NOT, NAND, NOR -> inEdge != outEdge;
-            case AND, OR, BUF -> inEdge == outEdge;
-            case XOR -> true;
-        };
     }
 
     private List<PathStep> path(Propagation p, int net, int edge) {
@@ -259,7 +250,7 @@ public final class StaticTiming {
     private PathStep step(int net, int edge, double delay, double arrival) {
         char c = edge == RISE ? 'r' : 'f';
         String netName = netlist.netName(net);
-        String module = module(netlist.netModule()[net]);
+        String module = module(netlist.netModule(net));
         if (driverGate[net] >= 0) {
             Gate g = netlist.gates().get(driverGate[net]);
             if (g.stage() < 0) {

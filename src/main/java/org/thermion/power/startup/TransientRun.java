@@ -1,5 +1,6 @@
 package org.thermion.power.startup;
 
+import org.hipparchus.exception.MathRuntimeException;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
@@ -7,7 +8,6 @@ import org.hipparchus.ode.events.Action;
 import org.hipparchus.ode.nonstiff.DormandPrince54Integrator;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
-import org.thermion.model.Rail;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -25,192 +25,91 @@ import java.util.List;
 final class TransientRun {
     private final StartupNetwork net;
     private final PowerUpOptions o;
-    private final int n;
-    private final int nr;
-    private final int ns;
-    private final double[] ohms;
-    private final boolean[] bypassed;
-    private final boolean[] fired;
-    private final double[] fireTime;
-    private final double[] bypassAt;
-    private final double[] bypassTime;
-    private final HeaterModel[] model;
-
-    // scratch, filled by evaluate()
-    private final double[] railAmps;
-    private final double[] railVolts;
-    private final double[] railDemand;
-    private final double[] heaterVolts;
-    private final double[] heaterPower;
-    private final double[] softPower;
-    private final double[] groupPerVolt;
-    private final double[] elementOhms;
-    private final double[] heaterOhms;
-    private final double[] railSeries;
-
-    // tracking
-    private final double[] peakOn;
-    private final double[] peakOnTime;
-    private final double[] peakBy;
-    private final double[] peakByTime;
-    private final double[] peakDemand;
-    private final double[] limitSince;
-    private final double[] inLimit;
-    private final double[] peakRatio;
-    private final double[] peakRatioTime;
-    private final double[] peakSoftWatts;
-    private final double[] warmTime;
+    private final HeaterState[] heaters;
+    private final StringState[] strings;
+    private final RailState[] rails;
+    private final SoftStartState[] softs;
+    private final int dimension;
+    /** The emission threshold as a fraction of cathode operating temperature. */
+    private final double threshold;
     private final List<double[]> samples = new ArrayList<>();
     private long evaluations;
 
     TransientRun(StartupNetwork net, PowerUpOptions o) {
         this.net = net;
         this.o = o;
-        this.n = net.states;
-        this.nr = net.machine.rails().size();
-        this.ns = net.softs.size();
-        ohms = new double[ns];
+        this.threshold = net.emission.thresholdFraction();
+        int n = net.states;
+        int ns = net.softs.size();
+        // State vector: wire temperatures, cathode temperatures, resistor energies, heater energies in,
+        // energies radiated.
+        heaters = new HeaterState[n];
+        for (int s = 0; s < n; s++) {
+            heaters[s] = new HeaterState(net.models.get(net.stateModel[s]), net.stateGroup[s], net.statePosition[s],
+                    net.stateShunt[s], s, n + s, 2 * n + ns + s, 3 * n + ns + s);
+        }
+        dimension = 4 * n + ns;
+        strings = new StringState[net.groupRail.length];
+        for (int g = 0; g < strings.length; g++) {
+            HeaterState[] hs = new HeaterState[net.groupStates[g].length];
+            for (int i = 0; i < hs.length; i++) {
+                hs[i] = heaters[net.groupStates[g][i]];
+            }
+            strings[g] = new StringState(net.groupRail[g], net.groupCount[g], net.groupDrop[g], hs);
+        }
+        softs = new SoftStartState[ns];
         for (int k = 0; k < ns; k++) {
             StartupNetwork.Soft s = net.softs.get(k);
-            ohms[k] = o.resistorOhms().getOrDefault(s.name(), s.declaredOhms());
+            double ohms = o.resistorOhms().getOrDefault(s.name(), s.declaredOhms());
+            softs[k] = new SoftStartState(s, ohms, 2 * n + k, s.thyratron() ? heaters[s.thyState()] : null);
         }
-        bypassed = new boolean[ns];
-        fired = new boolean[ns];
-        fireTime = nan(ns);
-        bypassAt = nan(ns);
-        bypassTime = nan(ns);
-        model = new HeaterModel[n];
-        for (int s = 0; s < n; s++) {
-            model[s] = net.models.get(net.stateModel[s]);
+        int nr = net.machine.rails().size();
+        rails = new RailState[nr];
+        for (int r = 0; r < nr; r++) {
+            int ri = r;
+            StringState[] on = Arrays.stream(net.railGroups[r]).mapToObj(g -> strings[g]).toArray(StringState[]::new);
+            HeaterState[] plates = Arrays.stream(net.plateState[r]).mapToObj(s -> heaters[s]).toArray(HeaterState[]::new);
+            SoftStartState[] series = Arrays.stream(softs).filter(s -> s.soft.rail() == ri).toArray(SoftStartState[]::new);
+            SoftStartState[] branches = Arrays.stream(softs).filter(s -> s.soft.thyratron() && s.soft.fromRail() == ri)
+                    .toArray(SoftStartState[]::new);
+            rails[r] = new RailState(r, net.machine.rails().get(r), on, plates, net.plateSiemens[r].clone(),
+                    net.alwaysSiemens[r], series, branches);
         }
-        railAmps = new double[nr];
-        railVolts = new double[nr];
-        railDemand = new double[nr];
-        heaterVolts = new double[n];
-        heaterPower = new double[n];
-        softPower = new double[ns];
-        groupPerVolt = new double[net.groupRail.length];
-        elementOhms = new double[n];
-        heaterOhms = new double[n];
-        railSeries = new double[nr];
-        peakOn = new double[nr];
-        peakOnTime = new double[nr];
-        peakBy = nan(nr);
-        peakByTime = nan(nr);
-        peakDemand = new double[nr];
-        limitSince = nan(nr);
-        inLimit = new double[nr];
-        peakRatio = new double[n];
-        peakRatioTime = new double[n];
-        peakSoftWatts = new double[ns];
-        warmTime = nan(n);
     }
 
-    private static double[] nan(int k) {
-        double[] a = new double[k];
-        Arrays.fill(a, Double.NaN);
-        return a;
-    }
-
-    /** Solves the circuit for heater temperatures {@code y} under the present relay states. */
+    /** Solves the circuit for the temperatures in {@code y} under the present relay states. */
     private void evaluate(double[] y) {
         evaluations++;
-        for (int s = 0; s < n; s++) {
-            double rh = model[s].resistance(y[s]);
-            heaterOhms[s] = rh;
-            double sh = net.stateShunt[s];
-            elementOhms[s] = Double.isInfinite(sh) ? rh : rh * sh / (rh + sh);
+        for (HeaterState h : heaters) {
+            h.resist(y);
         }
-        for (int g = 0; g < groupPerVolt.length; g++) {
-            double r = net.groupDrop[g];
-            for (int s : net.groupStates[g]) {
-                r += elementOhms[s];
-            }
-            groupPerVolt[g] = 1 / r;
+        for (StringState s : strings) {
+            s.resist();
         }
-        for (int r = 0; r < nr; r++) {
-            Rail rail = net.machine.rails().get(r);
-            double vs = Math.abs(rail.volts());
-            double rser = rail.sourceOhms();
-            for (int k = 0; k < ns; k++) {
-                if (net.softs.get(k).rail() == r && !bypassed[k]) {
-                    rser += ohms[k];
-                }
-            }
-            railSeries[r] = rser;
-            double g = net.alwaysSiemens[r];
-            for (int gi : net.railGroups[r]) {
-                g += net.groupCount[gi] * groupPerVolt[gi];
-            }
-            int[] ps = net.plateState[r];
-            for (int i = 0; i < ps.length; i++) {
-                int s = ps[i];
-                g += net.plateSiemens[r][i] * net.emission.factor(model[s].fraction(y[s]));
-            }
-            // Thyratron plate circuits on this rail: conductance with an offset (the arc drop).
-            double bg = 0, bge = 0;
-            for (int k = 0; k < ns; k++) {
-                StartupNetwork.Soft sk = net.softs.get(k);
-                if (fired[k] && sk.fromRail() == r) {
-                    bg += sk.branchSiemens();
-                    bge += sk.branchSiemens() * sk.branchVolts();
-                }
-            }
-            double vn;
-            double demand;
-            if (rser > 0) {
-                vn = (vs / rser + bge) / (1 / rser + g + bg);
-                if (bg > 0 && vn < bge / bg) {
-                    bg = 0;
-                    bge = 0;
-                    vn = vs / (1 + g * rser);
-                }
-                demand = (g + bg) * vn - bge;   // the same as (vs - vn) / rser, without cancellation
-            } else {
-                vn = vs;
-                demand = g * vs + Math.max(0, bg * vs - bge);
-            }
-            double amps = demand;
-            if (demand > rail.limitAmps()) {
-                amps = rail.limitAmps();
-                double gt = g + bg;
-                vn = gt > 0 ? Math.min(vs, (amps + bge) / gt) : vs;
-            }
-            railAmps[r] = amps;
-            railVolts[r] = vn;
-            railDemand[r] = demand;
-        }
-        for (int s = 0; s < n; s++) {
-            int g = net.stateGroup[s];
-            double i = railVolts[net.groupRail[g]] * groupPerVolt[g];
-            double v = i * elementOhms[s];
-            heaterVolts[s] = v;
-            heaterPower[s] = v * v / heaterOhms[s];
-        }
-        for (int k = 0; k < ns; k++) {
-            double i = railAmps[net.softs.get(k).rail()];
-            softPower[k] = bypassed[k] ? 0 : i * i * ohms[k];
+        for (RailState r : rails) {
+            r.solve(y, net.emission);
         }
     }
 
     private final OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
         @Override
         public int getDimension() {
-            return 3 * n + ns;
+            return dimension;
         }
 
         @Override
         public double[] computeDerivatives(double t, double[] y) {
-            evaluate(y);
-            double[] d = new double[3 * n + ns];
-            for (int s = 0; s < n; s++) {
-                double rad = model[s].radiated(y[s]);
-                d[s] = (heaterPower[s] - rad) / model[s].heatCapacity();
-                d[n + ns + s] = heaterPower[s];
-                d[2 * n + ns + s] = rad;
+            try {
+                evaluate(y);
+            } catch (TransientFailure e) {
+                throw new TransientFailure("at t = " + StartupNetwork.fmt(t) + " s, " + e.getMessage());
             }
-            for (int k = 0; k < ns; k++) {
-                d[n + k] = softPower[k];
+            double[] d = new double[dimension];
+            for (HeaterState h : heaters) {
+                h.derivatives(y, d);
+            }
+            for (SoftStartState s : softs) {
+                d[s.joules] = s.watts;
             }
             return d;
         }
@@ -219,147 +118,107 @@ final class TransientRun {
     /** Records peaks and over-voltages at a point; adds a sample row when {@code keep}. */
     private void observe(double t, double[] y, boolean keep) {
         evaluate(y);
-        for (int r = 0; r < nr; r++) {
-            boolean after = railBypassed(r);
-            double a = railAmps[r];
-            if (!after) {
-                if (a > peakOn[r]) {
-                    peakOn[r] = a;
-                    peakOnTime[r] = t;
-                }
-            } else if (Double.isNaN(peakBy[r]) || a > peakBy[r]) {
-                peakBy[r] = a;
-                peakByTime[r] = t;
-            }
-            peakDemand[r] = Math.max(peakDemand[r], railDemand[r]);
+        for (RailState r : rails) {
+            r.observe(t);
         }
-        for (int s = 0; s < n; s++) {
-            double ratio = heaterVolts[s] / model[s].rating().volts();
-            if (ratio > peakRatio[s]) {
-                peakRatio[s] = ratio;
-                peakRatioTime[s] = t;
-            }
+        for (HeaterState h : heaters) {
+            h.observe(t);
         }
-        for (int k = 0; k < ns; k++) {
-            peakSoftWatts[k] = Math.max(peakSoftWatts[k], softPower[k]);
+        for (SoftStartState s : softs) {
+            s.observe();
         }
         if (keep) {
-            double[] row = new double[1 + 2 * nr + n];
+            int nr = rails.length;
+            double[] row = new double[1 + 2 * nr + 2 * heaters.length];
             row[0] = t;
             for (int r = 0; r < nr; r++) {
-                row[1 + r] = railAmps[r];
-                row[1 + nr + r] = railVolts[r];
+                row[1 + r] = rails[r].amps;
+                row[1 + nr + r] = rails[r].volts;
             }
-            System.arraycopy(y, 0, row, 1 + 2 * nr, n);
+            for (int s = 0; s < heaters.length; s++) {
+                row[1 + 2 * nr + s] = y[heaters[s].wire];
+                row[1 + 2 * nr + heaters.length + s] = y[heaters[s].cathode];
+            }
             samples.add(row);
         }
     }
 
-    private boolean railBypassed(int r) {
-        for (int k = 0; k < ns; k++) {
-            if (net.softs.get(k).rail() == r && bypassed[k] && ohms[k] > 0) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    private boolean railHasSoft(int r) {
-        for (int k = 0; k < ns; k++) {
-            if (net.softs.get(k).rail() == r && ohms[k] > 0) {
-                return true;
-            }
-        }
-        return false;
-    }
-
     private void updateLimits(double t) {
-        for (int r = 0; r < nr; r++) {
-            boolean now = railDemand[r] > net.machine.rails().get(r).limitAmps();
-            if (now && Double.isNaN(limitSince[r])) {
-                limitSince[r] = t;
-            } else if (!now && !Double.isNaN(limitSince[r])) {
-                inLimit[r] += t - limitSince[r];
-                limitSince[r] = Double.NaN;
-            }
+        for (RailState r : rails) {
+            r.limit(t, r.overLimit());
         }
     }
 
     PowerUpResult run() {
         double end = o.seconds();
         double dt = o.sampleSeconds();
-        double[] y = new double[3 * n + ns];
-        for (int s = 0; s < n; s++) {
-            y[s] = model[s].ambientKelvin();
+        double[] y = new double[dimension];
+        for (HeaterState h : heaters) {
+            y[h.wire] = h.model.ambientKelvin();
+            y[h.cathode] = h.model.ambientKelvin();
         }
-        for (int k = 0; k < ns; k++) {
-            StartupNetwork.Soft s = net.softs.get(k);
-            if (ohms[k] == 0) {
-                bypassed[k] = true;   // no resistor: nothing to bypass
-            } else if (o.holdBypass()) {
-                bypassAt[k] = Double.NaN;
-            } else if (!s.thyratron()) {
-                bypassAt[k] = s.delay() + s.operate();
+        for (SoftStartState s : softs) {
+            if (s.ohms == 0) {
+                s.bypassed = true;   // no resistor: nothing to bypass
+            } else if (!o.holdBypass() && !s.soft.thyratron()) {
+                s.bypassAt = s.soft.delay() + s.soft.operate();
             }
         }
         double t = 0;
-        observe(0, y, true);
+        try {
+            observe(0, y, true);
+        } catch (TransientFailure e) {
+            throw new TransientFailure("at switch-on, " + e.getMessage());
+        }
         updateLimits(0);
         long[] nextSample = {1};
-        if (y.length == 0) {
+        if (heaters.length == 0) {
             // Nothing warms: the rails carry only what is always on, and nothing changes with time.
             t = end;
         }
         while (t < end) {
             double segEnd = end;
-            for (int k = 0; k < ns; k++) {
-                if (!bypassed[k] && bypassAt[k] > t && bypassAt[k] < segEnd) {
-                    segEnd = bypassAt[k];
+            for (SoftStartState s : softs) {
+                if (!s.bypassed && s.bypassAt > t && s.bypassAt < segEnd) {
+                    segEnd = s.bypassAt;
                 }
             }
             DormandPrince54Integrator dp = integrator(end);
-            List<Threshold> thy = new ArrayList<>();
-            int[] thyIndex = new int[ns];
-            Arrays.fill(thyIndex, -1);
-            for (int k = 0; k < ns; k++) {
-                StartupNetwork.Soft s = net.softs.get(k);
-                if (s.thyratron() && !fired[k] && !bypassed[k]) {
-                    int st = s.thyState();
-                    double hot = model[st].hotKelvin();
-                    double frac = s.warmFraction();
-                    Threshold th = new Threshold(x -> x.getPrimaryState()[st] / hot - frac, Action.STOP, true);
-                    thyIndex[k] = thy.size();
-                    thy.add(th);
-                    dp.addEventDetector(th);
+            Threshold[] thy = new Threshold[softs.length];
+            for (int k = 0; k < softs.length; k++) {
+                SoftStartState s = softs[k];
+                if (s.thyratron != null && !s.fired && !s.bypassed) {
+                    thy[k] = new Threshold(x -> warmth(s, x.getPrimaryState()), Action.STOP, true);
+                    dp.addEventDetector(thy[k]);
                 }
             }
-            for (int s = 0; s < n; s++) {
-                if (Double.isNaN(warmTime[s])) {
-                    int si = s;
-                    double hot = model[s].hotKelvin();
-                    dp.addEventDetector(new Threshold(x -> x.getPrimaryState()[si] / hot - 0.95, Action.CONTINUE, true,
+            for (HeaterState h : heaters) {
+                if (Double.isNaN(h.warmTime)) {
+                    double hot = h.model.hotKelvin();
+                    dp.addEventDetector(new Threshold(x -> x.getPrimaryState()[h.wire] / hot - 0.95, Action.CONTINUE, true,
                             (time, up) -> {
-                                if (up && Double.isNaN(warmTime[si])) {
-                                    warmTime[si] = time;
+                                if (up && Double.isNaN(h.warmTime)) {
+                                    h.warmTime = time;
+                                }
+                            }));
+                }
+                if (Double.isNaN(h.emitTime)) {
+                    double at = threshold * h.model.cathodeKelvin();
+                    dp.addEventDetector(new Threshold(x -> x.getPrimaryState()[h.cathode] / at - 1, Action.CONTINUE, true,
+                            (time, up) -> {
+                                if (up && Double.isNaN(h.emitTime)) {
+                                    h.emitTime = time;
                                 }
                             }));
                 }
             }
-            for (int r = 0; r < nr; r++) {
-                double lim = net.machine.rails().get(r).limitAmps();
+            for (RailState r : rails) {
+                double lim = r.rail.limitAmps();
                 if (Double.isFinite(lim)) {
-                    int ri = r;
                     dp.addEventDetector(new Threshold(x -> {
                         evaluate(x.getPrimaryState());
-                        return railDemand[ri] - lim;
-                    }, Action.RESET_DERIVATIVES, false, (time, up) -> {
-                        if (up && Double.isNaN(limitSince[ri])) {
-                            limitSince[ri] = time;
-                        } else if (!up && !Double.isNaN(limitSince[ri])) {
-                            inLimit[ri] += time - limitSince[ri];
-                            limitSince[ri] = Double.NaN;
-                        }
-                    }));
+                        return r.demand - lim;
+                    }, Action.RESET_DERIVATIVES, false, (time, up) -> r.limit(time, up)));
                 }
             }
             dp.addStepHandler(new ODEStepHandler() {
@@ -376,33 +235,51 @@ final class TransientRun {
                     observe(tc, in.getCurrentState().getPrimaryState(), false);
                 }
             });
-            ODEStateAndDerivative fin = dp.integrate(ode, new ODEState(t, y), segEnd);
+            ODEStateAndDerivative fin;
+            try {
+                fin = dp.integrate(ode, new ODEState(t, y), segEnd);
+            } catch (MathRuntimeException e) {
+                throw new TransientFailure("the heater temperatures could not be integrated beyond t = "
+                        + StartupNetwork.fmt(t) + " s (" + e.getMessage() + "): check the rails' voltages and resistances");
+            }
             evaluations += dp.getEvaluations();
             t = fin.getTime();
             y = fin.getPrimaryState().clone();
-            for (int k = 0; k < ns; k++) {
-                if (thyIndex[k] >= 0 && !Double.isNaN(thy.get(thyIndex[k]).firstTime())) {
-                    fired[k] = true;
-                    fireTime[k] = thy.get(thyIndex[k]).firstTime();
-                    if (net.softs.get(k).picksUp() && !o.holdBypass()) {
-                        bypassAt[k] = fireTime[k] + net.softs.get(k).operate();
-                    }
+            // A step stopped by one event may end on another's threshold before that one is reported.
+            for (HeaterState h : heaters) {
+                if (Double.isNaN(h.warmTime) && h.model.fraction(y[h.wire]) >= 0.95) {
+                    h.warmTime = t;
                 }
-            }
-            boolean changed = false;
-            for (int k = 0; k < ns; k++) {
-                if (!bypassed[k] && bypassAt[k] <= t + 1e-12) {
-                    if (!changed && (samples.isEmpty() || samples.get(samples.size() - 1)[0] < t) && dt > 0) {
-                        observe(t, y, true);
-                    }
-                    bypassed[k] = true;
-                    bypassTime[k] = t;
-                    changed = true;
+                if (Double.isNaN(h.emitTime) && h.model.cathodeFraction(y[h.cathode]) >= threshold) {
+                    h.emitTime = t;
                 }
             }
             boolean anyFired = false;
-            for (int k = 0; k < ns; k++) {
-                anyFired |= thyIndex[k] >= 0 && fired[k];
+            for (int k = 0; k < softs.length; k++) {
+                SoftStartState s = softs[k];
+                if (thy[k] == null) {
+                    continue;
+                }
+                // A detector that fired, or any other that stands at its threshold in the same step
+                // (identical thyratrons share one trajectory, and only one event stops a step).
+                double when = thy[k].firstTime();
+                if (Double.isNaN(when) && warmth(s, y) >= 0) {
+                    when = t;
+                }
+                if (!Double.isNaN(when)) {
+                    s.fire(when, o.holdBypass());
+                    anyFired = true;
+                }
+            }
+            boolean changed = false;
+            for (SoftStartState s : softs) {
+                if (!s.bypassed && s.bypassAt <= t + 1e-12) {
+                    if (!changed && (samples.isEmpty() || samples.get(samples.size() - 1)[0] < t) && dt > 0) {
+                        observe(t, y, true);
+                    }
+                    s.close(t);
+                    changed = true;
+                }
             }
             if (changed || anyFired) {
                 evaluate(y);
@@ -415,23 +292,25 @@ final class TransientRun {
         }
         evaluate(y);
         updateLimits(end);
-        for (int r = 0; r < nr; r++) {
-            if (!Double.isNaN(limitSince[r])) {
-                inLimit[r] += end - limitSince[r];
+        for (RailState r : rails) {
+            if (!Double.isNaN(r.limitSince)) {
+                r.inLimit += end - r.limitSince;
             }
         }
         return result(y, end);
     }
 
+    /** The thyratron's firing function: negative until its cathode reaches the emission threshold, continuous. */
+    private double warmth(SoftStartState s, double[] y) {
+        HeaterState h = s.thyratron;
+        return h.model.cathodeFraction(y[h.cathode]) - threshold;
+    }
+
     private DormandPrince54Integrator integrator(double end) {
-        int dim = 3 * n + ns;
-        double[] abs = new double[dim];
-        double[] rel = new double[dim];
-        Arrays.fill(abs, 1e-3);
+        double[] abs = new double[dimension];
+        double[] rel = new double[dimension];
+        Arrays.fill(abs, 1e-3);   // kelvin and joules
         Arrays.fill(rel, 1e-6);
-        for (int s = 0; s < n; s++) {
-            abs[s] = 1e-3;   // kelvin
-        }
         DormandPrince54Integrator dp = new DormandPrince54Integrator(1e-9, Math.min(0.25, end / 20), abs, rel);
         dp.setMaxEvaluations(2_000_000);
         return dp;
@@ -439,64 +318,58 @@ final class TransientRun {
 
     private PowerUpResult result(double[] y, double end) {
         int m = samples.size();
+        int nr = rails.length;
         double[] t = new double[m];
         for (int i = 0; i < m; i++) {
             t[i] = samples.get(i)[0];
         }
-        List<RailTransient> rails = new ArrayList<>();
-        for (int r = 0; r < nr; r++) {
-            Rail rail = net.machine.rails().get(r);
+        List<RailTransient> railResults = new ArrayList<>();
+        for (RailState r : rails) {
             double[] a = new double[m];
             double[] v = new double[m];
             for (int i = 0; i < m; i++) {
-                a[i] = samples.get(i)[1 + r];
-                v[i] = samples.get(i)[1 + nr + r];
+                a[i] = samples.get(i)[1 + r.index];
+                v[i] = samples.get(i)[1 + nr + r.index];
             }
-            double bt = Double.NaN;
-            for (int k = 0; k < ns; k++) {
-                if (net.softs.get(k).rail() == r && ohms[k] > 0 && !Double.isNaN(bypassTime[k])) {
-                    bt = Double.isNaN(bt) ? bypassTime[k] : Math.min(bt, bypassTime[k]);
-                }
-            }
-            boolean load = net.railGroups[r].length > 0 || net.plateState[r].length > 0 || net.alwaysSiemens[r] > 0;
-            for (StartupNetwork.Soft s : net.softs) {
-                load |= s.thyratron() && s.fromRail() == r;
-            }
-            rails.add(new RailTransient(r, rail.name(), rail.volts(), rail.limitAmps(), t, a, v, peakOn[r],
-                    peakOnTime[r], peakBy[r], peakByTime[r], bt, peakDemand[r], inLimit[r], railAmps[r],
-                    railHasSoft(r), load));
+            railResults.add(new RailTransient(r.index, r.rail.name(), r.rail.volts(), r.rail.limitAmps(), t, a, v,
+                    r.peakOn, r.peakOnTime, r.peakBy, r.peakByTime, r.bypassTime(), r.peakDemand, r.inLimit, r.amps,
+                    r.hasSoftStart(), r.hasLoad()));
         }
-        List<SoftStartResult> softs = new ArrayList<>();
+        List<SoftStartResult> softResults = new ArrayList<>();
         List<RelayDriverCheck> checks = new ArrayList<>();
-        for (int k = 0; k < ns; k++) {
-            StartupNetwork.Soft s = net.softs.get(k);
-            double trig = s.thyratron() ? fireTime[k] : (s.delay() <= end ? s.delay() : Double.NaN);
-            double inCircuit = Double.isNaN(bypassTime[k]) ? end : bypassTime[k];
-            double joules = y[n + k];
-            softs.add(new SoftStartResult(s.name(), s.rail(), ohms[k], s.ratedWatts(), ohms[k] == 0 ? Double.NaN : trig,
-                    ohms[k] == 0 ? Double.NaN : bypassTime[k], joules, peakSoftWatts[k],
-                    inCircuit > 0 ? joules / inCircuit : 0, s.thyratron()));
+        for (SoftStartState ss : softs) {
+            StartupNetwork.Soft s = ss.soft;
+            double trig = s.thyratron() ? ss.fireTime : (s.delay() <= end ? s.delay() : Double.NaN);
+            double inCircuit = Double.isNaN(ss.bypassTime) ? end : ss.bypassTime;
+            double joules = y[ss.joules];
+            boolean none = ss.ohms == 0;
+            softResults.add(new SoftStartResult(s.name(), s.rail(), ss.ohms, s.ratedWatts(), none ? Double.NaN : trig,
+                    none ? Double.NaN : ss.bypassTime, joules, ss.peakWatts, inCircuit > 0 ? joules / inCircuit : 0,
+                    s.thyratron()));
             if (s.check() != null) {
                 RelayDriverCheck c = s.check();
                 checks.add(new RelayDriverCheck(c.tube(), c.railName(), c.railVolts(), c.sourceOhms(), c.arcDropVolts(),
                         c.plateOhms(), c.relay(), c.coilVolts(), c.coilAmps(), c.avgRatingAmps(), c.peakRatingAmps(),
-                        fireTime[k], c.heatingSeconds()));
+                        ss.fireTime, c.heatingSeconds()));
             }
         }
-        List<HeaterWarmup> heaters = new ArrayList<>();
-        double[][] kelvin = new double[n][m];
-        for (int s = 0; s < n; s++) {
-            int g = net.stateGroup[s];
-            HeaterModel h = model[s];
-            heaters.add(new HeaterWarmup(h.tube(), h.rating().volts(), h.rating().amps(), net.groupRail[g],
-                    net.groupLabel[g], net.statePosition[s], net.groupCount[g], net.groupMixed[g], warmTime[s],
-                    peakRatio[s], peakRatioTime[s], heaterVolts[s], y[s], y[n + ns + s], y[2 * n + ns + s],
-                    h.heatCapacity() * (y[s] - h.ambientKelvin())));
+        List<HeaterWarmup> warmups = new ArrayList<>();
+        double[][] kelvin = new double[heaters.length][m];
+        double[][] cathodeKelvin = new double[heaters.length][m];
+        for (int s = 0; s < heaters.length; s++) {
+            HeaterState h = heaters[s];
+            HeaterModel model = h.model;
+            int g = h.group;
+            warmups.add(new HeaterWarmup(model.tube(), model.rating().volts(), model.rating().amps(), net.groupRail[g],
+                    net.groupLabel[g], h.position, net.groupCount[g], net.groupMixed[g], h.warmTime, h.peakRatio,
+                    h.peakRatioTime, h.volts, y[h.wire], y[h.joulesIn], y[h.joulesRadiated], h.joulesStored(y),
+                    y[h.cathode], h.emitTime));
             for (int i = 0; i < m; i++) {
                 kelvin[s][i] = samples.get(i)[1 + 2 * nr + s];
+                cathodeKelvin[s][i] = samples.get(i)[1 + 2 * nr + heaters.length + s];
             }
         }
-        return new PowerUpResult(net.machine.name(), o, net.models, List.copyOf(rails), List.copyOf(softs),
-                List.copyOf(heaters), List.copyOf(checks), t, kelvin, evaluations, net.notes);
+        return new PowerUpResult(net.machine.name(), o, net.models, List.copyOf(railResults), List.copyOf(softResults),
+                List.copyOf(warmups), List.copyOf(checks), t, kelvin, cathodeKelvin, evaluations, net.notes);
     }
 }

@@ -266,7 +266,7 @@ public final class StraightLineCompiler {
 
     /** Upper bound of one statement's bytecode: 5 bytes a load or store address, an operator per operand, 4 for a complement. */
     static int cost(Gate g) {
-        return 5 + 6 * Math.max(1, g.inputs().length) + 1 + 4;
+        return 5 + 6 * Math.max(1, g.arity()) + 1 + 4;
     }
 
     /**

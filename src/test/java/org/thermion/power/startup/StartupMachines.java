@@ -78,6 +78,20 @@ final class StartupMachines {
                   bypass when""");
     }
 
+    /** The thyratron machine with a second heater rail and soft start, bypassed by an identical 2D21. */
+    static String twoThyratronRails(int tubes) {
+        String one = invertersWithThyratron(tubes, "50 ohm");
+        return one.replace("rail heat  {", "rail heat2 { voltage 24 V; source 0.05 ohm; limit 40 A }\nrail heat  {")
+                .replace("heaters on heat {", "heaters on heat2 {\n  series 4 of 6AU6 across machine\n}\nheaters on heat {")
+                .replace("softstart heat_soft on heat {", """
+                        softstart heat2_soft on heat2 {
+                          resistor 2 ohm rated 150 W
+                          relay { coil 100 ohm; rated 12 V; pickup 7.2 V; dropout 1.2 V; operate 10 ms }
+                          bypass when pilot_relay warm
+                        }
+                        softstart heat_soft on heat {""");
+    }
+
     /** A 6AU6 in series with a slow heater of our own type (30 s warm-up) on 12.6 V. */
     static String mixedString() {
         return """
