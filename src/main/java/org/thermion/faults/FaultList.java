@@ -29,6 +29,8 @@ public final class FaultList {
     private final List<Fault> collapsed;
     private final boolean[] dominated;
     private final int stuckAtCount;
+    /** The stuck-at fault of (slot, value) at {@code slot * 2 + value}, or -1. */
+    private final int[] saIndex;
     private final int stuckAtCollapsed;
 
     private FaultList(Circuit c) {
@@ -36,7 +38,7 @@ public final class FaultList {
         Machine m = c.machine;
         List<Fault> f = new ArrayList<>();
         List<Site> sites = c.sites();
-        int[] saIndex = new int[sites.size() * 2];
+        saIndex = new int[sites.size() * 2];
         Arrays.fill(saIndex, -1);
         for (Site s : sites) {
             if (s.line()) {
@@ -243,6 +245,26 @@ public final class FaultList {
     /** The representative (an index into {@link #all}) of fault {@code id}'s equivalence class. */
     public int classOf(int id) {
         return classOf[id];
+    }
+
+    /**
+     * What the fault does electrically, as a key: faults with equal keys force the same wires
+     * (a dead single-stage tube is its output stuck), equivalent stuck-at faults share a key.
+     */
+    public String effect(Fault f) {
+        if (f.forces().size() == 1) {
+            Force x = f.forces().get(0);
+            int sa = saIndex[x.slot() * 2 + (x.value() ? 1 : 0)];
+            if (sa >= 0) {
+                return "sa" + classOf[sa];
+            }
+        }
+        List<String> parts = new ArrayList<>();
+        for (Force x : f.forces()) {
+            parts.add(x.slot() + (x.value() ? "=1" : "=0"));
+        }
+        java.util.Collections.sort(parts);
+        return String.join(",", parts);
     }
 
     /** Members of the class whose representative is {@code rep}, in id order. */

@@ -98,6 +98,11 @@ final class LaneMachine {
     /** Settles, then loads the latches (and the program counter) of the next phase together. */
     void phase() {
         settle();
+        load();
+    }
+
+    /** Loads the latches (and the program counter) of the next phase from the settled values. */
+    void load() {
         int p = nextPhase - 1;
         int[] data = c.latchData[p];
         int[] en = c.latchEnable[p];
