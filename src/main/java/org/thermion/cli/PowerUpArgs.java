@@ -50,6 +50,24 @@ final class PowerUpArgs {
         return new Named<>(p[0], new Range(from, to, step));
     }
 
+    /** A time range {@code TMIN..TMAX:STEP}, each with its unit (a unit written once at the end serves all three). */
+    static Range timeRange(String text, String option) {
+        String body = text.trim();
+        int dots = body.indexOf("..");
+        int colon = body.lastIndexOf(':');
+        if (dots < 0 || colon < dots) {
+            throw new IllegalArgumentException(option + " wants TMIN..TMAX:STEP, e.g. 2s..20s:2s, got '" + text + "'");
+        }
+        String a = body.substring(0, dots).trim(), b = body.substring(dots + 2, colon).trim(), c = body.substring(colon + 1).trim();
+        String unit = trailingUnit(c);
+        double from = seconds(withUnit(a, unit), option), to = seconds(withUnit(b, unit), option),
+                step = seconds(withUnit(c, unit), option);
+        if (!(step > 0) || !(from > 0) || to < from || to > 3600) {
+            throw new IllegalArgumentException(option + " needs 0 < TMIN <= TMAX <= 1 h and a positive step, got '" + text + "'");
+        }
+        return new Range(from, to, step);
+    }
+
     static double seconds(String text, String option) {
         String t = text.trim();
         String[][] units = {{"ms", "1e-3"}, {"us", "1e-6"}, {"min", "60"}, {"s", "1"}};

@@ -8,6 +8,7 @@ import org.thermion.power.startup.DrawMode;
 import org.thermion.power.startup.PowerUpOptions;
 import org.thermion.power.startup.PowerUpResult;
 import org.thermion.power.startup.ResistorSweep;
+import org.thermion.power.startup.SoftStartSizing;
 import org.thermion.power.startup.StartupNetwork;
 import org.thermion.power.startup.TransientFailure;
 import picocli.CommandLine.Command;
@@ -44,6 +45,11 @@ final class PowerUpCommand implements Callable<Integer> {
     @Option(names = "--sweep", paramLabel = "[NAME=]RMIN..RMAX:STEP",
             description = "Tabulate both current peaks against the resistor (e.g. 0.5ohm..5ohm:0.25ohm) and recommend a value.")
     String sweep;
+
+    @Option(names = "--bypass", paramLabel = "TMIN..TMAX:STEP",
+            description = "With --sweep on a machine without a soft start: the bypass times to tabulate against the "
+                    + "resistor (default: ${DEFAULT-VALUE}).", defaultValue = "2s..20s:2s")
+    String bypass;
 
     @Option(names = "--csv", paramLabel = "FILE", description = "Write the time series (RFC 4180) to FILE.")
     Path csv;
@@ -110,9 +116,13 @@ final class PowerUpCommand implements Callable<Integer> {
         if (m == null) {
             return ExitCodes.BAD_INPUT;
         }
-        if (m.softStarts().isEmpty() && (!rs.isEmpty() || range != null)) {
-            err.println("error: " + file + " declares no soft start, so --resistor and --sweep have nothing to change");
+        if (m.softStarts().isEmpty() && !rs.isEmpty()) {
+            err.println("error: " + file + " declares no soft start, so --resistor has nothing to change; "
+                    + "--sweep sizes one");
             return ExitCodes.BAD_INPUT;
+        }
+        if (m.softStarts().isEmpty() && range != null) {
+            return size(m, o, mode, range, out, err);
         }
         StartupNetwork net;
         try {
@@ -173,6 +183,49 @@ final class PowerUpCommand implements Callable<Integer> {
         }
         out.flush();
         return report.ok() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
+    }
+
+    /** {@code --sweep} on a machine without a soft start: a resistor and bypass-time table for one rail. */
+    private int size(Machine m, PowerUpOptions o, DrawMode mode, PowerUpArgs.Named<PowerUpArgs.Range> range,
+                     PrintWriter out, PrintWriter err) {
+        try {
+            StartupNetwork net = StartupNetwork.of(m, o.assumptions(), mode);
+            int rail = range.softStart() == null ? inrushRail(m, net, o) : m.railIndex(range.softStart());
+            if (rail < 0) {
+                throw new IllegalArgumentException("--sweep: no rail named '" + range.softStart() + "'");
+            }
+            PowerUpArgs.Range times = PowerUpArgs.timeRange(bypass, "--bypass");
+            double[] ohms = ResistorSweep.range(range.value().from(), range.value().to(), range.value().step());
+            double[] secs = SoftStartSizing.times(times.from(), times.to(), times.step());
+            if ((long) ohms.length * secs.length > 10_000) {
+                throw new IllegalArgumentException("--sweep x --bypass: " + ohms.length + " x " + secs.length
+                        + " cells is too many (at most 10000)");
+            }
+            PowerUpOptions run = o.withSeconds(Math.max(o.seconds(), secs[secs.length - 1]));
+            SoftStartSizing.Table t = SoftStartSizing.run(net, run, rail, ohms, secs,
+                    Runtime.getRuntime().availableProcessors());
+            PowerUpReport.sizingText(out, t);
+            out.flush();
+            return t.best() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
+        } catch (IllegalArgumentException | TransientFailure e) {
+            err.println("error: " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
+    }
+
+    /** The rail with heater strings whose switch-on current is largest: the one a soft start is for. */
+    private static int inrushRail(Machine m, StartupNetwork net, PowerUpOptions o) {
+        PowerUpResult r = net.solve(o.withSampleSeconds(0));
+        int best = -1;
+        for (org.thermion.model.HeaterString hs : m.heaterStrings()) {
+            if (best < 0 || r.rail(hs.rail()).switchOnPeak() > r.rail(best).switchOnPeak()) {
+                best = hs.rail();
+            }
+        }
+        if (best < 0) {
+            throw new IllegalArgumentException("the machine has no heater string, so there is no inrush to soften");
+        }
+        return best;
     }
 
     private String softStartName(StartupNetwork net, String given, String option) {

@@ -204,6 +204,38 @@ final class PowerUpReport {
         wrap(out, CAUTION, 78);
     }
 
+    /** The two-way sizing table of a soft start the machine does not have yet; the balance point marked with *. */
+    static void sizingText(PrintWriter out, org.thermion.power.startup.SoftStartSizing.Table t) {
+        wrap(out, "sizing a soft start for rail " + t.rail() + " (no soft start declared; limit "
+                + (Double.isInfinite(t.limitAmps()) ? "none" : Units.amps(t.limitAmps())) + "): larger of the switch-on "
+                + "and bypass peaks, amperes, by resistor (rows) and bypass time (columns); * marks the balance point, "
+                + "! a cell at the supply's limit", 78);
+        StringBuilder head = new StringBuilder(String.format(Locale.ROOT, "  %-9s", "resistor"));
+        for (double s : t.seconds()) {
+            head.append(String.format(Locale.ROOT, " %7s", f0(s) + " s"));
+        }
+        out.println(head);
+        for (int i = 0; i < t.ohms().length; i++) {
+            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "  %-9s", ohms(t.ohms()[i])));
+            for (int j = 0; j < t.seconds().length; j++) {
+                org.thermion.power.startup.SoftStartSizing.Cell c = t.cells()[i][j];
+                String mark = i == t.bestOhm() && j == t.bestTime() ? "*" : c.withinLimit() ? " " : "!";
+                row.append(String.format(Locale.ROOT, " %6.2f%s", c.worstPeak(), mark));
+            }
+            out.println(row);
+        }
+        org.thermion.power.startup.SoftStartSizing.Cell b = t.best();
+        out.println(b == null ? "  no cell keeps the supply within its limit"
+                : "  balance: " + ohms(t.ohms()[t.bestOhm()]) + " bypassed at " + Units.time(t.seconds()[t.bestTime()])
+                + " (switch-on peak " + Units.amps(b.switchOnPeak()) + ", bypass peak " + Units.amps(b.bypassPeak())
+                + (Double.isNaN(t.preferredOhms()) ? ")" : "); preferred value " + ohms(t.preferredOhms())
+                + (Double.isNaN(t.preferredWatts()) ? "" : ", " + Units.watts(t.preferredWatts()))
+                + " by temperature rise (10 x for 5 s, common practice)"));
+        out.println("  computed on " + t.threads() + " thread(s), one run per resistor serving every bypass time");
+        out.println();
+        wrap(out, CAUTION, 78);
+    }
+
     static void sweepText(PrintWriter out, ResistorSweep.Result s) {
         out.println("soft-start resistor sweep for " + s.softStart() + " on " + s.rail() + " (limit "
                 + (Double.isInfinite(s.limitAmps()) ? "none" : Units.amps(s.limitAmps())) + ", rating "

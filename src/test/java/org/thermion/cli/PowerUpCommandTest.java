@@ -190,4 +190,22 @@ class PowerUpCommandTest {
         assertThat(r.code()).isEqualTo(2);
         assertThat(r.err()).contains("error: ").doesNotContain("internal error").containsAnyOf("heater of 6AU6", "rail heat");
     }
+
+    @Test
+    void aSweepOnAMachineWithoutASoftStartSizesOne() throws IOException {
+        Path m = inverters();
+        String text = Files.readString(m);
+        int from = text.indexOf("softstart heat_soft");
+        Files.writeString(m, text.substring(0, from) + text.substring(text.indexOf("}", from) + 1));
+        Run r = run("powerup", m.toString(), "--sweep", "heat=1ohm..3ohm:0.5ohm", "--bypass", "4s..12s:4s");
+        assertThat(r.err()).isEmpty();
+        assertThat(r.code()).isZero();
+        assertThat(r.out()).contains("sizing a soft start for rail heat").contains("balance: ").contains("*")
+                .contains("preferred value");
+        // Five resistors by three bypass times.
+        assertThat(r.out().lines().filter(l -> l.matches("  \\d.* ohm .*")).count()).isEqualTo(5);
+        Run bad = run("powerup", m.toString(), "--sweep", "1ohm..3ohm:0.5ohm", "--bypass", "4s..2s:1s");
+        assertThat(bad.code()).isEqualTo(2);
+        assertThat(bad.err()).startsWith("error: --bypass");
+    }
 }

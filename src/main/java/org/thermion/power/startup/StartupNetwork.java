@@ -294,6 +294,46 @@ public final class StartupNetwork {
         }
     }
 
+    /** {@code base} with one more soft start (a copy: the network stays immutable). */
+    private StartupNetwork(StartupNetwork base, Soft extra) {
+        this.machine = base.machine;
+        this.assumptions = base.assumptions;
+        this.drawMode = base.drawMode;
+        this.emission = base.emission;
+        this.models = base.models;
+        this.notes = base.notes;
+        this.states = base.states;
+        this.stateModel = base.stateModel;
+        this.stateGroup = base.stateGroup;
+        this.statePosition = base.statePosition;
+        this.stateShunt = base.stateShunt;
+        this.groupRail = base.groupRail;
+        this.groupCount = base.groupCount;
+        this.groupDrop = base.groupDrop;
+        this.groupStates = base.groupStates;
+        this.groupLabel = base.groupLabel;
+        this.groupMixed = base.groupMixed;
+        this.railGroups = base.railGroups;
+        this.plateState = base.plateState;
+        this.plateSiemens = base.plateSiemens;
+        this.alwaysSiemens = base.alwaysSiemens;
+        List<Soft> sl = new ArrayList<>(base.softs);
+        sl.add(extra);
+        this.softs = List.copyOf(sl);
+    }
+
+    /** Name of the soft start {@link #withTimedSoftStart} adds. */
+    public static final String SIZING = "sizing";
+
+    /**
+     * This network with a soft start of no resistor, bypassed by timer, in rail {@code rail}: what
+     * {@link SoftStartSizing} varies on a machine that declares none.
+     */
+    StartupNetwork withTimedSoftStart(int rail) {
+        return new StartupNetwork(this, new Soft(SIZING, rail, 0, Double.POSITIVE_INFINITY, Double.NaN, -1, -1, 0, 0,
+                Double.NaN, 0, null));
+    }
+
     /** Builds the network of {@code m} under the given assumptions. */
     public static StartupNetwork of(Machine m, ThermalAssumptions a, DrawMode mode) {
         return new StartupNetwork(m, a, mode);

@@ -33,6 +33,13 @@ final class TransientRun {
     /** The emission threshold as a fraction of cathode operating temperature. */
     private final double threshold;
     private final List<double[]> samples = new ArrayList<>();
+    // Bypass probes: with the relay held open, what each bypass time would have given (see probe()).
+    private SoftStartState probed;
+    private double[] probeTimes = new double[0];
+    private int nextProbe;
+    private double[] probeOn;
+    private double[] probeBy;
+    private double[] probeWatts;
     private long evaluations;
 
     TransientRun(StartupNetwork net, PowerUpOptions o) {
@@ -247,6 +254,10 @@ final class TransientRun {
                 @Override
                 public void handleStep(ODEStateInterpolator in) {
                     double tc = in.getCurrentState().getTime();
+                    while (nextProbe < probeTimes.length && probeTimes[nextProbe] <= tc + 1e-12) {
+                        double tp = Math.min(probeTimes[nextProbe], tc);
+                        takeProbe(nextProbe++, in.getInterpolatedState(tp).getPrimaryState());
+                    }
                     if (dt > 0) {
                         while (nextSample[0] * dt <= tc + 1e-12 && nextSample[0] * dt <= end + 1e-12) {
                             double ts = Math.min(nextSample[0] * dt, tc);
@@ -329,6 +340,48 @@ final class TransientRun {
             }
         }
         return result(y, end);
+    }
+
+    /**
+     * Asks this run (which holds every relay open) what closing soft start {@code soft}'s bypass at
+     * each of {@code times} (ascending) would give: the rail's switch-on peak up to then, its current
+     * the instant after closing (the bypass peak, since warming heaters only lower it afterwards), and
+     * the continuous rating the resistor's temperature rise asks by then. One trajectory serves every
+     * bypass time up to the moment of bypass.
+     */
+    void probe(int soft, double[] times) {
+        probed = softs[soft];
+        probeTimes = times.clone();
+        probeOn = new double[times.length];
+        probeBy = new double[times.length];
+        probeWatts = new double[times.length];
+        Arrays.fill(probeOn, Double.NaN);
+        Arrays.fill(probeBy, Double.NaN);
+        Arrays.fill(probeWatts, Double.NaN);
+    }
+
+    private void takeProbe(int i, double[] y) {
+        RailState rail = rails[probed.soft.rail()];
+        evaluate(y);
+        probeOn[i] = Math.max(rail.peakOn, rail.amps);
+        probeWatts[i] = Math.max(probed.neededWatts, y[probed.heat]);
+        probed.bypassed = true;
+        evaluate(y);
+        probeBy[i] = rail.amps;
+        probed.bypassed = false;
+        evaluate(y);
+    }
+
+    double[] probeSwitchOn() {
+        return probeOn.clone();
+    }
+
+    double[] probeBypass() {
+        return probeBy.clone();
+    }
+
+    double[] probeWatts() {
+        return probeWatts.clone();
     }
 
     /** Openings of one relay after which its chatter is no longer followed (it is reported either way). */
