@@ -100,6 +100,7 @@ public final class BenchSuite {
         Machine demoMachine = sources.get(0).elaborate();
         verify(rows, demoMachine);
         powerUp(rows, demoMachine);
+        PowerUpBench.rows(rows, quick, progress);
         ParseScaling.rows(rows, quick ? 1 : 3);
         if (!Double.isNaN(elab10k) && !Double.isNaN(elab100k)) {
             rows.add(BenchRow.target("scale", "elaborate time 10^5 / 10^4", elab100k / elab10k, "x", ELAB_GROWTH, true, "12 x"));
@@ -236,7 +237,7 @@ public final class BenchSuite {
     }
 
     /** Best wall time of {@code runs} runs after one warm-up run, in seconds. */
-    private static double best(Runnable r, int runs) {
+    static double best(Runnable r, int runs) {
         r.run();
         double best = Double.POSITIVE_INFINITY;
         for (int i = 0; i < runs; i++) {

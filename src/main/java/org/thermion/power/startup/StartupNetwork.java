@@ -73,7 +73,7 @@ public final class StartupNetwork {
         }
     }
 
-    private StartupNetwork(Machine m, ThermalAssumptions a, DrawMode mode) {
+    private StartupNetwork(Machine m, ThermalAssumptions a, DrawMode mode, boolean share) {
         this.machine = m;
         this.assumptions = a;
         this.drawMode = mode;
@@ -93,7 +93,7 @@ public final class StartupNetwork {
         Arrays.fill(envString, -1);
         for (HeaterString hs : m.heaterStrings()) {
             StringBuilder key = new StringBuilder().append(hs.rail()).append('|').append(hs.dropOhms()).append('|')
-                    .append(hs.shunt());
+                    .append(hs.shunt()).append('|').append(share ? 0 : groupFirst.size());
             for (int i = 0; i < hs.envelopes().size(); i++) {
                 Envelope e = m.envelopes().get(hs.envelopes().get(i));
                 HeaterRating r = hs.ratings().get(i);
@@ -336,7 +336,15 @@ public final class StartupNetwork {
 
     /** Builds the network of {@code m} under the given assumptions. */
     public static StartupNetwork of(Machine m, ThermalAssumptions a, DrawMode mode) {
-        return new StartupNetwork(m, a, mode);
+        return new StartupNetwork(m, a, mode, true);
+    }
+
+    /**
+     * The same network with one trajectory per heater string, identical or not: slower, the same
+     * answer (for tests of the sharing and for the bench's worst case).
+     */
+    public static StartupNetwork unshared(Machine m, ThermalAssumptions a, DrawMode mode) {
+        return new StartupNetwork(m, a, mode, false);
     }
 
     /** Solves the transient. */

@@ -221,26 +221,6 @@ final class TransientRun {
                     dp.addEventDetector(drop[k]);
                 }
             }
-            for (HeaterState h : heaters) {
-                if (Double.isNaN(h.warmTime)) {
-                    double hot = h.model.hotKelvin();
-                    dp.addEventDetector(new Threshold(x -> x.getPrimaryState()[h.wire] / hot - 0.95, Action.CONTINUE, true,
-                            (time, up) -> {
-                                if (up && Double.isNaN(h.warmTime)) {
-                                    h.warmTime = time;
-                                }
-                            }));
-                }
-                if (Double.isNaN(h.emitTime)) {
-                    double at = threshold * h.model.cathodeKelvin();
-                    dp.addEventDetector(new Threshold(x -> x.getPrimaryState()[h.cathode] / at - 1, Action.CONTINUE, true,
-                            (time, up) -> {
-                                if (up && Double.isNaN(h.emitTime)) {
-                                    h.emitTime = time;
-                                }
-                            }));
-                }
-            }
             for (RailState r : rails) {
                 double lim = r.rail.limitAmps();
                 if (Double.isFinite(lim)) {
@@ -254,6 +234,7 @@ final class TransientRun {
                 @Override
                 public void handleStep(ODEStateInterpolator in) {
                     double tc = in.getCurrentState().getTime();
+                    crossings(in);
                     while (nextProbe < probeTimes.length && probeTimes[nextProbe] <= tc + 1e-12) {
                         double tp = Math.min(probeTimes[nextProbe], tc);
                         takeProbe(nextProbe++, in.getInterpolatedState(tp).getPrimaryState());
@@ -382,6 +363,39 @@ final class TransientRun {
 
     double[] probeWatts() {
         return probeWatts.clone();
+    }
+
+    /**
+     * Each heater's 95 % point and its cathode's emission threshold, found inside the step that crosses
+     * them by bisection on the step's interpolator: warming is monotone, and a detector per heater
+     * would make the integrator check hundreds of functions at every step.
+     */
+    private void crossings(ODEStateInterpolator in) {
+        double[] y = in.getCurrentState().getPrimaryState();
+        for (HeaterState h : heaters) {
+            if (Double.isNaN(h.warmTime) && y[h.wire] >= 0.95 * h.model.hotKelvin()) {
+                h.warmTime = crossing(in, h.wire, 0.95 * h.model.hotKelvin());
+            }
+            if (Double.isNaN(h.emitTime) && y[h.cathode] >= threshold * h.model.cathodeKelvin()) {
+                h.emitTime = crossing(in, h.cathode, threshold * h.model.cathodeKelvin());
+            }
+        }
+    }
+
+    private static double crossing(ODEStateInterpolator in, int index, double level) {
+        double lo = in.getPreviousState().getTime(), hi = in.getCurrentState().getTime();
+        if (in.getPreviousState().getPrimaryState()[index] >= level) {
+            return lo;
+        }
+        for (int i = 0; i < 50 && hi - lo > 1e-9; i++) {
+            double mid = 0.5 * (lo + hi);
+            if (in.getInterpolatedState(mid).getPrimaryState()[index] >= level) {
+                hi = mid;
+            } else {
+                lo = mid;
+            }
+        }
+        return hi;
     }
 
     /** Openings of one relay after which its chatter is no longer followed (it is reported either way). */

@@ -170,4 +170,17 @@ class PowerUpSolverTest {
         assertThat(a.triggerTime()).isCloseTo(b.triggerTime(), within(1e-6));   // the event solver's accuracy
         assertThat(r.relayChecks()).allSatisfy(c -> assertThat(c.fireTime()).isFinite());
     }
+
+    @Test
+    void identicalStringsSharingOneTrajectoryGiveTheSameAnswerAsOneTrajectoryEach() {
+        Machine m = inverters("2 ohm", "40 A");
+        PowerUpOptions o = PowerUpOptions.defaults().withSampleSeconds(0);
+        StartupNetwork shared = StartupNetwork.of(m, ThermalAssumptions.standard(), DrawMode.HIGHEST);
+        StartupNetwork each = StartupNetwork.unshared(m, ThermalAssumptions.standard(), DrawMode.HIGHEST);
+        assertThat(each.heaterStates()).isEqualTo(88).isGreaterThan(shared.heaterStates());
+        RailTransient a = heat(shared.solve(o)), b = heat(each.solve(o));
+        assertThat(b.switchOnPeak()).isCloseTo(a.switchOnPeak(), within(1e-9 * a.switchOnPeak()));
+        assertThat(b.bypassPeak()).isCloseTo(a.bypassPeak(), within(1e-4 * a.bypassPeak()));
+        assertThat(b.finalAmps()).isCloseTo(a.finalAmps(), within(1e-4 * a.finalAmps()));
+    }
 }
