@@ -84,7 +84,7 @@ final class Parts {
         if (i == null) {
             diags.error(at, "unknown rail '" + name + "'",
                     Declarations.hintFor(name, new ArrayList<>(railIndex.keySet()),
-                            "declare it with `rail " + name + " { voltage ... }`"));
+                            "declare it with `" + PropertyTable.RAIL.skeleton(name) + "`"));
             return -1;
         }
         return i;
@@ -103,7 +103,7 @@ final class Parts {
             return -1;
         }
         diags.error(use, "library stage '" + stage + "' draws from rail '" + rail + "', which this machine does not declare",
-                "declare `rail " + rail + " { voltage ... }` (library stages expect rails bplus, bias and relay), "
+                "declare `" + PropertyTable.RAIL.skeleton(rail) + "` (library stages expect rails bplus, bias and relay), "
                         + "or declare a stage of your own");
         return -1;
     }
@@ -116,7 +116,7 @@ final class Parts {
         Prop p = decls.tubes.get(name);
         if (p == null) {
             diags.error(at, "unknown tube type '" + name + "'",
-                    Declarations.hintFor(name, new ArrayList<>(decls.tubes.keySet()), "declare it with `tube " + name + " { ... }`"));
+                    Declarations.hintFor(name, new ArrayList<>(decls.tubes.keySet()), "declare it with `" + PropertyTable.TUBE.skeleton(name) + "`"));
             return -1;
         }
         TubeType t = buildTube(name, p);
@@ -154,7 +154,7 @@ final class Parts {
         Prop p = decls.stages.get(name);
         if (p == null) {
             diags.error(at, "unknown stage '" + name + "'",
-                    Declarations.hintFor(name, new ArrayList<>(decls.stages.keySet()), "declare it with `stage " + name + " : FUNCTION { ... }`"));
+                    Declarations.hintFor(name, new ArrayList<>(decls.stages.keySet()), "declare it with `" + PropertyTable.STAGE.skeleton(name) + "`"));
             return -1;
         }
         StageType s = buildStage(name, p, at);

@@ -206,6 +206,13 @@ final class PropertyTable {
         return null;
     }
 
+    /** A minimal declaration for a hint: {@code rail x { voltage 48 V }}, its required lines filled in. */
+    String skeleton(String name) {
+        List<String> required = properties.stream().filter(Property::isRequired).map(Property::example).toList();
+        String head = heading.replace("NAME", name);
+        return head.replace("{ ... }", required.isEmpty() ? "{ ... }" : "{ " + String.join("; ", required) + " }");
+    }
+
     List<String> keys() {
         return properties.stream().map(Property::key).toList();
     }
