@@ -8,7 +8,8 @@ import java.util.List;
  * Levels, noise margins and fan-out of a net: a driving stage (its inputs at given levels)
  * loaded by {@code n} identical receivers. Every input state is tried for stages of up to
  * {@link #ALL_STATES_UP_TO} inputs; wider ones are tried with no input, one input, and all
- * inputs active (the states that set the extreme levels of gates of one kind).
+ * inputs active (the states that set the extreme levels of gates of one kind). Receivers'
+ * thresholds are cached beside the solver's operating points. Not thread-safe.
  */
 public final class MarginAnalysis {
     /** Fan-in up to which every input state is solved. */
@@ -17,9 +18,27 @@ public final class MarginAnalysis {
     public static final int MAX_FAN_OUT = 64;
 
     private final StageSolver solver;
+    private final java.util.Map<ThresholdKey, Thresholds> thresholds = new java.util.HashMap<>();
+
+    private final java.util.Map<MarginKey, NoiseMargins> marginCache = new java.util.HashMap<>();
+
+    private record ThresholdKey(StageCircuit receiver, Corner corner) {
+    }
+
+    private record MarginKey(StageCircuit driver, InputLevels levels, StageCircuit receiver, int n, Corner corner) {
+    }
 
     public MarginAnalysis(StageSolver solver) {
         this.solver = solver;
+    }
+
+    /** The receiver's thresholds at a corner, computed once per (receiver, corner); null without a solution. */
+    public Thresholds thresholds(StageCircuit receiver, Corner corner) {
+        ThresholdKey k = new ThresholdKey(receiver, corner);
+        if (!thresholds.containsKey(k)) {
+            thresholds.put(k, TransferCurve.thresholds(solver, receiver, corner));
+        }
+        return thresholds.get(k);
     }
 
     public StageSolver solver() {
@@ -28,6 +47,16 @@ public final class MarginAnalysis {
 
     /** Levels and margins with {@code n} receivers at {@code corner}. */
     public NoiseMargins margins(StageCircuit driver, InputLevels levels, StageCircuit receiver, int n, Corner corner) {
+        MarginKey key = new MarginKey(driver, levels, receiver, n, corner);
+        NoiseMargins m = marginCache.get(key);
+        if (m == null) {
+            m = compute(driver, levels, receiver, n, corner);
+            marginCache.put(key, m);
+        }
+        return m;
+    }
+
+    private NoiseMargins compute(StageCircuit driver, InputLevels levels, StageCircuit receiver, int n, Corner corner) {
         List<Load> loads = Collections.nCopies(n, receiver.inputLoad());
         double voh = Double.POSITIVE_INFINITY;
         double vol = Double.NEGATIVE_INFINITY;
@@ -45,7 +74,7 @@ public final class MarginAnalysis {
                 }
             }
         }
-        Thresholds t = TransferCurve.thresholds(solver, receiver, corner);
+        Thresholds t = thresholds(receiver, corner);
         if (t == null) {
             return new NoiseMargins(voh, vol, null, n, "receiver " + receiver.name() + " has no DC solution");
         }
