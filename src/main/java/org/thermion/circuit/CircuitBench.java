@@ -1,7 +1,6 @@
 package org.thermion.circuit;
 
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
@@ -38,16 +37,11 @@ public final class CircuitBench {
         for (int i = 0; i < n; i++) {
             StageCircuit d = drivers.get(rnd.nextInt(drivers.size()));
             StageCircuit r = receivers.get(rnd.nextInt(receivers.size()));
-            int fan = 1 + rnd.nextInt(8);
-            List<Load> loads = Collections.nCopies(fan, r.inputLoad());
-            for (boolean[] in : MarginAnalysis.states(d.inputs())) {
-                if (!solver.solve(d, levels.volts(in), false, loads, Corner.NOMINAL).solved()) {
-                    unsolved++;
-                }
+            NetAnalysis net = margins.net(d, levels, r, 1 + rnd.nextInt(8));
+            for (DcResult p : net.points()) {
+                unsolved += p.solved() ? 0 : 1;
             }
-            if (margins.margins(d, levels, r, fan, Corner.NOMINAL).problem() != null) {
-                unsolved++;
-            }
+            unsolved += net.margins().problem() == null ? 0 : 1;
         }
         return new Result(n, solver.solves(), System.nanoTime() - t0, unsolved);
     }

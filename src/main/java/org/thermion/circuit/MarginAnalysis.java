@@ -21,6 +21,7 @@ public final class MarginAnalysis {
     private final java.util.Map<ThresholdKey, Thresholds> thresholds = new java.util.HashMap<>();
 
     private final java.util.Map<MarginKey, NoiseMargins> marginCache = new java.util.HashMap<>();
+    private final java.util.Map<MarginKey, NetAnalysis> netCache = new java.util.HashMap<>();
 
     private record ThresholdKey(StageCircuit receiver, Corner corner) {
     }
@@ -43,6 +44,25 @@ public final class MarginAnalysis {
 
     public StageSolver solver() {
         return solver;
+    }
+
+    /**
+     * A net driven by {@code driver} with {@code n} receivers: operating points in every input
+     * state and the margins, at nominal values; computed once per distinct net.
+     */
+    public NetAnalysis net(StageCircuit driver, InputLevels levels, StageCircuit receiver, int n) {
+        MarginKey key = new MarginKey(driver, levels, receiver, n, Corner.NOMINAL);
+        NetAnalysis a = netCache.get(key);
+        if (a == null) {
+            List<Load> loads = Collections.nCopies(n, receiver.inputLoad());
+            List<DcResult> points = new ArrayList<>();
+            for (boolean[] in : states(driver.inputs())) {
+                points.add(solver.solve(driver, levels.volts(in), false, loads, Corner.NOMINAL));
+            }
+            a = new NetAnalysis(points, margins(driver, levels, receiver, n, Corner.NOMINAL));
+            netCache.put(key, a);
+        }
+        return a;
     }
 
     /** Levels and margins with {@code n} receivers at {@code corner}. */

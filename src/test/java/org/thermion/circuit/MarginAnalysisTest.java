@@ -106,6 +106,21 @@ class MarginAnalysisTest {
     }
 
     @Test
+    void aNetIsAnalysedOnceWithEveryInputState() {
+        StageSolver s = new StageSolver(rails48);
+        MarginAnalysis a = new MarginAnalysis(s);
+        NetAnalysis net = a.net(lib.get("diode_and"), new InputLevels(5, 45), lib.get("triode_nor2"), 3);
+        assertThat(net.points()).hasSize(16).allMatch(DcResult::solved);
+        // AND of four, all inputs high (45 V) above the output: every diode is off, and the 47 k pull-up
+        // from 48 V meets three receivers' dividers (100 k + 47 k to -12 V, 49 k together); by hand
+        // (48*49 - 12*47) / 96 = 18.625 V. The grids sit below their cathodes, so no grid current.
+        assertThat(net.margins().voh()).isCloseTo(18.625, within(0.001));
+        long solves = s.solves();
+        assertThat(a.net(lib.get("diode_and"), new InputLevels(5, 45), lib.get("triode_nor2"), 3)).isSameAs(net);
+        assertThat(s.solves()).isEqualTo(solves);
+    }
+
+    @Test
     void theWorstCornerIsNamed() {
         Corner c = Corner.NOMINAL.with("rail.bplus", 0.95).with("driver.load", 1.05).with("driver.emission", 0.7);
         assertThat(c.describe()).isEqualTo("driver.emission 70 %, driver.load +5 %, bplus -5 %");
