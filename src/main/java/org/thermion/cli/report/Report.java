@@ -17,8 +17,8 @@ public final class Report {
     public sealed interface Part permits TablePart, Lines {
     }
 
-    /** A table. */
-    public record TablePart(Table table) implements Part {
+    /** A table; {@code inText} false for a table whose facts text tells in lines of its own. */
+    public record TablePart(Table table, boolean inText) implements Part {
     }
 
     /** Lines for people, shown in text only (wrapped at the text width, plots excepted). */
@@ -53,7 +53,13 @@ public final class Report {
     }
 
     public Report table(Table t) {
-        parts.add(new TablePart(t));
+        parts.add(new TablePart(t, true));
+        return this;
+    }
+
+    /** A table for CSV and JSON only: the text tells its facts in lines of its own. */
+    public Report data(Table t) {
+        parts.add(new TablePart(t, false));
         return this;
     }
 
