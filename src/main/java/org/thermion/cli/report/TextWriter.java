@@ -103,12 +103,20 @@ public final class TextWriter {
             }
         }
         int[] w = widths(head, cells);
-        if (total(w) > WIDTH - INDENT.length()) {
+        // Too wide: narrow the widest text column (not below WRAPPED_CELL or its heading) until the
+        // table fits or no text column can give more; the rest is split into column groups.
+        int room = WIDTH - INDENT.length();
+        while (total(w) > room) {
+            int widest = -1;
             for (int i = 0; i < n; i++) {
-                if (!right[i] && w[i] > WRAPPED_CELL) {
-                    w[i] = Math.max(WRAPPED_CELL, head[i].length());
+                if (!right[i] && w[i] > Math.max(WRAPPED_CELL, head[i].length()) && (widest < 0 || w[i] > w[widest])) {
+                    widest = i;
                 }
             }
+            if (widest < 0) {
+                break;
+            }
+            w[widest] = Math.max(Math.max(WRAPPED_CELL, head[widest].length()), w[widest] - (total(w) - room));
         }
         List<List<Integer>> groups = groups(w);
         for (int gi = 0; gi < groups.size(); gi++) {
