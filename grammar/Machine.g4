@@ -4,7 +4,7 @@
 // the AST builder in org.thermion.lang gives the parse tree its meaning.
 grammar Machine;
 
-file        : sep? (decl (sep decl)*)? sep? EOF ;
+file        : sep? (decl (sep decl)* sep?)? EOF ;
 sep         : (NL | ';')+ ;
 
 decl        : INCLUDE STRING                                     # includeDecl
@@ -15,11 +15,11 @@ decl        : INCLUDE STRING                                     # includeDecl
 
 // ---- generic properties: `key value value ... { nested }`
 prop        : ident value* propBlock? ;
-propBlock   : '{' sep? (prop (sep prop)*)? sep? '}' ;
+propBlock   : '{' sep? (prop (sep prop)* sep?)? '}' ;
 value       : NUMBER | ident | keyword | STRING | '-' | '..' | ':' | '=' | ',' | '.' | '*' | '+' | '[' | ']' ;
 
 // ---- logic modules
-moduleBody  : sep? (mstmt (sep mstmt)*)? sep? ;
+moduleBody  : sep? (mstmt (sep mstmt)* sep?)? ;
 mstmt       : dir=(IN | OUT) portDecl (',' portDecl)*                               # portsStmt
             | NET netDecl (',' netDecl)* ('=' expr)?                                # netStmt
             | CONST ident '=' expr                                                  # constStmt
@@ -51,11 +51,11 @@ expr        : '(' expr ')'                              # parenExpr
             ;
 
 // ---- instruction set
-isaBody     : sep? (istmt (sep istmt)*)? sep? ;
+isaBody     : sep? (istmt (sep istmt)* sep?)? ;
 istmt       : OP ident expr '{' rbody '}'               # opStmt
             | prop                                      # isaPropStmt
             ;
-rbody       : sep? (rstmt (sep rstmt)*)? sep? ;
+rbody       : sep? (rstmt (sep rstmt)* sep?)? ;
 rstmt       : rtarget '<-' rexpr                                     # rAssign
             | IF rexpr '{' rbody '}' (ELSE '{' rbody '}')?           # rIf
             ;

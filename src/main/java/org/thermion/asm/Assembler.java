@@ -5,6 +5,7 @@ import org.thermion.lang.Diagnostics;
 import org.thermion.lang.Names;
 import org.thermion.lang.ProgramReader;
 import org.thermion.lang.SourceSet;
+import org.thermion.lang.SourceText;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Ident;
 import org.thermion.lang.program.AsmExpr;
@@ -18,10 +19,6 @@ import org.thermion.model.IsaField;
 import org.thermion.model.Machine;
 import org.thermion.model.Meanings;
 
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -57,14 +54,8 @@ public final class Assembler {
 
     /** As {@link #assemble(Machine, Path, Diagnostics)}, keeping the text in {@code sources} for diagnostics. */
     public static Assembly assemble(Machine m, Path program, SourceSet sources, Diagnostics d) {
-        String text;
-        try {
-            text = Files.readString(program, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            d.error(new Span(program, 0, 0, 0, 0), "cannot read program " + program + ": no such file", null);
-            return null;
-        } catch (IOException e) {
-            d.error(new Span(program, 0, 0, 0, 0), "cannot read program " + program + ": " + e.getMessage(), null);
+        String text = SourceText.read(program, "program", sources, d);
+        if (text == null) {
             return null;
         }
         return assembleText(m, program, text, sources, d);

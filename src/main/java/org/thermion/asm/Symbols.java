@@ -8,6 +8,7 @@ import org.thermion.model.AddressedBit;
 import org.thermion.model.Isa;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -17,9 +18,15 @@ import java.util.Set;
 /**
  * The names a program can use, in one name space: the bits of the ISA's bit map (their
  * address), labels (the address of the next word) and named constants (their expression).
- * Evaluates constant expressions and reports each distinct problem once.
+ * Evaluates constant expressions and reports each distinct problem once. A constant's value is
+ * kept once known (a chain of constants each using the one before twice costs linear time,
+ * not exponential), and constants may refer to each other at most {@link #MAX_CONST_DEPTH}
+ * deep before the chain is reported.
  */
 final class Symbols {
+    /** Most constants being evaluated at once, one inside the other. */
+    static final int MAX_CONST_DEPTH = 200;
+
     private record Label(long address, Span span) {
     }
 
@@ -32,6 +39,7 @@ final class Symbols {
     private final Map<String, Constant> constants = new LinkedHashMap<>();
     private final Set<String> laterLabels = new HashSet<>();
     private final Set<String> reported = new HashSet<>();
+    private final Map<String, Long> known = new HashMap<>();
 
     Symbols(Isa isa, Diagnostics diags) {
         this.diags = diags;
@@ -67,6 +75,25 @@ final class Symbols {
             return;
         }
         constants.put(name, new Constant(value, at));
+        if (resolvable(value)) {
+            // Everything it names is known already: settle it now, so long chains stay shallow.
+            eval(new AsmExpr.Name(new org.thermion.lang.ast.Ident(name, at)), "name", new ArrayList<>());
+        }
+    }
+
+    /** True when every name in {@code e} is a bit, a label or a constant of known value. */
+    private boolean resolvable(AsmExpr e) {
+        if (e instanceof AsmExpr.Num) {
+            return true;
+        }
+        if (e instanceof AsmExpr.Neg n) {
+            return resolvable(n.operand());
+        }
+        if (e instanceof AsmExpr.Bin b) {
+            return resolvable(b.left()) && resolvable(b.right());
+        }
+        String name = ((AsmExpr.Name) e).name().text();
+        return bits.containsKey(name) || labels.containsKey(name) || known.containsKey(name);
     }
 
     private boolean taken(String name, Span at) {
@@ -137,14 +164,24 @@ final class Symbols {
         }
         Constant c = constants.get(name);
         if (c != null) {
+            if (known.containsKey(name)) {
+                return known.get(name);
+            }
             if (evaluating.contains(name)) {
                 report(c.span(), "constant '" + name + "' is defined in terms of itself", "via " + String.join(" -> ", evaluating)
                         + " -> " + name);
                 return null;
             }
+            if (evaluating.size() >= MAX_CONST_DEPTH) {
+                report(c.span(), "constants refer to each other more than " + MAX_CONST_DEPTH + " deep",
+                        "define constants before they are used, so each one's value is known when it is read");
+                return null;
+            }
             evaluating.add(name);
             Long v = eval(c.value(), role, evaluating);
             evaluating.remove(evaluating.size() - 1);
+            // A failed evaluation is remembered too: its error was reported once already.
+            known.put(name, v);
             return v;
         }
         if (laterLabels.contains(name)) {

@@ -100,6 +100,7 @@ public final class BenchSuite {
         Machine demoMachine = sources.get(0).elaborate();
         verify(rows, demoMachine);
         powerUp(rows, demoMachine);
+        ParseScaling.rows(rows, quick ? 1 : 3);
         if (!Double.isNaN(elab10k) && !Double.isNaN(elab100k)) {
             rows.add(BenchRow.target("scale", "elaborate time 10^5 / 10^4", elab100k / elab10k, "x", ELAB_GROWTH, true, "12 x"));
         }

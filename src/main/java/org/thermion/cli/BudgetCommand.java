@@ -4,7 +4,6 @@ import org.thermion.cli.report.Format;
 import org.thermion.model.Machine;
 import org.thermion.power.Budget;
 import org.thermion.power.CurrentMeter;
-import org.thermion.power.ProgramRun;
 import org.thermion.sim.InitMode;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -101,7 +100,7 @@ final class BudgetCommand implements Callable<Integer> {
                 err.flush();
                 return ExitCodes.BAD_INPUT;
             }
-            meter = ProgramRun.run(m, in.rom(), in.stimulus(), cycles, mode);
+            meter = CurrentMeter.ofRun(m, in.rom(), in.stimulus(), cycles, mode);
             run = new BudgetReport.Run(program == null ? null : program.toString(),
                     inputs == null ? null : inputs.toString(), cycles, init);
         }

@@ -1,6 +1,6 @@
 package org.thermion.cli;
 
-import org.thermion.tui.DecodeLine;
+import org.thermion.tui.DecodeLamp;
 import org.thermion.tui.Session;
 
 import java.io.IOException;
@@ -27,7 +27,7 @@ final class DefaultRun {
         Path machine = BundledExample.machine();
         Path program = BundledExample.program("pump.asm");
         if (UiCommand.whyNoTerminal() == null) {
-            Session s = UiCommand.open(machine, program, null, "zero", DecodeLine.DEFAULT_NAME, err);
+            Session s = UiCommand.open(machine, program, null, "zero", DecodeLamp.DEFAULT_NAME, err);
             if (s == null) {
                 return ExitCodes.INTERNAL;
             }

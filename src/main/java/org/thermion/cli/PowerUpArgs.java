@@ -1,5 +1,7 @@
 package org.thermion.cli;
 
+import org.thermion.power.startup.PowerUpOptions;
+
 import java.util.Locale;
 
 /**
@@ -69,7 +71,11 @@ final class PowerUpArgs {
                 if (v < 0) {
                     throw new IllegalArgumentException(option + ": a resistance cannot be negative, got '" + text + "'");
                 }
-                return v * Double.parseDouble(u[1]);
+                double ohms = v * Double.parseDouble(u[1]);
+                if (ohms > PowerUpOptions.MAX_OHMS) {
+                    throw new IllegalArgumentException(option + ": at most 1 Mohm, got '" + text + "'");
+                }
+                return ohms;
             }
         }
         throw new IllegalArgumentException(option + " needs a unit (ohm, k or M), e.g. '" + option + " 2ohm'; got '" + text + "'");

@@ -9,6 +9,7 @@ import org.thermion.power.startup.PowerUpOptions;
 import org.thermion.power.startup.PowerUpResult;
 import org.thermion.power.startup.ResistorSweep;
 import org.thermion.power.startup.StartupNetwork;
+import org.thermion.power.startup.TransientFailure;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -85,8 +86,8 @@ final class PowerUpCommand implements Callable<Integer> {
         DrawMode mode;
         try {
             double seconds = PowerUpArgs.seconds(time, "--time");
-            if (!(seconds > 0) || seconds > 3600) {
-                throw new IllegalArgumentException("--time must be above 0 and at most an hour, got '" + time + "'");
+            if (!(seconds >= PowerUpOptions.MIN_SECONDS) || seconds > PowerUpOptions.MAX_SECONDS) {
+                throw new IllegalArgumentException("--time must be between 10 ms and 1 h, got '" + time + "'");
             }
             mode = switch (draw.toLowerCase(java.util.Locale.ROOT)) {
                 case "highest" -> DrawMode.HIGHEST;
@@ -115,7 +116,13 @@ final class PowerUpCommand implements Callable<Integer> {
             err.println("error: " + file + " declares no soft start, so --resistor and --sweep have nothing to change");
             return ExitCodes.BAD_INPUT;
         }
-        StartupNetwork net = StartupNetwork.of(m, o.assumptions(), mode);
+        StartupNetwork net;
+        try {
+            net = StartupNetwork.of(m, o.assumptions(), mode);
+        } catch (TransientFailure e) {
+            err.println("error: " + file + ": " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
         try {
             for (PowerUpArgs.Named<Double> r : rs) {
                 o = o.withResistor(softStartName(net, r.softStart(), "--resistor"), r.value());
@@ -127,12 +134,19 @@ final class PowerUpCommand implements Callable<Integer> {
                 format.write(out, PowerUpSweepReport.of(sr));
                 return sr.recommended() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
             }
-        } catch (IllegalArgumentException e) {
+        } catch (IllegalArgumentException | TransientFailure e) {
             err.println("error: " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
-        PowerUpResult result = net.solve(o);
-        List<BypassDelay.Advice> advice = BypassDelay.suggest(net, o);
+        PowerUpResult result;
+        List<BypassDelay.Advice> advice;
+        try {
+            result = net.solve(o);
+            advice = BypassDelay.suggest(net, o);
+        } catch (TransientFailure e) {
+            err.println("error: " + file + ": " + e.getMessage());
+            return ExitCodes.BAD_INPUT;
+        }
         PowerUpReport report = new PowerUpReport(result, advice);
         if (csv != null) {
             String problem = writeAtomically(csv, PowerUpSeries.of(result), loader, file);

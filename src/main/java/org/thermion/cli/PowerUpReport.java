@@ -335,7 +335,7 @@ final class PowerUpReport {
             out.add("relay driver: " + c.tube() + " from " + c.railName() + " " + Numbers.si(c.railVolts(), VOLTS) + " through "
                     + Numbers.si(c.plateOhms(), OHMS) + ", coil " + Numbers.si(c.relay().coilOhms(), OHMS) + ", arc drop "
                     + Numbers.si(c.arcDropVolts(), VOLTS));
-            double pick = Double.isNaN(c.relay().pickupVolts()) ? 0.75 * c.relay().ratedVolts() : c.relay().pickupVolts();
+            double pick = c.relay().pickupVolts();
             out.add("  coil      " + Numbers.si(c.coilVolts(), VOLTS) + String.format(Locale.ROOT, " (%.0f %% of rated %s), pick-up %s: ",
                     100 * c.ratedRatio(), Numbers.si(c.relay().ratedVolts(), VOLTS), Numbers.si(pick, VOLTS))
                     + (!c.picksUp() ? "DOES NOT PICK UP" : !c.coilNotOverdriven() ? "OVERDRIVEN (over +10 %)" : "ok"));

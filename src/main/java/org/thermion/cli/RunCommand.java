@@ -4,9 +4,9 @@ import org.thermion.cli.report.Format;
 import org.thermion.asm.Assembly;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
-import org.thermion.sim.IsaRun;
-import org.thermion.sim.LogicRun;
-import org.thermion.sim.NetLookup;
+import org.thermion.sim.run.ProgramRuns;
+import org.thermion.sim.run.Watch;
+import org.thermion.sim.run.Watches;
 import org.thermion.sim.RunResult;
 import org.thermion.sim.Stimulus;
 import org.thermion.sim.VcdWriter;
@@ -24,6 +24,7 @@ import java.nio.file.Path;
 import java.time.ZonedDateTime;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
@@ -67,7 +68,7 @@ final class RunCommand implements Callable<Integer> {
     String init;
 
     @Option(names = "--watch", paramLabel = "NET", split = ",",
-            description = "Nets to table per cycle, by name (acc, line[3], lu.inv; a bus name takes every bit).")
+            description = "Nets to table per cycle, by name (acc, line[3], lu.inv; a bus by its name, shown in hex; pc).")
     List<String> watch = new ArrayList<>();
 
     @Option(names = "--vcd", paramLabel = "FILE", description = "Write a value change dump (IEEE 1364) here.")
@@ -184,45 +185,31 @@ final class RunCommand implements Callable<Integer> {
         }
         RunResult result;
         String vcdNote = null;
+        List<Watch> watches;
+        try {
+            watches = watch.isEmpty() ? List.of() : level == Level.isa ? Watches.isa(m, watch) : Watches.logic(m, watch);
+        } catch (IllegalArgumentException e) {
+            return usage(err, "--watch: " + e.getMessage(),
+                    level == Level.isa ? null : "names are as 'check' lists them, e.g. acc, line[3], a bus by its name, pc");
+        }
         if (level == Level.isa) {
-            try {
-                result = new IsaRun(m, asm.words(), mode, stim, watch).run(cycles);
-            } catch (IllegalArgumentException e) {
-                return usage(err, "--watch: " + e.getMessage(), null);
-            }
+            result = ProgramRuns.isa(m, asm.words(), mode, stim, watches, cycles);
+        } else if (vcd == null) {
+            result = ProgramRuns.logic(simulator(m, mode), asm.words(), mode, stim, watches, cycles, null, "", "");
         } else {
-            // Indexing every net's name takes a moment on a big machine: only when asked for.
-            NetLookup lookup = watch.isEmpty() ? null : new NetLookup(m);
-            List<String> names = new ArrayList<>();
-            List<Integer> nets = new ArrayList<>();
-            for (String w : watch) {
-                List<Integer> found;
-                try {
-                    found = lookup.resolve(w.strip());
-                } catch (IllegalArgumentException e) {
-                    return usage(err, "--watch: " + e.getMessage(), "names are as 'check' lists them, e.g. acc, line[3]");
-                }
-                for (int n : found) {
-                    names.add(m.netlist().netName(n));
-                    nets.add(n);
-                }
+            List<Integer> watchedNets = new ArrayList<>();
+            watches.forEach(w -> Arrays.stream(w.nets()).forEach(watchedNets::add));
+            List<Integer> dumped = vcdAll ? VcdWriter.allNamedNets(m) : defaultDump(m, watchedNets);
+            try (OutputFiles.Pending file = new OutputFiles.Pending(vcd)) {
+                VcdWriter writer = new VcdWriter(m, dumped, 0, file.writer());
+                result = ProgramRuns.logic(simulator(m, mode), asm.words(), mode, stim, watches, cycles, writer,
+                        ZonedDateTime.now().format(DateTimeFormatter.RFC_1123_DATE_TIME), spec.root().version()[0]);
+                file.commit();
+            } catch (IOException | java.io.UncheckedIOException e) {
+                return usage(err, "cannot write the VCD to " + vcd + ": " + e.getMessage(), null);
             }
-            if (vcd == null) {
-                result = new LogicRun(simulator(m, mode), asm.words(), mode, stim, names, nets, null).run(cycles, "", "");
-            } else {
-                List<Integer> dumped = vcdAll ? VcdWriter.allNamedNets(m) : defaultDump(m, nets);
-                try (OutputFiles.Pending file = new OutputFiles.Pending(vcd)) {
-                    VcdWriter writer = new VcdWriter(m, dumped, 0, file.writer());
-                    result = new LogicRun(simulator(m, mode), asm.words(), mode, stim, names, nets, writer)
-                            .run(cycles, ZonedDateTime.now().format(DateTimeFormatter.RFC_1123_DATE_TIME),
-                                    spec.root().version()[0]);
-                    file.commit();
-                } catch (IOException | java.io.UncheckedIOException e) {
-                    return usage(err, "cannot write the VCD to " + vcd + ": " + e.getMessage(), null);
-                }
-                vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
-                        + (m.pc() != null ? " nets and the pc)" : " nets)");
-            }
+            vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
+                    + (m.pc() != null ? " nets and the pc)" : " nets)");
         }
         format.write(out, new RunReport(m, program, level.name(), mode.toString(), result).report());
         if (vcdNote != null && format == Format.text) {

@@ -81,9 +81,9 @@ final class RunReport {
                 .column("net", "net", TEXT)
                 .column("value", "value", TEXT);
         for (WatchRow w : r.watch()) {
-            for (int i = 0; i < w.values().length(); i++) {
+            for (int i = 0; i < w.values().size(); i++) {
                 watch.row(w.cycle(), machine.pc() == null ? new Absent("no pc") : (Object) (long) w.pc(),
-                        r.watchNames().get(i), String.valueOf(w.values().charAt(i)));
+                        r.watchNames().get(i), w.values().get(i));
             }
         }
         rep.data(watch);
@@ -134,8 +134,8 @@ final class RunReport {
             if (pc) {
                 row.add((long) w.pc());
             }
-            for (int i = 0; i < w.values().length(); i++) {
-                row.add(String.valueOf(w.values().charAt(i)));
+            for (int i = 0; i < w.values().size(); i++) {
+                row.add(w.values().get(i));
             }
             t.row(row.toArray());
         }

@@ -7,7 +7,7 @@ import com.googlecode.lanterna.terminal.Terminal;
 import com.googlecode.lanterna.terminal.ansi.UnixLikeTerminal;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
-import org.thermion.tui.DecodeLine;
+import org.thermion.tui.DecodeLamp;
 import org.thermion.tui.PowerUpView;
 import org.thermion.tui.Session;
 import org.thermion.tui.TerminalUi;
@@ -44,7 +44,7 @@ public final class UiCommand implements Callable<Integer> {
             description = "Power-up state of the latches: zero, random:SEED or unknown (default: ${DEFAULT-VALUE}).")
     String init;
 
-    @Option(names = "--decode-net", paramLabel = "NAME", defaultValue = DecodeLine.DEFAULT_NAME,
+    @Option(names = "--decode-net", paramLabel = "NAME", defaultValue = DecodeLamp.DEFAULT_NAME,
             description = "Decode lines are the top module's nets NAME[k], k an opcode (default: ${DEFAULT-VALUE}).")
     String decodeNet;
 

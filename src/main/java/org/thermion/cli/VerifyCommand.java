@@ -6,7 +6,7 @@ import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
 import org.thermion.model.Machine;
 import org.thermion.verify.Counterexample;
-import org.thermion.verify.DecodeLine;
+import org.thermion.verify.DecodeVerdict;
 import org.thermion.verify.MutantOutcome;
 import org.thermion.verify.MutationReport;
 import org.thermion.verify.MutationRun;
@@ -194,7 +194,7 @@ final class VerifyCommand implements Callable<Integer> {
                 .column("line", "line", TEXT, "the decode line the instruction raises ('none': it does nothing)")
                 .column("ok", "ok", FLAG)
                 .column("problem", "problem", TEXT);
-        for (DecodeLine x : r.decode()) {
+        for (DecodeVerdict x : r.decode()) {
             d.row(x.mnemonic(), x.opcode(), x.net() == null ? new Absent("none") : x.net(), x.ok(),
                     x.problem() == null ? Absent.NONE : x.problem());
         }

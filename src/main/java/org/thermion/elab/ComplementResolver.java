@@ -36,9 +36,7 @@ final class ComplementResolver {
                 continue;
             }
             nb.rewire(g, from);
-            if (nb.isTemp(gate.out)) {
-                alias.put(gate.out, from);
-            }
+            alias.put(gate.out, from);
         }
     }
 }

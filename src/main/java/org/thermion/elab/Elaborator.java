@@ -7,7 +7,6 @@ import org.thermion.lang.ast.Decl;
 import org.thermion.lang.ast.Prop;
 import org.thermion.lang.ast.SourceFile;
 import org.thermion.lang.ast.Value;
-import org.thermion.model.BypassTrigger;
 import org.thermion.model.Clock;
 import org.thermion.model.Gate;
 import org.thermion.model.Isa;
@@ -17,12 +16,9 @@ import org.thermion.model.ModuleInstance;
 import org.thermion.model.Netlist;
 import org.thermion.model.Port;
 import org.thermion.model.ProgramCounter;
-import org.thermion.model.Relay;
 import org.thermion.model.Rom;
 import org.thermion.model.SoftStart;
-import org.thermion.model.StageFunction;
 import org.thermion.model.StageType;
-import org.thermion.model.TubeKind;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -105,7 +101,7 @@ public final class Elaborator {
         if (decls.machines.size() > 1) {
             diags.error(decls.machines.get(1).span(), "more than one machine block", "one machine per description");
         }
-        MachineBlock mb = MachineBlock.read(decls.machines.get(0), parts, diags);
+        MachineBlock mb = MachineBlock.read(decls.machines.get(0), diags);
         Decl.Module top = null;
         if (mb.top == null) {
             diags.error(mb.nameSpan.isKnown() ? mb.nameSpan : mb.span, "machine names no top module", "add `top MODULE`");
@@ -155,7 +151,7 @@ public final class Elaborator {
                     diags.error(mb.romDataSpan, "bus width mismatch: the ROM is " + mb.romWidth + " bits wide, port '"
                             + s.name() + "' " + s.width(), null);
                 }
-                rom = new Rom(mb.romWords == 0 ? 256 : mb.romWords, s.width(), s.nets(), mb.romOffBoard);
+                rom = new Rom(mb.romWords, s.width(), s.nets(), mb.romOffBoard);
             }
         }
         if (mb.pcJump != null || mb.pcTarget != null) {
@@ -222,18 +218,12 @@ public final class Elaborator {
         Packer packer = new Packer(parts, diags);
         List<ModuleInstance> modules = new ArrayList<>(ex.tree.modules);
         List<SoftStart> softStarts = new ArrayList<>();
-        int[] gateEnvelope = new int[nb.gates.size()];
-        int[] latchEnvelope = new int[nb.latches.size()];
-        for (int i = 0; i < nb.gates.size(); i++) {
-            NetBuilder.GateB g = nb.gates.get(i);
-            gateEnvelope[i] = g.stage < 0 ? -1 : placeStage(packer, parts, g.stage, g.module, g.in.length);
-        }
-        for (int i = 0; i < nb.latches.size(); i++) {
-            NetBuilder.LatchB l = nb.latches.get(i);
-            latchEnvelope[i] = l.stage() < 0 ? -1 : placeStage(packer, parts, l.stage(), l.module(), 1);
-        }
+        StagePlacement placed = StagePlacement.place(nb, parts, packer);
+        int[] gateEnvelope = placed.gateEnvelope;
+        int[] latchEnvelope = placed.latchEnvelope;
+        SoftStartReader softStartReader = new SoftStartReader(parts, packer, diags);
         for (Prop p : decls.softStarts.values()) {
-            SoftStart ss = softStart(p, parts, packer, modules);
+            SoftStart ss = softStartReader.read(p, modules);
             if (ss != null) {
                 softStarts.add(ss);
             }
@@ -288,11 +278,6 @@ public final class Elaborator {
         }
     }
 
-    private static int placeStage(Packer packer, Parts parts, int stage, int module, int inputs) {
-        StageType st = parts.stages.get(stage);
-        return packer.place(st.tube(), module, st.sectionsFor(inputs));
-    }
-
     private java.util.Set<String> topOutputs = java.util.Set.of();
 
     private Signal topPort(Map<String, Signal> scope, Value v, Signal.Kind kind, String what) {
@@ -318,97 +303,5 @@ public final class Elaborator {
             return null;
         }
         return s;
-    }
-
-    private SoftStart softStart(Prop p, Parts parts, Packer packer, List<ModuleInstance> modules) {
-        PropReader head = new PropReader(p, diags);
-        String name = head.word("a name");
-        head.expectWord("on");
-        String railName = head.word("a rail name");
-        Span rs = head.lastSpan();
-        head.end();
-        if (head.failed()) {
-            return null;
-        }
-        int rail = parts.rail(railName, rs);
-        double ohms = Double.NaN, watts = Double.POSITIVE_INFINITY;
-        Relay relay = null;
-        BypassTrigger trigger = null;
-        Span triggerSpan = p.span();
-        for (Prop q : p.block()) {
-            PropReader r = new PropReader(q, diags);
-            switch (q.key().text()) {
-                case "resistor" -> {
-                    ohms = r.positive(Unit.OHM, "soft-start resistor", false);
-                    if (r.acceptWord("rated")) {
-                        watts = r.positive(Unit.WATT, "resistor rating", false);
-                    }
-                }
-                case "relay" -> relay = relay(q, parts);
-                case "bypass" -> {
-                    triggerSpan = q.span();
-                    if (r.acceptWord("after")) {
-                        double t = r.positive(Unit.SECOND, "bypass delay", true);
-                        trigger = new BypassTrigger.AfterDelay(t);
-                    } else if (r.acceptWord("when")) {
-                        String stage = r.word("a thyratron relay-driver stage");
-                        Span ss = r.lastSpan();
-                        r.expectWord("warm");
-                        int s = stage == null ? -1 : parts.stage(stage, ss);
-                        if (s >= 0) {
-                            StageType st = parts.stages.get(s);
-                            if (parts.tubes.get(st.tube()).kind() != TubeKind.THYRATRON || st.function() != StageFunction.RELAY) {
-                                diags.error(ss, "stage '" + stage + "' is not a thyratron relay driver",
-                                        "name a relay stage whose tube is a thyratron");
-                            } else {
-                                int module = modules.size();
-                                modules.add(new ModuleInstance(module, name, "softstart", 0));
-                                int env = packer.place(st.tube(), module, st.sections());
-                                trigger = new BypassTrigger.ThyratronWarm(env, st.tube(), st.loadOhms(), st.loadRail(), 0.9);
-                            }
-                        }
-                    } else {
-                        diags.error(r.here(), "expected `after TIME` or `when STAGE warm`", null);
-                    }
-                }
-                default -> parts.unknownKey(q, "softstart", List.of("resistor", "relay", "bypass"));
-            }
-            r.end();
-        }
-        if (Double.isNaN(ohms)) {
-            diags.error(p.span(), "soft start '" + name + "' has no resistor", "add `resistor 2 ohm rated 50 W`");
-            return null;
-        }
-        if (trigger == null) {
-            if (!diags.hasErrors()) {
-                diags.error(triggerSpan, "soft start '" + name + "' has no bypass trigger", "add `bypass after 10 s` or `bypass when STAGE warm`");
-            }
-            return null;
-        }
-        if (relay == null) {
-            relay = new Relay(100, 12, 7.2, 1.2, 0.010);
-        }
-        if (rail < 0) {
-            return null;
-        }
-        return new SoftStart(name, rail, ohms, watts, relay, trigger);
-    }
-
-    private Relay relay(Prop q, Parts parts) {
-        double coil = 100, rated = 12, pickup = Double.NaN, dropout = Double.NaN, operate = 0.010;
-        for (Prop c : q.block()) {
-            PropReader r = new PropReader(c, diags);
-            switch (c.key().text()) {
-                case "coil" -> coil = r.positive(Unit.OHM, "coil resistance", false);
-                case "rated" -> rated = r.positive(Unit.VOLT, "rated coil voltage", false);
-                case "pickup" -> pickup = r.positive(Unit.VOLT, "pick-up voltage", false);
-                case "dropout" -> dropout = r.positive(Unit.VOLT, "drop-out voltage", true);
-                case "operate" -> operate = r.positive(Unit.SECOND, "operate time", true);
-                default -> parts.unknownKey(c, "relay", List.of("coil", "rated", "pickup", "dropout", "operate"));
-            }
-            r.end();
-        }
-        // Common practice for relays without data: pick-up at 60 % and drop-out at 10 % of rated.
-        return new Relay(coil, rated, Double.isNaN(pickup) ? 0.6 * rated : pickup, Double.isNaN(dropout) ? 0.1 * rated : dropout, operate);
     }
 }

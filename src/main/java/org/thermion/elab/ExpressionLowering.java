@@ -4,7 +4,6 @@ import org.thermion.lang.Diagnostics;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Expr;
 import org.thermion.lang.ast.Index;
-import org.thermion.model.StageFunction;
 import org.thermion.model.StageType;
 
 import java.util.ArrayList;
@@ -63,6 +62,11 @@ final class ExpressionLowering {
                 Lowered v = lower(f, p);
                 List<Logic> pb = v == null ? null : bits(v, 1, p.span());
                 if (pb == null) {
+                    return null;
+                }
+                if (pb.size() > ConstantFolder.MAX_WIDTH - bits.size()) {
+                    diags.error(c.span(), "concatenation is wider than " + ConstantFolder.MAX_WIDTH + " bits",
+                            "no bus is wider than " + ConstantFolder.MAX_WIDTH + " bits; slice the parts");
                     return null;
                 }
                 bits.addAll(pb);
@@ -208,9 +212,8 @@ final class ExpressionLowering {
         }
         StageType st = parts.stages.get(s);
         int max = st.fanIn();
-        int min = st.function() == StageFunction.NOT || st.function() == StageFunction.BUFFER || st.function().isDriver()
-                || st.function() == StageFunction.LATCH ? 1 : 2;
-        if (st.function() == StageFunction.LATCH) {
+        int min = st.function().minInputs();
+        if (!st.function().callable()) {
             diags.error(c.span(), "stage '" + name + "' is a latch; declare it with a `latch` line", null);
             return null;
         }

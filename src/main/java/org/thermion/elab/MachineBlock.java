@@ -12,106 +12,66 @@ import java.util.List;
 final class MachineBlock {
     String name = "machine";
     Span nameSpan = Span.none();
-    int phases = 2;
-    double period = 100e-6;
+    int phases;
+    double period;
     String top;
     Span topSpan;
-    int romWords = 0, romWidth = 0;
+    int romWords, romWidth;
     String romData;
     Span romDataSpan;
     boolean romOffBoard = true;
-    int pcWidth = 0, pcPhase = 0;
+    /** 0 where not given: the width and phase then come from the ports and the clock. */
+    int pcWidth, pcPhase;
     String pcJump, pcTarget;
     Span pcJumpSpan, pcTargetSpan;
     final List<Value> inputs = new ArrayList<>();
     final List<Value> outputs = new ArrayList<>();
     Span span = Span.none();
 
-    static MachineBlock read(Prop p, Parts parts, Diagnostics diags) {
+    static MachineBlock read(Prop p, Diagnostics diags) {
         MachineBlock m = new MachineBlock();
         m.span = p.span();
         if (!p.values().isEmpty()) {
             m.name = p.values().get(0).text();
             m.nameSpan = p.values().get(0).span();
         }
-        for (Prop q : p.block()) {
-            PropReader r = new PropReader(q, diags);
-            switch (q.key().text()) {
-                case "clock" -> {
-                    r.end();
-                    for (Prop c : q.block()) {
-                        PropReader cr = new PropReader(c, diags);
-                        switch (c.key().text()) {
-                            case "phases" -> m.phases = (int) Math.max(1, cr.whole("number of phases", 1, 8));
-                            case "period" -> {
-                                double v = cr.positive(Unit.SECOND, "clock period", false);
-                                if (!Double.isNaN(v)) {
-                                    m.period = v;
-                                }
-                            }
-                            default -> parts.unknownKey(c, "clock", List.of("phases", "period"));
-                        }
-                        cr.end();
-                    }
-                }
-                case "top" -> {
-                    m.top = r.word("the top module's name");
-                    m.topSpan = r.lastSpan();
-                    r.end();
-                }
-                case "rom" -> {
-                    r.end();
-                    for (Prop c : q.block()) {
-                        PropReader cr = new PropReader(c, diags);
-                        switch (c.key().text()) {
-                            case "words" -> m.romWords = (int) cr.whole("ROM size in words", 1, 1 << 20);
-                            case "width" -> m.romWidth = (int) cr.whole("ROM word width", 1, 63);
-                            case "data" -> {
-                                m.romData = cr.word("the top module's input port for ROM data");
-                                m.romDataSpan = cr.lastSpan();
-                            }
-                            case "offboard" -> m.romOffBoard = true;
-                            default -> parts.unknownKey(c, "rom", List.of("words", "width", "data", "offboard"));
-                        }
-                        cr.end();
-                    }
-                }
-                case "pc" -> {
-                    r.end();
-                    for (Prop c : q.block()) {
-                        PropReader cr = new PropReader(c, diags);
-                        switch (c.key().text()) {
-                            case "width" -> m.pcWidth = (int) cr.whole("program counter width", 1, 20);
-                            case "phase" -> m.pcPhase = (int) cr.whole("the phase the program counter loads on", 1, 8);
-                            case "jump" -> {
-                                m.pcJump = cr.word("the top module's jump output");
-                                m.pcJumpSpan = cr.lastSpan();
-                            }
-                            case "target" -> {
-                                m.pcTarget = cr.word("the top module's jump-target output");
-                                m.pcTargetSpan = cr.lastSpan();
-                            }
-                            case "offboard" -> { }
-                            default -> parts.unknownKey(c, "pc", List.of("width", "phase", "jump", "target", "offboard"));
-                        }
-                        cr.end();
-                    }
-                }
-                case "inputs" -> m.inputs.addAll(words(q));
-                case "outputs" -> m.outputs.addAll(words(q));
-                default -> parts.unknownKey(q, "machine", List.of("clock", "top", "rom", "pc", "inputs", "outputs"));
-            }
+        PropBlock b = PropBlock.read(PropertyTable.MACHINE, p, "machine '" + m.name + "'",
+                m.nameSpan.isKnown() ? m.nameSpan : p.key().span(), diags);
+        PropBlock clock = b.nested("clock");
+        m.phases = (int) clock.num("phases");
+        m.period = clock.num("period");
+        PropLine top = b.line("top");
+        if (top != null) {
+            m.top = top.word("module");
+            m.topSpan = top.span("module");
+        }
+        PropBlock rom = b.nested("rom");
+        m.romWords = (int) rom.num("words");
+        m.romWidth = rom.has("width") ? (int) rom.num("width") : 0;
+        PropLine data = rom.line("data");
+        if (data != null) {
+            m.romData = data.word("port");
+            m.romDataSpan = data.span("port");
+        }
+        PropBlock pc = b.nested("pc");
+        m.pcWidth = pc.has("width") ? (int) pc.num("width") : 0;
+        m.pcPhase = pc.has("phase") ? (int) pc.num("phase") : 0;
+        PropLine jump = pc.line("jump");
+        if (jump != null) {
+            m.pcJump = jump.word("port");
+            m.pcJumpSpan = jump.span("port");
+        }
+        PropLine target = pc.line("target");
+        if (target != null) {
+            m.pcTarget = target.word("port");
+            m.pcTargetSpan = target.span("port");
+        }
+        for (PropLine l : b.lines("inputs")) {
+            m.inputs.addAll(l.tokens("ports"));
+        }
+        for (PropLine l : b.lines("outputs")) {
+            m.outputs.addAll(l.tokens("ports"));
         }
         return m;
-    }
-
-    private static List<Value> words(Prop q) {
-        List<Value> out = new ArrayList<>();
-        for (Value v : q.values()) {
-            if (!(v instanceof Value.Sym)) {
-                out.add(v);
-            }
-        }
-        return out;
     }
 }

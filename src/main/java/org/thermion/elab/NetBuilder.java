@@ -238,10 +238,6 @@ final class NetBuilder {
             a[i] = v;
         }
 
-        int size() {
-            return n;
-        }
-
         int[] toArray() {
             return Arrays.copyOf(a, n);
         }

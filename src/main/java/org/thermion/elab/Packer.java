@@ -91,62 +91,40 @@ final class Packer {
             return;
         }
         int rail = parts.rail(railName, rs);
+        PropBlock b = PropBlock.read(PropertyTable.HEATERS, p, "heaters on " + railName, rs, diags);
         for (Prop q : p.block()) {
-            PropReader r = new PropReader(q, diags);
-            String kind = q.key().text();
-            boolean series;
-            int count = 1;
-            if (kind.equals("parallel")) {
-                series = false;
-            } else if (kind.equals("series")) {
-                series = true;
-                count = (int) r.whole("heaters per string", 1, 64);
-                r.expectWord("of");
-            } else {
-                parts.unknownKey(q, "heaters", List.of("parallel", "series"));
+            PropLine line = lineOf(b, q);
+            if (line == null) {
                 continue;
             }
             List<Integer> tubes = new ArrayList<>();
-            while (!r.atEnd() && !r.failed() && r.peek() instanceof org.thermion.lang.ast.Value.Word w
-                    && !List.of("at", "per", "across", "drop", "shunt", "rest").contains(w.text())) {
-                String name = r.word("a tube type");
-                int t = parts.tube(name, r.lastSpan());
+            for (org.thermion.lang.ast.Value v : line.tokens("tubes")) {
+                int t = parts.tube(v.text(), v.span());
                 if (t >= 0) {
                     tubes.add(t);
                 }
             }
-            if (tubes.isEmpty() && !r.failed()) {
-                diags.error(r.here(), "expected the tube types this rule wires", "e.g. `series 2 of 6AU6 6AL5`");
+            if (rail < 0 || tubes.isEmpty()) {
                 continue;
             }
-            double volts = Double.NaN, drop = 0, restDrop = 0;
-            boolean perModule = true, shunt = false;
-            while (!r.atEnd() && !r.failed()) {
-                if (r.acceptWord("at")) {
-                    volts = r.positive(Unit.VOLT, "heater wiring voltage", false);
-                } else if (r.acceptWord("per")) {
-                    r.expectWord("module");
-                    perModule = true;
-                } else if (r.acceptWord("across")) {
-                    r.expectWord("machine");
-                    perModule = false;
-                } else if (r.acceptWord("drop")) {
-                    drop = r.positive(Unit.OHM, "dropping resistor", true);
-                } else if (r.acceptWord("rest")) {
-                    r.expectWord("drop");
-                    restDrop = r.positive(Unit.OHM, "dropping resistor for the last string", false);
-                } else if (r.acceptWord("shunt")) {
-                    shunt = true;
-                } else {
-                    r.end();
-                }
-            }
-            if (r.failed() || rail < 0) {
-                continue;
-            }
-            rules.add(new HeaterRule(rail, series, List.copyOf(tubes), count, perModule, volts, drop, shunt, restDrop));
+            boolean series = q.key().text().equals("series");
+            double volts = line.has("at") ? line.num("volts") : Double.NaN;
+            double drop = line.has("drop") ? line.num("drop") : 0;
+            double restDrop = line.has("rest") ? line.num("restdrop") : 0;
+            rules.add(new HeaterRule(rail, series, List.copyOf(tubes), series ? (int) line.num() : 1, !line.has("across"),
+                    volts, drop, line.has("shunt"), restDrop));
             ruleSpans.add(q.span());
         }
+    }
+
+    /** The line read from {@code q}, or null when it had an error. */
+    private static PropLine lineOf(PropBlock b, Prop q) {
+        for (PropLine l : b.lines(q.key().text())) {
+            if (l.prop() == q) {
+                return l;
+            }
+        }
+        return null;
     }
 
     /** Forms strings from the envelopes; every envelope must be covered by some rule. */
@@ -201,10 +179,8 @@ final class Packer {
         }
     }
 
+    /** A number for a message; never a wrapped-around integer. */
     static String fmt(double v) {
-        if (Double.isNaN(v)) {
-            return "?";
-        }
-        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+        return Unit.number(v);
     }
 }

@@ -28,13 +28,12 @@ final class Parts {
     final List<Rail> rails = new ArrayList<>();
     final Map<String, Integer> railIndex = new LinkedHashMap<>();
     final Map<String, Integer> realize = new HashMap<>();
-    final Map<String, Span> realizeSpan = new HashMap<>();
     private final Map<String, Integer> tubeIndex = new HashMap<>();
     private final Map<String, Integer> stageIndex = new HashMap<>();
+    /** Library stages already reported for a rail the machine lacks: one error each. */
+    private final java.util.Set<String> missingRails = new java.util.HashSet<>();
     private final Declarations decls;
     private final Diagnostics diags;
-
-    static final List<String> REALIZABLE = List.of("not", "nand", "nor", "and", "or", "xor", "buffer", "latch");
 
     Parts(Declarations decls, Diagnostics diags) {
         this.decls = decls;
@@ -49,60 +48,34 @@ final class Parts {
 
     private void rail(Prop p) {
         String name = p.values().get(0).text();
-        double volts = Double.NaN;
-        double source = 0;
-        double limit = Double.POSITIVE_INFINITY;
-        for (Prop q : p.block()) {
-            PropReader r = new PropReader(q, diags);
-            switch (q.key().text()) {
-                case "voltage" -> volts = r.quantity(Unit.VOLT, "rail voltage");
-                case "source" -> source = r.positive(Unit.OHM, "source resistance", true);
-                case "limit" -> limit = r.positive(Unit.AMPERE, "current limit", false);
-                default -> unknownKey(q, "rail", List.of("voltage", "source", "limit"));
-            }
-            r.end();
-        }
-        if (Double.isNaN(volts)) {
-            if (!diags.hasErrors()) {
-                diags.error(p.values().get(0).span(), "rail '" + name + "' has no voltage", "add `voltage 48 V` to its block");
-            }
-            volts = 0;
-        }
+        PropBlock b = PropBlock.read(PropertyTable.RAIL, p, "rail '" + name + "'", p.values().get(0).span(), diags);
+        double volts = b.num("voltage");
+        double limit = b.num("limit");
         railIndex.put(name, rails.size());
-        rails.add(new Rail(name, volts, Double.isNaN(source) ? 0 : source, Double.isNaN(limit) ? Double.POSITIVE_INFINITY : limit));
-    }
-
-    void unknownKey(Prop q, String where, List<String> known) {
-        diags.error(q.key().span(), "unknown property '" + q.key().text() + "' in " + where,
-                Declarations.hintFor(q.key().text(), known, "expected one of: " + String.join(", ", known)));
+        rails.add(new Rail(name, Double.isNaN(volts) ? 0 : volts, b.num("source"),
+                Double.isNaN(limit) ? Double.POSITIVE_INFINITY : limit));
     }
 
     private void readRealize(Prop r) {
-        for (Prop q : r.block()) {
-            String op = q.key().text();
-            if (!REALIZABLE.contains(op)) {
-                unknownKey(q, "realize", REALIZABLE);
+        PropBlock b = PropBlock.read(PropertyTable.REALIZE, r, "realize", r.key().span(), diags);
+        for (String op : StageFunction.realizableWords()) {
+            PropLine line = b.line(op);
+            if (line == null) {
                 continue;
             }
-            PropReader pr = new PropReader(q, diags);
-            String stageName = pr.word("a stage name");
-            Span at = pr.lastSpan();
-            pr.end();
-            if (stageName == null) {
-                continue;
-            }
+            String stageName = line.word("stage");
+            Span at = line.span("stage");
             int s = stage(stageName, at);
             if (s < 0) {
                 continue;
             }
-            StageFunction want = StageFunction.valueOf(op.toUpperCase(Locale.ROOT));
+            StageFunction want = StageFunction.byWord(op);
             if (stages.get(s).function() != want) {
-                diags.error(at, "stage '" + stageName + "' realizes " + stages.get(s).function().name().toLowerCase()
+                diags.error(at, "stage '" + stageName + "' realizes " + stages.get(s).function().word()
                         + ", not " + op, "pick a stage whose function is " + op);
                 continue;
             }
             realize.put(op, s);
-            realizeSpan.put(op, at);
         }
     }
 
@@ -111,7 +84,7 @@ final class Parts {
         if (i == null) {
             diags.error(at, "unknown rail '" + name + "'",
                     Declarations.hintFor(name, new ArrayList<>(railIndex.keySet()),
-                            "declare it with `rail " + name + " { voltage ... }`"));
+                            "declare it with `" + PropertyTable.RAIL.skeleton(name) + "`"));
             return -1;
         }
         return i;
@@ -121,8 +94,6 @@ final class Parts {
      * A rail a stage draws from. A library stage naming a rail the machine lacks is reported
      * where the machine uses the stage, since that is the line the user can change.
      */
-    private final java.util.Set<String> missingRails = new java.util.HashSet<>();
-
     private int stageRail(String rail, Span at, String stage, Prop decl, Span use) {
         if (railIndex.containsKey(rail) || !decl.span().file().equals(SourceLoader.LIBRARY) || use == null
                 || !use.isKnown()) {
@@ -132,7 +103,7 @@ final class Parts {
             return -1;
         }
         diags.error(use, "library stage '" + stage + "' draws from rail '" + rail + "', which this machine does not declare",
-                "declare `rail " + rail + " { voltage ... }` (library stages expect rails bplus, bias and relay), "
+                "declare `" + PropertyTable.RAIL.skeleton(rail) + "` (library stages expect rails bplus, bias and relay), "
                         + "or declare a stage of your own");
         return -1;
     }
@@ -145,7 +116,7 @@ final class Parts {
         Prop p = decls.tubes.get(name);
         if (p == null) {
             diags.error(at, "unknown tube type '" + name + "'",
-                    Declarations.hintFor(name, new ArrayList<>(decls.tubes.keySet()), "declare it with `tube " + name + " { ... }`"));
+                    Declarations.hintFor(name, new ArrayList<>(decls.tubes.keySet()), "declare it with `" + PropertyTable.TUBE.skeleton(name) + "`"));
             return -1;
         }
         TubeType t = buildTube(name, p);
@@ -155,69 +126,23 @@ final class Parts {
     }
 
     private TubeType buildTube(String name, Prop p) {
-        TubeKind kind = TubeKind.TRIODE;
-        int sections = 1;
+        PropBlock b = PropBlock.read(PropertyTable.TUBE, p, "tube '" + name + "'", p.values().get(0).span(), diags);
+        PropLine kindLine = b.line("kind");
+        TubeKind kind = kindLine == null ? TubeKind.TRIODE : TubeKind.valueOf(kindLine.word("kind").toUpperCase(Locale.ROOT));
         List<HeaterRating> heaters = new ArrayList<>();
-        double warmup = Double.NaN, ratio = Double.NaN, cgk = 0, cgp = 0, cpk = 0, cin = Double.NaN, cout = Double.NaN;
-        double avg = Double.NaN, peak = Double.NaN, drop = Double.NaN;
-        String source = "";
-        for (Prop q : p.block()) {
-            PropReader r = new PropReader(q, diags);
-            switch (q.key().text()) {
-                case "kind" -> {
-                    String k = r.word("a tube kind");
-                    if (k != null) {
-                        try {
-                            kind = TubeKind.valueOf(k.toUpperCase(Locale.ROOT));
-                        } catch (IllegalArgumentException e) {
-                            diags.error(r.lastSpan(), "unknown tube kind '" + k + "'", "expected triode, pentode, diode or thyratron");
-                        }
-                    }
-                }
-                case "sections" -> sections = (int) r.whole("number of sections", 1, 4);
-                case "heater" -> {
-                    double v = r.positive(Unit.VOLT, "heater voltage", false);
-                    double a = r.positive(Unit.AMPERE, "heater current", false);
-                    if (!Double.isNaN(v) && !Double.isNaN(a)) {
-                        heaters.add(new HeaterRating(v, a));
-                    }
-                }
-                case "warmup" -> warmup = r.positive(Unit.SECOND, "warm-up time", false);
-                case "coldratio" -> ratio = r.number("cold-to-hot resistance ratio");
-                case "cgk" -> cgk = r.positive(Unit.FARAD, "grid-cathode capacitance", true);
-                case "cgp" -> cgp = r.positive(Unit.FARAD, "grid-plate capacitance", true);
-                case "cpk" -> cpk = r.positive(Unit.FARAD, "plate-cathode capacitance", true);
-                case "cin" -> cin = r.positive(Unit.FARAD, "input capacitance", true);
-                case "cout" -> cout = r.positive(Unit.FARAD, "output capacitance", true);
-                case "avgcurrent" -> avg = r.positive(Unit.AMPERE, "average cathode current", false);
-                case "peakcurrent" -> peak = r.positive(Unit.AMPERE, "peak cathode current", false);
-                case "arcdrop" -> drop = r.positive(Unit.VOLT, "tube drop", false);
-                case "source" -> source = r.string("the source of the data");
-                default -> unknownKey(q, "tube", List.of("kind", "sections", "heater", "warmup", "coldratio", "cgk",
-                        "cgp", "cpk", "cin", "cout", "avgcurrent", "peakcurrent", "arcdrop", "source"));
-            }
-            r.end();
+        for (PropLine h : b.lines("heater")) {
+            heaters.add(new HeaterRating(h.num(), h.num("current")));
         }
         if (heaters.isEmpty()) {
-            diags.error(p.values().get(0).span(), "tube '" + name + "' has no heater rating",
-                    "add `heater 6.3 V 300 mA` (volts and amps from its data sheet)");
-            heaters.add(new HeaterRating(6.3, 0.3));
+            heaters.add(new HeaterRating(6.3, 0.3)); // reported missing; a stand-in keeps later checks quiet
         }
-        if (Double.isNaN(cin)) {
-            cin = cgk + cgp;
-        }
-        if (Double.isNaN(cout)) {
-            cout = cpk + cgp;
-        }
-        if (sections < 1) {
-            sections = 1;
-        }
-        return new TubeType(name, kind, sections, List.copyOf(heaters), warmup, ratio, nz(cgk), nz(cgp), nz(cpk),
-                nz(cin), nz(cout), avg, peak, drop, source == null ? "" : source);
-    }
-
-    private static double nz(double v) {
-        return Double.isNaN(v) ? 0 : v;
+        double cgk = b.num("cgk"), cgp = b.num("cgp"), cpk = b.num("cpk");
+        double cin = b.has("cin") ? b.num("cin") : cgk + cgp;
+        double cout = b.has("cout") ? b.num("cout") : cpk + cgp;
+        PropLine source = b.line("source");
+        return new TubeType(name, kind, (int) b.num("sections"), List.copyOf(heaters), b.num("warmup"), b.num("coldratio"),
+                cgk, cgp, cpk, cin, cout, b.num("avgcurrent"), b.num("peakcurrent"), b.num("arcdrop"),
+                source == null ? "" : source.word("value"));
     }
 
     /** The stage named, built on first use; -1 (reported) when unknown. */
@@ -229,7 +154,7 @@ final class Parts {
         Prop p = decls.stages.get(name);
         if (p == null) {
             diags.error(at, "unknown stage '" + name + "'",
-                    Declarations.hintFor(name, new ArrayList<>(decls.stages.keySet()), "declare it with `stage " + name + " : FUNCTION { ... }`"));
+                    Declarations.hintFor(name, new ArrayList<>(decls.stages.keySet()), "declare it with `" + PropertyTable.STAGE.skeleton(name) + "`"));
             return -1;
         }
         StageType s = buildStage(name, p, at);
@@ -256,96 +181,60 @@ final class Parts {
         if (head.failed()) {
             return null;
         }
-        StageFunction function;
-        try {
-            function = StageFunction.valueOf(fn.toUpperCase(Locale.ROOT));
-        } catch (IllegalArgumentException e) {
-            List<String> fns = java.util.Arrays.stream(StageFunction.values()).map(f -> f.name().toLowerCase()).toList();
-            diags.error(fnSpan, "unknown stage function '" + fn + "'", Declarations.hintFor(fn, fns, "expected one of: " + String.join(", ", fns)));
+        StageFunction function = StageFunction.byWord(fn);
+        if (function == null) {
+            diags.error(fnSpan, "unknown stage function '" + fn + "'", Declarations.hintFor(fn, StageFunction.words(),
+                    "expected one of: " + String.join(", ", StageFunction.words())));
             return null;
         }
-        int tube = -1, sections = 1, fanIn = function.defaultFanIn, loadRail = -1;
-        boolean perInput = false;
-        double load = Double.NaN, rise = Double.NaN, fall = Double.NaN, setup = 0, ron = Double.NaN, wiring = 0, gain = 1;
+        PropBlock b = PropBlock.read(PropertyTable.STAGE, p, "stage '" + name + "'", p.values().get(0).span(), diags);
+        PropLine tubeLine = b.line("tube");
+        int tube = tubeLine == null ? -1 : tube(tubeLine.word("tube"), tubeLine.span("tube"));
+        PropLine sections = b.line("sections");
+        PropLine loadLine = b.line("load");
+        double load = b.num("load");
+        int loadRail = loadLine == null ? -1 : stageRail(loadLine.word("rail"), loadLine.span("rail"), name, p, use);
         List<RailDraw> low = new ArrayList<>(), high = new ArrayList<>(), always = new ArrayList<>();
-        String note = "";
-        for (Prop q : p.block()) {
-            PropReader r = new PropReader(q, diags);
-            switch (q.key().text()) {
-                case "tube" -> {
-                    String t = r.word("a tube type");
-                    if (t != null) {
-                        tube = tube(t, r.lastSpan());
-                    }
-                }
-                case "sections" -> {
-                    sections = (int) r.whole("sections used", 1, 8);
-                    if (r.acceptWord("per")) {
-                        r.expectWord("input");
-                        perInput = true;
-                    }
-                }
-                case "fanin" -> fanIn = (int) r.whole("fan-in", 1, 16);
-                case "load" -> {
-                    load = r.positive(Unit.OHM, "plate load", false);
-                    r.expectWord("from");
-                    String rail = r.word("a rail name");
-                    if (rail != null) {
-                        loadRail = stageRail(rail, r.lastSpan(), name, p, use);
-                    }
-                }
-                case "draw" -> {
-                    String state = r.word("low, high or always");
-                    Span st = r.lastSpan();
-                    String rail = r.word("a rail name");
-                    Span rs = r.lastSpan();
-                    double a = r.positive(Unit.AMPERE, "current drawn", true);
-                    if (state == null || rail == null || Double.isNaN(a)) {
-                        break;
-                    }
-                    int ri = stageRail(rail, rs, name, p, use);
-                    List<RailDraw> into = switch (state) {
-                        case "low" -> low;
-                        case "high" -> high;
-                        case "always" -> always;
-                        default -> null;
-                    };
-                    if (into == null) {
-                        diags.error(st, "unknown output state '" + state + "'", "expected low, high or always");
-                    } else if (ri >= 0) {
-                        into.add(new RailDraw(ri, a));
-                    }
-                }
-                case "rise" -> rise = r.positive(Unit.SECOND, "rise time", true);
-                case "fall" -> fall = r.positive(Unit.SECOND, "fall time", true);
-                case "delay" -> {
-                    if (!r.acceptWord("auto")) {
-                        rise = r.positive(Unit.SECOND, "delay", true);
-                        fall = rise;
-                    }
-                }
-                case "setup" -> setup = r.positive(Unit.SECOND, "set-up time", true);
-                case "ron" -> ron = r.positive(Unit.OHM, "conducting output resistance", false);
-                case "wiring" -> wiring = r.positive(Unit.FARAD, "wiring capacitance", true);
-                case "gain" -> gain = r.number("stage gain");
-                case "note" -> note = r.string("a note");
-                default -> unknownKey(q, "stage", List.of("tube", "sections", "fanin", "load", "draw", "rise", "fall",
-                        "delay", "setup", "ron", "wiring", "gain", "note"));
+        for (PropLine d : b.lines("draw")) {
+            String state = d.word("state");
+            if (state.equals("conducting")) {
+                state = conductingState(function, d.span("state"));
             }
-            r.end();
+            int ri = stageRail(d.word("rail"), d.span("rail"), name, p, use);
+            if (ri >= 0 && state != null) {
+                List<RailDraw> into = state.equals("low") ? low : state.equals("high") ? high : always;
+                into.add(new RailDraw(ri, d.num("amps")));
+            }
+        }
+        double rise = b.num("rise"), fall = b.num("fall");
+        PropLine delay = b.line("delay");
+        if (delay != null && !delay.has("mode")) {
+            rise = delay.num();
+            fall = rise;
         }
         if (tube < 0) {
-            if (!diags.hasErrors()) {
-                diags.error(p.values().get(0).span(), "stage '" + name + "' names no tube", "add `tube 12AU7` (or another type)");
-            }
             return null;
         }
-        if (Double.isNaN(ron)) {
-            ron = Double.isNaN(load) ? 1000 : load / 10;
-        }
-        return new StageType(name, function, tube, sections, perInput, fanIn, Double.isNaN(load) ? 0 : load, loadRail,
-                List.copyOf(low), List.copyOf(high), List.copyOf(always), rise, fall, Double.isNaN(setup) ? 0 : setup,
-                ron, Double.isNaN(wiring) ? 0 : wiring, Double.isNaN(gain) ? 1 : gain, note == null ? "" : note);
+        double ron = b.has("ron") ? b.num("ron") : Double.isNaN(load) ? PropertyTable.RON_WITHOUT_LOAD : load / PropertyTable.RON_LOAD_RATIO;
+        PropLine note = b.line("note");
+        return new StageType(name, function, tube, (int) b.num("sections"), sections != null && sections.has("per"),
+                b.has("fanin") ? (int) b.num("fanin") : function.defaultFanIn, Double.isNaN(load) ? 0 : load, loadRail,
+                List.copyOf(low), List.copyOf(high), List.copyOf(always), rise, fall, b.num("setup"), ron, b.num("wiring"),
+                b.num("gain"), note == null ? "" : note.word("value"));
+    }
+
+    /** The output state ({@code low}, {@code high}, {@code always}) in which a stage of {@code f} conducts; null when reported. */
+    private String conductingState(StageFunction f, Span at) {
+        return switch (f.conducts()) {
+            case OUTPUT_LOW -> "low";
+            case OUTPUT_HIGH -> "high";
+            case ALWAYS -> "always";
+            case DEPENDS -> {
+                diags.error(at, "a stage of function '" + f.word() + "' conducts in either output state, depending on its circuit",
+                        "write `draw low ...` or `draw high ...`");
+                yield null;
+            }
+        };
     }
 
     /** The stage realizing an operator, or -1 when none is mapped. */

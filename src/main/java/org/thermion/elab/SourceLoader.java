@@ -3,6 +3,7 @@ package org.thermion.elab;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.MachineReader;
 import org.thermion.lang.SourceSet;
+import org.thermion.lang.SourceText;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Decl;
 import org.thermion.lang.ast.SourceFile;
@@ -21,10 +22,13 @@ import java.util.Set;
 
 /**
  * Reads a file and everything it includes (paths relative to the including file),
- * in include order; reports missing files and include cycles.
+ * in include order; reports missing files, files that are not UTF-8, include cycles and
+ * includes nested deeper than {@link #MAX_INCLUDE_DEPTH}.
  */
 final class SourceLoader {
     static final Path LIBRARY = Path.of("<parts>/library.machine");
+    /** Most files open at once along one chain of includes (the root counts as one). */
+    static final int MAX_INCLUDE_DEPTH = 64;
 
     private final SourceSet sources;
     private final Diagnostics diags;
@@ -85,20 +89,32 @@ final class SourceLoader {
                     "remove one of these includes; a file may not include itself, directly or through others");
             return;
         }
+        if (stack.size() >= MAX_INCLUDE_DEPTH) {
+            diags.error(from, "includes nested deeper than " + MAX_INCLUDE_DEPTH + " files",
+                    "at most " + MAX_INCLUDE_DEPTH + " files may be open along one chain of includes;"
+                            + " include the parts from one common file instead");
+            return;
+        }
         if (!done.add(file)) {
             return;
         }
-        String text;
+        byte[] bytes;
         try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
+            bytes = Files.readAllBytes(file);
         } catch (IOException e) {
             done.remove(file);
             if (from == null) {
-                diags.error(Span.none(), "cannot read " + file + ": " + reason(e), null);
-            } else {
+                diags.error(new Span(file, 0, 0, 0, 0), "cannot read " + file + ": " + SourceText.reason(file, e), null);
+            } else if (e instanceof java.nio.file.NoSuchFileException) {
                 diags.error(from, "include not found: " + file,
                         "include paths are relative to the file that includes them");
+            } else {
+                diags.error(from, "cannot read include " + file + ": " + SourceText.reason(file, e), null);
             }
+            return;
+        }
+        String text = SourceText.decode(file, bytes, sources, diags);
+        if (text == null) {
             return;
         }
         sources.put(file, text);
@@ -113,19 +129,23 @@ final class SourceLoader {
         Path parent = f.path().getParent();
         for (Decl d : f.decls()) {
             if (d instanceof Decl.Include inc) {
-                Path target = parent == null ? Path.of(inc.file()) : parent.resolve(inc.file());
+                Path target;
+                try {
+                    target = parent == null ? Path.of(inc.file()) : parent.resolve(inc.file());
+                } catch (java.nio.file.InvalidPathException e) {
+                    diags.error(inc.span(), "include path is not a file name: " + why(inc.file()),
+                            "name the file plainly, relative to the file that includes it");
+                    continue;
+                }
                 readFile(target.normalize(), inc.span());
             }
         }
     }
 
-    private static String reason(IOException e) {
-        if (e instanceof java.nio.file.NoSuchFileException) {
-            return "no such file";
+    private static String why(String path) {
+        if (path.indexOf('\0') >= 0) {
+            return "it holds a NUL character";
         }
-        if (e instanceof java.nio.file.AccessDeniedException) {
-            return "permission denied";
-        }
-        return e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+        return path.isEmpty() ? "it is empty" : "the system does not accept it";
     }
 }

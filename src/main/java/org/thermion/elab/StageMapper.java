@@ -27,6 +27,7 @@ final class StageMapper {
     /** Inverters decided after expansion: gate index, in creation order. */
     final List<Integer> candidates = new ArrayList<>();
     private final Map<Integer, Integer> candidateOf = new HashMap<>();
+    private final Map<Long, Integer> candidateFor = new HashMap<>();
     private final Parts parts;
     private final Diagnostics diags;
     private final Set<String> reportedOps = new HashSet<>();
@@ -64,21 +65,7 @@ final class StageMapper {
             in[i] = emit(f, c.args().get(i), -1, span);
         }
         StageType st = parts.stages.get(c.stage());
-        GateFn fn = switch (st.function()) {
-            case NOT -> GateFn.NOT;
-            case NAND -> GateFn.NAND;
-            case NOR -> GateFn.NOR;
-            case AND -> GateFn.AND;
-            case OR -> GateFn.OR;
-            case XOR -> GateFn.XOR;
-            default -> GateFn.BUF;
-        };
-        if (in.length == 1 && (fn == GateFn.NAND || fn == GateFn.NOR)) {
-            fn = GateFn.NOT;
-        } else if (in.length == 1 && (fn == GateFn.AND || fn == GateFn.OR)) {
-            fn = GateFn.BUF;
-        }
-        int out = nb.gate(fn, c.stage(), in, dest, f.module, f.path, span);
+        int out = nb.gate(st.function().gate(in.length), c.stage(), in, dest, f.module, f.path, span);
         if (st.function().isDriver()) {
             driverOutputs.add(out);
         }
@@ -107,7 +94,9 @@ final class StageMapper {
             return emit(f, new Logic.Const(in == 0), dest, span);
         }
         if (nb.isLatchOutput(in)) {
-            int c = nb.complementOf(in);
+            // The module's candidate for this latch, where one was made before the latch was known.
+            Integer t = candidateFor.get(((long) f.module << 32) | in);
+            int c = t != null ? t : nb.complementOf(in);
             return dest < 0 ? c : nb.wire(c, dest, f.module, span);
         }
         Integer source = nb.complementSource.get(in);
@@ -125,16 +114,19 @@ final class StageMapper {
     }
 
     /**
-     * An inverter of a net not yet driven (or of such an inverter): built now on the realize
-     * block's NOT stage (or none), decided once every driver is known.
+     * An inverter of a net not yet driven (or of such an inverter): one per module and net, built
+     * now on the realize block's NOT stage (or none) and decided once every driver is known.
      */
     private int candidate(Scope f, int in, int dest, Span span) {
-        int out = nb.gate(GateFn.NOT, parts.realizer("not"), new int[]{in}, dest, f.module, f.path, span);
-        int g = nb.driver.get(out);
-        if (g >= 0 && nb.gates.get(g).fn == GateFn.NOT && nb.gates.get(g).in[0] == in && candidateOf.putIfAbsent(out, in) == null) {
-            candidates.add(g);
+        long key = ((long) f.module << 32) | in;
+        Integer t = candidateFor.get(key);
+        if (t == null) {
+            t = nb.gate(GateFn.NOT, parts.realizer("not"), new int[]{in}, -1, f.module, f.path, span);
+            candidates.add(nb.driver.get(t));
+            candidateOf.put(t, in);
+            candidateFor.put(key, t);
         }
-        return out;
+        return dest < 0 ? t : nb.wire(t, dest, f.module, span);
     }
 
     private int emitXor(Scope f, Logic.Xor x, boolean inverted, int dest, Span span) {

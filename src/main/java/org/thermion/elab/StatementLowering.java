@@ -163,7 +163,7 @@ final class StatementLowering {
     private int latchStage(ModuleStmt.Latch l) {
         if (l.stage() != null) {
             int stage = parts.stage(l.stage().text(), l.stage().span());
-            if (stage >= 0 && parts.stages.get(stage).function() != StageFunction.LATCH) {
+            if (stage >= 0 && parts.stages.get(stage).function().role() != StageFunction.Role.STORAGE) {
                 diags.error(l.stage().span(), "stage '" + l.stage().text() + "' is not a latch or flip-flop",
                         "name a stage whose function is latch");
                 return -1;

@@ -1,5 +1,10 @@
 package org.thermion.elab;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 
 /** The physical dimensions values can carry, and the unit words for each with their scale. */
@@ -34,6 +39,11 @@ enum Unit {
         };
     }
 
+    /** The plural noun, for messages: "amperes given, volts expected". */
+    String plural() {
+        return name().toLowerCase(Locale.ROOT) + "s";
+    }
+
     String example() {
         return switch (this) {
             case VOLT -> "V or mV";
@@ -43,5 +53,44 @@ enum Unit {
             case OHM -> "ohm, k or M";
             case WATT -> "W or mW";
         };
+    }
+
+    /**
+     * An SI value written with this unit's own words as a user would write it ({@code 22 k},
+     * {@code 2.4 mA}): four significant digits at most, and never a wrapped-around integer.
+     */
+    String format(double si) {
+        if (!Double.isFinite(si)) {
+            return (Double.isNaN(si) ? "?" : si > 0 ? "infinite" : "-infinite");
+        }
+        if (si == 0) {
+            return "0 " + baseWord();
+        }
+        List<Map.Entry<String, Scaled>> words = WORDS.entrySet().stream().filter(e -> e.getValue().unit() == this)
+                .sorted(Comparator.comparingDouble(e -> e.getValue().factor())).toList();
+        Map.Entry<String, Scaled> pick = words.get(0);
+        for (Map.Entry<String, Scaled> e : words) {
+            if (Math.abs(si) >= e.getValue().factor() * (1 - 1e-12)) {
+                pick = e;
+            }
+        }
+        return number(si / pick.getValue().factor()) + " " + pick.getKey();
+    }
+
+    private String baseWord() {
+        return this == FARAD ? "pF" : symbol();
+    }
+
+    /** A plain number with at most four significant digits; scientific notation outside 1e-3..1e6. */
+    static String number(double x) {
+        if (!Double.isFinite(x)) {
+            return Double.isNaN(x) ? "?" : x > 0 ? "infinite" : "-infinite";
+        }
+        double a = Math.abs(x);
+        BigDecimal d = new BigDecimal(x).round(new MathContext(4)).stripTrailingZeros();
+        if (a != 0 && (a >= 1e6 || a < 1e-3)) {
+            return d.toString().replace("E+", "e").replace("E", "e");
+        }
+        return d.toPlainString();
     }
 }

@@ -7,6 +7,9 @@ import java.io.PrintWriter;
  * a caret under the span and the hint.
  */
 public final class DiagnosticPrinter {
+    /** Longest stretch of a source line quoted under a message. */
+    static final int WINDOW = 120;
+
     private final SourceSet sources;
 
     public DiagnosticPrinter(SourceSet sources) {
@@ -28,6 +31,16 @@ public final class DiagnosticPrinter {
         out.flush();
     }
 
+    /** Tabs as spaces and other control characters as '?', so the caret stays under its column. */
+    private static String visible(String text) {
+        StringBuilder b = new StringBuilder(text.length());
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            b.append(c == '\t' ? ' ' : c < 0x20 || c == 0x7F ? '?' : c);
+        }
+        return b.toString();
+    }
+
     private static String plural(int n, String word) {
         return n + " " + word + (n == 1 ? "" : "s");
     }
@@ -43,12 +56,17 @@ public final class DiagnosticPrinter {
         if (s != null && s.isKnown()) {
             String text = sources.line(s.file(), s.line());
             if (text != null) {
-                String shown = text.replace('\t', ' ');
-                sb.append("  ").append(shown).append('\n');
+                String shown = visible(text);
                 int start = Math.max(0, Math.min(s.col() - 1, shown.length()));
                 int end = s.endLine() == s.line() ? s.endCol() - 1 : shown.length();
                 int width = Math.max(1, Math.min(end, shown.length()) - start);
-                sb.append("  ").append(" ".repeat(start)).append('^').append("~".repeat(width - 1)).append('\n');
+                // A very long line is shown as a window around the caret.
+                int from = shown.length() <= WINDOW ? 0 : Math.max(0, Math.min(start - WINDOW / 2, shown.length() - WINDOW));
+                int to = Math.min(shown.length(), from + WINDOW);
+                String lead = from > 0 ? "..." : "";
+                sb.append("  ").append(lead).append(shown, from, to).append(to < shown.length() ? "..." : "").append('\n');
+                width = Math.max(1, Math.min(width, to - start));
+                sb.append("  ").append(" ".repeat(lead.length() + start - from)).append('^').append("~".repeat(width - 1)).append('\n');
             }
         }
         if (d.hint() != null && !d.hint().isEmpty()) {

@@ -19,6 +19,9 @@ public final class MachineReader {
 
     /** Parses {@code text}; syntax errors go into {@code diags}. The AST is returned even after errors. */
     public static SourceFile parse(Path file, String text, Diagnostics diags) {
+        if (!NestingLimit.scan(file, text, '#', true, false, diags).isEmpty()) {
+            return new SourceFile(file, java.util.List.of());
+        }
         MachineLexer lexer = new MachineLexer(CharStreams.fromString(text, file.toString()));
         MachineParser parser = new MachineParser(new CommonTokenStream(lexer));
         SyntaxErrors listener = new SyntaxErrors(file, diags);

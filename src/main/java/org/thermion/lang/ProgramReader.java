@@ -48,9 +48,10 @@ public final class ProgramReader {
     public static ProgramSource parse(Path file, String text, Diagnostics diags) {
         ProgramReader r = new ProgramReader(file, diags);
         List<String> lines = text.lines().toList();
+        java.util.Set<Integer> tooDeep = NestingLimit.scan(file, text, ';', false, true, diags);
         List<ProgramLine> out = new ArrayList<>(lines.size());
         for (int i = 0; i < lines.size(); i++) {
-            out.add(r.line(i + 1, lines.get(i)));
+            out.add(tooDeep.contains(i + 1) ? new ProgramLine(i + 1, lines.get(i), null, null) : r.line(i + 1, lines.get(i)));
         }
         return new ProgramSource(file, List.copyOf(out));
     }

@@ -8,10 +8,10 @@ public sealed interface BypassTrigger {
     }
 
     /**
-     * A gas thyratron that fires once its cathode is warm, driving the relay coil
-     * through a plate resistor from a rail. {@code envelope} is the thyratron's envelope.
+     * A gas thyratron that fires once its cathode reaches its emission threshold, driving the
+     * relay coil through a plate resistor from a rail. {@code envelope} is the thyratron's envelope.
      */
-    record ThyratronWarm(int envelope, int tube, double plateOhms, int fromRail, double warmFraction)
+    record ThyratronWarm(int envelope, int tube, double plateOhms, int fromRail)
             implements BypassTrigger {
     }
 }

@@ -28,10 +28,6 @@ public record StageType(
         double gain,
         String note) {
 
-    public boolean delayGiven() {
-        return !Double.isNaN(rise) && !Double.isNaN(fall);
-    }
-
     /** Sections this stage uses for an instance with {@code inputs} inputs. */
     public int sectionsFor(int inputs) {
         return sectionsPerInput ? sections * Math.max(1, inputs) : sections;

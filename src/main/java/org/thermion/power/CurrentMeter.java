@@ -2,7 +2,13 @@ package org.thermion.power;
 
 import org.thermion.model.Machine;
 import org.thermion.model.StageType;
+import org.thermion.sim.InitMode;
 import org.thermion.sim.Simulator;
+import org.thermion.sim.Stimulus;
+import org.thermion.sim.compiled.Engine;
+import org.thermion.sim.run.LogicLane;
+import org.thermion.sim.run.RunDriver;
+import org.thermion.sim.run.RunObserver;
 
 import java.util.Arrays;
 import java.util.List;
@@ -46,6 +52,36 @@ public final class CurrentMeter {
     private long samples;
     private long lastCycle = -1;
     private int lastPhase;
+
+    /**
+     * Meters a program: runs {@code cycles} cycles of the machine on {@code rom} (null: no ROM image)
+     * on simulator lane 0, inputs from {@code stimulus} (null: all 0), one sample after every phase.
+     */
+    public static CurrentMeter ofRun(Machine m, long[] rom, Stimulus stimulus, long cycles, InitMode init) {
+        if (cycles < 1) {
+            throw new IllegalArgumentException("cycles must be at least 1, not " + cycles);
+        }
+        Simulator sim = Engine.DEFAULT.simulator(m, cycles);
+        sim.reset(init);
+        if (rom != null) {
+            sim.loadRom(rom);
+        }
+        CurrentMeter meter = new CurrentMeter(m);
+        RunDriver driver = new RunDriver(new LogicLane(sim), m.inputs().size(), stimulus).observe(meter.observer(sim, 0));
+        driver.start();
+        driver.finish(driver.run(cycles));
+        return meter;
+    }
+
+    /** Feeds this meter from {@code sim}'s lane after every phase of a {@link RunDriver} run. */
+    public RunObserver observer(Simulator sim, int lane) {
+        return new RunObserver() {
+            @Override
+            public void phaseRan(long cycle, int phase) {
+                sample(sim::value, lane, cycle, phase);
+            }
+        };
+    }
 
     public CurrentMeter(Machine m) {
         rails = m.rails().size();
@@ -249,11 +285,6 @@ public final class CurrentMeter {
     /** Phase (1-based) of the rail's first peak, 0 before any sample. */
     public int peakPhase(int rail) {
         return samples == 0 ? 0 : railMaxPhase[checkRail(rail)];
-    }
-
-    /** A module's approximate plate dissipation at the last sample ({@link PlateDissipation}). */
-    public double nowPlateWatts(int module) {
-        return now[plateSlot(module)];
     }
 
     /** A module's time-averaged plate dissipation, the figure that heats its tubes. */

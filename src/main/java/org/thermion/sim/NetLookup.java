@@ -18,20 +18,49 @@ public final class NetLookup {
     private final Map<String, List<Integer>> buses = new LinkedHashMap<>();
 
     public NetLookup(Machine machine) {
-        String[] names = machine.netlist().netNames();
-        for (int n = 2; n < names.length; n++) {
-            byName.put(names[n], n);
-            int open = names[n].lastIndexOf('[');
-            if (open > 0 && names[n].endsWith("]")) {
-                buses.computeIfAbsent(names[n].substring(0, open), k -> new ArrayList<>()).add(n);
+        this(namedNets(machine.netlist().netNames()));
+    }
+
+    /** Looks names up among {@code named} (name to net, in the order buses list their bits' first use). */
+    public NetLookup(Map<String, Integer> named) {
+        Map<String, String> nameOfBit = new HashMap<>();
+        for (Map.Entry<String, Integer> e : named.entrySet()) {
+            String name = e.getKey();
+            byName.put(name, e.getValue());
+            int open = name.lastIndexOf('[');
+            if (open > 0 && name.endsWith("]")) {
+                buses.computeIfAbsent(name.substring(0, open), k -> new ArrayList<>()).add(e.getValue());
+                nameOfBit.put(name.substring(0, open) + "#" + e.getValue(), name);
             }
         }
-        for (List<Integer> bits : buses.values()) {
-            bits.sort((a, b) -> Integer.compare(bitIndex(names[a]), bitIndex(names[b])));
+        for (Map.Entry<String, List<Integer>> bus : buses.entrySet()) {
+            String base = bus.getKey();
+            bus.getValue().sort((a, b) -> Integer.compare(bitIndex(nameOfBit.get(base + "#" + a)),
+                    bitIndex(nameOfBit.get(base + "#" + b))));
         }
     }
 
-    private static int bitIndex(String name) {
+    private static Map<String, Integer> namedNets(String[] names) {
+        Map<String, Integer> m = new LinkedHashMap<>();
+        for (int n = 2; n < names.length; n++) {
+            m.put(names[n], n);
+        }
+        return m;
+    }
+
+    /** The bus a name is a bit of ({@code line} for {@code line[3]}), or null. */
+    public static String busOf(String name) {
+        int open = name.lastIndexOf('[');
+        return open > 0 && name.endsWith("]") ? name.substring(0, open) : null;
+    }
+
+    /** True when {@code name} names a whole bus. */
+    public boolean isBus(String name) {
+        return !byName.containsKey(name) && buses.containsKey(name);
+    }
+
+    /** The index of a bus bit name ({@code 3} for {@code line[3]}); {@code Integer.MAX_VALUE} when it has none. */
+    public static int bitIndex(String name) {
         try {
             return Integer.parseInt(name.substring(name.lastIndexOf('[') + 1, name.length() - 1));
         } catch (NumberFormatException e) {

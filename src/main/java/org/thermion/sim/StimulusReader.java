@@ -3,13 +3,11 @@ package org.thermion.sim;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.Names;
 import org.thermion.lang.SourceSet;
+import org.thermion.lang.SourceText;
 import org.thermion.lang.Span;
 import org.thermion.model.Machine;
 import org.thermion.model.Port;
 
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -35,21 +33,8 @@ public final class StimulusReader {
 
     /** Reads a stimulus file; null when errors were reported. */
     public Stimulus read(Path file) {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (java.nio.file.NoSuchFileException e) {
-            diags.error(new Span(file, 0, 0, 0, 0), "cannot read stimulus file " + file + ": no such file");
-            return null;
-        } catch (java.nio.file.AccessDeniedException e) {
-            diags.error(new Span(file, 0, 0, 0, 0), "cannot read stimulus file " + file + ": permission denied");
-            return null;
-        } catch (java.nio.charset.MalformedInputException e) {
-            diags.error(new Span(file, 0, 0, 0, 0), "stimulus file " + file + " is not UTF-8 text");
-            return null;
-        } catch (IOException e) {
-            diags.error(new Span(file, 0, 0, 0, 0), "cannot read stimulus file " + file + ": "
-                    + (e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage()));
+        String text = SourceText.read(file, "stimulus file", sources, diags);
+        if (text == null) {
             return null;
         }
         return parse(file, text);

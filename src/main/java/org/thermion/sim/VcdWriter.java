@@ -10,14 +10,19 @@ import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.util.ArrayList;
 import java.util.BitSet;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
  * Writes a value change dump (IEEE 1364-2005 clause 18) of chosen nets on one lane: one
- * {@code $scope module} per module instance (the top scope is named after the machine), one
- * one-bit {@code $var wire} per net, and the program counter as a vector in the top scope.
+ * {@code $scope module} per module instance (the top scope is named after the machine), a bus
+ * of a module (two or more dumped bits {@code name[k]} over one run of indices, all loaded alike)
+ * as one vector {@code $var wire N id name [hi:lo]}, any other net as a one-bit
+ * {@code $var wire}, and the program counter as a vector in the top scope.
  *
  * <p>Time follows the clock: the logic settles at the start of each phase and the latches
  * load at its end, so gate-driven nets change at phase starts and latch outputs at phase ends.
@@ -26,14 +31,16 @@ public final class VcdWriter {
     private static final Pattern BUS_BIT = Pattern.compile("([A-Za-z_][A-Za-z0-9_]*)\\[(\\d+)]");
     private static final Pattern PLAIN = Pattern.compile("[A-Za-z_][A-Za-z0-9_$]*");
 
+    /** One declared variable: its nets LSB first (one for a scalar), where it is and what it is called. */
+    private record Var(String id, int[] nets, boolean latched, int module, String reference) {
+    }
+
     private final Machine machine;
     private final Writer out;
     private final int lane;
     private final VcdTimebase time;
-    private final int[] nets;
-    private final boolean[] latched;
-    private final String[] ids;
-    private final char[] last;
+    private final List<Var> vars = new ArrayList<>();
+    private final String[] last;
     private final boolean withPc;
     private final String pcId;
     private String lastPc;
@@ -48,20 +55,98 @@ public final class VcdWriter {
         this.out = out;
         this.lane = lane;
         this.time = VcdTimebase.of(machine.clock());
-        this.nets = nets.stream().distinct().filter(n -> n > Netlist.CONST1).mapToInt(Integer::intValue).toArray();
+        int[] dumped = nets.stream().distinct().filter(n -> n > Netlist.CONST1).mapToInt(Integer::intValue).toArray();
         BitSet latchNets = new BitSet();
         for (Latch l : machine.netlist().latches()) {
             latchNets.set(l.output());
         }
-        this.latched = new boolean[this.nets.length];
-        this.ids = new String[this.nets.length];
-        this.last = new char[this.nets.length];
-        for (int i = 0; i < this.nets.length; i++) {
-            latched[i] = latchNets.get(this.nets[i]);
-            ids[i] = identifier(i);
-        }
+        declare(dumped, latchNets);
+        this.last = new String[vars.size()];
         this.withPc = machine.pc() != null;
-        this.pcId = identifier(this.nets.length);
+        this.pcId = identifier(vars.size());
+    }
+
+    /** Groups each module's bus bits into vectors where they form one run of indices; the rest stay bits. */
+    private void declare(int[] dumped, BitSet latchNets) {
+        int[] netModule = machine.netlist().netModule();
+        Map<Integer, String> prefixes = new java.util.HashMap<>();
+        for (ModuleInstance mod : machine.modules()) {
+            prefixes.put(mod.id(), mod.path().isEmpty() ? "" : mod.path() + ".");
+        }
+        Map<String, TreeMap<Integer, Integer>> buses = new LinkedHashMap<>();
+        List<Object> order = new ArrayList<>();
+        for (int n : dumped) {
+            String local = local(n, prefixes);
+            Matcher mt = BUS_BIT.matcher(local);
+            if (mt.matches()) {
+                String key = netModule[n] + "/" + mt.group(1);
+                TreeMap<Integer, Integer> bits = buses.get(key);
+                if (bits == null) {
+                    bits = new TreeMap<>();
+                    buses.put(key, bits);
+                    order.add(key);
+                }
+                bits.put(Integer.parseInt(mt.group(2)), n);
+            } else {
+                order.add(n);
+            }
+        }
+        for (Object o : order) {
+            if (o instanceof Integer n) {
+                scalar(n, latchNets, netModule, prefixes);
+                continue;
+            }
+            TreeMap<Integer, Integer> bits = buses.get((String) o);
+            int lo = bits.firstKey();
+            int hi = bits.lastKey();
+            boolean latched = latchNets.get(bits.firstEntry().getValue());
+            boolean alike = true;
+            for (int n : bits.values()) {
+                alike &= latchNets.get(n) == latched;
+            }
+            if (bits.size() < 2 || hi - lo + 1 != bits.size() || !alike) {
+                bits.values().forEach(n -> scalar(n, latchNets, netModule, prefixes));
+                continue;
+            }
+            int first = bits.firstEntry().getValue();
+            String base = ((String) o).substring(((String) o).indexOf('/') + 1);
+            int[] lsbFirst = bits.values().stream().mapToInt(Integer::intValue).toArray();
+            vars.add(new Var(identifier(vars.size()), lsbFirst, latched, netModule[first],
+                    base + " [" + hi + ":" + lo + "]"));
+        }
+    }
+
+    private void scalar(int n, BitSet latchNets, int[] netModule, Map<Integer, String> prefixes) {
+        vars.add(new Var(identifier(vars.size()), new int[] {n}, latchNets.get(n), netModule[n],
+                reference(local(n, prefixes))));
+    }
+
+    /** The net's name within its module's scope ({@code prefixes}: each module's path and a dot, by id). */
+    private String local(int net, Map<Integer, String> prefixes) {
+        String name = machine.netlist().netName(net);
+        String prefix = prefixes.getOrDefault(machine.netlist().netModule(net), "");
+        return name.startsWith(prefix) ? name.substring(prefix.length()) : name;
+    }
+
+    /** The dump as a run observer on {@code sim}: header at the run's start, changes each phase, the end. */
+    public org.thermion.sim.run.RunObserver observer(Simulator sim, String date, String version) {
+        return new org.thermion.sim.run.RunObserver() {
+            @Override
+            public void begin(long cycle) {
+                VcdWriter.this.begin(sim, date, version);
+            }
+
+            @Override
+            public void phaseRan(long cycle, int phase) {
+                // Before any second settle: the dump stamps gate values at the phase's start.
+                afterPhase(sim, cycle, phase);
+            }
+
+            @Override
+            public void end(long cycles, org.thermion.sim.run.Halt halt) {
+                finish(cycles);
+            }
+        };
     }
 
     /** The nets {@code --vcd-all} dumps: every net except the constants and the elaborator's temporaries. */
@@ -98,17 +183,17 @@ public final class VcdWriter {
         sb.append("$version\n  ").append(version).append("\n$end\n");
         sb.append("$timescale 1 ").append(time.unit()).append(" $end\n");
         List<ModuleInstance> mods = machine.modules();
-        int[] netModule = machine.netlist().netModule();
+        Tree tree = new Tree();
         for (ModuleInstance top : mods) {
             if (top.parent() < 0) {
-                scope(sb, top, machine.name(), netModule, top == firstTop(mods));
+                scope(sb, tree, top, machine.name(), top == firstTop(mods));
             }
         }
         sb.append("$enddefinitions $end\n");
         sb.append("#0\n$dumpvars\n");
-        for (int i = 0; i < nets.length; i++) {
-            last[i] = OutputLog.level(sim, nets[i], lane);
-            sb.append(last[i]).append(ids[i]).append('\n');
+        for (int i = 0; i < last.length; i++) {
+            last[i] = value(sim, vars.get(i));
+            sb.append(text(vars.get(i), last[i])).append('\n');
         }
         if (withPc) {
             lastPc = pcBits(sim);
@@ -128,44 +213,48 @@ public final class VcdWriter {
         return null;
     }
 
-    private void scope(StringBuilder sb, ModuleInstance mod, String name, int[] netModule, boolean withPcHere) {
-        if (!hasVars(mod.id(), netModule) && !withPcHere) {
+    /** The module tree once: each module's variables and children, and whether anything is dumped under it. */
+    private final class Tree {
+        final Map<Integer, List<Var>> varsOf = new java.util.HashMap<>();
+        final Map<Integer, List<ModuleInstance>> children = new java.util.HashMap<>();
+        final java.util.Set<Integer> dumped = new java.util.HashSet<>();
+
+        Tree() {
+            for (Var v : vars) {
+                varsOf.computeIfAbsent(v.module(), k -> new ArrayList<>()).add(v);
+            }
+            Map<Integer, Integer> parent = new java.util.HashMap<>();
+            for (ModuleInstance m : machine.modules()) {
+                children.computeIfAbsent(m.parent(), k -> new ArrayList<>()).add(m);
+                parent.put(m.id(), m.parent());
+            }
+            for (Integer m : varsOf.keySet()) {
+                // Mark the module and its ancestors; stop where a mark already stands.
+                Integer p = m;
+                while (p != null && p >= 0 && dumped.add(p)) {
+                    p = parent.get(p);
+                }
+            }
+        }
+    }
+
+    private void scope(StringBuilder sb, Tree tree, ModuleInstance mod, String name, boolean withPcHere) {
+        if (!tree.dumped.contains(mod.id()) && !withPcHere) {
             return;
         }
         sb.append("$scope module ").append(name).append(" $end\n");
-        String prefix = mod.path().isEmpty() ? "" : mod.path() + ".";
-        String[] names = machine.netlist().netNames();
-        for (int i = 0; i < nets.length; i++) {
-            if (netModule[nets[i]] == mod.id()) {
-                String local = names[nets[i]].startsWith(prefix) ? names[nets[i]].substring(prefix.length())
-                        : names[nets[i]];
-                sb.append("$var wire 1 ").append(ids[i]).append(' ').append(reference(local)).append(" $end\n");
-            }
+        for (Var v : tree.varsOf.getOrDefault(mod.id(), List.of())) {
+            sb.append("$var wire ").append(v.nets().length).append(' ').append(v.id()).append(' ')
+                    .append(v.reference()).append(" $end\n");
         }
         if (withPcHere && withPc) {
             sb.append("$var reg ").append(machine.pc().width()).append(' ').append(pcId).append(" pc [")
                     .append(machine.pc().width() - 1).append(":0] $end\n");
         }
-        for (ModuleInstance child : machine.modules()) {
-            if (child.parent() == mod.id()) {
-                scope(sb, child, child.leaf(), netModule, false);
-            }
+        for (ModuleInstance child : tree.children.getOrDefault(mod.id(), List.of())) {
+            scope(sb, tree, child, child.leaf(), false);
         }
         sb.append("$upscope $end\n");
-    }
-
-    private boolean hasVars(int module, int[] netModule) {
-        for (int n : nets) {
-            if (netModule[n] == module) {
-                return true;
-            }
-        }
-        for (ModuleInstance child : machine.modules()) {
-            if (child.parent() == module && hasVars(child.id(), netModule)) {
-                return true;
-            }
-        }
-        return false;
     }
 
     /** A reference as IEEE 1364 writes it: {@code name}, {@code bus [3]}, or an escaped identifier. */
@@ -197,13 +286,13 @@ public final class VcdWriter {
         StringBuilder sb = new StringBuilder();
         long start = time.phaseStart(cycle, phase);
         long end = time.phaseEnd(cycle, phase);
-        for (int i = 0; i < nets.length; i++) {
-            if (!latched[i]) {
+        for (int i = 0; i < last.length; i++) {
+            if (!vars.get(i).latched()) {
                 change(sb, i, sim, start);
             }
         }
-        for (int i = 0; i < nets.length; i++) {
-            if (latched[i]) {
+        for (int i = 0; i < last.length; i++) {
+            if (vars.get(i).latched()) {
                 change(sb, i, sim, end);
             }
         }
@@ -219,12 +308,30 @@ public final class VcdWriter {
     }
 
     private void change(StringBuilder sb, int i, Simulator sim, long t) {
-        char v = OutputLog.level(sim, nets[i], lane);
-        if (v != last[i]) {
+        String v = value(sim, vars.get(i));
+        if (!v.equals(last[i])) {
             stamp(sb, t);
-            sb.append(v).append(ids[i]).append('\n');
+            sb.append(text(vars.get(i), v)).append('\n');
             last[i] = v;
         }
+    }
+
+    /** A variable's value: one level for a bit, the bits MSB first for a vector. */
+    private String value(Simulator sim, Var v) {
+        int[] nets = v.nets();
+        if (nets.length == 1) {
+            return String.valueOf(org.thermion.sim.run.LogicLane.level(sim, nets[0], lane));
+        }
+        char[] bits = new char[nets.length];
+        for (int b = 0; b < nets.length; b++) {
+            bits[nets.length - 1 - b] = org.thermion.sim.run.LogicLane.level(sim, nets[b], lane);
+        }
+        return new String(bits);
+    }
+
+    /** A value change as the dump writes it: {@code 1!} for a bit, {@code b0101 !} for a vector. */
+    private static String text(Var v, String value) {
+        return v.nets().length == 1 ? value + v.id() : "b" + value + " " + v.id();
     }
 
     private void stamp(StringBuilder sb, long t) {

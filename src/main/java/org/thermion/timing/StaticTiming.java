@@ -1,7 +1,6 @@
 package org.thermion.timing;
 
 import org.thermion.model.Gate;
-import org.thermion.model.GateFn;
 import org.thermion.model.Latch;
 import org.thermion.model.Machine;
 import org.thermion.model.ModuleInstance;
@@ -210,7 +209,7 @@ public final class StaticTiming {
                 int bestEdge = -1;
                 for (int in : g.inputs()) {
                     for (int edge = RISE; edge <= FALL; edge++) {
-                        if (!causes(g.fn(), edge, out)) {
+                        if (!g.fn().causes(edge == RISE, out == RISE)) {
                             continue;
                         }
                         double a = p.arr[edge][in];
@@ -229,15 +228,6 @@ public final class StaticTiming {
             }
         }
         return p;
-    }
-
-    /** True when an input edge can cause the output edge of a gate computing {@code fn}. */
-    static boolean causes(GateFn fn, int inEdge, int outEdge) {
-        return switch (fn) {
-            case NOT, NAND, NOR -> inEdge != outEdge;
-            case AND, OR, BUF -> inEdge == outEdge;
-            case XOR -> true;
-        };
     }
 
     private List<PathStep> path(Propagation p, int net, int edge) {

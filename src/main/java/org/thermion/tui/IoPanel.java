@@ -1,5 +1,7 @@
 package org.thermion.tui;
 
+import org.thermion.sim.OutputChange;
+
 import org.thermion.model.Port;
 
 import java.util.List;
@@ -54,8 +56,15 @@ final class IoPanel {
                 int row = in.row() + 1 + i;
                 String when = Canvas.padLeft(String.format("%,d", ch.cycle()), 9) + "." + ch.phase();
                 int x = cc.text(logCol, row, when + " ", Palette.DIM);
-                x = cc.text(x, row, String.valueOf(Glyphs.lamp(ch.level())), Palette.lamp(ch.level()));
-                cc.text(x + 1, row, Canvas.fit(ch.name(), in.right() - x - 1), Palette.TEXT);
+                if (ch.value().length() == 1) {
+                    Level l = Level.of(ch.value().charAt(0));
+                    x = cc.text(x, row, String.valueOf(Glyphs.lamp(l)), Palette.lamp(l));
+                    cc.text(x + 1, row, Canvas.fit(ch.output(), in.right() - x - 1), Palette.TEXT);
+                } else {
+                    // A bus of lamps changes as one number.
+                    String text = ch.output() + " = " + ch.value();
+                    cc.text(x, row, Canvas.fit(text, in.right() - x), Palette.TEXT);
+                }
             }
             if (changes.isEmpty()) {
                 cc.text(logCol, in.row() + 1, "none since reset", Palette.DIM);

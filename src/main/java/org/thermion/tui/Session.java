@@ -9,14 +9,18 @@ import org.thermion.power.CurrentMeter;
 import org.thermion.power.HeaterAnalysis;
 import org.thermion.power.TubeCount;
 import org.thermion.sim.InitMode;
+import org.thermion.sim.OutputChange;
 import org.thermion.sim.Simulator;
-import org.thermion.sim.compiled.Engine;
 import org.thermion.sim.Stimulus;
+import org.thermion.sim.compiled.Engine;
+import org.thermion.sim.run.Halt;
+import org.thermion.sim.run.LogicLane;
+import org.thermion.sim.run.OutputRecorder;
+import org.thermion.sim.run.RunDriver;
+import org.thermion.sim.run.RunObserver;
 
-import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Deque;
 import java.util.List;
 
 /**
@@ -34,35 +38,30 @@ public final class Session {
     private final Assembly assembly;
     private final Simulator sim;
     private final InitMode init;
-    private final Stimulus stimulus;
-    private Stimulus.Cursor stimulusCursor;
-    private final List<DecodeLine> decode;
+    private final RunDriver driver;
+    private final OutputRecorder outputLog;
+    private final List<DecodeLamp> decode;
     private final List<ModuleLoad> modules;
     private final HeaterAnalysis heaters;
     private final int[] listingIndexOfAddress;
     private final boolean[] breakpoints;
-    private final boolean[] inputs;
-    private final Level[] lastOutputs;
     private final int[] watched;
     /** Per watched net: known at some time since reset. A net never known is unset, not lost. */
     private final boolean[] everKnown;
-    private final Deque<OutputChange> changes = new ArrayDeque<>();
-    private CurrentMeter meter;
-    private long outputChangeCount;
+    private final CurrentMeter meter;
     private boolean running;
     private Stop stop;
 
     /**
      * A session on lane 0 of a new simulator. {@code stimulus} (null for none) sets inputs
-     * as cycles come; {@code decodeName} names the decode nets (see {@link DecodeLine}).
+     * as cycles come; {@code decodeName} names the decode nets (see {@link DecodeLamp}).
      */
     public Session(Machine machine, Assembly assembly, String decodeName, InitMode init, Stimulus stimulus) {
         this.machine = machine;
         this.assembly = assembly;
         this.init = init;
-        this.stimulus = stimulus;
         this.sim = Engine.DEFAULT.simulator(machine);
-        this.decode = DecodeLine.find(machine, decodeName);
+        this.decode = DecodeLamp.find(machine, decodeName);
         this.heaters = new HeaterAnalysis(machine);
         this.modules = ModuleLoad.of(machine, new TubeCount(machine), heaters);
         this.breakpoints = new boolean[Math.max(1, machine.rom().words())];
@@ -76,16 +75,27 @@ public final class Session {
                 listingIndexOfAddress[l.address()] = i;
             }
         }
-        this.inputs = new boolean[machine.inputs().size()];
-        this.lastOutputs = new Level[machine.outputs().size()];
         this.watched = watchedNets(machine, decode);
         this.everKnown = new boolean[watched.length];
+        this.meter = new CurrentMeter(machine);
+        LogicLane lane = new LogicLane(sim);
+        this.outputLog = new OutputRecorder(lane, machine, CHANGE_LOG);
+        this.driver = new RunDriver(lane, machine.inputs().size(), stimulus)
+                .breakpoints(pc -> pc >= 0 && pc < breakpoints.length && breakpoints[pc])
+                .observe(meter.observer(sim, LANE))
+                .observe(outputLog)
+                .observe(new RunObserver() {
+                    @Override
+                    public Halt cycleDone(long cycle, int pcStart) {
+                        return unknownStop() ? new Halt(Halt.Kind.OBSERVED, stop.detail()) : null;
+                    }
+                });
         sim.loadRom(assembly.words());
         reset();
     }
 
     /** Nets whose turning unknown stops a run: state bits, outputs, the jump request and the decode lines. */
-    private static int[] watchedNets(Machine m, List<DecodeLine> decode) {
+    private static int[] watchedNets(Machine m, List<DecodeLamp> decode) {
         List<Integer> nets = new ArrayList<>();
         m.isa().state().forEach(b -> nets.add(b.net()));
         for (Port p : m.outputs()) {
@@ -94,7 +104,7 @@ public final class Session {
         if (m.pc().jumpNet() >= 0) {
             nets.add(m.pc().jumpNet());
         }
-        for (DecodeLine d : decode) {
+        for (DecodeLamp d : decode) {
             nets.add(d.net());
         }
         return nets.stream().mapToInt(Integer::intValue).distinct().toArray();
@@ -106,21 +116,9 @@ public final class Session {
     public void reset() {
         running = false;
         sim.reset(init);
-        if (meter == null) {
-            meter = new CurrentMeter(machine);
-        } else {
-            meter.reset();
-        }
-        stimulusCursor = stimulus == null ? null : stimulus.cursor();
-        changes.clear();
-        outputChangeCount = 0;
-        applySchedule();
-        pushInputs();
-        sim.settle();
-        sample();
-        for (int i = 0; i < lastOutputs.length; i++) {
-            lastOutputs[i] = level(machine.outputs().get(i).net());
-        }
+        meter.reset();
+        driver.start();
+        meter.sample(sim, LANE);
         Arrays.fill(everKnown, false);
         lostKnowledge();
         stop = new Stop(Stop.Reason.RESET, "reset");
@@ -129,18 +127,18 @@ public final class Session {
     /** Runs the next clock phase. */
     public void stepPhase() {
         running = false;
-        phase();
-        sim.settle();
         stop = new Stop(Stop.Reason.STEPPED, "stepped one phase");
+        driver.stepPhase();
+        sim.settle();
         unknownStop();
     }
 
     /** Runs phases until the current cycle is complete (a whole cycle from a cycle boundary). */
     public void stepCycle() {
         running = false;
-        runOneCycle();
-        sim.settle();
         stop = new Stop(Stop.Reason.STEPPED, "stepped one cycle");
+        driver.run(1);
+        sim.settle();
         unknownStop();
     }
 
@@ -167,29 +165,18 @@ public final class Session {
         if (!running) {
             return 0;
         }
-        boolean threeValued = sim.threeValued();
-        long done = 0;
-        while (done < maxCycles) {
-            runOneCycle();
-            done++;
-            int pc = pc();
-            if (pc >= 0 && pc < breakpoints.length && breakpoints[pc]) {
-                running = false;
-                stop = new Stop(Stop.Reason.BREAKPOINT, "breakpoint at " + Hex.address(pc, machine));
-                break;
-            }
-            // Latches hold what the cycle loaded; gate nets still show the phase just run,
-            // which is where an unknown value was used, so no extra settle is needed here.
-            if (threeValued) {
-                if (unknownStop()) {
-                    running = false;
-                    break;
-                }
-            }
+        long before = sim.cycle();
+        Halt halt = driver.run(maxCycles);
+        if (halt.kind() == Halt.Kind.BREAKPOINT) {
+            running = false;
+            stop = new Stop(Stop.Reason.BREAKPOINT, "breakpoint at " + Hex.address(pc(), machine));
+        } else if (!halt.resumable()) {
+            // The unknown-value observer has said why.
+            running = false;
         }
         // Lamps show the logic settled on what the latches now hold.
         sim.settle();
-        return done;
+        return sim.cycle() - before;
     }
 
     /** After a step: if the PC or a watched net that was known went unknown, says so in the stop. */
@@ -229,8 +216,7 @@ public final class Session {
 
     /** Flips a switch and lets the logic settle so lamps and decode lines follow at once. */
     public void toggleInput(int index) {
-        inputs[index] = !inputs[index];
-        pushInputs();
+        driver.setInput(index, !driver.input(index));
         sim.settle();
     }
 
@@ -262,7 +248,7 @@ public final class Session {
         return meter;
     }
 
-    public List<DecodeLine> decodeLines() {
+    public List<DecodeLamp> decodeLines() {
         return decode;
     }
 
@@ -297,7 +283,7 @@ public final class Session {
     }
 
     public boolean input(int index) {
-        return inputs[index];
+        return driver.input(index);
     }
 
     public int pc() {
@@ -348,63 +334,11 @@ public final class Session {
 
     /** The most recent output changes, oldest first. */
     public List<OutputChange> outputChanges() {
-        return List.copyOf(changes);
+        return outputLog.changes();
     }
 
     /** Output changes since reset, including those the log no longer holds. */
     public long outputChangeCount() {
-        return outputChangeCount;
-    }
-
-    // ---- internals ------------------------------------------------------------------
-
-    private void runOneCycle() {
-        do {
-            phase();
-        } while (sim.nextPhase() != 1);
-    }
-
-    private void phase() {
-        if (sim.nextPhase() == 1 && applySchedule()) {
-            pushInputs();
-        }
-        sim.stepPhase();
-        sample();
-        noteOutputs();
-    }
-
-    /**
-     * Feeds the meter after a phase: gate outputs as they settled in it, latches as they
-     * loaded at its end, stamped with the phase just run (phase 0 before any ran).
-     */
-    private void sample() {
-        meter.sample(sim, LANE);
-    }
-
-    /** Applies stimulus rows due by the current cycle; true if an input changed. */
-    private boolean applySchedule() {
-        return stimulusCursor != null && stimulusCursor.advance(sim.cycle(), inputs);
-    }
-
-    private void pushInputs() {
-        for (int i = 0; i < inputs.length; i++) {
-            sim.setInput(i, inputs[i] ? -1L : 0L);
-        }
-    }
-
-    private void noteOutputs() {
-        for (int i = 0; i < lastOutputs.length; i++) {
-            Level now = level(machine.outputs().get(i).net());
-            if (now != lastOutputs[i]) {
-                lastOutputs[i] = now;
-                outputChangeCount++;
-                if (changes.size() == CHANGE_LOG) {
-                    changes.removeFirst();
-                }
-                int ran = sim.nextPhase() == 1 ? machine.clock().phases() : sim.nextPhase() - 1;
-                long cycle = sim.nextPhase() == 1 ? sim.cycle() - 1 : sim.cycle();
-                changes.addLast(new OutputChange(cycle, ran, machine.outputs().get(i).name(), now));
-            }
-        }
+        return outputLog.count();
     }
 }

@@ -32,11 +32,11 @@ public final class MutationRun {
 
     public MutationReport run(int count, long seed, Progress progress) {
         Mutator mut = new Mutator(machine);
-        List<Fault> faults = mut.choose(count, seed);
+        List<SeededFault> faults = mut.choose(count, seed);
         boolean[] observed = observedCone();
         List<MutantOutcome> outcomes = new ArrayList<>();
         int done = 0;
-        for (Fault f : faults) {
+        for (SeededFault f : faults) {
             String what = mut.describe(f);
             if (!observed[mut.site(f)]) {
                 // Nothing the check observes can see this net: no case can differ, no run needed.
@@ -56,7 +56,7 @@ public final class MutationRun {
                         String.format(java.util.Locale.ROOT, "%s word 0x%X: %s %s%s", c.mnemonic(), c.word(), c.item(),
                                 c.kind(), first)));
             } else if (!r.decodeOk()) {
-                DecodeLine d = r.decode().stream().filter(x -> !x.ok()).findFirst().orElseThrow();
+                DecodeVerdict d = r.decode().stream().filter(x -> !x.ok()).findFirst().orElseThrow();
                 outcomes.add(new MutantOutcome(what, MutantOutcome.Status.CAUGHT,
                         "decode lines: " + d.mnemonic() + ": " + d.problem().replaceFirst(" \\(word .*$", "")));
             } else if (!r.exhaustive()) {

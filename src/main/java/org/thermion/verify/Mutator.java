@@ -45,22 +45,22 @@ public final class Mutator {
     }
 
     /** Every fault this mutator can seed, in a fixed order. */
-    public List<Fault> sites() {
-        List<Fault> all = new ArrayList<>();
+    public List<SeededFault> sites() {
+        List<SeededFault> all = new ArrayList<>();
         for (Gate g : nl.gates()) {
             GateFn to = swapped(g.fn());
             if (to != null) {
-                all.add(new Fault.SwapFunction(g.id(), g.fn(), to));
+                all.add(new SeededFault.SwapFunction(g.id(), g.fn(), to));
             }
             for (int pin = 0; pin < g.arity(); pin++) {
                 int in = g.input(pin);
                 if (in <= Netlist.CONST1) {
                     continue;
                 }
-                all.add(new Fault.InvertInput(g.id(), pin));
+                all.add(new SeededFault.InvertInput(g.id(), pin));
                 for (int nb : neighbours(in)) {
                     if (driverGate[nb] < g.id()) {
-                        all.add(new Fault.MoveWire(g.id(), pin, in, nb));
+                        all.add(new SeededFault.MoveWire(g.id(), pin, in, nb));
                     }
                 }
             }
@@ -69,17 +69,17 @@ public final class Mutator {
             if (l.data() <= Netlist.CONST1) {
                 continue;
             }
-            all.add(new Fault.InvertLatchData(l.id()));
+            all.add(new SeededFault.InvertLatchData(l.id()));
             for (int nb : neighbours(l.data())) {
-                all.add(new Fault.MoveLatchData(l.id(), l.data(), nb));
+                all.add(new SeededFault.MoveLatchData(l.id(), l.data(), nb));
             }
         }
         return all;
     }
 
     /** {@code n} distinct faults chosen with a seeded shuffle (all of them when there are fewer). */
-    public List<Fault> choose(int n, long seed) {
-        List<Fault> all = new ArrayList<>(sites());
+    public List<SeededFault> choose(int n, long seed) {
+        List<SeededFault> all = new ArrayList<>(sites());
         Collections.shuffle(all, new Random(seed));
         return List.copyOf(all.subList(0, Math.min(n, all.size())));
     }
@@ -113,47 +113,47 @@ public final class Mutator {
     }
 
     /** What the fault does, in net names. */
-    public String describe(Fault f) {
-        if (f instanceof Fault.SwapFunction s) {
+    public String describe(SeededFault f) {
+        if (f instanceof SeededFault.SwapFunction s) {
             return "gate driving " + nl.netName(nl.gates().get(s.gate()).output()) + ": " + s.from() + " -> " + s.to();
         }
-        if (f instanceof Fault.InvertInput i) {
+        if (f instanceof SeededFault.InvertInput i) {
             Gate g = nl.gates().get(i.gate());
             return "gate driving " + nl.netName(g.output()) + ": input " + nl.netName(g.input(i.pin())) + " inverted";
         }
-        if (f instanceof Fault.MoveWire w) {
+        if (f instanceof SeededFault.MoveWire w) {
             Gate g = nl.gates().get(w.gate());
             return "gate driving " + nl.netName(g.output()) + ": input " + nl.netName(w.from()) + " wired to "
                     + nl.netName(w.to());
         }
-        if (f instanceof Fault.InvertLatchData i) {
+        if (f instanceof SeededFault.InvertLatchData i) {
             Latch l = nl.latches().get(i.latch());
             return "latch " + nl.netName(l.output()) + ": data " + nl.netName(l.data()) + " inverted";
         }
-        Fault.MoveLatchData w = (Fault.MoveLatchData) f;
+        SeededFault.MoveLatchData w = (SeededFault.MoveLatchData) f;
         Latch l = nl.latches().get(w.latch());
         return "latch " + nl.netName(l.output()) + ": data " + nl.netName(w.from()) + " wired to " + nl.netName(w.to());
     }
 
     /** The net whose value the fault changes first: the faulty gate's or latch's output. */
-    public int site(Fault f) {
-        if (f instanceof Fault.SwapFunction s) {
+    public int site(SeededFault f) {
+        if (f instanceof SeededFault.SwapFunction s) {
             return nl.gates().get(s.gate()).output();
         }
-        if (f instanceof Fault.InvertInput i) {
+        if (f instanceof SeededFault.InvertInput i) {
             return nl.gates().get(i.gate()).output();
         }
-        if (f instanceof Fault.MoveWire w) {
+        if (f instanceof SeededFault.MoveWire w) {
             return nl.gates().get(w.gate()).output();
         }
-        if (f instanceof Fault.InvertLatchData i) {
+        if (f instanceof SeededFault.InvertLatchData i) {
             return nl.latches().get(i.latch()).output();
         }
-        return nl.latches().get(((Fault.MoveLatchData) f).latch()).output();
+        return nl.latches().get(((SeededFault.MoveLatchData) f).latch()).output();
     }
 
     /** A copy of the machine with the fault in its netlist; the original nets keep their numbers. */
-    public Machine apply(Fault f) {
+    public Machine apply(SeededFault f) {
         List<String> names = new ArrayList<>(Arrays.asList(nl.netNames()));
         List<Integer> modules = new ArrayList<>();
         for (int m : nl.netModule()) {
@@ -165,10 +165,10 @@ public final class Mutator {
         for (int e : machine.gateEnvelope()) {
             envelope.add(e);
         }
-        if (f instanceof Fault.SwapFunction s) {
+        if (f instanceof SeededFault.SwapFunction s) {
             Gate g = gates.get(s.gate());
             gates.set(s.gate(), new Gate(g.id(), s.to(), g.inputs(), g.output(), g.stage(), g.module()));
-        } else if (f instanceof Fault.InvertInput i) {
+        } else if (f instanceof SeededFault.InvertInput i) {
             Gate g = gates.get(i.gate());
             int inv = addNet(names, modules, nl.netName(g.input(i.pin())) + "~", g.module());
             int[] ins = g.inputs().clone();
@@ -177,18 +177,18 @@ public final class Mutator {
             gates.set(i.gate(), new Gate(g.id(), g.fn(), ins, g.output(), g.stage(), g.module()));
             gates.add(i.gate(), not);
             envelope.add(Math.min(i.gate(), envelope.size()), -1);
-        } else if (f instanceof Fault.MoveWire w) {
+        } else if (f instanceof SeededFault.MoveWire w) {
             Gate g = gates.get(w.gate());
             int[] ins = g.inputs().clone();
             ins[w.pin()] = w.to();
             gates.set(w.gate(), new Gate(g.id(), g.fn(), ins, g.output(), g.stage(), g.module()));
-        } else if (f instanceof Fault.InvertLatchData i) {
+        } else if (f instanceof SeededFault.InvertLatchData i) {
             Latch l = latches.get(i.latch());
             int inv = addNet(names, modules, nl.netName(l.data()) + "~", l.module());
             gates.add(new Gate(-1, GateFn.NOT, new int[]{l.data()}, inv, -1, l.module()));
             envelope.add(-1);
             latches.set(i.latch(), new Latch(l.id(), inv, l.enable(), l.output(), l.phase(), l.stage(), l.module()));
-        } else if (f instanceof Fault.MoveLatchData w) {
+        } else if (f instanceof SeededFault.MoveLatchData w) {
             Latch l = latches.get(w.latch());
             latches.set(w.latch(), new Latch(l.id(), w.to(), l.enable(), l.output(), l.phase(), l.stage(), l.module()));
         }

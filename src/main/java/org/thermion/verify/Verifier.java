@@ -93,7 +93,7 @@ public final class Verifier {
     private final Machine machine;
     private final Isa isa;
     private final Options opt;
-    private final LogicRun logic;
+    private final BatchRun logic;
     private final IsaLanes lanes;
     private final int stateBits;
     private final int inputBits;
@@ -112,7 +112,7 @@ public final class Verifier {
             throw new IllegalArgumentException("machine '" + machine.name() + "' needs a rom and a pc to run instructions");
         }
         this.opt = options;
-        this.logic = new LogicRun(machine);
+        this.logic = new BatchRun(machine);
         this.lanes = new IsaLanes(isa);
         this.stateBits = isa.state().size();
         this.inputBits = machine.inputs().size();
@@ -178,7 +178,7 @@ public final class Verifier {
             long count = exhaustive ? casesOf(k) : perInstruction;
             for (long c0 = 0; c0 < count; c0 += 64) {
                 Batch b = exhaustive ? exhaustiveBatch(k, c0, count) : sampleBatch(k, c0);
-                LogicRun.Result r = logic.run(b, false);
+                BatchRun.Result r = logic.run(b, false);
                 compare(k, b, c0, r, groups);
                 checkDecode(decode[k], b, plans.get(k).instruction().body().isEmpty());
                 done += Long.bitCount(b.valid);
@@ -190,7 +190,7 @@ public final class Verifier {
                 }
             }
         }
-        List<DecodeLine> lines = decodeLines(decode);
+        List<DecodeVerdict> lines = decodeLines(decode);
         List<Counterexample> ces = new ArrayList<>();
         for (Group g : groups.values()) {
             ces.add(diagnose(g));
@@ -320,7 +320,7 @@ public final class Verifier {
     }
 
     /** Lanes where item (a state bit index, or stateBits for the PC) is wrong. */
-    private long wrong(Batch b, IsaLanes.Expected e, LogicRun.Result r, int item) {
+    private long wrong(Batch b, IsaLanes.Expected e, BatchRun.Result r, int item) {
         if (item < stateBits) {
             return (r.state[item] ^ e.state()[item]) & b.valid;
         }
@@ -333,7 +333,7 @@ public final class Verifier {
         return bad;
     }
 
-    private void compare(int k, Batch b, long c0, LogicRun.Result r, Map<Long, Group> groups) {
+    private void compare(int k, Batch b, long c0, BatchRun.Result r, Map<Long, Group> groups) {
         IsaLanes.Expected e = expected(b);
         for (int item = 0; item <= stateBits; item++) {
             long bad = wrong(b, e, r, item);
@@ -408,8 +408,8 @@ public final class Verifier {
         }
     }
 
-    private List<DecodeLine> decodeLines(DecodeState[] decode) {
-        List<DecodeLine> out = new ArrayList<>();
+    private List<DecodeVerdict> decodeLines(DecodeState[] decode) {
+        List<DecodeVerdict> out = new ArrayList<>();
         if (lineNets.length == 0) {
             return out;
         }
@@ -417,7 +417,7 @@ public final class Verifier {
             Instruction ins = plans.get(k).instruction();
             DecodeState d = decode[k];
             if (d == null) {
-                out.add(new DecodeLine(ins.mnemonic(), ins.opcode(), null, "not run"));
+                out.add(new DecodeVerdict(ins.mnemonic(), ins.opcode(), null, "not run"));
                 continue;
             }
             String problem = d.problem;
@@ -429,10 +429,10 @@ public final class Verifier {
                 }
             }
             if (problem == null && d.line < 0) {
-                out.add(new DecodeLine(ins.mnemonic(), ins.opcode(), "(none: does nothing)", null));
+                out.add(new DecodeVerdict(ins.mnemonic(), ins.opcode(), "(none: does nothing)", null));
                 continue;
             }
-            out.add(new DecodeLine(ins.mnemonic(), ins.opcode(), problem == null ? lineNames[d.line] : null, problem));
+            out.add(new DecodeVerdict(ins.mnemonic(), ins.opcode(), problem == null ? lineNames[d.line] : null, problem));
         }
         return List.copyOf(out);
     }
@@ -444,7 +444,7 @@ public final class Verifier {
         int lane = g.lane;
         OperandPlan plan = plans.get(g.instruction);
         Instruction ins = plan.instruction();
-        LogicRun.Result r = logic.run(b, true);
+        BatchRun.Result r = logic.run(b, true);
         IsaLanes.Expected e = expected(b);
         String item = g.item < stateBits ? isa.state().get(g.item).name() : "pc";
         String kind;
@@ -505,8 +505,8 @@ public final class Verifier {
         String compared;
         List<NetDiff> nets;
         if (opt.reference() != null) {
-            LogicRun ref = new LogicRun(opt.reference());
-            LogicRun.Result rr = ref.run(b, true);
+            BatchRun ref = new BatchRun(opt.reference());
+            BatchRun.Result rr = ref.run(b, true);
             compared = "the unmutated logic, same case";
             nets = firstDifferences(r, rr, lane, lane, opt.reference().netlist().netCount(), null, 0);
         } else {
@@ -526,7 +526,7 @@ public final class Verifier {
                 trace(pins, r.atPhase[phase], lane));
     }
 
-    private record Neighbour(LogicRun.Result result, int lane, String change) {
+    private record Neighbour(BatchRun.Result result, int lane, String change) {
     }
 
     /**
@@ -559,7 +559,7 @@ public final class Verifier {
             change.add(String.format(Locale.ROOT, "word 0x%X", nb.word(next)));
             next++;
         }
-        LogicRun.Result r = logic.run(nb, true);
+        BatchRun.Result r = logic.run(nb, true);
         IsaLanes.Expected e = expected(nb);
         long bad = wrong(nb, e, r, item);
         long good = nb.valid & ~bad & ~1L;
@@ -654,7 +654,7 @@ public final class Verifier {
      * lane {@code lb} of {@code b} differ; only nets below {@code netLimit} and in {@code only},
      * and only at {@code onlyPhase} unless it is 0.
      */
-    private List<NetDiff> firstDifferences(LogicRun.Result a, LogicRun.Result b, int la, int lb, int netLimit,
+    private List<NetDiff> firstDifferences(BatchRun.Result a, BatchRun.Result b, int la, int lb, int netLimit,
                                            boolean[] only, int onlyPhase) {
         Netlist nl = machine.netlist();
         int[] order = levelOrder(nl);

@@ -11,11 +11,11 @@ import java.util.List;
  * @param notes        remarks such as opcodes no instruction claims (not checked)
  */
 public record VerifyReport(String machine, long cases, boolean exhaustive, long seed, List<String> plans,
-                           String decodeName, List<DecodeLine> decode, List<Counterexample> counterexamples,
+                           String decodeName, List<DecodeVerdict> decode, List<Counterexample> counterexamples,
                            List<String> notes) {
 
     public boolean decodeOk() {
-        return decode.stream().allMatch(DecodeLine::ok);
+        return decode.stream().allMatch(DecodeVerdict::ok);
     }
 
     public boolean passes() {

@@ -158,4 +158,37 @@ class PowerUpCommandTest {
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("bad.machine:1:").doesNotContain("Exception");
     }
+
+    @Test
+    void extremeTimesAndResistorsAreRefusedInWords() throws IOException {
+        Path m = inverters();
+        for (String[] args : new String[][] {
+                {"--time", "1e-300s"}, {"--time", "1e-9s"}, {"--time", "NaNs"}, {"--time", "2h"},
+                {"--resistor", "1e400ohm"}, {"--resistor", "1e300ohm"}, {"--resistor", "NaNohm"},
+                {"--sweep", "0ohm..1e300ohm:1e299ohm"}}) {
+            Run r = run("powerup", m.toString(), args[0], args[1], "--no-plot");
+            assertThat(r.code()).as(String.join(" ", args)).isEqualTo(2);
+            assertThat(r.err()).as(String.join(" ", args)).startsWith("error: ").doesNotContain("Exception")
+                    .doesNotContain("internal error");
+        }
+    }
+
+    @Test
+    void anInfiniteResistorInTheDescriptionIsNamedNotAnInternalError() throws IOException {
+        // Whatever the reader lets through, the power-up model names the part it cannot solve.
+        Path m = inverters();
+        Files.writeString(m, Files.readString(m).replace("resistor 5 ohm", "resistor 1e400 ohm"));
+        Run r = run("powerup", m.toString(), "--no-plot");
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("error: ").contains("resistor").doesNotContain("internal error");
+    }
+
+    @Test
+    void aHeaterRailOfAbsurdVoltageIsReportedAtTheHeater() throws IOException {
+        Path m = inverters();
+        Files.writeString(m, Files.readString(m).replace("voltage 24 V; source 0.05 ohm", "voltage 1e300 V; source 0.05 ohm").replace("limit 40 A", "limit 1e300 A"));
+        Run r = run("powerup", m.toString(), "--no-plot");
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("error: ").doesNotContain("internal error").containsAnyOf("heater of 6AU6", "rail heat");
+    }
 }

@@ -123,12 +123,30 @@ class RunCommandTest {
         Outcome o = run("run", "examples/decoder-board/decoder-board.machine", "--inputs", stim.toString(),
                 "--format", "csv");
         assertThat(o.code()).as(o.err()).isZero();
-        // The code latch loads at the end of phase 1; the decoded lamp follows in that same phase.
-        assertThat(o.out()).contains("changes,0,1,lamp[5],1\r\n", "changes,3,1,lamp[5],0\r\n",
-                "changes,3,1,lamp[6],1\r\n");
+        // The code latch loads at the end of phase 1; the decoded lamp follows in that same phase. The eight
+        // lamps are one output bus, shown as one number: lamp 5 alone is 0x20, lamp 6 alone 0x40.
+        assertThat(o.out()).contains("changes,0,1,lamp,0x20\r\n", "changes,3,1,lamp,0x40\r\n");
         // Code 7 in cycle 6 comes while load is 0: nothing changes, and the board is at a fixed point.
-        assertThat(o.out()).doesNotContainPattern("changes,[0-9]+,[0-9]+,lamp\\[7\\]").contains("report,cycles,7,", "report,stop,fixed point:");
+        assertThat(o.out()).doesNotContain("0x80").contains("report,cycles,7,", "report,stop,fixed point:");
         assertThat(run("run", MACHINE).err()).contains("has a ROM: name the PROGRAM to run");
+    }
+
+    @Test
+    void thePcAndABusAreWatchedAsNumbersOnBothLevels() {
+        for (String level : new String[] {"logic", "isa"}) {
+            Outcome o = run("run", MACHINE, "programs/pump.asm", "--cycles", "3", "--watch", "pc,acc", "--format", "csv",
+                    "--level", level);
+            assertThat(o.code()).as(o.err()).isZero();
+            // The pump program starts at address 0 and runs straight on for its first cycles: the PC
+            // after cycle c is c + 1, written as the demo's 8-bit PC in two hex digits.
+            // (the table's own pc column is the instruction each cycle ran: c)
+            assertThat(o.out()).as(level).contains("watch,0,0,pc,0x01\r\n", "watch,1,1,pc,0x02\r\n",
+                    "watch,2,2,pc,0x03\r\n");
+        }
+        Outcome bus = run("run", MACHINE, "programs/pump.asm", "--cycles", "3", "--watch", "line", "--format", "csv");
+        assertThat(bus.code()).as(bus.err()).isZero();
+        // The 16 decode lines as one number, four hex digits, one line up in every cycle.
+        assertThat(bus.out()).containsPattern("watch,0,0,line,0x[0-9a-f]{4}\r\n").doesNotContain("line[");
     }
 
     @Test

@@ -30,7 +30,7 @@ class BoundsPropertyTest {
             for (int i = 0; i < rom.length; i++) {
                 rom[i] = rnd.nextLong() & ((1L << m.rom().width()) - 1);
             }
-            CurrentMeter meter = ProgramRun.run(m, rom, null, 150, new InitMode.Random(seed));
+            CurrentMeter meter = CurrentMeter.ofRun(m, rom, null, 150, new InitMode.Random(seed));
             Budget b = new Budget(m, meter);
             String where = "seed " + seed;
             for (int r = 0; r < m.rails().size(); r++) {

@@ -11,13 +11,13 @@ import java.io.StringWriter;
 import java.nio.file.Path;
 
 /** Machines for the simulator tests: the demo from disk, small ones from text. */
-final class Machines {
-    static final Path DEMO = Path.of("examples", "pumpstation", "pumpstation.machine");
+public final class Machines {
+    public static final Path DEMO = Path.of("examples", "pumpstation", "pumpstation.machine");
 
     private Machines() {
     }
 
-    static Machine demo() {
+    public static Machine demo() {
         SourceSet src = new SourceSet();
         Diagnostics d = new Diagnostics();
         Machine m = new Elaborator(src, d).elaborate(DEMO);
@@ -45,7 +45,7 @@ final class Machines {
             """;
 
     /** Elaborates a small machine written after {@link #PRELUDE}. */
-    static Machine fromText(String text) {
+    public static Machine fromText(String text) {
         SourceSet src = new SourceSet();
         Diagnostics d = new Diagnostics();
         Machine m = new Elaborator(src, d).elaborateText(Path.of("test.machine"), PRELUDE + text);
@@ -62,7 +62,7 @@ final class Machines {
     }
 
     /** Index of the net with this name. */
-    static int net(Machine m, String name) {
+    public static int net(Machine m, String name) {
         String[] names = m.netlist().netNames();
         for (int i = 0; i < names.length; i++) {
             if (names[i].equals(name)) {
@@ -73,7 +73,7 @@ final class Machines {
     }
 
     /** The demo's instruction word: opcode in bits 11..8, operand in 7..0 (its header comment). */
-    static long word(int opcode, int operand) {
+    public static long word(int opcode, int operand) {
         return ((long) opcode << 8) | operand;
     }
 }

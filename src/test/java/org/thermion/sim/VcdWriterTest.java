@@ -45,16 +45,23 @@ class VcdWriterTest {
         // ST runs in cycle 1; its execute phase (2) spans 150..200 us and pump loads at 200 us.
         assertThat(r.at("pumpstation.pump", 199)).isEqualTo("0");
         assertThat(r.at("pumpstation.pump", 200)).isEqualTo("1");
-        // line[3] (ST decoded) is up during that phase: from 150 us until the next IR load settles at 250 us.
-        assertThat(r.at("pumpstation.line[3]", 149)).isEqualTo("0");
-        assertThat(r.at("pumpstation.line[3]", 150)).isEqualTo("1");
-        assertThat(r.at("pumpstation.line[3]", 250)).isEqualTo("0");
+        // The decode bus is one 16-bit vector (IEEE 1364 $var wire 16 ... line [15:0]); line[3] (ST decoded)
+        // is up during that phase: from 150 us until the next IR load settles at 250 us.
+        String line = "pumpstation.line[15:0]";
+        assertThat(r.widths.get(r.vars.get(line))).isEqualTo(16);
+        assertThat(bit(r.at(line, 149), 3)).isEqualTo('0');
+        assertThat(r.at(line, 150)).isEqualTo("0000000000001000");
+        assertThat(bit(r.at(line, 250), 3)).isEqualTo('0');
         // The PC: 1 after cycle 0 (100 us), 2 after cycle 1, stays 2 (JMP 2).
         assertThat(r.at("pumpstation.pc[7:0]", 100)).isEqualTo("00000001");
         assertThat(r.at("pumpstation.pc[7:0]", 399)).isEqualTo("00000010");
         // Nets of a module instance sit in its scope with the local name.
         String inner = innerBusBit(m);
-        assertThat(r.vars).containsKey("pumpstation.lu.inv").containsKey("pumpstation." + inner);
+        String innerBus = inner.substring(0, inner.lastIndexOf('['));
+        assertThat(r.vars).containsKey("pumpstation.lu.inv");
+        assertThat(r.vars.keySet()).anyMatch(k -> k.startsWith("pumpstation." + innerBus + "[") && k.endsWith(":0]"));
+        // No bus bit is left declared alone when its whole bus is dumped.
+        assertThat(r.vars.keySet()).noneMatch(k -> k.matches(".*\\[\\d+]"));
         assertThat(r.vars.keySet()).noneMatch(k -> k.contains("$"));
         assertThat(r.lastTime).isEqualTo(400);
     }
@@ -87,6 +94,27 @@ class VcdWriterTest {
         assertThat(r.at("pumpstation.ir[0]", 0)).isEqualTo("x");
         // NOP's word loads at the end of phase 1.
         assertThat(r.at("pumpstation.ir[0]", 50)).isEqualTo("0");
+    }
+
+    @Test
+    void aBusIsOneVectorWhoseBitsAreTheNetsValues() {
+        Machine m = Machines.demo();
+        // 0: LDN 6   1: ST pump   2: JMP 2; ir is the instruction register, loaded in phase 1.
+        long[] rom = {word(0x2, 6), word(0x3, 8), word(0xD, 2)};
+        List<Integer> ir = new NetLookup(m).resolve("ir");
+        String text = dump(m, rom, ir, 3, false);
+        assertThat(text).containsPattern("\\$var wire " + ir.size() + " \\S+ ir \\[" + (ir.size() - 1) + ":0] \\$end");
+        VcdReader r = new VcdReader(text);
+        String path = "pumpstation.ir[" + (ir.size() - 1) + ":0]";
+        // After phase 1 of cycle c (50 us + 100 us c) ir holds word c; MSB first in the dump.
+        for (int c = 0; c < 3; c++) {
+            String expected = Long.toBinaryString((1L << ir.size()) | rom[c]).substring(1);
+            assertThat(r.at(path, 50 + 100L * c)).as("cycle %d", c).isEqualTo(expected);
+        }
+    }
+
+    private static char bit(String msbFirst, int k) {
+        return msbFirst.charAt(msbFirst.length() - 1 - k);
     }
 
     @Test

@@ -6,6 +6,11 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 
 import java.io.IOException;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -194,14 +199,91 @@ class KeyHandlingTest {
     @Test
     void helpListsEveryKeyTheKeymapResolves() {
         String help = Keymap.help(java.util.List.of("a", "b")).toString();
-        for (Command c : Command.values()) {
-            if (c == Command.TOGGLE_INPUT) {
-                assertThat(help).contains("flip switch a").contains("flip switch b");
-            }
-        }
+        assertThat(help).contains("flip switch a").contains("flip switch b");
         for (String key : new String[] {"p", "c  Enter", "Space  g", "r", "b", "B", "Up Down  k j",
             "PgUp PgDn Home End", ".", "w", "[ ]  Left Right", "?  h  F1", "Esc", "q  Ctrl-C"}) {
             assertThat(help).contains("keys=" + key + ",");
         }
+    }
+
+    @Test
+    void endOfInputQuits() throws IOException {
+        f.press(KeyType.EOF);
+        assertThat(f.ui.quitRequested()).isTrue();
+    }
+
+    /**
+     * Every key the keymap knows, written out here, with its command. A key added to the keymap
+     * without a line here fails {@link #everyKeyTheKeymapResolvesIsInTheTable}.
+     */
+    private static final Map<String, Command> KEYS = Map.ofEntries(
+            Map.entry("p", Command.STEP_PHASE),
+            Map.entry("c", Command.STEP_CYCLE), Map.entry("Enter", Command.STEP_CYCLE),
+            Map.entry(" ", Command.RUN_PAUSE), Map.entry("g", Command.RUN_PAUSE),
+            Map.entry("r", Command.RESET),
+            Map.entry("b", Command.BREAKPOINT), Map.entry("B", Command.CLEAR_BREAKPOINTS),
+            Map.entry("k", Command.CURSOR_UP), Map.entry("ArrowUp", Command.CURSOR_UP),
+            Map.entry("j", Command.CURSOR_DOWN), Map.entry("ArrowDown", Command.CURSOR_DOWN),
+            Map.entry("PageUp", Command.PAGE_UP), Map.entry("PageDown", Command.PAGE_DOWN),
+            Map.entry("Home", Command.FIRST_LINE), Map.entry("End", Command.LAST_LINE),
+            Map.entry(".", Command.CURSOR_TO_PC),
+            Map.entry("w", Command.POWER_UP_VIEW),
+            Map.entry("]", Command.NEXT_RAIL), Map.entry("ArrowRight", Command.NEXT_RAIL),
+            Map.entry("[", Command.PREVIOUS_RAIL), Map.entry("ArrowLeft", Command.PREVIOUS_RAIL),
+            Map.entry("?", Command.HELP), Map.entry("h", Command.HELP), Map.entry("F1", Command.HELP),
+            Map.entry("Escape", Command.CLOSE),
+            Map.entry("q", Command.QUIT), Map.entry("Ctrl-c", Command.QUIT), Map.entry("EOF", Command.QUIT));
+
+    /** The switch keys: the digits, then the shifted digits of a US keyboard, in input order. */
+    private static final String SWITCHES = "1234567890!@#$%^&*()";
+
+    private static KeyStroke stroke(String key) {
+        if (key.equals("Ctrl-c")) {
+            return new KeyStroke('c', true, false);
+        }
+        if (key.length() == 1) {
+            return new KeyStroke(key.charAt(0), false, false);
+        }
+        return new KeyStroke(KeyType.valueOf(key));
+    }
+
+    @Test
+    void eachKeyOfTheTableResolvesToItsCommand() {
+        for (Map.Entry<String, Command> e : KEYS.entrySet()) {
+            Key k = Keymap.resolve(stroke(e.getKey()), 6);
+            assertThat(k).as("key '%s'", e.getKey()).isNotNull();
+            assertThat(k.command()).as("key '%s'", e.getKey()).isEqualTo(e.getValue());
+        }
+        for (int i = 0; i < SWITCHES.length(); i++) {
+            Key k = Keymap.resolve(stroke(String.valueOf(SWITCHES.charAt(i))), SWITCHES.length());
+            assertThat(k).isEqualTo(new Key(Command.TOGGLE_INPUT, i));
+            // A switch key past the machine's inputs does nothing.
+            assertThat(Keymap.resolve(stroke(String.valueOf(SWITCHES.charAt(i))), i)).isNull();
+        }
+    }
+
+    @Test
+    void everyKeyTheKeymapResolvesIsInTheTable() {
+        List<String> unlisted = new ArrayList<>();
+        for (char c = 32; c < 127; c++) {
+            String key = String.valueOf(c);
+            if (Keymap.resolve(stroke(key), SWITCHES.length()) != null && !KEYS.containsKey(key)
+                    && SWITCHES.indexOf(c) < 0) {
+                unlisted.add(key);
+            }
+            if (Keymap.resolve(new KeyStroke(c, true, false), 0) != null && c != 'c' && c != 'C') {
+                unlisted.add("Ctrl-" + c);
+            }
+        }
+        for (KeyType t : KeyType.values()) {
+            if (t != KeyType.Character && Keymap.resolve(new KeyStroke(t), 0) != null && !KEYS.containsKey(t.name())) {
+                unlisted.add(t.name());
+            }
+        }
+        assertThat(unlisted).as("keys without a line in KEYS").isEmpty();
+        // Every command is reached by some key.
+        Set<Command> reached = EnumSet.of(Command.TOGGLE_INPUT);
+        reached.addAll(KEYS.values());
+        assertThat(reached).containsExactlyInAnyOrder(Command.values());
     }
 }

@@ -2,6 +2,7 @@ package org.thermion.tui;
 
 import org.junit.jupiter.api.Test;
 import org.thermion.sim.InitMode;
+import org.thermion.sim.OutputChange;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -33,7 +34,7 @@ class SessionTest {
         assertThat(s.pc()).isEqualTo(6);
         assertThat(s.cycle()).isEqualTo(6);
         // The pump latch loads at the end of phase 2 of cycle 5 (0-based), the ST pump cycle.
-        assertThat(s.outputChanges()).containsExactly(new OutputChange(5, 2, "pump", Level.ON));
+        assertThat(s.outputChanges()).containsExactly(new OutputChange(5, 2, "pump", "1"));
     }
 
     @Test
@@ -44,9 +45,9 @@ class SessionTest {
         assertThat(s.midCycle()).isTrue();
         assertThat(s.cycle()).isZero();
         assertThat(s.instructionAtPc().mnemonic()).isEqualTo("LDN");
-        DecodeLine ldn = s.decodeLines().stream().filter(d -> d.mnemonic().equals("LDN")).findFirst().orElseThrow();
+        DecodeLamp ldn = s.decodeLines().stream().filter(d -> d.mnemonic().equals("LDN")).findFirst().orElseThrow();
         assertThat(s.level(ldn.net())).isEqualTo(Level.ON);
-        for (DecodeLine d : s.decodeLines()) {
+        for (DecodeLamp d : s.decodeLines()) {
             if (d != ldn) {
                 assertThat(s.level(d.net())).as(d.mnemonic()).isEqualTo(Level.OFF);
             }
@@ -148,9 +149,9 @@ class SessionTest {
         assertThat(s.decodeLines()).hasSize(16);
         assertThat(s.decodeLines().get(0).mnemonic()).isEqualTo("NOP");
         assertThat(s.decodeLines().get(13).mnemonic()).isEqualTo("JMP");
-        for (DecodeLine d : s.decodeLines()) {
+        for (DecodeLamp d : s.decodeLines()) {
             assertThat(s.machine().netlist().netName(d.net())).isEqualTo("line[" + d.opcode() + "]");
         }
-        assertThat(DecodeLine.find(s.machine(), "no_such_net")).isEmpty();
+        assertThat(DecodeLamp.find(s.machine(), "no_such_net")).isEmpty();
     }
 }

@@ -80,7 +80,7 @@ final class UiFixture {
     }
 
     static Session session(InitMode init) {
-        return new Session(Demo.MACHINE, Demo.PUMP, DecodeLine.DEFAULT_NAME, init, null);
+        return new Session(Demo.MACHINE, Demo.PUMP, DecodeLamp.DEFAULT_NAME, init, null);
     }
 
     /** Presses each character of {@code keys} in turn, then draws. */

@@ -20,14 +20,14 @@ class MutationTest {
     void mutantsAreNewMachinesAndTheOriginalStaysAsItWas() {
         Machine m = VerifyMachines.tiny();
         Mutator mut = new Mutator(m);
-        List<Fault> sites = mut.sites();
-        assertThat(sites).hasAtLeastOneElementOfType(Fault.SwapFunction.class)
-                .hasAtLeastOneElementOfType(Fault.InvertInput.class)
-                .hasAtLeastOneElementOfType(Fault.MoveWire.class)
-                .hasAtLeastOneElementOfType(Fault.InvertLatchData.class)
-                .hasAtLeastOneElementOfType(Fault.MoveLatchData.class);
+        List<SeededFault> sites = mut.sites();
+        assertThat(sites).hasAtLeastOneElementOfType(SeededFault.SwapFunction.class)
+                .hasAtLeastOneElementOfType(SeededFault.InvertInput.class)
+                .hasAtLeastOneElementOfType(SeededFault.MoveWire.class)
+                .hasAtLeastOneElementOfType(SeededFault.InvertLatchData.class)
+                .hasAtLeastOneElementOfType(SeededFault.MoveLatchData.class);
         int gates = m.netlist().gates().size();
-        Fault.InvertInput inv = sites.stream().filter(f -> f instanceof Fault.InvertInput).map(f -> (Fault.InvertInput) f)
+        SeededFault.InvertInput inv = sites.stream().filter(f -> f instanceof SeededFault.InvertInput).map(f -> (SeededFault.InvertInput) f)
                 .findFirst().orElseThrow();
         Machine x = mut.apply(inv);
         assertThat(x.netlist().gates()).hasSize(gates + 1);
@@ -36,7 +36,7 @@ class MutationTest {
         for (int i = 0; i < x.netlist().gates().size(); i++) {
             assertThat(x.netlist().gates().get(i).id()).isEqualTo(i);
         }
-        Fault.SwapFunction sw = sites.stream().filter(f -> f instanceof Fault.SwapFunction).map(f -> (Fault.SwapFunction) f)
+        SeededFault.SwapFunction sw = sites.stream().filter(f -> f instanceof SeededFault.SwapFunction).map(f -> (SeededFault.SwapFunction) f)
                 .findFirst().orElseThrow();
         Machine y = mut.apply(sw);
         assertThat(y.netlist().gates().get(sw.gate()).fn()).isEqualTo(sw.to());
@@ -56,7 +56,7 @@ class MutationTest {
         assertThat(r.caught()).isGreaterThan(all / 2);
         // Each mutant called equivalent must really agree with the ISA: checked here with the
         // scalar ISA interpreter against the simulator lane by lane on seeded random cases.
-        List<Fault> faults = mut.choose(all, 1);
+        List<SeededFault> faults = mut.choose(all, 1);
         int caughtAndDiffering = 0;
         for (int i = 0; i < all; i++) {
             MutantOutcome o = r.outcomes().get(i);
@@ -77,7 +77,7 @@ class MutationTest {
         // The gate driving line[2] (opcode 2 decode) turned from AND into OR.
         int line2 = m.netlist().gates().stream().filter(g -> m.netlist().netName(g.output()).equals("line[2]"))
                 .findFirst().orElseThrow().id();
-        Fault f = new Fault.SwapFunction(line2, GateFn.AND, GateFn.OR);
+        SeededFault f = new SeededFault.SwapFunction(line2, GateFn.AND, GateFn.OR);
         Verifier.Options o = Verifier.Options.defaults().withReference(m, false);
         VerifyReport r = new Verifier(mut.apply(f), o).run();
         assertThat(r.passes()).isFalse();
@@ -97,7 +97,7 @@ class MutationTest {
         assertThat(r.caught()).isPositive();
         System.out.printf("demo fault seeding, seed 11: %d of %d mutants caught, %d equivalent%n", r.caught(),
                 r.outcomes().size(), r.equivalent());
-        List<Fault> faults = new Mutator(m).choose(10, 11);
+        List<SeededFault> faults = new Mutator(m).choose(10, 11);
         for (int i = 0; i < faults.size(); i++) {
             if (r.outcomes().get(i).status() != MutantOutcome.Status.CAUGHT) {
                 assertThat(differsFromIsa(new Mutator(m).apply(faults.get(i)), 2000, 5)).as(r.outcomes().get(i).fault())

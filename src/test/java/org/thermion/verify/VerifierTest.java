@@ -22,7 +22,7 @@ class VerifierTest {
         assertThat(r.cases()).isEqualTo(896);
         assertThat(r.exhaustive()).isTrue();
         assertThat(r.counterexamples()).isEmpty();
-        assertThat(r.decode()).extracting(DecodeLine::net).containsExactly("line[0]", "line[1]", "line[2]", "line[3]");
+        assertThat(r.decode()).extracting(DecodeVerdict::net).containsExactly("line[0]", "line[1]", "line[2]", "line[3]");
         assertThat(r.passes()).isTrue();
     }
 
@@ -31,7 +31,7 @@ class VerifierTest {
         Machine m = VerifyMachines.tiny("line[1] = op == 1", "line[1] = op == 3");
         VerifyReport r = verify(m);
         assertThat(r.passes()).isFalse();
-        DecodeLine andn = r.decode().get(1);
+        DecodeVerdict andn = r.decode().get(1);
         assertThat(andn.mnemonic()).isEqualTo("ANDN");
         assertThat(andn.problem()).startsWith("no line active");
         assertThat(r.decode().get(3).problem()).contains("line[1] and line[3] active together");
@@ -119,7 +119,7 @@ class VerifierTest {
         assertThat(r.cases()).isEqualTo(247L * 65536);
         assertThat(r.exhaustive()).isTrue();
         assertThat(r.counterexamples()).isEmpty();
-        assertThat(r.decode()).hasSize(16).allMatch(DecodeLine::ok);
+        assertThat(r.decode()).hasSize(16).allMatch(DecodeVerdict::ok);
         assertThat(r.decode().get(13).net()).isEqualTo("line[13]");
         // NOP does nothing and the demo gives it no line: allowed for an empty meaning.
         assertThat(r.decode().get(0).net()).isEqualTo("(none: does nothing)");

@@ -8,7 +8,7 @@ import org.hipparchus.ode.events.Action;
 import org.hipparchus.ode.nonstiff.DormandPrince54Integrator;
 
 /**
- * One heater on a bench supply: its equilibrium and its warm-up, integrated with an adaptive
+ * One heater (wire and cathode sleeve) on a bench supply: its equilibrium and its warm-up, integrated with an adaptive
  * Dormand-Prince integrator and located with event detection. Used to calibrate heat capacity
  * and by tests as an independent check of the thermal model.
  */
@@ -23,8 +23,12 @@ public final class HeaterBench {
         return new BracketingNthOrderBrentSolver(1e-12, 1e-9, 1e-12, 5);
     }
 
-    /** Result of a run: end time, temperature, electrical energy in and energy radiated (joules). */
-    public record Run(double seconds, double kelvin, double joulesIn, double joulesRadiated, boolean reached) {
+    /**
+     * Result of a run: end time, wire and cathode temperature, electrical energy in and energy
+     * radiated (joules), and whether the target was reached.
+     */
+    public record Run(double seconds, double kelvin, double cathodeKelvin, double joulesIn, double joulesRadiated,
+                      boolean reached) {
     }
 
     /** Equilibrium temperature under {@code drive} (electrical power in = radiated). */
@@ -61,12 +65,23 @@ public final class HeaterBench {
         return runUntil(h, drive, Double.POSITIVE_INFINITY, seconds);
     }
 
-    /** Runs from ambient until the temperature reaches {@code targetKelvin} or {@code maxSeconds} pass. */
+    /** Runs from ambient until the wire temperature reaches {@code targetKelvin} or {@code maxSeconds} pass. */
     public static Run runUntil(HeaterModel h, HeaterDrive drive, double targetKelvin, double maxSeconds) {
+        return runUntil(h, drive, 0, targetKelvin, maxSeconds);
+    }
+
+    /** Seconds until the cathode reaches {@code kelvin} under {@code drive} (NaN: not within 1000 s). */
+    public static double cathodeTime(HeaterModel h, HeaterDrive drive, double kelvin) {
+        Run r = runUntil(h, drive, 1, kelvin, 1e3);
+        return r.reached() ? r.seconds() : Double.NaN;
+    }
+
+    /** Runs until state {@code body} (0 wire, 1 cathode) reaches {@code targetKelvin}. */
+    private static Run runUntil(HeaterModel h, HeaterDrive drive, int body, double targetKelvin, double maxSeconds) {
         OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
             @Override
             public int getDimension() {
-                return 3;
+                return 4;
             }
 
             @Override
@@ -74,20 +89,22 @@ public final class HeaterBench {
                 double r = h.resistance(y[0]);
                 double i = drive.amps(r);
                 double pin = i * i * r;
-                double prad = h.radiated(y[0]);
-                return new double[] {(pin - prad) / h.heatCapacity(), pin, prad};
+                double across = h.toCathode(y[0], y[1]);
+                double prad = h.cathodeRadiated(y[1]);
+                return new double[] {(pin - across) / h.heatCapacity(), (across - prad) / h.cathodeHeatCapacity(), pin, prad};
             }
         };
         DormandPrince54Integrator dp = new DormandPrince54Integrator(1e-9, Math.max(1e-3, maxSeconds / 50),
-                new double[] {1e-6, 1e-9, 1e-9}, new double[] {1e-9, 1e-9, 1e-9});
+                new double[] {1e-6, 1e-6, 1e-9, 1e-9}, new double[] {1e-9, 1e-9, 1e-9, 1e-9});
         dp.setMaxEvaluations(2_000_000);
         Threshold hit = null;
         if (Double.isFinite(targetKelvin)) {
-            hit = new Threshold(s -> s.getPrimaryState()[0] - targetKelvin, Action.STOP, true);
+            hit = new Threshold(s -> s.getPrimaryState()[body] - targetKelvin, Action.STOP, true);
             dp.addEventDetector(hit);
         }
-        ODEStateAndDerivative end = dp.integrate(ode, new ODEState(0, new double[] {h.ambientKelvin(), 0, 0}), maxSeconds);
+        double amb = h.ambientKelvin();
+        ODEStateAndDerivative end = dp.integrate(ode, new ODEState(0, new double[] {amb, amb, 0, 0}), maxSeconds);
         double[] y = end.getPrimaryState();
-        return new Run(end.getTime(), y[0], y[1], y[2], hit != null && !Double.isNaN(hit.firstTime()));
+        return new Run(end.getTime(), y[0], y[1], y[2], y[3], hit != null && !Double.isNaN(hit.firstTime()));
     }
 }

@@ -18,11 +18,13 @@ package org.thermion.power.startup;
  * @param finalVolts     heater voltage at the end of the run
  * @param finalKelvin    temperature at the end of the run
  * @param joulesIn       electrical energy into one heater
- * @param joulesRadiated energy one heater radiated
- * @param joulesStored   heat stored in one heater, C (T_end - T_amb)
+ * @param joulesRadiated energy one heater's cathode radiated
+ * @param joulesStored   heat stored in one heater's wire and cathode sleeve above ambient
+ * @param finalCathodeKelvin cathode sleeve temperature at the end of the run
+ * @param emitSeconds    when the cathode crossed its emission threshold (NaN: not within the run)
  */
 public record HeaterWarmup(String tube, double ratedVolts, double ratedAmps, int rail, String string, int position,
                            int count, boolean mixed, double warmSeconds, double peakVoltRatio, double peakVoltTime,
                            double finalVolts, double finalKelvin, double joulesIn, double joulesRadiated,
-                           double joulesStored) {
+                           double joulesStored, double finalCathodeKelvin, double emitSeconds) {
 }

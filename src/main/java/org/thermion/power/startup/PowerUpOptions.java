@@ -11,16 +11,23 @@ import java.util.Map;
 public record PowerUpOptions(double seconds, Map<String, Double> resistorOhms, DrawMode drawMode, double sampleSeconds,
                              ThermalAssumptions assumptions, boolean holdBypass) {
 
+    /** Shortest and longest run: below 10 ms nothing warms; an hour is far past any warm-up. */
+    public static final double MIN_SECONDS = 0.01;
+    public static final double MAX_SECONDS = 3600;
+    /** Largest soft-start resistor taken, ohms: beyond it no heater would warm at all. */
+    public static final double MAX_OHMS = 1e6;
+
     public PowerUpOptions {
-        if (!(seconds > 0) || Double.isInfinite(seconds)) {
-            throw new IllegalArgumentException("simulated time must be positive, got " + seconds);
+        if (!(seconds >= MIN_SECONDS && seconds <= MAX_SECONDS)) {
+            throw new IllegalArgumentException("simulated time must be between 10 ms and 1 h, got " + seconds + " s");
         }
         if (!(sampleSeconds >= 0)) {
             throw new IllegalArgumentException("sample spacing must be zero or positive");
         }
         for (Map.Entry<String, Double> e : resistorOhms.entrySet()) {
-            if (!(e.getValue() >= 0) || Double.isInfinite(e.getValue())) {
-                throw new IllegalArgumentException("soft-start resistor '" + e.getKey() + "' must be zero or positive ohms");
+            if (!(e.getValue() >= 0 && e.getValue() <= MAX_OHMS)) {
+                throw new IllegalArgumentException("soft-start resistor '" + e.getKey()
+                        + "' must be between 0 and 1 Mohm, got " + e.getValue() + " ohm");
             }
         }
         resistorOhms = Map.copyOf(resistorOhms);

@@ -13,13 +13,15 @@ import java.util.List;
  * @param heaters      every distinct heater trajectory
  * @param relayChecks  one per thyratron-triggered bypass
  * @param t            sample times shared by the rails' arrays
- * @param heaterKelvin per entry of {@code heaters}, its temperature at each sample
+ * @param heaterKelvin per entry of {@code heaters}, its wire temperature at each sample
+ * @param cathodeKelvin per entry of {@code heaters}, its cathode temperature at each sample
  * @param evaluations  right-hand-side evaluations the integrator made
  * @param notes        assumptions a reader should know of (defaulted warm-up times, assumed arc drops)
  */
 public record PowerUpResult(String machine, PowerUpOptions options, List<HeaterModel> models, List<RailTransient> rails,
                             List<SoftStartResult> softStarts, List<HeaterWarmup> heaters,
-                            List<RelayDriverCheck> relayChecks, double[] t, double[][] heaterKelvin, long evaluations,
+                            List<RelayDriverCheck> relayChecks, double[] t, double[][] heaterKelvin,
+                            double[][] cathodeKelvin, long evaluations,
                             List<String> notes) {
 
     /** The rail with this index. */
@@ -29,12 +31,22 @@ public record PowerUpResult(String machine, PowerUpOptions options, List<HeaterM
 
     /** Latest time any heater reaches 95 % of its operating temperature (NaN when one never does). */
     public double allWarmSeconds() {
+        return latest(HeaterWarmup::warmSeconds);
+    }
+
+    /** Latest time any cathode crosses its emission threshold: every tube conducts from then (NaN: one never does). */
+    public double allEmitSeconds() {
+        return latest(HeaterWarmup::emitSeconds);
+    }
+
+    private double latest(java.util.function.ToDoubleFunction<HeaterWarmup> time) {
         double w = 0;
         for (HeaterWarmup h : heaters) {
-            if (Double.isNaN(h.warmSeconds())) {
+            double t = time.applyAsDouble(h);
+            if (Double.isNaN(t)) {
                 return Double.NaN;
             }
-            w = Math.max(w, h.warmSeconds());
+            w = Math.max(w, t);
         }
         return w;
     }

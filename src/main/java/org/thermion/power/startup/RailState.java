@@ -5,7 +5,8 @@ import org.thermion.model.Rail;
 /**
  * One rail through a run: what hangs on it (heater strings, plate and bias loads tied to the
  * heaters that warm their cathodes, thyratron plate circuits fed from it, the soft starts in
- * series with it), its circuit solved algebraically at each point, and its peaks so far.
+ * series with it), its circuit solved algebraically at each point, and its peaks so far. Plate
+ * and bias loads follow their cathodes' emission, not the heater wire.
  */
 final class RailState {
     final int index;
@@ -63,7 +64,7 @@ final class RailState {
         }
         for (int i = 0; i < plateHeaters.length; i++) {
             HeaterState h = plateHeaters[i];
-            g += plateSiemens[i] * emission.factor(h.model.fraction(y[h.wire]));
+            g += plateSiemens[i] * h.emission(y, emission);
         }
         double bg = 0, bge = 0;
         for (SoftStartState s : thyratronBranches) {
@@ -92,6 +93,11 @@ final class RailState {
             double gt = g + bg;
             vn = gt > 0 ? Math.min(vs, (a + bge) / gt) : vs;
         }
+        if (!Double.isFinite(a) || !Double.isFinite(vn)) {
+            throw new TransientFailure("rail " + rail.name() + ": the circuit has no finite solution (" + fmtV(vs)
+                    + " V through " + fmtV(rser) + " ohm to " + fmtV(g) + " S of load): check the rail's voltage, source "
+                    + "resistance and soft-start resistor");
+        }
         amps = a;
         volts = vn;
         demand = ask;
@@ -101,6 +107,10 @@ final class RailState {
         for (SoftStartState s : series) {
             s.dissipate(a);
         }
+    }
+
+    private static String fmtV(double v) {
+        return StartupNetwork.fmt(v);
     }
 
     /** A soft-start resistor sits in this rail. */

@@ -66,7 +66,7 @@ public final class StartupNetwork {
 
     /** A soft-start network as the solver sees it. */
     record Soft(String name, int rail, double declaredOhms, double ratedWatts, double delay, int thyState,
-                double warmFraction, int fromRail, double branchSiemens, double branchVolts, boolean picksUp,
+                int fromRail, double branchSiemens, double branchVolts, boolean picksUp,
                 double operate, RelayDriverCheck check) {
         boolean thyratron() {
             return thyState >= 0;
@@ -81,6 +81,7 @@ public final class StartupNetwork {
         List<String> noteList = new ArrayList<>();
 
         // Heater models per tube type and rating.
+        checkFinite(m);
         Map<String, Integer> modelIndex = new LinkedHashMap<>();
         List<HeaterModel> ml = new ArrayList<>();
         // Distinct strings.
@@ -223,7 +224,7 @@ public final class StartupNetwork {
         for (SoftStart ss : m.softStarts()) {
             double delay = Double.NaN;
             int thy = -1;
-            double warm = Double.NaN, bs = 0, bv = 0;
+            double bs = 0, bv = 0;
             int from = -1;
             boolean picks = true;
             RelayDriverCheck check = null;
@@ -234,7 +235,6 @@ public final class StartupNetwork {
                 if (thy < 0) {
                     throw new IllegalArgumentException("soft start " + ss.name() + ": its thyratron has no heater string");
                 }
-                warm = tw.warmFraction();
                 from = tw.fromRail();
                 TubeType tube = m.tubes().get(tw.tube());
                 double arc = tube.arcDropVolts();
@@ -245,6 +245,11 @@ public final class StartupNetwork {
                 Rail fr = m.rails().get(from);
                 check = RelayDriverCheck.of(tube.name(), fr.name(), fr.volts(), fr.sourceOhms(), arc, tw.plateOhms(),
                         ss.relay(), tube.avgCathodeAmps(), tube.peakCathodeAmps(), Double.NaN, tube.warmupSeconds());
+                if (tube.warmupSeconds() > 0) {
+                    noteList.add(tube.name() + " of soft start " + ss.name() + ": its anode has rail " + fr.name()
+                            + "'s voltage from switch-on, before its rated " + fmt(tube.warmupSeconds())
+                            + " s of cathode heating (a rating a builder may knowingly bend)");
+                }
                 bs = 1 / (tw.plateOhms() + ss.relay().coilOhms());
                 bv = arc;
                 picks = check.picksUp();
@@ -253,11 +258,46 @@ public final class StartupNetwork {
                             + " V, below its pick-up; the bypass never closes");
                 }
             }
-            sl.add(new Soft(ss.name(), ss.rail(), ss.resistorOhms(), ss.ratedWatts(), delay, thy, warm, from, bs, bv,
+            sl.add(new Soft(ss.name(), ss.rail(), ss.resistorOhms(), ss.ratedWatts(), delay, thy, from, bs, bv,
                     picks, ss.relay().operateSeconds(), check));
         }
         softs = List.copyOf(sl);
         notes = List.copyOf(noteList);
+    }
+
+    /** Every value the transient uses must be a finite number: an infinity leaves no solution. */
+    private static void checkFinite(Machine m) {
+        List<String> bad = new ArrayList<>();
+        for (Rail r : m.rails()) {
+            if (!Double.isFinite(r.volts()) || !Double.isFinite(r.sourceOhms()) || Double.isNaN(r.limitAmps())) {
+                bad.add("rail " + r.name() + " (voltage " + r.volts() + " V, source " + r.sourceOhms() + " ohm, limit "
+                        + r.limitAmps() + " A)");
+            }
+        }
+        for (SoftStart s : m.softStarts()) {
+            if (!Double.isFinite(s.resistorOhms())) {
+                bad.add("soft start " + s.name() + " (resistor " + s.resistorOhms() + " ohm)");
+            }
+        }
+        for (StageType st : m.stages()) {
+            for (List<RailDraw> ds : List.of(st.drawLow(), st.drawHigh(), st.drawAlways())) {
+                for (RailDraw d : ds) {
+                    if (!Double.isFinite(d.amps())) {
+                        bad.add("stage " + st.name() + " (draw " + d.amps() + " A from rail "
+                                + m.rails().get(d.rail()).name() + ")");
+                    }
+                }
+            }
+        }
+        for (HeaterString hs : m.heaterStrings()) {
+            if (!Double.isFinite(hs.dropOhms())) {
+                bad.add("a heater string on rail " + m.rails().get(hs.rail()).name() + " (dropping resistor "
+                        + hs.dropOhms() + " ohm)");
+            }
+        }
+        if (!bad.isEmpty()) {
+            throw new TransientFailure("the power-up model needs finite values; not finite: " + String.join("; ", bad));
+        }
     }
 
     /** Builds the network of {@code m} under the given assumptions. */

@@ -1,5 +1,6 @@
 package org.thermion.power.startup;
 
+import org.hipparchus.exception.MathRuntimeException;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
@@ -29,21 +30,25 @@ final class TransientRun {
     private final RailState[] rails;
     private final SoftStartState[] softs;
     private final int dimension;
+    /** The emission threshold as a fraction of cathode operating temperature. */
+    private final double threshold;
     private final List<double[]> samples = new ArrayList<>();
     private long evaluations;
 
     TransientRun(StartupNetwork net, PowerUpOptions o) {
         this.net = net;
         this.o = o;
+        this.threshold = net.emission.thresholdFraction();
         int n = net.states;
         int ns = net.softs.size();
-        // State vector: wire temperatures, resistor energies, heater energies in, energies radiated.
+        // State vector: wire temperatures, cathode temperatures, resistor energies, heater energies in,
+        // energies radiated.
         heaters = new HeaterState[n];
         for (int s = 0; s < n; s++) {
             heaters[s] = new HeaterState(net.models.get(net.stateModel[s]), net.stateGroup[s], net.statePosition[s],
-                    net.stateShunt[s], s, n + ns + s, 2 * n + ns + s);
+                    net.stateShunt[s], s, n + s, 2 * n + ns + s, 3 * n + ns + s);
         }
-        dimension = 3 * n + ns;
+        dimension = 4 * n + ns;
         strings = new StringState[net.groupRail.length];
         for (int g = 0; g < strings.length; g++) {
             HeaterState[] hs = new HeaterState[net.groupStates[g].length];
@@ -56,7 +61,7 @@ final class TransientRun {
         for (int k = 0; k < ns; k++) {
             StartupNetwork.Soft s = net.softs.get(k);
             double ohms = o.resistorOhms().getOrDefault(s.name(), s.declaredOhms());
-            softs[k] = new SoftStartState(s, ohms, n + k, s.thyratron() ? heaters[s.thyState()] : null);
+            softs[k] = new SoftStartState(s, ohms, 2 * n + k, s.thyratron() ? heaters[s.thyState()] : null);
         }
         int nr = net.machine.rails().size();
         rails = new RailState[nr];
@@ -94,7 +99,11 @@ final class TransientRun {
 
         @Override
         public double[] computeDerivatives(double t, double[] y) {
-            evaluate(y);
+            try {
+                evaluate(y);
+            } catch (TransientFailure e) {
+                throw new TransientFailure("at t = " + StartupNetwork.fmt(t) + " s, " + e.getMessage());
+            }
             double[] d = new double[dimension];
             for (HeaterState h : heaters) {
                 h.derivatives(y, d);
@@ -120,7 +129,7 @@ final class TransientRun {
         }
         if (keep) {
             int nr = rails.length;
-            double[] row = new double[1 + 2 * nr + heaters.length];
+            double[] row = new double[1 + 2 * nr + 2 * heaters.length];
             row[0] = t;
             for (int r = 0; r < nr; r++) {
                 row[1 + r] = rails[r].amps;
@@ -128,6 +137,7 @@ final class TransientRun {
             }
             for (int s = 0; s < heaters.length; s++) {
                 row[1 + 2 * nr + s] = y[heaters[s].wire];
+                row[1 + 2 * nr + heaters.length + s] = y[heaters[s].cathode];
             }
             samples.add(row);
         }
@@ -145,6 +155,7 @@ final class TransientRun {
         double[] y = new double[dimension];
         for (HeaterState h : heaters) {
             y[h.wire] = h.model.ambientKelvin();
+            y[h.cathode] = h.model.ambientKelvin();
         }
         for (SoftStartState s : softs) {
             if (s.ohms == 0) {
@@ -154,7 +165,11 @@ final class TransientRun {
             }
         }
         double t = 0;
-        observe(0, y, true);
+        try {
+            observe(0, y, true);
+        } catch (TransientFailure e) {
+            throw new TransientFailure("at switch-on, " + e.getMessage());
+        }
         updateLimits(0);
         long[] nextSample = {1};
         if (heaters.length == 0) {
@@ -187,6 +202,15 @@ final class TransientRun {
                                 }
                             }));
                 }
+                if (Double.isNaN(h.emitTime)) {
+                    double at = threshold * h.model.cathodeKelvin();
+                    dp.addEventDetector(new Threshold(x -> x.getPrimaryState()[h.cathode] / at - 1, Action.CONTINUE, true,
+                            (time, up) -> {
+                                if (up && Double.isNaN(h.emitTime)) {
+                                    h.emitTime = time;
+                                }
+                            }));
+                }
             }
             for (RailState r : rails) {
                 double lim = r.rail.limitAmps();
@@ -211,10 +235,25 @@ final class TransientRun {
                     observe(tc, in.getCurrentState().getPrimaryState(), false);
                 }
             });
-            ODEStateAndDerivative fin = dp.integrate(ode, new ODEState(t, y), segEnd);
+            ODEStateAndDerivative fin;
+            try {
+                fin = dp.integrate(ode, new ODEState(t, y), segEnd);
+            } catch (MathRuntimeException e) {
+                throw new TransientFailure("the heater temperatures could not be integrated beyond t = "
+                        + StartupNetwork.fmt(t) + " s (" + e.getMessage() + "): check the rails' voltages and resistances");
+            }
             evaluations += dp.getEvaluations();
             t = fin.getTime();
             y = fin.getPrimaryState().clone();
+            // A step stopped by one event may end on another's threshold before that one is reported.
+            for (HeaterState h : heaters) {
+                if (Double.isNaN(h.warmTime) && h.model.fraction(y[h.wire]) >= 0.95) {
+                    h.warmTime = t;
+                }
+                if (Double.isNaN(h.emitTime) && h.model.cathodeFraction(y[h.cathode]) >= threshold) {
+                    h.emitTime = t;
+                }
+            }
             boolean anyFired = false;
             for (int k = 0; k < softs.length; k++) {
                 SoftStartState s = softs[k];
@@ -261,10 +300,10 @@ final class TransientRun {
         return result(y, end);
     }
 
-    /** The thyratron's firing function: negative until its cathode is warm enough, continuous. */
-    private static double warmth(SoftStartState s, double[] y) {
+    /** The thyratron's firing function: negative until its cathode reaches the emission threshold, continuous. */
+    private double warmth(SoftStartState s, double[] y) {
         HeaterState h = s.thyratron;
-        return y[h.wire] / h.model.hotKelvin() - s.soft.warmFraction();
+        return h.model.cathodeFraction(y[h.cathode]) - threshold;
     }
 
     private DormandPrince54Integrator integrator(double end) {
@@ -316,19 +355,21 @@ final class TransientRun {
         }
         List<HeaterWarmup> warmups = new ArrayList<>();
         double[][] kelvin = new double[heaters.length][m];
+        double[][] cathodeKelvin = new double[heaters.length][m];
         for (int s = 0; s < heaters.length; s++) {
             HeaterState h = heaters[s];
             HeaterModel model = h.model;
             int g = h.group;
             warmups.add(new HeaterWarmup(model.tube(), model.rating().volts(), model.rating().amps(), net.groupRail[g],
                     net.groupLabel[g], h.position, net.groupCount[g], net.groupMixed[g], h.warmTime, h.peakRatio,
-                    h.peakRatioTime, h.volts, y[h.wire], y[h.joulesIn], y[h.joulesRadiated],
-                    model.heatCapacity() * (y[h.wire] - model.ambientKelvin())));
+                    h.peakRatioTime, h.volts, y[h.wire], y[h.joulesIn], y[h.joulesRadiated], h.joulesStored(y),
+                    y[h.cathode], h.emitTime));
             for (int i = 0; i < m; i++) {
                 kelvin[s][i] = samples.get(i)[1 + 2 * nr + s];
+                cathodeKelvin[s][i] = samples.get(i)[1 + 2 * nr + heaters.length + s];
             }
         }
         return new PowerUpResult(net.machine.name(), o, net.models, List.copyOf(railResults), List.copyOf(softResults),
-                List.copyOf(warmups), List.copyOf(checks), t, kelvin, evaluations, net.notes);
+                List.copyOf(warmups), List.copyOf(checks), t, kelvin, cathodeKelvin, evaluations, net.notes);
     }
 }

@@ -118,25 +118,10 @@ class PowerUpSolverTest {
         SoftStartResult s = r.softStarts().get(0);
         assertThat(s.thyratron()).isTrue();
         assertThat(s.bypassTime() - s.triggerTime()).isCloseTo(0.010, within(1e-9));
-        // At the firing time the 2D21 heater stands at 90 % of its operating temperature.
-        int thy = 0;
-        for (int i = 0; i < r.heaters().size(); i++) {
-            if (r.heaters().get(i).tube().equals("2D21")) {
-                thy = i;
-            }
-        }
-        double[] t = r.t();
-        double[] k = r.heaterKelvin()[thy];
-        int i = 0;
-        while (t[i + 1] < s.triggerTime()) {
-            i++;
-        }
-        double at = k[i] + (k[i + 1] - k[i]) * (s.triggerTime() - t[i]) / (t[i + 1] - t[i]);
-        assertThat(at / ThermalAssumptions.standard().hotKelvin()).isCloseTo(0.9, within(0.002));
-        // On a stiff 6.3 V rail the 2D21 is warm long before its 10 s cathode heating time: flagged.
+        // The 2D21 cathode reaches its emission threshold about 10 s after switch-on (CathodeWarmupTest), before
+        // its 10 s cathode heating time or just after: the anode has its voltage from switch-on either way.
         RelayDriverCheck c = r.relayChecks().get(0);
-        assertThat(c.fireTime()).isLessThan(10);
-        assertThat(c.heatedLongEnough()).isFalse();
+        assertThat(c.fireTime()).isBetween(8.0, 12.0);
         // The coil current shows on the relay rail once fired: (24 - 8) / (50 + 100) A.
         RailTransient relay = r.rails().stream().filter(x -> x.name().equals("relay")).findFirst().orElseThrow();
         assertThat(relay.finalAmps()).isCloseTo(16.0 / 150, within(1e-9));

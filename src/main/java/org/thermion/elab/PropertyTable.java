@@ -1,0 +1,282 @@
+package org.thermion.elab;
+
+import org.thermion.model.Relay;
+import org.thermion.model.StageFunction;
+import org.thermion.model.TubeKind;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import static org.thermion.elab.Slot.Range.above;
+import static org.thermion.elab.Slot.Range.from;
+
+/**
+ * The properties one kind of block accepts: every key with its values' units, ranges,
+ * defaults and sources. {@link PropBlock} reads every block against its table, so the
+ * parser's diagnostics, the language reference ({@link PropertyReference}) and the
+ * builders all see the same entries. Limits marked "plausibility" are not physics: they
+ * sit far beyond any receiving-tube circuit and catch slips such as a missing unit prefix.
+ */
+final class PropertyTable {
+    final String kind;
+    final String heading;
+    final List<Property> properties;
+
+    private PropertyTable(String kind, String heading, Property... properties) {
+        this.kind = kind;
+        this.heading = heading;
+        this.properties = List.of(properties);
+    }
+
+    private static final String PLAUSIBLE = "plausibility limit";
+    /** A conducting stage's output resistance is its plate load over this ratio (common practice). */
+    static final double RON_LOAD_RATIO = 10;
+    /** ... or this many ohms for a stage without a load resistor. */
+    static final double RON_WITHOUT_LOAD = 1000;
+
+    static final PropertyTable RAIL = new PropertyTable("rail", "rail NAME { ... }",
+            Property.of("voltage", "rail voltage, signed", q("rail voltage", Unit.VOLT, from(-10e3, 10e3)))
+                    .required("voltage 48 V").source(PLAUSIBLE + " of 10 kV either way"),
+            Property.of("source", "source resistance of the supply", q("source resistance", Unit.OHM, from(0, 1e6)))
+                    .byDefault(0).source("an ideal supply unless given; " + PLAUSIBLE),
+            Property.of("limit", "current the supply may deliver", q("current limit", Unit.AMPERE, above(0, 1e6)))
+                    .byDefault("no limit").source(PLAUSIBLE + ": synthetic machines of 10^5 stages draw kiloamperes of heater current"));
+
+    static final PropertyTable TUBE = new PropertyTable("tube", "tube NAME { ... }",
+            Property.of("kind", "what a section is", name("kind", "tube kind", words(TubeKind.values())))
+                    .byDefault("triode"),
+            Property.of("sections", "sections in one envelope", whole("number of sections", 1, 4)).byDefault(1)
+                    .source("receiving tubes hold at most four sections (common practice)"),
+            Property.of("heater", "heater rating; one line per wiring, series or parallel pins",
+                    q("heater voltage", Unit.VOLT, above(0, 200)), q("current", "heater current", Unit.AMPERE, above(0, 20)))
+                    .required("heater 6.3 V 300 mA").many()
+                    .source("the data sheet; " + PLAUSIBLE + "s 200 V and 20 A"),
+            Property.of("warmup", "heater warm-up time", q("warm-up time", Unit.SECOND, above(0, 600)))
+                    .byDefault("the heater model's standard warm-up").source(PLAUSIBLE + " of 10 minutes"),
+            Property.of("coldratio", "hot-to-cold heater resistance ratio", plain("hot-to-cold resistance ratio", from(1, 30)))
+                    .byDefault("from the tungsten table (about 7)").source("tungsten between room temperature and 1400 K; "
+                            + PLAUSIBLE),
+            Property.of("cgk", "grid-cathode capacitance per section", q("grid-cathode capacitance", Unit.FARAD, from(0, 1e-9)))
+                    .byDefault(0).source(PLAUSIBLE + " of 1 nF"),
+            Property.of("cgp", "grid-plate capacitance per section", q("grid-plate capacitance", Unit.FARAD, from(0, 1e-9)))
+                    .byDefault(0).source(PLAUSIBLE + " of 1 nF"),
+            Property.of("cpk", "plate-cathode capacitance per section", q("plate-cathode capacitance", Unit.FARAD, from(0, 1e-9)))
+                    .byDefault(0).source(PLAUSIBLE + " of 1 nF"),
+            Property.of("cin", "input capacitance per section", q("input capacitance", Unit.FARAD, from(0, 1e-9)))
+                    .byDefault("cgk + cgp").source(PLAUSIBLE + " of 1 nF"),
+            Property.of("cout", "output capacitance per section", q("output capacitance", Unit.FARAD, from(0, 1e-9)))
+                    .byDefault("cpk + cgp").source(PLAUSIBLE + " of 1 nF"),
+            Property.of("avgcurrent", "rated average cathode current", q("average cathode current", Unit.AMPERE, above(0, 100)))
+                    .byDefault("none").source(PLAUSIBLE),
+            Property.of("peakcurrent", "rated peak cathode current", q("peak cathode current", Unit.AMPERE, above(0, 100)))
+                    .byDefault("none").source(PLAUSIBLE),
+            Property.of("arcdrop", "tube drop while conducting (thyratrons)", q("tube drop", Unit.VOLT, above(0, 1e3)))
+                    .byDefault("none").source(PLAUSIBLE),
+            Property.of("source", "where the tube's figures come from", text("the source of the data")).byDefault("empty"));
+
+    static final PropertyTable STAGE = new PropertyTable("stage", "stage NAME : FUNCTION { ... }",
+            Property.of("tube", "tube type the stage is built from", name("tube", "a tube type", List.of()))
+                    .required("tube 12AU7"),
+            Property.of("sections", "tube sections one instance uses; `per input` for diode gates",
+                    whole("sections used", 1, 8), new Slot.Optional("per", List.of(new Slot.Word("input"))))
+                    .byDefault(1).source("two twin-triode envelopes at most (common practice)"),
+            Property.of("fanin", "most inputs one instance takes", whole("fan-in", 1, 16))
+                    .byDefault("the function's: 1 for not, buffer, latch, lamp, relay; 2 for the others")
+                    .source("16 diode inputs at most (" + PLAUSIBLE + ")"),
+            Property.of("load", "plate (or cathode) load resistor and the rail it returns to",
+                    q("plate load", Unit.OHM, above(0, 100e6)), new Slot.Word("from"), name("rail", "a rail name", List.of()))
+                    .byDefault("none").source(PLAUSIBLE + " of 100 M"),
+            Property.of("draw", "current drawn from a rail with the output low, high, always, or while the circuit "
+                            + "conducts (" + conductingStates() + ")",
+                    name("state", "output state", List.of("low", "high", "always", "conducting")), name("rail", "a rail name", List.of()),
+                    q("amps", "current drawn", Unit.AMPERE, from(0, 100)))
+                    .many().byDefault("nothing").source("worked out beside each library stage; " + PLAUSIBLE),
+            Property.of("rise", "output rise time, when given rather than computed", q("rise time", Unit.SECOND, from(0, 10)))
+                    .byDefault("ln 9 R C from the load").source("Millman & Taub (REFERENCES.md); " + PLAUSIBLE),
+            Property.of("fall", "output fall time, when given rather than computed", q("fall time", Unit.SECOND, from(0, 10)))
+                    .byDefault("ln 9 r_on C").source("Millman & Taub (REFERENCES.md); " + PLAUSIBLE),
+            Property.of("delay", "rise and fall time together, or `auto` to compute both",
+                    new Slot.Choice("mode", Map.of("auto", List.of()), List.of(q("delay", Unit.SECOND, from(0, 10)))))
+                    .byDefault("auto").source(PLAUSIBLE),
+            Property.of("setup", "time an input must be steady before the phase ends (latches)",
+                    q("set-up time", Unit.SECOND, from(0, 10))).byDefault(0).source(PLAUSIBLE),
+            Property.of("ron", "output resistance of the conducting tube", q("conducting output resistance", Unit.OHM, above(0, 100e6)))
+                    .byDefault("load / " + Unit.number(RON_LOAD_RATIO) + ", or " + Unit.OHM.format(RON_WITHOUT_LOAD)
+                            + " without a load").source("a conducting tube pulls about ten times harder than its plate "
+                            + "load (common practice)"),
+            Property.of("wiring", "wiring capacitance per connection", q("wiring capacitance", Unit.FARAD, from(0, 1e-6)))
+                    .byDefault(0).source(PLAUSIBLE),
+            Property.of("gain", "voltage gain, for the Miller capacitance of the next grid", plain("stage gain", from(-1e4, 1e4)))
+                    .byDefault(1).source("Miller (REFERENCES.md); " + PLAUSIBLE),
+            Property.of("note", "a line about the circuit", text("a note")).byDefault("empty"));
+
+    static final PropertyTable RELAY = new PropertyTable("relay", "relay { ... } inside a softstart",
+            Property.of("coil", "coil resistance", q("coil resistance", Unit.OHM, above(0, 1e6)))
+                    .byDefault(Relay.DEFAULT_COIL_OHMS).source(Relay.DEFAULTS_SOURCE),
+            Property.of("rated", "rated coil voltage", q("rated coil voltage", Unit.VOLT, above(0, 1e3)))
+                    .byDefault(Relay.DEFAULT_RATED_VOLTS).source(Relay.DEFAULTS_SOURCE),
+            Property.of("pickup", "voltage at which the relay is sure to pick up", q("pick-up voltage", Unit.VOLT, above(0, 1e3)))
+                    .byDefault(percentOfRated(Relay.PICKUP_FRACTION)).source(Relay.DEFAULTS_SOURCE),
+            Property.of("dropout", "voltage below which the relay is sure to drop out", q("drop-out voltage", Unit.VOLT, from(0, 1e3)))
+                    .byDefault(percentOfRated(Relay.DROPOUT_FRACTION)).source(Relay.DEFAULTS_SOURCE),
+            Property.of("operate", "time from pick-up voltage to closed contacts", q("operate time", Unit.SECOND, from(0, 10)))
+                    .byDefault(Relay.DEFAULT_OPERATE_SECONDS).source(Relay.DEFAULTS_SOURCE));
+
+    static final PropertyTable SOFTSTART = new PropertyTable("softstart", "softstart NAME on RAIL { ... }",
+            Property.of("resistor", "series resistor and its power rating",
+                    q("soft-start resistor", Unit.OHM, above(0, 1e6)),
+                    new Slot.Optional("rated", List.of(q("watts", "resistor rating", Unit.WATT, above(0, 1e9)))))
+                    .required("resistor 2 ohm rated 50 W").source(PLAUSIBLE),
+            Property.of("relay", "the bypass relay's coil data").opens(RELAY)
+                    .byDefault("a 12 V relay of 100 ohm, figures as in the relay block's defaults"),
+            Property.of("bypass", "what closes the bypass relay: a delay, or a thyratron stage warming",
+                    new Slot.Choice("trigger", orderedMap("after", List.of(q("bypass delay", Unit.SECOND, from(0, 3600))),
+                            "when", List.of(name("stage", "a thyratron relay-driver stage", List.of()), new Slot.Word("warm"))),
+                            null))
+                    .required("bypass after 10 s").source(PLAUSIBLE + " of one hour"));
+
+    static final PropertyTable CLOCK = new PropertyTable("clock", "clock { ... } inside the machine block",
+            Property.of("phases", "clock phases per machine cycle", whole("number of phases", 1, 8)).byDefault(2)
+                    .source(PLAUSIBLE),
+            Property.of("period", "machine cycle period (phases share it equally)", q("clock period", Unit.SECOND, above(0, 3600)))
+                    .byDefault(100e-6).source("demo value; " + PLAUSIBLE));
+
+    static final PropertyTable ROM = new PropertyTable("rom", "rom { ... } inside the machine block",
+            Property.of("words", "ROM size in words", whole("ROM size in words", 1, 1 << 20)).byDefault(256)
+                    .source("a 2^20-word limit keeps images in memory"),
+            Property.of("width", "ROM word width in bits", whole("ROM word width", 1, 63))
+                    .byDefault("the data port's width").source("one 64-bit word per lane (the simulator's limit)"),
+            Property.of("data", "the top module's input port the ROM drives",
+                    name("port", "the top module's input port for ROM data", List.of())),
+            Property.of("offboard", "the ROM is built outside the tube logic").byDefault("offboard"));
+
+    static final PropertyTable PC = new PropertyTable("pc", "pc { ... } inside the machine block",
+            Property.of("width", "program counter width in bits", whole("program counter width", 1, 20))
+                    .byDefault("the jump target's width").source("a 2^20-word ROM at most"),
+            Property.of("phase", "the clock phase the program counter loads on",
+                    whole("the phase the program counter loads on", 1, 8)).byDefault("the last phase"),
+            Property.of("jump", "the top module's output that makes the PC load its target",
+                    name("port", "the top module's jump output", List.of())),
+            Property.of("target", "the top module's output bus the PC loads",
+                    name("port", "the top module's jump-target output", List.of())),
+            Property.of("offboard", "the program counter is built outside the tube logic").byDefault("offboard"));
+
+    static final PropertyTable MACHINE = new PropertyTable("machine", "machine NAME { ... }",
+            Property.of("clock", "the clock").opens(CLOCK),
+            Property.of("top", "the top module", name("module", "the top module's name", List.of())),
+            Property.of("rom", "the program ROM").opens(ROM),
+            Property.of("pc", "the program counter").opens(PC),
+            Property.of("inputs", "top-module inputs driven from outside (switches, sensors)",
+                    new Slot.Names("ports", "input ports")).many(),
+            Property.of("outputs", "top-module outputs shown and logged", new Slot.Names("ports", "output ports")).many());
+
+    private static final Slot.AnyOrder HEATER_OPTIONS = new Slot.AnyOrder(List.of(
+            new Slot.Optional("at", List.of(q("volts", "heater wiring voltage", Unit.VOLT, above(0, 200)))),
+            new Slot.Optional("per", List.of(new Slot.Word("module"))),
+            new Slot.Optional("across", List.of(new Slot.Word("machine"))),
+            new Slot.Optional("drop", List.of(q("drop", "dropping resistor", Unit.OHM, from(0, 1e6)))),
+            new Slot.Optional("rest", List.of(new Slot.Word("drop"),
+                    q("restdrop", "dropping resistor for the last string", Unit.OHM, above(0, 1e6)))),
+            new Slot.Optional("shunt", List.of())));
+
+    static final PropertyTable HEATERS = new PropertyTable("heaters", "heaters on RAIL { ... }",
+            Property.of("parallel", "these tube types' heaters straight across the rail; options: at V, per module, "
+                    + "across machine, drop R, rest drop R, shunt", new Slot.Names("tubes", "tube types"), HEATER_OPTIONS)
+                    .many(),
+            Property.of("series", "strings of N heaters of these tube types; the same options",
+                    whole("heaters per string", 1, 64), new Slot.Word("of"), new Slot.Names("tubes", "tube types"), HEATER_OPTIONS)
+                    .many().source("64 heaters of 6.3 V make a 400 V string (" + PLAUSIBLE + ")"));
+
+    static final PropertyTable REALIZE = new PropertyTable("realize", "realize { ... }", realizeEntries());
+
+    /** Every table, in the order the reference lists them. */
+    static final List<PropertyTable> ALL = List.of(RAIL, TUBE, STAGE, HEATERS, SOFTSTART, RELAY, REALIZE, MACHINE, CLOCK,
+            ROM, PC);
+
+    Property get(String key) {
+        for (Property p : properties) {
+            if (p.key().equals(key)) {
+                return p;
+            }
+        }
+        return null;
+    }
+
+    /** A minimal declaration for a hint: {@code rail x { voltage 48 V }}, its required lines filled in. */
+    String skeleton(String name) {
+        List<String> required = properties.stream().filter(Property::isRequired).map(Property::example).toList();
+        String head = heading.replace("NAME", name);
+        return head.replace("{ ... }", required.isEmpty() ? "{ ... }" : "{ " + String.join("; ", required) + " }");
+    }
+
+    List<String> keys() {
+        return properties.stream().map(Property::key).toList();
+    }
+
+    private static Property[] realizeEntries() {
+        List<Property> out = new ArrayList<>();
+        for (String w : StageFunction.realizableWords()) {
+            out.add(Property.of(w, "the stage that realizes " + w + (w.equals("latch") ? " lines" : " in expressions"),
+                    name("stage", "a stage name", List.of())).byDefault("none: an error where one is needed"));
+        }
+        return out.toArray(new Property[0]);
+    }
+
+    /** "low for not, nand; high for or, ...", from each function's definition. */
+    private static String conductingStates() {
+        StringBuilder b = new StringBuilder();
+        for (StageFunction.Conducts c : StageFunction.Conducts.values()) {
+            List<String> fns = Arrays.stream(StageFunction.values()).filter(f -> f.conducts() == c).map(StageFunction::word)
+                    .toList();
+            if (!fns.isEmpty() && c != StageFunction.Conducts.DEPENDS) {
+                String state = c == StageFunction.Conducts.OUTPUT_LOW ? "low" : c == StageFunction.Conducts.OUTPUT_HIGH
+                        ? "high" : "always";
+                b.append(b.length() > 0 ? "; " : "").append(state).append(" for ").append(String.join(", ", fns));
+            }
+        }
+        return b.toString();
+    }
+
+    private static String percentOfRated(double fraction) {
+        return Math.round(fraction * 100) + " % of rated";
+    }
+
+    private static Slot.Quantity q(String what, Unit unit, Slot.Range range) {
+        return new Slot.Quantity("value", what, unit, range);
+    }
+
+    private static Slot.Quantity q(String id, String what, Unit unit, Slot.Range range) {
+        return new Slot.Quantity(id, what, unit, range);
+    }
+
+    private static Slot.Plain plain(String what, Slot.Range range) {
+        return new Slot.Plain("value", what, range);
+    }
+
+    private static Slot.Whole whole(String what, long min, long max) {
+        return new Slot.Whole("value", what, min, max);
+    }
+
+    private static Slot.Name name(String id, String what, List<String> choices) {
+        return new Slot.Name(id, what, choices);
+    }
+
+    private static Slot.Text text(String what) {
+        return new Slot.Text("value", what);
+    }
+
+    private static List<String> words(Enum<?>[] values) {
+        return Arrays.stream(values).map(v -> v.name().toLowerCase(Locale.ROOT)).toList();
+    }
+
+    private static Map<String, List<Slot>> orderedMap(String k1, List<Slot> v1, String k2, List<Slot> v2) {
+        Map<String, List<Slot>> m = new LinkedHashMap<>();
+        m.put(k1, v1);
+        m.put(k2, v2);
+        return java.util.Collections.unmodifiableMap(m);
+    }
+}

@@ -1,0 +1,294 @@
+package org.thermion.faults;
+
+import java.nio.ByteBuffer;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Reads the lamps back. Every fault of the full list is simulated through the plan; faults
+ * whose lamps agree at every step cannot be told apart by it and form one class (the class
+ * that looks like the good machine is "no fault seen"). Given what the builder saw (a lamp
+ * may be left blank), classes are ranked by the lamps they contradict, then by the lamps they
+ * cannot predict (unknown where something was seen): exact matches first, then the nearest,
+ * so two faults at once or a fault outside the model still point somewhere. Equal scores
+ * share a rank.
+ */
+public final class Diagnosis {
+    /** A blank observation: the lamp was not looked at. */
+    public static final byte BLANK = -1;
+
+    private final FaultSimulator sim;
+    private final FaultList faults;
+    private final List<Step> steps;
+    private final byte[] good;
+    private final List<Suspect> classes;
+    /** Each class's lamps, {@code [step * lamps + lamp]}, in the order of {@link #classes}. */
+    private final List<byte[]> responses;
+
+    /** One class of faults the plan cannot tell apart, with its score against an observation. */
+    public record Suspect(int rank, int contradicted, int unpredicted, int unchecked, List<Fault> members,
+                          boolean looksGood) {
+        public Suspect {
+            members = List.copyOf(members);
+        }
+    }
+
+    public Diagnosis(FaultSimulator sim, FaultList faults, List<Step> steps) {
+        this.sim = sim;
+        this.faults = faults;
+        this.steps = List.copyOf(steps);
+        int lamps = sim.circuit().lamps().size();
+        byte[][] e = sim.expected(steps);
+        good = new byte[steps.size() * lamps];
+        for (int s = 0; s < e.length; s++) {
+            System.arraycopy(e[s], 0, good, s * lamps, lamps);
+        }
+        byte[][] resp = sim.responses(faults.all(), steps);
+        Map<ByteBuffer, List<Fault>> byResponse = new HashMap<>();
+        List<ByteBuffer> order = new ArrayList<>();
+        ByteBuffer goodKey = ByteBuffer.wrap(good);
+        byResponse.put(goodKey, new ArrayList<>());
+        order.add(goodKey);
+        for (Fault f : faults.all()) {
+            ByteBuffer k = ByteBuffer.wrap(resp[f.id()]);
+            List<Fault> members = byResponse.get(k);
+            if (members == null) {
+                members = new ArrayList<>();
+                byResponse.put(k, members);
+                order.add(k);
+            }
+            members.add(f);
+        }
+        List<Suspect> cls = new ArrayList<>();
+        for (ByteBuffer k : order) {
+            cls.add(new Suspect(0, 0, 0, 0, byResponse.get(k), k.equals(goodKey)));
+        }
+        this.classes = cls;
+        this.responses = new ArrayList<>();
+        for (ByteBuffer k : order) {
+            responses.add(k.array());
+        }
+    }
+
+    public List<Step> steps() {
+        return steps;
+    }
+
+    /** Every class of faults the plan cannot tell apart (the good-looking class first), unscored. */
+    public List<Suspect> classes() {
+        return classes;
+    }
+
+    /** The class holding fault {@code id}. */
+    public int classOf(int id) {
+        for (int i = 0; i < classes.size(); i++) {
+            for (Fault f : classes.get(i).members()) {
+                if (f.id() == id) {
+                    return i;
+                }
+            }
+        }
+        throw new IllegalArgumentException("no fault " + id);
+    }
+
+    /** What the plan predicts for fault {@code id}: {@code [step][lamp]}, unknowns left blank. */
+    public byte[][] predicted(int id) {
+        byte[] r = responses.get(classOf(id));
+        int lamps = sim.circuit().lamps().size();
+        byte[][] out = new byte[steps.size()][lamps];
+        for (int s = 0; s < steps.size(); s++) {
+            for (int i = 0; i < lamps; i++) {
+                byte b = r[s * lamps + i];
+                out[s][i] = b == FaultSimulator.UNKNOWN ? BLANK : b;
+            }
+        }
+        return out;
+    }
+
+    /** Classes ranked against {@code observed[step][lamp]} (0, 1 or {@link #BLANK}; missing steps are blank). */
+    public List<Suspect> rank(byte[][] observed) {
+        int lamps = sim.circuit().lamps().size();
+        List<Suspect> scored = new ArrayList<>();
+        for (int c = 0; c < classes.size(); c++) {
+            byte[] r = responses.get(c);
+            int bad = 0;
+            int unknown = 0;
+            int unchecked = 0;
+            for (int s = 0; s < Math.min(observed.length, steps.size()); s++) {
+                for (int i = 0; i < Math.min(lamps, observed[s].length); i++) {
+                    byte o = observed[s][i];
+                    byte p = r[s * lamps + i];
+                    if (o == BLANK) {
+                        unchecked += p == FaultSimulator.UNKNOWN ? 0 : 1;
+                        continue;
+                    }
+                    if (p == FaultSimulator.UNKNOWN) {
+                        unknown++;
+                    } else if (p != o) {
+                        bad++;
+                    }
+                }
+            }
+            Suspect k = classes.get(c);
+            if (!k.members().isEmpty() || k.looksGood()) {
+                scored.add(new Suspect(0, bad, unknown, unchecked, k.members(), k.looksGood()));
+            }
+        }
+        scored.sort(Comparator.comparingInt(Suspect::contradicted).thenComparingInt(Suspect::unpredicted)
+                .thenComparingInt(Suspect::unchecked));
+        List<Suspect> out = new ArrayList<>(scored.size());
+        int rank = 0;
+        for (int i = 0; i < scored.size(); i++) {
+            Suspect s = scored.get(i);
+            Suspect p = i == 0 ? null : scored.get(i - 1);
+            if (p == null || s.contradicted() != p.contradicted() || s.unpredicted() != p.unpredicted()
+                    || s.unchecked() != p.unchecked()) {
+                rank = i + 1;
+            }
+            out.add(new Suspect(rank, s.contradicted(), s.unpredicted(), s.unchecked(), s.members(), s.looksGood()));
+        }
+        return out;
+    }
+
+    /**
+     * The step to add after the plan that best splits {@code suspects} (faults, plus the good
+     * machine where a suspect looks good): the one whose largest group of faults showing the
+     * same lamps is smallest; null when no step tells any of them apart.
+     */
+    public Step nextStep(List<Suspect> suspects, Effort effort) {
+        List<Fault> pool = new ArrayList<>();
+        List<Integer> group = new ArrayList<>();
+        for (int i = 0; i < suspects.size(); i++) {
+            for (Fault f : suspects.get(i).members()) {
+                pool.add(f);
+                group.add(0);
+            }
+        }
+        Choice c = bestSplit(pool, group, effort);
+        return c == null ? null : c.step;
+    }
+
+    private record Choice(Step step, long score) {
+    }
+
+    // Scores every (setting, cycles) after the plan by the sum of squares of the groups it leaves.
+    private Choice bestSplit(List<Fault> pool, List<Integer> group, Effort effort) {
+        if (pool.size() < 2) {
+            return null;
+        }
+        List<boolean[]> settings = sim.circuit().inputCount() <= 10
+                ? PlanGenerator.everySetting(sim.circuit().inputCount()) : List.of(new boolean[sim.circuit().inputCount()]);
+        int cycles = effort.maxCycles();
+        int ns = settings.size();
+        long[][][] sig = new long[ns][cycles][pool.size()];
+        sim.eachBatch(pool, (m, base, n) -> {
+            for (Step s : steps) {
+                FaultSimulator.apply(m, s);
+            }
+            LaneMachine scratch = sim.loaded(pool, base, n);
+            for (int s = 0; s < ns; s++) {
+                scratch.copyFrom(m);
+                scratch.setInputs(settings.get(s));
+                for (int k = 0; k < cycles; k++) {
+                    scratch.clock(1);
+                    for (int l = 0; l < n; l++) {
+                        sig[s][k][base + l] = signature(scratch, l);
+                    }
+                }
+            }
+        });
+        long before = squares(group.stream().mapToLong(g -> g).toArray());
+        Choice best = null;
+        for (int k = 0; k < cycles; k++) {
+            for (int s = 0; s < ns; s++) {
+                long[] keys = new long[pool.size()];
+                for (int i = 0; i < keys.length; i++) {
+                    keys[i] = sig[s][k][i] * 1_000_003L + group.get(i);
+                }
+                long score = squares(keys);
+                if (score < before && (best == null || score < best.score)) {
+                    best = new Choice(new Step(settings.get(s), k + 1), score);
+                }
+            }
+        }
+        return best;
+    }
+
+    private long signature(LaneMachine m, int lane) {
+        long h = 1469598103934665603L;
+        for (Lamp lamp : sim.circuit().lamps()) {
+            h = (h ^ FaultSimulator.reading(m, lamp.slot(), lane)) * 1099511628211L;
+        }
+        return h;
+    }
+
+    private static long squares(long[] keys) {
+        long[] k = keys.clone();
+        Arrays.sort(k);
+        long sum = 0;
+        int run = 0;
+        for (int i = 0; i < k.length; i++) {
+            run = i > 0 && k[i] == k[i - 1] ? run + 1 : 1;
+            if (i == k.length - 1 || k[i + 1] != k[i]) {
+                sum += (long) run * run;
+            }
+        }
+        return sum;
+    }
+
+    /**
+     * Extends the plan with distinguishing steps until no class of detected faults holds more
+     * than {@code most} faults, no step splits the large classes further, or the effort budget
+     * runs out. Returns the longer plan's steps.
+     */
+    public static List<Step> extend(FaultSimulator sim, FaultList faults, List<Step> plan, int most, Effort effort) {
+        List<Step> steps = new ArrayList<>(plan);
+        while (steps.size() < effort.maxSteps()) {
+            Diagnosis d = new Diagnosis(sim, faults, steps);
+            List<Fault> pool = new ArrayList<>();
+            List<Integer> group = new ArrayList<>();
+            for (int c = 0; c < d.classes.size(); c++) {
+                Suspect s = d.classes.get(c);
+                if (!s.looksGood() && size(faults, s) > most) {
+                    for (Fault f : s.members()) {
+                        pool.add(f);
+                        group.add(c);
+                    }
+                }
+            }
+            if (pool.isEmpty()) {
+                break;
+            }
+            Choice c = d.bestSplit(pool, group, effort);
+            if (c == null) {
+                break;
+            }
+            steps.add(c.step);
+        }
+        return steps;
+    }
+
+    /** Largest class of detected faults, counting faults that force the same wires once. */
+    public int largestClass() {
+        int most = 0;
+        for (Suspect s : classes) {
+            if (!s.looksGood()) {
+                most = Math.max(most, size(faults, s));
+            }
+        }
+        return most;
+    }
+
+    /** Distinct faults in a class: equivalent faults and faults forcing the same wires count once. */
+    static int size(FaultList faults, Suspect s) {
+        java.util.Set<String> effects = new java.util.HashSet<>();
+        for (Fault f : s.members()) {
+            effects.add(faults.effect(f));
+        }
+        return effects.size();
+    }
+}

@@ -1,0 +1,198 @@
+package org.thermion.faults;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+
+/**
+ * Parallel fault simulation: 64 faults at once, one per lane of a {@link LaneMachine}, each
+ * lane with its own force masks on the one flat program; batches spread over a fixed pool of
+ * threads. Every run starts from the power-up state (latches unknown, program counter 0).
+ * A lamp reading is {@link #ZERO}, {@link #ONE} or {@link #UNKNOWN}; a fault is detected at a
+ * step where the good machine's lamp is known and the faulty one shows the other known value.
+ */
+public final class FaultSimulator implements AutoCloseable {
+    public static final byte ZERO = 0;
+    public static final byte ONE = 1;
+    public static final byte UNKNOWN = 2;
+
+    private final Circuit circuit;
+    private final long[] rom;
+    private final ExecutorService pool;
+    private final int threads;
+
+    /** A simulator over {@code circuit} with program memory {@code rom} (null: none) on {@code threads} threads. */
+    public FaultSimulator(Circuit circuit, long[] rom, int threads) {
+        this.circuit = circuit;
+        this.rom = rom == null ? null : rom.clone();
+        this.threads = Math.max(1, threads);
+        this.pool = Executors.newFixedThreadPool(this.threads, r -> {
+            Thread t = new Thread(r, "fault-sim");
+            t.setDaemon(true);
+            return t;
+        });
+    }
+
+    public Circuit circuit() {
+        return circuit;
+    }
+
+    public int threads() {
+        return threads;
+    }
+
+    LaneMachine machine() {
+        return new LaneMachine(circuit, rom);
+    }
+
+    /** The good machine's lamps after every step: {@code [step][lamp]}. */
+    public byte[][] expected(List<Step> steps) {
+        LaneMachine m = machine();
+        byte[][] out = new byte[steps.size()][];
+        for (int s = 0; s < steps.size(); s++) {
+            apply(m, steps.get(s));
+            out[s] = lamps(m, 0);
+        }
+        return out;
+    }
+
+    /** For each fault, the first step that detects it, or -1. Batches stop once all their faults are caught. */
+    public int[] firstDetection(List<Fault> faults, List<Step> steps) {
+        byte[][] good = expected(steps);
+        int[] first = new int[faults.size()];
+        eachBatch(faults, (m, b, n) -> {
+                long live = n == 64 ? -1L : (1L << n) - 1;
+                long caught = 0L;
+                for (int s = 0; s < steps.size() && caught != live; s++) {
+                    apply(m, steps.get(s));
+                    long now = detected(m, good[s]) & live & ~caught;
+                    for (long w = now; w != 0L; w &= w - 1) {
+                        first[b + Long.numberOfTrailingZeros(w)] = s;
+                    }
+                    caught |= now;
+                }
+                for (long w = live & ~caught; w != 0L; w &= w - 1) {
+                    first[b + Long.numberOfTrailingZeros(w)] = -1;
+                }
+        });
+        return first;
+    }
+
+    /** Every fault's lamps after every step: {@code [fault][step * lamps + lamp]}. */
+    public byte[][] responses(List<Fault> faults, List<Step> steps) {
+        int lamps = circuit.lamps().size();
+        byte[][] out = new byte[faults.size()][steps.size() * lamps];
+        eachBatch(faults, (m, b, n) -> {
+                for (int s = 0; s < steps.size(); s++) {
+                    apply(m, steps.get(s));
+                    for (int i = 0; i < lamps; i++) {
+                        int slot = circuit.lamps().get(i).slot();
+                        for (int l = 0; l < n; l++) {
+                            out[b + l][s * lamps + i] = reading(m, slot, l);
+                        }
+                    }
+                }
+        });
+        return out;
+    }
+
+    /** What one batch does: {@code m} carries faults {@code base .. base+n-1} on lanes 0 .. n-1. */
+    interface BatchJob {
+        void run(LaneMachine m, int base, int n);
+    }
+
+    /** Runs {@code job} on every batch of 64 faults, spread over the pool. */
+    void eachBatch(List<Fault> faults, BatchJob job) {
+        List<Callable<Void>> jobs = new ArrayList<>();
+        for (int base = 0; base < faults.size(); base += LaneMachine.LANES) {
+            int b = base;
+            jobs.add(() -> {
+                int n = Math.min(LaneMachine.LANES, faults.size() - b);
+                job.run(loaded(faults, b, n), b, n);
+                return null;
+            });
+        }
+        run(jobs);
+    }
+
+    /** A machine at power-up with faults {@code from .. from+n-1} on lanes 0 .. n-1. */
+    LaneMachine loaded(List<Fault> faults, int from, int n) {
+        LaneMachine m = machine();
+        for (int l = 0; l < n; l++) {
+            for (Force f : faults.get(from + l).forces()) {
+                m.force(f.slot(), f.value(), 1L << l);
+            }
+        }
+        m.powerUp();
+        return m;
+    }
+
+    static void apply(LaneMachine m, Step s) {
+        m.setInputs(s.inputs());
+        m.clock(s.cycles());
+    }
+
+    /** Lanes whose lamps show a known value other than the good machine's known one. */
+    long detected(LaneMachine m, byte[] good) {
+        long det = 0L;
+        List<Lamp> lamps = circuit.lamps();
+        for (int i = 0; i < good.length; i++) {
+            if (good[i] == UNKNOWN) {
+                continue;
+            }
+            int slot = lamps.get(i).slot();
+            long other = good[i] == ONE ? ~m.v[slot] : m.v[slot];
+            det |= other & ~m.x[slot];
+        }
+        return det;
+    }
+
+    byte[] lamps(LaneMachine m, int lane) {
+        List<Lamp> lamps = circuit.lamps();
+        byte[] out = new byte[lamps.size()];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = reading(m, lamps.get(i).slot(), lane);
+        }
+        return out;
+    }
+
+    static byte reading(LaneMachine m, int slot, int lane) {
+        if ((m.x[slot] >>> lane & 1L) != 0L) {
+            return UNKNOWN;
+        }
+        return (byte) (m.v[slot] >>> lane & 1L);
+    }
+
+    /** Runs jobs on the pool and waits for all; a job's failure is rethrown. */
+    <T> List<T> run(List<? extends Callable<T>> jobs) {
+        try {
+            List<T> out = new ArrayList<>(jobs.size());
+            if (threads == 1) {
+                for (Callable<T> j : jobs) {
+                    out.add(j.call());
+                }
+                return out;
+            }
+            for (Future<T> f : pool.invokeAll(jobs)) {
+                out.add(f.get());
+            }
+            return out;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("fault simulation interrupted", e);
+        } catch (ExecutionException e) {
+            throw new IllegalStateException("fault simulation failed: " + e.getCause(), e.getCause());
+        } catch (Exception e) {
+            throw new IllegalStateException("fault simulation failed: " + e, e);
+        }
+    }
+
+    @Override
+    public void close() {
+        pool.shutdownNow();
+    }
+}
