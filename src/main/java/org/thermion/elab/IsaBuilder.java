@@ -41,6 +41,7 @@ final class IsaBuilder {
         int word = 0;
         List<IsaField> fields = new ArrayList<>();
         Map<String, Span> fieldSpans = new HashMap<>();
+        List<Prop> fieldProps = new ArrayList<>();
         String opcode = null, target = null, select = null;
         Span opcodeSpan = d.span(), targetSpan = d.span(), selectSpan = d.span();
         List<StateBit> state = new ArrayList<>();
@@ -55,18 +56,20 @@ final class IsaBuilder {
                 case "field" -> {
                     String name = r.word("a field name");
                     Span ns = r.lastSpan();
-                    long hi = r.whole("the field's high bit");
+                    // Bounded here, fitted to the word after the block: `word` may come later.
+                    long hi = r.whole("the field's high bit", 0, 62);
                     r.expectSym("..");
-                    long lo = r.whole("the field's low bit");
+                    long lo = r.whole("the field's low bit", 0, 62);
                     if (name != null && !r.failed()) {
                         if (fieldSpans.containsKey(name)) {
                             diags.error(ns, "duplicate field '" + name + "'", "first declared at " + fieldSpans.get(name));
-                        } else if (hi < lo || lo < 0 || (word > 0 && hi >= word)) {
-                            diags.error(p.span(), "field '" + name + "' bits " + hi + ".." + lo + " do not fit a "
-                                    + word + "-bit word", "write fields high..low within 0.." + (word - 1));
+                        } else if (hi < lo) {
+                            diags.error(p.span(), "field '" + name + "' bits " + hi + ".." + lo + " are written low..high",
+                                    "write fields high..low, e.g. " + lo + ".." + hi);
                         } else {
                             fields.add(new IsaField(name, (int) hi, (int) lo));
                             fieldSpans.put(name, ns);
+                            fieldProps.add(p);
                         }
                     }
                 }
@@ -113,6 +116,17 @@ final class IsaBuilder {
             diags.error(d.name().span(), "isa has no word width", "add `word 12` (bits per instruction)");
             return null;
         }
+        List<IsaField> fitting = new ArrayList<>();
+        for (int i = 0; i < fields.size(); i++) {
+            IsaField fd = fields.get(i);
+            if (fd.hi() >= word) {
+                diags.error(fieldProps.get(i).span(), "field '" + fd.name() + "' bits " + fd.hi() + ".." + fd.lo()
+                        + " do not fit a " + word + "-bit word", "write fields high..low within 0.." + (word - 1));
+            } else {
+                fitting.add(fd);
+            }
+        }
+        fields = fitting;
         int opcodeField = field(fields, opcode, opcodeSpan, "opcode", true);
         int targetField = field(fields, target, targetSpan, "target", false);
         int selectField = field(fields, select, selectSpan, "select", false);

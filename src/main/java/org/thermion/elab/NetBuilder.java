@@ -122,6 +122,9 @@ final class NetBuilder {
         if (gates.size() + latches.size() >= LIMIT) {
             throw new TooLarge();
         }
+        if ((gates.size() & 4095) == 4095 && Thread.currentThread().isInterrupted()) {
+            throw new ElaborationInterrupted();
+        }
         int out = dest >= 0 ? dest : temp(modulePath, module);
         for (int i : in) {
             read(i);

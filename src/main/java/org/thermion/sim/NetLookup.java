@@ -54,11 +54,6 @@ public final class NetLookup {
         return open > 0 && name.endsWith("]") ? name.substring(0, open) : null;
     }
 
-    /** True when {@code name} names a whole bus. */
-    public boolean isBus(String name) {
-        return !byName.containsKey(name) && buses.containsKey(name);
-    }
-
     /** The index of a bus bit name ({@code 3} for {@code line[3]}); {@code Integer.MAX_VALUE} when it has none. */
     public static int bitIndex(String name) {
         try {

@@ -240,10 +240,6 @@ public final class Session {
         return assembly;
     }
 
-    public Simulator simulator() {
-        return sim;
-    }
-
     public CurrentMeter meter() {
         return meter;
     }
@@ -304,7 +300,7 @@ public final class Session {
     }
 
     /** The ROM word at the PC: the instruction being fetched or executed this cycle. */
-    public long wordAtPc() {
+    private long wordAtPc() {
         int pc = pc();
         long[] words = assembly.words();
         return pc >= 0 && pc < words.length ? words[pc] : 0;

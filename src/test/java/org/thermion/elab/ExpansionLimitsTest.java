@@ -76,6 +76,35 @@ class ExpansionLimitsTest {
     }
 
     @Test
+    void isaFieldsFitTheWordWhetherTheWordComesBeforeOrAfterThem() {
+        String machine = """
+                module top { in a; out y; latch y on phase 1 = a }
+                machine t { clock { phases 1; period 1 ms }; top top; inputs a; outputs y }
+                """;
+        Diagnostics late = elaborate(machine + """
+                isa t {
+                  field opcode 7..2
+                  field operand 1..0
+                  word 4
+                  opcode opcode
+                  state y = y
+                  op SET 1 { y <- 1 }
+                }
+                """);
+        assertThat(first(late).message()).isEqualTo("field 'opcode' bits 7..2 do not fit a 4-bit word");
+        Diagnostics huge = elaborate(machine + """
+                isa t {
+                  field opcode 99999999999..2
+                  word 4
+                  opcode opcode
+                  state y = y
+                  op SET 1 { y <- 1 }
+                }
+                """);
+        assertThat(first(huge).message()).contains("out of range").contains("99999999999");
+    }
+
+    @Test
     void constantArithmeticThatOverflowsIsAnErrorNotAWrappedWidth() {
         Diagnostics d = elaborate("""
                 module top {

@@ -14,10 +14,6 @@ public final class LogicLane implements Clocked {
         this.hasPc = sim.machine().pc() != null;
     }
 
-    public Simulator simulator() {
-        return sim;
-    }
-
     @Override
     public int phases() {
         return sim.phases();

@@ -17,7 +17,9 @@ public final class OutputRecorder implements RunObserver {
     private final Clocked machine;
     private final Machine model;
     private final List<Watch> outputs;
-    private final String[] last;
+    // Per output: its nets LSB first, and their levels at the last change.
+    private final int[][] nets;
+    private final char[][] last;
     private final int capacity;
     private final boolean settled;
     private final ArrayDeque<OutputChange> changes = new ArrayDeque<>();
@@ -29,7 +31,12 @@ public final class OutputRecorder implements RunObserver {
         this.machine = machine;
         this.model = model;
         this.outputs = Watches.outputs(model);
-        this.last = new String[outputs.size()];
+        this.nets = new int[outputs.size()][];
+        this.last = new char[outputs.size()][];
+        for (int i = 0; i < nets.length; i++) {
+            nets[i] = outputs.get(i).nets();
+            last[i] = new char[nets[i].length];
+        }
         this.capacity = Math.max(1, capacity);
         BitSet latched = new BitSet();
         for (Latch l : model.netlist().latches()) {
@@ -54,7 +61,9 @@ public final class OutputRecorder implements RunObserver {
         changes.clear();
         count = 0;
         for (int i = 0; i < last.length; i++) {
-            last[i] = value(outputs.get(i));
+            for (int b = 0; b < nets[i].length; b++) {
+                last[i][b] = machine.level(nets[i][b]);
+            }
         }
         StringBuilder sb = new StringBuilder();
         model.outputs().forEach(p -> sb.append(machine.level(p.net())));
@@ -69,28 +78,22 @@ public final class OutputRecorder implements RunObserver {
     @Override
     public void phaseSettled(long cycle, int phase) {
         for (int i = 0; i < last.length; i++) {
-            String now = value(outputs.get(i));
-            if (!now.equals(last[i])) {
-                last[i] = now;
+            int[] n = nets[i];
+            char[] was = last[i];
+            boolean changed = false;
+            for (int b = 0; b < n.length; b++) {
+                char now = machine.level(n[b]);
+                changed |= now != was[b];
+                was[b] = now;
+            }
+            if (changed) {
                 count++;
                 if (changes.size() == capacity) {
                     changes.removeFirst();
                 }
-                changes.addLast(new OutputChange(cycle, phase, outputs.get(i).name(), now));
+                changes.addLast(new OutputChange(cycle, phase, outputs.get(i).name(), Levels.text(was)));
             }
         }
-    }
-
-    private String value(Watch w) {
-        int[] nets = w.nets();
-        if (nets.length == 1) {
-            return String.valueOf(machine.level(nets[0]));
-        }
-        char[] bits = new char[nets.length];
-        for (int b = 0; b < bits.length; b++) {
-            bits[b] = machine.level(nets[b]);
-        }
-        return Levels.text(bits);
     }
 
     /** The changes kept, oldest first. */

@@ -70,10 +70,6 @@ public final class RunDriver {
         return this;
     }
 
-    public Clocked machine() {
-        return machine;
-    }
-
     /**
      * Starts (or restarts, after the machine was reset) from cycle 0: rewinds the stimulus,
      * applies its first rows, settles the logic and tells the observers.

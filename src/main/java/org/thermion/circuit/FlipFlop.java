@@ -1,0 +1,51 @@
+package org.thermion.circuit;
+
+/**
+ * A cross-coupled pair of triode halves: each half's plate load to the rail, each grid fed by a
+ * divider from the other half's plate to the bias rail, cathodes on one return. The stored state
+ * says which half conducts; the output (Q) is the first half's plate, high when stored is true.
+ * The steering input is not part of the DC circuit; as a load it is taken as one grid network.
+ */
+public record FlipFlop(String name, KorenTriode tube, double loadOhms, String plateRail, GridNetwork cross,
+                       CathodeReturn cathode) implements StageCircuit {
+
+    public FlipFlop {
+        Checks.positive("flip-flop load ohms", loadOhms);
+        if (cross.seriesOhms() == 0) {
+            throw new IllegalArgumentException("stage " + name + ": cross-coupling needs a series resistor");
+        }
+    }
+
+    public int inputs() {
+        return 0;
+    }
+
+    public boolean logic(boolean[] in, boolean stored) {
+        return stored;
+    }
+
+    public boolean inverting() {
+        return true;
+    }
+
+    public int build(CircuitBuilder b, double[] inputVolts, boolean stored) {
+        int rail = b.rail(plateRail);
+        int k = cathode.attach(b);
+        int qa = b.node("plateA");
+        int qb = b.node("plateB");
+        b.resistor("load", rail, qa, loadOhms);
+        b.resistor("load", rail, qb, loadOhms);
+        int ga = cross.attach(b, qb, "A");
+        int gb = cross.attach(b, qa, "B");
+        b.triode("tubeA", tube, 1, qa, ga, k);
+        b.triode("tubeB", tube, 1, qb, gb, k);
+        double high = b.fixedVolts(rail);
+        b.guess(qa, stored ? high : 0.1 * high);
+        b.guess(qb, stored ? 0.1 * high : high);
+        return qa;
+    }
+
+    public Load inputLoad() {
+        return new GridLoad(cross, tube.grid(), cathode.rail());
+    }
+}

@@ -1,0 +1,110 @@
+package org.thermion.circuit;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Solves stages at one set of rails, caching each distinct (stage, inputs, loads, corner):
+ * a machine of many identical stages costs one solve per kind of use. The stage's own parts
+ * are labelled "driver.", its loads' parts "receiver." (see {@link Corner}). Not thread-safe.
+ */
+public final class StageSolver {
+    /** The role label of the stage being solved. */
+    public static final String DRIVER = "driver";
+    /** The role label of the stages it drives (their inputs are its loads). */
+    public static final String RECEIVER = "receiver";
+
+    private final RailSet rails;
+    private final Map<Key, DcResult> cache = new HashMap<>();
+    private long solves;
+
+    private record Key(String role, StageCircuit stage, List<Double> volts, boolean stored, List<Load> loads,
+                       Corner corner) {
+    }
+
+    public StageSolver(RailSet rails) {
+        this.rails = rails;
+    }
+
+    public RailSet rails() {
+        return rails;
+    }
+
+    /** The stage as a driver, with {@code loads} on its output, at input volts and stored state. */
+    public DcResult solve(StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads, Corner corner) {
+        return solveAs(DRIVER, stage, inputVolts, stored, loads, corner);
+    }
+
+    /** As {@link #solve}, the stage's parts labelled with {@code role}. */
+    public DcResult solveAs(String role, StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads,
+                            Corner corner) {
+        if (inputVolts.length != stage.inputs()) {
+            throw new IllegalArgumentException("stage " + stage.name() + " has " + stage.inputs() + " inputs, got "
+                    + inputVolts.length + " voltages");
+        }
+        List<Double> vs = new ArrayList<>(inputVolts.length);
+        for (double d : inputVolts) {
+            vs.add(d);
+        }
+        Key key = new Key(role, stage, vs, stored, List.copyOf(loads), corner);
+        DcResult r = cache.get(key);
+        if (r == null) {
+            r = compute(role, stage, inputVolts, stored, loads, corner);
+            cache.put(key, r);
+        }
+        return r;
+    }
+
+    /** The toleranced parameters a solve of this stage with these loads depends on. */
+    public Set<Parameter> parameters(String role, StageCircuit stage, List<Load> loads) {
+        CircuitBuilder b = builder(role, stage, new double[stage.inputs()], false, loads, Corner.NOMINAL);
+        return b.parameters();
+    }
+
+    /** Distinct solves computed so far (cache misses). */
+    public long solves() {
+        return solves;
+    }
+
+    /** Entries in the cache. */
+    public int cacheSize() {
+        return cache.size();
+    }
+
+    private CircuitBuilder builder(String role, StageCircuit stage, double[] inputVolts, boolean stored,
+                                   List<Load> loads, Corner corner) {
+        CircuitBuilder b = new CircuitBuilder(rails, corner);
+        b.role(role);
+        int out = stage.build(b, inputVolts, stored);
+        b.role(RECEIVER.equals(role) ? "load" : RECEIVER);
+        for (int i = 0; i < loads.size(); i++) {
+            loads.get(i).attach(b, out, "#" + i);
+        }
+        b.role(role);
+        b.output(out);
+        return b;
+    }
+
+    private DcResult compute(String role, StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads,
+                             Corner corner) {
+        solves++;
+        for (double v : inputVolts) {
+            if (!Double.isFinite(v)) {
+                return new NoDcSolution(stage.name(), "input voltage is not a number: " + v);
+            }
+        }
+        CircuitBuilder b = builder(role, stage, inputVolts, stored, loads, corner);
+        if (b.missingRail() != null) {
+            return new NoDcSolution(stage.name(), "no rail named " + b.missingRail());
+        }
+        Circuit c = b.build();
+        DcSolver.Solution s = DcSolver.solve(c);
+        if (s.volts() == null) {
+            return new NoDcSolution(stage.name(), s.failure());
+        }
+        return PointReader.read(stage.name(), c, s, rails, role + ".");
+    }
+}
