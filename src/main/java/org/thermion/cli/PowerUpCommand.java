@@ -1,6 +1,7 @@
 package org.thermion.cli;
 
 import org.thermion.cli.report.Format;
+import org.thermion.lang.SourceText;
 import org.thermion.model.Machine;
 import org.thermion.power.startup.BypassDelay;
 import org.thermion.power.startup.CurrentPlot;
@@ -20,7 +21,6 @@ import picocli.CommandLine.Model.CommandSpec;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -52,6 +52,9 @@ final class PowerUpCommand implements Callable<Integer> {
     @Option(names = "--csv", paramLabel = "FILE", description = "Write the time series to FILE (RFC 4180): time_seconds, "
             + "RAIL_amps and RAIL_volts per rail (signed as declared), heater_N_kelvin per row N of the heaters table.")
     Path csv;
+
+    @Option(names = OutputFiles.REPLACE, description = "Let --csv replace an existing file that is not an earlier time series.")
+    boolean replace;
 
     @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (the report's tables; --csv FILE writes the time series); default ${DEFAULT-VALUE}.",
             defaultValue = "text")
@@ -149,10 +152,16 @@ final class PowerUpCommand implements Callable<Integer> {
         }
         PowerUpReport report = new PowerUpReport(result, advice);
         if (csv != null) {
-            String problem = writeAtomically(csv, PowerUpSeries.of(result), loader, file);
-            if (problem != null) {
-                err.println("error: " + problem);
-                return ExitCodes.BAD_INPUT;
+            OutputFiles.Refusal no = OutputFiles.check(csv, OutputFiles.Kind.POWERUP_CSV, replace, List.of(file), loader.sources());
+            if (no == null) {
+                try {
+                    OutputFiles.write(csv, PowerUpSeries.of(result), StandardCharsets.UTF_8);
+                } catch (IOException e) {
+                    no = new OutputFiles.Refusal("cannot write " + csv + ": " + SourceText.reason(csv, e), null);
+                }
+            }
+            if (no != null) {
+                return no.print(err);
             }
         }
         format.write(out, report.report(width, !noPlot, ascii ? CurrentPlot.Style.ASCII : CurrentPlot.Style.BLOCKS));
@@ -172,27 +181,5 @@ final class PowerUpCommand implements Callable<Integer> {
                     + "); write NAME=VALUE");
         }
         return names.get(0);
-    }
-
-    /** Writes {@code text} to {@code target} through a temporary file and a rename; refuses to overwrite an input. */
-    static String writeAtomically(Path target, String text, MachineLoader loader, Path input) {
-        Path abs = target.toAbsolutePath().normalize();
-        if (loader.sources().line(abs, 1) != null || loader.sources().line(target.normalize(), 1) != null
-                || OutputFiles.clash(abs, List.of(input)) != null) {
-            return "refusing to write " + target + ": it is an input of this run";
-        }
-        Path dir = abs.getParent();
-        try {
-            if (dir != null && !Files.isDirectory(dir)) {
-                return "cannot write " + target + ": no directory " + dir;
-            }
-            if (Files.isDirectory(abs)) {
-                return "cannot write " + target + ": it is a directory";
-            }
-            OutputFiles.write(abs, text, StandardCharsets.UTF_8);
-            return null;
-        } catch (IOException e) {
-            return "cannot write " + target + ": " + e.getMessage();
-        }
     }
 }

@@ -59,7 +59,7 @@ final class PowerUpReport {
             }
         }
         for (SoftStartResult s : r.softStarts()) {
-            if (s.ohms() > 0 && (!s.withinRating() || !s.bypassed())) {
+            if (s.ohms() > 0 && (!s.withinRating() || !s.bypassed() || !s.contactsOk())) {
                 return false;
             }
         }
@@ -209,6 +209,12 @@ final class PowerUpReport {
                 .column("peak", "peak", WATTS)
                 .column("mean", "mean", WATTS)
                 .column("within_rating", "within rating", FLAG)
+                .column("needed", "needed", WATTS, "the continuous rating its temperature rise asks")
+                .column("suggested", "suggested", WATTS, "a commonly sold rating at least that")
+                .column("contact_rating", "contacts", AMPS, "the bypass contacts' declared rating")
+                .column("make", "make", AMPS, "the current the contacts make (the bypass peak)")
+                .column("carry", "carry", AMPS, "the current they carry at the end of the run")
+                .column("contacts_ok", "contacts ok", FLAG)
                 .column("settle", "settle", SECONDS)
                 .column("resting", "resting", AMPS);
         for (SoftStartResult s : r.softStarts()) {
@@ -216,7 +222,10 @@ final class PowerUpReport {
             t.row(s.name(), r.rail(s.rail()).name(), s.ohms(), Double.isInfinite(s.ratedWatts()) ? new Absent("no rating") : s.ratedWatts(),
                     s.thyratron(), Double.isNaN(s.triggerTime()) ? new Absent("did not fire") : s.triggerTime(),
                     s.bypassed() ? s.bypassTime() : new Absent("not bypassed"), s.joules(), s.peakWatts(), s.meanWatts(),
-                    s.withinRating(), a == null || Double.isNaN(a.settleSeconds()) ? new Absent("not settled") : a.settleSeconds(),
+                    s.withinRating(), s.neededWatts(), Double.isNaN(s.suggestedWatts()) ? new Absent("beyond the common list") : s.suggestedWatts(),
+                    Double.isNaN(s.contactAmps()) ? new Absent("no rating") : s.contactAmps(),
+                    Double.isNaN(s.makeAmps()) ? new Absent("never closed") : s.makeAmps(), s.carryAmps(), s.contactsOk(),
+                    a == null || Double.isNaN(a.settleSeconds()) ? new Absent("not settled") : a.settleSeconds(),
                     a == null ? new Absent("not settled") : a.restingAmps());
         }
         return t;
@@ -243,6 +252,14 @@ final class PowerUpReport {
                     + (Double.isInfinite(s.ratedWatts()) ? "" : s.withinRating() ? ": within its rating"
                     : ": OVER its " + Numbers.si(s.ratedWatts(), WATTS) + " rating")
                     + (Double.isInfinite(s.ratedWatts()) ? "" : String.format(Locale.ROOT, " (peak %.1f x rating)", s.peakWatts() / s.ratedWatts())));
+            out.add("  rating    by temperature rise, " + String.format(Locale.ROOT, "%.3g x rated power for %.3g s",
+                    s.rating().multiple(), s.rating().seconds()) + " (common practice): asks at least "
+                    + Numbers.si(s.neededWatts(), WATTS) + " continuous"
+                    + (Double.isNaN(s.suggestedWatts()) ? "" : ", a " + Numbers.si(s.suggestedWatts(), WATTS) + " resistor"));
+            if (!Double.isNaN(s.contactAmps())) {
+                out.add("  contacts  make " + Numbers.si(s.makeAmps(), AMPS) + ", carry " + Numbers.si(s.carryAmps(), AMPS)
+                        + " against " + Numbers.si(s.contactAmps(), AMPS) + ": " + (s.contactsOk() ? "ok" : "OVER RATING"));
+            }
             BypassDelay.Advice a = adviceFor(s.name());
             if (a != null) {
                 out.add("  delay     " + (Double.isNaN(a.settleSeconds()) ? "with the relay held open the current has not settled within "
@@ -320,11 +337,19 @@ final class PowerUpReport {
                 .column("peak_ok", "peak ok", FLAG)
                 .column("fire", "fired", SECONDS)
                 .column("heated_long_enough", "heated", FLAG)
+                .column("coil_at_fire", "coil at fire", VOLTS, "the coil's voltage when the tube fired")
+                .column("coil_max", "coil max", VOLTS, "the most the coil saw during the run")
+                .column("openings", "openings", COUNT, "times the relay opened again below its drop-out (chatter)")
+                .column("closed", "closed", FLAG)
                 .column("ok", "ok", FLAG);
         for (RelayDriverCheck c : r.relayChecks()) {
             t.row(c.tube(), c.railName(), c.railVolts(), c.arcDropVolts(), c.plateOhms(), c.relay().coilOhms(), c.coilVolts(),
                     c.coilAmps(), c.picksUp(), c.coilNotOverdriven(), c.averageOk(), c.peakOk(),
-                    Double.isNaN(c.fireTime()) ? new Absent("did not fire") : c.fireTime(), c.heatedLongEnough(), c.ok());
+                    Double.isNaN(c.fireTime()) ? new Absent("did not fire") : c.fireTime(), c.heatedLongEnough(),
+                    c.coil() == null || Double.isNaN(c.coil().atFireVolts()) ? new Absent("did not fire") : c.coil().atFireVolts(),
+                    c.coil() == null ? new Absent("not followed") : c.coil().maxVolts(),
+                    c.coil() == null ? new Absent("not followed") : (Object) (long) c.coil().openings(),
+                    c.coil() == null ? new Absent("not followed") : c.coil().closed(), c.ok());
         }
         return t;
     }
@@ -339,6 +364,15 @@ final class PowerUpReport {
             out.add("  coil      " + Numbers.si(c.coilVolts(), VOLTS) + String.format(Locale.ROOT, " (%.0f %% of rated %s), pick-up %s: ",
                     100 * c.ratedRatio(), Numbers.si(c.relay().ratedVolts(), VOLTS), Numbers.si(pick, VOLTS))
                     + (!c.picksUp() ? "DOES NOT PICK UP" : !c.coilNotOverdriven() ? "OVERDRIVEN (over +10 %)" : "ok"));
+            if (c.coil() != null && !Double.isNaN(c.coil().atFireVolts())) {
+                out.add("  in run    coil " + Numbers.si(c.coil().atFireVolts(), VOLTS) + " at firing, at most "
+                        + Numbers.si(c.coil().maxVolts(), VOLTS) + " at " + Numbers.si(c.coil().maxTime(), SECONDS)
+                        + (c.chatters() ? "; CHATTER: opened " + c.coil().openings() + " times below drop-out, first at "
+                        + Numbers.si(c.coil().firstOpening(), SECONDS) : ""));
+            }
+            if (c.coil() != null && !c.coil().closed()) {
+                out.add("  why open  " + c.coil().whyOpen());
+            }
             out.add("  tube      " + Numbers.si(c.coilAmps(), AMPS) + " continuous against " + Numbers.si(c.avgRatingAmps(), AMPS)
                     + " average and " + Numbers.si(c.peakRatingAmps(), AMPS) + " peak: " + (c.averageOk() && c.peakOk() ? "ok" : "OVER RATING"));
             out.add("  heating   " + (Double.isNaN(c.fireTime()) ? "did not fire" : "fired " + Numbers.si(c.fireTime(), SECONDS) + " after switch-on")

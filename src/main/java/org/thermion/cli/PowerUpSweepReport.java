@@ -4,6 +4,7 @@ import org.thermion.cli.report.Absent;
 import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
+import org.thermion.power.startup.PreferredValues;
 import org.thermion.power.startup.ResistorSweep;
 
 import static org.thermion.cli.report.Unit.AMPS;
@@ -32,6 +33,11 @@ final class PowerUpSweepReport {
         rep.field("rated", WATTS, Double.isInfinite(s.ratedWatts()) ? new Absent("no rating") : s.ratedWatts());
         ResistorSweep.Row best = s.recommended();
         rep.field("recommended", OHMS, best == null ? NONE : best.ohms());
+        ResistorSweep.Row pref = s.preferred();
+        rep.field("preferred", OHMS, pref == null ? NONE : pref.ohms());
+        rep.field("preferred_series", pref == null ? NONE : PreferredValues.isE12(pref.ohms()) ? "E12" : "E24");
+        rep.field("preferred_rating", WATTS, pref == null || Double.isNaN(s.preferredWatts())
+                ? new Absent("beyond the common list") : s.preferredWatts());
         rep.field("caution", PowerUpReport.CAUTION);
         rep.text("soft-start resistor sweep for " + s.softStart() + " on " + s.rail() + " (limit "
                 + (Double.isInfinite(s.limitAmps()) ? "none" : Numbers.si(s.limitAmps(), AMPS)) + ", rating "
@@ -60,7 +66,13 @@ final class PowerUpSweepReport {
         rep.text(best == null ? "no value in the range keeps the supply within its limit and the resistor within its rating"
                 : "recommended: " + Numbers.si(best.ohms(), OHMS) + " (larger peak " + Numbers.si(best.worstPeak(), AMPS)
                 + ", bypass at " + Numbers.si(best.bypassTime(), SECONDS) + ", mean " + Numbers.si(best.meanWatts(), WATTS)
-                + " in the resistor)", "", PowerUpReport.CAUTION);
+                + " in the resistor)");
+        if (pref != null) {
+            rep.text("preferred value: " + Numbers.si(pref.ohms(), OHMS) + (PreferredValues.isE12(pref.ohms()) ? " (E12)" : " (E24)")
+                    + ", " + (Double.isNaN(s.preferredWatts()) ? "a rating beyond the common list" : Numbers.si(s.preferredWatts(), WATTS))
+                    + " (larger peak " + Numbers.si(pref.worstPeak(), AMPS) + ")");
+        }
+        rep.text("", PowerUpReport.CAUTION);
         return rep;
     }
 
