@@ -13,12 +13,11 @@ import org.thermion.lang.Diagnostics;
 import org.thermion.lang.SourceSet;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
+import org.thermion.testing.Golden;
 
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 
 /**
@@ -134,17 +133,10 @@ final class UiFixture {
     }
 
     /**
-     * Compares the screen with a golden file under src/test/resources/org/thermion/tui/.
-     * With -Dthermion.golden=write the file is written instead (review it before committing).
+     * Compares the screen with a golden file under src/test/resources/org/thermion/tui/
+     * through {@link Golden} ({@code -Dgolden.update=true} rewrites it: review it before committing).
      */
-    void assertGolden(String name) throws IOException {
-        Path file = Path.of("src", "test", "resources", "org", "thermion", "tui", name);
-        String actual = text();
-        if ("write".equals(System.getProperty("thermion.golden"))) {
-            Files.writeString(file, actual, StandardCharsets.UTF_8);
-            return;
-        }
-        String expected = Files.readString(file, StandardCharsets.UTF_8);
-        org.assertj.core.api.Assertions.assertThat(actual).as("screen against golden " + name).isEqualTo(expected);
+    void assertGolden(String name) {
+        Golden.assertMatches(Path.of("src", "test", "resources", "org", "thermion", "tui", name), text());
     }
 }
