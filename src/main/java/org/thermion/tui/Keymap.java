@@ -40,6 +40,7 @@ final class Keymap {
                 case 'p': return of(Command.STEP_PHASE);
                 case 'c': return of(Command.STEP_CYCLE);
                 case ' ': case 'g': return of(Command.RUN_PAUSE);
+                case 't': return of(Command.PACE);
                 case 'r': return of(Command.RESET);
                 case 'b': return of(Command.BREAKPOINT);
                 case 'B': return of(Command.CLEAR_BREAKPOINTS);
@@ -91,6 +92,7 @@ final class Keymap {
         h.add(new HelpLine("p", "step one clock phase"));
         h.add(new HelpLine("c  Enter", "step one cycle (one instruction)"));
         h.add(new HelpLine("Space  g", "run / pause"));
+        h.add(new HelpLine("t", "runs at the machine's own clock, or flat out"));
         h.add(new HelpLine("r", "reset: latches to power-up state, PC 0"));
         for (int i = 0; i < inputNames.size(); i++) {
             String key = i < INPUT_KEYS.length() ? String.valueOf(INPUT_KEYS.charAt(i)) : "-";
@@ -107,14 +109,14 @@ final class Keymap {
             f.append(i == 0 ? "" : ", ").append(PANEL_KEYS[i].tab);
         }
         h.add(new HelpLine("F2 F3 F4 F5", "bring forward " + f));
-        h.add(new HelpLine("w", "power-up view (rail current from switch-on); again to leave"));
+        h.add(new HelpLine("w", "power-up view: rail current from switch-on; w leaves"));
         h.add(new HelpLine("[ ]  Left Right", "previous / next rail in the power-up view"));
-        h.add(new HelpLine("?  h  F1", "this help; Space turns a long one's page, other keys close it"));
+        h.add(new HelpLine("?  h  F1", "this help; Space: next page, other keys close it"));
         h.add(new HelpLine("Esc", "close help or the power-up view"));
         h.add(new HelpLine("q  Ctrl-C", "quit"));
         h.add(new HelpLine("", ""));
         h.add(new HelpLine(Glyphs.LAMP_ON + " " + Glyphs.LAMP_OFF + " " + Glyphs.LAMP_UNKNOWN,
-                "lamp lit, dark, unknown (never set since power-up, or lost)"));
+                "lamp lit, dark, unknown (never set, or lost)"));
         h.add(new HelpLine(Glyphs.SWITCH_ON + " " + Glyphs.SWITCH_OFF, "switch on, off"));
         h.add(new HelpLine(Glyphs.PC + " " + Glyphs.PC_NEXT, "instruction in flight, next to be fetched"));
         h.add(new HelpLine(Glyphs.BREAKPOINT + " " + Glyphs.CURSOR, "breakpoint, listing cursor"));

@@ -90,8 +90,10 @@ final class StatusLines {
         String inst = (s.midCycle() ? "in flight " : "next up ") + at + "   ";
         String state;
         if (s.running()) {
-            String rate = v.cyclesPerSecond > 0 ? String.format("  %,.0f cycles/s", v.cyclesPerSecond) : "";
-            state = "\u25B6 running" + rate;
+            // The speed as a multiple of the real machine's: what a builder compares with.
+            double real = v.cyclesPerSecond * s.machine().clock().periodSeconds();
+            String rate = v.cyclesPerSecond > 0 ? String.format("  %,.0f cycles/s = %s real", v.cyclesPerSecond, times(real)) : "";
+            state = "\u25B6 running" + (v.machineSpeed ? " at machine speed" : "") + rate;
         } else {
             state = "\u25A0 stopped: " + s.stop().text();
         }
@@ -108,6 +110,11 @@ final class StatusLines {
         if (!v.message.isEmpty() && x + 3 < cols) {
             c.text(x + 3, row, Canvas.fit(v.message, cols - x - 3), Palette.KEY, Palette.OVERLAY_BACKGROUND);
         }
+    }
+
+    /** A speed ratio: two decimals below 10, whole above. */
+    static String times(double ratio) {
+        return ratio < 10 ? String.format("%.2f\u00D7", ratio) : String.format("%,.0f\u00D7", ratio);
     }
 
     /** The source of the instruction at the PC without its label and comment, or its opcode. */
@@ -138,7 +145,7 @@ final class StatusLines {
         } else {
             String sw = inputs == 0 ? "" : inputs == 1 ? "1" : inputs <= 10 ? "1-" + Keymap.INPUT_KEYS.charAt(inputs - 1) : "1-0 !-)";
             hints = new String[][] {{"p", "phase"}, {"c", "cycle"}, {"Space", "run/pause"}, {"r", "reset"},
-                {sw, "switches"}, {"b", "breakpoint"}, {"w", "power-up"}, {"Tab", "panels"}, {"?", "help"}, {"q", "quit"}};
+                {sw, "switches"}, {"b", "breakpoint"}, {"t", "pace"}, {"w", "power-up"}, {"Tab", "panels"}, {"?", "help"}, {"q", "quit"}};
         }
         // Help and quit always stay, and the panel key while panels are hidden; the others give way from the right.
         int keep = panelsHidden ? 3 : 2;

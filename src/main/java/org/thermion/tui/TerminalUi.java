@@ -34,6 +34,7 @@ public final class TerminalUi {
     private boolean quit;
     private long rateCycles;
     private long rateSince = System.nanoTime();
+    private final Pace pace;
 
     public TerminalUi(Screen screen, Session session, String program, PowerUpView powerUp) {
         this.screen = screen;
@@ -45,6 +46,7 @@ public final class TerminalUi {
             names.add(p.name());
         }
         this.help = Keymap.help(names);
+        this.pace = new Pace(session.machine().clock().periodSeconds());
         int first = session.listingIndex(session.pc());
         view.cursor = Math.max(0, first);
         // Open at the instruction, not at the file's header comments: a few lines of context above it.
@@ -83,12 +85,21 @@ public final class TerminalUi {
             view.cyclesPerSecond = 0;
             rateCycles = 0;
             rateSince = System.nanoTime();
+            pace.restart();
             return 0;
         }
         long start = System.nanoTime();
         long done = 0;
-        while (session.running() && System.nanoTime() - start < nanos) {
-            done += session.run(BATCH);
+        if (view.machineSpeed) {
+            long due = pace.due(start);
+            while (session.running() && done < due && System.nanoTime() - start < nanos) {
+                done += session.run(Math.min(BATCH, due - done));
+            }
+            pace.ran(done);
+        } else {
+            while (session.running() && System.nanoTime() - start < nanos) {
+                done += session.run(BATCH);
+            }
         }
         rateCycles += done;
         long now = System.nanoTime();
@@ -179,6 +190,11 @@ public final class TerminalUi {
                     moveCursor(pcLine, last);
                 }
                 view.followPc = true;
+            }
+            case PACE -> {
+                view.machineSpeed = !view.machineSpeed;
+                pace.restart();
+                view.message = view.machineSpeed ? "runs at the machine's own clock" : "runs flat out";
             }
             case NEXT_PANEL, PREVIOUS_PANEL -> {
                 Layout.Plan now = plan(screen.getTerminalSize());

@@ -20,5 +20,7 @@ final class View {
     Mode mode = Mode.MAIN;
     int rail;
     double cyclesPerSecond;
+    /** Runs keep to the machine's declared clock instead of going flat out. */
+    boolean machineSpeed;
     String message = "";
 }

@@ -220,7 +220,7 @@ class KeyHandlingTest {
             Map.entry("p", Command.STEP_PHASE),
             Map.entry("c", Command.STEP_CYCLE), Map.entry("Enter", Command.STEP_CYCLE),
             Map.entry(" ", Command.RUN_PAUSE), Map.entry("g", Command.RUN_PAUSE),
-            Map.entry("r", Command.RESET),
+            Map.entry("r", Command.RESET), Map.entry("t", Command.PACE),
             Map.entry("b", Command.BREAKPOINT), Map.entry("B", Command.CLEAR_BREAKPOINTS),
             Map.entry("k", Command.CURSOR_UP), Map.entry("ArrowUp", Command.CURSOR_UP),
             Map.entry("j", Command.CURSOR_DOWN), Map.entry("ArrowDown", Command.CURSOR_DOWN),
