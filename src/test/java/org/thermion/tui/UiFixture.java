@@ -132,11 +132,8 @@ final class UiFixture {
         return "";
     }
 
-    /**
-     * Compares the screen with a golden file under src/test/resources/org/thermion/tui/
-     * through {@link Golden} ({@code -Dgolden.update=true} rewrites it: review it before committing).
-     */
-    void assertGolden(String name) {
+    /** Compares the screen with a golden file under src/test/resources/org/thermion/tui/ ({@link Golden}). */
+    void assertGolden(String name) throws IOException {
         Golden.assertMatches(Path.of("src", "test", "resources", "org", "thermion", "tui", name), text());
     }
 }
