@@ -16,11 +16,19 @@ import java.util.Locale;
 final class NetTrace {
     private final Machine machine;
     private final int maxNets;
+    // Per net: the gate driving it, or -1.
+    private final int[] driver;
 
     /** @param maxNets nets listed per counterexample (the trace lists three times as many gates) */
     NetTrace(Machine machine, int maxNets) {
         this.machine = machine;
         this.maxNets = maxNets;
+        Netlist nl = machine.netlist();
+        this.driver = new int[nl.netCount()];
+        java.util.Arrays.fill(driver, -1);
+        for (Gate g : nl.gates()) {
+            driver[g.output()] = g.id();
+        }
     }
 
     /**
@@ -29,11 +37,6 @@ final class NetTrace {
      */
     List<TraceLine> trace(int[] pins, long[] at, int lane) {
         Netlist nl = machine.netlist();
-        int[] driver = new int[nl.netCount()];
-        java.util.Arrays.fill(driver, -1);
-        for (Gate g : nl.gates()) {
-            driver[g.output()] = g.id();
-        }
         List<TraceLine> out = new ArrayList<>();
         boolean[] seen = new boolean[nl.netCount()];
         java.util.ArrayDeque<int[]> todo = new java.util.ArrayDeque<>();
@@ -67,11 +70,6 @@ final class NetTrace {
     boolean[] cone(int[] pins) {
         Netlist nl = machine.netlist();
         boolean[] in = new boolean[nl.netCount()];
-        int[] driver = new int[nl.netCount()];
-        java.util.Arrays.fill(driver, -1);
-        for (Gate g : nl.gates()) {
-            driver[g.output()] = g.id();
-        }
         java.util.ArrayDeque<Integer> todo = new java.util.ArrayDeque<>();
         for (int p : pins) {
             if (p >= 0) {
