@@ -3,6 +3,7 @@ package org.thermion.cli;
 import org.thermion.asm.Assembly;
 import org.thermion.asm.IntelHex;
 import org.thermion.asm.Listing;
+import org.thermion.lang.SourceText;
 import org.thermion.model.Machine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -14,7 +15,6 @@ import picocli.CommandLine.Spec;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -22,7 +22,7 @@ import java.util.concurrent.Callable;
 /** {@code asm MACHINE PROGRAM}: assemble a program for a machine into Intel HEX and a listing. */
 @Command(name = "asm", mixinStandardHelpOptions = true,
         description = {"Assemble a program for a machine's instruction set.",
-                "Writes Intel HEX (I8HEX) to FILE with -o, else to standard output; --listing prints the listing "
+                "Writes Intel HEX (I8HEX; past 64 KiB, I32HEX with type-04 records) to FILE with -o, else to standard output; --listing prints the listing "
                         + "(instead of the HEX when there is no -o)."})
 final class AsmCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
@@ -33,6 +33,9 @@ final class AsmCommand implements Callable<Integer> {
 
     @Option(names = {"-o", "--output"}, paramLabel = "FILE.hex", description = "Write the Intel HEX image here (atomically).")
     Path output;
+
+    @Option(names = OutputFiles.REPLACE, description = "Let -o replace an existing file that is not an earlier HEX image.")
+    boolean replace;
 
     @Option(names = "--listing", description = "Print the listing: address, word in hex and binary, source line.")
     boolean listing;
@@ -47,21 +50,6 @@ final class AsmCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        if (output != null && (OutputFiles.clash(output, List.of(machineFile, program)) != null
-                || OutputFiles.isExistingSource(output, ".machine", ".asm"))) {
-            err.println("error: refusing to write the HEX image over " + output + ", a source file");
-            err.println("  = name another output file, e.g. -o " + hexNameFor(program));
-            err.flush();
-            return ExitCodes.BAD_INPUT;
-        }
-        if (output != null) {
-            Path dir = output.toAbsolutePath().getParent();
-            if (dir == null || !Files.isDirectory(dir)) {
-                err.println("error: cannot write " + output + ": directory " + dir + " does not exist");
-                err.flush();
-                return ExitCodes.BAD_INPUT;
-            }
-        }
         MachineLoader loader = new MachineLoader();
         Machine m = loader.load(machineFile, err, false);
         if (m == null) {
@@ -71,13 +59,24 @@ final class AsmCommand implements Callable<Integer> {
         if (in == null) {
             return ExitCodes.BAD_INPUT;
         }
+        if (output != null) {
+            OutputFiles.Refusal no = OutputFiles.check(output, OutputFiles.Kind.HEX, replace, List.of(machineFile, program),
+                    loader.sources());
+            if (no != null) {
+                return no.print(err);
+            }
+        }
         Assembly a = in.assembly();
         List<String> hex = IntelHex.encode(a.words(), m.isa().wordBits());
         if (listing) {
             Listing.render(a, m.isa().wordBits(), m.pc().width()).forEach(out::println);
         }
         if (output != null) {
-            OutputFiles.write(output, String.join("\n", hex) + "\n", StandardCharsets.US_ASCII);
+            try {
+                OutputFiles.write(output, String.join("\n", hex) + "\n", StandardCharsets.US_ASCII);
+            } catch (IOException e) {
+                return new OutputFiles.Refusal("cannot write " + output + ": " + SourceText.reason(output, e), null).print(err);
+            }
             long used = a.listing().stream().filter(l -> l.hasWord()).count();
             if (!listing) {
                 out.println(program + ": " + used + " of " + a.words().length + " ROM words used, Intel HEX written to " + output);
@@ -87,11 +86,5 @@ final class AsmCommand implements Callable<Integer> {
         }
         out.flush();
         return ExitCodes.OK;
-    }
-
-    private static String hexNameFor(Path program) {
-        String n = program.getFileName().toString();
-        int dot = n.lastIndexOf('.');
-        return (dot > 0 ? n.substring(0, dot) : n) + ".hex";
     }
 }

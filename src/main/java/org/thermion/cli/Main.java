@@ -26,6 +26,7 @@ public final class Main implements java.util.concurrent.Callable<Integer> {
     static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new Main());
         cl.setExecutionExceptionHandler(new Failures());
+        cl.registerConverter(java.nio.file.Path.class, Main::path);
         cl.setParameterExceptionHandler((ex, a) -> {
             CommandLine c = ex.getCommandLine();
             c.getErr().println("error: " + ex.getMessage());
@@ -33,6 +34,18 @@ public final class Main implements java.util.concurrent.Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         });
         return cl;
+    }
+
+    /** A file name from the command line; one the system cannot take is named as such, not as an exception. */
+    private static java.nio.file.Path path(String name) {
+        if (name.indexOf('\0') >= 0) {
+            throw new CommandLine.TypeConversionException("'" + name.replace('\0', '?') + "' holds a NUL character, which no file name may");
+        }
+        try {
+            return java.nio.file.Path.of(name);
+        } catch (java.nio.file.InvalidPathException e) {
+            throw new CommandLine.TypeConversionException("'" + name + "' is not a file name: " + e.getReason());
+        }
     }
 
     @Override

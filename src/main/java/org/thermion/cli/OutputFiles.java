@@ -1,35 +1,171 @@
 package org.thermion.cli;
 
+import org.thermion.lang.Diagnostics;
+import org.thermion.lang.MachineReader;
+import org.thermion.lang.ProgramReader;
+import org.thermion.lang.SourceSet;
+import org.thermion.lang.ast.SourceFile;
+
 import java.io.BufferedWriter;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.Writer;
 import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import java.util.function.Predicate;
+import java.util.regex.Pattern;
 
 /**
- * Files a command writes: never one the user named as an input, and always through a
- * temporary file in the same directory moved into place, so no reader sees half a file.
+ * Files a command writes. An output never destroys work: it replaces an existing file only
+ * when that file is an earlier output of the same {@link Kind} (told from its content) or
+ * the user passed {@value #REPLACE}; it never replaces an input of the run. It is written to
+ * a temporary file in the same directory and renamed into place, so no reader sees half a
+ * file, and a shutdown hook removes the temporary file when the run is stopped (SIGINT,
+ * SIGTERM): at most the previous version of the target remains, whole.
  */
 final class OutputFiles {
+    /** The option that lets an output replace a file it does not recognise as its own. */
+    static final String REPLACE = "--replace";
+    private static final int HEAD_BYTES = 64 * 1024;
+    private static final Pattern HEX_RECORD = Pattern.compile(":([0-9A-Fa-f]{2}){5,}");
+
     private OutputFiles() {
     }
 
-    /** The input among {@code inputs} that {@code output} would overwrite, or null. */
-    static Path clash(Path output, List<Path> inputs) {
-        for (Path in : inputs) {
-            if (in != null && same(output, in)) {
-                return in;
+    /** What a command writes, and how an earlier output of it is recognised from the start of its text. */
+    enum Kind {
+        HEX("an Intel HEX image", OutputFiles::isHex),
+        VCD("a value change dump", head -> head.startsWith("$date") && head.contains("$version\n  thermion")),
+        POWERUP_CSV("a power-up time series", head -> head.startsWith("time_s,"));
+
+        final String noun;
+        private final Predicate<String> earlier;
+
+        Kind(String noun, Predicate<String> earlier) {
+            this.noun = noun;
+            this.earlier = earlier;
+        }
+    }
+
+    /** Why an output may not be written: the message (after "error: ") and what to do. */
+    record Refusal(String message, String hint) {
+        /** Prints the refusal to {@code err} and gives the exit code for bad input. */
+        int print(java.io.PrintWriter err) {
+            err.println("error: " + message);
+            if (hint != null) {
+                err.println("  = " + hint);
+            }
+            err.flush();
+            return ExitCodes.BAD_INPUT;
+        }
+    }
+
+    /**
+     * Null when {@code target} may be written as {@code kind}; otherwise why not. {@code inputs}
+     * are the files named on the command line, {@code sources} every file read so far (includes).
+     */
+    static Refusal check(Path target, Kind kind, boolean replace, List<Path> inputs, SourceSet sources) {
+        String name = target.toString();
+        if (name.isBlank() || target.getFileName() == null) {
+            return new Refusal("no file name given for " + kind.noun, "name the file to write");
+        }
+        Path abs = target.toAbsolutePath().normalize();
+        if (Files.isDirectory(abs)) {
+            return new Refusal("cannot write " + kind.noun + " to " + target + ": it is a directory", "name a file in it");
+        }
+        Path dir = abs.getParent();
+        if (dir == null || !Files.isDirectory(dir)) {
+            return new Refusal("cannot write " + target + ": no such directory " + dir, null);
+        }
+        if (!Files.isWritable(dir)) {
+            return new Refusal("cannot write " + target + ": directory " + dir + " is not writable", null);
+        }
+        List<Path> read = new ArrayList<>(inputs);
+        if (sources != null) {
+            read.addAll(sources.files());
+        }
+        for (Path in : read) {
+            if (in != null && same(abs, in)) {
+                return new Refusal("refusing to write " + kind.noun + " over " + target + ", which is an input of this run",
+                        "name another file");
             }
         }
-        return null;
+        if (!Files.exists(abs, LinkOption.NOFOLLOW_LINKS)) {
+            return null;
+        }
+        if (!Files.isRegularFile(abs)) {
+            return new Refusal("cannot write " + target + ": it is not a regular file", "name a plain file");
+        }
+        if (replace) {
+            return null;
+        }
+        String head = head(abs);
+        if (head != null && kind.earlier.test(head) && (kind != Kind.HEX || isHexFile(abs))) {
+            return null;
+        }
+        return new Refusal("refusing to replace " + target + ": it exists and is not " + kind.noun + " written earlier"
+                + (head == null ? "" : reads(abs, head)),
+                "pass " + REPLACE + " to replace it anyway, or name another file");
+    }
+
+    /** ", it reads as ..." when the file's start looks like one of our inputs; else empty. */
+    private static String reads(Path file, String head) {
+        if (head.indexOf('\0') >= 0) {
+            return "";
+        }
+        Diagnostics d = new Diagnostics();
+        SourceFile f = MachineReader.parse(file, head, d);
+        if (!d.hasErrors() && !f.decls().isEmpty()) {
+            return " (it reads as a machine description)";
+        }
+        d = new Diagnostics();
+        boolean statements = ProgramReader.parse(file, head, d).lines().stream().anyMatch(l -> l.statement() != null);
+        if (!d.hasErrors() && statements) {
+            return " (it reads as a program)";
+        }
+        String first = head.lines().findFirst().orElse("");
+        if (first.contains(",") && first.chars().filter(Character::isLetter).count() > 0) {
+            return " (it reads as a table such as a stimulus)";
+        }
+        return "";
+    }
+
+    /** The first 64 KiB of {@code file} as text, or null when unreadable. */
+    private static String head(Path file) {
+        try (InputStream in = Files.newInputStream(file)) {
+            return new String(in.readNBytes(HEAD_BYTES), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            return null;
+        }
+    }
+
+    private static boolean isHex(String head) {
+        List<String> lines = head.lines().filter(l -> !l.isBlank()).toList();
+        return !lines.isEmpty() && lines.stream().allMatch(l -> HEX_RECORD.matcher(l.strip()).matches());
+    }
+
+    /** A whole file of records ending with the end-of-file record (HEX images are small). */
+    private static boolean isHexFile(Path file) {
+        try {
+            if (Files.size(file) > 64L * 1024 * 1024) {
+                return false;
+            }
+            List<String> lines = Files.readAllLines(file, StandardCharsets.US_ASCII).stream().filter(l -> !l.isBlank()).toList();
+            return !lines.isEmpty() && lines.stream().allMatch(l -> HEX_RECORD.matcher(l.strip()).matches())
+                    && lines.get(lines.size() - 1).strip().equalsIgnoreCase(":00000001FF");
+        } catch (IOException | RuntimeException e) {
+            return false;
+        }
     }
 
     private static boolean same(Path a, Path b) {
@@ -41,20 +177,6 @@ final class OutputFiles {
             // Fall back to comparing the names.
         }
         return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
-    }
-
-    /** True when {@code p} exists and its name ends in one of {@code endings}: a source, never replaced by an output. */
-    static boolean isExistingSource(Path p, String... endings) {
-        String n = p.getFileName() == null ? "" : p.getFileName().toString();
-        if (!Files.exists(p)) {
-            return false;
-        }
-        for (String e : endings) {
-            if (n.endsWith(e)) {
-                return true;
-            }
-        }
-        return false;
     }
 
     /** Writes {@code text} to {@code target} in {@code charset}, all at once or not at all. */
@@ -70,6 +192,7 @@ final class OutputFiles {
         private final Path target;
         private final Path tmp;
         private final BufferedWriter writer;
+        private final Thread cleanup;
         private boolean committed;
 
         /** An ASCII file (a VCD, an Intel HEX image). */
@@ -81,8 +204,19 @@ final class OutputFiles {
             this.target = target;
             Path dir = target.toAbsolutePath().getParent();
             this.tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
+            // Stopped by a signal, the JVM runs shutdown hooks: the temporary file goes with it.
+            this.cleanup = new Thread(this::discard, "remove " + tmp.getFileName());
+            Runtime.getRuntime().addShutdownHook(cleanup);
             keepUsualPermissions(target, tmp);
             this.writer = Files.newBufferedWriter(tmp, charset);
+        }
+
+        private void discard() {
+            try {
+                Files.deleteIfExists(tmp);
+            } catch (IOException e) {
+                // Nothing more can be done while the JVM stops.
+            }
         }
 
         /** Temporary files are private to the owner; the finished file reads like any other. */
@@ -114,9 +248,17 @@ final class OutputFiles {
 
         @Override
         public void close() throws IOException {
-            if (!committed) {
-                writer.close();
-                Files.deleteIfExists(tmp);
+            try {
+                if (!committed) {
+                    writer.close();
+                    Files.deleteIfExists(tmp);
+                }
+            } finally {
+                try {
+                    Runtime.getRuntime().removeShutdownHook(cleanup);
+                } catch (IllegalStateException e) {
+                    // The JVM is stopping; the hook removes the file.
+                }
             }
         }
     }

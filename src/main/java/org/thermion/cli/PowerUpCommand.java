@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.lang.SourceText;
 import org.thermion.model.Machine;
 import org.thermion.power.startup.BypassDelay;
 import org.thermion.power.startup.CurrentPlot;
@@ -19,7 +20,6 @@ import picocli.CommandLine.Model.CommandSpec;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -47,6 +47,9 @@ final class PowerUpCommand implements Callable<Integer> {
 
     @Option(names = "--csv", paramLabel = "FILE", description = "Write the time series (RFC 4180) to FILE.")
     Path csv;
+
+    @Option(names = OutputFiles.REPLACE, description = "Let --csv replace an existing file that is not an earlier time series.")
+    boolean replace;
 
     @Option(names = "--format", paramLabel = "FORMAT", description = "text, json or csv (the time series on standard output); default ${DEFAULT-VALUE}.",
             defaultValue = "text")
@@ -151,10 +154,16 @@ final class PowerUpCommand implements Callable<Integer> {
         }
         PowerUpReport report = new PowerUpReport(result, advice);
         if (csv != null) {
-            String problem = writeAtomically(csv, report.csv(), loader, file);
-            if (problem != null) {
-                err.println("error: " + problem);
-                return ExitCodes.BAD_INPUT;
+            OutputFiles.Refusal no = OutputFiles.check(csv, OutputFiles.Kind.POWERUP_CSV, replace, List.of(file), loader.sources());
+            if (no == null) {
+                try {
+                    OutputFiles.write(csv, report.csv(), StandardCharsets.UTF_8);
+                } catch (IOException e) {
+                    no = new OutputFiles.Refusal("cannot write " + csv + ": " + SourceText.reason(csv, e), null);
+                }
+            }
+            if (no != null) {
+                return no.print(err);
             }
         }
         switch (format) {
@@ -194,27 +203,5 @@ final class PowerUpCommand implements Callable<Integer> {
 
     private static String g(double v) {
         return Double.isNaN(v) ? "" : String.format(java.util.Locale.ROOT, "%.6g", v);
-    }
-
-    /** Writes {@code text} to {@code target} through a temporary file and a rename; refuses to overwrite an input. */
-    static String writeAtomically(Path target, String text, MachineLoader loader, Path input) {
-        Path abs = target.toAbsolutePath().normalize();
-        if (loader.sources().line(abs, 1) != null || loader.sources().line(target.normalize(), 1) != null
-                || OutputFiles.clash(abs, List.of(input)) != null) {
-            return "refusing to write " + target + ": it is an input of this run";
-        }
-        Path dir = abs.getParent();
-        try {
-            if (dir != null && !Files.isDirectory(dir)) {
-                return "cannot write " + target + ": no directory " + dir;
-            }
-            if (Files.isDirectory(abs)) {
-                return "cannot write " + target + ": it is a directory";
-            }
-            OutputFiles.write(abs, text, StandardCharsets.UTF_8);
-            return null;
-        } catch (IOException e) {
-            return "cannot write " + target + ": " + e.getMessage();
-        }
     }
 }

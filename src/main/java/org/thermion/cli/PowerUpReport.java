@@ -41,7 +41,7 @@ final class PowerUpReport {
             }
         }
         for (SoftStartResult s : r.softStarts()) {
-            if (s.ohms() > 0 && (!s.withinRating() || !s.bypassed())) {
+            if (s.ohms() > 0 && (!s.withinRating() || !s.bypassed() || !s.contactsOk())) {
                 return false;
             }
         }
@@ -92,6 +92,14 @@ final class PowerUpReport {
                     + (Double.isInfinite(s.ratedWatts()) ? "" : s.withinRating() ? ": within its rating"
                     : ": OVER its " + Units.watts(s.ratedWatts()) + " rating")
                     + (Double.isInfinite(s.ratedWatts()) ? "" : String.format(Locale.ROOT, " (peak %.1f x rating)", s.peakWatts() / s.ratedWatts())));
+            out.println("  rating    by temperature rise, " + String.format(Locale.ROOT, "%.3g x rated power for %.3g s",
+                    s.rating().multiple(), s.rating().seconds()) + " (common practice): asks at least "
+                    + Units.watts(s.neededWatts()) + " continuous"
+                    + (Double.isNaN(s.suggestedWatts()) ? "" : ", a " + Units.watts(s.suggestedWatts()) + " resistor"));
+            if (!Double.isNaN(s.contactAmps())) {
+                out.println("  contacts  make " + Units.amps(s.makeAmps()) + ", carry " + Units.amps(s.carryAmps()) + " against "
+                        + Units.amps(s.contactAmps()) + ": " + (s.contactsOk() ? "ok" : "OVER RATING"));
+            }
             BypassDelay.Advice a = adviceFor(s.name());
             if (a != null) {
                 out.println("  delay     " + (Double.isNaN(a.settleSeconds()) ? "with the relay held open the current has not settled within "
@@ -142,6 +150,15 @@ final class PowerUpReport {
             out.println("  coil      " + Units.volts(c.coilVolts()) + String.format(Locale.ROOT, " (%.0f %% of rated %s), pick-up %s: ",
                     100 * c.ratedRatio(), Units.volts(c.relay().ratedVolts()), Units.volts(pick))
                     + (!c.picksUp() ? "DOES NOT PICK UP" : !c.coilNotOverdriven() ? "OVERDRIVEN (over +10 %)" : "ok"));
+            if (c.coil() != null && !Double.isNaN(c.coil().atFireVolts())) {
+                out.println("  in run    coil " + Units.volts(c.coil().atFireVolts()) + " at firing, at most "
+                        + Units.volts(c.coil().maxVolts()) + " at " + Units.time(c.coil().maxTime())
+                        + (c.chatters() ? "; CHATTER: opened " + c.coil().openings() + " times below drop-out, first at "
+                        + Units.time(c.coil().firstOpening()) : ""));
+            }
+            if (c.coil() != null && !c.coil().closed()) {
+                out.println("  why open  " + c.coil().whyOpen());
+            }
             out.println("  tube      " + Units.amps(c.coilAmps()) + " continuous against " + Units.amps(c.avgRatingAmps()) + " average and "
                     + Units.amps(c.peakRatingAmps()) + " peak: " + (c.averageOk() && c.peakOk() ? "ok" : "OVER RATING"));
             out.println("  heating   " + (Double.isNaN(c.fireTime()) ? "did not fire" : "fired " + Units.time(c.fireTime()) + " after switch-on")
@@ -204,6 +221,12 @@ final class PowerUpReport {
         out.println(best == null ? "  no value in the range keeps the supply within its limit and the resistor within its rating"
                 : "  recommended: " + ohms(best.ohms()) + " (larger peak " + Units.amps(best.worstPeak()) + ", bypass at "
                 + Units.time(best.bypassTime()) + ", mean " + Units.watts(best.meanWatts()) + " in the resistor)");
+        if (s.preferred() != null) {
+            ResistorSweep.Row p = s.preferred();
+            out.println("  preferred value: " + ohms(p.ohms()) + (org.thermion.power.startup.PreferredValues.isE12(p.ohms())
+                    ? " (E12)" : " (E24)") + ", " + (Double.isNaN(s.preferredWatts()) ? "a rating beyond the common list"
+                    : Units.watts(s.preferredWatts())) + " (larger peak " + Units.amps(p.worstPeak()) + ")");
+        }
         out.println();
         wrap(out, CAUTION, 78);
     }

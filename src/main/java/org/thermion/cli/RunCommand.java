@@ -18,7 +18,6 @@ import picocli.CommandLine.Spec;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.ZonedDateTime;
 import java.time.format.DateTimeFormatter;
@@ -73,6 +72,9 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--vcd", paramLabel = "FILE", description = "Write a value change dump (IEEE 1364) here.")
     Path vcd;
 
+    @Option(names = OutputFiles.REPLACE, description = "Let --vcd replace an existing file that is not an earlier dump.")
+    boolean replace;
+
     @Option(names = "--vcd-all", description = "Dump every named net, not only inputs, outputs, state and watched nets.")
     boolean vcdAll;
 
@@ -110,33 +112,8 @@ final class RunCommand implements Callable<Integer> {
         }
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        if (vcd != null) {
-            List<Path> named = new ArrayList<>(List.of(machineFile));
-            if (program != null) {
-                named.add(program);
-            }
-            if (inputs != null) {
-                named.add(inputs);
-            }
-            Path clash = OutputFiles.clash(vcd, named);
-            if (clash != null) {
-                return usage(err, "refusing to write the VCD over " + clash + ", which is an input of this run",
-                        "name another file for --vcd, e.g. --vcd run.vcd");
-            }
-            if (level == Level.isa) {
-                return usage(err, "--vcd needs --level logic: the ISA level has no nets to dump", null);
-            }
-            Path dir = vcd.toAbsolutePath().getParent();
-            if (dir == null || !Files.isDirectory(dir)) {
-                return usage(err, "cannot write the VCD to " + vcd + ": no such directory " + dir, null);
-            }
-            if (OutputFiles.isExistingSource(vcd, ".machine", ".asm", ".csv", ".hex")) {
-                return usage(err, "refusing to write the VCD over " + vcd + ", which looks like a source file",
-                        "name a .vcd file for --vcd");
-            }
-            if (Files.isDirectory(vcd)) {
-                return usage(err, "cannot write the VCD to " + vcd + ": it is a directory", null);
-            }
+        if (vcd != null && level == Level.isa) {
+            return usage(err, "--vcd needs --level logic: the ISA level has no nets to dump", null);
         }
         if (vcdAll && vcd == null) {
             return usage(err, "--vcd-all needs --vcd FILE", null);
@@ -172,6 +149,19 @@ final class RunCommand implements Callable<Integer> {
         ProgramInput in = ProgramInput.read(m, program, inputs, loader, err);
         if (in == null) {
             return ExitCodes.BAD_INPUT;
+        }
+        if (vcd != null) {
+            List<Path> named = new ArrayList<>(List.of(machineFile));
+            if (program != null) {
+                named.add(program);
+            }
+            if (inputs != null) {
+                named.add(inputs);
+            }
+            OutputFiles.Refusal no = OutputFiles.check(vcd, OutputFiles.Kind.VCD, replace, named, loader.sources());
+            if (no != null) {
+                return no.print(err);
+            }
         }
         Assembly asm = program == null ? new Assembly(new long[0], List.of()) : in.assembly();
         Stimulus stim = in.stimulus();

@@ -124,7 +124,9 @@ final class PropertyTable {
             Property.of("dropout", "voltage below which the relay is sure to drop out", q("drop-out voltage", Unit.VOLT, from(0, 1e3)))
                     .byDefault(percentOfRated(Relay.DROPOUT_FRACTION)).source(Relay.DEFAULTS_SOURCE),
             Property.of("operate", "time from pick-up voltage to closed contacts", q("operate time", Unit.SECOND, from(0, 10)))
-                    .byDefault(Relay.DEFAULT_OPERATE_SECONDS).source(Relay.DEFAULTS_SOURCE));
+                    .byDefault(Relay.DEFAULT_OPERATE_SECONDS).source(Relay.DEFAULTS_SOURCE),
+            Property.of("contacts", "current the contacts may make and carry", q("contact rating", Unit.AMPERE, above(0, 1e4)))
+                    .byDefault("none").source(PLAUSIBLE));
 
     static final PropertyTable SOFTSTART = new PropertyTable("softstart", "softstart NAME on RAIL { ... }",
             Property.of("resistor", "series resistor and its power rating",

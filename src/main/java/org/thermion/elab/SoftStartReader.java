@@ -75,6 +75,7 @@ final class SoftStartReader {
     }
 
     private static Relay relay(PropBlock r) {
-        return new Relay(r.num("coil"), r.num("rated"), r.num("pickup"), r.num("dropout"), r.num("operate"));
+        return new Relay(r.num("coil"), r.num("rated"), r.num("pickup"), r.num("dropout"), r.num("operate"),
+                r.num("contacts"));
     }
 }

@@ -6,66 +6,124 @@ import org.antlr.v4.runtime.CommonTokenStream;
 import org.antlr.v4.runtime.RecognitionException;
 import org.antlr.v4.runtime.Recognizer;
 import org.antlr.v4.runtime.Token;
+import org.antlr.v4.runtime.TokenStream;
 import org.thermion.lang.ast.SourceFile;
 import org.thermion.lang.parser.MachineLexer;
 import org.thermion.lang.parser.MachineParser;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 
-/** Parses the text of a .machine file into an AST, reporting syntax errors as diagnostics. */
+/**
+ * Parses the text of a .machine file into an AST, reporting syntax errors as diagnostics.
+ * After a syntax error each top-level declaration is parsed again on its own ({@link Chunks})
+ * and only its first error is reported: the first error of every broken declaration, and no
+ * train of follow-on errors from the parser losing its place.
+ */
 public final class MachineReader {
     private MachineReader() {
     }
 
-    /** Parses {@code text}; syntax errors go into {@code diags}. The AST is returned even after errors. */
+    /** Parses {@code text}; syntax errors go into {@code diags}. The AST is empty after errors. */
     public static SourceFile parse(Path file, String text, Diagnostics diags) {
         if (!NestingLimit.scan(file, text, '#', true, false, diags).isEmpty()) {
-            return new SourceFile(file, java.util.List.of());
+            return new SourceFile(file, List.of());
         }
+        List<Diagnostic> errors = new ArrayList<>();
+        MachineParser.FileContext tree = parse(file, text, 1, true, errors);
+        if (errors.isEmpty()) {
+            return new AstBuilder(file, diags).file(tree);
+        }
+        int reported = 0;
+        List<Chunks.Chunk> chunks = Chunks.of(text);
+        for (Chunks.Chunk c : chunks) {
+            List<Diagnostic> own = new ArrayList<>();
+            parse(file, text.substring(c.start(), c.end()), c.line(), c.end() == text.length(), own);
+            if (!own.isEmpty()) {
+                diags.add(own.get(0));
+                reported++;
+            }
+        }
+        if (reported == 0) {
+            diags.add(errors.get(0));
+        }
+        return new SourceFile(file, List.of());
+    }
+
+    /** {@code last}: the text runs to the end of the file (else its end is where the next declaration begins). */
+    private static MachineParser.FileContext parse(Path file, String text, int firstLine, boolean last, List<Diagnostic> errors) {
         MachineLexer lexer = new MachineLexer(CharStreams.fromString(text, file.toString()));
+        lexer.setLine(firstLine);
         MachineParser parser = new MachineParser(new CommonTokenStream(lexer));
-        SyntaxErrors listener = new SyntaxErrors(file, diags);
+        SyntaxErrors listener = new SyntaxErrors(file, last ? "end of file" : "the next declaration", errors);
         lexer.removeErrorListeners();
         parser.removeErrorListeners();
         lexer.addErrorListener(listener);
         parser.addErrorListener(listener);
-        MachineParser.FileContext tree = parser.file();
-        if (listener.count > 0) {
-            return new SourceFile(file, java.util.List.of());
-        }
-        return new AstBuilder(file, diags).file(tree);
+        return parser.file();
     }
 
     /** Forwards ANTLR's complaints with our wording and a caret under the offending token. */
     static final class SyntaxErrors extends BaseErrorListener {
         private final Path file;
-        private final Diagnostics diags;
-        int count;
+        private final List<Diagnostic> errors;
+        private final String end;
 
-        SyntaxErrors(Path file, Diagnostics diags) {
+        SyntaxErrors(Path file, String end, List<Diagnostic> errors) {
             this.file = file;
-            this.diags = diags;
+            this.end = end;
+            this.errors = errors;
         }
 
         @Override
         public void syntaxError(Recognizer<?, ?> recognizer, Object offending, int line, int col,
                                 String msg, RecognitionException e) {
-            count++;
             int len = 1;
             String found = null;
             if (offending instanceof Token t && t.getText() != null) {
-                found = t.getType() == Token.EOF ? "end of file" : t.getText();
+                found = t.getType() == Token.EOF ? end : t.getText();
                 len = Math.max(1, t.getText().length());
                 if (t.getType() == MachineLexer.NL) {
                     found = "end of line";
+                    len = 1;
+                }
+                if (t.getType() == Token.EOF && recognizer instanceof org.antlr.v4.runtime.Parser p) {
+                    // The end of the file is just after its last token, not on the empty line after it.
+                    Token last = lastToken(p.getInputStream(), t.getTokenIndex());
+                    if (last != null) {
+                        line = last.getLine();
+                        col = last.getCharPositionInLine() + firstLineLength(last.getText());
+                        len = 1;
+                    }
                 }
             }
             String context = null;
             if (recognizer instanceof org.antlr.v4.runtime.Parser p && p.getContext() != null) {
                 context = SyntaxWording.ruleName(p.getRuleNames()[p.getContext().getRuleIndex()]);
             }
-            String message = SyntaxWording.reword(msg, found, context);
-            diags.error(new Span(file, line, col + 1, line, col + 1 + len), message, SyntaxWording.hint(msg));
+            boolean atEnd = offending instanceof Token t && t.getType() == Token.EOF;
+            String message = atEnd && !msg.startsWith("missing ")
+                    ? "syntax error: " + ("end of file".equals(end) ? "the file ends" : "the next declaration begins")
+                            + " before the block is closed"
+                    : SyntaxWording.reword(msg.replace("<EOF>", end), found, context);
+            String hint = atEnd ? "check that every '{' has its '}'" : SyntaxWording.hint(msg);
+            errors.add(Diagnostic.error(new Span(file, line, col + 1, line, col + 1 + len), message, hint));
+        }
+
+        private static Token lastToken(TokenStream tokens, int eof) {
+            for (int i = eof - 1; i >= 0; i--) {
+                Token t = tokens.get(i);
+                if (t.getType() != MachineLexer.NL && t.getChannel() == Token.DEFAULT_CHANNEL) {
+                    return t;
+                }
+            }
+            return null;
+        }
+
+        private static int firstLineLength(String text) {
+            int nl = text.indexOf('\n');
+            return nl < 0 ? text.length() : nl;
         }
     }
 }

@@ -47,7 +47,7 @@ public final class ProgramReader {
     /** Parses {@code text}; syntax errors go into {@code diags}, unreadable lines carry no statement. */
     public static ProgramSource parse(Path file, String text, Diagnostics diags) {
         ProgramReader r = new ProgramReader(file, diags);
-        List<String> lines = text.lines().toList();
+        List<String> lines = SourceSet.split(text);
         java.util.Set<Integer> tooDeep = NestingLimit.scan(file, text, ';', false, true, diags);
         List<ProgramLine> out = new ArrayList<>(lines.size());
         for (int i = 0; i < lines.size(); i++) {

@@ -60,6 +60,13 @@ public final class SourceText {
      * the message can quote the line.
      */
     public static String decode(Path file, byte[] bytes, SourceSet sources, Diagnostics diags) {
+        if (bytes.length >= 2 && ((bytes[0] & 0xFF) == 0xFF && (bytes[1] & 0xFF) == 0xFE
+                || (bytes[0] & 0xFF) == 0xFE && (bytes[1] & 0xFF) == 0xFF)) {
+            diags.error(new Span(file, 0, 0, 0, 0), file + " is UTF-16 text (it begins with the byte-order mark "
+                    + String.format("%02X %02X", bytes[0] & 0xFF, bytes[1] & 0xFF) + "), not UTF-8",
+                    "save the file as UTF-8");
+            return null;
+        }
         CharsetDecoder strict = StandardCharsets.UTF_8.newDecoder()
                 .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
         ByteBuffer in = ByteBuffer.wrap(bytes);

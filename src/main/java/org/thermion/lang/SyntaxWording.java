@@ -19,6 +19,10 @@ final class SyntaxWording {
     }
 
     static String reword(String msg, String found, String context) {
+        if ("\"".equals(found)) {
+            return "syntax error: a string is not closed: '\"' without its closing '\"' on the same line";
+        }
+        boolean word = found != null && (found.startsWith("end of") || found.startsWith("the next"));
         String m = msg.replace("'\\n'", "end of line").replace("'\\r\\n'", "end of line")
                 .replace("<EOF>", "end of file").replace("NL", "end of line");
         if (m.startsWith("token recognition error at: ")) {
@@ -28,7 +32,7 @@ final class SyntaxWording {
             int exp = m.indexOf(" expecting ");
             String expected = exp >= 0 ? m.substring(exp + " expecting ".length()) : null;
             String what = found == null ? "input" : "'" + found + "'";
-            if ("end of line".equals(found) || "end of file".equals(found)) {
+            if (word) {
                 what = found;
             }
             String where = context == null ? "" : " in " + context;
@@ -42,7 +46,7 @@ final class SyntaxWording {
             return "syntax error: " + (at >= 0 ? m.substring(0, at) : m) + " here";
         }
         if (m.startsWith("no viable alternative")) {
-            return "syntax error: cannot make sense of " + (found == null ? "this" : "'" + found + "'")
+            return "syntax error: cannot make sense of " + (found == null ? "this" : word ? found : "'" + found + "'")
                     + (context == null ? " here" : " in " + context);
         }
         return "syntax error: " + m;

@@ -1,12 +1,13 @@
 package org.thermion.model;
 
 /**
- * Bypass relay coil data: ohms, rated, pick-up and drop-out volts, operate time in seconds.
+ * Bypass relay coil data: ohms, rated, pick-up and drop-out volts, operate time in seconds, and
+ * the current its contacts may make and carry (NaN: not declared).
  * A pick-up or drop-out given as NaN takes its default fraction of the rated voltage, so
  * every relay in a machine carries real thresholds.
  */
 public record Relay(double coilOhms, double ratedVolts, double pickupVolts, double dropoutVolts,
-                    double operateSeconds) {
+                    double operateSeconds, double contactAmps) {
 
     /** Where the defaults below come from. */
     public static final String DEFAULTS_SOURCE = "REFERENCES.md: a 12 V relay data sheet gives a coil of about 100 ohm, "
@@ -30,6 +31,7 @@ public record Relay(double coilOhms, double ratedVolts, double pickupVolts, doub
 
     /** The relay assumed when a soft start declares none: every figure at its default. */
     public static Relay standard() {
-        return new Relay(DEFAULT_COIL_OHMS, DEFAULT_RATED_VOLTS, Double.NaN, Double.NaN, DEFAULT_OPERATE_SECONDS);
+        return new Relay(DEFAULT_COIL_OHMS, DEFAULT_RATED_VOLTS, Double.NaN, Double.NaN, DEFAULT_OPERATE_SECONDS,
+                Double.NaN);
     }
 }

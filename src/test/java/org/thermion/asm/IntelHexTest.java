@@ -76,4 +76,31 @@ class IntelHexTest {
         assertThat(check(recs.get(1))[0]).isEqualTo(4);
         assertThat(check(recs.get(1))[2]).isEqualTo(0x10);
     }
+
+    @Test
+    void anImageOver64KiBOpensEachFurtherSegmentWithAnExtendedLinearAddressRecord() {
+        // 40,000 twelve-bit words are 80,000 bytes: segment 0 holds bytes 0..65535 and
+        // segment 1 bytes 65536..79999 (14,464 bytes = 904 records of 16).
+        long[] rom = new long[40_000];
+        rom[32_767] = 0xABC;  // bytes 65534, 65535: the last two of segment 0
+        rom[32_768] = 0x123;  // bytes 65536, 65537: the first two of segment 1
+        List<String> recs = IntelHex.encode(rom, 12);
+        assertThat(recs).hasSize(4096 + 1 + 904 + 1);
+        // Hand-computed: 10 FFF0 00, then fourteen 00 and 0A BC; the sum 0x10+0xFF+0xF0+0x0A+0xBC = 0x2C5, checksum 0x100 - 0xC5 = 0x3B.
+        assertThat(recs.get(4095)).isEqualTo(":10FFF00000000000000000000000000000000ABC3B");
+        // Type 04 with upper address 0x0001: 02+00+00+04+00+01 = 0x07, checksum 0xF9.
+        assertThat(recs.get(4096)).isEqualTo(":020000040001F9");
+        // Back at offset 0000 within segment 1: 0x10+0x01+0x23 = 0x34, checksum 0x100 - 0x34 = 0xCC.
+        assertThat(recs.get(4097)).isEqualTo(":1000000001230000000000000000000000000000CC");
+        for (String r : recs) {
+            check(r);
+        }
+        assertThat(recs.get(recs.size() - 1)).isEqualTo(":00000001FF");
+    }
+
+    @Test
+    void anImageOfExactly64KiBNeedsNoExtendedRecord() {
+        List<String> recs = IntelHex.encode(new long[65_536], 8);
+        assertThat(recs).hasSize(4096 + 1).noneMatch(r -> r.startsWith(":02000004"));
+    }
 }

@@ -166,7 +166,7 @@ class RunCommandTest {
         Files.writeString(prog, "loop: JMP loop\n");
         Outcome o = run("run", MACHINE, prog.toString(), "--vcd", prog.toString());
         assertThat(o.code()).isEqualTo(ExitCodes.BAD_INPUT);
-        assertThat(o.err()).contains("refusing to write the VCD over " + prog);
+        assertThat(o.err()).contains("refusing to write a value change dump over " + prog);
         assertThat(Files.readString(prog)).isEqualTo("loop: JMP loop\n");
         Path stim = dir.resolve("s.csv");
         Files.writeString(stim, "cycle,manual\n0,1\n");
@@ -185,10 +185,17 @@ class RunCommandTest {
     void theVcdIsWrittenWholeWithNoTemporaryLeft(@TempDir Path dir) throws IOException {
         Path vcd = dir.resolve("run.vcd");
         Files.writeString(vcd, "old");
-        Outcome o = run("run", MACHINE, "programs/pump.asm", "--cycles", "30", "--vcd", vcd.toString(), "--vcd-all");
+        // A file that is not an earlier dump is kept unless --replace says otherwise.
+        Outcome kept = run("run", MACHINE, "programs/pump.asm", "--cycles", "30", "--vcd", vcd.toString());
+        assertThat(kept.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(kept.err()).contains("refusing to replace " + vcd + ": it exists and is not a value change dump written earlier");
+        assertThat(Files.readString(vcd)).isEqualTo("old");
+        Outcome o = run("run", MACHINE, "programs/pump.asm", "--cycles", "30", "--vcd", vcd.toString(), "--vcd-all", "--replace");
         assertThat(o.code()).as(o.err()).isZero();
+        // An earlier dump is replaced without being asked.
+        assertThat(run("run", MACHINE, "programs/pump.asm", "--cycles", "30", "--vcd", vcd.toString()).code()).isZero();
         String text = Files.readString(vcd);
-        assertThat(text).startsWith("$date").contains("$enddefinitions $end").contains("$scope module osel $end");
+        assertThat(text).startsWith("$date").contains("$enddefinitions $end");
         // 30 cycles of 100 us end at 3000 us: the last timestamp.
         assertThat(text.substring(text.lastIndexOf('#'))).startsWith("#3000\n");
         try (Stream<Path> files = Files.list(dir)) {

@@ -43,7 +43,7 @@ class PropertyReferenceTest {
     @Test
     void aRelayWithoutThresholdsGetsTheDataSheetsWorstCase() {
         // REFERENCES.md: a 12 V relay picks up at 7.2 V at most and drops out at 1.2 V at least.
-        Relay r = new Relay(100, 12, Double.NaN, Double.NaN, 0.01);
+        Relay r = new Relay(100, 12, Double.NaN, Double.NaN, 0.01, Double.NaN);
         assertThat(r.pickupVolts()).isCloseTo(7.2, org.assertj.core.data.Offset.offset(1e-9));
         assertThat(r.dropoutVolts()).isCloseTo(1.2, org.assertj.core.data.Offset.offset(1e-9));
         assertThat(PropertyReference.markdown()).contains("60 % of rated").contains("10 % of rated");

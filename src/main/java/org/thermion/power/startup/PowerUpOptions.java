@@ -5,11 +5,12 @@ import java.util.Map;
 /**
  * What to solve: simulated seconds, soft-start resistor overrides by soft-start name (ohms;
  * 0 removes the resistor), the steady draw assumption, the spacing of recorded samples
- * (0: record nothing but the summary), the thermal assumptions, and whether to hold every bypass
- * relay open for the whole run (to see where the current behind the resistors settles).
+ * (0: record nothing but the summary), the thermal assumptions, whether to hold every bypass
+ * relay open for the whole run (to see where the current behind the resistors settles), and the
+ * short-time overload rating soft-start resistors are judged by.
  */
 public record PowerUpOptions(double seconds, Map<String, Double> resistorOhms, DrawMode drawMode, double sampleSeconds,
-                             ThermalAssumptions assumptions, boolean holdBypass) {
+                             ThermalAssumptions assumptions, boolean holdBypass, ResistorRating resistorRating) {
 
     /** Shortest and longest run: below 10 ms nothing warms; an hour is far past any warm-up. */
     public static final double MIN_SECONDS = 0.01;
@@ -35,32 +36,37 @@ public record PowerUpOptions(double seconds, Map<String, Double> resistorOhms, D
 
     /** 30 s, the declared resistors, highest draws, a sample every 10 ms, standard assumptions. */
     public static PowerUpOptions defaults() {
-        return new PowerUpOptions(30, Map.of(), DrawMode.HIGHEST, 0.01, ThermalAssumptions.standard(), false);
+        return new PowerUpOptions(30, Map.of(), DrawMode.HIGHEST, 0.01, ThermalAssumptions.standard(), false,
+                ResistorRating.COMMON_PRACTICE);
     }
 
     public PowerUpOptions withSeconds(double s) {
-        return new PowerUpOptions(s, resistorOhms, drawMode, sampleSeconds, assumptions, holdBypass);
+        return new PowerUpOptions(s, resistorOhms, drawMode, sampleSeconds, assumptions, holdBypass, resistorRating);
     }
 
     public PowerUpOptions withResistor(String softStart, double ohms) {
         Map<String, Double> m = new java.util.LinkedHashMap<>(resistorOhms);
         m.put(softStart, ohms);
-        return new PowerUpOptions(seconds, m, drawMode, sampleSeconds, assumptions, holdBypass);
+        return new PowerUpOptions(seconds, m, drawMode, sampleSeconds, assumptions, holdBypass, resistorRating);
     }
 
     public PowerUpOptions withDrawMode(DrawMode d) {
-        return new PowerUpOptions(seconds, resistorOhms, d, sampleSeconds, assumptions, holdBypass);
+        return new PowerUpOptions(seconds, resistorOhms, d, sampleSeconds, assumptions, holdBypass, resistorRating);
     }
 
     public PowerUpOptions withSampleSeconds(double s) {
-        return new PowerUpOptions(seconds, resistorOhms, drawMode, s, assumptions, holdBypass);
+        return new PowerUpOptions(seconds, resistorOhms, drawMode, s, assumptions, holdBypass, resistorRating);
     }
 
     public PowerUpOptions withHoldBypass(boolean hold) {
-        return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, assumptions, hold);
+        return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, assumptions, hold, resistorRating);
+    }
+
+    public PowerUpOptions withResistorRating(ResistorRating r) {
+        return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, assumptions, holdBypass, r);
     }
 
     public PowerUpOptions withAssumptions(ThermalAssumptions a) {
-        return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, a, holdBypass);
+        return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, a, holdBypass, resistorRating);
     }
 }

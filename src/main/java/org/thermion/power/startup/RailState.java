@@ -101,6 +101,13 @@ final class RailState {
         amps = a;
         volts = vn;
         demand = ask;
+        for (SoftStartState s : thyratronBranches) {
+            // A fired branch conducts while the bus stands above the arc drop (bg is zeroed when it does not).
+            double ib = s.fired && bg > 0 ? Math.max(0, vn - s.soft.branchVolts()) * s.soft.branchSiemens() : 0;
+            s.coilVolts = ib * s.soft.check().relay().coilOhms();
+            s.plateVolts = ib * s.soft.check().plateOhms();
+            s.busVolts = vn;
+        }
         for (StringState st : strings) {
             st.carry(vn);
         }

@@ -21,10 +21,11 @@ import org.thermion.model.Relay;
  * @param peakRatingAmps   the tube's peak cathode current rating (NaN if unknown)
  * @param fireTime         when the tube fired in the transient (NaN: not simulated or never)
  * @param heatingSeconds   cathode heating time the tube asks before anode current (NaN if none declared)
+ * @param coil             what the coil saw in the transient (null: not simulated)
  */
 public record RelayDriverCheck(String tube, String railName, double railVolts, double sourceOhms, double arcDropVolts,
                                double plateOhms, Relay relay, double coilVolts, double coilAmps, double avgRatingAmps,
-                               double peakRatingAmps, double fireTime, double heatingSeconds) {
+                               double peakRatingAmps, double fireTime, double heatingSeconds, CoilTransient coil) {
 
     /** Works out the coil circuit. */
     public static RelayDriverCheck of(String tube, String railName, double railVolts, double sourceOhms,
@@ -33,12 +34,27 @@ public record RelayDriverCheck(String tube, String railName, double railVolts, d
         double drive = Math.abs(railVolts) - arcDropVolts;
         double amps = drive > 0 ? drive / (sourceOhms + plateOhms + relay.coilOhms()) : 0;
         return new RelayDriverCheck(tube, railName, Math.abs(railVolts), sourceOhms, arcDropVolts, plateOhms, relay,
-                amps * relay.coilOhms(), amps, avgRatingAmps, peakRatingAmps, fireTime, heatingSeconds);
+                amps * relay.coilOhms(), amps, avgRatingAmps, peakRatingAmps, fireTime, heatingSeconds, null);
     }
 
-    /** The coil reaches its pick-up voltage (a relay without one declared has {@link Relay#PICKUP_FRACTION} of rated). */
+    /** The same check with what the transient found. */
+    RelayDriverCheck simulated(double fired, CoilTransient c) {
+        return new RelayDriverCheck(tube, railName, railVolts, sourceOhms, arcDropVolts, plateOhms, relay, coilVolts,
+                coilAmps, avgRatingAmps, peakRatingAmps, fired, heatingSeconds, c);
+    }
+
+    /**
+     * The coil picks up: in the transient, the contacts closed; without one, the coil's steady
+     * voltage on the nominal supply reaches the pick-up voltage (a relay without one declared has
+     * {@link Relay#PICKUP_FRACTION} of rated).
+     */
     public boolean picksUp() {
-        return coilVolts >= relay.pickupVolts();
+        return coil != null ? coil.closed() : coilVolts >= relay.pickupVolts();
+    }
+
+    /** The contacts opened again under a sagging supply (chatter). */
+    public boolean chatters() {
+        return coil != null && coil.chattered();
     }
 
     /** Coil voltage over rated. */
@@ -69,6 +85,6 @@ public record RelayDriverCheck(String tube, String railName, double railVolts, d
      * has its voltage from switch-on by design, a rating a builder may knowingly bend (noted instead).
      */
     public boolean ok() {
-        return picksUp() && coilNotOverdriven() && averageOk() && peakOk();
+        return picksUp() && !chatters() && coilNotOverdriven() && averageOk() && peakOk();
     }
 }

@@ -26,8 +26,13 @@ public final class ResistorSweep {
         }
     }
 
-    /** The table and the recommendation ({@code best} is -1 when no value is feasible). */
-    public record Result(String softStart, String rail, double limitAmps, double ratedWatts, List<Row> rows, int best) {
+    /**
+     * The table and the recommendation ({@code best} is -1 when no value is feasible); {@code preferred}
+     * is the recommendation moved to the nearest E24 value (IEC 60063) and solved again (null without one),
+     * with {@code preferredWatts} the commonly sold rating its temperature rise asks.
+     */
+    public record Result(String softStart, String rail, double limitAmps, double ratedWatts, List<Row> rows, int best,
+                         Row preferred, double preferredWatts) {
         public Row recommended() {
             return best < 0 ? null : rows.get(best);
         }
@@ -61,18 +66,29 @@ public final class ResistorSweep {
         List<Row> rows = new ArrayList<>();
         int best = -1;
         for (double r : ohms) {
-            PowerUpResult res = net.solve(o.withResistor(softStart, r));
-            RailTransient rt = res.rail(rail);
-            SoftStartResult sr = res.softStarts().get(k);
-            boolean bypassed = r == 0 || sr.bypassed();
-            Row row = new Row(r, rt.switchOnPeak(), rt.bypassPeak(), sr.bypassTime(), rt.peakDemand(), sr.meanWatts(),
-                    sr.peakWatts(), sr.joules(), rt.withinLimit(), sr.withinRating(), bypassed);
+            Row row = row(net, o, k, rail, r);
             rows.add(row);
             if (row.feasible() && (best < 0 || row.worstPeak() < rows.get(best).worstPeak())) {
                 best = rows.size() - 1;
             }
         }
+        Row preferred = null;
+        double watts = Double.NaN;
+        if (best >= 0 && rows.get(best).ohms() > 0) {
+            double pv = PreferredValues.nearestE24(rows.get(best).ohms());
+            preferred = row(net, o, k, rail, pv);
+            watts = ResistorRating.commonWatts(net.solve(o.withResistor(softStart, pv)).softStarts().get(k).neededWatts());
+        }
         return new Result(softStart, net.machine.rails().get(rail).name(), net.machine.rails().get(rail).limitAmps(),
-                soft.ratedWatts(), List.copyOf(rows), best);
+                soft.ratedWatts(), List.copyOf(rows), best, preferred, watts);
+    }
+
+    private static Row row(StartupNetwork net, PowerUpOptions o, int k, int rail, double r) {
+        PowerUpResult res = net.solve(o.withResistor(net.softs.get(k).name(), r));
+        RailTransient rt = res.rail(rail);
+        SoftStartResult sr = res.softStarts().get(k);
+        boolean bypassed = r == 0 || sr.bypassed();
+        return new Row(r, rt.switchOnPeak(), rt.bypassPeak(), sr.bypassTime(), rt.peakDemand(), sr.meanWatts(),
+                sr.peakWatts(), sr.joules(), rt.withinLimit(), sr.withinRating(), bypassed);
     }
 }

@@ -13,16 +13,37 @@ package org.thermion.power.startup;
  * @param peakWatts     highest dissipation (at switch-on, or while the supply is limited)
  * @param meanWatts     energy over the time the resistor was in circuit
  * @param thyratron     true when a thyratron triggers the bypass
+ * @param neededWatts   the continuous rating the run asks of the resistor: the peak of its power lagged
+ *                      by its thermal time constant ({@link ResistorRating})
+ * @param rating        the short-time overload rating it is judged by
+ * @param contactAmps   the bypass relay's declared contact rating (NaN: none declared)
+ * @param makeAmps      current the contacts make: the rail's bypass peak (NaN: never closed)
+ * @param carryAmps     current they carry at the end of the run
  */
 public record SoftStartResult(String name, int rail, double ohms, double ratedWatts, double triggerTime,
-                              double bypassTime, double joules, double peakWatts, double meanWatts, boolean thyratron) {
+                              double bypassTime, double joules, double peakWatts, double meanWatts, boolean thyratron,
+                              double neededWatts, ResistorRating rating, double contactAmps, double makeAmps,
+                              double carryAmps) {
 
     public boolean bypassed() {
         return !Double.isNaN(bypassTime);
     }
 
-    /** Mean dissipation within the rating (always true when no rating is declared). */
+    /**
+     * Within rating by temperature rise: the lagged power never exceeds the rated power, so a short
+     * overload within the resistor's short-time rating passes (always true when no rating is declared).
+     */
     public boolean withinRating() {
-        return !(meanWatts > ratedWatts);
+        return !(neededWatts > ratedWatts);
+    }
+
+    /** The contacts' declared rating covers the current they make and carry (true when none is declared). */
+    public boolean contactsOk() {
+        return Double.isNaN(contactAmps) || !(makeAmps > contactAmps) && !(bypassed() && carryAmps > contactAmps);
+    }
+
+    /** The smallest commonly sold power rating that covers {@link #neededWatts} (NaN beyond the list). */
+    public double suggestedWatts() {
+        return ResistorRating.commonWatts(neededWatts);
     }
 }

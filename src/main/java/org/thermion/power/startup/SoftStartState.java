@@ -9,6 +9,10 @@ final class SoftStartState {
     final double ohms;
     /** Index of the resistor's energy, joules, in the state vector. */
     final int joules;
+    /** Index of the resistor's lagged power, watts: the continuous rating the run asks of it ({@link ResistorRating}). */
+    final int heat;
+    /** The resistor's thermal time constant, seconds. */
+    final double tau;
     /** The thyratron's heater, when a thyratron triggers the bypass. */
     final HeaterState thyratron;
 
@@ -23,10 +27,25 @@ final class SoftStartState {
     double watts;
     double peakWatts;
 
-    SoftStartState(StartupNetwork.Soft soft, double ohms, int joules, HeaterState thyratron) {
+    // The relay coil of a thyratron trigger: at the point last solved, then what the run saw.
+    double coilVolts;
+    double plateVolts;
+    double busVolts;
+    double atFireVolts = Double.NaN;
+    double maxCoil;
+    double maxCoilTime = Double.NaN;
+    double busAtMax;
+    double plateAtMax;
+    double firstClose = Double.NaN;
+    int openings;
+    double firstOpening = Double.NaN;
+
+    SoftStartState(StartupNetwork.Soft soft, double ohms, int joules, int heat, double tau, HeaterState thyratron) {
         this.soft = soft;
         this.ohms = ohms;
         this.joules = joules;
+        this.heat = heat;
+        this.tau = tau;
         this.thyratron = thyratron;
     }
 
@@ -35,11 +54,25 @@ final class SoftStartState {
         return !bypassed && ohms > 0;
     }
 
-    /** Records the firing at {@code t} and schedules the relay (if its coil picks up and bypasses may close). */
-    void fire(double t, boolean holdBypass) {
+    /** Records the firing at {@code t}; the relay closes once its coil reaches pick-up ({@link #pickUp}). */
+    void fire(double t) {
         fired = true;
         fireTime = t;
-        if (soft.picksUp() && !holdBypass) {
+    }
+
+    /** The coil voltage over pick-up (positive: picks up), continuous while the circuit's topology holds. */
+    double overPickup() {
+        return coilVolts - soft.check().relay().pickupVolts();
+    }
+
+    /** The coil voltage over drop-out (negative: the closed contacts open). */
+    double overDropout() {
+        return coilVolts - soft.check().relay().dropoutVolts();
+    }
+
+    /** The coil reached pick-up at {@code t}: the contacts close one operate time later. */
+    void pickUp(double t) {
+        if (Double.isNaN(bypassAt)) {
             bypassAt = t + soft.operate();
         }
     }
@@ -47,13 +80,58 @@ final class SoftStartState {
     void close(double t) {
         bypassed = true;
         bypassTime = t;
+        if (Double.isNaN(firstClose)) {
+            firstClose = t;
+        }
+    }
+
+    /** The coil fell below drop-out at {@code t}: the contacts open and the resistor is back in circuit. */
+    void drop(double t) {
+        bypassed = false;
+        bypassAt = Double.NaN;
+        openings++;
+        if (Double.isNaN(firstOpening)) {
+            firstOpening = t;
+        }
+    }
+
+    /** Records the coil's voltage at {@code t}. */
+    void observeCoil(double t) {
+        if (fired && Double.isNaN(atFireVolts)) {
+            atFireVolts = coilVolts;
+        }
+        if (fired && (Double.isNaN(maxCoilTime) || coilVolts > maxCoil)) {
+            maxCoil = coilVolts;
+            maxCoilTime = t;
+            busAtMax = busVolts;
+            plateAtMax = plateVolts;
+        }
+    }
+
+    /** What the coil saw (null without a thyratron trigger). */
+    CoilTransient coil() {
+        if (soft.check() == null) {
+            return null;
+        }
+        return new CoilTransient(soft.check().relay().pickupVolts(), soft.check().relay().dropoutVolts(), atFireVolts,
+                maxCoil, maxCoilTime, Math.abs(soft.check().railVolts()), busAtMax, soft.branchVolts(), plateAtMax,
+                firstClose, openings, firstOpening);
     }
 
     void dissipate(double railAmps) {
         watts = bypassed ? 0 : railAmps * railAmps * ohms;
     }
 
-    void observe() {
+    /** Peak of the lagged power so far, watts. */
+    double neededWatts;
+
+    void derivatives(double[] y, double[] d) {
+        d[joules] = watts;
+        d[heat] = (watts - y[heat]) / tau;
+    }
+
+    void observe(double[] y) {
         peakWatts = Math.max(peakWatts, watts);
+        neededWatts = Math.max(neededWatts, y[heat]);
     }
 }

@@ -66,7 +66,7 @@ public final class StartupNetwork {
 
     /** A soft-start network as the solver sees it. */
     record Soft(String name, int rail, double declaredOhms, double ratedWatts, double delay, int thyState,
-                int fromRail, double branchSiemens, double branchVolts, boolean picksUp,
+                int fromRail, double branchSiemens, double branchVolts, double contactAmps,
                 double operate, RelayDriverCheck check) {
         boolean thyratron() {
             return thyState >= 0;
@@ -226,7 +226,6 @@ public final class StartupNetwork {
             int thy = -1;
             double bs = 0, bv = 0;
             int from = -1;
-            boolean picks = true;
             RelayDriverCheck check = null;
             if (ss.trigger() instanceof BypassTrigger.AfterDelay d) {
                 delay = d.seconds();
@@ -252,14 +251,9 @@ public final class StartupNetwork {
                 }
                 bs = 1 / (tw.plateOhms() + ss.relay().coilOhms());
                 bv = arc;
-                picks = check.picksUp();
-                if (!picks) {
-                    noteList.add("soft start " + ss.name() + ": the relay coil gets " + fmt(check.coilVolts())
-                            + " V, below its pick-up; the bypass never closes");
-                }
             }
             sl.add(new Soft(ss.name(), ss.rail(), ss.resistorOhms(), ss.ratedWatts(), delay, thy, from, bs, bv,
-                    picks, ss.relay().operateSeconds(), check));
+                    ss.relay().contactAmps(), ss.relay().operateSeconds(), check));
         }
         softs = List.copyOf(sl);
         notes = List.copyOf(noteList);

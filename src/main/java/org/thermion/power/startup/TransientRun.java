@@ -41,14 +41,14 @@ final class TransientRun {
         this.threshold = net.emission.thresholdFraction();
         int n = net.states;
         int ns = net.softs.size();
-        // State vector: wire temperatures, cathode temperatures, resistor energies, heater energies in,
-        // energies radiated.
+        // State vector: wire temperatures, cathode temperatures, resistor energies, resistor lagged powers,
+        // heater energies in, energies radiated.
         heaters = new HeaterState[n];
         for (int s = 0; s < n; s++) {
             heaters[s] = new HeaterState(net.models.get(net.stateModel[s]), net.stateGroup[s], net.statePosition[s],
-                    net.stateShunt[s], s, n + s, 2 * n + ns + s, 3 * n + ns + s);
+                    net.stateShunt[s], s, n + s, 2 * n + 2 * ns + s, 3 * n + 2 * ns + s);
         }
-        dimension = 4 * n + ns;
+        dimension = 4 * n + 2 * ns;
         strings = new StringState[net.groupRail.length];
         for (int g = 0; g < strings.length; g++) {
             HeaterState[] hs = new HeaterState[net.groupStates[g].length];
@@ -61,7 +61,7 @@ final class TransientRun {
         for (int k = 0; k < ns; k++) {
             StartupNetwork.Soft s = net.softs.get(k);
             double ohms = o.resistorOhms().getOrDefault(s.name(), s.declaredOhms());
-            softs[k] = new SoftStartState(s, ohms, 2 * n + k, s.thyratron() ? heaters[s.thyState()] : null);
+            softs[k] = new SoftStartState(s, ohms, 2 * n + k, 2 * n + ns + k, o.resistorRating().tau(), s.thyratron() ? heaters[s.thyState()] : null);
         }
         int nr = net.machine.rails().size();
         rails = new RailState[nr];
@@ -109,7 +109,7 @@ final class TransientRun {
                 h.derivatives(y, d);
             }
             for (SoftStartState s : softs) {
-                d[s.joules] = s.watts;
+                s.derivatives(y, d);
             }
             return d;
         }
@@ -125,7 +125,8 @@ final class TransientRun {
             h.observe(t);
         }
         for (SoftStartState s : softs) {
-            s.observe();
+            s.observe(y);
+            s.observeCoil(t);
         }
         if (keep) {
             int nr = rails.length;
@@ -177,6 +178,7 @@ final class TransientRun {
             t = end;
         }
         while (t < end) {
+            switchRelays(t, y);
             double segEnd = end;
             for (SoftStartState s : softs) {
                 if (!s.bypassed && s.bypassAt > t && s.bypassAt < segEnd) {
@@ -190,6 +192,26 @@ final class TransientRun {
                 if (s.thyratron != null && !s.fired && !s.bypassed) {
                     thy[k] = new Threshold(x -> warmth(s, x.getPrimaryState()), Action.STOP, true);
                     dp.addEventDetector(thy[k]);
+                }
+            }
+            // A fired thyratron's relay picks up when its coil reaches pick-up, and a closed one drops out when
+            // its coil falls below drop-out: both read the coil's own supply, solved at each point.
+            Threshold[] pick = new Threshold[softs.length];
+            Threshold[] drop = new Threshold[softs.length];
+            for (int k = 0; k < softs.length; k++) {
+                SoftStartState s = softs[k];
+                if (mayPickUp(s)) {
+                    pick[k] = new Threshold(x -> {
+                        evaluate(x.getPrimaryState());
+                        return s.overPickup();
+                    }, Action.STOP, true);
+                    dp.addEventDetector(pick[k]);
+                } else if (mayDrop(s)) {
+                    drop[k] = new Threshold(x -> {
+                        evaluate(x.getPrimaryState());
+                        return -s.overDropout();
+                    }, Action.STOP, true);
+                    dp.addEventDetector(drop[k]);
                 }
             }
             for (HeaterState h : heaters) {
@@ -267,8 +289,17 @@ final class TransientRun {
                     when = t;
                 }
                 if (!Double.isNaN(when)) {
-                    s.fire(when, o.holdBypass());
+                    s.fire(when);
                     anyFired = true;
+                }
+            }
+            for (int k = 0; k < softs.length; k++) {
+                if (pick[k] != null && !Double.isNaN(pick[k].firstTime())) {
+                    softs[k].pickUp(pick[k].firstTime());
+                }
+                if (drop[k] != null && !Double.isNaN(drop[k].firstTime())) {
+                    softs[k].drop(drop[k].firstTime());
+                    anyFired = true;   // the topology changed: record the point
                 }
             }
             boolean changed = false;
@@ -298,6 +329,40 @@ final class TransientRun {
             }
         }
         return result(y, end);
+    }
+
+    /** Openings of one relay after which its chatter is no longer followed (it is reported either way). */
+    private static final int MAX_OPENINGS = 200;
+
+    private boolean mayPickUp(SoftStartState s) {
+        return s.fired && s.soft.check() != null && !s.bypassed && Double.isNaN(s.bypassAt) && !o.holdBypass()
+                && s.openings < MAX_OPENINGS;
+    }
+
+    private boolean mayDrop(SoftStartState s) {
+        return s.fired && s.soft.check() != null && s.bypassed && s.ohms > 0;
+    }
+
+    /** At a segment boundary: relays whose coil already stands past a threshold act now. */
+    private void switchRelays(double t, double[] y) {
+        evaluate(y);
+        boolean changed = false;
+        for (SoftStartState s : softs) {
+            if (mayDrop(s) && s.overDropout() < 0) {
+                s.drop(t);
+                changed = true;
+            }
+        }
+        if (changed) {
+            evaluate(y);
+            updateLimits(t);
+            observe(t, y, true);
+        }
+        for (SoftStartState s : softs) {
+            if (mayPickUp(s) && s.overPickup() >= 0) {
+                s.pickUp(t);
+            }
+        }
     }
 
     /** The thyratron's firing function: negative until its cathode reaches the emission threshold, continuous. */
@@ -345,12 +410,11 @@ final class TransientRun {
             boolean none = ss.ohms == 0;
             softResults.add(new SoftStartResult(s.name(), s.rail(), ss.ohms, s.ratedWatts(), none ? Double.NaN : trig,
                     none ? Double.NaN : ss.bypassTime, joules, ss.peakWatts, inCircuit > 0 ? joules / inCircuit : 0,
-                    s.thyratron()));
+                    s.thyratron(), ss.neededWatts, o.resistorRating(), ss.soft.contactAmps(),
+                    rails[s.rail()].peakBy, rails[s.rail()].amps));
             if (s.check() != null) {
                 RelayDriverCheck c = s.check();
-                checks.add(new RelayDriverCheck(c.tube(), c.railName(), c.railVolts(), c.sourceOhms(), c.arcDropVolts(),
-                        c.plateOhms(), c.relay(), c.coilVolts(), c.coilAmps(), c.avgRatingAmps(), c.peakRatingAmps(),
-                        ss.fireTime, c.heatingSeconds()));
+                checks.add(c.simulated(ss.fireTime, ss.coil()));
             }
         }
         List<HeaterWarmup> warmups = new ArrayList<>();

@@ -8,7 +8,7 @@ import static org.assertj.core.api.Assertions.within;
 
 class RelayDriverCheckTest {
     // 12 V automotive-style relay: coil about 100 ohm, pick-up <= 7.2 V (dtsheet.com/doc/683071), operate <= 10 ms.
-    private static final Relay RELAY = new Relay(100, 12, 7.2, 1.2, 0.010);
+    private static final Relay RELAY = new Relay(100, 12, 7.2, 1.2, 0.010, Double.NaN);
 
     @Test
     void a2D21From24VoltsThroughFiftyOhmsBringsTheCoilNearItsRating() {

@@ -1,0 +1,93 @@
+package org.thermion.circuit;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Worst-case noise margins. For each margin, each toleranced parameter (rails, the driver's
+ * and receivers' resistors, each role's emission) is set to the end that lowers the margin,
+ * judged by the sign of its sensitivity: the margin at each end of that parameter's tolerance,
+ * the others nominal. The margin is then evaluated with every parameter at its chosen end,
+ * and that corner is named. {@link #exhaustive} tries every corner, for checking.
+ */
+public final class WorstCase {
+    private final MarginAnalysis analysis;
+    private final Tolerances tolerances;
+
+    public WorstCase(MarginAnalysis analysis, Tolerances tolerances) {
+        this.analysis = analysis;
+        this.tolerances = tolerances;
+    }
+
+    /** The high and low margins at their worst corners, with {@code n} receivers. */
+    public List<WorstMargin> margins(StageCircuit driver, InputLevels levels, StageCircuit receiver, int n) {
+        List<Parameter> params = parameters(driver, receiver, n);
+        NoiseMargins nominal = analysis.margins(driver, levels, receiver, n, Corner.NOMINAL);
+        List<WorstMargin> out = new ArrayList<>();
+        for (WorstMargin.Side side : WorstMargin.Side.values()) {
+            Corner worst = Corner.NOMINAL;
+            for (Parameter p : params) {
+                double[] ends = tolerances.ends(p);
+                double atLow = margin(side, driver, levels, receiver, n, Corner.NOMINAL.with(p.label(), ends[0]));
+                double atHigh = margin(side, driver, levels, receiver, n, Corner.NOMINAL.with(p.label(), ends[1]));
+                double pick = atLow <= atHigh ? ends[0] : ends[1];
+                if (pick != 1) {
+                    worst = worst.with(p.label(), pick);
+                }
+            }
+            out.add(new WorstMargin(side, value(side, nominal), margin(side, driver, levels, receiver, n, worst),
+                    worst));
+        }
+        return out;
+    }
+
+    /** The lowest margin over every corner (2^k solves of the margin: small circuits only). */
+    public WorstMargin exhaustive(WorstMargin.Side side, StageCircuit driver, InputLevels levels,
+                                  StageCircuit receiver, int n) {
+        List<Parameter> params = parameters(driver, receiver, n);
+        if (params.size() > 16) {
+            throw new IllegalArgumentException("too many parameters to enumerate: " + params.size());
+        }
+        double nominal = margin(side, driver, levels, receiver, n, Corner.NOMINAL);
+        double best = Double.POSITIVE_INFINITY;
+        Corner at = Corner.NOMINAL;
+        for (int mask = 0; mask < (1 << params.size()); mask++) {
+            Corner c = Corner.NOMINAL;
+            for (int i = 0; i < params.size(); i++) {
+                double f = tolerances.ends(params.get(i))[mask >> i & 1];
+                if (f != 1) {
+                    c = c.with(params.get(i).label(), f);
+                }
+            }
+            double m = margin(side, driver, levels, receiver, n, c);
+            if (m < best) {
+                best = m;
+                at = c;
+            }
+        }
+        return new WorstMargin(side, nominal, best, at);
+    }
+
+    /** The parameters the net's margins depend on, in a stable order. */
+    public List<Parameter> parameters(StageCircuit driver, StageCircuit receiver, int n) {
+        StageSolver s = analysis.solver();
+        Set<Parameter> all = new HashSet<>(s.parameters(StageSolver.DRIVER, driver,
+                java.util.Collections.nCopies(n, receiver.inputLoad())));
+        all.addAll(s.parameters(StageSolver.RECEIVER, receiver, List.of()));
+        List<Parameter> sorted = new ArrayList<>(all);
+        sorted.sort(java.util.Comparator.comparing(Parameter::label));
+        return sorted;
+    }
+
+    private double margin(WorstMargin.Side side, StageCircuit driver, InputLevels levels, StageCircuit receiver, int n,
+                          Corner c) {
+        return value(side, analysis.margins(driver, levels, receiver, n, c));
+    }
+
+    private static double value(WorstMargin.Side side, NoiseMargins m) {
+        double v = side == WorstMargin.Side.HIGH ? m.highMargin() : m.lowMargin();
+        return Double.isNaN(v) ? Double.NEGATIVE_INFINITY : v;
+    }
+}

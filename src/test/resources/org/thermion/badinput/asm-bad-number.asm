@@ -1,0 +1,3 @@
+        LD 0x1G
+        ST 12ab
+        JMP 0b102

@@ -1,0 +1,3 @@
+.const a = b + 1
+.const b = a + 1
+        LD a

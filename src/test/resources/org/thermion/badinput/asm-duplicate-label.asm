@@ -1,0 +1,3 @@
+loop:   LD low_sw
+loop:   ST pump
+        JMP loop

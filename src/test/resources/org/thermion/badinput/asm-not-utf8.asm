@@ -1,0 +1,2 @@
+; réglage
+        LD low_sw

@@ -1,0 +1,2 @@
+loop:   LD lowsw
+        JMP lop

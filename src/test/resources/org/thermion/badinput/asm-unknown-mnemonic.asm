@@ -1,0 +1,2 @@
+        LOAD low_sw
+        STO pump
