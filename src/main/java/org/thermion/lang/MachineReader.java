@@ -17,9 +17,9 @@ import java.util.List;
 
 /**
  * Parses the text of a .machine file into an AST, reporting syntax errors as diagnostics.
- * After a syntax error each top-level declaration is parsed again on its own ({@link Chunks})
- * and only its first error is reported: the first error of every broken declaration, and no
- * train of follow-on errors from the parser losing its place.
+ * After a syntax error each top-level declaration is parsed again on its own ({@link Chunks});
+ * for each broken declaration its first error is reported and the next real one (found with
+ * the first error's line blanked), and no train of follow-on errors from the parser losing its place.
  */
 public final class MachineReader {
     private MachineReader() {
@@ -39,16 +39,48 @@ public final class MachineReader {
         List<Chunks.Chunk> chunks = Chunks.of(text);
         for (Chunks.Chunk c : chunks) {
             List<Diagnostic> own = new ArrayList<>();
-            parse(file, text.substring(c.start(), c.end()), c.line(), c.end() == text.length(), own);
+            String chunk = text.substring(c.start(), c.end());
+            boolean last = c.end() == text.length();
+            parse(file, chunk, c.line(), last, own);
             if (!own.isEmpty()) {
-                diags.add(own.get(0));
+                Diagnostic first = own.get(0);
+                diags.add(first);
                 reported++;
+                // The next real error: the same declaration with the offending line blanked
+                // (its braces kept, so the block structure stays), if it is on a later line.
+                List<Diagnostic> next = new ArrayList<>();
+                parse(file, blankLine(chunk, first.span().line() - c.line()), c.line(), last, next);
+                if (!next.isEmpty() && next.get(0).span().line() > first.span().line()) {
+                    diags.add(next.get(0));
+                }
             }
         }
         if (reported == 0) {
             diags.add(errors.get(0));
         }
         return new SourceFile(file, List.of());
+    }
+
+    /** {@code text} with every character of its {@code index}-th line (0-based) but braces made a space. */
+    static String blankLine(String text, int index) {
+        int start = 0;
+        for (int i = 0; i < index && start >= 0; i++) {
+            start = text.indexOf('\n', start) + 1;
+            start = start == 0 ? -1 : start;
+        }
+        if (start < 0) {
+            return text;
+        }
+        int end = text.indexOf('\n', start);
+        end = end < 0 ? text.length() : end;
+        StringBuilder b = new StringBuilder(text);
+        for (int k = start; k < end; k++) {
+            char ch = b.charAt(k);
+            if (ch != '{' && ch != '}') {
+                b.setCharAt(k, ' ');
+            }
+        }
+        return b.toString();
     }
 
     /** {@code last}: the text runs to the end of the file (else its end is where the next declaration begins). */

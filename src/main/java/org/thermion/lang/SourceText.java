@@ -26,6 +26,10 @@ public final class SourceText {
      * {@code what} FILE: reason" without a line, or the first byte that is not UTF-8.
      */
     public static String read(Path file, String what, SourceSet sources, Diagnostics diags) {
+        if (file.toString().isEmpty()) {
+            diags.error(Span.none(), "cannot read the " + what + ": no file name given", null);
+            return null;
+        }
         byte[] bytes;
         try {
             bytes = Files.readAllBytes(file);
@@ -62,7 +66,7 @@ public final class SourceText {
     public static String decode(Path file, byte[] bytes, SourceSet sources, Diagnostics diags) {
         if (bytes.length >= 2 && ((bytes[0] & 0xFF) == 0xFF && (bytes[1] & 0xFF) == 0xFE
                 || (bytes[0] & 0xFF) == 0xFE && (bytes[1] & 0xFF) == 0xFF)) {
-            diags.error(new Span(file, 0, 0, 0, 0), file + " is UTF-16 text (it begins with the byte-order mark "
+            diags.error(new Span(file, 1, 1, 1, 2), "the file is UTF-16 text (it begins with the byte-order mark "
                     + String.format("%02X %02X", bytes[0] & 0xFF, bytes[1] & 0xFF) + "), not UTF-8",
                     "save the file as UTF-8");
             return null;

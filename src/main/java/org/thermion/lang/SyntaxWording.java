@@ -53,7 +53,11 @@ final class SyntaxWording {
     }
 
     private static String tidy(String expected) {
-        String e = expected.replace("{", "").replace("}", "").replace("'',", "").replace(", ''", "").replace("  ", " ").trim().replace("NAME", "a name")
+        String e = expected.trim();
+        if (e.startsWith("{") && e.endsWith("}")) {
+            e = e.substring(1, e.length() - 1);
+        }
+        e = e.replace("'',", "").replace(", ''", "").replace("  ", " ").trim().replace("NAME", "a name")
                 .replace("NUMBER", "a number").replace("STRING", "a quoted string");
         if (e.length() > 90) {
             e = e.substring(0, 87) + "...";

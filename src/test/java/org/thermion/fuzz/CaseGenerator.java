@@ -82,7 +82,20 @@ final class CaseGenerator {
     /** Pathological files no mutation is likely to reach. */
     private static String generated(Random rnd, Map<String, byte[]> files) {
         int n = List.of(10, 63, 64, 65, 300, 3000).get(rnd.nextInt(6));
-        switch (rnd.nextInt(4)) {
+        switch (rnd.nextInt(5)) {
+            case 4: {
+                // Expressions the elaborator and the ISA really use, at and just past the documented limits.
+                int depth = List.of(98, 99, 100, 101).get(rnd.nextInt(4));
+                int ops = List.of(998, 999, 1000, 1001).get(rnd.nextInt(4));
+                String expr = rnd.nextBoolean() ? "(".repeat(depth - 2) + "low_sw" + ")".repeat(depth - 2)
+                        : "low_sw" + " | high_sw".repeat(ops);
+                String top = new String(files.get(MACHINE), StandardCharsets.UTF_8)
+                        .replace("  latch ir[12] on phase 1 = word", "  net deepnet = " + expr + "\n  latch ir[12] on phase 1 = word")
+                        .replace("op LD 0x1 { acc <- [sel] }", "op LD 0x1 { acc <- " + "(".repeat(depth - 2) + "[sel]"
+                                + ")".repeat(depth - 2) + " }");
+                files.put(MACHINE, utf8(top));
+                return "used expressions, depth " + depth + ", operators " + ops;
+            }
             case 0: {
                 for (int i = 0; i < n; i++) {
                     files.put("inc" + i + ".machine", utf8(i + 1 < n ? "include \"inc" + (i + 1) + ".machine\"\n" : "# end\n"));

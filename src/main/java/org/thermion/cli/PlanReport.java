@@ -1,0 +1,137 @@
+package org.thermion.cli;
+
+import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Report;
+import org.thermion.cli.report.Table;
+import org.thermion.faults.Circuit;
+import org.thermion.faults.Fault;
+import org.thermion.faults.FaultList;
+import org.thermion.faults.FaultPlace;
+import org.thermion.faults.FaultSimulator;
+import org.thermion.faults.Outcome;
+import org.thermion.faults.Plan;
+import org.thermion.faults.Step;
+import org.thermion.model.Machine;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import static org.thermion.cli.report.Unit.COUNT;
+import static org.thermion.cli.report.Unit.TEXT;
+
+/** The plan command's report: counts, the numbered steps, and every collapsed fault's outcome. */
+final class PlanReport {
+    /** The schema version of plan's JSON ({@code org/thermion/schema/plan.schema.json}). */
+    static final int VERSION = 1;
+
+    private final Machine m;
+    private final Circuit c;
+    private final FaultList faults;
+    private final Plan plan;
+    private final List<Step> steps;
+    private final byte[][] expected;
+    private final Path program;
+    private final int largest;
+
+    PlanReport(Machine m, Circuit c, FaultList faults, Plan plan, List<Step> steps, byte[][] expected, Path program,
+               int largest) {
+        this.m = m;
+        this.c = c;
+        this.faults = faults;
+        this.plan = plan;
+        this.steps = steps;
+        this.expected = expected;
+        this.program = program;
+        this.largest = largest;
+    }
+
+    Report report() {
+        Report r = new Report("plan", VERSION);
+        int tube = faults.all().size() - faults.stuckAtCount();
+        r.field("machine", m.name());
+        r.field("program", program == null ? new Absent("none") : program.toString());
+        r.field("stuck_at_faults", faults.stuckAtCount());
+        r.field("stuck_at_collapsed", faults.stuckAtCollapsedCount());
+        r.field("stuck_at_targets", faults.stuckAtTargetCount());
+        r.field("tube_faults", tube);
+        r.field("steps", steps.size());
+        for (Outcome o : Outcome.values()) {
+            r.field(o.name().toLowerCase(Locale.ROOT), plan.count(o));
+        }
+        r.field("largest_group", largest < 0 ? new Absent("not asked") : (Object) largest);
+        List<String> head = new ArrayList<>();
+        head.add(String.format(Locale.ROOT, "bring-up plan for machine %s%s", m.name(),
+                program == null ? "" : " running " + program));
+        head.add(String.format(Locale.ROOT, "  faults: %d stuck-at (%d after equivalence collapsing, %d aimed at after "
+                + "dominance), %d tube, heater, relay and lamp faults", faults.stuckAtCount(),
+                faults.stuckAtCollapsedCount(), faults.stuckAtTargetCount(), tube));
+        head.add("  switch on, then follow the steps: set the switches, clock the cycles, compare the lamps");
+        head.add("  lamps: lit = expect lit, dark = every other lamp dark, unknown = not yet settled, ignore");
+        head.add("");
+        r.text(head);
+        r.table(stepTable());
+        r.table(faultTable());
+        List<String> tail = new ArrayList<>();
+        tail.add("");
+        StringBuilder counts = new StringBuilder();
+        for (Outcome o : Outcome.values()) {
+            counts.append(counts.length() == 0 ? "" : "; ").append(o.words).append(' ').append(plan.count(o));
+        }
+        tail.add(counts.toString());
+        if (largest >= 0) {
+            tail.add("largest group of faults the steps cannot tell apart: " + largest);
+        }
+        r.text(tail);
+        return r;
+    }
+
+    private Table stepTable() {
+        Table t = new Table("steps", "steps")
+                .column("step", "step", COUNT)
+                .column("switches_on", "switches on", TEXT, "every other switch off")
+                .column("cycles", "cycles", COUNT, "single-step the clock this many whole cycles")
+                .column("lit", "lit", TEXT, "lamps expected lit; every other known lamp dark")
+                .column("unknown", "unknown", TEXT, "lamps the plan cannot predict yet");
+        List<String> names = m.inputs().stream().map(p -> p.name()).toList();
+        for (int s = 0; s < steps.size(); s++) {
+            Step st = steps.get(s);
+            boolean[] in = st.inputs();
+            List<String> on = new ArrayList<>();
+            for (int i = 0; i < in.length; i++) {
+                if (in[i]) {
+                    on.add(names.get(i));
+                }
+            }
+            List<String> lit = new ArrayList<>();
+            List<String> unknown = new ArrayList<>();
+            for (int i = 0; i < c.lamps().size(); i++) {
+                if (expected[s][i] == FaultSimulator.ONE) {
+                    lit.add(c.lamps().get(i).name());
+                } else if (expected[s][i] == FaultSimulator.UNKNOWN) {
+                    unknown.add(c.lamps().get(i).name());
+                }
+            }
+            t.row(s + 1, on.isEmpty() ? "(none)" : String.join(" ", on), st.cycles(),
+                    lit.isEmpty() ? "(none)" : String.join(" ", lit), String.join(" ", unknown));
+        }
+        return t;
+    }
+
+    private Table faultTable() {
+        Table t = new Table("faults", "faults (one per equivalence class)")
+                .column("fault", "fault", TEXT)
+                .column("tube", "tube", TEXT)
+                .column("outcome", "outcome", TEXT)
+                .column("step", "step", COUNT, "the first step that shows it");
+        for (int i = 0; i < plan.faults().size(); i++) {
+            Fault f = plan.faults().get(i);
+            FaultPlace p = FaultPlace.of(c, f);
+            int at = plan.detectedAt()[i];
+            t.row(p.text(), p.envelope(), plan.outcome()[i].words,
+                    at >= 0 ? (Object) (at + 1) : Absent.NONE);
+        }
+        return t;
+    }
+}
