@@ -1,5 +1,11 @@
 package org.thermion.cli;
 
+import org.thermion.asm.ListingLine;
+import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Format;
+import org.thermion.cli.report.Report;
+import org.thermion.cli.report.Table;
+
 import org.thermion.asm.Assembly;
 import org.thermion.asm.IntelHex;
 import org.thermion.asm.Listing;
@@ -17,6 +23,9 @@ import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
+
+import static org.thermion.cli.report.Unit.COUNT;
+import static org.thermion.cli.report.Unit.TEXT;
 import java.util.concurrent.Callable;
 
 /** {@code asm MACHINE PROGRAM}: assemble a program for a machine into Intel HEX and a listing. */
@@ -39,6 +48,10 @@ final class AsmCommand implements Callable<Integer> {
 
     @Option(names = "--listing", description = "Print the listing: address, word in hex and binary, source line.")
     boolean listing;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "The listing as text, csv or json (csv and json imply --listing; default: ${DEFAULT-VALUE}).")
+    Format format;
 
     @Mixin
     CommonOptions common;
@@ -68,8 +81,11 @@ final class AsmCommand implements Callable<Integer> {
         }
         Assembly a = in.assembly();
         List<String> hex = IntelHex.encode(a.words(), m.isa().wordBits());
+        if (format != Format.text) {
+            listing = true;
+        }
         if (listing) {
-            Listing.render(a, m.isa().wordBits(), m.pc().width()).forEach(out::println);
+            format.write(out, listingReport(a, m.isa().wordBits(), m.pc().width()));
         }
         if (output != null) {
             try {
@@ -86,5 +102,33 @@ final class AsmCommand implements Callable<Integer> {
         }
         out.flush();
         return ExitCodes.OK;
+    }
+
+    /** The schema version of the listing's JSON ({@code org/thermion/schema/asm_listing.schema.json}). */
+    static final int VERSION = 1;
+
+    /** The listing as a report: text shows it as {@link Listing} lays it out, CSV and JSON with numbers. */
+    Report listingReport(Assembly a, int wordBits, int addressBits) {
+        Report rep = new Report("asm_listing", VERSION);
+        rep.field("program", program.toString());
+        rep.field("word_bits", wordBits);
+        rep.field("address_bits", addressBits);
+        rep.field("rom_words", a.words().length);
+        rep.field("words_used", a.listing().stream().filter(ListingLine::hasWord).count());
+        rep.text(Listing.render(a, wordBits, addressBits));
+        Table t = new Table("listing", "listing")
+                .column("address", "addr", COUNT)
+                .column("word", "word", COUNT)
+                .column("bits", "bits", TEXT)
+                .column("line", "line", COUNT)
+                .column("source", "source", TEXT);
+        Absent none = new Absent("no word");
+        for (ListingLine l : a.listing()) {
+            t.row(l.hasWord() ? (Object) (long) l.address() : none, l.hasWord() ? (Object) l.word() : none,
+                    l.hasWord() ? Long.toBinaryString(l.word() | 1L << wordBits).substring(1) : none, l.sourceLine(),
+                    l.sourceText());
+        }
+        rep.data(t);
+        return rep;
     }
 }

@@ -1,5 +1,11 @@
 package org.thermion.cli;
 
+import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Format;
+import org.thermion.cli.report.Numbers;
+import org.thermion.cli.report.Report;
+import org.thermion.cli.report.Table;
+
 import org.thermion.bench.BenchRow;
 import org.thermion.bench.BenchSuite;
 import org.thermion.sim.compiled.Engine;
@@ -15,6 +21,11 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+
+import static org.thermion.cli.report.Unit.FLAG;
+import static org.thermion.cli.report.Unit.NUMBER;
+import static org.thermion.cli.report.Unit.SECONDS;
+import static org.thermion.cli.report.Unit.TEXT;
 import java.util.concurrent.Callable;
 
 /** {@code bench}: speed and scale of elaboration and simulation, against their targets. */
@@ -45,7 +56,7 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--machine", paramLabel = "FILE", description = "The machine measured as 'demo' (default: the bundled example).")
     Path demo;
 
-    @Option(names = "--format", paramLabel = "FORMAT", description = "text or json (default text).")
+    @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (default text).")
     Format format = Format.text;
 
     @Mixin
@@ -58,9 +69,6 @@ final class BenchCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        if (format == Format.csv) {
-            throw new Failures.BadInput("error: bench prints text or json, not csv");
-        }
         List<Integer> n = sizes != null ? sizes : quick ? List.of(1000, 10_000) : List.of(1000, 10_000, 100_000);
         for (int s : n) {
             if (s < 200 || s > 2_000_000) {
@@ -92,26 +100,42 @@ final class BenchCommand implements Callable<Integer> {
             err.flush();
         });
         List<BenchRow> rows = suite.run();
-        if (format == Format.json) {
-            printJson(out, rows);
-        } else {
-            printText(out, rows);
-        }
-        out.flush();
+        format.write(out, report(rows));
         return ExitCodes.OK;
     }
 
-    private static void printText(PrintWriter out, List<BenchRow> rows) {
-        Table t = new Table("machine", "measurement", "value", "target", "verdict");
+    /** The schema version of bench's JSON ({@code org/thermion/schema/bench.schema.json}). */
+    static final int VERSION = 2;
+
+    /** The measurements as a report: text shows each value with its unit, CSV and JSON the number and the unit apart. */
+    static Report report(List<BenchRow> rows) {
+        Report rep = new Report("bench", VERSION);
+        rep.field("default_engine", Engine.DEFAULT.word());
+        Table view = new Table("measurements", "measurements")
+                .column("machine", "machine", TEXT)
+                .column("measurement", "measurement", TEXT)
+                .column("value", "value", TEXT)
+                .column("target", "target", TEXT)
+                .column("verdict", "verdict", TEXT);
+        Table data = new Table("rows", "measurements")
+                .column("machine", "machine", TEXT)
+                .column("measure", "measure", TEXT)
+                .column("value", "value", NUMBER, "in the row's unit")
+                .column("unit", "unit", TEXT)
+                .column("target", "target", TEXT)
+                .column("met", "met", FLAG)
+                .column("note", "note", TEXT);
         for (BenchRow r : rows) {
-            t.row(r.machine(), r.measure(), value(r), r.target() == null ? "" : r.target(), r.note());
+            view.row(r.machine(), r.measure(), value(r), r.target() == null ? "" : r.target(), r.note());
+            data.row(r.machine(), r.measure(), Double.isNaN(r.value()) ? new Absent("n/a") : (Object) r.value(), r.unit(),
+                    r.target() == null ? new Absent("none") : r.target(), r.met() == null ? new Absent("none") : r.met(), r.note());
         }
-        t.print(out, "");
-        out.println();
-        out.println("gate evals: netlist gates evaluated per second, each over a 64-bit word; lane-evals count each of the");
-        out.println("64 lanes. 1 lane: every lane runs the same inputs; 64 lanes: independent random inputs per lane.");
-        out.println("Default engine: auto, which takes the compiled engine for small machines and for long runs "
-                + "like these short of the largest netlists (see run --help).");
+        rep.view(view).data(data);
+        rep.text("gate evals: netlist gates evaluated per second, each over a 64-bit word; lane-evals count each of the "
+                + "64 lanes. 1 lane: every lane runs the same inputs; 64 lanes: independent random inputs per lane.",
+                "Default engine: auto, which takes the compiled engine for small machines and for long runs "
+                        + "like these short of the largest netlists (see run --help).");
+        return rep;
     }
 
     static String value(BenchRow r) {
@@ -120,37 +144,11 @@ final class BenchCommand implements Callable<Integer> {
             return "n/a";
         }
         return switch (r.unit()) {
-            case "s" -> Units.time(v);
+            case "s" -> Numbers.si(v, SECONDS);
             case "B" -> String.format(Locale.ROOT, "%.0f B", v);
             case "x" -> String.format(Locale.ROOT, "%.2f x", v);
             case "/s" -> String.format(Locale.ROOT, "%.3g /s", v);
             default -> v == Math.rint(v) ? String.format(Locale.ROOT, "%.0f", v) : String.format(Locale.ROOT, "%.3g", v);
         };
-    }
-
-    private static void printJson(PrintWriter out, List<BenchRow> rows) {
-        StringBuilder b = new StringBuilder("{\n  \"defaultEngine\": ").append(ReportJson.quote(Engine.DEFAULT.word()))
-                .append(",\n  \"rows\": [\n");
-        for (int i = 0; i < rows.size(); i++) {
-            BenchRow r = rows.get(i);
-            b.append("    {\"machine\": ").append(ReportJson.quote(r.machine()))
-                    .append(", \"measure\": ").append(ReportJson.quote(r.measure()))
-                    .append(", \"value\": ").append(Double.isNaN(r.value()) ? "null" : number(r.value()))
-                    .append(", \"unit\": ").append(ReportJson.quote(r.unit()))
-                    .append(", \"target\": ").append(r.target() == null ? "null" : ReportJson.quote(r.target()))
-                    .append(", \"met\": ").append(r.met() == null ? "null" : r.met().toString())
-                    .append(", \"note\": ").append(ReportJson.quote(r.note())).append('}')
-                    .append(i + 1 < rows.size() ? ",\n" : "\n");
-        }
-        b.append("  ]\n}");
-        out.println(b);
-    }
-
-    /** A JSON number: whole values as integers, others to six significant figures. */
-    static String number(double v) {
-        if (v == Math.rint(v) && Math.abs(v) < 1e15) {
-            return String.valueOf((long) v);
-        }
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString();
     }
 }

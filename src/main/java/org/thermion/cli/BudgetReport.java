@@ -297,7 +297,8 @@ final class BudgetReport {
         Table t = new Table("supply", "supply check (peak = heaters + plate and bias)")
                 .column("rail", "rail", TEXT)
                 .column("nominal", "voltage", VOLTS)
-                .column("heaters", "heaters", AMPS, "heater strings at the rail's nominal voltage")
+                .column("heaters", "heaters", AMPS, "heater strings at the rail's nominal voltage, hot resistance; "
+                        + "powerup's steady state is lower by the source drop at the peak (see 'at peak')")
                 .column("heaters", "heaters", WATTS)
                 .column("stages", "plate+bias", AMPS)
                 .column("basis", "from", TEXT, "highest: every stage at its highest draw; simulation: the run's peak")

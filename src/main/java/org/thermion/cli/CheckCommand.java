@@ -1,5 +1,7 @@
 package org.thermion.cli;
 
+import org.thermion.cli.report.Format;
+import picocli.CommandLine.Option;
 import org.thermion.model.Machine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -18,6 +20,10 @@ final class CheckCommand implements Callable<Integer> {
     @Parameters(paramLabel = "FILE", description = "The .machine file.")
     Path file;
 
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "text, csv or json (default: ${DEFAULT-VALUE}).")
+    Format format;
+
     @Mixin
     CommonOptions common;
 
@@ -33,8 +39,7 @@ final class CheckCommand implements Callable<Integer> {
         if (m == null) {
             return ExitCodes.BAD_INPUT;
         }
-        new MachineSummary(m).print(out);
-        out.flush();
+        format.write(out, new MachineSummary(m).report());
         return ExitCodes.OK;
     }
 }

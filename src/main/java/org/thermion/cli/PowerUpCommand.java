@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.cli.report.Format;
 import org.thermion.lang.SourceText;
 import org.thermion.model.Machine;
 import org.thermion.power.startup.BypassDelay;
@@ -26,9 +27,12 @@ import java.util.concurrent.Callable;
 
 /** {@code powerup MACHINE}: the switch-on transient of every rail, the soft start and its relay driver. */
 @Command(name = "powerup", mixinStandardHelpOptions = true,
-        description = "Simulate switch-on: heaters warming from cold, rail currents, the soft-start resistor and its "
+        description = {"Simulate switch-on: heaters warming from cold, rail currents, the soft-start resistor and its "
                 + "bypass relay, and the thyratron relay driver. Exit 1 when a supply goes into its current limit, a "
-                + "soft-start resistor runs over its rating or is never bypassed, or the relay driver check fails.")
+                + "soft-start resistor runs over its rating or is never bypassed, or the relay driver check fails.",
+                "Rail currents: switch-on peak = the inrush before any bypass (none when the current only rises), "
+                        + "bypass peak = the highest after the bypass, steady state = the end of the run once settled "
+                        + "(moved under 1 % over its last tenth). Every current is a magnitude; volts are signed as declared."})
 final class PowerUpCommand implements Callable<Integer> {
     @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
     Path file;
@@ -45,13 +49,14 @@ final class PowerUpCommand implements Callable<Integer> {
             description = "Tabulate both current peaks against the resistor (e.g. 0.5ohm..5ohm:0.25ohm) and recommend a value.")
     String sweep;
 
-    @Option(names = "--csv", paramLabel = "FILE", description = "Write the time series (RFC 4180) to FILE.")
+    @Option(names = "--csv", paramLabel = "FILE", description = "Write the time series to FILE (RFC 4180): time_seconds, "
+            + "RAIL_amps and RAIL_volts per rail (signed as declared), heater_N_kelvin per row N of the heaters table.")
     Path csv;
 
     @Option(names = OutputFiles.REPLACE, description = "Let --csv replace an existing file that is not an earlier time series.")
     boolean replace;
 
-    @Option(names = "--format", paramLabel = "FORMAT", description = "text, json or csv (the time series on standard output); default ${DEFAULT-VALUE}.",
+    @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (the report's tables; --csv FILE writes the time series); default ${DEFAULT-VALUE}.",
             defaultValue = "text")
     Format format;
 
@@ -129,14 +134,7 @@ final class PowerUpCommand implements Callable<Integer> {
                 String name = softStartName(net, range.softStart(), "--sweep");
                 double[] values = ResistorSweep.range(range.value().from(), range.value().to(), range.value().step());
                 ResistorSweep.Result sr = ResistorSweep.run(net, o, name, values);
-                if (format == Format.json) {
-                    out.print(PowerUpReport.sweepJson(sr));
-                } else if (format == Format.csv) {
-                    out.print(sweepCsv(sr));
-                } else {
-                    PowerUpReport.sweepText(out, sr);
-                }
-                out.flush();
+                format.write(out, PowerUpSweepReport.of(sr));
                 return sr.recommended() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
             }
         } catch (IllegalArgumentException | TransientFailure e) {
@@ -147,7 +145,7 @@ final class PowerUpCommand implements Callable<Integer> {
         List<BypassDelay.Advice> advice;
         try {
             result = net.solve(o);
-            advice = format == Format.csv ? List.of() : BypassDelay.suggest(net, o);
+            advice = BypassDelay.suggest(net, o);
         } catch (TransientFailure e) {
             err.println("error: " + file + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
@@ -157,7 +155,7 @@ final class PowerUpCommand implements Callable<Integer> {
             OutputFiles.Refusal no = OutputFiles.check(csv, OutputFiles.Kind.POWERUP_CSV, replace, List.of(file), loader.sources());
             if (no == null) {
                 try {
-                    OutputFiles.write(csv, report.csv(), StandardCharsets.UTF_8);
+                    OutputFiles.write(csv, PowerUpSeries.of(result), StandardCharsets.UTF_8);
                 } catch (IOException e) {
                     no = new OutputFiles.Refusal("cannot write " + csv + ": " + SourceText.reason(csv, e), null);
                 }
@@ -166,12 +164,7 @@ final class PowerUpCommand implements Callable<Integer> {
                 return no.print(err);
             }
         }
-        switch (format) {
-            case json -> out.print(report.json());
-            case csv -> out.print(report.csv());
-            default -> report.text(out, width, !noPlot, ascii ? CurrentPlot.Style.ASCII : CurrentPlot.Style.BLOCKS);
-        }
-        out.flush();
+        format.write(out, report.report(width, !noPlot, ascii ? CurrentPlot.Style.ASCII : CurrentPlot.Style.BLOCKS));
         return report.ok() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
     }
 
@@ -188,20 +181,5 @@ final class PowerUpCommand implements Callable<Integer> {
                     + "); write NAME=VALUE");
         }
         return names.get(0);
-    }
-
-    private static String sweepCsv(ResistorSweep.Result s) {
-        StringBuilder b = new StringBuilder("ohms,switch_on_peak_A,bypass_peak_A,bypass_s,peak_demand_A,mean_W,peak_W,energy_J,feasible,recommended\r\n");
-        for (int i = 0; i < s.rows().size(); i++) {
-            ResistorSweep.Row r = s.rows().get(i);
-            b.append(String.join(",", g(r.ohms()), g(r.switchOnPeak()), g(r.bypassPeak()), g(r.bypassTime()), g(r.peakDemand()),
-                    g(r.meanWatts()), g(r.peakWatts()), g(r.joules()), String.valueOf(r.feasible()), String.valueOf(i == s.best())))
-                    .append("\r\n");
-        }
-        return b.toString();
-    }
-
-    private static String g(double v) {
-        return Double.isNaN(v) ? "" : String.format(java.util.Locale.ROOT, "%.6g", v);
     }
 }

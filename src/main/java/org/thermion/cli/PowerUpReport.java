@@ -7,15 +7,33 @@ import org.thermion.power.startup.HeaterWarmup;
 import org.thermion.power.startup.PowerUpResult;
 import org.thermion.power.startup.RailTransient;
 import org.thermion.power.startup.RelayDriverCheck;
-import org.thermion.power.startup.ResistorSweep;
 import org.thermion.power.startup.SoftStartResult;
 
-import java.io.PrintWriter;
+import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Numbers;
+import org.thermion.cli.report.Report;
+import org.thermion.cli.report.Table;
+
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
-/** Writes a power-up result as text, JSON or an RFC 4180 time series. */
+import static org.thermion.cli.report.Unit.AMPS;
+import static org.thermion.cli.report.Unit.COUNT;
+import static org.thermion.cli.report.Unit.FLAG;
+import static org.thermion.cli.report.Unit.JOULES;
+import static org.thermion.cli.report.Unit.KELVIN;
+import static org.thermion.cli.report.Unit.NUMBER;
+import static org.thermion.cli.report.Unit.OHMS;
+import static org.thermion.cli.report.Unit.PERCENT;
+import static org.thermion.cli.report.Unit.SECONDS;
+import static org.thermion.cli.report.Unit.TEXT;
+import static org.thermion.cli.report.Unit.VOLTS;
+import static org.thermion.cli.report.Unit.WATTS;
+
+/** A power-up result as one report (text, CSV, JSON) and as an RFC 4180 time series. */
 final class PowerUpReport {
     static final String CAUTION = "caution: B+, heater and mains supplies can injure or kill, and a soft-start resistor runs hot. "
             + "These figures are planning estimates from idealised models; confirm them by measurement, and defer to local "
@@ -53,395 +71,361 @@ final class PowerUpReport {
         return true;
     }
 
-    // ---- text ----------------------------------------------------------------------------
+    /** The schema version of powerup's JSON ({@code org/thermion/schema/powerup.schema.json}). */
+    static final int VERSION = 2;
+    /** A rail has settled when its current moved less than this share over the last tenth of the run. */
+    static final double SETTLED = 0.01;
+    static final Absent NONE = new Absent("none");
 
-    void text(PrintWriter out, int plotWidth, boolean plots, CurrentPlot.Style style) {
-        out.println("power-up of " + r.machine() + ": " + Units.time(r.options().seconds()) + " simulated, heaters from "
-                + f0(r.options().assumptions().ambientKelvin()) + " K to " + f0(r.options().assumptions().hotKelvin())
-                + " K; steady stage draws: " + (r.options().drawMode().name().equals("MEAN") ? "mean of low and high" : "highest of low and high"));
-        out.println();
-        out.println("rails:");
-        Table t = new Table("rail", "volts", "limit", "switch-on peak", "at", "bypass peak", "at", "final", "supply");
+    /** The whole report; text adds the plots ({@code plotWidth} columns) unless {@code plots} is false. */
+    Report report(int plotWidth, boolean plots, CurrentPlot.Style style) {
+        Report rep = new Report("powerup", VERSION);
+        rep.field("machine", r.machine());
+        rep.field("simulated", SECONDS, r.options().seconds());
+        rep.field("ambient", KELVIN, r.options().assumptions().ambientKelvin());
+        rep.field("hot", KELVIN, r.options().assumptions().hotKelvin());
+        rep.field("draw_mode", r.options().drawMode().name().toLowerCase(Locale.ROOT));
+        rep.field("ok", ok());
+        double all = r.allWarmSeconds();
+        rep.field("all_warm", SECONDS, Double.isNaN(all) ? new Absent("not within the run") : all);
+        HeaterWarmup worst = r.worstMixedOverVoltage();
+        if (worst == null) {
+            rep.field("worst_mixed_over_voltage", new Absent("no string mixes heater types"));
+        } else {
+            Map<String, Object> w = new LinkedHashMap<>();
+            w.put("tube", worst.tube());
+            w.put("string", worst.string());
+            w.put(VOLTS.name("peak"), worst.peakVoltRatio() * worst.ratedVolts());
+            w.put(PERCENT.name("peak_deviation"), 100 * (worst.peakVoltRatio() - 1));
+            w.put(SECONDS.name("peak_time"), worst.peakVoltTime());
+            rep.field("worst_mixed_over_voltage", w);
+        }
+        rep.field("notes", List.copyOf(r.notes()));
+        rep.field("caution", CAUTION);
+
+        rep.text("power-up of " + r.machine() + ": " + Numbers.si(r.options().seconds(), SECONDS)
+                + " simulated, heaters from " + f0(r.options().assumptions().ambientKelvin()) + " K to "
+                + f0(r.options().assumptions().hotKelvin()) + " K; steady stage draws: "
+                + (r.options().drawMode().name().equals("MEAN") ? "mean of low and high" : "highest of low and high"), "");
+        rep.table(rails());
+        Table soft = softStarts();
+        rep.data(soft);
+        rep.text(softStartLines());
+        if (r.heaters().isEmpty()) {
+            rep.text("heaters: none; the machine has no tubes", "");
+        } else {
+            rep.table(heaters());
+            rep.text(heaterLines());
+        }
+        rep.data(relayDrivers());
+        rep.text(relayLines());
+        if (plots) {
+            rep.verbatim(plotLines(plotWidth, style));
+        }
+        rep.table(models());
+        rep.text(r.notes().stream().map(n -> "  note: " + n).toList());
+        rep.text("", CAUTION);
+        return rep;
+    }
+
+    private Table rails() {
+        Table t = new Table("rails", "rails (currents are magnitudes; volts signed as declared)")
+                .column("rail", "rail", TEXT)
+                .column("nominal", "nominal", VOLTS)
+                .column("limit", "limit", AMPS, "the supply's current limit")
+                .column("switch_on_peak", "switch-on pk", AMPS, "inrush: the highest current before any bypass, when the "
+                        + "current falls from it ('none': the current only rises)")
+                .column("switch_on_peak_time", "at", SECONDS)
+                .column("bypass_peak", "bypass pk", AMPS, "the highest current after the soft start's bypass")
+                .column("bypass_peak_time", "at", SECONDS)
+                .column("steady_state", "steady", AMPS, "the current at the end of the run, when it moved less than 1 % "
+                        + "over the last tenth of it")
+                .column("end", "end", AMPS, "the current at the end of the run")
+                .column("peak_demand", "demand pk", AMPS, "the most the loads asked for, before any current limit")
+                .column("in_limit", "in limit", SECONDS, "time the supply held its current limit")
+                .column("status", "supply", TEXT, "ok, or LIMIT when the loads asked more than the limit");
         for (RailTransient rt : r.rails()) {
             if (!rt.hasLoad()) {
                 continue;
             }
-            String supply = rt.withinLimit() ? "ok" : "LIMIT for " + Units.time(rt.secondsInLimit()) + ", asks " + Units.amps(rt.peakDemand());
-            t.row(rt.name(), Units.volts(rt.volts()), Double.isInfinite(rt.limitAmps()) ? "none" : Units.amps(rt.limitAmps()),
-                    Units.amps(rt.switchOnPeak()), Units.time(rt.switchOnTime()),
-                    rt.hasSoftStart() ? Units.amps(rt.bypassPeak()) : "-", rt.hasSoftStart() ? Units.time(rt.bypassPeakTime()) : "-",
-                    Units.amps(rt.finalAmps()), supply);
+            boolean inrush = inrush(rt);
+            t.row(rt.name(), rt.volts(), Double.isInfinite(rt.limitAmps()) ? NONE : rt.limitAmps(),
+                    inrush ? rt.switchOnPeak() : NONE, inrush ? rt.switchOnTime() : NONE,
+                    rt.hasSoftStart() && !Double.isNaN(rt.bypassPeak()) ? rt.bypassPeak() : NONE,
+                    rt.hasSoftStart() && !Double.isNaN(rt.bypassPeak()) ? rt.bypassPeakTime() : NONE,
+                    settled(rt) ? rt.finalAmps() : new Absent("not settled"), rt.finalAmps(), rt.peakDemand(),
+                    rt.secondsInLimit(), rt.withinLimit() ? "ok" : "LIMIT");
         }
-        t.print(out, "  ");
+        return t;
+    }
+
+    /**
+     * Whether the highest current before the bypass (or in the whole run without one) is an inrush:
+     * a peak the current falls from, rather than the end of a rise (a B+ rail growing as cathodes warm).
+     */
+    static boolean inrush(RailTransient rt) {
+        double[] t = rt.t();
+        double[] a = rt.amps();
+        double until = Double.isNaN(rt.bypassTime()) ? Double.POSITIVE_INFINITY : rt.bypassTime();
+        double last = Double.NaN;
+        for (int i = 0; i < t.length && t[i] <= until; i++) {
+            last = a[i];
+            if (t[i] == until) {
+                break; // the first of the bypass's two samples: the current just before it
+            }
+        }
+        return !Double.isNaN(last) && rt.switchOnPeak() > last * (1 + SETTLED);
+    }
+
+    /** Whether the rail's current moved less than {@link #SETTLED} of its final value over the run's last tenth. */
+    static boolean settled(RailTransient rt) {
+        double[] t = rt.t();
+        double[] a = rt.amps();
+        if (t.length == 0) {
+            return false;
+        }
+        double from = t[t.length - 1] * 0.9;
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < t.length; i++) {
+            if (t[i] >= from) {
+                lo = Math.min(lo, a[i]);
+                hi = Math.max(hi, a[i]);
+            }
+        }
+        return hi - lo <= SETTLED * Math.abs(rt.finalAmps());
+    }
+
+    private Table softStarts() {
+        Table t = new Table("soft_starts", "soft starts")
+                .column("name", "name", TEXT)
+                .column("rail", "rail", TEXT)
+                .column("resistor", "resistor", OHMS)
+                .column("rated", "rated", WATTS)
+                .column("thyratron", "thyratron", FLAG)
+                .column("trigger", "trigger", SECONDS)
+                .column("bypass", "bypass", SECONDS)
+                .column("energy", "energy", JOULES)
+                .column("peak", "peak", WATTS)
+                .column("mean", "mean", WATTS)
+                .column("within_rating", "within rating", FLAG)
+                .column("needed", "needed", WATTS, "the continuous rating its temperature rise asks")
+                .column("suggested", "suggested", WATTS, "a commonly sold rating at least that")
+                .column("contact_rating", "contacts", AMPS, "the bypass contacts' declared rating")
+                .column("make", "make", AMPS, "the current the contacts make (the bypass peak)")
+                .column("carry", "carry", AMPS, "the current they carry at the end of the run")
+                .column("contacts_ok", "contacts ok", FLAG)
+                .column("settle", "settle", SECONDS)
+                .column("resting", "resting", AMPS);
         for (SoftStartResult s : r.softStarts()) {
-            out.println();
+            BypassDelay.Advice a = adviceFor(s.name());
+            t.row(s.name(), r.rail(s.rail()).name(), s.ohms(), Double.isInfinite(s.ratedWatts()) ? new Absent("no rating") : s.ratedWatts(),
+                    s.thyratron(), Double.isNaN(s.triggerTime()) ? new Absent("did not fire") : s.triggerTime(),
+                    s.bypassed() ? s.bypassTime() : new Absent("not bypassed"), s.joules(), s.peakWatts(), s.meanWatts(),
+                    s.withinRating(), s.neededWatts(), Double.isNaN(s.suggestedWatts()) ? new Absent("beyond the common list") : s.suggestedWatts(),
+                    Double.isNaN(s.contactAmps()) ? new Absent("no rating") : s.contactAmps(),
+                    Double.isNaN(s.makeAmps()) ? new Absent("never closed") : s.makeAmps(), s.carryAmps(), s.contactsOk(),
+                    a == null || Double.isNaN(a.settleSeconds()) ? new Absent("not settled") : a.settleSeconds(),
+                    a == null ? new Absent("not settled") : a.restingAmps());
+        }
+        return t;
+    }
+
+    private List<String> softStartLines() {
+        List<String> out = new ArrayList<>();
+        for (SoftStartResult s : r.softStarts()) {
             String rail = r.rail(s.rail()).name();
-            out.println("soft start " + s.name() + " on " + rail + ": " + Units.ohms(s.ohms())
-                    + (Double.isInfinite(s.ratedWatts()) ? ", no rating declared" : ", rated " + Units.watts(s.ratedWatts())));
+            out.add("soft start " + s.name() + " on " + rail + ": " + Numbers.si(s.ohms(), OHMS)
+                    + (Double.isInfinite(s.ratedWatts()) ? ", no rating declared" : ", rated " + Numbers.si(s.ratedWatts(), WATTS)));
             if (s.ohms() == 0) {
-                out.println("  no resistor: the rail switches straight on");
+                out.add("  no resistor: the rail switches straight on");
+                out.add("");
                 continue;
             }
             String trig = s.thyratron()
-                    ? (Double.isNaN(s.triggerTime()) ? "thyratron did not fire within the run" : "thyratron fired at " + Units.time(s.triggerTime()))
-                    : (Double.isNaN(s.triggerTime()) ? "delay beyond the run" : "delay of " + Units.time(s.triggerTime()));
-            out.println("  trigger   " + trig);
-            out.println("  bypass    " + (s.bypassed() ? "relay closed at " + Units.time(s.bypassTime()) : "NOT within the run: the resistor stays in circuit"));
-            out.println("  resistor  " + joules(s.joules()) + " dissipated; peak " + Units.watts(s.peakWatts()) + ", mean "
-                    + Units.watts(s.meanWatts()) + " while in circuit"
+                    ? (Double.isNaN(s.triggerTime()) ? "thyratron did not fire within the run" : "thyratron fired at " + Numbers.si(s.triggerTime(), SECONDS))
+                    : (Double.isNaN(s.triggerTime()) ? "delay beyond the run" : "delay of " + Numbers.si(s.triggerTime(), SECONDS));
+            out.add("  trigger   " + trig);
+            out.add("  bypass    " + (s.bypassed() ? "relay closed at " + Numbers.si(s.bypassTime(), SECONDS) : "NOT within the run: the resistor stays in circuit"));
+            out.add("  resistor  " + Numbers.si(s.joules(), JOULES) + " dissipated; peak " + Numbers.si(s.peakWatts(), WATTS) + ", mean "
+                    + Numbers.si(s.meanWatts(), WATTS) + " while in circuit"
                     + (Double.isInfinite(s.ratedWatts()) ? "" : s.withinRating() ? ": within its rating"
-                    : ": OVER its " + Units.watts(s.ratedWatts()) + " rating")
+                    : ": OVER its " + Numbers.si(s.ratedWatts(), WATTS) + " rating")
                     + (Double.isInfinite(s.ratedWatts()) ? "" : String.format(Locale.ROOT, " (peak %.1f x rating)", s.peakWatts() / s.ratedWatts())));
-            out.println("  rating    by temperature rise, " + String.format(Locale.ROOT, "%.3g x rated power for %.3g s",
+            out.add("  rating    by temperature rise, " + String.format(Locale.ROOT, "%.3g x rated power for %.3g s",
                     s.rating().multiple(), s.rating().seconds()) + " (common practice): asks at least "
-                    + Units.watts(s.neededWatts()) + " continuous"
-                    + (Double.isNaN(s.suggestedWatts()) ? "" : ", a " + Units.watts(s.suggestedWatts()) + " resistor"));
+                    + Numbers.si(s.neededWatts(), WATTS) + " continuous"
+                    + (Double.isNaN(s.suggestedWatts()) ? "" : ", a " + Numbers.si(s.suggestedWatts(), WATTS) + " resistor"));
             if (!Double.isNaN(s.contactAmps())) {
-                out.println("  contacts  make " + Units.amps(s.makeAmps()) + ", carry " + Units.amps(s.carryAmps()) + " against "
-                        + Units.amps(s.contactAmps()) + ": " + (s.contactsOk() ? "ok" : "OVER RATING"));
+                out.add("  contacts  make " + Numbers.si(s.makeAmps(), AMPS) + ", carry " + Numbers.si(s.carryAmps(), AMPS)
+                        + " against " + Numbers.si(s.contactAmps(), AMPS) + ": " + (s.contactsOk() ? "ok" : "OVER RATING"));
             }
             BypassDelay.Advice a = adviceFor(s.name());
             if (a != null) {
-                out.println("  delay     " + (Double.isNaN(a.settleSeconds()) ? "with the relay held open the current has not settled within "
-                        + Units.time(Math.max(60, r.options().seconds()))
-                        : "with the relay held open the current settles within 2 % of " + Units.amps(a.restingAmps()) + " by "
-                        + Units.time(a.settleSeconds()) + ";\n            bypassing later gains little, earlier raises the bypass peak"));
+                out.add("  delay     " + (Double.isNaN(a.settleSeconds()) ? "with the relay held open the current has not settled within "
+                        + Numbers.si(Math.max(60, r.options().seconds()), SECONDS)
+                        : "with the relay held open the current settles within 2 % of " + Numbers.si(a.restingAmps(), AMPS) + " by "
+                        + Numbers.si(a.settleSeconds(), SECONDS) + "; bypassing later gains little, earlier raises the bypass peak"));
             }
+            out.add("");
         }
-        out.println();
-        if (r.heaters().isEmpty()) {
-            out.println("heaters: none; the machine has no tubes");
-            out.println();
-            wrap(out, CAUTION, 78);
-            return;
-        }
-        out.println("heaters:");
-        Table h = new Table("tube", "rating", "string", "pos", "count", "95 % hot", "peak voltage", "at", "final");
+        return out;
+    }
+
+    private Table heaters() {
+        Table h = new Table("heaters", "heaters")
+                .column("tube", "tube", TEXT)
+                .column("rated", "rated", VOLTS)
+                .column("rated", "rated", AMPS)
+                .column("rail", "rail", TEXT)
+                .column("string", "string", TEXT)
+                .column("position", "pos", COUNT, "place in the string, from 1")
+                .column("count", "count", COUNT, "identical strings")
+                .column("mixed", "mixed", FLAG, "the string mixes heater types")
+                .column("warm", "95 % hot", SECONDS, "when the heater reached 95 % of its operating temperature")
+                .column("peak", "peak", VOLTS, "the highest voltage across the heater")
+                .column("peak_deviation", "dev", PERCENT, "that voltage against its rating")
+                .column("peak_time", "at", SECONDS)
+                .column("final", "final", VOLTS, "the voltage across it at the end of the run")
+                .column("final", "final", KELVIN, "its temperature at the end of the run");
         for (HeaterWarmup w : r.heaters()) {
-            h.row(w.tube(), Units.volts(w.ratedVolts()) + " " + Units.amps(w.ratedAmps()), w.string(),
-                    String.valueOf(w.position() + 1), String.valueOf(w.count()),
-                    Double.isNaN(w.warmSeconds()) ? "not yet" : Units.time(w.warmSeconds()),
-                    Units.volts(w.peakVoltRatio() * w.ratedVolts()) + String.format(Locale.ROOT, " %+.0f %%", 100 * (w.peakVoltRatio() - 1)),
-                    Units.time(w.peakVoltTime()), Units.volts(w.finalVolts()));
+            h.row(w.tube(), w.ratedVolts(), w.ratedAmps(), r.rail(w.rail()).name(), w.string(), w.position() + 1, w.count(),
+                    w.mixed(), Double.isNaN(w.warmSeconds()) ? new Absent("not yet") : w.warmSeconds(),
+                    w.peakVoltRatio() * w.ratedVolts(), 100 * (w.peakVoltRatio() - 1), w.peakVoltTime(), w.finalVolts(),
+                    w.finalKelvin());
         }
-        h.print(out, "  ");
+        return h;
+    }
+
+    private List<String> heaterLines() {
+        List<String> out = new ArrayList<>();
         double all = r.allWarmSeconds();
-        out.println("  every heater at 95 % of operating temperature " + (Double.isNaN(all) ? "NOT within the run" : "by " + Units.time(all)));
+        out.add("  every heater at 95 % of operating temperature " + (Double.isNaN(all) ? "NOT within the run" : "by " + Numbers.si(all, SECONDS)));
         HeaterWarmup worst = r.worstMixedOverVoltage();
         if (worst == null) {
-            out.println("  no string mixes heater types");
+            out.add("  no string mixes heater types");
         } else {
-            out.println("  worst over-voltage in a mixed string: " + worst.tube() + " in " + worst.string() + ", "
-                    + Units.volts(worst.peakVoltRatio() * worst.ratedVolts())
-                    + String.format(Locale.ROOT, " (%+.0f %% of rated)", 100 * (worst.peakVoltRatio() - 1)) + " at " + Units.time(worst.peakVoltTime())
+            out.add("  worst over-voltage in a mixed string: " + worst.tube() + " in " + worst.string() + ", "
+                    + Numbers.si(worst.peakVoltRatio() * worst.ratedVolts(), VOLTS)
+                    + String.format(Locale.ROOT, " (%+.1f %% of rated)", 100 * (worst.peakVoltRatio() - 1)) + " at "
+                    + Numbers.si(worst.peakVoltTime(), SECONDS)
                     + (worst.peakVoltRatio() > 1.10 ? ": beyond the +10 % of common practice" : ""));
         }
         for (HeaterWarmup w : r.heaters()) {
             if (w.finalVolts() > 1.10 * w.ratedVolts()) {
-                out.println("  WARNING: " + w.tube() + " in " + w.string() + " settles at " + Units.volts(w.finalVolts()) + " on a "
-                        + Units.volts(w.ratedVolts()) + " heater");
+                out.add("  WARNING: " + w.tube() + " in " + w.string() + " settles at " + Numbers.si(w.finalVolts(), VOLTS) + " on a "
+                        + Numbers.si(w.ratedVolts(), VOLTS) + " heater");
             }
         }
+        out.add("");
+        return out;
+    }
+
+    private Table relayDrivers() {
+        Table t = new Table("relay_drivers", "relay drivers")
+                .column("tube", "tube", TEXT)
+                .column("rail", "rail", TEXT)
+                .column("rail", "rail", VOLTS)
+                .column("arc_drop", "arc drop", VOLTS)
+                .column("plate", "plate", OHMS)
+                .column("coil", "coil", OHMS)
+                .column("coil", "coil", VOLTS)
+                .column("coil", "coil", AMPS)
+                .column("picks_up", "picks up", FLAG)
+                .column("coil_not_overdriven", "not overdriven", FLAG)
+                .column("average_ok", "average ok", FLAG)
+                .column("peak_ok", "peak ok", FLAG)
+                .column("fire", "fired", SECONDS)
+                .column("heated_long_enough", "heated", FLAG)
+                .column("coil_at_fire", "coil at fire", VOLTS, "the coil's voltage when the tube fired")
+                .column("coil_max", "coil max", VOLTS, "the most the coil saw during the run")
+                .column("openings", "openings", COUNT, "times the relay opened again below its drop-out (chatter)")
+                .column("closed", "closed", FLAG)
+                .column("ok", "ok", FLAG);
         for (RelayDriverCheck c : r.relayChecks()) {
-            out.println();
-            out.println("relay driver: " + c.tube() + " from " + c.railName() + " " + Units.volts(c.railVolts()) + " through "
-                    + Units.ohms(c.plateOhms()) + ", coil " + Units.ohms(c.relay().coilOhms()) + ", arc drop " + Units.volts(c.arcDropVolts()));
+            t.row(c.tube(), c.railName(), c.railVolts(), c.arcDropVolts(), c.plateOhms(), c.relay().coilOhms(), c.coilVolts(),
+                    c.coilAmps(), c.picksUp(), c.coilNotOverdriven(), c.averageOk(), c.peakOk(),
+                    Double.isNaN(c.fireTime()) ? new Absent("did not fire") : c.fireTime(), c.heatedLongEnough(),
+                    c.coil() == null || Double.isNaN(c.coil().atFireVolts()) ? new Absent("did not fire") : c.coil().atFireVolts(),
+                    c.coil() == null ? new Absent("not followed") : c.coil().maxVolts(),
+                    c.coil() == null ? new Absent("not followed") : (Object) (long) c.coil().openings(),
+                    c.coil() == null ? new Absent("not followed") : c.coil().closed(), c.ok());
+        }
+        return t;
+    }
+
+    private List<String> relayLines() {
+        List<String> out = new ArrayList<>();
+        for (RelayDriverCheck c : r.relayChecks()) {
+            out.add("relay driver: " + c.tube() + " from " + c.railName() + " " + Numbers.si(c.railVolts(), VOLTS) + " through "
+                    + Numbers.si(c.plateOhms(), OHMS) + ", coil " + Numbers.si(c.relay().coilOhms(), OHMS) + ", arc drop "
+                    + Numbers.si(c.arcDropVolts(), VOLTS));
             double pick = c.relay().pickupVolts();
-            out.println("  coil      " + Units.volts(c.coilVolts()) + String.format(Locale.ROOT, " (%.0f %% of rated %s), pick-up %s: ",
-                    100 * c.ratedRatio(), Units.volts(c.relay().ratedVolts()), Units.volts(pick))
+            out.add("  coil      " + Numbers.si(c.coilVolts(), VOLTS) + String.format(Locale.ROOT, " (%.0f %% of rated %s), pick-up %s: ",
+                    100 * c.ratedRatio(), Numbers.si(c.relay().ratedVolts(), VOLTS), Numbers.si(pick, VOLTS))
                     + (!c.picksUp() ? "DOES NOT PICK UP" : !c.coilNotOverdriven() ? "OVERDRIVEN (over +10 %)" : "ok"));
             if (c.coil() != null && !Double.isNaN(c.coil().atFireVolts())) {
-                out.println("  in run    coil " + Units.volts(c.coil().atFireVolts()) + " at firing, at most "
-                        + Units.volts(c.coil().maxVolts()) + " at " + Units.time(c.coil().maxTime())
+                out.add("  in run    coil " + Numbers.si(c.coil().atFireVolts(), VOLTS) + " at firing, at most "
+                        + Numbers.si(c.coil().maxVolts(), VOLTS) + " at " + Numbers.si(c.coil().maxTime(), SECONDS)
                         + (c.chatters() ? "; CHATTER: opened " + c.coil().openings() + " times below drop-out, first at "
-                        + Units.time(c.coil().firstOpening()) : ""));
+                        + Numbers.si(c.coil().firstOpening(), SECONDS) : ""));
             }
             if (c.coil() != null && !c.coil().closed()) {
-                out.println("  why open  " + c.coil().whyOpen());
+                out.add("  why open  " + c.coil().whyOpen());
             }
-            out.println("  tube      " + Units.amps(c.coilAmps()) + " continuous against " + Units.amps(c.avgRatingAmps()) + " average and "
-                    + Units.amps(c.peakRatingAmps()) + " peak: " + (c.averageOk() && c.peakOk() ? "ok" : "OVER RATING"));
-            out.println("  heating   " + (Double.isNaN(c.fireTime()) ? "did not fire" : "fired " + Units.time(c.fireTime()) + " after switch-on")
-                    + (Double.isNaN(c.heatingSeconds()) ? "" : "; asks " + Units.time(c.heatingSeconds()) + " of cathode heating: "
+            out.add("  tube      " + Numbers.si(c.coilAmps(), AMPS) + " continuous against " + Numbers.si(c.avgRatingAmps(), AMPS)
+                    + " average and " + Numbers.si(c.peakRatingAmps(), AMPS) + " peak: " + (c.averageOk() && c.peakOk() ? "ok" : "OVER RATING"));
+            out.add("  heating   " + (Double.isNaN(c.fireTime()) ? "did not fire" : "fired " + Numbers.si(c.fireTime(), SECONDS) + " after switch-on")
+                    + (Double.isNaN(c.heatingSeconds()) ? "" : "; asks " + Numbers.si(c.heatingSeconds(), SECONDS) + " of cathode heating: "
                     + (c.heatedLongEnough() ? "ok" : "TOO EARLY")));
-            out.println("  note      once fired it conducts until its anode supply is broken, so the relay holds in; the relay");
-            out.println("            contacts carry the whole rail current: rate them for the bypass peak");
+            out.add("  note      once fired it conducts until its anode supply is broken, so the relay holds in; the relay "
+                    + "contacts carry the whole rail current: rate them for the bypass peak");
+            out.add("");
         }
-        if (plots) {
-            for (RailTransient rt : r.rails()) {
-                if (!rt.hasLoad() || rt.t().length == 0) {
-                    continue;
-                }
-                out.println();
-                if (!(rt.worstPeak() > 0)) {
-                    out.println("rail " + rt.name() + ": no current during the run");
-                    continue;
-                }
-                List<CurrentPlot.Marker> marks = new ArrayList<>();
-                if (!Double.isNaN(rt.bypassTime())) {
-                    marks.add(new CurrentPlot.Marker(rt.bypassTime(), "bypass " + Units.time(rt.bypassTime())));
-                }
-                for (String line : CurrentPlot.render(rt.t(), rt.amps(), plotWidth, 16,
-                        "rail " + rt.name() + ": current against time, peak " + Units.amps(rt.worstPeak()),
-                        marks, rt.limitAmps(), style)) {
-                    out.println(line);
-                }
+        return out;
+    }
+
+    private List<String> plotLines(int plotWidth, CurrentPlot.Style style) {
+        List<String> out = new ArrayList<>();
+        for (RailTransient rt : r.rails()) {
+            if (!rt.hasLoad() || rt.t().length == 0) {
+                continue;
             }
+            if (!(rt.worstPeak() > 0)) {
+                out.add("rail " + rt.name() + ": no current during the run");
+                out.add("");
+                continue;
+            }
+            List<CurrentPlot.Marker> marks = new ArrayList<>();
+            if (!Double.isNaN(rt.bypassTime())) {
+                marks.add(new CurrentPlot.Marker(rt.bypassTime(), "bypass " + Numbers.si(rt.bypassTime(), SECONDS)));
+            }
+            out.addAll(CurrentPlot.render(rt.t(), rt.amps(), plotWidth, 16,
+                    "rail " + rt.name() + ": current against time, highest " + Numbers.si(rt.worstPeak(), AMPS),
+                    marks, rt.limitAmps(), style));
+            out.add("");
         }
-        out.println();
-        out.println("heater models (radiation balanced at rated power, heat capacity from the warm-up test):");
-        Table m = new Table("tube", "rating", "cold/hot", "k, W/K^4", "C, J/K", "warm-up");
+        return out;
+    }
+
+    private Table models() {
+        Table m = new Table("heater_models", "heater models (radiation balanced at rated power, heat capacity from the warm-up test)")
+                .column("tube", "tube", TEXT)
+                .column("rated", "rated", VOLTS)
+                .column("rated", "rated", AMPS)
+                .column("cold_hot_ratio", "cold/hot", NUMBER, "hot resistance over cold resistance")
+                .column("radiation_w_per_k4", "k W/K^4", NUMBER, "radiated power = k (T^4 - T_ambient^4)")
+                .column("heat_capacity_j_per_k", "C J/K", NUMBER, "heat capacity of the heater")
+                .column("warmup", "warm-up", SECONDS, "the tube's warm-up time")
+                .column("warmup_declared", "declared", FLAG, "no: assumed (see the notes)");
         for (HeaterModel hm : r.models()) {
-            m.row(hm.tube(), Units.volts(hm.rating().volts()) + " " + Units.amps(hm.rating().amps()), f2(hm.coldHotRatio()),
-                    String.format(Locale.ROOT, "%.3e", hm.radiationK()), String.format(Locale.ROOT, "%.4f", hm.heatCapacity()),
-                    Units.time(hm.warmupSeconds()) + (hm.warmupDeclared() ? "" : " assumed"));
+            m.row(hm.tube(), hm.rating().volts(), hm.rating().amps(), hm.coldHotRatio(), hm.radiationK(), hm.heatCapacity(),
+                    hm.warmupSeconds(), hm.warmupDeclared());
         }
-        m.print(out, "  ");
-        for (String n : r.notes()) {
-            out.println("  note: " + n);
-        }
-        out.println();
-        wrap(out, CAUTION, 78);
-    }
-
-    static void sweepText(PrintWriter out, ResistorSweep.Result s) {
-        out.println("soft-start resistor sweep for " + s.softStart() + " on " + s.rail() + " (limit "
-                + (Double.isInfinite(s.limitAmps()) ? "none" : Units.amps(s.limitAmps())) + ", rating "
-                + (Double.isInfinite(s.ratedWatts()) ? "none" : Units.watts(s.ratedWatts())) + "):");
-        Table t = new Table("resistor", "switch-on peak", "bypass peak", "larger", "bypass at", "mean power", "energy", "verdict");
-        for (int i = 0; i < s.rows().size(); i++) {
-            ResistorSweep.Row row = s.rows().get(i);
-            String verdict = !row.bypassed() ? "no bypass" : !row.withinLimit() ? "over limit" : !row.withinRating() ? "over rating"
-                    : i == s.best() ? "<- best" : "ok";
-            t.row(ohms(row.ohms()), Units.amps(row.switchOnPeak()), Units.amps(row.bypassPeak()), Units.amps(row.worstPeak()),
-                    Units.time(row.bypassTime()), Units.watts(row.meanWatts()), joules(row.joules()), verdict);
-        }
-        t.print(out, "  ");
-        ResistorSweep.Row best = s.recommended();
-        out.println(best == null ? "  no value in the range keeps the supply within its limit and the resistor within its rating"
-                : "  recommended: " + ohms(best.ohms()) + " (larger peak " + Units.amps(best.worstPeak()) + ", bypass at "
-                + Units.time(best.bypassTime()) + ", mean " + Units.watts(best.meanWatts()) + " in the resistor)");
-        if (s.preferred() != null) {
-            ResistorSweep.Row p = s.preferred();
-            out.println("  preferred value: " + ohms(p.ohms()) + (org.thermion.power.startup.PreferredValues.isE12(p.ohms())
-                    ? " (E12)" : " (E24)") + ", " + (Double.isNaN(s.preferredWatts()) ? "a rating beyond the common list"
-                    : Units.watts(s.preferredWatts())) + " (larger peak " + Units.amps(p.worstPeak()) + ")");
-        }
-        out.println();
-        wrap(out, CAUTION, 78);
-    }
-
-    static void wrap(PrintWriter out, String text, int width) {
-        StringBuilder line = new StringBuilder();
-        for (String word : text.split(" ")) {
-            if (line.length() > 0 && line.length() + 1 + word.length() > width) {
-                out.println(line);
-                line.setLength(0);
-            }
-            line.append(line.length() == 0 ? "" : " ").append(word);
-        }
-        if (line.length() > 0) {
-            out.println(line);
-        }
-    }
-
-    // ---- JSON ----------------------------------------------------------------------------
-
-    String json() {
-        StringBuilder b = new StringBuilder();
-        b.append("{\n");
-        kv(b, 1, "machine", ReportJson.quote(r.machine())).append(",\n");
-        kv(b, 1, "seconds", num(r.options().seconds())).append(",\n");
-        kv(b, 1, "drawMode", ReportJson.quote(r.options().drawMode().name().toLowerCase(Locale.ROOT))).append(",\n");
-        kv(b, 1, "ok", String.valueOf(ok())).append(",\n");
-        ind(b, 1).append("\"rails\": [");
-        boolean first = true;
-        for (RailTransient rt : r.rails()) {
-            b.append(first ? "\n" : ",\n");
-            first = false;
-            ind(b, 2).append("{\"name\": ").append(ReportJson.quote(rt.name())).append(", \"volts\": ").append(num(rt.volts()))
-                    .append(", \"limitAmps\": ").append(num(rt.limitAmps()))
-                    .append(", \"switchOnPeakAmps\": ").append(num(rt.switchOnPeak())).append(", \"switchOnPeakSeconds\": ").append(num(rt.switchOnTime()))
-                    .append(", \"bypassPeakAmps\": ").append(num(rt.bypassPeak())).append(", \"bypassPeakSeconds\": ").append(num(rt.bypassPeakTime()))
-                    .append(", \"bypassSeconds\": ").append(num(rt.bypassTime())).append(", \"peakDemandAmps\": ").append(num(rt.peakDemand()))
-                    .append(", \"secondsInLimit\": ").append(num(rt.secondsInLimit())).append(", \"finalAmps\": ").append(num(rt.finalAmps()))
-                    .append(", \"withinLimit\": ").append(rt.withinLimit()).append(", \"softStart\": ").append(rt.hasSoftStart()).append("}");
-        }
-        b.append("\n");
-        ind(b, 1).append("],\n");
-        ind(b, 1).append("\"softStarts\": [");
-        first = true;
-        for (SoftStartResult s : r.softStarts()) {
-            b.append(first ? "\n" : ",\n");
-            first = false;
-            ind(b, 2).append("{\"name\": ").append(ReportJson.quote(s.name())).append(", \"rail\": ").append(ReportJson.quote(r.rail(s.rail()).name()))
-                    .append(", \"ohms\": ").append(num(s.ohms())).append(", \"ratedWatts\": ").append(num(s.ratedWatts()))
-                    .append(", \"thyratron\": ").append(s.thyratron()).append(", \"triggerSeconds\": ").append(num(s.triggerTime()))
-                    .append(", \"bypassSeconds\": ").append(num(s.bypassTime())).append(", \"joules\": ").append(num(s.joules()))
-                    .append(", \"peakWatts\": ").append(num(s.peakWatts())).append(", \"meanWatts\": ").append(num(s.meanWatts()))
-                    .append(", \"withinRating\": ").append(s.withinRating());
-            BypassDelay.Advice a = adviceFor(s.name());
-            if (a != null) {
-                b.append(", \"settleSeconds\": ").append(num(a.settleSeconds())).append(", \"restingAmps\": ").append(num(a.restingAmps()));
-            }
-            b.append("}");
-        }
-        b.append("\n");
-        ind(b, 1).append("],\n");
-        ind(b, 1).append("\"heaters\": [");
-        first = true;
-        for (HeaterWarmup w : r.heaters()) {
-            b.append(first ? "\n" : ",\n");
-            first = false;
-            ind(b, 2).append("{\"tube\": ").append(ReportJson.quote(w.tube())).append(", \"ratedVolts\": ").append(num(w.ratedVolts()))
-                    .append(", \"ratedAmps\": ").append(num(w.ratedAmps())).append(", \"rail\": ").append(ReportJson.quote(r.rail(w.rail()).name()))
-                    .append(", \"string\": ").append(ReportJson.quote(w.string())).append(", \"position\": ").append(w.position())
-                    .append(", \"count\": ").append(w.count()).append(", \"mixed\": ").append(w.mixed())
-                    .append(", \"warmSeconds\": ").append(num(w.warmSeconds())).append(", \"peakVoltRatio\": ").append(num(w.peakVoltRatio()))
-                    .append(", \"peakVoltSeconds\": ").append(num(w.peakVoltTime())).append(", \"finalVolts\": ").append(num(w.finalVolts()))
-                    .append(", \"finalKelvin\": ").append(num(w.finalKelvin())).append("}");
-        }
-        b.append("\n");
-        ind(b, 1).append("],\n");
-        kv(b, 1, "allWarmSeconds", num(r.allWarmSeconds())).append(",\n");
-        HeaterWarmup worst = r.worstMixedOverVoltage();
-        kv(b, 1, "worstMixedOverVoltage", worst == null ? "null" : "{\"tube\": " + ReportJson.quote(worst.tube()) + ", \"string\": " + ReportJson.quote(worst.string())
-                + ", \"peakVoltRatio\": " + num(worst.peakVoltRatio()) + ", \"seconds\": " + num(worst.peakVoltTime()) + "}").append(",\n");
-        ind(b, 1).append("\"relayDrivers\": [");
-        first = true;
-        for (RelayDriverCheck c : r.relayChecks()) {
-            b.append(first ? "\n" : ",\n");
-            first = false;
-            ind(b, 2).append("{\"tube\": ").append(ReportJson.quote(c.tube())).append(", \"rail\": ").append(ReportJson.quote(c.railName()))
-                    .append(", \"railVolts\": ").append(num(c.railVolts())).append(", \"arcDropVolts\": ").append(num(c.arcDropVolts()))
-                    .append(", \"plateOhms\": ").append(num(c.plateOhms())).append(", \"coilOhms\": ").append(num(c.relay().coilOhms()))
-                    .append(", \"coilVolts\": ").append(num(c.coilVolts())).append(", \"coilAmps\": ").append(num(c.coilAmps()))
-                    .append(", \"picksUp\": ").append(c.picksUp()).append(", \"coilNotOverdriven\": ").append(c.coilNotOverdriven())
-                    .append(", \"averageOk\": ").append(c.averageOk()).append(", \"peakOk\": ").append(c.peakOk())
-                    .append(", \"fireSeconds\": ").append(num(c.fireTime())).append(", \"heatedLongEnough\": ").append(c.heatedLongEnough())
-                    .append(", \"ok\": ").append(c.ok()).append("}");
-        }
-        b.append("\n");
-        ind(b, 1).append("],\n");
-        ind(b, 1).append("\"notes\": [");
-        for (int i = 0; i < r.notes().size(); i++) {
-            b.append(i == 0 ? "" : ", ").append(ReportJson.quote(r.notes().get(i)));
-        }
-        b.append("],\n");
-        kv(b, 1, "caution", ReportJson.quote(CAUTION)).append("\n");
-        b.append("}\n");
-        return b.toString().replace("[\n  ]", "[]");
-    }
-
-    static String sweepJson(ResistorSweep.Result s) {
-        StringBuilder b = new StringBuilder("{\n");
-        kv(b, 1, "softStart", ReportJson.quote(s.softStart())).append(",\n");
-        kv(b, 1, "rail", ReportJson.quote(s.rail())).append(",\n");
-        kv(b, 1, "limitAmps", num(s.limitAmps())).append(",\n");
-        kv(b, 1, "ratedWatts", num(s.ratedWatts())).append(",\n");
-        ind(b, 1).append("\"rows\": [");
-        for (int i = 0; i < s.rows().size(); i++) {
-            ResistorSweep.Row row = s.rows().get(i);
-            b.append(i == 0 ? "\n" : ",\n");
-            ind(b, 2).append("{\"ohms\": ").append(num(row.ohms())).append(", \"switchOnPeakAmps\": ").append(num(row.switchOnPeak()))
-                    .append(", \"bypassPeakAmps\": ").append(num(row.bypassPeak())).append(", \"bypassSeconds\": ").append(num(row.bypassTime()))
-                    .append(", \"peakDemandAmps\": ").append(num(row.peakDemand())).append(", \"meanWatts\": ").append(num(row.meanWatts()))
-                    .append(", \"peakWatts\": ").append(num(row.peakWatts())).append(", \"joules\": ").append(num(row.joules()))
-                    .append(", \"feasible\": ").append(row.feasible()).append("}");
-        }
-        b.append("\n");
-        ind(b, 1).append("],\n");
-        kv(b, 1, "recommendedOhms", s.recommended() == null ? "null" : num(s.recommended().ohms())).append(",\n");
-        kv(b, 1, "caution", ReportJson.quote(CAUTION)).append("\n}\n");
-        return b.toString();
-    }
-
-    // ---- CSV (RFC 4180) ------------------------------------------------------------------
-
-    String csv() {
-        StringBuilder b = new StringBuilder();
-        List<String> head = new ArrayList<>();
-        head.add("time_s");
-        for (RailTransient rt : r.rails()) {
-            head.add(rt.name() + "_A");
-        }
-        for (RailTransient rt : r.rails()) {
-            head.add(rt.name() + "_V");
-        }
-        for (HeaterWarmup w : r.heaters()) {
-            head.add(w.tube() + " #" + (w.position() + 1) + " in " + w.string() + " (x" + w.count() + ")_K");
-        }
-        row(b, head);
-        double[] t = r.t();
-        for (int i = 0; i < t.length; i++) {
-            List<String> cells = new ArrayList<>();
-            cells.add(g(t[i]));
-            for (RailTransient rt : r.rails()) {
-                cells.add(g(rt.amps()[i]));
-            }
-            for (RailTransient rt : r.rails()) {
-                cells.add(g(rt.busVolts()[i]));
-            }
-            for (double[] k : r.heaterKelvin()) {
-                cells.add(g(k[i]));
-            }
-            row(b, cells);
-        }
-        return b.toString();
-    }
-
-    private static void row(StringBuilder b, List<String> cells) {
-        b.append(ReportCsv.row(cells.toArray(String[]::new))).append("\r\n");
-    }
-
-    // ---- helpers -------------------------------------------------------------------------
-
-    private static String g(double v) {
-        return Double.isFinite(v) ? num(v) : "";
+        return m;
     }
 
     private static String f0(double v) {
         return String.format(Locale.ROOT, "%.0f", v);
-    }
-
-    private static String f2(double v) {
-        return String.format(Locale.ROOT, "%.2f", v);
-    }
-
-    /** Resistor values as swept: up to four significant figures, so close steps stay distinct. */
-    static String ohms(double v) {
-        if (v >= 1000) {
-            return Units.ohms(v);
-        }
-        return num(Double.parseDouble(String.format(Locale.ROOT, "%.4g", v))) + " ohm";
-    }
-
-    static String joules(double j) {
-        return Units.scaled(j, "J");
-    }
-
-    private static StringBuilder ind(StringBuilder b, int level) {
-        return b.append("  ".repeat(level));
-    }
-
-    private static StringBuilder kv(StringBuilder b, int level, String key, String value) {
-        return ind(b, level).append(ReportJson.quote(key)).append(": ").append(value);
-    }
-
-    static String num(double v) {
-        if (Double.isNaN(v) || Double.isInfinite(v)) {
-            return "null";
-        }
-        String s = String.format(Locale.ROOT, "%.6g", v);
-        int e = s.indexOf('e');
-        String mant = e < 0 ? s : s.substring(0, e);
-        String exp = e < 0 ? "" : s.substring(e);
-        if (mant.contains(".")) {
-            mant = mant.replaceFirst("0+$", "");
-            if (mant.endsWith(".")) {
-                mant = mant.substring(0, mant.length() - 1);
-            }
-        }
-        return mant + exp;
     }
 }

@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.cli.report.Format;
 import org.thermion.asm.Assembly;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
@@ -200,7 +201,7 @@ final class RunCommand implements Callable<Integer> {
             vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
                     + (m.pc() != null ? " nets and the pc)" : " nets)");
         }
-        new RunReport(m, program, level.name(), mode.toString(), result).print(out, format);
+        format.write(out, new RunReport(m, program, level.name(), mode.toString(), result).report());
         if (vcdNote != null && format == Format.text) {
             out.println();
             out.println(vcdNote);

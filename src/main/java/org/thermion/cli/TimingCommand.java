@@ -1,5 +1,10 @@
 package org.thermion.cli;
 
+import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Format;
+import org.thermion.cli.report.Numbers;
+import org.thermion.cli.report.Report;
+import org.thermion.cli.report.Table;
 import org.thermion.model.Machine;
 import org.thermion.timing.InstanceDelay;
 import org.thermion.timing.PathStep;
@@ -15,10 +20,19 @@ import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+
+import static org.thermion.cli.report.Unit.COUNT;
+import static org.thermion.cli.report.Unit.FARADS;
+import static org.thermion.cli.report.Unit.FLAG;
+import static org.thermion.cli.report.Unit.HERTZ;
+import static org.thermion.cli.report.Unit.SECONDS;
+import static org.thermion.cli.report.Unit.TEXT;
 
 /** {@code timing MACHINE}: stage delays, the worst path of every phase, slack and the highest safe clock. */
 @Command(name = "timing", mixinStandardHelpOptions = true,
@@ -77,12 +91,7 @@ final class TimingCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         TimingReport r = new StaticTiming(m, access).analyse(Double.isNaN(t) ? m.clock().periodSeconds() : t);
-        switch (format) {
-            case text -> text(r, out);
-            case csv -> csv(r, out);
-            case json -> json(r, out);
-        }
-        out.flush();
+        format.write(out, report(r));
         return r.passes() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
     }
 
@@ -102,136 +111,106 @@ final class TimingCommand implements Callable<Integer> {
         return v > 0 ? v * f : Double.NaN;
     }
 
-    private void text(TimingReport r, PrintWriter out) {
-        out.printf(Locale.ROOT, "timing %s: %d phases, period %s, phase width %s%n", r.machine(), r.phases(),
-                Units.time(r.periodSeconds()), Units.time(r.phaseSeconds()));
-        out.println("  a change launched at the end of one phase (latch outputs after their delay; inputs at the end");
-        out.println("  of the last phase; ROM data when the PC loads) must reach each latch set-up before the end of");
-        out.println("  its loading phase: the next phase, or a whole cycle later for a latch of the same phase");
-        out.println();
-        Table t = new Table("phase", "launched", "span", "worst endpoint", "arrival", "budget", "slack", "result");
+    /** The schema version of timing's JSON ({@code org/thermion/schema/timing.schema.json}). */
+    static final int VERSION = 2;
+    private static final Absent NO_PATH = new Absent("no paths");
+
+    /** The timing analysis as one report; the stage table only with {@code --stages}. */
+    Report report(TimingReport r) {
+        Report rep = new Report("timing", VERSION);
+        rep.field("machine", r.machine());
+        rep.field("phases", r.phases());
+        rep.field("period", SECONDS, r.periodSeconds());
+        rep.field("phase_width", SECONDS, r.phaseSeconds());
+        rep.field("passes", r.passes());
+        PhaseTiming c = r.critical();
+        Absent unconstrained = new Absent("no path constrains the clock");
+        rep.field("min_period", SECONDS, c == null ? unconstrained : r.minPeriodSeconds());
+        rep.field("max_clock", HERTZ, c == null ? unconstrained : r.maxClockHertz());
+        if (c == null) {
+            rep.field("critical", unconstrained);
+        } else {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("phase", c.phase());
+            m.put("endpoint", c.endpoint());
+            m.put(SECONDS.name("arrival"), c.arrival());
+            m.put(SECONDS.name("setup"), c.setup());
+            m.put("span", c.span());
+            rep.field("critical", m);
+        }
+        rep.text(String.format(Locale.ROOT, "timing %s: %d phases, period %s, phase width %s", r.machine(), r.phases(),
+                        Numbers.si(r.periodSeconds(), SECONDS), Numbers.si(r.phaseSeconds(), SECONDS)),
+                "  a change launched at the end of one phase (latch outputs after their delay; inputs at the end of the "
+                        + "last phase; ROM data when the PC loads) must reach each latch set-up before the end of its "
+                        + "loading phase: the next phase, or a whole cycle later for a latch of the same phase", "");
+        Table t = new Table("phases", "worst path into each phase")
+                .column("phase", "phase", COUNT)
+                .column("launch_phase", "launched", COUNT, "the phase at whose end the path starts")
+                .column("span", "span", COUNT, "phase widths the path may take")
+                .column("endpoint", "worst endpoint", TEXT)
+                .column("setup", "set-up", SECONDS)
+                .column("arrival", "arrival", SECONDS, "when the change reaches the endpoint")
+                .column("budget", "budget", SECONDS, "span less set-up")
+                .column("slack", "slack", SECONDS, "budget less arrival")
+                .column("result", "result", TEXT);
+        Table paths = new Table("paths", "worst paths, step by step (phase = the endpoint's phase)")
+                .column("phase", "phase", COUNT)
+                .column("step", "step", COUNT)
+                .column("driver", "driver", TEXT)
+                .column("stage", "stage", TEXT)
+                .column("edge", "edge", TEXT)
+                .column("delay", "delay", SECONDS)
+                .column("arrival", "arrival", SECONDS)
+                .column("net", "net", TEXT)
+                .column("module", "module", TEXT);
         for (PhaseTiming p : r.perPhase()) {
             if (!p.hasPath()) {
-                t.row(Integer.toString(p.phase()), "-", "-", "(no paths)", "-", "-", "-", "ok");
+                t.row(p.phase(), Absent.NONE, Absent.NONE, NO_PATH, Absent.NONE, Absent.NONE, Absent.NONE, Absent.NONE, "ok");
                 continue;
             }
-            t.row(Integer.toString(p.phase()), "end of " + p.launchPhase(), Integer.toString(p.span()), p.endpoint(),
-                    Units.time(p.arrival()), Units.time(p.budget()), Units.time(p.slack()),
+            t.row(p.phase(), p.launchPhase(), p.span(), p.endpoint(), p.setup(), p.arrival(), p.budget(), p.slack(),
                     p.passes() ? "ok" : "FAILS");
-        }
-        t.print(out, "  ");
-        for (PhaseTiming p : r.perPhase()) {
-            if (p.hasPath()) {
-                out.println();
-                out.printf(Locale.ROOT, "worst path into phase %d (launched at the end of phase %d, %d phase width%s, set-up %s):%n",
-                        p.phase(), p.launchPhase(), p.span(), p.span() == 1 ? "" : "s", Units.time(p.setup()));
-                path(p, out);
-            }
-        }
-        out.println();
-        if (r.critical() == null) {
-            out.println("no path constrains the clock");
-        } else {
-            PhaseTiming c = r.critical();
-            out.printf(Locale.ROOT, "critical path: into %s on phase %d, %s + set-up %s over %d phase width%s%n",
-                    c.endpoint(), c.phase(), Units.time(c.arrival()), Units.time(c.setup()), c.span(),
-                    c.span() == 1 ? "" : "s");
-            out.printf(Locale.ROOT, "shortest safe period %s: highest safe clock rate %s%n",
-                    Units.time(r.minPeriodSeconds()), Units.scaled(r.maxClockHertz(), "Hz"));
-        }
-        out.printf(Locale.ROOT, "at %s: %s%n", Units.time(r.periodSeconds()),
-                r.passes() ? "every path settles in time" : "a path does not settle in time");
-        if (stages) {
-            out.println();
-            out.println("stage delays (declared, or ln 9 RC: through the load toward its rail, through the conducting tube the other way):");
-            Table s = new Table("kind", "stage", "module", "output", "drives", "fan-out", "rise", "fall", "source");
-            for (InstanceDelay d : r.instances()) {
-                s.row(d.kind(), d.stage(), d.module(), d.netName(), Units.farads(d.delay().farads()),
-                        Integer.toString(d.delay().fanOut()), Units.time(d.delay().rise()), Units.time(d.delay().fall()),
-                        source(d) );
-            }
-            s.print(out, "  ");
-        }
-    }
-
-    private static String source(InstanceDelay d) {
-        String s = d.delay().riseGiven() && d.delay().fallGiven() ? "given"
-                : d.delay().riseGiven() || d.delay().fallGiven() ? "given/computed" : "computed";
-        return d.delay().note().isEmpty() ? s : s + "; " + d.delay().note();
-    }
-
-    private static void path(PhaseTiming p, PrintWriter out) {
-        Table t = new Table("step", "driver", "stage", "edge", "delay", "arrival", "net", "module");
-        int i = 0;
-        for (PathStep s : p.path()) {
-            t.row(Integer.toString(i++), s.kind(), s.stage(), s.edge() == 'r' ? "rise" : "fall", Units.time(s.delay()),
-                    Units.time(s.arrival()), s.netName(), s.module());
-        }
-        t.print(out, "  ");
-    }
-
-    private void csv(TimingReport r, PrintWriter out) {
-        if (stages) {
-            out.println(ReportCsv.row("kind", "index", "stage", "module", "output", "driven_F", "fan_out", "rise_s",
-                    "fall_s", "rise_given", "fall_given"));
-            for (InstanceDelay d : r.instances()) {
-                out.println(ReportCsv.row(d.kind(), Integer.toString(d.index()), d.stage(), d.module(), d.netName(),
-                        ReportCsv.number(d.delay().farads()), Integer.toString(d.delay().fanOut()),
-                        ReportCsv.number(d.delay().rise()), ReportCsv.number(d.delay().fall()),
-                        Boolean.toString(d.delay().riseGiven()), Boolean.toString(d.delay().fallGiven())));
-            }
-            return;
-        }
-        out.println(ReportCsv.row("phase", "launch_phase", "span", "endpoint", "budget_s", "slack_s", "step", "driver",
-                "stage", "edge", "delay_s", "arrival_s", "net", "module"));
-        for (PhaseTiming p : r.perPhase()) {
             int i = 0;
-            for (PathStep s : p.path()) {
-                out.println(ReportCsv.row(Integer.toString(p.phase()), Integer.toString(p.launchPhase()),
-                        Integer.toString(p.span()), p.endpoint(), ReportCsv.number(p.budget()),
-                        ReportCsv.number(p.slack()), Integer.toString(i++), s.kind(), s.stage(),
-                        s.edge() == 'r' ? "rise" : "fall", ReportCsv.number(s.delay()), ReportCsv.number(s.arrival()),
-                        s.netName(), s.module()));
+            for (PathStep st : p.path()) {
+                paths.row(p.phase(), i++, st.kind(), st.stage(), st.edge() == 'r' ? "rise" : "fall", st.delay(),
+                        st.arrival(), st.netName(), st.module());
             }
         }
-    }
-
-    private void json(TimingReport r, PrintWriter out) {
-        ReportJson j = new ReportJson().begin();
-        j.field("machine", r.machine()).field("phases", r.phases()).field("period_s", r.periodSeconds())
-                .field("phase_s", r.phaseSeconds()).field("passes", r.passes())
-                .field("min_period_s", r.minPeriodSeconds()).field("max_clock_hz", r.maxClockHertz());
-        j.beginArray("per_phase");
-        for (PhaseTiming p : r.perPhase()) {
-            phase(j.begin(), p).end();
+        rep.table(t).table(paths);
+        if (c == null) {
+            rep.text("no path constrains the clock");
+        } else {
+            rep.text(String.format(Locale.ROOT, "critical path: into %s on phase %d, %s + set-up %s over %d phase width%s",
+                            c.endpoint(), c.phase(), Numbers.si(c.arrival(), SECONDS), Numbers.si(c.setup(), SECONDS), c.span(),
+                            c.span() == 1 ? "" : "s"),
+                    String.format(Locale.ROOT, "shortest safe period %s: highest safe clock rate %s",
+                            Numbers.si(r.minPeriodSeconds(), SECONDS), Numbers.si(r.maxClockHertz(), HERTZ)));
         }
-        j.endArray();
-        if (r.critical() != null) {
-            phase(j.beginObject("critical"), r.critical()).end();
+        rep.text(String.format(Locale.ROOT, "at %s: %s", Numbers.si(r.periodSeconds(), SECONDS),
+                r.passes() ? "every path settles in time" : "a path does not settle in time"));
+        if (stages) {
+            rep.text("");
+            Table st = new Table("stages", "stage delays (declared, or ln 9 RC: through the load toward its rail, through "
+                    + "the conducting tube the other way)")
+                    .column("kind", "kind", TEXT)
+                    .column("index", "index", COUNT)
+                    .column("stage", "stage", TEXT)
+                    .column("module", "module", TEXT)
+                    .column("output", "output", TEXT)
+                    .column("driven", "drives", FARADS, "the capacitance the output drives")
+                    .column("fan_out", "fan-out", COUNT)
+                    .column("rise", "rise", SECONDS)
+                    .column("fall", "fall", SECONDS)
+                    .column("rise_given", "rise given", FLAG, "declared rather than computed")
+                    .column("fall_given", "fall given", FLAG)
+                    .column("note", "note", TEXT);
+            for (InstanceDelay d : r.instances()) {
+                st.row(d.kind(), d.index(), d.stage(), d.module(), d.netName(), d.delay().farads(), d.delay().fanOut(),
+                        d.delay().rise(), d.delay().fall(), d.delay().riseGiven(), d.delay().fallGiven(),
+                        d.delay().note().isEmpty() ? Absent.NONE : d.delay().note());
+            }
+            rep.table(st);
         }
-        j.beginArray("stages");
-        for (InstanceDelay d : r.instances()) {
-            j.begin().field("kind", d.kind()).field("index", d.index()).field("stage", d.stage())
-                    .field("module", d.module()).field("output", d.netName()).field("driven_F", d.delay().farads())
-                    .field("fan_out", d.delay().fanOut()).field("rise_s", d.delay().rise())
-                    .field("fall_s", d.delay().fall()).field("rise_given", d.delay().riseGiven())
-                    .field("fall_given", d.delay().fallGiven()).end();
-        }
-        j.endArray().end();
-        out.println(j);
-    }
-
-    private static ReportJson phase(ReportJson j, PhaseTiming p) {
-        j.field("phase", p.phase()).field("has_path", p.hasPath()).field("launch_phase", p.launchPhase())
-                .field("span", p.span()).field("endpoint", p.endpoint()).field("setup_s", p.setup())
-                .field("budget_s", p.budget()).field("arrival_s", p.arrival()).field("slack_s", p.slack())
-                .field("passes", p.passes());
-        j.beginArray("path");
-        for (PathStep s : p.path()) {
-            j.begin().field("driver", s.kind()).field("stage", s.stage()).field("edge", s.edge() == 'r' ? "rise" : "fall")
-                    .field("delay_s", s.delay()).field("arrival_s", s.arrival()).field("net", s.netName())
-                    .field("module", s.module()).end();
-        }
-        return j.endArray();
+        return rep;
     }
 }

@@ -1,5 +1,9 @@
 package org.thermion.cli;
 
+import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Format;
+import org.thermion.cli.report.Report;
+import org.thermion.cli.report.Table;
 import org.thermion.model.Machine;
 import org.thermion.verify.Counterexample;
 import org.thermion.verify.DecodeVerdict;
@@ -19,8 +23,16 @@ import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
+
+import static org.thermion.cli.report.Unit.COUNT;
+import static org.thermion.cli.report.Unit.FLAG;
+import static org.thermion.cli.report.Unit.TEXT;
 
 /** {@code verify MACHINE}: the logic against the ISA, every opcode, state and input; optional fault seeding. */
 @Command(name = "verify", mixinStandardHelpOptions = true,
@@ -39,7 +51,7 @@ final class VerifyCommand implements Callable<Integer> {
     boolean allTargets;
 
     @Option(names = "--samples", paramLabel = "N",
-            description = "Cases to check when the space is too large to check fully (default: ${DEFAULT-VALUE}).")
+            description = "Check a seeded sample of N cases when the space holds more than N (given) or more than 2^28 (default sample: ${DEFAULT-VALUE}).")
     long samples = 1L << 22;
 
     @Option(names = "--mutate", paramLabel = "N", description = "Seed N single faults into copies of the logic and report how many the check catches.")
@@ -78,7 +90,8 @@ final class VerifyCommand implements Callable<Integer> {
         }
         ProgressLine progress = new ProgressLine(err);
         Verifier.Options opt = Verifier.Options.defaults().withDecode(decode, allTargets ? 16 : 4)
-                .withSampling(Verifier.EXHAUSTIVE_LIMIT, samples, seed)
+                .withSampling(spec.commandLine().getParseResult().hasMatchedOption("--samples")
+                        ? Math.min(Verifier.EXHAUSTIVE_LIMIT, samples) : Verifier.EXHAUSTIVE_LIMIT, samples, seed)
                 .withProgress(mutate > 0 ? null : progress::update);
         VerifyReport r;
         try {
@@ -93,12 +106,7 @@ final class VerifyCommand implements Callable<Integer> {
             mr = new MutationRun(m, opt, r).run(mutate, seed, progress::mutant);
             progress.done();
         }
-        switch (format) {
-            case text -> text(r, mr, out);
-            case csv -> csv(r, mr, out);
-            case json -> json(r, mr, out);
-        }
-        out.flush();
+        format.write(out, report(r, mr));
         boolean ok = r.passes() && (mr == null || mr.allIsaChangingCaught());
         return ok ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
     }
@@ -145,166 +153,162 @@ final class VerifyCommand implements Callable<Integer> {
         }
     }
 
-    private void text(VerifyReport r, MutationReport mr, PrintWriter out) {
-        out.printf(Locale.ROOT, "verify %s: %d instructions, %s%n", r.machine(), r.plans().size(),
-                r.exhaustive() ? String.format(Locale.ROOT, "%,d cases checked, every one of the plan", r.cases())
-                        : String.format(Locale.ROOT, "%,d cases checked: a seeded random sample (seed %d), the full space "
-                        + "is larger than %,d", r.cases(), r.seed(), Verifier.EXHAUSTIVE_LIMIT));
-        out.println("  each case: one instruction from a state (every combination of state bits and inputs),");
-        out.println("  compared bit by bit with the ISA's meaning; operands per instruction:");
-        for (String p : r.plans()) {
-            out.println("    " + p);
+    /** The schema version of verify's JSON ({@code org/thermion/schema/verify.schema.json}). */
+    static final int VERSION = 2;
+
+    /** The check (and the fault seeding, when asked) as one report; text shows the first {@code --max} counterexamples. */
+    Report report(VerifyReport r, MutationReport mr) {
+        Report rep = new Report("verify", VERSION);
+        rep.field("machine", r.machine());
+        rep.field("passes", r.passes());
+        rep.field("cases", r.cases());
+        rep.field("exhaustive", r.exhaustive());
+        rep.field("seed", r.seed());
+        rep.field("plans", List.copyOf(r.plans()));
+        rep.field("notes", List.copyOf(r.notes()));
+        if (mr == null) {
+            rep.field("mutation", new Absent("no faults seeded"));
+        } else {
+            Map<String, Object> mut = new LinkedHashMap<>();
+            mut.put("seed", mr.seed());
+            mut.put("mutants", (long) mr.outcomes().size());
+            mut.put("caught", mr.caught());
+            mut.put("equivalent", mr.equivalent());
+            mut.put("not_caught", mr.missed());
+            rep.field("mutation", mut);
         }
-        for (String n : r.notes()) {
-            out.println("  note: " + n);
+        List<String> head = new ArrayList<>();
+        head.add(String.format(Locale.ROOT, "verify %s: %d instructions, %s", r.machine(), r.plans().size(),
+                r.exhaustive() ? String.format(Locale.ROOT, "%,d cases checked, every one of the plan", r.cases())
+                        : String.format(Locale.ROOT, "%,d cases checked: a seeded random sample (seed %d) of a larger "
+                        + "space", r.cases(), r.seed())));
+        head.add("  each case: one instruction from a state (every combination of state bits and inputs), compared bit "
+                + "by bit with the ISA's meaning; operands per instruction:");
+        r.plans().forEach(p -> head.add("    " + p));
+        r.notes().forEach(n -> head.add("  note: " + n));
+        head.add("");
+        rep.text(head);
+        Table d = new Table("decode", "decode lines (" + r.decodeName() + "[k], exactly one per instruction)")
+                .column("mnemonic", "mnemonic", TEXT)
+                .column("opcode", "opcode", COUNT)
+                .column("line", "line", TEXT, "the decode line the instruction raises ('none': it does nothing)")
+                .column("ok", "ok", FLAG)
+                .column("problem", "problem", TEXT);
+        for (DecodeVerdict x : r.decode()) {
+            d.row(x.mnemonic(), x.opcode(), x.net() == null ? new Absent("none") : x.net(), x.ok(),
+                    x.problem() == null ? Absent.NONE : x.problem());
         }
         if (!r.decode().isEmpty()) {
-            out.println();
-            out.println("decode lines (" + r.decodeName() + "[k], exactly one per instruction):");
-            Table t = new Table("mnemonic", "opcode", "line", "check");
-            for (DecodeVerdict d : r.decode()) {
-                t.row(d.mnemonic(), String.format(Locale.ROOT, "0x%X", d.opcode()), d.net() == null ? "-" : d.net(),
-                        d.ok() ? "ok" : "FAILS: " + d.problem());
-            }
-            t.print(out, "  ");
-        }
-        out.println();
-        if (r.counterexamples().isEmpty()) {
-            out.println("every instruction does what the ISA says" + (r.decodeOk() ? "" : ", but the decode lines fail"));
+            rep.table(d);
         } else {
-            out.printf(Locale.ROOT, "%d mismatch%s (instruction, item), %s:%n", r.counterexamples().size(),
-                    r.counterexamples().size() == 1 ? "" : "es",
-                    r.counterexamples().size() > max ? "the first " + max : "each with one counterexample");
-            int i = 0;
-            for (Counterexample c : r.counterexamples()) {
-                if (i++ >= max) {
-                    break;
-                }
-                out.println();
-                counterexample(c, out);
+            rep.data(d);
+        }
+        Table cx = new Table("counterexamples", "counterexamples")
+                .column("number", "#", COUNT)
+                .column("mnemonic", "mnemonic", TEXT)
+                .column("opcode", "opcode", COUNT)
+                .column("word", "word", COUNT)
+                .column("operand", "operand", TEXT)
+                .column("item", "item", TEXT)
+                .column("kind", "kind", TEXT)
+                .column("cases", "cases", COUNT)
+                .column("before", "before", TEXT)
+                .column("inputs", "inputs", TEXT)
+                .column("expected", "expected", TEXT)
+                .column("actual", "actual", TEXT)
+                .column("expected_pc", "expected pc", COUNT)
+                .column("actual_pc", "actual pc", COUNT)
+                .column("explanation", "explanation", TEXT)
+                .column("compared_with", "compared with", TEXT);
+        Table nets = new Table("counterexample_nets", "nets that differ, per counterexample")
+                .column("counterexample", "#", COUNT)
+                .column("phase", "phase", COUNT)
+                .column("net", "net", TEXT)
+                .column("module", "module", TEXT)
+                .column("value", "here", FLAG)
+                .column("other", "there", FLAG);
+        Table trace = new Table("counterexample_trace", "logic feeding the wrong bit, per counterexample")
+                .column("counterexample", "#", COUNT)
+                .column("depth", "depth", COUNT)
+                .column("net", "net", TEXT)
+                .column("module", "module", TEXT)
+                .column("function", "function", TEXT)
+                .column("inputs", "inputs", TEXT)
+                .column("value", "value", FLAG);
+        int n = 0;
+        for (Counterexample c : r.counterexamples()) {
+            n++;
+            cx.row(n, c.mnemonic(), c.opcode(), c.word(), c.operand(), c.item(), c.kind(), c.cases(), c.before(), c.inputs(),
+                    c.expected(), c.actual(), c.expectedPc(), c.actualPc(), c.explanation(), c.comparedWith());
+            for (NetDiff x : c.nets()) {
+                nets.row(n, x.phase(), x.name(), x.module(), x.value(), x.other());
             }
-        }
-        if (mr != null) {
-            out.println();
-            mutation(mr, out);
-        }
-    }
-
-    private static void counterexample(Counterexample c, PrintWriter out) {
-        out.printf(Locale.ROOT, "%s (0x%X), word 0x%X, %s: %s %s in %,d case%s%n", c.mnemonic(), c.opcode(), c.word(),
-                c.operand(), c.item(), c.kind(), c.cases(), c.cases() == 1 ? "" : "s");
-        out.println("  before    " + c.before());
-        out.println("  inputs    " + c.inputs());
-        out.println("  expected  " + c.expected() + "  pc " + c.expectedPc());
-        out.println("  actual    " + c.actual() + "  pc " + c.actualPc());
-        out.println("  " + c.explanation());
-        if (c.nets().isEmpty()) {
-            out.println("  compared with " + c.comparedWith() + ": no net differs");
-        } else {
-            out.println("  nets that differ from " + c.comparedWith() + " (first in levelized order):");
-            Table t = new Table("phase", "net", "module", "here", "there");
-            for (NetDiff d : c.nets()) {
-                t.row(Integer.toString(d.phase()), d.name(), d.module(), d.value() ? "1" : "0", d.other() ? "1" : "0");
-            }
-            t.print(out, "    ");
-        }
-        if (!c.trace().isEmpty()) {
-            out.println("  logic feeding it in this case (nearest first):");
             for (TraceLine l : c.trace()) {
-                out.println("    " + "  ".repeat(Math.min(l.depth(), 6)) + l.net() + " = " + l.function() + "("
-                        + l.inputs() + ") = " + (l.value() ? "1" : "0") + "   [" + l.module() + "]");
+                trace.row(n, l.depth(), l.net(), l.module(), l.function(), l.inputs(), l.value());
             }
         }
-    }
-
-    private static void mutation(MutationReport mr, PrintWriter out) {
-        out.printf(Locale.ROOT, "fault seeding (seed %d): %d mutants, %d caught, %d equivalent, %d not caught%n",
-                mr.seed(), mr.outcomes().size(), mr.caught(), mr.equivalent(), mr.missed());
-        Table t = new Table("#", "fault", "result", "first evidence");
-        int i = 1;
-        for (MutantOutcome o : mr.outcomes()) {
-            t.row(Integer.toString(i++), o.fault(), o.status().text(), o.evidence());
-        }
-        t.print(out, "  ");
-        if (mr.missed() > 0) {
-            out.println("some mutants that may change ISA behaviour were not caught: the check sampled the space");
-        }
-        out.printf(Locale.ROOT, "catch rate: %d of %d ISA-changing mutants%n", mr.caught(), mr.caught() + mr.missed());
-    }
-
-    private void csv(VerifyReport r, MutationReport mr, PrintWriter out) {
+        rep.data(cx).data(nets).data(trace);
+        rep.text(counterexampleLines(r));
         if (mr != null) {
-            out.println(ReportCsv.row("mutant", "fault", "result", "evidence"));
+            rep.text("", String.format(Locale.ROOT, "fault seeding (seed %d): %d mutants, %d caught, %d equivalent, %d not caught",
+                    mr.seed(), mr.outcomes().size(), mr.caught(), mr.equivalent(), mr.missed()), "");
+            Table t = new Table("mutants", "seeded faults")
+                    .column("number", "#", COUNT)
+                    .column("fault", "fault", TEXT)
+                    .column("result", "result", TEXT)
+                    .column("evidence", "first evidence", TEXT);
             int i = 1;
             for (MutantOutcome o : mr.outcomes()) {
-                out.println(ReportCsv.row(Integer.toString(i++), o.fault(), o.status().name().toLowerCase(Locale.ROOT),
-                        o.evidence()));
+                t.row(i++, o.fault(), o.status().name().toLowerCase(Locale.ROOT), o.evidence());
             }
-            return;
-        }
-        out.println(ReportCsv.row("mnemonic", "opcode", "word", "operand", "item", "kind", "cases", "before", "inputs",
-                "expected", "actual", "expected_pc", "actual_pc", "explanation", "nets"));
-        for (Counterexample c : r.counterexamples()) {
-            StringBuilder nets = new StringBuilder();
-            for (NetDiff d : c.nets()) {
-                nets.append(nets.length() == 0 ? "" : " ").append(d.name());
+            rep.table(t);
+            if (mr.missed() > 0) {
+                rep.text("some mutants that may change ISA behaviour were not caught: the check sampled the space");
             }
-            out.println(ReportCsv.row(c.mnemonic(), String.format(Locale.ROOT, "0x%X", c.opcode()),
-                    String.format(Locale.ROOT, "0x%X", c.word()), c.operand(), c.item(), c.kind(),
-                    Long.toString(c.cases()), c.before(), c.inputs(), c.expected(), c.actual(),
-                    Integer.toString(c.expectedPc()), Integer.toString(c.actualPc()), c.explanation(), nets.toString()));
+            rep.text(String.format(Locale.ROOT, "catch rate: %d of %d ISA-changing mutants", mr.caught(), mr.caught() + mr.missed()));
         }
+        return rep;
     }
 
-    private void json(VerifyReport r, MutationReport mr, PrintWriter out) {
-        ReportJson j = new ReportJson().begin();
-        j.field("machine", r.machine()).field("passes", r.passes()).field("cases", r.cases())
-                .field("exhaustive", r.exhaustive()).field("seed", r.seed());
-        j.beginArray("plans");
-        r.plans().forEach(j::element);
-        j.endArray();
-        j.beginArray("notes");
-        r.notes().forEach(j::element);
-        j.endArray();
-        j.beginArray("decode");
-        for (DecodeVerdict d : r.decode()) {
-            j.begin().field("mnemonic", d.mnemonic()).field("opcode", d.opcode()).field("line", d.net())
-                    .field("ok", d.ok()).field("problem", d.problem()).end();
+    private List<String> counterexampleLines(VerifyReport r) {
+        List<String> out = new ArrayList<>();
+        if (r.counterexamples().isEmpty()) {
+            out.add("every instruction does what the ISA says" + (r.decodeOk() ? "" : ", but the decode lines fail"));
+            return out;
         }
-        j.endArray();
-        j.beginArray("counterexamples");
+        out.add(String.format(Locale.ROOT, "%d mismatch%s (instruction, item), %s:", r.counterexamples().size(),
+                r.counterexamples().size() == 1 ? "" : "es",
+                r.counterexamples().size() > max ? "the first " + max : "each with one counterexample"));
+        int i = 0;
         for (Counterexample c : r.counterexamples()) {
-            j.begin().field("mnemonic", c.mnemonic()).field("opcode", c.opcode()).field("word", c.word())
-                    .field("operand", c.operand()).field("item", c.item()).field("kind", c.kind())
-                    .field("cases", c.cases()).field("before", c.before()).field("inputs", c.inputs())
-                    .field("expected", c.expected()).field("actual", c.actual()).field("expected_pc", c.expectedPc())
-                    .field("actual_pc", c.actualPc()).field("explanation", c.explanation())
-                    .field("compared_with", c.comparedWith());
-            j.beginArray("nets");
-            for (NetDiff d : c.nets()) {
-                j.begin().field("net", d.name()).field("module", d.module()).field("phase", d.phase())
-                        .field("value", d.value()).field("other", d.other()).end();
+            if (i++ >= max) {
+                break;
             }
-            j.endArray();
-            j.beginArray("trace");
-            for (TraceLine l : c.trace()) {
-                j.begin().field("depth", l.depth()).field("net", l.net()).field("module", l.module())
-                        .field("function", l.function()).field("inputs", l.inputs()).field("value", l.value()).end();
+            out.add("");
+            out.add(String.format(Locale.ROOT, "%s (0x%X), word 0x%X, %s: %s %s in %,d case%s", c.mnemonic(), c.opcode(), c.word(),
+                    c.operand(), c.item(), c.kind(), c.cases(), c.cases() == 1 ? "" : "s"));
+            out.add("  before    " + c.before());
+            out.add("  inputs    " + c.inputs());
+            out.add("  expected  " + c.expected() + "  pc " + c.expectedPc());
+            out.add("  actual    " + c.actual() + "  pc " + c.actualPc());
+            out.add("  " + c.explanation());
+            if (c.nets().isEmpty()) {
+                out.add("  compared with " + c.comparedWith() + ": no net differs");
+            } else {
+                out.add("  nets that differ from " + c.comparedWith() + " (first in levelized order; phase net module here there):");
+                for (NetDiff d : c.nets()) {
+                    out.add(String.format(Locale.ROOT, "    %d  %s  %s  %d  %d", d.phase(), d.name(), d.module(),
+                            d.value() ? 1 : 0, d.other() ? 1 : 0));
+                }
             }
-            j.endArray().end();
+            if (!c.trace().isEmpty()) {
+                out.add("  logic feeding it in this case (nearest first):");
+                for (TraceLine l : c.trace()) {
+                    out.add("    " + "  ".repeat(Math.min(l.depth(), 6)) + l.net() + " = " + l.function() + "("
+                            + l.inputs() + ") = " + (l.value() ? "1" : "0") + "   [" + l.module() + "]");
+                }
+            }
         }
-        j.endArray();
-        if (mr != null) {
-            j.beginObject("mutation").field("seed", mr.seed()).field("caught", mr.caught())
-                    .field("equivalent", mr.equivalent()).field("not_caught", mr.missed());
-            j.beginArray("mutants");
-            for (MutantOutcome o : mr.outcomes()) {
-                j.begin().field("fault", o.fault()).field("result", o.status().name().toLowerCase(Locale.ROOT))
-                        .field("evidence", o.evidence()).end();
-            }
-            j.endArray().end();
-        }
-        j.end();
-        out.println(j);
+        return out;
     }
 }

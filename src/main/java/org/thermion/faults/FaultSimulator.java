@@ -65,19 +65,19 @@ public final class FaultSimulator implements AutoCloseable {
         byte[][] good = expected(steps);
         int[] first = new int[faults.size()];
         eachBatch(faults, (m, b, n) -> {
-                long live = n == 64 ? -1L : (1L << n) - 1;
-                long caught = 0L;
-                for (int s = 0; s < steps.size() && caught != live; s++) {
-                    apply(m, steps.get(s));
-                    long now = detected(m, good[s]) & live & ~caught;
-                    for (long w = now; w != 0L; w &= w - 1) {
-                        first[b + Long.numberOfTrailingZeros(w)] = s;
-                    }
-                    caught |= now;
+            long live = n == 64 ? -1L : (1L << n) - 1;
+            long caught = 0L;
+            for (int s = 0; s < steps.size() && caught != live; s++) {
+                apply(m, steps.get(s));
+                long now = detected(m, good[s]) & live & ~caught;
+                for (long w = now; w != 0L; w &= w - 1) {
+                    first[b + Long.numberOfTrailingZeros(w)] = s;
                 }
-                for (long w = live & ~caught; w != 0L; w &= w - 1) {
-                    first[b + Long.numberOfTrailingZeros(w)] = -1;
-                }
+                caught |= now;
+            }
+            for (long w = live & ~caught; w != 0L; w &= w - 1) {
+                first[b + Long.numberOfTrailingZeros(w)] = -1;
+            }
         });
         return first;
     }
@@ -87,15 +87,15 @@ public final class FaultSimulator implements AutoCloseable {
         int lamps = circuit.lamps().size();
         byte[][] out = new byte[faults.size()][steps.size() * lamps];
         eachBatch(faults, (m, b, n) -> {
-                for (int s = 0; s < steps.size(); s++) {
-                    apply(m, steps.get(s));
-                    for (int i = 0; i < lamps; i++) {
-                        int slot = circuit.lamps().get(i).slot();
-                        for (int l = 0; l < n; l++) {
-                            out[b + l][s * lamps + i] = reading(m, slot, l);
-                        }
+            for (int s = 0; s < steps.size(); s++) {
+                apply(m, steps.get(s));
+                for (int i = 0; i < lamps; i++) {
+                    int slot = circuit.lamps().get(i).slot();
+                    for (int l = 0; l < n; l++) {
+                        out[b + l][s * lamps + i] = reading(m, slot, l);
                     }
                 }
+            }
         });
         return out;
     }

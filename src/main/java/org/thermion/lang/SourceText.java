@@ -26,6 +26,10 @@ public final class SourceText {
      * {@code what} FILE: reason" without a line, or the first byte that is not UTF-8.
      */
     public static String read(Path file, String what, SourceSet sources, Diagnostics diags) {
+        if (file.toString().isEmpty()) {
+            diags.error(Span.none(), "cannot read the " + what + ": no file name given", null);
+            return null;
+        }
         byte[] bytes;
         try {
             bytes = Files.readAllBytes(file);

@@ -2,7 +2,9 @@ package org.thermion.asm;
 
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.ValueSource;
+import org.junit.jupiter.params.provider.MethodSource;
+import org.thermion.testing.Golden;
+import java.util.stream.Stream;
 import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.SourceSet;
@@ -31,9 +33,13 @@ class AssemblerErrorsTest {
         m = DemoMachine.load();
     }
 
+    /** The cases: every {@code .asm} file of the folder. */
+    static Stream<String> cases() {
+        return Golden.corpus(DIR, ".asm").stream().map(p -> p.getFileName().toString().replace(".asm", ""));
+    }
+
     @ParameterizedTest
-    @ValueSource(strings = {"unknown-mnemonic", "too-wide", "undefined-label", "duplicate-label", "rom-too-large",
-            "syntax", "numbers", "directives", "several"})
+    @MethodSource("cases")
     void printsTheGoldenDiagnostics(String name) throws IOException {
         String text = Files.readString(DIR.resolve(name + ".asm"), StandardCharsets.UTF_8);
         SourceSet src = new SourceSet();
@@ -41,11 +47,7 @@ class AssemblerErrorsTest {
         Assembly a = Assembler.assembleText(m, Path.of(name + ".asm"), text, src, d);
         StringWriter w = new StringWriter();
         new DiagnosticPrinter(src).print(d, new PrintWriter(w));
-        Path golden = DIR.resolve(name + ".expected");
-        if (Boolean.getBoolean("golden.update")) {
-            Files.writeString(golden, w.toString(), StandardCharsets.UTF_8);
-        }
         assertThat(a).isNull();
-        assertThat(w.toString()).isEqualTo(Files.readString(golden, StandardCharsets.UTF_8));
+        Golden.assertMatches(DIR.resolve(name + ".expected"), w.toString());
     }
 }

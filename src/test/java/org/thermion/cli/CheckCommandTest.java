@@ -30,7 +30,7 @@ class CheckCommandTest {
     void demoChecksCleanWithItsSummary() {
         Result r = run("check", "examples/pumpstation/pumpstation.machine");
         assertThat(r.code()).isZero();
-        assertThat(r.out()).contains("machine pumpstation", "stage instances", "tubes:", "12AU7", "heater strings:");
+        assertThat(r.out()).contains("machine pumpstation", "stage instances", "tubes:", "12AU7", "heater strings (");
         assertThat(r.err()).doesNotContain("error");
     }
 

@@ -5,36 +5,41 @@ import org.junit.jupiter.api.TestFactory;
 import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.SourceSet;
+import org.thermion.testing.Golden;
 
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.stream.Stream;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
 /**
- * Every error class has a small broken description and the exact report it must give.
- * Run with -Dgolden.update=true to rewrite the expected files after a deliberate change.
+ * Every error class has a small broken description and the exact report it must give. The
+ * cases are the {@code .machine} files of the folder that declare a machine (the others are
+ * parts they include); each must have its {@code .expected} file. Run with
+ * {@code -Dgolden.update=true} to rewrite the expected files after a deliberate change.
  */
 class GoldenErrorsTest {
     static final Path DIR = Path.of("src/test/resources/org/thermion/elab/errors");
 
-    static final List<String> CASES = List.of("syntax", "unknown-name", "duplicate-name", "width-mismatch",
-            "index-range", "undriven", "undriven-port", "two-drivers", "comb-loop", "wrong-unit", "out-of-range",
-            "include-missing", "include-cycle", "stage-inputs", "no-stage", "latch-no-phase", "isa-opcode",
-            "isa-unbound", "too-large", "unknown-module");
-
     @TestFactory
     Stream<DynamicTest> eachErrorClassReportsWhereAndWhat() {
-        return CASES.stream().map(name -> DynamicTest.dynamicTest(name, () -> check(name)));
+        return Golden.corpus(DIR, ".machine").stream().filter(GoldenErrorsTest::declaresAMachine)
+                .map(file -> DynamicTest.dynamicTest(file.getFileName().toString(), () -> check(file)));
     }
 
-    private void check(String name) throws IOException {
-        Path file = DIR.resolve(name + ".machine");
+    private static boolean declaresAMachine(Path file) {
+        try {
+            return Files.readAllLines(file).stream().anyMatch(l -> l.startsWith("machine "));
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    private void check(Path file) {
         SourceSet sources = new SourceSet();
         Diagnostics diags = new Diagnostics();
         Object machine = new Elaborator(sources, diags).elaborate(file);
@@ -43,10 +48,6 @@ class GoldenErrorsTest {
         String actual = sw.toString();
         assertThat(machine).as("a broken description elaborates to nothing").isNull();
         assertThat(diags.hasErrors()).isTrue();
-        Path expected = DIR.resolve(name + ".expected");
-        if (Boolean.getBoolean("golden.update") || !Files.exists(expected)) {
-            Files.writeString(expected, actual);
-        }
-        assertThat(actual).isEqualTo(Files.readString(expected));
+        Golden.assertMatches(Golden.expectedFor(file), actual);
     }
 }

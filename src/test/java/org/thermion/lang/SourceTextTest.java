@@ -43,4 +43,18 @@ class SourceTextTest {
         SourceText.decode(FILE, bytes, new SourceSet(), diags);
         assertThat(diags.all().get(0).span().col()).isEqualTo(3);
     }
+
+    @Test
+    void anEmptyFileNameIsNamedAsSuchNotAsTheCurrentDirectory() {
+        Diagnostics diags = new Diagnostics();
+        assertThat(SourceText.read(Path.of(""), "program", new SourceSet(), diags)).isNull();
+        assertThat(diags.all().get(0).message()).isEqualTo("cannot read the program: no file name given");
+    }
+
+    @Test
+    void aDirectoryIsSaidToBeOne(@org.junit.jupiter.api.io.TempDir Path dir) {
+        Diagnostics diags = new Diagnostics();
+        assertThat(SourceText.read(dir, "stimulus file", new SourceSet(), diags)).isNull();
+        assertThat(diags.all().get(0).message()).isEqualTo("cannot read stimulus file " + dir + ": it is a directory");
+    }
 }

@@ -1,5 +1,6 @@
 package org.thermion.sim;
 
+import org.thermion.testing.Golden;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.Test;
@@ -69,6 +70,7 @@ class StimulusReaderTest {
         assertThat(st).isNull();
         StringWriter w = new StringWriter();
         new DiagnosticPrinter(s).print(d, new PrintWriter(w));
-        Golden.check("stimulus/" + name + ".txt", w.toString());
+        Golden.assertMatches(Path.of("src", "test", "resources", "org", "thermion", "sim", "stimulus", name + ".txt"),
+                w.toString());
     }
 }

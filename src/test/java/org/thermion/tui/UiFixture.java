@@ -1,5 +1,6 @@
 package org.thermion.tui;
 
+import org.thermion.testing.Golden;
 import com.googlecode.lanterna.TerminalSize;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
@@ -133,18 +134,8 @@ final class UiFixture {
         return "";
     }
 
-    /**
-     * Compares the screen with a golden file under src/test/resources/org/thermion/tui/.
-     * With -Dthermion.golden=write the file is written instead (review it before committing).
-     */
+    /** Compares the screen with a golden file under src/test/resources/org/thermion/tui/ ({@link Golden}). */
     void assertGolden(String name) throws IOException {
-        Path file = Path.of("src", "test", "resources", "org", "thermion", "tui", name);
-        String actual = text();
-        if ("write".equals(System.getProperty("thermion.golden"))) {
-            Files.writeString(file, actual, StandardCharsets.UTF_8);
-            return;
-        }
-        String expected = Files.readString(file, StandardCharsets.UTF_8);
-        org.assertj.core.api.Assertions.assertThat(actual).as("screen against golden " + name).isEqualTo(expected);
+        Golden.assertMatches(Path.of("src", "test", "resources", "org", "thermion", "tui", name), text());
     }
 }

@@ -44,10 +44,19 @@ public final class Numbers {
             return String.format(Locale.ROOT, "%+.1f %%", v);
         }
         if (!unit.prefixed()) {
-            return threeFigures(v) + (unit.symbol() == null || unit.symbol().isEmpty() ? "" : " " + unit.symbol());
+            return significant(v) + (unit.symbol() == null || unit.symbol().isEmpty() ? "" : " " + unit.symbol());
         }
         int k = prefixIndex(Math.abs(v), unit);
         return threeFigures(v / Math.pow(1000, k - UNITY)) + " " + PREFIX[k] + unit.symbol();
+    }
+
+    /** A plain number to three significant figures, in scientific notation when far from 1. */
+    static String significant(double v) {
+        double a = Math.abs(v);
+        if (a != 0 && (a < 1e-3 || a >= 1e6)) {
+            return String.format(Locale.ROOT, "%.2e", v);
+        }
+        return threeFigures(v);
     }
 
     private static String threeFigures(double x) {
@@ -107,6 +116,9 @@ public final class Numbers {
         }
 
         public String format(double v, int decimals) {
+            if (unit == Unit.NUMBER) {
+                return significant(v);
+            }
             if (unit == Unit.PERCENT) {
                 return String.format(Locale.ROOT, "%+." + Math.max(1, decimals) + "f", v);
             }

@@ -17,8 +17,11 @@ public final class Report {
     public sealed interface Part permits TablePart, Lines {
     }
 
-    /** A table. */
-    public record TablePart(Table table) implements Part {
+    /**
+     * A table; {@code inText} false for a table whose facts text tells in lines of its own,
+     * {@code inData} false for a table laid out for people only (CSV and JSON hold its facts in another).
+     */
+    public record TablePart(Table table, boolean inText, boolean inData) implements Part {
     }
 
     /** Lines for people, shown in text only (wrapped at the text width, plots excepted). */
@@ -53,7 +56,19 @@ public final class Report {
     }
 
     public Report table(Table t) {
-        parts.add(new TablePart(t));
+        parts.add(new TablePart(t, true, true));
+        return this;
+    }
+
+    /** A table for CSV and JSON only: the text tells its facts in lines of its own. */
+    public Report data(Table t) {
+        parts.add(new TablePart(t, false, true));
+        return this;
+    }
+
+    /** A table for text only, laid out for people; CSV and JSON carry its facts in another table. */
+    public Report view(Table t) {
+        parts.add(new TablePart(t, true, false));
         return this;
     }
 
@@ -91,10 +106,11 @@ public final class Report {
         return Collections.unmodifiableList(parts);
     }
 
+    /** The tables CSV and JSON carry, in order. */
     public List<Table> tables() {
         List<Table> t = new ArrayList<>();
         for (Part p : parts) {
-            if (p instanceof TablePart tp) {
+            if (p instanceof TablePart tp && tp.inData()) {
                 t.add(tp.table());
             }
         }

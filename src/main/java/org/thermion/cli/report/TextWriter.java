@@ -32,7 +32,7 @@ public final class TextWriter {
                         out.println(line);
                     }
                 }
-            } else if (p instanceof Report.TablePart tp) {
+            } else if (p instanceof Report.TablePart tp && tp.inText()) {
                 table(out, tp.table());
                 out.println();
             }
@@ -103,12 +103,20 @@ public final class TextWriter {
             }
         }
         int[] w = widths(head, cells);
-        if (total(w) > WIDTH - INDENT.length()) {
+        // Too wide: narrow the widest text column (not below WRAPPED_CELL or its heading) until the
+        // table fits or no text column can give more; the rest is split into column groups.
+        int room = WIDTH - INDENT.length();
+        while (total(w) > room) {
+            int widest = -1;
             for (int i = 0; i < n; i++) {
-                if (!right[i] && w[i] > WRAPPED_CELL) {
-                    w[i] = Math.max(WRAPPED_CELL, head[i].length());
+                if (!right[i] && w[i] > Math.max(WRAPPED_CELL, head[i].length()) && (widest < 0 || w[i] > w[widest])) {
+                    widest = i;
                 }
             }
+            if (widest < 0) {
+                break;
+            }
+            w[widest] = Math.max(Math.max(WRAPPED_CELL, head[widest].length()), w[widest] - (total(w) - room));
         }
         List<List<Integer>> groups = groups(w);
         for (int gi = 0; gi < groups.size(); gi++) {
@@ -191,7 +199,7 @@ public final class TextWriter {
         List<List<String>> wrapped = new ArrayList<>();
         int height = 1;
         for (int i : group) {
-            List<String> lines = cells[i].length() <= w[i] ? List.of(cells[i]) : wrap(cells[i], w[i]);
+            List<String> lines = cells[i].length() <= w[i] ? List.of(cells[i]) : wrap(cells[i], w[i], true);
             wrapped.add(lines);
             height = Math.max(height, lines.size());
         }
@@ -216,6 +224,11 @@ public final class TextWriter {
      * continuation keeps the line's indent plus two spaces. A word longer than the width is cut.
      */
     public static List<String> wrap(String line, int width) {
+        return wrap(line, width, false);
+    }
+
+    /** As {@link #wrap(String, int)}; {@code lists} prefers breaking after a comma (a cell listing items). */
+    private static List<String> wrap(String line, int width, boolean lists) {
         List<String> out = new ArrayList<>();
         if (line.length() <= width) {
             out.add(line);
@@ -235,7 +248,7 @@ public final class TextWriter {
                 out.add(prefix + rest);
                 break;
             }
-            int cut = rest.lastIndexOf(", ", room - 1) + 1;
+            int cut = lists ? rest.lastIndexOf(", ", room - 1) + 1 : 0;
             if (cut < room / 3) {
                 cut = rest.lastIndexOf(' ', room);
             }

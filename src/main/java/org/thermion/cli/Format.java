@@ -1,4 +1,0 @@
-package org.thermion.cli;
-
-/** Output formats for reports. */
-public enum Format { text, csv, json }
