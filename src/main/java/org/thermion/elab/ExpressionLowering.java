@@ -6,7 +6,9 @@ import org.thermion.lang.ast.Expr;
 import org.thermion.lang.ast.Index;
 import org.thermion.model.StageType;
 
+import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Deque;
 import java.util.List;
 
 import static org.thermion.elab.Lowered.bitsWord;
@@ -127,9 +129,26 @@ final class ExpressionLowering {
         return out;
     }
 
+    /**
+     * A chain {@code a & b & c ...} parses left-deep; its left spine is walked with a loop, so a
+     * long chain costs no JVM stack. Left before right, as a recursive walk would go.
+     */
     private Lowered binary(Scope f, Expr.Bin b) {
-        Lowered l = lower(f, b.left());
-        Lowered r = lower(f, b.right());
+        Deque<Expr.Bin> spine = new ArrayDeque<>();
+        Expr e = b;
+        while (e instanceof Expr.Bin x) {
+            spine.push(x);
+            e = x.left();
+        }
+        Lowered acc = lower(f, e);
+        while (!spine.isEmpty()) {
+            Expr.Bin x = spine.pop();
+            acc = combine(x, acc, lower(f, x.right()));
+        }
+        return acc;
+    }
+
+    private Lowered combine(Expr.Bin b, Lowered l, Lowered r) {
         if (b.op().ordinal() >= Expr.BinOp.ADD.ordinal()) {
             if (l instanceof Lowered.Num x && r instanceof Lowered.Num y) {
                 Long v = folder.arith(b, x.value(), y.value());

@@ -81,7 +81,7 @@ final class Instantiator {
             return;
         }
         Map<String, int[]> bound = bind(f, u, child, instName);
-        if (bound == null || !unroller.enter(u.span(), "module instances")) {
+        if (bound == null || !unroller.enter(u.span(), "module instance")) {
             return;
         }
         f.names.put(instName, new Signal(instName, new int[0], u.name().span(), Signal.Kind.NET, false));

@@ -41,8 +41,8 @@ final class LoopUnroller {
     /** Opens one level of nesting; false (after an error at {@code at}) past {@link #MAX_NESTING}. */
     boolean enter(Span at, String what) {
         if (nesting >= MAX_NESTING) {
-            diags.error(at, what + " nest more than " + MAX_NESTING + " deep here (module instances and generator"
-                    + " loops together; the limit is " + MAX_NESTING + ")", "flatten the hierarchy or the loops");
+            diags.error(at, "this " + what + " would nest " + (nesting + 1) + " deep; module instances and generator loops"
+                    + " nest at most " + MAX_NESTING + " deep, together", "flatten the hierarchy or the loops");
             stopped = true;
             return false;
         }
@@ -120,7 +120,7 @@ final class LoopUnroller {
             stopped = true;
             return;
         }
-        if (!enter(fo.span(), "generator loops")) {
+        if (!enter(fo.span(), "generator loop")) {
             return;
         }
         long count = span + 1;

@@ -5,8 +5,10 @@ import org.thermion.lang.Span;
 import org.thermion.model.GateFn;
 import org.thermion.model.StageType;
 
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Deque;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
@@ -129,10 +131,23 @@ final class StageMapper {
         return dest < 0 ? t : nb.wire(t, dest, f.module, span);
     }
 
+    /** A left-deep chain {@code a ^ b ^ c ...} is walked with a loop: no JVM stack per link. */
     private int emitXor(Scope f, Logic.Xor x, boolean inverted, int dest, Span span) {
+        Deque<Logic.Xor> spine = new ArrayDeque<>();
+        Logic e = x;
+        while (e instanceof Logic.Xor xo) {
+            spine.push(xo);
+            e = xo.left();
+        }
+        int a = emit(f, e, -1, span);
+        while (spine.size() > 1) {
+            a = xor(f, a, emit(f, spine.pop().right(), -1, span), false, -1, span);
+        }
+        return xor(f, a, emit(f, spine.pop().right(), -1, span), inverted, dest, span);
+    }
+
+    private int xor(Scope f, int a, int b, boolean inverted, int dest, Span span) {
         int xs = parts.realizer("xor");
-        int a = emit(f, x.left(), -1, span);
-        int b = emit(f, x.right(), -1, span);
         if (xs >= 0) {
             if (!inverted) {
                 return nb.gate(GateFn.XOR, xs, new int[]{a, b}, dest, f.module, f.path, span);

@@ -41,10 +41,26 @@ class ExpansionLimitsTest {
     void instancesNestedAThousandDeepAreAnErrorAtTheUseThatGoesTooDeep() {
         Diagnostics d = elaborate(chain(1000));
         Diagnostic e = first(d);
-        assertThat(e.message()).contains("nest more than " + LoopUnroller.MAX_NESTING + " deep");
+        assertThat(e.message()).isEqualTo("this module instance would nest 101 deep; module instances and generator loops"
+                + " nest at most 100 deep, together");
         // m0 is the top (depth 0); the use in module m99 would open level 101.
         assertThat(e.span().line()).isEqualTo(LoopUnroller.MAX_NESTING + 1 + countLines(ElaborationTest.PARTS));
         assertThat(d.errorCount()).isEqualTo(1);
+    }
+
+    @Test
+    void loopsCountTowardsTheSameNesting() {
+        // Each module places the next inside a loop: two levels per module.
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < 80; i++) {
+            sb.append("module m").append(i).append(" { in a; out y; for k in 0..0 { use m").append(i + 1)
+                    .append(" as u (a: a, y: y) } }\n");
+        }
+        sb.append("module m80 { in a; out y; y = a }\nmachine t { top m0; inputs a; outputs y }\n");
+        Diagnostic e = first(elaborate(sb.toString()));
+        assertThat(e.message()).startsWith("this generator loop would nest 101 deep");
+        // The loop of m50: levels 2 x 50 + 1.
+        assertThat(e.span().line()).isEqualTo(countLines(ElaborationTest.PARTS) + 51);
     }
 
     @Test
