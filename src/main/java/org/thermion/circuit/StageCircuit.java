@@ -44,19 +44,4 @@ public sealed interface StageCircuit permits TubeStage, DiodeGate, FlipFlop, Thy
         }
         return false;
     }
-
-    /** The inputs that make the output {@code value} with the fewest inputs active, or null if none does. */
-    default boolean[] inputsFor(boolean value, boolean stored) {
-        int n = inputs();
-        for (int mask = 0; mask < (1 << n); mask++) {
-            boolean[] in = new boolean[n];
-            for (int i = 0; i < n; i++) {
-                in[i] = (mask >> i & 1) != 0;
-            }
-            if (logic(in, stored) == value) {
-                return in;
-            }
-        }
-        return null;
-    }
 }

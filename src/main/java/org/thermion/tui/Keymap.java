@@ -14,6 +14,9 @@ final class Keymap {
     /** Keys that flip the machine's inputs, in input order. */
     static final String INPUT_KEYS = "1234567890!@#$%^&*()";
 
+    /** The side panels F2, F3, ... bring forward, in the order they are stacked on screen. */
+    static final Panel[] PANEL_KEYS = {Panel.STATE, Panel.DECODE, Panel.IO, Panel.POWER};
+
     /** A line of help: the keys as written on the overlay, and what they do. */
     record HelpLine(String keys, String meaning) {
     }
@@ -37,6 +40,7 @@ final class Keymap {
                 case 'p': return of(Command.STEP_PHASE);
                 case 'c': return of(Command.STEP_CYCLE);
                 case ' ': case 'g': return of(Command.RUN_PAUSE);
+                case 't': return of(Command.PACE);
                 case 'r': return of(Command.RESET);
                 case 'b': return of(Command.BREAKPOINT);
                 case 'B': return of(Command.CLEAR_BREAKPOINTS);
@@ -59,6 +63,12 @@ final class Keymap {
             case PageDown: return of(Command.PAGE_DOWN);
             case Home: return of(Command.FIRST_LINE);
             case End: return of(Command.LAST_LINE);
+            case Tab: return of(Command.NEXT_PANEL);
+            case ReverseTab: return of(Command.PREVIOUS_PANEL);
+            case F2: return panel(0);
+            case F3: return panel(1);
+            case F4: return panel(2);
+            case F5: return panel(3);
             case ArrowRight: return of(Command.NEXT_RAIL);
             case ArrowLeft: return of(Command.PREVIOUS_RAIL);
             case F1: return of(Command.HELP);
@@ -72,12 +82,17 @@ final class Keymap {
         return new Key(c, 0);
     }
 
+    private static Key panel(int i) {
+        return new Key(Command.SHOW_PANEL, PANEL_KEYS[i].ordinal());
+    }
+
     /** Every key, for the help overlay. */
     static List<HelpLine> help(List<String> inputNames) {
         List<HelpLine> h = new ArrayList<>();
         h.add(new HelpLine("p", "step one clock phase"));
         h.add(new HelpLine("c  Enter", "step one cycle (one instruction)"));
         h.add(new HelpLine("Space  g", "run / pause"));
+        h.add(new HelpLine("t", "runs at the machine's own clock, or flat out"));
         h.add(new HelpLine("r", "reset: latches to power-up state, PC 0"));
         for (int i = 0; i < inputNames.size(); i++) {
             String key = i < INPUT_KEYS.length() ? String.valueOf(INPUT_KEYS.charAt(i)) : "-";
@@ -88,17 +103,24 @@ final class Keymap {
         h.add(new HelpLine("Up Down  k j", "move the listing cursor"));
         h.add(new HelpLine("PgUp PgDn Home End", "move the cursor by pages, to the ends"));
         h.add(new HelpLine(".", "cursor to the PC"));
-        h.add(new HelpLine("w", "power-up view (rail current from switch-on); again to leave"));
+        h.add(new HelpLine("Tab  Shift-Tab", "bring the next / previous hidden panel into view"));
+        StringBuilder f = new StringBuilder();
+        for (int i = 0; i < PANEL_KEYS.length; i++) {
+            f.append(i == 0 ? "" : ", ").append(PANEL_KEYS[i].tab);
+        }
+        h.add(new HelpLine("F2 F3 F4 F5", "bring forward " + f));
+        h.add(new HelpLine("w", "power-up view: rail current from switch-on; w leaves"));
         h.add(new HelpLine("[ ]  Left Right", "previous / next rail in the power-up view"));
-        h.add(new HelpLine("?  h  F1", "this help; any key closes it"));
+        h.add(new HelpLine("?  h  F1", "this help; Space: next page, other keys close it"));
         h.add(new HelpLine("Esc", "close help or the power-up view"));
         h.add(new HelpLine("q  Ctrl-C", "quit"));
         h.add(new HelpLine("", ""));
         h.add(new HelpLine(Glyphs.LAMP_ON + " " + Glyphs.LAMP_OFF + " " + Glyphs.LAMP_UNKNOWN,
-                "lamp lit, dark, unknown (never set since power-up, or lost)"));
+                "lamp lit, dark, unknown (never set, or lost)"));
         h.add(new HelpLine(Glyphs.SWITCH_ON + " " + Glyphs.SWITCH_OFF, "switch on, off"));
         h.add(new HelpLine(Glyphs.PC + " " + Glyphs.PC_NEXT, "instruction in flight, next to be fetched"));
         h.add(new HelpLine(Glyphs.BREAKPOINT + " " + Glyphs.CURSOR, "breakpoint, listing cursor"));
+        h.add(new HelpLine("[power] (decode)", "top line: panel brought forward, panel hidden"));
         return h;
     }
 }

@@ -10,7 +10,8 @@ import java.util.function.ToIntBiFunction;
  * Where the panels go for a terminal size. Wide terminals put the listing on the left and
  * the other panels stacked on the right; narrow ones stack everything under the listing.
  * When rows run out, panels are left out in a fixed order (power first, then decode lines,
- * then switches and lamps, state last) and the plan says which; the listing and the title
+ * then switches and lamps, state last) and the plan says which; a panel brought forward
+ * goes before that order, so every panel can be shown at any size; the listing and the title
  * and status lines always stay. Below a minimum size there is no layout at all.
  */
 final class Layout {
@@ -48,6 +49,12 @@ final class Layout {
      * (a panel that gets less than it wants draws its most important part).
      */
     static Plan plan(int cols, int rows, ToIntBiFunction<Panel, Integer> heightFor, ToIntBiFunction<Panel, Integer> leastFor) {
+        return plan(cols, rows, heightFor, leastFor, null);
+    }
+
+    /** As above, with {@code front} (or null) given room before the usual order. */
+    static Plan plan(int cols, int rows, ToIntBiFunction<Panel, Integer> heightFor, ToIntBiFunction<Panel, Integer> leastFor,
+            Panel front) {
         Map<Panel, Rect> rects = new EnumMap<>(Panel.class);
         List<Panel> hidden = new ArrayList<>();
         if (cols < MIN_COLS || rows < MIN_ROWS) {
@@ -60,9 +67,13 @@ final class Layout {
         int sideWidth = wide ? cols - listingWidth : cols;
         int room = wide ? body : body - LISTING_MIN;
         Map<Panel, Integer> heights = new EnumMap<>(Panel.class);
-        for (Panel p : PRIORITY) {
+        for (Panel p : order(front)) {
             int h = heightFor.applyAsInt(p, sideWidth);
             int least = Math.min(h, leastFor.applyAsInt(p, sideWidth));
+            if (p == front && least > room) {
+                // The panel asked for gets whatever there is; it draws what fits.
+                least = room;
+            }
             if (h <= room) {
                 heights.put(p, h);
                 room -= h;
@@ -93,5 +104,37 @@ final class Layout {
             row += height;
         }
         return new Plan(cols, rows, false, wide, rects, hidden);
+    }
+
+    private static List<Panel> order(Panel front) {
+        List<Panel> o = new ArrayList<>(List.of(PRIORITY));
+        if (front != null && o.remove(front)) {
+            o.add(0, front);
+        }
+        return o;
+    }
+
+    /**
+     * The hidden panel Tab (step 1) or Shift-Tab (step -1) brings forward: the next one after
+     * {@code front} in screen order, going round; with none hidden, the next panel at all.
+     */
+    static Panel next(Panel front, List<Panel> hidden, int step) {
+        Panel[] all = Keymap.PANEL_KEYS;
+        int at = -1;
+        for (int i = 0; i < all.length; i++) {
+            if (all[i] == front) {
+                at = i;
+            }
+        }
+        if (at < 0 && step < 0) {
+            at = 0;
+        }
+        for (int k = 1; k <= all.length; k++) {
+            Panel p = all[Math.floorMod(at + step * k, all.length)];
+            if (hidden.isEmpty() || hidden.contains(p)) {
+                return p;
+            }
+        }
+        return front;
     }
 }

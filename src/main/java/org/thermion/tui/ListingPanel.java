@@ -31,7 +31,21 @@ final class ListingPanel {
         } else if (target >= v.top + rows - margin) {
             v.top = target - rows + 1 + margin;
         }
-        v.top = Math.max(0, Math.min(v.top, Math.max(0, size - rows)));
+        // The view may scroll past the end only as far as puts the first instruction near the top,
+        // so a long header of comments never fills the panel while rows stay empty below; a
+        // listing that fits whole is shown whole.
+        int floor = size <= rows ? 0 : firstWord(s) - 3;
+        v.top = Math.max(0, Math.min(v.top, Math.max(size - rows, floor)));
+    }
+
+    private static int firstWord(Session s) {
+        List<ListingLine> listing = s.assembly().listing();
+        for (int i = 0; i < listing.size(); i++) {
+            if (listing.get(i).hasWord()) {
+                return i;
+            }
+        }
+        return 0;
     }
 
     static void draw(Canvas c, Rect r, Session s, View v) {

@@ -9,25 +9,67 @@ final class StatusLines {
     private StatusLines() {
     }
 
-    static void title(Canvas c, int cols, Session s, String program, List<Panel> hidden) {
+    /**
+     * The title line: the names on the left and, when panels do not all fit, the panel row on
+     * the right: each side panel's word, the one brought forward in brackets, hidden ones in
+     * parentheses, after the key that cycles them. {@code plan} is null on the power-up screen.
+     */
+    static void title(Canvas c, int cols, Session s, String program, Layout.Plan plan, View v) {
         c.text(0, 0, " ".repeat(cols), Palette.TEXT, Palette.OVERLAY_BACKGROUND);
-        String note = "";
-        if (!hidden.isEmpty()) {
-            StringBuilder b = new StringBuilder("hidden, too little room: ");
-            for (int i = 0; i < hidden.size(); i++) {
-                b.append(i == 0 ? "" : ", ").append(hidden.get(i).title);
-            }
-            note = b.append(' ').toString();
-        }
-        // The note about hidden panels matters more than the names, so they give way to it.
-        int room = Math.max(0, cols - note.length() - 1);
+        String row = plan == null ? "" : panelRow(plan, v);
+        // The panel row matters more than the names, so they give way to it.
+        int room = Math.max(0, cols - row.length() - 1);
         int x = c.text(1, 0, Canvas.fit("THERMION", room - 1), Palette.HEADING, Palette.OVERLAY_BACKGROUND);
         String names = "  " + s.machine().name() + " \u00B7 " + program + " \u00B7 latches start " + initName(s);
         c.text(x, 0, Canvas.fit(names, Math.max(0, room - x)), Palette.TEXT, Palette.OVERLAY_BACKGROUND);
-        if (!note.isEmpty()) {
-            int at = Math.max(0, cols - note.length());
-            c.text(at, 0, Canvas.fit(note, cols - at), Palette.STOPPED, Palette.OVERLAY_BACKGROUND);
+        if (row.isEmpty()) {
+            return;
         }
+        int at = Math.max(0, cols - row.length());
+        at = c.text(at, 0, Canvas.fit("Tab ", cols - at), Palette.KEY, Palette.OVERLAY_BACKGROUND);
+        for (Panel p : Keymap.PANEL_KEYS) {
+            String w = panelWord(plan, v, p);
+            boolean hidden = !plan.shows(p);
+            at = c.text(at, 0, Canvas.fit(w, Math.max(0, cols - at)), hidden ? Palette.DIM : p == v.front ? Palette.LIT : Palette.TEXT,
+                    Palette.OVERLAY_BACKGROUND) + 1;
+        }
+    }
+
+    /** The panel row as text, or "" when every panel is shown and none was brought forward. */
+    static String panelRow(Layout.Plan plan, View v) {
+        if (plan.hidden().isEmpty() && v.front == null) {
+            return "";
+        }
+        StringBuilder b = new StringBuilder("Tab ");
+        for (Panel p : Keymap.PANEL_KEYS) {
+            b.append(panelWord(plan, v, p)).append(' ');
+        }
+        return b.toString();
+    }
+
+    private static String panelWord(Layout.Plan plan, View v, Panel p) {
+        if (!plan.shows(p)) {
+            return "(" + p.tab + ")";
+        }
+        return p == v.front ? "[" + p.tab + "]" : p.tab;
+    }
+
+    /** Time on the real machine after {@code cycles} at the declared clock period: us, ms or s. */
+    static String machineTime(long cycles, double periodSeconds) {
+        double t = cycles * periodSeconds;
+        if (t == 0) {
+            return "0 s";
+        }
+        if (t < 10e-6) {
+            return String.format("%.2f us", t * 1e6);
+        }
+        if (t < 1e-3) {
+            return String.format("%.0f us", t * 1e6);
+        }
+        if (t < 1) {
+            return String.format("%.2f ms", t * 1e3);
+        }
+        return t < 60 ? String.format("%.3f s", t) : String.format("%,.1f s", t);
     }
 
     static String initName(Session s) {
@@ -42,13 +84,16 @@ final class StatusLines {
     static void status(Canvas c, int cols, int row, Session s, View v) {
         c.text(0, row, " ".repeat(cols), Palette.TEXT, Palette.OVERLAY_BACKGROUND);
         int phases = s.machine().clock().phases();
-        String where = String.format(" cycle %,d  phase %d of %d next  ", s.cycle(), s.nextPhase(), phases);
+        String time = machineTime(s.cycle(), s.machine().clock().periodSeconds());
+        String where = String.format(" cycle %,d \u00B7 %s  phase %d of %d next  ", s.cycle(), time, s.nextPhase(), phases);
         String at = Hex.address(s.pc(), s.machine()) + " " + instructionText(s);
         String inst = (s.midCycle() ? "in flight " : "next up ") + at + "   ";
         String state;
         if (s.running()) {
-            String rate = v.cyclesPerSecond > 0 ? String.format("  %,.0f cycles/s", v.cyclesPerSecond) : "";
-            state = "\u25B6 running" + rate;
+            // The speed as a multiple of the real machine's: what a builder compares with.
+            double real = v.cyclesPerSecond * s.machine().clock().periodSeconds();
+            String rate = v.cyclesPerSecond > 0 ? String.format("  %,.0f cycles/s = %s real", v.cyclesPerSecond, times(real)) : "";
+            state = "\u25B6 running" + (v.machineSpeed ? " at machine speed" : "") + rate;
         } else {
             state = "\u25A0 stopped: " + s.stop().text();
         }
@@ -65,6 +110,11 @@ final class StatusLines {
         if (!v.message.isEmpty() && x + 3 < cols) {
             c.text(x + 3, row, Canvas.fit(v.message, cols - x - 3), Palette.KEY, Palette.OVERLAY_BACKGROUND);
         }
+    }
+
+    /** A speed ratio: two decimals below 10, whole above. */
+    static String times(double ratio) {
+        return ratio < 10 ? String.format("%.2f\u00D7", ratio) : String.format("%,.0f\u00D7", ratio);
     }
 
     /** The source of the instruction at the PC without its label and comment, or its opcode. */
@@ -87,7 +137,7 @@ final class StatusLines {
         return "(no program word)";
     }
 
-    static void keys(Canvas c, int cols, int row, int inputs, View v) {
+    static void keys(Canvas c, int cols, int row, int inputs, View v, boolean panelsHidden) {
         c.text(0, row, " ".repeat(cols), Palette.TEXT, Palette.BACKGROUND);
         String[][] hints;
         if (v.mode == View.Mode.POWER_UP) {
@@ -95,10 +145,10 @@ final class StatusLines {
         } else {
             String sw = inputs == 0 ? "" : inputs == 1 ? "1" : inputs <= 10 ? "1-" + Keymap.INPUT_KEYS.charAt(inputs - 1) : "1-0 !-)";
             hints = new String[][] {{"p", "phase"}, {"c", "cycle"}, {"Space", "run/pause"}, {"r", "reset"},
-                {sw, "switches"}, {"b", "breakpoint"}, {"w", "power-up"}, {"?", "help"}, {"q", "quit"}};
+                {sw, "switches"}, {"b", "breakpoint"}, {"t", "pace"}, {"w", "power-up"}, {"Tab", "panels"}, {"?", "help"}, {"q", "quit"}};
         }
-        // Help and quit always stay; the others give way from the right on narrow windows.
-        int keep = 2;
+        // Help and quit always stay, and the panel key while panels are hidden; the others give way from the right.
+        int keep = panelsHidden ? 3 : 2;
         int total = 1;
         for (String[] h : hints) {
             if (!h[0].isEmpty()) {

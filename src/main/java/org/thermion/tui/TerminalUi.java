@@ -2,6 +2,7 @@ package org.thermion.tui;
 
 import com.googlecode.lanterna.TerminalSize;
 import com.googlecode.lanterna.input.KeyStroke;
+import com.googlecode.lanterna.input.KeyType;
 import com.googlecode.lanterna.screen.Screen;
 import org.thermion.asm.ListingLine;
 import org.thermion.model.Port;
@@ -33,6 +34,7 @@ public final class TerminalUi {
     private boolean quit;
     private long rateCycles;
     private long rateSince = System.nanoTime();
+    private final Pace pace;
 
     public TerminalUi(Screen screen, Session session, String program, PowerUpView powerUp) {
         this.screen = screen;
@@ -44,8 +46,11 @@ public final class TerminalUi {
             names.add(p.name());
         }
         this.help = Keymap.help(names);
+        this.pace = new Pace(session.machine().clock().periodSeconds());
         int first = session.listingIndex(session.pc());
         view.cursor = Math.max(0, first);
+        // Open at the instruction, not at the file's header comments: a few lines of context above it.
+        view.top = Math.max(0, first - 3);
     }
 
     /** Reads keys, runs and draws until quit. The caller owns starting and stopping the screen. */
@@ -80,12 +85,21 @@ public final class TerminalUi {
             view.cyclesPerSecond = 0;
             rateCycles = 0;
             rateSince = System.nanoTime();
+            pace.restart();
             return 0;
         }
         long start = System.nanoTime();
         long done = 0;
-        while (session.running() && System.nanoTime() - start < nanos) {
-            done += session.run(BATCH);
+        if (view.machineSpeed) {
+            long due = pace.due(start);
+            while (session.running() && done < due && System.nanoTime() - start < nanos) {
+                done += session.run(Math.min(BATCH, due - done));
+            }
+            pace.ran(done);
+        } else {
+            while (session.running() && System.nanoTime() - start < nanos) {
+                done += session.run(BATCH);
+            }
         }
         rateCycles += done;
         long now = System.nanoTime();
@@ -113,6 +127,12 @@ public final class TerminalUi {
     public void handle(KeyStroke stroke) {
         Key key = Keymap.resolve(stroke, session.machine().inputs().size());
         if (view.help) {
+            boolean turn = stroke.getKeyType() == KeyType.PageDown
+                    || stroke.getKeyType() == KeyType.Character && stroke.getCharacter() == ' ';
+            if (turn && HelpOverlay.hasPage(view.helpPage + 1, help, screenRows())) {
+                view.helpPage++;
+                return;
+            }
             view.help = false;
             if (key != null && key.command() == Command.QUIT && stroke.isCtrlDown()) {
                 quit = true;
@@ -171,6 +191,20 @@ public final class TerminalUi {
                 }
                 view.followPc = true;
             }
+            case PACE -> {
+                view.machineSpeed = !view.machineSpeed;
+                pace.restart();
+                view.message = view.machineSpeed ? "runs at the machine's own clock" : "runs flat out";
+            }
+            case NEXT_PANEL, PREVIOUS_PANEL -> {
+                Layout.Plan now = plan(screen.getTerminalSize());
+                view.front = Layout.next(view.front, now.hidden(), key.command() == Command.NEXT_PANEL ? 1 : -1);
+                view.mode = View.Mode.MAIN;
+            }
+            case SHOW_PANEL -> {
+                view.front = Panel.values()[key.arg()];
+                view.mode = View.Mode.MAIN;
+            }
             case POWER_UP_VIEW -> {
                 view.mode = view.mode == View.Mode.MAIN ? View.Mode.POWER_UP : View.Mode.MAIN;
                 if (view.mode == View.Mode.POWER_UP) {
@@ -179,7 +213,10 @@ public final class TerminalUi {
             }
             case NEXT_RAIL -> view.rail++;
             case PREVIOUS_RAIL -> view.rail--;
-            case HELP -> view.help = true;
+            case HELP -> {
+                view.help = true;
+                view.helpPage = 0;
+            }
             case CLOSE -> view.mode = View.Mode.MAIN;
             case QUIT -> quit = true;
             default -> {
@@ -193,8 +230,16 @@ public final class TerminalUi {
     }
 
     private int pageRows() {
-        TerminalSize size = screen.getTerminalSize();
-        return Math.max(1, size.getRows() - 8);
+        return Math.max(1, screenRows() - 8);
+    }
+
+    private int screenRows() {
+        return screen.getTerminalSize().getRows();
+    }
+
+    private Layout.Plan plan(TerminalSize size) {
+        return Layout.plan(size.getColumns(), size.getRows(), this::panelHeight,
+                (p, w) -> p == Panel.POWER ? PowerPanel.leastHeight(session) : panelHeight(p, w), view.front);
     }
 
     /** Draws one frame, following a resize first. */
@@ -208,17 +253,16 @@ public final class TerminalUi {
         }
         frame.begin(cols, rows);
         Canvas c = new Canvas(frame, new Rect(0, 0, cols, rows));
-        Layout.Plan plan = Layout.plan(cols, rows, this::panelHeight,
-                (p, w) -> p == Panel.POWER ? PowerPanel.leastHeight(session) : panelHeight(p, w));
+        Layout.Plan plan = plan(size);
         if (plan.tooSmall()) {
             tooSmall(c, cols, rows);
         } else if (view.mode == View.Mode.POWER_UP) {
-            StatusLines.title(c, cols, session, program, List.of());
+            StatusLines.title(c, cols, session, program, null, view);
             powerUp.draw(c, new Rect(0, 1, cols, rows - 3), view);
             StatusLines.status(c, cols, rows - 2, session, view);
-            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view);
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, !plan.hidden().isEmpty());
         } else {
-            StatusLines.title(c, cols, session, program, plan.hidden());
+            StatusLines.title(c, cols, session, program, plan, view);
             ListingPanel.draw(c, plan.rect(Panel.LISTING), session, view);
             if (plan.shows(Panel.STATE)) {
                 LampGrid.draw(c, plan.rect(Panel.STATE), "state", stateNames(), stateLevels(), "the ISA names no state bits");
@@ -234,10 +278,10 @@ public final class TerminalUi {
                 PowerPanel.draw(c, plan.rect(Panel.POWER), session);
             }
             StatusLines.status(c, cols, rows - 2, session, view);
-            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view);
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, !plan.hidden().isEmpty());
         }
         if (view.help && !plan.tooSmall()) {
-            HelpOverlay.draw(c, cols, rows, help);
+            HelpOverlay.draw(c, cols, rows, help, view.helpPage);
         }
         frame.flush(screen);
         screen.setCursorPosition(null);

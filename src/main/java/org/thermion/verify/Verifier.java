@@ -1,13 +1,11 @@
 package org.thermion.verify;
 
 import org.thermion.model.AddressedBit;
-import org.thermion.model.Gate;
 import org.thermion.model.Instruction;
 import org.thermion.model.Isa;
 import org.thermion.model.Latch;
 import org.thermion.model.Machine;
 import org.thermion.model.Meanings;
-import org.thermion.model.ModuleInstance;
 import org.thermion.model.Netlist;
 import org.thermion.model.Port;
 
@@ -101,6 +99,7 @@ public final class Verifier {
     private final List<OperandPlan> plans = new ArrayList<>();
     private final int[] lineNets;
     private final String[] lineNames;
+    private NetTrace netTrace;
 
     public Verifier(Machine machine, Options options) {
         this.machine = machine;
@@ -508,7 +507,7 @@ public final class Verifier {
             BatchRun ref = new BatchRun(opt.reference());
             BatchRun.Result rr = ref.run(b, true);
             compared = "the unmutated logic, same case";
-            nets = firstDifferences(r, rr, lane, lane, opt.reference().netlist().netCount(), null, 0);
+            nets = nets().firstDifferences(r, rr, lane, lane, opt.reference().netlist().netCount(), null, 0);
         } else {
             Neighbour nb = passingNeighbour(b, lane, g.item);
             if (nb == null) {
@@ -516,14 +515,22 @@ public final class Verifier {
                 nets = List.of();
             } else {
                 compared = "the passing case with " + nb.change;
-                boolean[] cone = cone(pins);
-                nets = firstDifferences(nb.result, nb.result, 0, nb.lane, machine.netlist().netCount(), cone, phase);
+                boolean[] cone = nets().cone(pins);
+                nets = nets().firstDifferences(nb.result, nb.result, 0, nb.lane, machine.netlist().netCount(), cone, phase);
             }
         }
         return new Counterexample(ins.mnemonic(), ins.opcode(), b.word(lane), operandText(ins, b.word(lane)), item, kind,
                 explanation, stateText(b, lane), inputText(b, lane), afterText(e.state(), lane),
                 afterText(r.state, lane), expectedPc(e, lane), r.pc[lane], g.cases, compared, nets,
-                trace(pins, r.atPhase[phase], lane));
+                nets().trace(pins, r.atPhase[phase], lane));
+    }
+
+    // Made on the first counterexample: most runs find none.
+    private NetTrace nets() {
+        if (netTrace == null) {
+            netTrace = new NetTrace(machine, opt.maxNets());
+        }
+        return netTrace;
     }
 
     private record Neighbour(BatchRun.Result result, int lane, String change) {
@@ -578,135 +585,7 @@ public final class Verifier {
         return new Neighbour(r, p, change.get(p));
     }
 
-    /**
-     * The gates feeding {@code pins}, breadth first from the pins (free wires followed without
-     * counting), each with its input values in the failing lane, at most {@code 3 x maxNets}.
-     */
-    private List<TraceLine> trace(int[] pins, long[] at, int lane) {
-        Netlist nl = machine.netlist();
-        int[] driver = new int[nl.netCount()];
-        java.util.Arrays.fill(driver, -1);
-        for (Gate g : nl.gates()) {
-            driver[g.output()] = g.id();
-        }
-        List<TraceLine> out = new ArrayList<>();
-        boolean[] seen = new boolean[nl.netCount()];
-        java.util.ArrayDeque<int[]> todo = new java.util.ArrayDeque<>();
-        for (int p : pins) {
-            if (p >= 0) {
-                todo.add(new int[]{p, 0});
-            }
-        }
-        int limit = 3 * Math.max(1, opt.maxNets());
-        while (!todo.isEmpty() && out.size() < limit) {
-            int[] e = todo.poll();
-            int n = e[0];
-            if (seen[n] || driver[n] < 0) {
-                continue;
-            }
-            seen[n] = true;
-            Gate g = nl.gates().get(driver[n]);
-            StringBuilder ins = new StringBuilder();
-            for (int i : g.inputs()) {
-                ins.append(ins.length() == 0 ? "" : " ").append(nl.netName(i)).append('=').append(b01(bit(at[i], lane)));
-                todo.add(new int[]{i, g.stage() < 0 ? e[1] : e[1] + 1});
-            }
-            String fn = g.stage() < 0 ? (g.fn() == org.thermion.model.GateFn.NOT ? "complement" : "wire")
-                    : g.fn().name().toLowerCase(Locale.ROOT);
-            out.add(new TraceLine(e[1], nl.netName(n), module(nl.netModule(n)), fn, ins.toString(), bit(at[n], lane)));
-        }
-        return List.copyOf(out);
-    }
-
-    /** Nets in the fan-in of {@code pins}, back to latches, inputs and ROM data. */
-    private boolean[] cone(int[] pins) {
-        Netlist nl = machine.netlist();
-        boolean[] in = new boolean[nl.netCount()];
-        int[] driver = new int[nl.netCount()];
-        java.util.Arrays.fill(driver, -1);
-        for (Gate g : nl.gates()) {
-            driver[g.output()] = g.id();
-        }
-        java.util.ArrayDeque<Integer> todo = new java.util.ArrayDeque<>();
-        for (int p : pins) {
-            if (p >= 0) {
-                todo.add(p);
-            }
-        }
-        while (!todo.isEmpty()) {
-            int n = todo.pop();
-            if (in[n]) {
-                continue;
-            }
-            in[n] = true;
-            if (driver[n] >= 0) {
-                for (int i : nl.gates().get(driver[n]).inputs()) {
-                    todo.add(i);
-                }
-            }
-        }
-        return in;
-    }
-
-    /**
-     * The first nets, in levelized order phase by phase (latch outputs, inputs and ROM data
-     * first, then gate outputs in evaluation order), where lane {@code la} of {@code a} and
-     * lane {@code lb} of {@code b} differ; only nets below {@code netLimit} and in {@code only},
-     * and only at {@code onlyPhase} unless it is 0.
-     */
-    private List<NetDiff> firstDifferences(BatchRun.Result a, BatchRun.Result b, int la, int lb, int netLimit,
-                                           boolean[] only, int onlyPhase) {
-        Netlist nl = machine.netlist();
-        int[] order = levelOrder(nl);
-        List<NetDiff> out = new ArrayList<>();
-        for (int p = 1; p < a.atPhase.length && out.size() < opt.maxNets(); p++) {
-            if (onlyPhase != 0 && p != onlyPhase) {
-                continue;
-            }
-            for (int n : order) {
-                if (n >= netLimit || n <= Netlist.CONST1 || (only != null && !only[n])) {
-                    continue;
-                }
-                boolean va = bit(a.atPhase[p][n], la);
-                boolean vb = bit(b.atPhase[p][n], lb);
-                if (va != vb) {
-                    out.add(new NetDiff(n, nl.netName(n), module(nl.netModule(n)), p, va, vb));
-                    if (out.size() >= opt.maxNets()) {
-                        break;
-                    }
-                }
-            }
-        }
-        return List.copyOf(out);
-    }
-
-    private static int[] levelOrder(Netlist nl) {
-        boolean[] gateOut = new boolean[nl.netCount()];
-        for (Gate g : nl.gates()) {
-            gateOut[g.output()] = true;
-        }
-        int[] order = new int[nl.netCount()];
-        int k = 0;
-        for (int n = 0; n < nl.netCount(); n++) {
-            if (!gateOut[n]) {
-                order[k++] = n;
-            }
-        }
-        for (Gate g : nl.gates()) {
-            order[k++] = g.output();
-        }
-        return java.util.Arrays.copyOf(order, k);
-    }
-
     // ---- text -----------------------------------------------------------------------------
-
-    private String module(int m) {
-        if (m < 0 || m >= machine.modules().size()) {
-            return "";
-        }
-        ModuleInstance mi = machine.modules().get(m);
-        return mi.path().isEmpty() ? "(top) " + mi.type() : mi.path() + " (" + mi.type() + ")";
-    }
 
     private String net(int n) {
         return machine.netlist().netName(n);

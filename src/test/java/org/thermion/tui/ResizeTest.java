@@ -26,20 +26,20 @@ class ResizeTest {
         UiFixture f = new UiFixture(120, 40).type("cccccc");
         String wide = f.text();
         assertThat(wide).contains("program").contains("state").contains("decode lines")
-                .contains("switches and lamps").contains("power").doesNotContain("hidden");
+                .contains("switches and lamps").contains("power").doesNotContain("(power)");
 
         f.resize(80, 40);
         // Narrow: one column; the power panel keeps its module table and leaves out the rail totals.
-        assertThat(f.line("THERMION")).doesNotContain("hidden");
+        assertThat(f.line("THERMION")).doesNotContain("Tab");
         assertThat(f.text()).contains("decode lines").contains("switches and lamps").contains(Glyphs.LAMP_ON + " pump")
                 .contains("power \u00B7 rail totals need more rows").contains("all modules");
         f.assertGolden("narrow-80x40.txt");
 
         f.resize(80, 30);
-        assertThat(f.line("THERMION")).contains("hidden, too little room: power");
+        assertThat(f.line("THERMION")).contains("Tab state decode switches (power)");
 
         f.resize(70, 20);
-        assertThat(f.line("THERMION")).contains("hidden, too little room: switches and lamps, power");
+        assertThat(f.line("THERMION")).contains("Tab state decode (switches) (power)");
         assertThat(f.text()).contains("state").contains("program");
 
         f.resize(50, 12);

@@ -1,6 +1,5 @@
 package org.thermion.tui;
 
-import org.thermion.testing.Golden;
 import com.googlecode.lanterna.TerminalSize;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
@@ -14,12 +13,11 @@ import org.thermion.lang.Diagnostics;
 import org.thermion.lang.SourceSet;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
+import org.thermion.testing.Golden;
 
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 
 /**
