@@ -24,8 +24,8 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 
-import static org.thermion.cli.report.Unit.COUNT;
-import static org.thermion.cli.report.Unit.TEXT;
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.TEXT;
 import java.util.concurrent.Callable;
 
 /** {@code asm MACHINE PROGRAM}: assemble a program for a machine into Intel HEX and a listing. */

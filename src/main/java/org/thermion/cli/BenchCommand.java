@@ -22,10 +22,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import static org.thermion.cli.report.Unit.FLAG;
-import static org.thermion.cli.report.Unit.NUMBER;
-import static org.thermion.cli.report.Unit.SECONDS;
-import static org.thermion.cli.report.Unit.TEXT;
+import static org.thermion.cli.report.ReportUnit.FLAG;
+import static org.thermion.cli.report.ReportUnit.NUMBER;
+import static org.thermion.cli.report.ReportUnit.SECONDS;
+import static org.thermion.cli.report.ReportUnit.TEXT;
 import java.util.concurrent.Callable;
 
 /** {@code bench}: speed and scale of elaboration and simulation, against their targets. */

@@ -19,13 +19,13 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import static org.thermion.cli.report.Unit.AMPS;
-import static org.thermion.cli.report.Unit.COUNT;
-import static org.thermion.cli.report.Unit.OHMS;
-import static org.thermion.cli.report.Unit.PERCENT;
-import static org.thermion.cli.report.Unit.TEXT;
-import static org.thermion.cli.report.Unit.VOLTS;
-import static org.thermion.cli.report.Unit.WATTS;
+import static org.thermion.cli.report.ReportUnit.AMPS;
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.OHMS;
+import static org.thermion.cli.report.ReportUnit.PERCENT;
+import static org.thermion.cli.report.ReportUnit.TEXT;
+import static org.thermion.cli.report.ReportUnit.VOLTS;
+import static org.thermion.cli.report.ReportUnit.WATTS;
 
 /** The tables of a budget report, one content for text, CSV and JSON. */
 final class BudgetReport {

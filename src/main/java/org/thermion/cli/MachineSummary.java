@@ -21,12 +21,12 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
 
-import static org.thermion.cli.report.Unit.AMPS;
-import static org.thermion.cli.report.Unit.COUNT;
-import static org.thermion.cli.report.Unit.OHMS;
-import static org.thermion.cli.report.Unit.SECONDS;
-import static org.thermion.cli.report.Unit.TEXT;
-import static org.thermion.cli.report.Unit.VOLTS;
+import static org.thermion.cli.report.ReportUnit.AMPS;
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.OHMS;
+import static org.thermion.cli.report.ReportUnit.SECONDS;
+import static org.thermion.cli.report.ReportUnit.TEXT;
+import static org.thermion.cli.report.ReportUnit.VOLTS;
 
 /** The summary `check` reports: sizes, tubes by type and by module, rails, heater strings. */
 final class MachineSummary {

@@ -1,7 +1,7 @@
 package org.thermion.cli;
 
 import org.thermion.cli.report.Format;
-import org.thermion.faults.Circuit;
+import org.thermion.faults.FaultCircuit;
 import org.thermion.faults.Diagnosis;
 import org.thermion.faults.Effort;
 import org.thermion.faults.FaultList;
@@ -83,7 +83,7 @@ final class PlanCommand implements Callable<Integer> {
             }
             rom = in.rom();
         }
-        Circuit c = Circuit.of(m);
+        FaultCircuit c = FaultCircuit.of(m);
         if (c.lamps().isEmpty()) {
             err.println("error: machine " + m.name() + " has nothing to watch: declare outputs in its machine block "
                     + "(outputs NAME ...) or give it lamp or relay stages");

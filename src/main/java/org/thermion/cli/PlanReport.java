@@ -3,7 +3,7 @@ package org.thermion.cli;
 import org.thermion.cli.report.Absent;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
-import org.thermion.faults.Circuit;
+import org.thermion.faults.FaultCircuit;
 import org.thermion.faults.Fault;
 import org.thermion.faults.FaultList;
 import org.thermion.faults.FaultPlace;
@@ -18,8 +18,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import static org.thermion.cli.report.Unit.COUNT;
-import static org.thermion.cli.report.Unit.TEXT;
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.TEXT;
 
 /** The plan command's report: counts, the numbered steps, and every collapsed fault's outcome. */
 final class PlanReport {
@@ -27,7 +27,7 @@ final class PlanReport {
     static final int VERSION = 1;
 
     private final Machine m;
-    private final Circuit c;
+    private final FaultCircuit c;
     private final FaultList faults;
     private final Plan plan;
     private final List<Step> steps;
@@ -35,7 +35,7 @@ final class PlanReport {
     private final Path program;
     private final int largest;
 
-    PlanReport(Machine m, Circuit c, FaultList faults, Plan plan, List<Step> steps, byte[][] expected, Path program,
+    PlanReport(Machine m, FaultCircuit c, FaultList faults, Plan plan, List<Step> steps, byte[][] expected, Path program,
                int largest) {
         this.m = m;
         this.c = c;

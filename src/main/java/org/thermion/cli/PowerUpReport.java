@@ -20,18 +20,18 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import static org.thermion.cli.report.Unit.AMPS;
-import static org.thermion.cli.report.Unit.COUNT;
-import static org.thermion.cli.report.Unit.FLAG;
-import static org.thermion.cli.report.Unit.JOULES;
-import static org.thermion.cli.report.Unit.KELVIN;
-import static org.thermion.cli.report.Unit.NUMBER;
-import static org.thermion.cli.report.Unit.OHMS;
-import static org.thermion.cli.report.Unit.PERCENT;
-import static org.thermion.cli.report.Unit.SECONDS;
-import static org.thermion.cli.report.Unit.TEXT;
-import static org.thermion.cli.report.Unit.VOLTS;
-import static org.thermion.cli.report.Unit.WATTS;
+import static org.thermion.cli.report.ReportUnit.AMPS;
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.FLAG;
+import static org.thermion.cli.report.ReportUnit.JOULES;
+import static org.thermion.cli.report.ReportUnit.KELVIN;
+import static org.thermion.cli.report.ReportUnit.NUMBER;
+import static org.thermion.cli.report.ReportUnit.OHMS;
+import static org.thermion.cli.report.ReportUnit.PERCENT;
+import static org.thermion.cli.report.ReportUnit.SECONDS;
+import static org.thermion.cli.report.ReportUnit.TEXT;
+import static org.thermion.cli.report.ReportUnit.VOLTS;
+import static org.thermion.cli.report.ReportUnit.WATTS;
 
 /** A power-up result as one report (text, CSV, JSON) and as an RFC 4180 time series. */
 final class PowerUpReport {

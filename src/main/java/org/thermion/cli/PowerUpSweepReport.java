@@ -7,13 +7,13 @@ import org.thermion.cli.report.Table;
 import org.thermion.power.startup.PreferredValues;
 import org.thermion.power.startup.ResistorSweep;
 
-import static org.thermion.cli.report.Unit.AMPS;
-import static org.thermion.cli.report.Unit.FLAG;
-import static org.thermion.cli.report.Unit.JOULES;
-import static org.thermion.cli.report.Unit.OHMS;
-import static org.thermion.cli.report.Unit.SECONDS;
-import static org.thermion.cli.report.Unit.TEXT;
-import static org.thermion.cli.report.Unit.WATTS;
+import static org.thermion.cli.report.ReportUnit.AMPS;
+import static org.thermion.cli.report.ReportUnit.FLAG;
+import static org.thermion.cli.report.ReportUnit.JOULES;
+import static org.thermion.cli.report.ReportUnit.OHMS;
+import static org.thermion.cli.report.ReportUnit.SECONDS;
+import static org.thermion.cli.report.ReportUnit.TEXT;
+import static org.thermion.cli.report.ReportUnit.WATTS;
 
 /** A soft-start resistor sweep ({@code powerup --sweep}) as one report. */
 final class PowerUpSweepReport {

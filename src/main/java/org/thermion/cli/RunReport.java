@@ -13,8 +13,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
-import static org.thermion.cli.report.Unit.COUNT;
-import static org.thermion.cli.report.Unit.TEXT;
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.TEXT;
 
 /** A program run as one report: output changes, watched nets, unknown values, final state. */
 final class RunReport {

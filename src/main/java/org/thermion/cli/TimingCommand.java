@@ -27,12 +27,12 @@ import java.util.concurrent.Callable;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-import static org.thermion.cli.report.Unit.COUNT;
-import static org.thermion.cli.report.Unit.FARADS;
-import static org.thermion.cli.report.Unit.FLAG;
-import static org.thermion.cli.report.Unit.HERTZ;
-import static org.thermion.cli.report.Unit.SECONDS;
-import static org.thermion.cli.report.Unit.TEXT;
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.FARADS;
+import static org.thermion.cli.report.ReportUnit.FLAG;
+import static org.thermion.cli.report.ReportUnit.HERTZ;
+import static org.thermion.cli.report.ReportUnit.SECONDS;
+import static org.thermion.cli.report.ReportUnit.TEXT;
 
 /** {@code timing MACHINE}: stage delays, the worst path of every phase, slack and the highest safe clock. */
 @Command(name = "timing", mixinStandardHelpOptions = true,

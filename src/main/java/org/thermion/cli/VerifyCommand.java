@@ -30,9 +30,9 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 
-import static org.thermion.cli.report.Unit.COUNT;
-import static org.thermion.cli.report.Unit.FLAG;
-import static org.thermion.cli.report.Unit.TEXT;
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.FLAG;
+import static org.thermion.cli.report.ReportUnit.TEXT;
 
 /** {@code verify MACHINE}: the logic against the ISA, every opcode, state and input; optional fault seeding. */
 @Command(name = "verify", mixinStandardHelpOptions = true,

@@ -220,7 +220,7 @@ public final class Diagnosis {
 
     private long signature(LaneMachine m, int lane) {
         long h = 1469598103934665603L;
-        for (Lamp lamp : sim.circuit().lamps()) {
+        for (ObservedLamp lamp : sim.circuit().lamps()) {
             h = (h ^ FaultSimulator.reading(m, lamp.slot(), lane)) * 1099511628211L;
         }
         return h;

@@ -23,7 +23,7 @@ import java.util.Map;
  * diagnosis.
  */
 public final class FaultList {
-    private final Circuit circuit;
+    private final FaultCircuit circuit;
     private final List<Fault> all;
     private final int[] classOf;
     private final List<Fault> collapsed;
@@ -33,7 +33,7 @@ public final class FaultList {
     private final int[] saIndex;
     private final int stuckAtCollapsed;
 
-    private FaultList(Circuit c) {
+    private FaultList(FaultCircuit c) {
         this.circuit = c;
         Machine m = c.machine;
         List<Fault> f = new ArrayList<>();
@@ -112,7 +112,7 @@ public final class FaultList {
     }
 
     /** Builds the fault list of a flattened machine. */
-    public static FaultList of(Circuit c) {
+    public static FaultList of(FaultCircuit c) {
         return new FaultList(c);
     }
 
@@ -147,7 +147,7 @@ public final class FaultList {
         }
     }
 
-    private static void tubeFaults(Circuit c, List<Fault> f) {
+    private static void tubeFaults(FaultCircuit c, List<Fault> f) {
         Machine m = c.machine;
         List<Gate> gates = m.netlist().gates();
         List<Latch> latches = m.netlist().latches();
@@ -203,7 +203,7 @@ public final class FaultList {
                 f.add(new Fault(f.size(), FaultKind.RELAY_OPEN, g, List.of(new Force(gate.output(), false))));
             }
         }
-        List<Lamp> lamps = c.lamps();
+        List<ObservedLamp> lamps = c.lamps();
         for (int i = 0; i < lamps.size(); i++) {
             f.add(new Fault(f.size(), FaultKind.LAMP_BURNT, i, List.of(new Force(lamps.get(i).slot(), false))));
         }
@@ -228,7 +228,7 @@ public final class FaultList {
         }
     }
 
-    public Circuit circuit() {
+    public FaultCircuit circuit() {
         return circuit;
     }
 

@@ -16,7 +16,7 @@ import java.util.List;
 public record FaultPlace(String module, String stage, String net, String envelope, String text) {
 
     /** Names fault {@code f} of circuit {@code c}. */
-    public static FaultPlace of(Circuit c, Fault f) {
+    public static FaultPlace of(FaultCircuit c, Fault f) {
         Machine m = c.machine();
         switch (f.kind()) {
             case STUCK_AT_0:
@@ -44,14 +44,14 @@ public record FaultPlace(String module, String stage, String net, String envelop
                 return new FaultPlace(w.module, w.stage, w.net, w.envelope, w.text);
             }
             default: {
-                Lamp lamp = c.lamps().get(f.subject());
+                ObservedLamp lamp = c.lamps().get(f.subject());
                 return new FaultPlace("", "", m.netlist().netName(lamp.net()), "", "lamp " + lamp.name() + ": "
                         + f.kind().words);
             }
         }
     }
 
-    private static FaultPlace wire(Circuit c, Site s, String what) {
+    private static FaultPlace wire(FaultCircuit c, Site s, String what) {
         Machine m = c.machine();
         String net = m.netlist().netName(s.net());
         int gate = -1;

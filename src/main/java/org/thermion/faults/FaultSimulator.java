@@ -20,13 +20,13 @@ public final class FaultSimulator implements AutoCloseable {
     public static final byte ONE = 1;
     public static final byte UNKNOWN = 2;
 
-    private final Circuit circuit;
+    private final FaultCircuit circuit;
     private final long[] rom;
     private final ExecutorService pool;
     private final int threads;
 
     /** A simulator over {@code circuit} with program memory {@code rom} (null: none) on {@code threads} threads. */
-    public FaultSimulator(Circuit circuit, long[] rom, int threads) {
+    public FaultSimulator(FaultCircuit circuit, long[] rom, int threads) {
         this.circuit = circuit;
         this.rom = rom == null ? null : rom.clone();
         this.threads = Math.max(1, threads);
@@ -37,7 +37,7 @@ public final class FaultSimulator implements AutoCloseable {
         });
     }
 
-    public Circuit circuit() {
+    public FaultCircuit circuit() {
         return circuit;
     }
 
@@ -139,7 +139,7 @@ public final class FaultSimulator implements AutoCloseable {
     /** Lanes whose lamps show a known value other than the good machine's known one. */
     long detected(LaneMachine m, byte[] good) {
         long det = 0L;
-        List<Lamp> lamps = circuit.lamps();
+        List<ObservedLamp> lamps = circuit.lamps();
         for (int i = 0; i < good.length; i++) {
             if (good[i] == UNKNOWN) {
                 continue;
@@ -152,7 +152,7 @@ public final class FaultSimulator implements AutoCloseable {
     }
 
     byte[] lamps(LaneMachine m, int lane) {
-        List<Lamp> lamps = circuit.lamps();
+        List<ObservedLamp> lamps = circuit.lamps();
         byte[] out = new byte[lamps.size()];
         for (int i = 0; i < out.length; i++) {
             out[i] = reading(m, lamps.get(i).slot(), lane);

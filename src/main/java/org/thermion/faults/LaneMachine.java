@@ -12,7 +12,7 @@ import java.util.Arrays;
 final class LaneMachine {
     static final int LANES = 64;
 
-    final Circuit c;
+    final FaultCircuit c;
     final long[] v;
     final long[] x;
     final long[] f0;
@@ -25,7 +25,7 @@ final class LaneMachine {
     private final long[] loadX;
     private final int pcMask;
 
-    LaneMachine(Circuit c, long[] rom) {
+    LaneMachine(FaultCircuit c, long[] rom) {
         this.c = c;
         this.rom = rom == null ? new long[0] : rom;
         v = new long[c.slotCount];
@@ -152,16 +152,16 @@ final class LaneMachine {
             long rv;
             long rx;
             switch (op) {
-                case Circuit.COPY:
+                case FaultCircuit.COPY:
                     rv = v[code[in]];
                     rx = x[code[in]];
                     break;
-                case Circuit.NOT:
+                case FaultCircuit.NOT:
                     rx = x[code[in]];
                     rv = ~v[code[in]] & ~rx;
                     break;
-                case Circuit.AND:
-                case Circuit.NAND: {
+                case FaultCircuit.AND:
+                case FaultCircuit.NAND: {
                     long one = -1L;
                     long zero = 0L;
                     for (int k = in; k < at; k++) {
@@ -170,11 +170,11 @@ final class LaneMachine {
                         zero |= ~v[s] & ~x[s];
                     }
                     rx = ~zero & ~one;
-                    rv = op == Circuit.AND ? one : zero;
+                    rv = op == FaultCircuit.AND ? one : zero;
                     break;
                 }
-                case Circuit.OR:
-                case Circuit.NOR: {
+                case FaultCircuit.OR:
+                case FaultCircuit.NOR: {
                     long one = 0L;
                     long zero = -1L;
                     for (int k = in; k < at; k++) {
@@ -183,7 +183,7 @@ final class LaneMachine {
                         zero &= ~v[s] & ~x[s];
                     }
                     rx = ~zero & ~one;
-                    rv = op == Circuit.OR ? one : zero;
+                    rv = op == FaultCircuit.OR ? one : zero;
                     break;
                 }
                 default: {

@@ -9,14 +9,14 @@ final class Observability {
     private Observability() {
     }
 
-    static boolean[] of(Circuit c) {
+    static boolean[] of(FaultCircuit c) {
         boolean[] all = new boolean[c.lamps().size()];
         java.util.Arrays.fill(all, true);
         return of(c, all);
     }
 
-    /** As {@link #of(Circuit)}, counting only the lamps marked in {@code useful}. */
-    static boolean[] of(Circuit c, boolean[] useful) {
+    /** As {@link #of(FaultCircuit)}, counting only the lamps marked in {@code useful}. */
+    static boolean[] of(FaultCircuit c, boolean[] useful) {
         int n = c.slotCount;
         int[][] readers = new int[n][];
         int[] count = new int[n];

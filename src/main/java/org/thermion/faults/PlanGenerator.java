@@ -20,7 +20,7 @@ public final class PlanGenerator {
     private final FaultSimulator sim;
     private final FaultList faults;
     private final Effort effort;
-    private final Circuit c;
+    private final FaultCircuit c;
     private final List<boolean[]> settings;
     private final boolean allSettings;
     private final boolean sequential;

@@ -58,7 +58,7 @@ final class StateSearch {
     }
 
     private Result search(Fault fault, LaneMachine good, int gl, LaneMachine faulty, int fl, long[] seen0, long[] seen1) {
-        Circuit c = sim.circuit();
+        FaultCircuit c = sim.circuit();
         LaneMachine g = sim.machine();
         LaneMachine b = sim.machine();
         for (Force f : fault.forces()) {
@@ -175,9 +175,9 @@ final class StateSearch {
     }
 
     /** Lanes where a lamp is known in both machines and differs. */
-    static long differs(Circuit c, LaneMachine g, LaneMachine b) {
+    static long differs(FaultCircuit c, LaneMachine g, LaneMachine b) {
         long d = 0L;
-        for (Lamp l : c.lamps()) {
+        for (ObservedLamp l : c.lamps()) {
             int s = l.slot();
             d |= (g.v[s] ^ b.v[s]) & ~g.x[s] & ~b.x[s];
         }
@@ -185,9 +185,9 @@ final class StateSearch {
     }
 
     /** Lanes where a lamp is known in the good machine and unknown in the faulty one. */
-    static long blurs(Circuit c, LaneMachine g, LaneMachine b) {
+    static long blurs(FaultCircuit c, LaneMachine g, LaneMachine b) {
         long d = 0L;
-        for (Lamp l : c.lamps()) {
+        for (ObservedLamp l : c.lamps()) {
             d |= ~g.x[l.slot()] & b.x[l.slot()];
         }
         return d;

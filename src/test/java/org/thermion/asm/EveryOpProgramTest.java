@@ -27,7 +27,7 @@ class EveryOpProgramTest {
 
     @Test
     void computesWhatItsHeaderSays() {
-        Level l = new Level.Isa(m, rom);
+        RunLevel l = new RunLevel.Isa(m, rom);
         boolean carry = false;
         int[][] inputs = {{0, 0}, {1, 1}, {1, 0}, {0, 1}, {1, 1}, {1, 1}, {0, 0}};
         for (int[] in : inputs) {
@@ -56,11 +56,11 @@ class EveryOpProgramTest {
     @Test
     @Timeout(10)
     void logicLevelHoldsTheSameStateAfterEveryInstruction() {
-        Level isa = new Level.Isa(m, rom);
-        Level logic = new Level.Logic(m, rom);
+        RunLevel isa = new RunLevel.Isa(m, rom);
+        RunLevel logic = new RunLevel.Logic(m, rom);
         for (int k = 0; k < 12 * PASS; k++) {
             boolean a = (k / 7) % 2 == 1, b = (k / 11) % 3 == 1;
-            for (Level l : new Level[] {isa, logic}) {
+            for (RunLevel l : new RunLevel[] {isa, logic}) {
                 l.input("in_a", a);
                 l.input("in_b", b);
                 l.step();

@@ -48,15 +48,15 @@ class PumpProgramTest {
         rom = Assembler.assemble(m, Path.of("programs", "pump.asm"), new Diagnostics()).words();
     }
 
-    static void inputs(Level l, int low, int high, int manual) {
+    static void inputs(RunLevel l, int low, int high, int manual) {
         l.input("low_sw", low == 1);
         l.input("high_sw", high == 1);
         l.input("manual", manual == 1);
     }
 
-    static void checkTable(BiFunction<Machine, long[], Level> make) {
+    static void checkTable(BiFunction<Machine, long[], RunLevel> make) {
         for (int[] row : TABLE) {
-            Level l = make.apply(m, rom);
+            RunLevel l = make.apply(m, rom);
             // Bring the run request to the row's starting value: empty tank sets it, full clears it.
             if (row[0] == 1) {
                 inputs(l, 0, 0, 0);
@@ -76,12 +76,12 @@ class PumpProgramTest {
 
     @Test
     void followsTheTruthTableAtTheIsaLevel() {
-        checkTable(Level.Isa::new);
+        checkTable(RunLevel.Isa::new);
     }
 
     @Test
     void followsTheTruthTableAtTheLogicLevel() {
-        checkTable(Level.Logic::new);
+        checkTable(RunLevel.Logic::new);
     }
 
     /**
@@ -89,7 +89,7 @@ class PumpProgramTest {
      * above 20, the high one above 80. The level must swing between the switches, and both
      * levels must switch the outputs on the same cycles.
      */
-    static Level tank(Level l) {
+    static RunLevel tank(RunLevel l) {
         int level = 50;
         int min = 100, max = 0, starts = 0;
         boolean wasOn = false;
@@ -115,8 +115,8 @@ class PumpProgramTest {
     @Test
     @Timeout(20)
     void tankSwingsBetweenTheSwitchesWithTheSameOutputChangesOnBothLevels() {
-        Level ref = tank(new Level.Isa(m, rom));
-        Level logic = tank(new Level.Logic(m, rom));
+        RunLevel ref = tank(new RunLevel.Isa(m, rom));
+        RunLevel logic = tank(new RunLevel.Logic(m, rom));
         assertThat(logic.changes).containsExactlyElementsOf(ref.changes);
         assertThat(ref.changes).hasSizeGreaterThan(6);
     }

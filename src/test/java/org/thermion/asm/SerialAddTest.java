@@ -29,7 +29,7 @@ class SerialAddTest {
     }
 
     /** Runs the protocol on a level; returns it with its recorded output changes. */
-    static Level present(Level l) {
+    static RunLevel present(RunLevel l) {
         SplittableRandom rng = new SplittableRandom(42);
         for (int a = 0; a < 16; a++) {
             for (int b = 0; b < 16; b++) {
@@ -55,7 +55,7 @@ class SerialAddTest {
         return l;
     }
 
-    private static void waitFor(Level l, String output, boolean value, SplittableRandom rng) {
+    private static void waitFor(RunLevel l, String output, boolean value, SplittableRandom rng) {
         long start = l.cycle();
         while (l.output(output) != value) {
             l.step();
@@ -64,22 +64,22 @@ class SerialAddTest {
         pause(l, rng);
     }
 
-    private static void pause(Level l, SplittableRandom rng) {
+    private static void pause(RunLevel l, SplittableRandom rng) {
         l.steps(rng.nextInt(4));
     }
 
     @Test
     @Timeout(10)
     void addsAllPairsAtTheIsaLevel() {
-        Level l = present(new Level.Isa(m, rom));
+        RunLevel l = present(new RunLevel.Isa(m, rom));
         assertThat(l.changes).isNotEmpty();
     }
 
     @Test
     @Timeout(30)
     void logicLevelMakesTheSameOutputChangesOnTheSameCycles() {
-        Level ref = present(new Level.Isa(m, rom));
-        Level logic = present(new Level.Logic(m, rom));
+        RunLevel ref = present(new RunLevel.Isa(m, rom));
+        RunLevel logic = present(new RunLevel.Logic(m, rom));
         assertThat(logic.changes).containsExactlyElementsOf(ref.changes);
     }
 }

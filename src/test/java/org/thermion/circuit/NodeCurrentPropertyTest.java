@@ -18,7 +18,7 @@ class NodeCurrentPropertyTest {
 
     @Test
     void kirchhoffHoldsAtEverySolvedPoint() {
-        long seed = Long.getLong("circuit.seed", System.nanoTime());
+        long seed = Long.getLong("circuit.seed", 20261203L); // fixed so CI is repeatable; vary it with -Dcircuit.seed
         System.out.println("NodeCurrentPropertyTest seed " + seed + " (replay with -Dcircuit.seed=" + seed + ")");
         Random rnd = new Random(seed);
         int solved = 0;

@@ -28,7 +28,7 @@ class DiagnosisTest {
 
     @Test
     void c17ExtendedPlanLeavesNoClassAboveThreeAndRanksEverySeededFaultFirst() {
-        Circuit c = Circuit.of(Bench.c17());
+        FaultCircuit c = FaultCircuit.of(Bench.c17());
         FaultList faults = FaultList.of(c);
         try (FaultSimulator sim = new FaultSimulator(c, null, 2)) {
             Plan plan = new PlanGenerator(sim, faults, Effort.DEFAULT).generate();
@@ -43,7 +43,7 @@ class DiagnosisTest {
     @Test
     void demoDiagnosisRanksEverySeededDetectableFaultFirst() {
         Machine demo = Bench.demo();
-        Circuit c = Circuit.of(demo);
+        FaultCircuit c = FaultCircuit.of(demo);
         FaultList faults = FaultList.of(c);
         try (FaultSimulator sim = new FaultSimulator(c, Bench.demoRom(demo), 2)) {
             Plan plan = new PlanGenerator(sim, faults, Effort.DEFAULT).generate();
@@ -58,7 +58,7 @@ class DiagnosisTest {
 
     @Test
     void aStuckLampWithHalfTheObservationsMissingStillRanksFirstAndTheNextStepSplitsTheTies() {
-        Circuit c = Circuit.of(Bench.c17());
+        FaultCircuit c = FaultCircuit.of(Bench.c17());
         FaultList faults = FaultList.of(c);
         try (FaultSimulator sim = new FaultSimulator(c, null, 1)) {
             Plan plan = new PlanGenerator(sim, faults, Effort.DEFAULT).generate();

@@ -36,7 +36,7 @@ class FaultFiguresTest {
     void demo() {
         Machine demo = Bench.demo();
         long[] rom = Bench.demoRom(demo);
-        Circuit c = Circuit.of(demo);
+        FaultCircuit c = FaultCircuit.of(demo);
         FaultList faults = FaultList.of(c);
         System.out.printf("FIGURE demo faults: %d stuck-at, %d collapsed (%d after dominance), %d all, %d collapsed all%n",
                 faults.stuckAtCount(), faults.stuckAtCollapsedCount(), faults.stuckAtTargetCount(), faults.all().size(),
@@ -69,7 +69,7 @@ class FaultFiguresTest {
         SyntheticMachine s = SyntheticMachine.ofSize(10_000);
         Machine m = timed("synthetic 10^4 elaboration", () -> Bench.text(s.text()));
         long[] rom = Bench.rom(m, s.program());
-        Circuit c = Circuit.of(m);
+        FaultCircuit c = FaultCircuit.of(m);
         FaultList faults = FaultList.of(c);
         System.out.printf("FIGURE synthetic: %d stages, %d slots, %d stuck-at, %d collapsed%n",
                 m.stageInstanceCount(), c.slotCount(), faults.stuckAtCount(), faults.stuckAtCollapsedCount());

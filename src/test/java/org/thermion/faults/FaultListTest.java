@@ -11,7 +11,7 @@ class FaultListTest {
     void c17HasThirtyFourStuckAtFaultsAndTwentyTwoAfterEquivalenceCollapsing() {
         // Brglez & Fujiwara 1985 (ISCAS-85 c17); counts as given in REFERENCES.md:
         // 17 lines (5 inputs, 6 gate outputs, 6 fan-out branches of nets 3, 11 and 16).
-        FaultList faults = FaultList.of(Circuit.of(Bench.c17()));
+        FaultList faults = FaultList.of(FaultCircuit.of(Bench.c17()));
         assertThat(faults.stuckAtCount()).isEqualTo(34);
         assertThat(faults.stuckAtCollapsedCount()).isEqualTo(22);
         assertThat(faults.stuckAtTargetCount()).isLessThan(22);
@@ -20,7 +20,7 @@ class FaultListTest {
     @Test
     void c17ListsSixDeadTubesThreeOpenHeaterStringsAndTwoBurntLamps() {
         // Six 6AU6 pentodes in series pairs on the 12.6 V supply; lamps are the two outputs.
-        FaultList faults = FaultList.of(Circuit.of(Bench.c17()));
+        FaultList faults = FaultList.of(FaultCircuit.of(Bench.c17()));
         assertThat(faults.all().stream().filter(f -> f.kind() == FaultKind.DEAD_ENVELOPE)).hasSize(6);
         assertThat(faults.all().stream().filter(f -> f.kind() == FaultKind.OPEN_HEATER)).hasSize(3);
         assertThat(faults.all().stream().filter(f -> f.kind() == FaultKind.LAMP_BURNT)).hasSize(2);
@@ -35,7 +35,7 @@ class FaultListTest {
     @Test
     void demoDeadFlipFlopHoldsBothOutputsHighAndTheRelayCanStayOpen() {
         Machine demo = Bench.demo();
-        FaultList faults = FaultList.of(Circuit.of(demo));
+        FaultList faults = FaultList.of(FaultCircuit.of(demo));
         assertThat(faults.all().stream().filter(f -> f.kind() == FaultKind.RELAY_OPEN)).hasSize(1);
         int acc = java.util.Arrays.asList(demo.netlist().netNames()).indexOf("acc");
         Fault deadAcc = faults.all().stream().filter(f -> f.kind() == FaultKind.DEAD_ENVELOPE)

@@ -13,7 +13,7 @@ class FaultSimulatorTest {
 
     /** Every fault's lamps, every step, from the fast simulator and from the one-at-a-time reference. */
     private static void assertAgree(Machine m, long[] rom, List<Step> steps, String what) {
-        Circuit c = Circuit.of(m);
+        FaultCircuit c = FaultCircuit.of(m);
         List<Fault> faults = FaultList.of(c).all();
         OneFaultSimulator ref = new OneFaultSimulator(c, rom);
         try (FaultSimulator fast = new FaultSimulator(c, rom, 2)) {

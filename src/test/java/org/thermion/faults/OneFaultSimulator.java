@@ -17,11 +17,11 @@ import java.util.List;
 final class OneFaultSimulator {
     private static final byte X = FaultSimulator.UNKNOWN;
 
-    private final Circuit c;
+    private final FaultCircuit c;
     private final Machine m;
     private final long[] rom;
 
-    OneFaultSimulator(Circuit c, long[] rom) {
+    OneFaultSimulator(FaultCircuit c, long[] rom) {
         this.c = c;
         this.m = c.machine();
         this.rom = rom == null ? new long[0] : rom;
@@ -43,7 +43,7 @@ final class OneFaultSimulator {
             }
             r.settle();
             for (int i = 0; i < lamps; i++) {
-                Lamp lamp = c.lamps().get(i);
+                ObservedLamp lamp = c.lamps().get(i);
                 out[s * lamps + i] = r.pin(Site.Place.LAMP, i, 0, lamp.net());
             }
         }

@@ -10,7 +10,7 @@ class PlanGeneratorTest {
     @Test
     void c17PlanDetectsAllTwentyTwoCollapsedFaultsInAtMostFiveSteps() {
         // Brglez & Fujiwara 1985 (c17): all 22 collapsed stuck-at faults detectable, four vectors suffice.
-        Circuit c = Circuit.of(Bench.c17());
+        FaultCircuit c = FaultCircuit.of(Bench.c17());
         FaultList faults = FaultList.of(c);
         try (FaultSimulator sim = new FaultSimulator(c, null, 2)) {
             Plan plan = new PlanGenerator(sim, faults, Effort.DEFAULT).generate();
@@ -33,7 +33,7 @@ class PlanGeneratorTest {
     @Test
     void demoPlanClassifiesEveryFault() {
         Machine demo = Bench.demo();
-        Circuit c = Circuit.of(demo);
+        FaultCircuit c = FaultCircuit.of(demo);
         FaultList faults = FaultList.of(c);
         try (FaultSimulator sim = new FaultSimulator(c, Bench.demoRom(demo), 2)) {
             long t0 = System.nanoTime();

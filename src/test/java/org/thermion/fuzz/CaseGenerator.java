@@ -63,7 +63,7 @@ final class CaseGenerator {
     FuzzCase make(long seed) {
         Random rnd = new Random(seed);
         Map<String, byte[]> files = new LinkedHashMap<>(originals);
-        Mutator mutator = new Mutator(rnd);
+        InputMutator mutator = new InputMutator(rnd);
         String shape;
         int pick = rnd.nextInt(10);
         if (pick < 6) {

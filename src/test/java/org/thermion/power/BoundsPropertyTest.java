@@ -23,7 +23,7 @@ class BoundsPropertyTest {
     @Test
     @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void simulatedCurrentsStayWithinTheStaticBounds() {
-        Machine m = Machines.file(Path.of("examples/pumpstation/pumpstation.machine"));
+        Machine m = PowerMachines.file(Path.of("examples/pumpstation/pumpstation.machine"));
         for (long seed = 1; seed <= 6; seed++) {
             Random rnd = new Random(seed);
             long[] rom = new long[m.rom().words()];

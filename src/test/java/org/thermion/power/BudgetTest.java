@@ -12,7 +12,7 @@ class BudgetTest {
     void theBypassThyratronHoldsItsRelayOnceRunning() {
         // thyratron_relay: draw high relay 75 mA; once fired it conducts, so lowest = highest = 75 mA.
         // Its plate dissipation is the arc drop times the current: 8 V (from memory) x 75 mA = 0.6 W.
-        Machine m = Machines.of(HeaterAnalysisTest.LONE_THYRATRON);
+        Machine m = PowerMachines.of(HeaterAnalysisTest.LONE_THYRATRON);
         Budget b = new Budget(m);
         int relay = m.railIndex("relay");
         int soft = m.modules().stream().filter(x -> x.type().equals("softstart")).findFirst().orElseThrow().id();
@@ -25,7 +25,7 @@ class BudgetTest {
     @Test
     void staticBoundsAddEachInstancesOwnExtremes() {
         // two pentode_inverter stages: each 0.05 mA (cut off) to 2.4 mA (conducting) from bplus, 0.2 mA bias always
-        Machine m = Machines.of(HeaterAnalysisTest.LONE_THYRATRON);
+        Machine m = PowerMachines.of(HeaterAnalysisTest.LONE_THYRATRON);
         Budget b = new Budget(m);
         int bplus = m.railIndex("bplus");
         int bias = m.railIndex("bias");

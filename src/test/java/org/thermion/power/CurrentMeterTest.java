@@ -43,7 +43,7 @@ class CurrentMeterTest {
 
     @Test
     void stageDrawAddsAlwaysToTheStateDraw() {
-        Machine m = Machines.of(SMALL);
+        Machine m = PowerMachines.of(SMALL);
         var inv = m.stages().stream().filter(s -> s.name().equals("pentode_inverter")).findFirst().orElseThrow();
         int bplus = m.railIndex("bplus");
         int bias = m.railIndex("bias");
@@ -55,12 +55,12 @@ class CurrentMeterTest {
 
     @Test
     void meterFollowsTheOutputNetsPhaseByPhase() {
-        Machine m = Machines.of(SMALL);
+        Machine m = PowerMachines.of(SMALL);
         int bplus = m.railIndex("bplus");
         int bias = m.railIndex("bias");
         Map<Integer, Long> nets = new HashMap<>();
-        int n = Machines.net(m, "n");
-        int y = Machines.net(m, "y");
+        int n = PowerMachines.net(m, "n");
+        int y = PowerMachines.net(m, "y");
         CurrentMeter meter = new CurrentMeter(m);
         assertThat(meter.peakRail(bplus)).isNaN();
 

@@ -114,7 +114,7 @@ class HeaterAnalysisTest {
     @Test
     void fourSixVoltHeatersOnTwentyFourVoltsGetSixVoltsEach() {
         // 24 V / 4 = 6.0 V; 6.0 / 6.3 - 1 = -4.76 %, inside the +-10 % band
-        HeaterAnalysis h = new HeaterAnalysis(Machines.of(inverters(4, 4, "24 V", "")));
+        HeaterAnalysis h = new HeaterAnalysis(PowerMachines.of(inverters(4, 4, "24 V", "")));
         assertThat(h.strings()).hasSize(1);
         HeaterAnalysis.StringResult s = h.strings().get(0);
         assertThat(s.heaters()).hasSize(4).allSatisfy(x -> {
@@ -130,7 +130,7 @@ class HeaterAnalysisTest {
     @Test
     void threeSixVoltHeatersOnTwentyFourVoltsNeedSeventeenOhms() {
         // (24 - 3 x 6.3) / 0.3 = 17 ohm; (24 - 18.9) x 0.3 = 1.53 W
-        HeaterAnalysis h = new HeaterAnalysis(Machines.of(inverters(3, 3, "24 V", "")));
+        HeaterAnalysis h = new HeaterAnalysis(PowerMachines.of(inverters(3, 3, "24 V", "")));
         HeaterAnalysis.StringResult s = h.strings().get(0);
         assertThat(s.heaters()).allSatisfy(x -> assertThat(x.volts()).isCloseTo(8.0, within(1e-9)));
         assertThat(s.suggestion().ohms()).isCloseTo(17.0, within(1e-9));
@@ -143,7 +143,7 @@ class HeaterAnalysisTest {
 
     @Test
     void theSuggestedDropperBringsTheStringToItsRating() {
-        HeaterAnalysis h = new HeaterAnalysis(Machines.of(inverters(3, 3, "24 V", "drop 17 ohm")));
+        HeaterAnalysis h = new HeaterAnalysis(PowerMachines.of(inverters(3, 3, "24 V", "drop 17 ohm")));
         HeaterAnalysis.StringResult s = h.strings().get(0);
         assertThat(s.amps()).isCloseTo(0.3, within(1e-9));
         assertThat(s.heaters()).allSatisfy(x -> assertThat(x.volts()).isCloseTo(6.3, within(1e-9)));
@@ -154,7 +154,7 @@ class HeaterAnalysisTest {
     @Test
     void aLongStringIsUnderRunAndWarned() {
         // five on 24 V: 4.8 V each, -23.8 %
-        HeaterAnalysis h = new HeaterAnalysis(Machines.of(inverters(5, 5, "24 V", "")));
+        HeaterAnalysis h = new HeaterAnalysis(PowerMachines.of(inverters(5, 5, "24 V", "")));
         HeaterAnalysis.StringResult s = h.strings().get(0);
         assertThat(s.heaters().get(0).volts()).isCloseTo(4.8, within(1e-9));
         assertThat(s.findings()).hasSize(5).allSatisfy(f -> assertThat(f.severity()).isEqualTo(Finding.Severity.WARNING));
@@ -164,7 +164,7 @@ class HeaterAnalysisTest {
     @Test
     void aPointThreeAmpHeaterInAPointFourFiveAmpStringNeedsFortyTwoOhms() {
         // 6.3 V / (0.45 - 0.3) A = 42 ohm; with it the 6AU6 looks like 14 ohm, as the 6J6
-        Machine m = Machines.of(mixed("shunt"));
+        Machine m = PowerMachines.of(mixed("shunt"));
         HeaterAnalysis.StringResult s = new HeaterAnalysis(m).strings().get(0);
         assertThat(s.mixed()).isTrue();
         assertThat(s.amps()).isCloseTo(0.45, within(1e-9));
@@ -185,7 +185,7 @@ class HeaterAnalysisTest {
     @Test
     void mixedCurrentsWithoutShuntAreAnErrorAndTheSmallHeaterIsOverdriven() {
         // 12.6 V across 21 + 14 ohm = 0.36 A: the 6AU6 gets 7.56 V (+20 %), the 6J6 5.04 V (-20 %)
-        HeaterAnalysis.StringResult s = new HeaterAnalysis(Machines.of(mixed(""))).strings().get(0);
+        HeaterAnalysis.StringResult s = new HeaterAnalysis(PowerMachines.of(mixed(""))).strings().get(0);
         assertThat(s.amps()).isCloseTo(0.36, within(1e-9));
         assertThat(s.heaters().stream().mapToDouble(HeaterAnalysis.Heater::volts).max().orElseThrow())
                 .isCloseTo(7.56, within(1e-9));
@@ -197,7 +197,7 @@ class HeaterAnalysisTest {
     @Test
     void ninetyTwoTubesInStringsOfFourDrawSixPointNineAmps() {
         // 92 / 4 = 23 strings, each 0.3 A at rated voltage (4 x 6.3 = 25.2 V): 23 x 0.3 = 6.9 A
-        Machine m = Machines.of(inverters(92, 4, "25.2 V", ""));
+        Machine m = PowerMachines.of(inverters(92, 4, "25.2 V", ""));
         HeaterAnalysis h = new HeaterAnalysis(m);
         int heat = m.railIndex("heat");
         assertThat(h.strings()).hasSize(23);
@@ -210,7 +210,7 @@ class HeaterAnalysisTest {
     @Test
     void aStringAcrossModulesChargesEachModuleItsShare() {
         // two 6AU6 in series on 12.6 V: 0.3 A through both; each module carries half the rail current
-        Machine m = Machines.of("""
+        Machine m = PowerMachines.of("""
                 rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
                 rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
                 rail heat  { voltage 12.6 V; source 0.01 ohm; limit 10 A }
@@ -256,7 +256,7 @@ class HeaterAnalysisTest {
         // the demo's heater rules: 2D21 heaters (6.3 V 0.6 A, vacuumtubes.io 2D21W page) strung in pairs on
         // 12.6 V, but the machine has one 2D21 (its soft-start thyratron), which then gets 12.6 V (+100 %);
         // dropper (12.6 - 6.3) / 0.6 = 10.5 ohm, (12.6 - 6.3) x 0.6 = 3.78 W
-        Machine m = Machines.of(LONE_THYRATRON);
+        Machine m = PowerMachines.of(LONE_THYRATRON);
         HeaterAnalysis h = new HeaterAnalysis(m);
         HeaterAnalysis.StringResult lone = h.strings().stream()
                 .filter(s -> m.tubes().get(s.heaters().get(0).tube()).name().equals("2D21"))
@@ -278,7 +278,7 @@ class HeaterAnalysisTest {
     @Test
     void followingTheAdviceFixesTheLoneThyratron() {
         // `rest drop 10.5 ohm` gives the shorter last string its own dropper: 12.6 V / (10.5 + 10.5) ohm = 0.6 A
-        Machine m = Machines.of(LONE_THYRATRON.replace("series 2 of 2D21 across machine",
+        Machine m = PowerMachines.of(LONE_THYRATRON.replace("series 2 of 2D21 across machine",
                 "series 2 of 2D21 across machine rest drop 10.5 ohm"));
         HeaterAnalysis h = new HeaterAnalysis(m);
         HeaterAnalysis.StringResult lone = h.strings().stream()

@@ -49,7 +49,7 @@ class MeteredRunTest {
 
     @Test
     void currentFollowsTheConductingInvertersWordByWord() {
-        Machine m = Machines.of(rommed("800 mA"));
+        Machine m = PowerMachines.of(rommed("800 mA"));
         int bplus = m.railIndex("bplus");
         int bias = m.railIndex("bias");
         // words 00, 01, 11, 10: 0, 1, 2, 1 inverters conducting (an input high drives its output low)
@@ -73,7 +73,7 @@ class MeteredRunTest {
 
     @Test
     void staticBoundsAndSupplyCheck() {
-        Machine m = Machines.of(rommed("800 mA"));
+        Machine m = PowerMachines.of(rommed("800 mA"));
         int bplus = m.railIndex("bplus");
         int heat = m.railIndex("heat");
         Budget b = new Budget(m);
@@ -88,7 +88,7 @@ class MeteredRunTest {
 
     @Test
     void aRailOverItsLimitFailsTheCheck() {
-        Machine m = Machines.of(rommed("5 mA"));
+        Machine m = PowerMachines.of(rommed("5 mA"));
         Budget b = new Budget(m, CurrentMeter.ofRun(m, new long[] {0b00, 0b01, 0b11, 0b10}, null, 4, new InitMode.Zero()));
         Budget.Supply s = b.supply().get(m.railIndex("bplus"));
         assertThat(s.simulated()).isTrue();
@@ -104,7 +104,7 @@ class MeteredRunTest {
     @Test
     void aProgramThatStaysLowPassesButTheWorstCaseIsWarned() {
         // 00 and 01 only: peak 5.65 mA under a 7 mA limit, while all-high would be 8 mA
-        Machine m = Machines.of(rommed("7 mA"));
+        Machine m = PowerMachines.of(rommed("7 mA"));
         Budget b = new Budget(m, CurrentMeter.ofRun(m, new long[] {0b00, 0b01, 0b01, 0b00}, null, 4, new InitMode.Zero()));
         assertThat(b.failed()).isFalse();
         assertThat(b.findings()).singleElement().satisfies(f -> {
@@ -115,7 +115,7 @@ class MeteredRunTest {
 
     @Test
     void plateDissipationFollowsTheStatedApproximation() {
-        Machine m = Machines.of(rommed("800 mA"));
+        Machine m = PowerMachines.of(rommed("800 mA"));
         var inv = m.stages().stream().filter(s -> s.name().equals("pentode_inverter")).findFirst().orElseThrow();
         // conducting: 2.4 mA; 48 V - 2.4 mA x 22 k is below 2.4 mA x 4.4 k (ron) = 10.56 V: 25.3 mW
         assertThat(PlateDissipation.watts(m, inv, false)).isCloseTo(2.4e-3 * 2.4e-3 * 4.4e3, within(1e-12));

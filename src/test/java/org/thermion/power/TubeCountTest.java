@@ -9,7 +9,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 class TubeCountTest {
     @Test
     void aLoneCathodeFollowerLeavesHalfATwinTriodeSpare() {
-        Machine m = Machines.of("""
+        Machine m = PowerMachines.of("""
                 rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
                 rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
                 rail heat  { voltage 12.6 V; source 0.01 ohm; limit 10 A }
@@ -52,7 +52,7 @@ class TubeCountTest {
 
     @Test
     void theDemoCountMatchesItsModules() throws Exception {
-        Machine m = Machines.file(java.nio.file.Path.of("examples/pumpstation/pumpstation.machine"));
+        Machine m = PowerMachines.file(java.nio.file.Path.of("examples/pumpstation/pumpstation.machine"));
         TubeCount c = new TubeCount(m);
         assertThat(c.total()).isEqualTo(m.envelopes().size());
         assertThat(c.byModule().stream().mapToInt(TubeCount.Row::envelopes).sum()).isEqualTo(c.total());

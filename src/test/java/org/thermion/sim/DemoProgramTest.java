@@ -4,7 +4,7 @@ import org.junit.jupiter.api.Test;
 import org.thermion.model.Machine;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.thermion.sim.Machines.word;
+import static org.thermion.sim.SimMachines.word;
 
 /** The demo machine running hand-encoded words (opcodes from its ISA block). */
 class DemoProgramTest {
@@ -12,7 +12,7 @@ class DemoProgramTest {
 
     @Test
     void loadStoreCopiesAnInputToAnOutputPerLane() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         Simulator sim = new Simulator(m);
         // 0: LD low_sw   1: ST pump   2: JMP 0
         sim.loadRom(new long[] {word(LD, 0), word(ST, 8), word(JMP, 0)});
@@ -20,7 +20,7 @@ class DemoProgramTest {
         sim.setInput(sim.inputIndex("low_sw"), odd);
         sim.stepCycle();
         sim.stepCycle();
-        int pump = Machines.net(m, "pump");
+        int pump = SimMachines.net(m, "pump");
         assertThat(sim.value(pump)).isEqualTo(odd);
         assertThat(sim.pc(0)).isEqualTo(2);
         sim.stepCycle();
@@ -30,7 +30,7 @@ class DemoProgramTest {
 
     @Test
     void conditionalJumpTakesTheTargetOnlyOnLanesWhereTheAccumulatorIsOne() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         Simulator sim = new Simulator(m);
         // 0: LD manual   1: JMPC 0x40   2: LDN manual ... 0x40: JMP 0x40
         long[] rom = new long[256];
@@ -50,7 +50,7 @@ class DemoProgramTest {
         }
         // The lanes now run different words; the ROM is read per lane.
         sim.stepCycle();
-        int acc = Machines.net(m, "acc");
+        int acc = SimMachines.net(m, "acc");
         for (int lane = 0; lane < 64; lane++) {
             boolean taken = (lanes >>> lane & 1) == 1;
             assertThat(sim.pc(lane)).isEqualTo(taken ? 0x40 : 3);
@@ -61,7 +61,7 @@ class DemoProgramTest {
 
     @Test
     void pcWrapsAroundItsWidth() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         Simulator sim = new Simulator(m);
         sim.loadRom(new long[256]);
         sim.setPc(0, 255);
@@ -74,7 +74,7 @@ class DemoProgramTest {
 
     @Test
     void aJumpOnAnUnsetAccumulatorMakesThePcUnknown() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         Simulator sim = new Simulator(m);
         // 0: JMPC 0x10 with acc never loaded.
         sim.loadRom(new long[] {word(JMPC, 0x10)});
@@ -90,12 +90,12 @@ class DemoProgramTest {
 
     @Test
     void aStoreOfAKnownValueClearsTheUnknownOutput() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         Simulator sim = new Simulator(m);
         // 0: LD high_sw (known input)   1: ST alarm
         sim.loadRom(new long[] {word(LD, 1), word(ST, 9)});
         sim.reset(new InitMode.Unknown());
-        int alarm = Machines.net(m, "alarm");
+        int alarm = SimMachines.net(m, "alarm");
         assertThat(sim.unknown(alarm)).isEqualTo(-1L);
         sim.setInput("high_sw", true);
         sim.stepCycle();

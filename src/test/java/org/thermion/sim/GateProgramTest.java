@@ -28,7 +28,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 public class GateProgramTest {
     @Test
     void demoSettlesLikeTheNetlistOrder() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         GateProgram p = new GateProgram(m.netlist());
         assertTrue(p.regrouped, "the demo's netlist is levelized, so its gates may be regrouped");
         assertTrue(p.runs() < m.netlist().gates().size() / 2, "runs " + p.runs() + " gather several gates each");
@@ -37,7 +37,7 @@ public class GateProgramTest {
 
     @Test
     void renumberingIsAPermutationWithTheLeadingNetsFirst() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         int nets = m.netlist().netCount();
         int[] data = m.rom().dataNets();
         int[] leading = {Netlist.CONST0, Netlist.CONST1, data[3], data[0]};

@@ -24,7 +24,7 @@ class LogicVersusIsaTest {
     @Test
     @Timeout(value = 60, unit = TimeUnit.SECONDS)
     void sixtyFourProgramsPerRunOneOnEachLane() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         SplittableRandom rng = new SplittableRandom(SEED);
         // 16 runs x 64 lanes = 1024 random programs.
         for (int run = 0; run < 16; run++) {
@@ -51,7 +51,7 @@ class LogicVersusIsaTest {
     }
 
     private static void sharedProgram(long seed, String what, int alike) {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         SplittableRandom rng = new SplittableRandom(seed);
         for (int run = 0; run < 8; run++) {
             long[] rom = randomRom(m, rng);

@@ -8,19 +8,19 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 /** Finding nets of the demo machine by the names the netlist gives them. */
 class NetLookupTest {
-    static final Machine DEMO = Machines.demo();
+    static final Machine DEMO = SimMachines.demo();
     final NetLookup lookup = new NetLookup(DEMO);
 
     @Test
     void singleNetsBusBitsAndWholeBuses() {
-        assertThat(lookup.resolve("acc")).containsExactly(Machines.net(DEMO, "acc"));
-        assertThat(lookup.resolve("line[3]")).containsExactly(Machines.net(DEMO, "line[3]"));
+        assertThat(lookup.resolve("acc")).containsExactly(SimMachines.net(DEMO, "acc"));
+        assertThat(lookup.resolve("line[3]")).containsExactly(SimMachines.net(DEMO, "line[3]"));
         String inner = VcdWriterTest.innerBusBit(DEMO);
-        assertThat(lookup.resolve(inner)).containsExactly(Machines.net(DEMO, inner));
-        assertThat(lookup.resolve("line")).hasSize(16).startsWith(Machines.net(DEMO, "line[0]"))
-                .endsWith(Machines.net(DEMO, "line[15]"));
+        assertThat(lookup.resolve(inner)).containsExactly(SimMachines.net(DEMO, inner));
+        assertThat(lookup.resolve("line")).hasSize(16).startsWith(SimMachines.net(DEMO, "line[0]"))
+                .endsWith(SimMachines.net(DEMO, "line[15]"));
         // A bus sorts by bit index, not by name: line[10] comes after line[9].
-        assertThat(lookup.resolve("line").get(10)).isEqualTo(Machines.net(DEMO, "line[10]"));
+        assertThat(lookup.resolve("line").get(10)).isEqualTo(SimMachines.net(DEMO, "line[10]"));
     }
 
     @Test

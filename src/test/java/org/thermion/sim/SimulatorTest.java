@@ -34,16 +34,16 @@ class SimulatorTest {
             """;
 
     private static long v(Simulator s, Machine m, String net) {
-        return s.value(Machines.net(m, net));
+        return s.value(SimMachines.net(m, net));
     }
 
     private static long x(Simulator s, Machine m, String net) {
-        return s.unknown(Machines.net(m, net));
+        return s.unknown(SimMachines.net(m, net));
     }
 
     @Test
     void gatesComputeTheirFunctionsOnEveryLaneIndependently() {
-        Machine m = Machines.fromText(GATES);
+        Machine m = SimMachines.fromText(GATES);
         Simulator s = new Simulator(m);
         SplittableRandom r = new SplittableRandom(7);
         for (int round = 0; round < 20; round++) {
@@ -76,7 +76,7 @@ class SimulatorTest {
 
     @Test
     void latchesLoadOnlyOnTheirPhaseAndOnlyWhenEnabled() {
-        Machine m = Machines.fromText(GATES);
+        Machine m = SimMachines.fromText(GATES);
         Simulator s = new Simulator(m);
         long d = 0xF0F0L;
         long en = 0xFF00L;
@@ -128,7 +128,7 @@ class SimulatorTest {
                   outputs y_and y_or y_nand y_nor y_xor y_not y_buf
                 }
                 """;
-        Machine t = Machines.fromText(text);
+        Machine t = SimMachines.fromText(text);
         Simulator u = new Simulator(t);
         u.reset(new InitMode.Unknown());
         // value per lane: 0, 1, 2 = X; lane = 3 * a + b
@@ -163,7 +163,7 @@ class SimulatorTest {
     }
 
     private static String table(Simulator s, Machine m, String net) {
-        int n = Machines.net(m, net);
+        int n = SimMachines.net(m, net);
         StringBuilder sb = new StringBuilder();
         for (int lane = 0; lane < 9; lane++) {
             if (lane > 0 && lane % 3 == 0) {
@@ -194,11 +194,11 @@ class SimulatorTest {
                   outputs q
                 }
                 """;
-        Machine m = Machines.fromText(text);
+        Machine m = SimMachines.fromText(text);
         Simulator sim = new Simulator(m);
         sim.reset(new InitMode.Unknown());
-        int q = Machines.net(m, "q");
-        int e = Machines.net(m, "g");
+        int q = SimMachines.net(m, "q");
+        int e = SimMachines.net(m, "g");
         // Lane 0: q forced to a known 0, d 0, g X -> q stays 0. Lane 1: q 0, d 1, g X -> q becomes X.
         sim.setLatch(m.netlist().latches().indexOf(latchOn(m, q)), 0L);
         sim.setInput(sim.inputIndex("d"), 0b10L);
@@ -215,7 +215,7 @@ class SimulatorTest {
 
     @Test
     void randomInitIsRepeatableAndDiffersBetweenLanes() {
-        Machine m = Machines.fromText(GATES);
+        Machine m = SimMachines.fromText(GATES);
         Simulator s = new Simulator(m);
         s.reset(new InitMode.Random(42));
         long first = v(s, m, "q");

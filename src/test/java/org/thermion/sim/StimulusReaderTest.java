@@ -18,7 +18,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** Stimulus files: what a good one means, and how a bad one is reported. */
 class StimulusReaderTest {
-    static final Machine DEMO = Machines.demo();
+    static final Machine DEMO = SimMachines.demo();
 
     private static Stimulus parse(String text, Diagnostics d, SourceSet s) {
         return new StimulusReader(DEMO, s, d).parse(Path.of("stim.csv"), text);

@@ -7,7 +7,7 @@ import java.io.StringWriter;
 import java.util.List;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.thermion.sim.Machines.word;
+import static org.thermion.sim.SimMachines.word;
 
 /** The VCD of a short demo run, read back for structure and for the values it records. */
 class VcdWriterTest {
@@ -33,7 +33,7 @@ class VcdWriterTest {
 
     @Test
     void aStoreShowsAtTheEndOfItsExecutePhaseAndTheDecodeLineAtItsStart() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         // 0: LD low_sw   1: ST pump   2: JMP 2
         long[] rom = {word(0x1, 0), word(0x3, 8), word(0xD, 2)};
         VcdReader r = new VcdReader(dump(m, rom, VcdWriter.allNamedNets(m), 4, false));
@@ -78,13 +78,13 @@ class VcdWriterTest {
 
     @Test
     void unknownValuesAreDumpedAsX() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         Simulator sim = new Simulator(m);
         sim.loadRom(new long[] {word(0x0, 0)});
         sim.reset(new InitMode.Unknown());
         sim.settle();
         StringWriter w = new StringWriter();
-        VcdWriter vcd = new VcdWriter(m, List.of(Machines.net(m, "acc"), Machines.net(m, "ir[0]")), 0, w);
+        VcdWriter vcd = new VcdWriter(m, List.of(SimMachines.net(m, "acc"), SimMachines.net(m, "ir[0]")), 0, w);
         vcd.begin(sim, "d", "v");
         sim.stepPhase();
         vcd.afterPhase(sim, 0, 1);
@@ -98,7 +98,7 @@ class VcdWriterTest {
 
     @Test
     void aBusIsOneVectorWhoseBitsAreTheNetsValues() {
-        Machine m = Machines.demo();
+        Machine m = SimMachines.demo();
         // 0: LDN 6   1: ST pump   2: JMP 2; ir is the instruction register, loaded in phase 1.
         long[] rom = {word(0x2, 6), word(0x3, 8), word(0xD, 2)};
         List<Integer> ir = new NetLookup(m).resolve("ir");

@@ -6,7 +6,7 @@ import java.util.regex.Pattern;
  * A table column: its key (CSV header and JSON name, the unit's word appended), its short
  * title for text, its unit, and an optional explanation that text prints under the table.
  */
-public record Column(String key, String title, Unit unit, String explanation) {
+public record Column(String key, String title, ReportUnit unit, String explanation) {
     private static final Pattern KEY = Pattern.compile("[a-z][a-z0-9]*(_[a-z0-9]+)*");
 
     public Column {

@@ -36,11 +36,11 @@ public final class Numbers {
     }
 
     /** One value for people: three significant figures and a prefix ({@code 243 mA}, {@code 4.00 ohm}). */
-    public static String si(double v, Unit unit) {
+    public static String si(double v, ReportUnit unit) {
         if (Double.isNaN(v)) {
             return "-";
         }
-        if (unit == Unit.PERCENT) {
+        if (unit == ReportUnit.PERCENT) {
             return String.format(Locale.ROOT, "%+.1f %%", v);
         }
         if (!unit.prefixed()) {
@@ -64,7 +64,7 @@ public final class Numbers {
         return String.format(Locale.ROOT, a >= 99.95 ? "%.0f" : a >= 9.995 ? "%.1f" : "%.2f", x);
     }
 
-    private static int prefixIndex(double a, Unit unit) {
+    private static int prefixIndex(double a, ReportUnit unit) {
         if (a == 0 || Double.isNaN(a) || Double.isInfinite(a)) {
             return UNITY;
         }
@@ -75,7 +75,7 @@ public final class Numbers {
                 break;
             }
         }
-        return unit == Unit.OHMS ? Math.max(k, UNITY) : k;
+        return unit == ReportUnit.OHMS ? Math.max(k, UNITY) : k;
     }
 
     /**
@@ -83,9 +83,9 @@ public final class Numbers {
      * from its largest value), and per column as many decimals as show the largest value to
      * three significant figures and the smallest non-zero one to three, at most three.
      */
-    public record Scale(Unit unit, int prefix) {
+    public record Scale(ReportUnit unit, int prefix) {
         /** The scale for values of {@code unit} whose largest magnitude is {@code largest}. */
-        public static Scale of(Unit unit, double largest) {
+        public static Scale of(ReportUnit unit, double largest) {
             return new Scale(unit, unit.prefixed() ? prefixIndex(largest, unit) : UNITY);
         }
 
@@ -101,7 +101,7 @@ public final class Numbers {
 
         /** Decimals for a column whose scaled values span {@code largest} down to {@code smallest} (non-zero). */
         public int decimals(double largest, double smallest) {
-            if (unit == Unit.COUNT) {
+            if (unit == ReportUnit.COUNT) {
                 return 0;
             }
             int d = Math.max(digitsFor(scaled(largest), 3), digitsFor(scaled(smallest), 3));
@@ -116,10 +116,10 @@ public final class Numbers {
         }
 
         public String format(double v, int decimals) {
-            if (unit == Unit.NUMBER) {
+            if (unit == ReportUnit.NUMBER) {
                 return significant(v);
             }
-            if (unit == Unit.PERCENT) {
+            if (unit == ReportUnit.PERCENT) {
                 return String.format(Locale.ROOT, "%+." + Math.max(1, decimals) + "f", v);
             }
             return String.format(Locale.ROOT, "%." + decimals + "f", scaled(v));

@@ -51,7 +51,7 @@ public final class Report {
     }
 
     /** A named measurement: the key gets the unit's word ({@code final} in amps is {@code final_amps}). */
-    public Report field(String key, Unit unit, Object value) {
+    public Report field(String key, ReportUnit unit, Object value) {
         return field(unit.name(key), value);
     }
 

@@ -24,12 +24,12 @@ public final class Table {
         this.title = title;
     }
 
-    public Table column(String key, String title, Unit unit) {
+    public Table column(String key, String title, ReportUnit unit) {
         return column(key, title, unit, null);
     }
 
     /** Adds a column whose {@code explanation} text prints under the table. */
-    public Table column(String key, String title, Unit unit, String explanation) {
+    public Table column(String key, String title, ReportUnit unit, String explanation) {
         Column c = new Column(key, title, unit, explanation);
         if (columns.stream().anyMatch(x -> x.name().equals(c.name()))) {
             throw new IllegalArgumentException(name + ": two columns named " + c.name());
@@ -45,9 +45,9 @@ public final class Table {
         }
         for (int i = 0; i < values.length; i++) {
             Object v = values[i];
-            Unit u = columns.get(i).unit();
+            ReportUnit u = columns.get(i).unit();
             boolean fits = v == null || v instanceof Absent
-                    || (u == Unit.TEXT ? v instanceof String : u == Unit.FLAG ? v instanceof Boolean : v instanceof Number);
+                    || (u == ReportUnit.TEXT ? v instanceof String : u == ReportUnit.FLAG ? v instanceof Boolean : v instanceof Number);
             if (!fits) {
                 throw new IllegalArgumentException(name + "." + columns.get(i).name() + ": " + v.getClass().getSimpleName()
                         + " in a " + u + " column");

@@ -55,8 +55,8 @@ public final class TextWriter {
         }
     }
 
-    private static Map<Unit, Numbers.Scale> scales(Table t) {
-        Map<Unit, Double> largest = new HashMap<>();
+    private static Map<ReportUnit, Numbers.Scale> scales(Table t) {
+        Map<ReportUnit, Double> largest = new HashMap<>();
         for (Object[] r : t.rows()) {
             for (int i = 0; i < r.length; i++) {
                 if (r[i] instanceof Number n && Double.isFinite(n.doubleValue())) {
@@ -64,7 +64,7 @@ public final class TextWriter {
                 }
             }
         }
-        Map<Unit, Numbers.Scale> s = new HashMap<>();
+        Map<ReportUnit, Numbers.Scale> s = new HashMap<>();
         for (Column c : t.columns()) {
             s.put(c.unit(), Numbers.Scale.of(c.unit(), largest.getOrDefault(c.unit(), 0.0)));
         }
@@ -78,7 +78,7 @@ public final class TextWriter {
 
     private static void grid(PrintWriter out, Table t) {
         List<Column> cols = t.columns();
-        Map<Unit, Numbers.Scale> scales = scales(t);
+        Map<ReportUnit, Numbers.Scale> scales = scales(t);
         int n = cols.size();
         String[] head = new String[n];
         String[][] cells = new String[t.rows().size()][n];
@@ -137,7 +137,7 @@ public final class TextWriter {
         }
     }
 
-    private static String cell(Object v, Unit unit, Numbers.Scale s, int decimals) {
+    private static String cell(Object v, ReportUnit unit, Numbers.Scale s, int decimals) {
         if (v == null) {
             return "";
         }
@@ -149,7 +149,7 @@ public final class TextWriter {
         }
         if (v instanceof Number num) {
             if (v instanceof Integer || v instanceof Long) {
-                return unit == Unit.COUNT || unit == Unit.NUMBER ? String.valueOf(num.longValue()) : s.format(num.doubleValue(), decimals);
+                return unit == ReportUnit.COUNT || unit == ReportUnit.NUMBER ? String.valueOf(num.longValue()) : s.format(num.doubleValue(), decimals);
             }
             double d = num.doubleValue();
             return Double.isFinite(d) ? s.format(d, decimals) : "-";

@@ -20,11 +20,11 @@ class WritersTest {
 
     private static Report rails() {
         Table t = new Table("rails", "rails")
-                .column("rail", "rail", Unit.TEXT)
-                .column("peak", "peak", Unit.AMPS, "the highest current")
-                .column("nominal", "nominal", Unit.VOLTS);
+                .column("rail", "rail", ReportUnit.TEXT)
+                .column("peak", "peak", ReportUnit.AMPS, "the highest current")
+                .column("nominal", "nominal", ReportUnit.VOLTS);
         t.row("heat", 20.7, 12.6).row("bias", 0.029, -24.0).row("spare", new Absent("none"), 5.0);
-        return new Report("demo", 3).field("machine", "m, \"quoted\"").field("run", Unit.SECONDS, 30.0).table(t);
+        return new Report("demo", 3).field("machine", "m, \"quoted\"").field("run", ReportUnit.SECONDS, 30.0).table(t);
     }
 
     @Test
@@ -37,9 +37,9 @@ class WritersTest {
 
     @Test
     void aWideTableSplitsIntoGroupsThatRepeatTheFirstColumn() {
-        Table t = new Table("wide", "wide").column("name", "name", Unit.TEXT);
+        Table t = new Table("wide", "wide").column("name", "name", ReportUnit.TEXT);
         for (int i = 0; i < 14; i++) {
-            t.column("c" + i, "column " + i, Unit.COUNT);
+            t.column("c" + i, "column " + i, ReportUnit.COUNT);
         }
         Object[] row = new Object[15];
         row[0] = "first";
@@ -76,17 +76,17 @@ class WritersTest {
         assertThat(Numbers.plain(0.1 + 0.2)).isEqualTo("0.3");
         assertThat(Numbers.plain(1200.0)).isEqualTo("1200");
         assertThat(Numbers.plain(Double.NaN)).isEmpty();
-        assertThat(Numbers.si(0.243357, Unit.AMPS)).isEqualTo("243 mA");
-        assertThat(Numbers.si(4.0, Unit.OHMS)).isEqualTo("4.00 ohm");
-        assertThat(Numbers.si(-3.23, Unit.PERCENT)).isEqualTo("-3.2 %");
+        assertThat(Numbers.si(0.243357, ReportUnit.AMPS)).isEqualTo("243 mA");
+        assertThat(Numbers.si(4.0, ReportUnit.OHMS)).isEqualTo("4.00 ohm");
+        assertThat(Numbers.si(-3.23, ReportUnit.PERCENT)).isEqualTo("-3.2 %");
     }
 
     @Test
     void keysAndCellsAreChecked() {
         assertThatThrownBy(() -> new Table("Bad Name", "x")).isInstanceOf(IllegalArgumentException.class);
-        Table t = new Table("t", "t").column("a", "a", Unit.AMPS);
+        Table t = new Table("t", "t").column("a", "a", ReportUnit.AMPS);
         assertThatThrownBy(() -> t.row("text in a number column")).isInstanceOf(IllegalArgumentException.class);
-        assertThatThrownBy(() -> t.column("a", "again", Unit.AMPS)).isInstanceOf(IllegalArgumentException.class);
+        assertThatThrownBy(() -> t.column("a", "again", ReportUnit.AMPS)).isInstanceOf(IllegalArgumentException.class);
         assertThatThrownBy(() -> new Report("r", 1).field("schema_version", 2)).isInstanceOf(IllegalArgumentException.class);
     }
 }

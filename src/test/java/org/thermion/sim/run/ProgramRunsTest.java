@@ -4,7 +4,7 @@ import org.assertj.core.groups.Tuple;
 import org.junit.jupiter.api.Test;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
-import org.thermion.sim.Machines;
+import org.thermion.sim.SimMachines;
 import org.thermion.sim.OutputChange;
 import org.thermion.sim.RunResult;
 import org.thermion.sim.Simulator;
@@ -15,11 +15,11 @@ import java.util.List;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
-import static org.thermion.sim.Machines.word;
+import static org.thermion.sim.SimMachines.word;
 
 /** Program runs on the demo's logic and ISA with hand-encoded words (opcodes from its isa block). */
 class ProgramRunsTest {
-    static final Machine DEMO = Machines.demo();
+    static final Machine DEMO = SimMachines.demo();
     static final int LDN = 0x2, ST = 0x3, ADD = 0xC, JMP = 0xD;
 
     private static RunResult logic(long[] rom, InitMode init, List<String> watch, long cycles) {

@@ -3,7 +3,7 @@ package org.thermion.sim.run;
 import org.junit.jupiter.api.Test;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
-import org.thermion.sim.Machines;
+import org.thermion.sim.SimMachines;
 import org.thermion.sim.Simulator;
 import org.thermion.sim.Stimulus;
 
@@ -11,11 +11,11 @@ import java.util.ArrayList;
 import java.util.List;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.thermion.sim.Machines.word;
+import static org.thermion.sim.SimMachines.word;
 
 /** The run loop on the demo (two phases, PC loads in phase 2): limits, stops, observers, stimulus. */
 class RunDriverTest {
-    static final Machine DEMO = Machines.demo();
+    static final Machine DEMO = SimMachines.demo();
     static final int LDN = 0x2, ST = 0x3, JMP = 0xD;
     // 0: LDN 6   1: ST alarm   2: JMP 0 -- a loop of three addresses.
     static final long[] LOOP = {word(LDN, 6), word(ST, 9), word(JMP, 0)};

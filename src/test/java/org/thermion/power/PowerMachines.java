@@ -11,8 +11,8 @@ import java.io.StringWriter;
 import java.nio.file.Path;
 
 /** Elaborates small machine descriptions written inside tests. */
-final class Machines {
-    private Machines() {
+final class PowerMachines {
+    private PowerMachines() {
     }
 
     static Machine of(String text) {

@@ -5,5 +5,5 @@ package org.thermion.faults;
  * lamp reads (its own branch when the net is read elsewhere too). {@code why} says why
  * the net has a lamp: a machine output, a state bit, or a lamp or relay stage.
  */
-public record Lamp(String name, int net, int slot, String why) {
+public record ObservedLamp(String name, int net, int slot, String why) {
 }

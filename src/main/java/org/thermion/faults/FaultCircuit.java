@@ -26,7 +26,7 @@ import java.util.Map;
  * copies that feed the branches of inputs, ROM data lines and latch outputs come first, each
  * gate is followed by the copies into its own branches.
  */
-public final class Circuit {
+public final class FaultCircuit {
     static final int AND = 0;
     static final int OR = 1;
     static final int NAND = 2;
@@ -55,11 +55,11 @@ public final class Circuit {
     final int[] pcTarget;
     final int[] allLatchOut;
     private final List<Site> sites;
-    private final List<Lamp> lamps;
+    private final List<ObservedLamp> lamps;
     /** Per gate (netlist order): the slot each input pin reads. */
     private final int[][] gatePins;
 
-    private Circuit(Machine machine, Map<String, Integer> lampNets) {
+    private FaultCircuit(Machine machine, Map<String, Integer> lampNets) {
         this.machine = machine;
         Netlist nl = machine.netlist();
         int nets = nl.netCount();
@@ -173,11 +173,11 @@ public final class Circuit {
             pcJump = -1;
             pcTarget = new int[0];
         }
-        List<Lamp> lampList = new ArrayList<>();
+        List<ObservedLamp> lampList = new ArrayList<>();
         int li = 0;
         for (Map.Entry<String, Integer> e : lampNets.entrySet()) {
             int slot = pin(e.getValue(), readers, branchesOf, Site.Place.LAMP, li++, 0);
-            lampList.add(new Lamp(e.getKey(), e.getValue(), slot, ""));
+            lampList.add(new ObservedLamp(e.getKey(), e.getValue(), slot, ""));
         }
         this.lamps = List.copyOf(lampList);
         slotCount = s.size();
@@ -209,13 +209,13 @@ public final class Circuit {
     }
 
     /** The circuit with the default lamps: see {@link #defaultLamps}. */
-    public static Circuit of(Machine machine) {
-        return new Circuit(machine, defaultLamps(machine));
+    public static FaultCircuit of(Machine machine) {
+        return new FaultCircuit(machine, defaultLamps(machine));
     }
 
     /** The circuit with the given lamps, name to net, in the order given. */
-    public static Circuit of(Machine machine, Map<String, Integer> lamps) {
-        return new Circuit(machine, new LinkedHashMap<>(lamps));
+    public static FaultCircuit of(Machine machine, Map<String, Integer> lamps) {
+        return new FaultCircuit(machine, new LinkedHashMap<>(lamps));
     }
 
     /**
@@ -308,7 +308,7 @@ public final class Circuit {
         return sites;
     }
 
-    public List<Lamp> lamps() {
+    public List<ObservedLamp> lamps() {
         return lamps;
     }
 

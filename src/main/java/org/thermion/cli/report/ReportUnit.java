@@ -5,7 +5,7 @@ package org.thermion.cli.report;
  * is appended to the key: {@code peak} in amps is {@code peak_amps}) and lets text choose one
  * SI prefix per table; values are always carried in the SI base unit.
  */
-public enum Unit {
+public enum ReportUnit {
     /** Words: names, states, explanations. */
     TEXT(null, null, false),
     /** Whole numbers: tube counts, cycles, positions. */
@@ -29,7 +29,7 @@ public enum Unit {
     private final String symbol;
     private final boolean prefixed;
 
-    Unit(String word, String symbol, boolean prefixed) {
+    ReportUnit(String word, String symbol, boolean prefixed) {
         this.word = word;
         this.symbol = symbol;
         this.prefixed = prefixed;

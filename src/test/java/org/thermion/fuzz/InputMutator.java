@@ -12,7 +12,7 @@ import java.util.Random;
  * swapped or replaced, numbers made huge or odd, expressions nested deeply, the file cut off,
  * the encoding or the line endings changed.
  */
-final class Mutator {
+final class InputMutator {
     static final String ALPHABET = "{}()[]:=,.;-!#\"\\_+*/%&|^<> \t\n\rabcxyz019";
     static final List<String> NUMBERS = List.of("0", "1", "-1", "65536", "65537", "4294967296", "9223372036854775807",
             "9223372036854775808", "99999999999999999999999999", "0xFFFFFFFFFFFFFFFFFFFFFFFF", "0b", "0x", "1e400", "1e-400",
@@ -20,7 +20,7 @@ final class Mutator {
 
     private final Random rnd;
 
-    Mutator(Random rnd) {
+    InputMutator(Random rnd) {
         this.rnd = rnd;
     }
 

@@ -15,12 +15,12 @@ import java.util.List;
  * field sees it: inputs set before a cycle, outputs read after it. Records every output
  * change as "cycle name=value" so runs on both levels can be compared line for line.
  */
-abstract class Level {
+abstract class RunLevel {
     final Machine machine;
     final List<String> changes = new ArrayList<>();
     private final boolean[] last;
 
-    Level(Machine machine) {
+    RunLevel(Machine machine) {
         this.machine = machine;
         this.last = new boolean[machine.outputs().size()];
     }
@@ -66,7 +66,7 @@ abstract class Level {
     }
 
     /** The ISA level: the reference interpreter. */
-    static final class Isa extends Level {
+    static final class Isa extends RunLevel {
         private final IsaInterpreter in;
 
         Isa(Machine m, long[] rom) {
@@ -103,7 +103,7 @@ abstract class Level {
     }
 
     /** The logic level: the netlist in the simulator, lane 0. */
-    static final class Logic extends Level {
+    static final class Logic extends RunLevel {
         private final Simulator sim;
 
         Logic(Machine m, long[] rom) {

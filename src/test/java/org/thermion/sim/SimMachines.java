@@ -10,11 +10,11 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Path;
 
-/** Machines for the simulator tests: the demo from disk, small ones from text. */
-public final class Machines {
+/** SimMachines for the simulator tests: the demo from disk, small ones from text. */
+public final class SimMachines {
     public static final Path DEMO = Path.of("examples", "pumpstation", "pumpstation.machine");
 
-    private Machines() {
+    private SimMachines() {
     }
 
     public static Machine demo() {
