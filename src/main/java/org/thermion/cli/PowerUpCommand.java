@@ -197,7 +197,7 @@ final class PowerUpCommand implements Callable<Integer> {
             PowerUpOptions run = o.withSeconds(Math.max(o.seconds(), secs[secs.length - 1]));
             SoftStartSizing.Table t = SoftStartSizing.run(net, run, rail, ohms, secs,
                     Runtime.getRuntime().availableProcessors());
-            PowerUpReport.sizingText(out, t);
+            SizingTableText.write(out, t);
             out.flush();
             return t.best() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
         } catch (IllegalArgumentException | TransientFailure e) {

@@ -117,8 +117,9 @@ final class PowerUpReport {
             rep.table(heaters());
             rep.text(heaterLines());
         }
-        rep.data(relayDrivers());
-        rep.text(relayLines());
+        RelayDriverSection relays = new RelayDriverSection(r.relayChecks());
+        rep.data(relays.table());
+        rep.text(relays.lines());
         if (plots) {
             rep.verbatim(plotLines(plotWidth, style));
         }
@@ -321,69 +322,6 @@ final class PowerUpReport {
         return out;
     }
 
-    private Table relayDrivers() {
-        Table t = new Table("relay_drivers", "relay drivers")
-                .column("tube", "tube", TEXT)
-                .column("rail", "rail", TEXT)
-                .column("rail", "rail", VOLTS)
-                .column("arc_drop", "arc drop", VOLTS)
-                .column("plate", "plate", OHMS)
-                .column("coil", "coil", OHMS)
-                .column("coil", "coil", VOLTS)
-                .column("coil", "coil", AMPS)
-                .column("picks_up", "picks up", FLAG)
-                .column("coil_not_overdriven", "not overdriven", FLAG)
-                .column("average_ok", "average ok", FLAG)
-                .column("peak_ok", "peak ok", FLAG)
-                .column("fire", "fired", SECONDS)
-                .column("heated_long_enough", "heated", FLAG)
-                .column("coil_at_fire", "coil at fire", VOLTS, "the coil's voltage when the tube fired")
-                .column("coil_max", "coil max", VOLTS, "the most the coil saw during the run")
-                .column("openings", "openings", COUNT, "times the relay opened again below its drop-out (chatter)")
-                .column("closed", "closed", FLAG)
-                .column("ok", "ok", FLAG);
-        for (RelayDriverCheck c : r.relayChecks()) {
-            t.row(c.tube(), c.railName(), c.railVolts(), c.arcDropVolts(), c.plateOhms(), c.relay().coilOhms(), c.coilVolts(),
-                    c.coilAmps(), c.picksUp(), c.coilNotOverdriven(), c.averageOk(), c.peakOk(),
-                    Double.isNaN(c.fireTime()) ? new Absent("did not fire") : c.fireTime(), c.heatedLongEnough(),
-                    c.coil() == null || Double.isNaN(c.coil().atFireVolts()) ? new Absent("did not fire") : c.coil().atFireVolts(),
-                    c.coil() == null ? new Absent("not followed") : c.coil().maxVolts(),
-                    c.coil() == null ? new Absent("not followed") : (Object) (long) c.coil().openings(),
-                    c.coil() == null ? new Absent("not followed") : c.coil().closed(), c.ok());
-        }
-        return t;
-    }
-
-    private List<String> relayLines() {
-        List<String> out = new ArrayList<>();
-        for (RelayDriverCheck c : r.relayChecks()) {
-            out.add("relay driver: " + c.tube() + " from " + c.railName() + " " + Numbers.si(c.railVolts(), VOLTS) + " through "
-                    + Numbers.si(c.plateOhms(), OHMS) + ", coil " + Numbers.si(c.relay().coilOhms(), OHMS) + ", arc drop "
-                    + Numbers.si(c.arcDropVolts(), VOLTS));
-            double pick = c.relay().pickupVolts();
-            out.add("  coil      " + Numbers.si(c.coilVolts(), VOLTS) + String.format(Locale.ROOT, " (%.0f %% of rated %s), pick-up %s: ",
-                    100 * c.ratedRatio(), Numbers.si(c.relay().ratedVolts(), VOLTS), Numbers.si(pick, VOLTS))
-                    + (!c.picksUp() ? "DOES NOT PICK UP" : !c.coilNotOverdriven() ? "OVERDRIVEN (over +10 %)" : "ok"));
-            if (c.coil() != null && !Double.isNaN(c.coil().atFireVolts())) {
-                out.add("  in run    coil " + Numbers.si(c.coil().atFireVolts(), VOLTS) + " at firing, at most "
-                        + Numbers.si(c.coil().maxVolts(), VOLTS) + " at " + Numbers.si(c.coil().maxTime(), SECONDS)
-                        + (c.chatters() ? "; CHATTER: opened " + c.coil().openings() + " times below drop-out, first at "
-                        + Numbers.si(c.coil().firstOpening(), SECONDS) : ""));
-            }
-            if (c.coil() != null && !c.coil().closed()) {
-                out.add("  why open  " + c.coil().whyOpen());
-            }
-            out.add("  tube      " + Numbers.si(c.coilAmps(), AMPS) + " continuous against " + Numbers.si(c.avgRatingAmps(), AMPS)
-                    + " average and " + Numbers.si(c.peakRatingAmps(), AMPS) + " peak: " + (c.averageOk() && c.peakOk() ? "ok" : "OVER RATING"));
-            out.add("  heating   " + (Double.isNaN(c.fireTime()) ? "did not fire" : "fired " + Numbers.si(c.fireTime(), SECONDS) + " after switch-on")
-                    + (Double.isNaN(c.heatingSeconds()) ? "" : "; asks " + Numbers.si(c.heatingSeconds(), SECONDS) + " of cathode heating: "
-                    + (c.heatedLongEnough() ? "ok" : "TOO EARLY")));
-            out.add("  note      once fired it conducts until its anode supply is broken, so the relay holds in; the relay "
-                    + "contacts carry the whole rail current: rate them for the bypass peak");
-            out.add("");
-        }
-        return out;
-    }
 
     private List<String> plotLines(int plotWidth, CurrentPlot.Style style) {
         List<String> out = new ArrayList<>();
@@ -427,49 +365,5 @@ final class PowerUpReport {
 
     private static String f0(double v) {
         return String.format(Locale.ROOT, "%.0f", v);
-    }
-
-    /**
-     * The two-way sizing table of a soft start the machine does not have yet (plain text; the balance
-     * point marked with *, a cell at the supply's limit with !).
-     */
-    static void sizingText(java.io.PrintWriter out, org.thermion.power.startup.SoftStartSizing.Table t) {
-        String head = "sizing a soft start for rail " + t.rail() + " (no soft start declared; limit "
-                + (Double.isInfinite(t.limitAmps()) ? "none" : String.format(Locale.ROOT, "%.3g A", t.limitAmps()))
-                + "): larger of the switch-on and bypass peaks in amperes, by resistor (rows, ohms) and bypass time "
-                + "(columns, seconds); * marks the balance point, ! a cell at the supply's limit";
-        StringBuilder line = new StringBuilder();
-        for (String w : head.split(" ")) {
-            if (line.length() + w.length() + 1 > 78) {
-                out.println(line);
-                line.setLength(0);
-            }
-            line.append(line.length() == 0 ? "" : " ").append(w);
-        }
-        out.println(line);
-        StringBuilder cols = new StringBuilder(String.format(Locale.ROOT, "  %-9s", "ohms"));
-        for (double s : t.seconds()) {
-            cols.append(String.format(Locale.ROOT, " %7.3g", s));
-        }
-        out.println(cols);
-        for (int i = 0; i < t.ohms().length; i++) {
-            StringBuilder row = new StringBuilder(String.format(Locale.ROOT, "  %-9.4g", t.ohms()[i]));
-            for (int j = 0; j < t.seconds().length; j++) {
-                org.thermion.power.startup.SoftStartSizing.Cell c = t.cells()[i][j];
-                String mark = i == t.bestOhm() && j == t.bestTime() ? "*" : c.withinLimit() ? " " : "!";
-                row.append(String.format(Locale.ROOT, " %6.2f%s", c.worstPeak(), mark));
-            }
-            out.println(row);
-        }
-        org.thermion.power.startup.SoftStartSizing.Cell b = t.best();
-        out.println(b == null ? "  no cell keeps the supply within its limit"
-                : String.format(Locale.ROOT, "  balance: %.4g ohm bypassed at %.3g s (switch-on peak %.3g A, bypass peak %.3g A)",
-                t.ohms()[t.bestOhm()], t.seconds()[t.bestTime()], b.switchOnPeak(), b.bypassPeak())
-                + (Double.isNaN(t.preferredOhms()) ? "" : String.format(Locale.ROOT, "; preferred value %.3g ohm (E24)",
-                t.preferredOhms()) + (Double.isNaN(t.preferredWatts()) ? "" : String.format(Locale.ROOT,
-                ", %.3g W by temperature rise (10 x for 5 s, common practice)", t.preferredWatts()))));
-        out.println("  computed on " + t.threads() + " thread(s), one run per resistor serving every bypass time");
-        out.println();
-        out.println(CAUTION);
     }
 }
