@@ -1,24 +1,19 @@
 package org.thermion.elab;
 
 import org.thermion.lang.Diagnostics;
-import org.thermion.lang.Names;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Prop;
 import org.thermion.lang.ast.Value;
 
 import java.math.BigInteger;
-import java.util.ArrayList;
-import java.util.HashSet;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
  * Reads the values of one property line left to right: quantities with units, words,
- * whole numbers, or a whole list of {@link Slot}s as a property table declares them.
+ * whole numbers, or (through {@link SlotReader}) a list of {@link Slot}s as a table declares them.
  * Every mismatch is reported once, at the offending token; numbers that are not finite or
  * do not fit are reported with the limit, never passed on.
  */
@@ -68,7 +63,7 @@ final class PropReader {
         return new Span(s.file(), s.endLine(), Math.max(1, s.endCol() - 1), s.endLine(), s.endCol());
     }
 
-    private void fail(Span span, String message, String hint) {
+    void fail(Span span, String message, String hint) {
         if (!failed) {
             diags.error(span, message, hint);
         }
@@ -77,165 +72,30 @@ final class PropReader {
 
     /** Reads {@code slots} in order into {@code into}/{@code spans}; false after an error. */
     boolean read(List<Slot> slots, Map<String, Object> into, Map<String, Span> spans) {
-        for (int i = 0; i < slots.size() && !failed; i++) {
-            readSlot(slots.get(i), slots.subList(i + 1, slots.size()), into, spans);
-        }
-        return !failed;
+        return new SlotReader(this).read(slots, into, spans);
     }
 
     /** Reads a whole line against a table entry: its slots, then nothing more. Null after an error. */
     PropLine line(Property p) {
-        Map<String, Object> into = new LinkedHashMap<>();
-        Map<String, Span> spans = new LinkedHashMap<>();
-        read(p.slots(), into, spans);
-        end();
-        return failed ? null : new PropLine(prop, Map.copyOf(into), Map.copyOf(spans));
+        return new SlotReader(this).line(p);
     }
 
-    private void readSlot(Slot slot, List<Slot> rest, Map<String, Object> into, Map<String, Span> spans) {
-        Span at = here();
-        if (slot instanceof Slot.Quantity q) {
-            int start = pos;
-            double v = quantity(q.unit(), q.what());
-            if (!failed) {
-                Span whole = at.to(lastSpan());
-                if (!q.range().contains(v)) {
-                    fail(whole, q.what() + " is out of range: " + written(start), "use a value " + rangeText(q.range(), q.unit()));
-                }
-                into.put(q.id(), v);
-                spans.put(q.id(), whole);
-            }
-        } else if (slot instanceof Slot.Plain p) {
-            int start = pos;
-            double v = number(p.what());
-            if (!failed) {
-                if (!p.range().contains(v)) {
-                    fail(at.to(lastSpan()), p.what() + " is out of range: " + written(start), "use a value " + rangeText(p.range(), null));
-                }
-                into.put(p.id(), v);
-                spans.put(p.id(), at.to(lastSpan()));
-            }
-        } else if (slot instanceof Slot.Whole w) {
-            long n = whole(w.what(), w.min(), w.max());
-            if (!failed) {
-                into.put(w.id(), n);
-                spans.put(w.id(), lastSpan());
-            }
-        } else if (slot instanceof Slot.Name n) {
-            String w = word(n.what());
-            if (w != null && !n.choices().isEmpty() && !n.choices().contains(w)) {
-                fail(lastSpan(), "unknown " + n.what() + " '" + w + "'",
-                        Declarations.hintFor(w, n.choices(), "expected " + orList(n.choices())));
-            }
-            if (!failed) {
-                into.put(n.id(), w);
-                spans.put(n.id(), lastSpan());
-            }
-        } else if (slot instanceof Slot.Names n) {
-            names(n, stopWords(rest), into, spans);
-        } else if (slot instanceof Slot.Text t) {
-            String s = string(t.what());
-            if (s != null) {
-                into.put(t.id(), s);
-                spans.put(t.id(), lastSpan());
-            }
-        } else if (slot instanceof Slot.Word w) {
-            expectWord(w.word());
-        } else if (slot instanceof Slot.Optional o) {
-            if (acceptWord(o.word())) {
-                into.put(o.word(), Boolean.TRUE);
-                spans.put(o.word(), lastSpan());
-                read(o.then(), into, spans);
-            }
-        } else if (slot instanceof Slot.Choice c) {
-            choice(c, into, spans);
-        } else if (slot instanceof Slot.AnyOrder a) {
-            anyOrder(a, into, spans);
-        }
+    Prop prop() {
+        return prop;
     }
 
-    private void names(Slot.Names n, Set<String> stop, Map<String, Object> into, Map<String, Span> spans) {
-        List<Value> got = new ArrayList<>();
-        Span first = here();
-        while (!atEnd()) {
-            Value v = peek();
-            if (v instanceof Value.Sym s && s.text().equals(",")) {
-                pos++;
-            } else if ((v instanceof Value.Word || v instanceof Value.Num) && !stop.contains(v.text())) {
-                String option = v.text().matches(".*[0-9].*") ? null : Names.nearestWord(v.text(), stop, 2);
-                if (option != null) {
-                    // Part names carry digits (12AU7, T1); a plain word near an option is a slip.
-                    fail(v.span(), "unexpected '" + v.text() + "'", "did you mean '" + option + "'?");
-                    return;
-                }
-                got.add(v);
-                pos++;
-            } else {
-                break;
-            }
-        }
-        if (got.isEmpty()) {
-            fail(here(), "expected " + n.what() + found(peek()), null);
-            return;
-        }
-        into.put(n.id(), List.copyOf(got));
-        spans.put(n.id(), first.to(lastSpan()));
+    /** The index of the next value, for {@link #written(int)}. */
+    int position() {
+        return pos;
     }
 
-    /** The words that start the optional parts after a list of names: they end the list. */
-    private static Set<String> stopWords(List<Slot> rest) {
-        Set<String> stop = new HashSet<>();
-        for (Slot s : rest) {
-            if (s instanceof Slot.Optional o) {
-                stop.add(o.word());
-            } else if (s instanceof Slot.AnyOrder a) {
-                a.options().forEach(o -> stop.add(o.word()));
-            } else {
-                break;
-            }
-        }
-        return stop;
-    }
-
-    private void choice(Slot.Choice c, Map<String, Object> into, Map<String, Span> spans) {
-        Value v = peek();
-        if (v instanceof Value.Word w && c.branches().containsKey(w.text())) {
-            pos++;
-            into.put(c.id(), w.text());
-            spans.put(c.id(), w.span());
-            read(c.branches().get(w.text()), into, spans);
-        } else if (c.otherwise() != null) {
-            read(c.otherwise(), into, spans);
-        } else {
-            List<String> words = new ArrayList<>(c.branches().keySet());
-            String hint = v instanceof Value.Word w ? Declarations.hintFor(w.text(), words, null) : null;
-            fail(here(), "expected " + orList(words) + found(v), hint);
-        }
-    }
-
-    private void anyOrder(Slot.AnyOrder a, Map<String, Object> into, Map<String, Span> spans) {
-        List<String> words = a.options().stream().map(Slot.Optional::word).toList();
-        while (!atEnd() && !failed) {
-            Value v = peek();
-            Slot.Optional match = null;
-            for (Slot.Optional o : a.options()) {
-                if (v instanceof Value.Word w && w.text().equals(o.word())) {
-                    match = o;
-                }
-            }
-            if (match == null) {
-                fail(v.span(), "unexpected '" + v.text() + "'",
-                        Declarations.hintFor(v.text(), words, "expected one of: " + String.join(", ", words)));
-            } else if (into.containsKey(match.word())) {
-                fail(v.span(), "'" + match.word() + "' given twice", "give each option once");
-            } else {
-                readSlot(match, List.of(), into, spans);
-            }
-        }
+    /** Passes over the next value, already looked at with {@link #peek()}. */
+    void skip() {
+        pos++;
     }
 
     /** The tokens from {@code start} to the reader's position as written: "-2 A", "47k". */
-    private String written(int start) {
+    String written(int start) {
         StringBuilder b = new StringBuilder();
         for (int i = start; i < pos; i++) {
             Value v = values.get(i);
@@ -254,15 +114,8 @@ final class PropReader {
         return r.minIncluded() ? "from " + min + " to " + max : "above " + min + " and at most " + max;
     }
 
-    private static String orList(List<String> words) {
-        if (words.size() == 1) {
-            return words.get(0);
-        }
-        return String.join(", ", words.subList(0, words.size() - 1)) + " or " + words.get(words.size() - 1);
-    }
-
     /** A quantity of the given dimension, in SI; NaN after an error. */
-    private double quantity(Unit unit, String what) {
+    double quantity(Unit unit, String what) {
         if (failed) {
             return Double.NaN;
         }
@@ -310,7 +163,7 @@ final class PropReader {
     }
 
     /** A plain number without unit; NaN after an error. */
-    private double number(String what) {
+    double number(String what) {
         if (failed) {
             return Double.NaN;
         }
@@ -430,7 +283,7 @@ final class PropReader {
         }
     }
 
-    private static String found(Value v) {
+    static String found(Value v) {
         return v == null ? ", found end of line" : ", found '" + v.text() + "'";
     }
 
