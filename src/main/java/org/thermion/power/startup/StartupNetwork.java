@@ -20,6 +20,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+// About 400 lines: one reduction whose grouping tables (strings, rails, plates) are built together and read by index.
 /**
  * The machine's supplies reduced to what the power-up transient needs: calibrated heater models,
  * heater strings grouped by identity (identical strings on one rail share one temperature
