@@ -91,7 +91,7 @@ public final class MutationRun {
         for (int t : machine.pc().targetNets()) {
             todo.add(t);
         }
-        Verifier.decodeNets(nl, options.decodeName()).forEach(todo::add);
+        DecodeCheck.decodeNets(nl, options.decodeName()).forEach(todo::add);
         while (!todo.isEmpty()) {
             int n = todo.pop();
             if (n < 0 || seen[n]) {

@@ -59,9 +59,9 @@ public final class SoftStartSizing {
             for (double r : ohms) {
                 rows.add(pool.submit(() -> {
                     TransientRun run = new TransientRun(net, held.withResistor(StartupNetwork.SIZING, r));
-                    run.probe(k, times);
+                    BypassProbe probe = run.probe(k, times);
                     run.run();
-                    double[] on = run.probeSwitchOn(), by = run.probeBypass(), w = run.probeWatts();
+                    double[] on = probe.switchOn(), by = probe.bypass(), w = probe.watts();
                     Cell[] row = new Cell[times.length];
                     for (int j = 0; j < times.length; j++) {
                         row[j] = new Cell(on[j], r == 0 ? on[j] : by[j], r == 0 ? 0 : w[j],

@@ -3,15 +3,12 @@ package org.thermion.power.startup;
 import org.hipparchus.exception.MathRuntimeException;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
-import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.events.Action;
 import org.hipparchus.ode.nonstiff.DormandPrince54Integrator;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.hipparchus.ode.sampling.ODEStepHandler;
 
-import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.List;
 
 /**
  * One solve of a {@link StartupNetwork}. The heater temperatures are the only dynamic states
@@ -23,108 +20,30 @@ import java.util.List;
  * heater's 95 % point are located by event detectors without ending the segment.
  */
 final class TransientRun {
-    private final StartupNetwork net;
     private final PowerUpOptions o;
+    private final TransientCircuit circuit;
+    private final TransientRecorder recorder;
     private final HeaterState[] heaters;
-    private final StringState[] strings;
     private final RailState[] rails;
     private final SoftStartState[] softs;
-    private final int dimension;
     /** The emission threshold as a fraction of cathode operating temperature. */
     private final double threshold;
-    private final List<double[]> samples = new ArrayList<>();
-    // Bypass probes: with the relay held open, what each bypass time would have given (see probe()).
-    private SoftStartState probed;
-    private double[] probeTimes = new double[0];
-    private int nextProbe;
-    private double[] probeOn;
-    private double[] probeBy;
-    private double[] probeWatts;
-    private long evaluations;
+    /** With the relay held open, what each bypass time would have given (see probe()); or null. */
+    private BypassProbe probe;
 
     TransientRun(StartupNetwork net, PowerUpOptions o) {
-        this.net = net;
         this.o = o;
         this.threshold = net.emission.thresholdFraction();
-        int n = net.states;
-        int ns = net.softs.size();
-        // State vector: wire temperatures, cathode temperatures, resistor energies, resistor lagged powers,
-        // heater energies in, energies radiated.
-        heaters = new HeaterState[n];
-        for (int s = 0; s < n; s++) {
-            heaters[s] = new HeaterState(net.models.get(net.stateModel[s]), net.stateGroup[s], net.statePosition[s],
-                    net.stateShunt[s], s, n + s, 2 * n + 2 * ns + s, 3 * n + 2 * ns + s);
-        }
-        dimension = 4 * n + 2 * ns;
-        strings = new StringState[net.groupRail.length];
-        for (int g = 0; g < strings.length; g++) {
-            HeaterState[] hs = new HeaterState[net.groupStates[g].length];
-            for (int i = 0; i < hs.length; i++) {
-                hs[i] = heaters[net.groupStates[g][i]];
-            }
-            strings[g] = new StringState(net.groupRail[g], net.groupCount[g], net.groupDrop[g], hs);
-        }
-        softs = new SoftStartState[ns];
-        for (int k = 0; k < ns; k++) {
-            StartupNetwork.Soft s = net.softs.get(k);
-            double ohms = o.resistorOhms().getOrDefault(s.name(), s.declaredOhms());
-            softs[k] = new SoftStartState(s, ohms, 2 * n + k, 2 * n + ns + k, o.resistorRating().tau(), s.thyratron() ? heaters[s.thyState()] : null);
-        }
-        int nr = net.machine.rails().size();
-        rails = new RailState[nr];
-        for (int r = 0; r < nr; r++) {
-            int ri = r;
-            StringState[] on = Arrays.stream(net.railGroups[r]).mapToObj(g -> strings[g]).toArray(StringState[]::new);
-            HeaterState[] plates = Arrays.stream(net.plateState[r]).mapToObj(s -> heaters[s]).toArray(HeaterState[]::new);
-            SoftStartState[] series = Arrays.stream(softs).filter(s -> s.soft.rail() == ri).toArray(SoftStartState[]::new);
-            SoftStartState[] branches = Arrays.stream(softs).filter(s -> s.soft.thyratron() && s.soft.fromRail() == ri)
-                    .toArray(SoftStartState[]::new);
-            rails[r] = new RailState(r, net.machine.rails().get(r), on, plates, net.plateSiemens[r].clone(),
-                    net.alwaysSiemens[r], series, branches);
-        }
+        this.circuit = new TransientCircuit(net, o);
+        this.recorder = new TransientRecorder(circuit, o);
+        this.heaters = circuit.heaters;
+        this.rails = circuit.rails;
+        this.softs = circuit.softs;
     }
-
-    /** Solves the circuit for the temperatures in {@code y} under the present relay states. */
-    private void evaluate(double[] y) {
-        evaluations++;
-        for (HeaterState h : heaters) {
-            h.resist(y);
-        }
-        for (StringState s : strings) {
-            s.resist();
-        }
-        for (RailState r : rails) {
-            r.solve(y, net.emission);
-        }
-    }
-
-    private final OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-        @Override
-        public int getDimension() {
-            return dimension;
-        }
-
-        @Override
-        public double[] computeDerivatives(double t, double[] y) {
-            try {
-                evaluate(y);
-            } catch (TransientFailure e) {
-                throw new TransientFailure("at t = " + StartupNetwork.fmt(t) + " s, " + e.getMessage());
-            }
-            double[] d = new double[dimension];
-            for (HeaterState h : heaters) {
-                h.derivatives(y, d);
-            }
-            for (SoftStartState s : softs) {
-                s.derivatives(y, d);
-            }
-            return d;
-        }
-    };
 
     /** Records peaks and over-voltages at a point; adds a sample row when {@code keep}. */
     private void observe(double t, double[] y, boolean keep) {
-        evaluate(y);
+        circuit.evaluate(y);
         for (RailState r : rails) {
             r.observe(t);
         }
@@ -136,31 +55,14 @@ final class TransientRun {
             s.observeCoil(t);
         }
         if (keep) {
-            int nr = rails.length;
-            double[] row = new double[1 + 2 * nr + 2 * heaters.length];
-            row[0] = t;
-            for (int r = 0; r < nr; r++) {
-                row[1 + r] = rails[r].amps;
-                row[1 + nr + r] = rails[r].volts;
-            }
-            for (int s = 0; s < heaters.length; s++) {
-                row[1 + 2 * nr + s] = y[heaters[s].wire];
-                row[1 + 2 * nr + heaters.length + s] = y[heaters[s].cathode];
-            }
-            samples.add(row);
-        }
-    }
-
-    private void updateLimits(double t) {
-        for (RailState r : rails) {
-            r.limit(t, r.overLimit());
+            recorder.add(t, y);
         }
     }
 
     PowerUpResult run() {
         double end = o.seconds();
         double dt = o.sampleSeconds();
-        double[] y = new double[dimension];
+        double[] y = new double[circuit.dimension];
         for (HeaterState h : heaters) {
             y[h.wire] = h.model.ambientKelvin();
             y[h.cathode] = h.model.ambientKelvin();
@@ -178,7 +80,7 @@ final class TransientRun {
         } catch (TransientFailure e) {
             throw new TransientFailure("at switch-on, " + e.getMessage());
         }
-        updateLimits(0);
+        circuit.updateLimits(0);
         long[] nextSample = {1};
         if (heaters.length == 0) {
             // Nothing warms: the rails carry only what is always on, and nothing changes with time.
@@ -209,13 +111,13 @@ final class TransientRun {
                 SoftStartState s = softs[k];
                 if (mayPickUp(s)) {
                     pick[k] = new Threshold(x -> {
-                        evaluate(x.getPrimaryState());
+                        circuit.evaluate(x.getPrimaryState());
                         return s.overPickup();
                     }, Action.STOP, true);
                     dp.addEventDetector(pick[k]);
                 } else if (mayDrop(s)) {
                     drop[k] = new Threshold(x -> {
-                        evaluate(x.getPrimaryState());
+                        circuit.evaluate(x.getPrimaryState());
                         return -s.overDropout();
                     }, Action.STOP, true);
                     dp.addEventDetector(drop[k]);
@@ -225,7 +127,7 @@ final class TransientRun {
                 double lim = r.rail.limitAmps();
                 if (Double.isFinite(lim)) {
                     dp.addEventDetector(new Threshold(x -> {
-                        evaluate(x.getPrimaryState());
+                        circuit.evaluate(x.getPrimaryState());
                         return r.demand - lim;
                     }, Action.RESET_DERIVATIVES, false, (time, up) -> r.limit(time, up)));
                 }
@@ -235,9 +137,8 @@ final class TransientRun {
                 public void handleStep(ODEStateInterpolator in) {
                     double tc = in.getCurrentState().getTime();
                     crossings(in);
-                    while (nextProbe < probeTimes.length && probeTimes[nextProbe] <= tc + 1e-12) {
-                        double tp = Math.min(probeTimes[nextProbe], tc);
-                        takeProbe(nextProbe++, in.getInterpolatedState(tp).getPrimaryState());
+                    if (probe != null) {
+                        probe.takeDue(in, tc);
                     }
                     if (dt > 0) {
                         while (nextSample[0] * dt <= tc + 1e-12 && nextSample[0] * dt <= end + 1e-12) {
@@ -251,12 +152,12 @@ final class TransientRun {
             });
             ODEStateAndDerivative fin;
             try {
-                fin = dp.integrate(ode, new ODEState(t, y), segEnd);
+                fin = dp.integrate(circuit.ode, new ODEState(t, y), segEnd);
             } catch (MathRuntimeException e) {
                 throw new TransientFailure("the heater temperatures could not be integrated beyond t = "
                         + StartupNetwork.fmt(t) + " s (" + e.getMessage() + "): check the rails' voltages and resistances");
             }
-            evaluations += dp.getEvaluations();
+            circuit.evaluations += dp.getEvaluations();
             t = fin.getTime();
             y = fin.getPrimaryState().clone();
             // A step stopped by one event may end on another's threshold before that one is reported.
@@ -297,7 +198,7 @@ final class TransientRun {
             boolean changed = false;
             for (SoftStartState s : softs) {
                 if (!s.bypassed && s.bypassAt <= t + 1e-12) {
-                    if (!changed && (samples.isEmpty() || samples.get(samples.size() - 1)[0] < t) && dt > 0) {
+                    if (!changed && recorder.lastTime() < t && dt > 0) {
                         observe(t, y, true);
                     }
                     s.close(t);
@@ -305,22 +206,22 @@ final class TransientRun {
                 }
             }
             if (changed || anyFired) {
-                evaluate(y);
-                updateLimits(t);
+                circuit.evaluate(y);
+                circuit.updateLimits(t);
                 observe(t, y, true);
             }
         }
-        if (samples.get(samples.size() - 1)[0] < end) {
+        if (recorder.lastTime() < end) {
             observe(end, y, true);
         }
-        evaluate(y);
-        updateLimits(end);
+        circuit.evaluate(y);
+        circuit.updateLimits(end);
         for (RailState r : rails) {
             if (!Double.isNaN(r.limitSince)) {
                 r.inLimit += end - r.limitSince;
             }
         }
-        return result(y, end);
+        return recorder.result(y, end);
     }
 
     /**
@@ -328,43 +229,12 @@ final class TransientRun {
      * each of {@code times} (ascending) would give: the rail's switch-on peak up to then, its current
      * the instant after closing (the bypass peak, since warming heaters only lower it afterwards), and
      * the continuous rating the resistor's temperature rise asks by then. One trajectory serves every
-     * bypass time up to the moment of bypass.
+     * bypass time up to the moment of bypass. Call before {@link #run()}.
      */
-    void probe(int soft, double[] times) {
-        probed = softs[soft];
-        probeTimes = times.clone();
-        probeOn = new double[times.length];
-        probeBy = new double[times.length];
-        probeWatts = new double[times.length];
-        Arrays.fill(probeOn, Double.NaN);
-        Arrays.fill(probeBy, Double.NaN);
-        Arrays.fill(probeWatts, Double.NaN);
+    BypassProbe probe(int soft, double[] times) {
+        probe = new BypassProbe(circuit, soft, times);
+        return probe;
     }
-
-    private void takeProbe(int i, double[] y) {
-        RailState rail = rails[probed.soft.rail()];
-        evaluate(y);
-        probeOn[i] = Math.max(rail.peakOn, rail.amps);
-        probeWatts[i] = Math.max(probed.neededWatts, y[probed.heat]);
-        probed.bypassed = true;
-        evaluate(y);
-        probeBy[i] = rail.amps;
-        probed.bypassed = false;
-        evaluate(y);
-    }
-
-    double[] probeSwitchOn() {
-        return probeOn.clone();
-    }
-
-    double[] probeBypass() {
-        return probeBy.clone();
-    }
-
-    double[] probeWatts() {
-        return probeWatts.clone();
-    }
-
     /**
      * Each heater's 95 % point and its cathode's emission threshold, found inside the step that crosses
      * them by bisection on the step's interpolator: warming is monotone, and a detector per heater
@@ -412,7 +282,7 @@ final class TransientRun {
 
     /** At a segment boundary: relays whose coil already stands past a threshold act now. */
     private void switchRelays(double t, double[] y) {
-        evaluate(y);
+        circuit.evaluate(y);
         boolean changed = false;
         for (SoftStartState s : softs) {
             if (mayDrop(s) && s.overDropout() < 0) {
@@ -421,8 +291,8 @@ final class TransientRun {
             }
         }
         if (changed) {
-            evaluate(y);
-            updateLimits(t);
+            circuit.evaluate(y);
+            circuit.updateLimits(t);
             observe(t, y, true);
         }
         for (SoftStartState s : softs) {
@@ -439,8 +309,8 @@ final class TransientRun {
     }
 
     private DormandPrince54Integrator integrator(double end) {
-        double[] abs = new double[dimension];
-        double[] rel = new double[dimension];
+        double[] abs = new double[circuit.dimension];
+        double[] rel = new double[circuit.dimension];
         Arrays.fill(abs, 1e-3);   // kelvin and joules
         Arrays.fill(rel, 1e-6);
         DormandPrince54Integrator dp = new DormandPrince54Integrator(1e-9, Math.min(0.25, end / 20), abs, rel);
@@ -448,59 +318,4 @@ final class TransientRun {
         return dp;
     }
 
-    private PowerUpResult result(double[] y, double end) {
-        int m = samples.size();
-        int nr = rails.length;
-        double[] t = new double[m];
-        for (int i = 0; i < m; i++) {
-            t[i] = samples.get(i)[0];
-        }
-        List<RailTransient> railResults = new ArrayList<>();
-        for (RailState r : rails) {
-            double[] a = new double[m];
-            double[] v = new double[m];
-            for (int i = 0; i < m; i++) {
-                a[i] = samples.get(i)[1 + r.index];
-                v[i] = samples.get(i)[1 + nr + r.index];
-            }
-            railResults.add(new RailTransient(r.index, r.rail.name(), r.rail.volts(), r.rail.limitAmps(), t, a, v,
-                    r.peakOn, r.peakOnTime, r.peakBy, r.peakByTime, r.bypassTime(), r.peakDemand, r.inLimit, r.amps,
-                    r.hasSoftStart(), r.hasLoad()));
-        }
-        List<SoftStartResult> softResults = new ArrayList<>();
-        List<RelayDriverCheck> checks = new ArrayList<>();
-        for (SoftStartState ss : softs) {
-            StartupNetwork.Soft s = ss.soft;
-            double trig = s.thyratron() ? ss.fireTime : (s.delay() <= end ? s.delay() : Double.NaN);
-            double inCircuit = Double.isNaN(ss.bypassTime) ? end : ss.bypassTime;
-            double joules = y[ss.joules];
-            boolean none = ss.ohms == 0;
-            softResults.add(new SoftStartResult(s.name(), s.rail(), ss.ohms, s.ratedWatts(), none ? Double.NaN : trig,
-                    none ? Double.NaN : ss.bypassTime, joules, ss.peakWatts, inCircuit > 0 ? joules / inCircuit : 0,
-                    s.thyratron(), ss.neededWatts, o.resistorRating(), ss.soft.contactAmps(),
-                    rails[s.rail()].peakBy, rails[s.rail()].amps));
-            if (s.check() != null) {
-                RelayDriverCheck c = s.check();
-                checks.add(c.simulated(ss.fireTime, ss.coil()));
-            }
-        }
-        List<HeaterWarmup> warmups = new ArrayList<>();
-        double[][] kelvin = new double[heaters.length][m];
-        double[][] cathodeKelvin = new double[heaters.length][m];
-        for (int s = 0; s < heaters.length; s++) {
-            HeaterState h = heaters[s];
-            HeaterModel model = h.model;
-            int g = h.group;
-            warmups.add(new HeaterWarmup(model.tube(), model.rating().volts(), model.rating().amps(), net.groupRail[g],
-                    net.groupLabel[g], h.position, net.groupCount[g], net.groupMixed[g], h.warmTime, h.peakRatio,
-                    h.peakRatioTime, h.volts, y[h.wire], y[h.joulesIn], y[h.joulesRadiated], h.joulesStored(y),
-                    y[h.cathode], h.emitTime));
-            for (int i = 0; i < m; i++) {
-                kelvin[s][i] = samples.get(i)[1 + 2 * nr + s];
-                cathodeKelvin[s][i] = samples.get(i)[1 + 2 * nr + heaters.length + s];
-            }
-        }
-        return new PowerUpResult(net.machine.name(), o, net.models, List.copyOf(railResults), List.copyOf(softResults),
-                List.copyOf(warmups), List.copyOf(checks), t, kelvin, cathodeKelvin, evaluations, net.notes);
-    }
 }
