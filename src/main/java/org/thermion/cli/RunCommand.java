@@ -1,6 +1,8 @@
 package org.thermion.cli;
 
 import org.thermion.cli.report.Format;
+import org.thermion.cli.report.Numbers;
+import org.thermion.cli.report.ReportUnit;
 import org.thermion.asm.Assembly;
 import org.thermion.model.Machine;
 import org.thermion.sim.InitMode;
@@ -26,6 +28,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
@@ -182,6 +185,7 @@ final class RunCommand implements Callable<Integer> {
             return usage(err, "--watch: " + e.getMessage(),
                     level == Level.isa ? null : "names are as 'check' lists them, e.g. acc, line[3], a bus by its name, pc");
         }
+        long started = System.nanoTime();
         if (level == Level.isa) {
             result = ProgramRuns.isa(m, asm.words(), mode, stim, watches, cycles);
         } else if (vcd == null) {
@@ -201,7 +205,15 @@ final class RunCommand implements Callable<Integer> {
             vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
                     + (m.pc() != null ? " nets and the pc)" : " nets)");
         }
-        format.write(out, new RunReport(m, program, level.name(), mode.toString(), result).report());
+        RunReport report = new RunReport(m, program, level.name(), mode.toString(), result);
+        format.write(out, report.report());
+        double wall = (System.nanoTime() - started) / 1e9;
+        if (wall >= 1.0) {
+            // long runs only: a speed figure changes from run to run, so short (tested) runs stay quiet
+            err.printf(Locale.ROOT, "simulated %s of machine time in %.1f s of wall time: %s x real time%n",
+                    Numbers.si(report.machineSeconds(), ReportUnit.SECONDS), wall,
+                    Numbers.plain(report.machineSeconds() / wall));
+        }
         if (vcdNote != null && format == Format.text) {
             out.println();
             out.println(vcdNote);

@@ -7,6 +7,8 @@ import org.thermion.sim.UnknownReport;
 import org.thermion.sim.WatchRow;
 
 import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Numbers;
+import org.thermion.cli.report.ReportUnit;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
 import java.nio.file.Path;
@@ -35,6 +37,11 @@ final class RunReport {
     /** The schema version of run's JSON ({@code org/thermion/schema/run.schema.json}). */
     static final int VERSION = 2;
 
+    /** How long the real machine takes for the cycles run, at its declared clock period. */
+    double machineSeconds() {
+        return r.cycles() * machine.clock().periodSeconds();
+    }
+
     /** The run as one report: values 0, 1 or x (unknown) as text, in every format alike. */
     Report report() {
         Report rep = new Report("run", VERSION);
@@ -43,13 +50,16 @@ final class RunReport {
         rep.field("level", level);
         rep.field("init", init);
         rep.field("cycles", r.cycles());
+        rep.field("machine_time_seconds", machineSeconds());
         rep.field("stop", r.stop());
         Object pc = machine.pc() == null ? new Absent("no pc") : r.pcKnown() ? (Object) (long) r.pc() : new Absent("x");
         rep.field("pc", pc);
         List<String> head = new ArrayList<>();
         head.add("run " + machine.name() + ": " + (program == null ? "no program" : "program " + program) + ", "
                 + level + " level, init " + init);
-        head.add(r.cycles() + " cycles; stopped: " + r.stop());
+        head.add(r.cycles() + (r.cycles() == 1 ? " cycle" : " cycles") + "; stopped: " + r.stop());
+        head.add("machine time " + Numbers.si(machineSeconds(), ReportUnit.SECONDS) + " (a cycle is "
+                + Numbers.si(machine.clock().periodSeconds(), ReportUnit.SECONDS) + " on the real machine)");
         if (!init.equals("zero")) {
             StringBuilder sb = new StringBuilder("outputs at power-up:");
             for (int i = 0; i < machine.outputs().size(); i++) {
