@@ -35,7 +35,11 @@ final class CheckCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         MachineLoader loader = new MachineLoader();
-        Machine m = loader.load(file, err, true);
+        Machine m = loader.loadOrModules(file, err, true);
+        if (m == null && !loader.diagnostics().hasErrors() && !loader.modulesAlone().isEmpty()) {
+            format.write(out, new ModuleCheckSummary(file, loader.modulesAlone()).report());
+            return ExitCodes.OK;
+        }
         if (m == null) {
             return ExitCodes.BAD_INPUT;
         }

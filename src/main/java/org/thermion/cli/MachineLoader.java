@@ -1,6 +1,7 @@
 package org.thermion.cli;
 
 import org.thermion.elab.Elaborator;
+import org.thermion.elab.ModuleCheck;
 import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.SourceSet;
@@ -8,19 +9,41 @@ import org.thermion.model.Machine;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 
 /** Loads a machine for a command, printing diagnostics; a null machine means exit 2. */
 public final class MachineLoader {
     private final SourceSet sources = new SourceSet();
     private final Diagnostics diags = new Diagnostics();
+    private List<ModuleCheck> modulesAlone = List.of();
 
     /** Elaborates {@code file}; prints errors and warnings to {@code err} unless quiet about warnings. */
     public Machine load(Path file, PrintWriter err, boolean showWarnings) {
-        Machine m = new Elaborator(sources, diags).elaborate(file);
+        Machine m = loadOrModules(file, err, showWarnings);
+        if (m == null && !diags.hasErrors()) {
+            err.println(file + ": error: no machine block: the file holds modules only (`check` checks them);"
+                    + " this command needs `machine NAME { top MODULE ... }`");
+        }
+        return m;
+    }
+
+    /**
+     * As {@link #load}, but a file of modules without a machine block (meant for {@code include})
+     * is no error: the machine is null and {@link #modulesAlone()} lists its modules, checked alone.
+     */
+    public Machine loadOrModules(Path file, PrintWriter err, boolean showWarnings) {
+        Elaborator elaborator = new Elaborator(sources, diags);
+        Machine m = elaborator.elaborate(file);
+        modulesAlone = elaborator.modulesAlone();
         if (diags.hasErrors() || showWarnings) {
             new DiagnosticPrinter(sources).print(diags, err);
         }
         return diags.hasErrors() ? null : m;
+    }
+
+    /** The modules checked on their own when the last file loaded had no machine block. */
+    public List<ModuleCheck> modulesAlone() {
+        return modulesAlone;
     }
 
     public Diagnostics diagnostics() {

@@ -33,6 +33,8 @@ import java.util.Map;
 public final class Elaborator {
     private final SourceSet sources;
     private final Diagnostics diags;
+    private static final int MAX_PHASES = 8;
+    private List<ModuleCheck> modulesAlone = List.of();
 
     public Elaborator(SourceSet sources, Diagnostics diags) {
         this.sources = sources;
@@ -90,8 +92,39 @@ public final class Elaborator {
                 : files.get(files.size() - 1).decls().get(0).span();
     }
 
+    /**
+     * A description without a machine block but with modules (a file meant for {@code include})
+     * is checked module by module; false when it declares no module either.
+     */
+    private boolean checkModulesAlone(Declarations decls, Parts parts, List<SourceFile> files) {
+        List<ModuleCheck> found = new ArrayList<>();
+        for (SourceFile f : files) {
+            for (Decl d : f.decls()) {
+                if (d instanceof Decl.Module m) {
+                    // the clock is not known without a machine: every phase the language allows is accepted
+                    ModuleExpansion ex = ModuleExpansion.of(m, decls, parts, diags, MAX_PHASES);
+                    int stages = 0;
+                    for (NetBuilder.GateB g : ex.nb.gates) {
+                        stages += g.stage >= 0 ? 1 : 0;
+                    }
+                    found.add(new ModuleCheck(m.name().text(), stages, ex.nb.latches.size(), ex.nb.names.size() - 2));
+                }
+            }
+        }
+        modulesAlone = List.copyOf(found);
+        return !found.isEmpty();
+    }
+
+    /** The modules checked on their own when the description had no machine block (else empty). */
+    public List<ModuleCheck> modulesAlone() {
+        return modulesAlone;
+    }
+
     private Machine buildChecked(Declarations decls, List<SourceFile> files) {
         Parts parts = new Parts(decls, diags);
+        if (decls.machines.isEmpty() && checkModulesAlone(decls, parts, files)) {
+            return null;
+        }
         if (decls.machines.isEmpty()) {
             Path f = files.isEmpty() ? Path.of("?") : files.get(files.size() - 1).path();
             diags.error(new Span(f, 1, 1, 1, 2), "no machine block in " + f.getFileName(),

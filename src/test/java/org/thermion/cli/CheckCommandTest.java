@@ -63,4 +63,31 @@ class CheckCommandTest {
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
         assertThat(r.err()).contains("error:");
     }
+
+    private static final String MODULES_ONLY = "src/test/resources/org/thermion/cli/reports/modules-only.machine";
+
+    @Test
+    void aFileOfModulesOnlyIsCheckedModuleByModule() {
+        Result r = run("check", MODULES_ONLY);
+        assertThat(r.code()).isZero();
+        // majority: three ANDs and one OR; parity_latch: two inverters, two ANDs, one OR and its latch
+        assertThat(r.out()).contains("no machine block, so nothing to").containsPattern("majority +4 +0")
+                .containsPattern("parity_latch +5 +1");
+    }
+
+    @Test
+    void otherCommandsOnAFileOfModulesOnlySayWhatTheyNeed() {
+        Result r = run("budget", MODULES_ONLY);
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("no machine block", "`check` checks them", "machine NAME { top MODULE");
+    }
+
+    @Test
+    void aFileWithNeitherModulesNorMachineIsStillAnError(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("rails.machine");
+        Files.writeString(f, "rail bplus { voltage 48 V }\n");
+        Result r = run("check", f.toString());
+        assertThat(r.code()).isEqualTo(2);
+        assertThat(r.err()).contains("no machine block in rails.machine");
+    }
 }
