@@ -29,7 +29,7 @@ import static org.thermion.cli.report.ReportUnit.TEXT;
 import java.util.concurrent.Callable;
 
 /** {@code bench}: speed and scale of elaboration and simulation, against their targets. */
-@Command(name = "bench", mixinStandardHelpOptions = true,
+@Command(name = "bench", mixinStandardHelpOptions = true, hidden = true, // a developer tool: DEVELOPERS.md documents it
         description = "Measure elaboration time, heap per stage instance and simulation speed of each engine"
                 + " on the demo and on synthetic machines, beside the straight-line reference; each figure"
                 + " is shown against its target. One run, with warm-up; takes a minute or two (--quick: seconds).")

@@ -86,7 +86,7 @@ final class RunCommand implements Callable<Integer> {
             description = "text, csv or json; default ${DEFAULT-VALUE}.")
     Format format;
 
-    @Option(names = "--engine", paramLabel = "ENGINE", defaultValue = "auto",
+    @Option(names = "--engine", paramLabel = "ENGINE", defaultValue = "auto", hidden = true, // for developers (DEVELOPERS.md)
             description = "compiled (the logic as generated straight-line bytecode), array (flat gate arrays) or auto "
                     + "(compiled for small machines, and for long runs on all but the largest, array otherwise); default ${DEFAULT-VALUE}. "
                     + "All give the same results; unknown-mode runs use the array engine.")
