@@ -1,5 +1,6 @@
 package org.thermion.asm;
 
+import org.thermion.sim.SimMachines;
 import org.thermion.elab.Elaborator;
 import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
@@ -35,23 +36,7 @@ public final class DemoMachine {
         return check(new Elaborator(src, d).elaborateText(Path.of("tiny.machine"), TINY), src, d);
     }
 
-    static final String TINY = """
-            rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
-            rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
-            rail heat  { voltage 12.6 V; source 0.02 ohm; limit 40 A }
-            heaters on heat {
-              parallel 12AU7 at 12.6 V
-              series 2 of 6AL5 6AU6 across machine
-            }
-            realize {
-              not pentode_inverter
-              nand pentode_nand2
-              nor triode_nor2
-              and diode_and
-              or diode_or
-              buffer cathode_follower
-              latch triode_flipflop
-            }
+    static final String TINY = SimMachines.PRELUDE + """
             module tiny {
               in word[8]
               in b0, b1

@@ -25,7 +25,7 @@ public final class SimMachines {
     }
 
     /** Supplies and the operator-to-stage mapping every small test machine shares. */
-    static final String PRELUDE = """
+    public static final String PRELUDE = """
             rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
             rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
             rail heat  { voltage 12.6 V; source 0.02 ohm; limit 40 A }
