@@ -1,0 +1,53 @@
+package org.thermion.circuit;
+
+import java.util.Map;
+import java.util.Optional;
+
+import org.thermion.model.Machine;
+import org.thermion.model.StageType;
+
+/**
+ * The electrical view of one elaborated machine: its own rails, the circuit of each stage type,
+ * and one caching solver at those rails. Every consumer of operating points (check, the net
+ * levels report, budget, timing, power-up, build documents) starts here, so there is one place
+ * that decides where a stage's circuit comes from.
+ */
+public final class MachineCircuits {
+    private final RailSet rails;
+    private final Map<String, StageCircuit> byStage;
+    private final TubeLibrary tubes;
+    private final StageSolver solver;
+
+    private MachineCircuits(RailSet rails, Map<String, StageCircuit> byStage, TubeLibrary tubes) {
+        this.rails = rails;
+        this.byStage = Map.copyOf(byStage);
+        this.tubes = tubes;
+        this.solver = new StageSolver(rails);
+    }
+
+    /** The machine's circuits at its declared rail voltages (the library's stage circuits, by stage name). */
+    public static MachineCircuits of(Machine machine) {
+        TubeLibrary tubes = new TubeLibrary();
+        return new MachineCircuits(RailSet.of(machine.rails()), LibraryCircuits.of(tubes), tubes);
+    }
+
+    /** The rails the circuits are solved at. */
+    public RailSet rails() {
+        return rails;
+    }
+
+    /** The circuit of a stage type, empty when the stage has none (a declared-current stage). */
+    public Optional<StageCircuit> circuit(StageType stage) {
+        return Optional.ofNullable(byStage.get(stage.name()));
+    }
+
+    /** The tube models the circuits use. */
+    public TubeLibrary tubes() {
+        return tubes;
+    }
+
+    /** The shared caching solver at {@link #rails()}; not thread-safe. */
+    public StageSolver solver() {
+        return solver;
+    }
+}
