@@ -34,7 +34,7 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        MachineLoader loader = new MachineLoader();
+        MachineLoader loader = new MachineLoader().withLanguagePointers();
         Machine m = loader.loadOrModules(file, err, true);
         if (m == null && !loader.diagnostics().hasErrors() && !loader.modulesAlone().isEmpty()) {
             format.write(out, new ModuleCheckSummary(file, loader.modulesAlone()).report());

@@ -16,6 +16,13 @@ public final class MachineLoader {
     private final SourceSet sources = new SourceSet();
     private final Diagnostics diags = new Diagnostics();
     private List<ModuleCheck> modulesAlone = List.of();
+    private boolean pointers;
+
+    /** Errors printed from now on also name the section of the language reference that explains them. */
+    public MachineLoader withLanguagePointers() {
+        pointers = true;
+        return this;
+    }
 
     /** Elaborates {@code file}; prints errors and warnings to {@code err} unless quiet about warnings. */
     public Machine load(Path file, PrintWriter err, boolean showWarnings) {
@@ -36,7 +43,7 @@ public final class MachineLoader {
         Machine m = elaborator.elaborate(file);
         modulesAlone = elaborator.modulesAlone();
         if (diags.hasErrors() || showWarnings) {
-            new DiagnosticPrinter(sources).print(diags, err);
+            new DiagnosticPrinter(sources, pointers).print(diags, err);
         }
         return diags.hasErrors() ? null : m;
     }

@@ -11,9 +11,16 @@ public final class DiagnosticPrinter {
     static final int WINDOW = 120;
 
     private final SourceSet sources;
+    private final LanguageSections sections;
 
     public DiagnosticPrinter(SourceSet sources) {
+        this(sources, false);
+    }
+
+    /** With {@code pointers}, each error also names the section of the language reference that explains it. */
+    public DiagnosticPrinter(SourceSet sources, boolean pointers) {
         this.sources = sources;
+        this.sections = pointers ? new LanguageSections(sources) : null;
     }
 
     public void print(Diagnostics diags, PrintWriter out) {
@@ -71,6 +78,10 @@ public final class DiagnosticPrinter {
         }
         if (d.hint() != null && !d.hint().isEmpty()) {
             sb.append("  = ").append(d.hint()).append('\n');
+        }
+        String pointer = sections != null && d.isError() ? sections.pointer(d) : null;
+        if (pointer != null) {
+            sb.append("  = language reference: ").append(pointer).append('\n');
         }
         return sb.toString();
     }
