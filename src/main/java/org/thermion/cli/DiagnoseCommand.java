@@ -86,7 +86,7 @@ final class DiagnoseCommand implements Callable<Integer> {
                 return ExitCodes.BAD_INPUT;
             }
             Diagnosis d = new Diagnosis(sim, in.faults(), steps);
-            List<Diagnosis.Suspect> ranked = d.rank(seen);
+            List<Diagnosis.Suspect> ranked = d.rank(seen, Diagnosis.stepsReached(seen));
             List<Diagnosis.Suspect> leading = ranked.stream().filter(s -> s.rank() == ranked.get(0).rank()).toList();
             Step next = d.nextStep(leading, Effort.DEFAULT);
             List<Diagnosis.Reading> readings = next == null ? List.of() : d.readings(leading, next);

@@ -13,7 +13,9 @@ import java.util.Map;
  * whose lamps agree at every step cannot be told apart by it and form one class (the class
  * that looks like the good machine is "no fault seen"). Given what the builder saw (a lamp
  * may be left blank), classes are ranked by the lamps they contradict, then by the lamps they
- * cannot predict (unknown where something was seen): exact matches first, then the nearest,
+ * cannot predict (unknown where something was seen), then by the lamps they predict that were
+ * left blank (before the step the builder has got to): exact matches
+ * first, then the nearest,
  * so two faults at once or a fault outside the model still point somewhere. Equal scores
  * share a rank.
  */
@@ -111,6 +113,14 @@ public final class Diagnosis {
 
     /** Classes ranked against {@code observed[step][lamp]} (0, 1 or {@link #BLANK}; missing steps are blank). */
     public List<Suspect> rank(byte[][] observed) {
+        return rank(observed, steps.size());
+    }
+
+    /**
+     * As {@link #rank(byte[][])} for a builder who has got to step {@code stepsReached} only:
+     * lamps left blank after it are not held against any class.
+     */
+    public List<Suspect> rank(byte[][] observed, int stepsReached) {
         int lamps = sim.circuit().lamps().size();
         List<Suspect> scored = new ArrayList<>();
         for (int c = 0; c < classes.size(); c++) {
@@ -119,11 +129,12 @@ public final class Diagnosis {
             int unknown = 0;
             int unchecked = 0;
             for (int s = 0; s < Math.min(observed.length, steps.size()); s++) {
+                boolean looked = s < stepsReached;
                 for (int i = 0; i < Math.min(lamps, observed[s].length); i++) {
                     byte o = observed[s][i];
                     byte p = r[s * lamps + i];
                     if (o == BLANK) {
-                        unchecked += p == FaultSimulator.UNKNOWN ? 0 : 1;
+                        unchecked += p == FaultSimulator.UNKNOWN || !looked ? 0 : 1;
                         continue;
                     }
                     if (p == FaultSimulator.UNKNOWN) {
@@ -152,6 +163,20 @@ public final class Diagnosis {
             out.add(new Suspect(rank, s.contradicted(), s.unpredicted(), s.unchecked(), s.members(), s.looksGood()));
         }
         return out;
+    }
+
+    /** How many steps lead up to the last one with a lamp seen: the steps the builder has got to. */
+    public static int stepsReached(byte[][] observed) {
+        int n = 0;
+        for (int s = 0; s < observed.length; s++) {
+            for (byte b : observed[s]) {
+                if (b != BLANK) {
+                    n = s + 1;
+                    break;
+                }
+            }
+        }
+        return n;
     }
 
     /**

@@ -48,6 +48,7 @@ final class Keymap {
                 case 'j': return of(Command.CURSOR_DOWN);
                 case '.': return of(Command.CURSOR_TO_PC);
                 case 'w': return of(Command.POWER_UP_VIEW);
+                case 'd': return of(Command.BENCH_VIEW);
                 case ']': return of(Command.NEXT_RAIL);
                 case '[': return of(Command.PREVIOUS_RAIL);
                 case '?': case 'h': return of(Command.HELP);
@@ -111,8 +112,11 @@ final class Keymap {
         h.add(new HelpLine("F2 F3 F4 F5", "bring forward " + f));
         h.add(new HelpLine("w", "power-up view: rail current from switch-on; w leaves"));
         h.add(new HelpLine("[ ]  Left Right", "previous / next rail in the power-up view"));
+        h.add(new HelpLine("d", "bench mode: follow the bring-up plan, type in the lamps you see; d leaves"));
+        h.add(new HelpLine("Up Down  Space  x  e", "bench: pick a lamp, lit / dark, not looked at, all as expected"));
+        h.add(new HelpLine("Enter  Left Right", "bench: record the step and go on; previous / next step"));
         h.add(new HelpLine("?  h  F1", "this help; Space: next page, other keys close it"));
-        h.add(new HelpLine("Esc", "close help or the power-up view"));
+        h.add(new HelpLine("Esc", "close help, the power-up view or the bench"));
         h.add(new HelpLine("q  Ctrl-C", "quit"));
         h.add(new HelpLine("", ""));
         h.add(new HelpLine(Glyphs.LAMP_ON + " " + Glyphs.LAMP_OFF + " " + Glyphs.LAMP_UNKNOWN,

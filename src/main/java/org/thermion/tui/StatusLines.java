@@ -142,6 +142,9 @@ final class StatusLines {
         String[][] hints;
         if (v.mode == View.Mode.POWER_UP) {
             hints = new String[][] {{"[ ]", "rail"}, {"w", "back"}, {"?", "help"}, {"q", "quit"}};
+        } else if (v.mode == View.Mode.BENCH) {
+            hints = new String[][] {{"Space", "lit/dark"}, {"Enter", "record"}, {"d", "back"}, {"Up/Down", "lamp"},
+                {"Left/Right", "step"}, {"x", "not looked"}, {"e", "as expected"}, {"?", "help"}, {"q", "quit"}};
         } else {
             String sw = inputs == 0 ? "" : inputs == 1 ? "1" : inputs <= 10 ? "1-" + Keymap.INPUT_KEYS.charAt(inputs - 1) : "1-0 !-)";
             hints = new String[][] {{"p", "phase"}, {"c", "cycle"}, {"Space", "run/pause"}, {"r", "reset"},

@@ -29,6 +29,8 @@ public final class TerminalUi {
     private final View view = new View();
     private final String program;
     private final PowerUpView powerUp;
+    /** The bench mode, made when first opened (its plan takes a while on a large machine). */
+    private BenchView bench;
     private final List<Keymap.HelpLine> help;
     private final Frame frame = new Frame(new Cells());
     private boolean quit;
@@ -123,6 +125,18 @@ public final class TerminalUi {
         return powerUp;
     }
 
+    private static boolean benchLets(Command c) {
+        return c == Command.BENCH_VIEW || c == Command.CLOSE || c == Command.HELP || c == Command.QUIT;
+    }
+
+    /** The bench mode (made on first use). */
+    BenchView bench() {
+        if (bench == null) {
+            bench = new BenchView(session.machine(), session.assembly() == null ? null : session.assembly().words());
+        }
+        return bench;
+    }
+
     /** Acts on one key. */
     public void handle(KeyStroke stroke) {
         Key key = Keymap.resolve(stroke, session.machine().inputs().size());
@@ -139,11 +153,23 @@ public final class TerminalUi {
             }
             return;
         }
-        if (key == null) {
+        if (key == null && !(view.mode == View.Mode.BENCH && bench.ready() != null)) {
             view.message = "that key does nothing here; ? lists the keys";
             return;
         }
         view.message = "";
+        if (view.mode == View.Mode.BENCH && bench.handle(stroke)) {
+            return;
+        }
+        if (view.mode == View.Mode.BENCH && key != null && !benchLets(key.command())) {
+            // The machine's own keys stay off while the builder types lamps in (Enter and Space would step and run).
+            view.message = bench.ready() == null ? "the plan is still being made" : "d leaves the bench for the machine's keys";
+            return;
+        }
+        if (key == null) {
+            view.message = "that key does nothing here; ? lists the keys";
+            return;
+        }
         List<ListingLine> listing = session.assembly().listing();
         int last = Math.max(0, listing.size() - 1);
         switch (key.command()) {
@@ -211,6 +237,12 @@ public final class TerminalUi {
                     powerUp.start();
                 }
             }
+            case BENCH_VIEW -> {
+                view.mode = view.mode == View.Mode.BENCH ? View.Mode.MAIN : View.Mode.BENCH;
+                if (view.mode == View.Mode.BENCH) {
+                    bench().start();
+                }
+            }
             case NEXT_RAIL -> view.rail++;
             case PREVIOUS_RAIL -> view.rail--;
             case HELP -> {
@@ -256,6 +288,11 @@ public final class TerminalUi {
         Layout.Plan plan = plan(size);
         if (plan.tooSmall()) {
             tooSmall(c, cols, rows);
+        } else if (view.mode == View.Mode.BENCH) {
+            StatusLines.title(c, cols, session, program, null, view);
+            bench().draw(c, new Rect(0, 1, cols, rows - 3));
+            StatusLines.status(c, cols, rows - 2, session, view);
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, false);
         } else if (view.mode == View.Mode.POWER_UP) {
             StatusLines.title(c, cols, session, program, null, view);
             powerUp.draw(c, new Rect(0, 1, cols, rows - 3), view);

@@ -7,7 +7,7 @@ package org.thermion.tui;
  */
 final class View {
     /** The two screens. */
-    enum Mode { MAIN, POWER_UP }
+    enum Mode { MAIN, POWER_UP, BENCH }
 
     int cursor;
     int top;
