@@ -51,6 +51,9 @@ final class PlanCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
+    @Mixin
+    ProgressOptions progressOptions = new ProgressOptions();
+
     @Spec
     CommandSpec spec;
 
@@ -91,7 +94,8 @@ final class PlanCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         FaultList faults = FaultList.of(c);
-        try (FaultSimulator sim = new FaultSimulator(c, rom, threads)) {
+        try (FaultSimulator sim = new FaultSimulator(c, rom, threads);
+             ProgressBar bar = ProgressBar.ticking(err, "plan", progressOptions.mode())) {
             Plan plan = new PlanGenerator(sim, faults, Effort.DEFAULT).generate();
             List<org.thermion.faults.Step> steps = plan.steps();
             int largest = -1;
@@ -100,6 +104,7 @@ final class PlanCommand implements Callable<Integer> {
                 largest = new Diagnosis(sim, faults, steps).largestClass();
             }
             byte[][] expected = sim.expected(steps);
+            bar.close();
             format.write(out, new PlanReport(m, c, faults, plan, steps, expected, program, largest).report());
         }
         out.flush();
