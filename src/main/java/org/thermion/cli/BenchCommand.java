@@ -42,6 +42,9 @@ final class BenchCommand implements Callable<Integer> {
             description = "Engines to measure: compiled, array (default: both).")
     List<String> engines;
 
+    @Option(names = "--faults", description = "Only the bring-up rows: fault simulation and plan generation.")
+    boolean faultsOnly;
+
     @Option(names = "--quick", description = "Short runs: sizes 1000,10000 unless given, 0.2 s per speed.")
     boolean quick;
 
@@ -99,7 +102,16 @@ final class BenchCommand implements Callable<Integer> {
             err.println(msg);
             err.flush();
         });
-        List<BenchRow> rows = suite.run();
+        List<BenchRow> rows;
+        if (faultsOnly) {
+            rows = new ArrayList<>();
+            org.thermion.bench.FaultBench.rows(rows, machine, DefaultRun.BundledExample.program("pump.asm"), quick, msg -> {
+                err.println(msg);
+                err.flush();
+            });
+        } else {
+            rows = suite.run();
+        }
         format.write(out, report(rows));
         return ExitCodes.OK;
     }

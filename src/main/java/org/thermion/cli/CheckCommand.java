@@ -24,6 +24,9 @@ final class CheckCommand implements Callable<Integer> {
             description = "text, csv or json (default: ${DEFAULT-VALUE}).")
     Format format;
 
+    @Option(names = "--watch", description = "Check again whenever the file or one it includes is saved (Ctrl-C stops).")
+    boolean watch;
+
     @Mixin
     CommonOptions common;
 
@@ -32,9 +35,23 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (!watch) {
+            return checkOnce(new MachineLoader());
+        }
+        int[] last = new int[1];
+        new CheckWatch(spec.commandLine().getOut()).run(() -> {
+            MachineLoader loader = new MachineLoader();
+            last[0] = checkOnce(loader);
+            spec.commandLine().getErr().flush();
+            return loader.sources().files();
+        }, 0);
+        return last[0];
+    }
+
+    private int checkOnce(MachineLoader fresh) {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        MachineLoader loader = new MachineLoader().withLanguagePointers();
+        MachineLoader loader = fresh.withLanguagePointers();
         Machine m = loader.loadOrModules(file, err, true);
         if (m == null && !loader.diagnostics().hasErrors() && !loader.modulesAlone().isEmpty()) {
             format.write(out, new ModuleCheckSummary(file, loader.modulesAlone()).report());
@@ -44,6 +61,7 @@ final class CheckCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         format.write(out, new MachineSummary(m).report());
+        out.flush();
         return ExitCodes.OK;
     }
 }

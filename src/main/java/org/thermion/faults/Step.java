@@ -14,6 +14,19 @@ public record Step(boolean[] inputs, int cycles) {
         }
     }
 
+    /** {@code n} random steps over {@code inputs} switches, each clocked 1 to {@code maxCycles} cycles. */
+    public static java.util.List<Step> random(java.util.Random r, int inputs, int n, int maxCycles) {
+        java.util.List<Step> out = new java.util.ArrayList<>(n);
+        for (int k = 0; k < n; k++) {
+            boolean[] in = new boolean[inputs];
+            for (int i = 0; i < inputs; i++) {
+                in[i] = r.nextBoolean();
+            }
+            out.add(new Step(in, 1 + r.nextInt(maxCycles)));
+        }
+        return out;
+    }
+
     @Override
     public boolean[] inputs() {
         return inputs.clone();

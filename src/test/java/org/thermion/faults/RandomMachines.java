@@ -100,15 +100,6 @@ final class RandomMachines {
 
     /** {@code n} random steps over {@code inputs} switches, 1 to 3 cycles each. */
     static List<Step> steps(long seed, int inputs, int n) {
-        Random r = new Random(seed * 31 + 7);
-        List<Step> out = new ArrayList<>();
-        for (int k = 0; k < n; k++) {
-            boolean[] in = new boolean[inputs];
-            for (int i = 0; i < inputs; i++) {
-                in[i] = r.nextBoolean();
-            }
-            out.add(new Step(in, 1 + r.nextInt(3)));
-        }
-        return out;
+        return Step.random(new Random(seed * 31 + 7), inputs, n, 3);
     }
 }

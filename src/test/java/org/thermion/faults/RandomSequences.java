@@ -12,16 +12,7 @@ final class RandomSequences {
 
     /** Steps a random sequence from {@code seed} needs to detect {@code wanted} faults, or {@code cap} + 1. */
     static int stepsToReach(FaultSimulator sim, List<Fault> faults, int wanted, long seed, int maxCycles, int cap) {
-        Random r = new Random(seed);
-        int n = sim.circuit().inputCount();
-        List<Step> steps = new ArrayList<>();
-        for (int k = 0; k < cap; k++) {
-            boolean[] in = new boolean[n];
-            for (int i = 0; i < n; i++) {
-                in[i] = r.nextBoolean();
-            }
-            steps.add(new Step(in, 1 + r.nextInt(maxCycles)));
-        }
+        List<Step> steps = Step.random(new Random(seed), sim.circuit().inputCount(), cap, maxCycles);
         int[] first = sim.firstDetection(faults, steps);
         int[] found = Arrays.stream(first).filter(s -> s >= 0).sorted().toArray();
         return found.length < wanted ? cap + 1 : found[wanted - 1] + 1;

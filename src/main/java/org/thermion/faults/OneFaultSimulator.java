@@ -12,23 +12,24 @@ import java.util.List;
  * The reference the fast fault simulator must agree with: one fault at a time, one machine,
  * one byte per net (0, 1, 2 = unknown), walking the model's netlist gate by gate. It reads a
  * fault's forces through the wire each slot stands for (a stem, or one reader's pin), never
- * through the flat program.
+ * through the flat program. Kept beside the fast one as the tests' reference and the bench's
+ * yardstick ({@code bench}'s fault rows).
  */
-final class OneFaultSimulator {
+public final class OneFaultSimulator {
     private static final byte X = FaultSimulator.UNKNOWN;
 
     private final FaultCircuit c;
     private final Machine m;
     private final long[] rom;
 
-    OneFaultSimulator(FaultCircuit c, long[] rom) {
+    public OneFaultSimulator(FaultCircuit c, long[] rom) {
         this.c = c;
         this.m = c.machine();
         this.rom = rom == null ? new long[0] : rom;
     }
 
     /** Lamps after every step, {@code [step * lamps + lamp]}, with {@code fault} in (null: none). */
-    byte[] run(Fault fault, List<Step> steps) {
+    public byte[] run(Fault fault, List<Step> steps) {
         Run r = new Run(fault);
         int lamps = c.lamps().size();
         byte[] out = new byte[steps.size() * lamps];
