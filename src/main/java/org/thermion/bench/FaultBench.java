@@ -41,7 +41,26 @@ public final class FaultBench {
     }
 
     /** Adds the rows for the demo ({@code demo} running {@code program}) and the synthetic 10^4-stage machine. */
-    public static void rows(List<BenchRow> rows, Path demo, Path program, boolean quick, Consumer<String> progress) {
+    public static void rows(List<BenchRow> all, Path demo, Path program, boolean quick, Consumer<String> progress) {
+        // Each row is also told as it is measured, so a long run stopped early still leaves its figures.
+        List<BenchRow> rows = new java.util.AbstractList<>() {
+            @Override
+            public BenchRow get(int i) {
+                return all.get(i);
+            }
+
+            @Override
+            public int size() {
+                return all.size();
+            }
+
+            @Override
+            public void add(int i, BenchRow r) {
+                all.add(i, r);
+                progress.accept("  " + r.machine() + ": " + r.measure() + " = " + r.value() + " " + r.unit()
+                        + (r.target() == null ? "" : " (target " + r.target() + ")"));
+            }
+        };
         progress.accept("measuring fault simulation and plan generation on the demo");
         Machine m = elaborate(demo, null);
         if (m == null) {
@@ -97,6 +116,10 @@ public final class FaultBench {
             rows.add(BenchRow.target(who, "fault simulation / one-fault-at-a-time reference (1 thread)", tRef / t1, "x",
                     VS_REFERENCE, false, "50 x"));
             rows.add(BenchRow.target(who, "fault simulation, 1 -> 2 threads", t1 / t2, "x", THREAD_GAIN, false, "1.5 x"));
+            if (quick) {
+                rows.add(BenchRow.missing(who, "plan generation (2 threads)", "left out with --quick (minutes)"));
+                return;
+            }
             Plan[] plan = new Plan[1];
             double tPlan = best(() -> plan[0] = new PlanGenerator(two, faults, Effort.DEFAULT).generate(), 1);
             rows.add(BenchRow.target(who, "plan generation (2 threads)", tPlan, "s", SYNTH_PLAN_SECONDS, true, "60 s"));

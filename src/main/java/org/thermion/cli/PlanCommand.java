@@ -62,11 +62,13 @@ final class PlanCommand implements Callable<Integer> {
              ProgressBar bar = ProgressBar.ticking(err, "plan", progressOptions.mode())) {
             Plan plan = in.plan(sim);
             List<Step> steps = in.steps(sim, plan, options.distinguish);
-            int largest = options.distinguish ? new Diagnosis(sim, in.faults(), steps).largestClass() : -1;
+            Diagnosis d = options.distinguish ? new Diagnosis(sim, in.faults(), steps) : null;
+            int largest = d == null ? -1 : d.largestClass();
+            int above = d == null ? 0 : d.classesAbove(PlanInputs.MOST_IN_GROUP);
             byte[][] expected = sim.expected(steps);
             bar.close();
             format.write(out, new PlanReport(in.machine(), in.circuit(), in.faults(), plan, steps, expected, options.program,
-                    largest).report());
+                    largest, above).report());
         }
         out.flush();
         return ExitCodes.OK;

@@ -1,9 +1,11 @@
 package org.thermion.cli;
 
 import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
 import org.thermion.faults.FaultCircuit;
+import org.thermion.faults.Effort;
 import org.thermion.faults.Fault;
 import org.thermion.faults.FaultList;
 import org.thermion.faults.FaultPlace;
@@ -34,9 +36,10 @@ final class PlanReport {
     private final byte[][] expected;
     private final Path program;
     private final int largest;
+    private final int above;
 
     PlanReport(Machine m, FaultCircuit c, FaultList faults, Plan plan, List<Step> steps, byte[][] expected, Path program,
-               int largest) {
+               int largest, int above) {
         this.m = m;
         this.c = c;
         this.faults = faults;
@@ -45,6 +48,7 @@ final class PlanReport {
         this.expected = expected;
         this.program = program;
         this.largest = largest;
+        this.above = above;
     }
 
     Report report() {
@@ -82,6 +86,12 @@ final class PlanReport {
         tail.add(counts.toString());
         if (largest >= 0) {
             tail.add("largest group of faults the steps cannot tell apart: " + largest);
+            if (above > 0) {
+                tail.add(Numbers.count(above, "group") + " still "
+                        + (above == 1 ? "holds" : "hold") + " more than " + PlanInputs.MOST_IN_GROUP + " faults: no "
+                        + "switch setting clocked up to " + Effort.DEFAULT.maxCycles() + " cycles after the plan tells "
+                        + (above == 1 ? "its" : "their") + " faults apart; they look alike at every lamp with this program");
+            }
         }
         r.text(tail);
         return r;

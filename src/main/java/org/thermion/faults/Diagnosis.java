@@ -358,6 +358,15 @@ public final class Diagnosis {
         return steps;
     }
 
+    /** How many classes of detected faults hold more than {@code most} distinct faults. */
+    public int classesAbove(int most) {
+        int n = 0;
+        for (Suspect s : classes) {
+            n += !s.looksGood() && size(faults, s) > most ? 1 : 0;
+        }
+        return n;
+    }
+
     /** Largest class of detected faults, counting faults that force the same wires once. */
     public int largestClass() {
         int most = 0;

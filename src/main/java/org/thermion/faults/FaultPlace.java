@@ -53,7 +53,7 @@ public record FaultPlace(String module, String stage, String net, String envelop
 
     private static FaultPlace wire(FaultCircuit c, Site s, String what) {
         Machine m = c.machine();
-        String net = m.netlist().netName(s.net());
+        String net = shown(m.netlist().netName(s.net()));
         int gate = -1;
         int latch = -1;
         String role;
@@ -76,17 +76,17 @@ public record FaultPlace(String module, String stage, String net, String envelop
         if (gate >= 0) {
             Gate g = m.netlist().gates().get(gate);
             module = module(m, g.module());
-            stage = g.stage() >= 0 ? m.stages().get(g.stage()).name() + " -> " + m.netlist().netName(g.output())
-                    : "flip-flop complement -> " + m.netlist().netName(g.output());
+            stage = (g.stage() >= 0 ? m.stages().get(g.stage()).name() : "flip-flop complement")
+                    + arrow(m.netlist().netName(g.output()));
             env = envelope(m, m.gateEnvelope()[g.id()]);
         } else if (latch >= 0) {
             Latch l = m.netlist().latches().get(latch);
             module = module(m, l.module());
-            stage = (l.stage() >= 0 ? m.stages().get(l.stage()).name() : "latch") + " -> " + m.netlist().netName(l.output());
+            stage = (l.stage() >= 0 ? m.stages().get(l.stage()).name() : "latch") + arrow(m.netlist().netName(l.output()));
             env = envelope(m, m.latchEnvelope()[l.id()]);
         }
         StringBuilder t = new StringBuilder();
-        t.append("net ").append(net).append(' ').append(what).append(" at ").append(role);
+        t.append(net.equals(UNNAMED) ? "an unnamed net" : "net " + net).append(' ').append(what).append(" at ").append(role);
         if (!stage.isEmpty()) {
             t.append(" of ").append(stage);
         }
@@ -97,6 +97,20 @@ public record FaultPlace(String module, String stage, String net, String envelop
             t.append(", tube ").append(env);
         }
         return new FaultPlace(module, stage, net, env, t.toString());
+    }
+
+    /** How a net the elaborator made for a sub-expression (no name in the source) is shown. */
+    static final String UNNAMED = "(unnamed)";
+
+    // A generated net ("lu.$18") means nothing to a builder: say it has no name.
+    private static String shown(String net) {
+        int dot = net.lastIndexOf('.');
+        return net.startsWith("$", dot + 1) ? UNNAMED : net;
+    }
+
+    private static String arrow(String net) {
+        String n = shown(net);
+        return n.equals(UNNAMED) ? "" : " -> " + n;
     }
 
     private static String module(Machine m, int id) {
