@@ -29,8 +29,9 @@ final class CaseGenerator {
     static final String PROGRAM = "pump.asm";
     static final String STIMULUS = "pump-day.csv";
 
-    /** Options left out: help and version print and stop, --replace may legitimately replace a file. */
-    private static final Set<String> SKIPPED = Set.of("--help", "--version", "-h", "-V", "--replace", "--debug");
+    /** Options left out: help and version print and stop, --replace may legitimately replace a file, --watch never ends. */
+    private static final Set<String> SKIPPED = Set.of("--help", "--version", "-h", "-V", "--replace", "--debug",
+            "--watch");
     /** Options whose large valid values mean long but legitimate work: only small or invalid values. */
     private static final Set<String> WORK = Set.of("--cycles", "--samples", "--max", "--sizes", "--seconds", "--compile-max",
             "--time", "--mutate", "--sweep", "--width");

@@ -230,7 +230,7 @@ class KeyHandlingTest {
             Map.entry("Tab", Command.NEXT_PANEL), Map.entry("ReverseTab", Command.PREVIOUS_PANEL),
             Map.entry("F2", Command.SHOW_PANEL), Map.entry("F3", Command.SHOW_PANEL),
             Map.entry("F4", Command.SHOW_PANEL), Map.entry("F5", Command.SHOW_PANEL),
-            Map.entry("w", Command.POWER_UP_VIEW),
+            Map.entry("w", Command.POWER_UP_VIEW), Map.entry("d", Command.BENCH_VIEW),
             Map.entry("]", Command.NEXT_RAIL), Map.entry("ArrowRight", Command.NEXT_RAIL),
             Map.entry("[", Command.PREVIOUS_RAIL), Map.entry("ArrowLeft", Command.PREVIOUS_RAIL),
             Map.entry("?", Command.HELP), Map.entry("h", Command.HELP), Map.entry("F1", Command.HELP),
