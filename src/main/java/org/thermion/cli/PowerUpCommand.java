@@ -55,11 +55,29 @@ final class PowerUpCommand implements Callable<Integer> {
                     + "resistor (default: ${DEFAULT-VALUE}).", defaultValue = "2s..20s:2s")
     String bypass;
 
+    @Option(names = "--fit", paramLabel = "TRACE.csv", description = "Fit the model to a current measured at switch-on "
+            + "(CSV: time_seconds, then a current column such as current_amps) and report the fitted figures, their "
+            + "uncertainty and what the trace cannot tell.")
+    Path fit;
+
+    @Option(names = "--calibrate", paramLabel = "TRACE.csv", description = "Fit the model to the trace as --fit does, then "
+            + "run the prediction asked for (the power-up, or --sweep) with the fitted figures.")
+    Path calibrate;
+
+    @Option(names = "--trace-rail", paramLabel = "RAIL", description = "The rail the trace measured (default: the rail its "
+            + "current column names, as RAIL_amps, else the one with the largest switch-on current).")
+    String traceRail;
+
     @Option(names = "--csv", paramLabel = "FILE", description = "Write the time series to FILE (RFC 4180): time_seconds, "
             + "RAIL_amps and RAIL_volts per rail (signed as declared), heater_N_kelvin per row N of the heaters table.")
     Path csv;
 
-    @Option(names = OutputFiles.REPLACE, description = "Let --csv replace an existing file that is not an earlier time series.")
+    @Option(names = "--svg", paramLabel = "FILE", description = "Also draw the curves as a picture (SVG): the rails' "
+            + "currents and load voltages against time; with --sweep, the peaks against the resistor.")
+    Path svg;
+
+    @Option(names = OutputFiles.REPLACE, description = "Let --csv or --svg replace an existing file that is not an "
+            + "earlier output of the same kind.")
     boolean replace;
 
     @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (the report's tables; --csv FILE writes the time series); default ${DEFAULT-VALUE}.",
@@ -82,8 +100,14 @@ final class PowerUpCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
+    @Mixin
+    ProgressOptions progressOptions = new ProgressOptions();
+
     @Spec
     CommandSpec spec;
+
+    /** The fit --calibrate made (null without one). */
+    private PowerUpFit.Done fitted;
 
     @Override
     public Integer call() {
@@ -121,17 +145,39 @@ final class PowerUpCommand implements Callable<Integer> {
         if (m == null) {
             return ExitCodes.BAD_INPUT;
         }
+        if (fit != null && calibrate != null) {
+            err.println("error: give --fit (report the fit) or --calibrate (predict with it), not both");
+            return ExitCodes.BAD_INPUT;
+        }
+        if (fit != null || calibrate != null) {
+            fitted = PowerUpFit.fit(m, fit != null ? fit : calibrate, traceRail, o, mode, loader, err);
+            if (fitted == null) {
+                return ExitCodes.BAD_INPUT;
+            }
+            if (fit != null) {
+                if (svg != null) {
+                    int code = PlotFile.write(svg, PowerUpFit.figure(fitted), replace, List.of(file, fit), loader.sources(), err);
+                    if (code != 0) {
+                        return code;
+                    }
+                }
+                format.write(out, PowerUpFit.report(fitted));
+                out.flush();
+                return ExitCodes.OK;
+            }
+            o = o.withAssumptions(fitted.result().assumptions());
+        }
         if (m.softStarts().isEmpty() && !rs.isEmpty()) {
             err.println("error: " + file + " declares no soft start, so --resistor has nothing to change; "
                     + "--sweep sizes one");
             return ExitCodes.BAD_INPUT;
         }
         if (m.softStarts().isEmpty() && range != null) {
-            return size(m, o, mode, range, out, err);
+            return size(m, o, mode, range, loader, out, err);
         }
         StartupNetwork net;
         try {
-            net = StartupNetwork.of(m, o.assumptions(), mode);
+            net = network(m, o, mode);
         } catch (TransientFailure e) {
             err.println("error: " + file + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
@@ -143,8 +189,17 @@ final class PowerUpCommand implements Callable<Integer> {
             if (range != null) {
                 String name = softStartName(net, range.softStart(), "--sweep");
                 double[] values = ResistorSweep.range(range.value().from(), range.value().to(), range.value().step());
-                ResistorSweep.Result sr = ResistorSweep.run(net, o, name, values);
-                format.write(out, PowerUpSweepReport.of(sr));
+                ResistorSweep.Result sr;
+                try (ProgressBar bar = ProgressBar.start(err, "resistor sweep", "resistors", progressOptions.mode())) {
+                    sr = ResistorSweep.run(net, o, name, values, done -> bar.update(done, values.length));
+                }
+                if (svg != null) {
+                    int code = PlotFile.write(svg, PowerUpFigures.sweep(sr), replace, inputs(), loader.sources(), err);
+                    if (code != 0) {
+                        return code;
+                    }
+                }
+                format.write(out, calibrated(PowerUpSweepReport.of(sr)));
                 return sr.recommended() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
             }
         } catch (IllegalArgumentException | TransientFailure e) {
@@ -162,7 +217,7 @@ final class PowerUpCommand implements Callable<Integer> {
         }
         PowerUpReport report = new PowerUpReport(result, advice);
         if (csv != null) {
-            OutputFiles.Refusal no = OutputFiles.check(csv, OutputFiles.Kind.POWERUP_CSV, replace, List.of(file), loader.sources());
+            OutputFiles.Refusal no = OutputFiles.check(csv, OutputFiles.Kind.POWERUP_CSV, replace, inputs(), loader.sources());
             if (no == null) {
                 try {
                     OutputFiles.write(csv, PowerUpSeries.of(result), StandardCharsets.UTF_8);
@@ -174,15 +229,21 @@ final class PowerUpCommand implements Callable<Integer> {
                 return no.print(err);
             }
         }
-        format.write(out, report.report(width, !noPlot, ascii ? CurrentPlot.Style.ASCII : CurrentPlot.Style.BLOCKS));
+        if (svg != null) {
+            int code = PlotFile.write(svg, PowerUpFigures.curves(result), replace, inputs(), loader.sources(), err);
+            if (code != 0) {
+                return code;
+            }
+        }
+        format.write(out, calibrated(report.report(width, !noPlot, ascii ? CurrentPlot.Style.ASCII : CurrentPlot.Style.BLOCKS)));
         return report.ok() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
     }
 
     /** {@code --sweep} on a machine without a soft start: a resistor and bypass-time table for one rail. */
     private int size(Machine m, PowerUpOptions o, DrawMode mode, PowerUpArgs.Named<PowerUpArgs.Range> range,
-                     PrintWriter out, PrintWriter err) {
+                     MachineLoader loader, PrintWriter out, PrintWriter err) {
         try {
-            StartupNetwork net = StartupNetwork.of(m, o.assumptions(), mode);
+            StartupNetwork net = network(m, o, mode);
             int rail = range.softStart() == null ? inrushRail(m, net, o) : m.railIndex(range.softStart());
             if (rail < 0) {
                 throw new IllegalArgumentException("--sweep: no rail named '" + range.softStart() + "'");
@@ -195,9 +256,18 @@ final class PowerUpCommand implements Callable<Integer> {
                         + " cells is too many (at most 10000)");
             }
             PowerUpOptions run = o.withSeconds(Math.max(o.seconds(), secs[secs.length - 1]));
-            SoftStartSizing.Table t = SoftStartSizing.run(net, run, rail, ohms, secs,
-                    Runtime.getRuntime().availableProcessors());
-            SizingTableText.write(out, t);
+            SoftStartSizing.Table t;
+            try (ProgressBar bar = ProgressBar.start(err, "sizing", "resistors", progressOptions.mode())) {
+                t = SoftStartSizing.run(net, run, rail, ohms, secs, Runtime.getRuntime().availableProcessors(),
+                        done -> bar.update(done, ohms.length));
+            }
+            if (svg != null) {
+                int code = PlotFile.write(svg, PowerUpFigures.sizing(t), replace, inputs(), loader.sources(), err);
+                if (code != 0) {
+                    return code;
+                }
+            }
+            format.write(out, calibrated(PowerUpSizingReport.of(t)));
             out.flush();
             return t.best() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
         } catch (IllegalArgumentException | TransientFailure e) {
@@ -206,8 +276,24 @@ final class PowerUpCommand implements Callable<Integer> {
         }
     }
 
+    /** The files this run reads (never to be written over). */
+    private List<Path> inputs() {
+        return calibrate == null ? List.of(file) : List.of(file, calibrate);
+    }
+
+    /** {@code r} with a line naming the fitted figures when the model was calibrated. */
+    private org.thermion.cli.report.Report calibrated(org.thermion.cli.report.Report r) {
+        return fitted == null ? r : r.text("", PowerUpFit.note(fitted));
+    }
+
+    /** The machine's network, with the figures a trace fitted when --calibrate gave one. */
+    private StartupNetwork network(Machine m, PowerUpOptions o, DrawMode mode) {
+        return fitted == null ? StartupNetwork.of(m, o.assumptions(), mode)
+                : StartupNetwork.of(m, o.assumptions(), mode, fitted.result().adjustment());
+    }
+
     /** The rail with heater strings whose switch-on current is largest: the one a soft start is for. */
-    private static int inrushRail(Machine m, StartupNetwork net, PowerUpOptions o) {
+    static int inrushRail(Machine m, StartupNetwork net, PowerUpOptions o) {
         PowerUpResult r = net.solve(o.withSampleSeconds(0));
         int best = -1;
         for (org.thermion.model.HeaterString hs : m.heaterStrings()) {

@@ -12,6 +12,7 @@ import org.thermion.model.RailDraw;
 import org.thermion.model.SoftStart;
 import org.thermion.model.StageType;
 import org.thermion.model.TubeType;
+import org.thermion.power.StageDraw;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -37,9 +38,12 @@ public final class StartupNetwork {
     final Machine machine;
     final ThermalAssumptions assumptions;
     final DrawMode drawMode;
+    /** Each stage's steady draws: computed from its circuit, or declared (the budget's figures). */
+    final StageDraw draw;
     final Emission emission;
     final List<HeaterModel> models;
     final List<String> notes;
+    final ModelAdjustment adjust;
 
     // heater states (one per position of each distinct string)
     final int states;
@@ -74,10 +78,12 @@ public final class StartupNetwork {
         }
     }
 
-    private StartupNetwork(Machine m, ThermalAssumptions a, DrawMode mode, boolean share) {
+    private StartupNetwork(Machine m, ThermalAssumptions a, DrawMode mode, boolean share, ModelAdjustment adjust) {
+        this.adjust = adjust;
         this.machine = m;
         this.assumptions = a;
         this.drawMode = mode;
+        this.draw = StageDraw.of(m);
         this.emission = new Emission(a);
         List<String> noteList = new ArrayList<>();
 
@@ -103,7 +109,8 @@ public final class StartupNetwork {
                 if (!modelIndex.containsKey(mk)) {
                     TubeType tt = m.tubes().get(e.tube());
                     modelIndex.put(mk, ml.size());
-                    ml.add(HeaterCalibration.calibrate(tt, r, a));
+                    ml.add(HeaterCalibration.calibrate(tt.name(), r, adjust.warmup(tt.warmupSeconds(), a),
+                            adjust.ratio(tt.coldHotRatio()), a));
                     if (!tt.hasWarmup()) {
                         noteList.add(tt.name() + ": no warm-up time declared; " + fmt(a.defaultWarmup())
                                 + " s assumed (the controlled-warm-up figure)");
@@ -242,7 +249,7 @@ public final class StartupNetwork {
                     arc = 10;
                     noteList.add(tube.name() + ": no arc drop declared; 10 V assumed (8-12 V is typical of small gas thyratrons)");
                 }
-                Rail fr = m.rails().get(from);
+                Rail fr = rail(from);
                 check = RelayDriverCheck.of(tube.name(), fr.name(), fr.volts(), fr.sourceOhms(), arc, tw.plateOhms(),
                         ss.relay(), tube.avgCathodeAmps(), tube.peakCathodeAmps(), Double.NaN, tube.warmupSeconds());
                 if (tube.warmupSeconds() > 0) {
@@ -298,8 +305,10 @@ public final class StartupNetwork {
     /** {@code base} with one more soft start (a copy: the network stays immutable). */
     private StartupNetwork(StartupNetwork base, Soft extra) {
         this.machine = base.machine;
+        this.adjust = base.adjust;
         this.assumptions = base.assumptions;
         this.drawMode = base.drawMode;
+        this.draw = base.draw;
         this.emission = base.emission;
         this.models = base.models;
         this.notes = base.notes;
@@ -337,7 +346,17 @@ public final class StartupNetwork {
 
     /** Builds the network of {@code m} under the given assumptions. */
     public static StartupNetwork of(Machine m, ThermalAssumptions a, DrawMode mode) {
-        return new StartupNetwork(m, a, mode, true);
+        return new StartupNetwork(m, a, mode, true, ModelAdjustment.none());
+    }
+
+    /** The network of {@code m} with the figures a bench trace corrected ({@link TraceFit}). */
+    public static StartupNetwork of(Machine m, ThermalAssumptions a, DrawMode mode, ModelAdjustment adjust) {
+        return new StartupNetwork(m, a, mode, true, adjust);
+    }
+
+    /** Rail {@code r} as the model sees it (declared, or as a bench trace corrected it). */
+    Rail rail(int r) {
+        return adjust.apply(machine.rails().get(r), r);
     }
 
     /**
@@ -345,7 +364,7 @@ public final class StartupNetwork {
      * answer (for tests of the sharing and for the bench's worst case).
      */
     public static StartupNetwork unshared(Machine m, ThermalAssumptions a, DrawMode mode) {
-        return new StartupNetwork(m, a, mode, false);
+        return new StartupNetwork(m, a, mode, false, ModelAdjustment.none());
     }
 
     /** Solves the transient. */
@@ -370,8 +389,8 @@ public final class StartupNetwork {
 
     /** Steady current a stage instance draws from a rail under the draw mode, amperes. */
     double drawAmps(StageType st, int rail) {
-        double low = sum(st.drawLow(), rail), high = sum(st.drawHigh(), rail), always = sum(st.drawAlways(), rail);
-        return always + (drawMode == DrawMode.HIGHEST ? Math.max(low, high) : 0.5 * (low + high));
+        return drawMode == DrawMode.HIGHEST ? draw.maxAmps(st, rail)
+                : 0.5 * (draw.amps(st, rail, false) + draw.amps(st, rail, true));
     }
 
     private void addDraw(Machine m, StageType st, int[] envState, int env, List<Map<Integer, Double>> plate) {
@@ -383,16 +402,6 @@ public final class StartupNetwork {
                 plate.get(r).merge(s, amps / v, Double::sum);
             }
         }
-    }
-
-    private static double sum(List<RailDraw> draws, int rail) {
-        double a = 0;
-        for (RailDraw d : draws) {
-            if (d.rail() == rail) {
-                a += d.amps();
-            }
-        }
-        return a;
     }
 
     static String fmt(double v) {
