@@ -1,5 +1,6 @@
 package org.thermion.circuit;
 
+import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
 
@@ -20,15 +21,19 @@ public final class MachineCircuits {
 
     private MachineCircuits(RailSet rails, Map<String, StageCircuit> byStage, TubeLibrary tubes) {
         this.rails = rails;
-        this.byStage = Map.copyOf(byStage);
+        this.byStage = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(byStage));
         this.tubes = tubes;
         this.solver = new StageSolver(rails);
     }
 
-    /** The machine's circuits at its declared rail voltages (the library's stage circuits, by stage name). */
+    /** The machine's circuits as its stage blocks declare them, at its declared rail voltages. */
     public static MachineCircuits of(Machine machine) {
-        TubeLibrary tubes = new TubeLibrary();
-        return new MachineCircuits(RailSet.of(machine.rails()), LibraryCircuits.of(tubes), tubes);
+        TubeLibrary tubes = TubeLibrary.of(machine.tubes());
+        Map<String, StageCircuit> byStage = new LinkedHashMap<>();
+        for (StageType st : machine.stages()) {
+            StageCircuits.build(st, machine.tubes().get(st.tube()).name(), tubes).ifPresent(c -> byStage.put(st.name(), c));
+        }
+        return new MachineCircuits(RailSet.of(machine.rails()), byStage, tubes);
     }
 
     /** The rails the circuits are solved at. */
@@ -39,6 +44,11 @@ public final class MachineCircuits {
     /** The circuit of a stage type, empty when the stage has none (a declared-current stage). */
     public Optional<StageCircuit> circuit(StageType stage) {
         return Optional.ofNullable(byStage.get(stage.name()));
+    }
+
+    /** Every stage type's circuit by stage name, in declaration order. */
+    public Map<String, StageCircuit> circuitsByName() {
+        return byStage;
     }
 
     /** The tube models the circuits use. */

@@ -5,7 +5,8 @@ import java.util.List;
 /**
  * A tube type by its trade designation. Capacitances are per section in farads;
  * {@code warmupSeconds} and {@code coldHotRatio} are NaN when not declared.
- * Ratings that do not apply are NaN.
+ * Ratings that do not apply are NaN. {@code curves} is the electrical model (null when the
+ * block declares none: the tube's stages must then state their currents).
  */
 public record TubeType(
         String name,
@@ -22,7 +23,8 @@ public record TubeType(
         double avgCathodeAmps,
         double peakCathodeAmps,
         double arcDropVolts,
-        String source) {
+        String source,
+        TubeCurves curves) {
 
     /** The heater rating used when nothing else is chosen: the first one declared. */
     public HeaterRating defaultHeater() {
