@@ -143,7 +143,9 @@ final class Parts {
         PropLine source = b.line("source");
         return new TubeType(name, kind, (int) b.num("sections"), List.copyOf(heaters), b.num("warmup"), b.num("coldratio"),
                 cgk, cgp, cpk, cin, cout, b.num("avgcurrent"), b.num("peakcurrent"), b.num("arcdrop"),
-                source == null ? "" : source.word("value"), new TubeCurvesReader(diags).read(name, kind, b));
+                source == null ? "" : source.word("value"),
+                new BasingReader(diags).read(b.lines("basing"), kind, (int) b.num("sections")),
+                new TubeCurvesReader(diags).read(name, kind, b));
     }
 
     /** The stage named, built on first use; -1 (reported) when unknown. */
