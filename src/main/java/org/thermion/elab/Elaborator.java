@@ -241,6 +241,7 @@ public final class Elaborator {
                 for (var sb : isa.state()) {
                     nb.read(sb.net());
                 }
+                IsaBuilder.checkWordSource(isa, rom, pc, decls.isas.get(0), diags);
                 if (rom != null && rom.width() != isa.wordBits()) {
                     diags.error(decls.isas.get(0).name().span(), "the isa word is " + isa.wordBits() + " bits but the ROM is "
                             + rom.width(), "make `word` and the ROM width agree");
