@@ -200,6 +200,11 @@ public final class Verifier {
                 notes.add("opcodes without an instruction, not checked: " + String.join(" ", free));
             }
         }
+        List<String> unbuilt = machine.modules().stream().filter(mi -> !mi.built()).map(mi -> mi.path()).toList();
+        if (!unbuilt.isEmpty()) {
+            notes.add("modules not built yet (" + String.join(", ", unbuilt) + ") were checked from their description:"
+                    + " the built part does what the ISA says when their switches are set as they would drive them");
+        }
         if (isa.inhibitNet() >= 0) {
             notes.add("skips: every case also ran as the instruction skipped (decoder inhibited by "
                     + machine.netlist().netName(isa.inhibitNet()) + "): no state may change, the pc counts on, the"
