@@ -39,6 +39,9 @@ final class PlanCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
+    @Mixin
+    ProgressOptions progressOptions = new ProgressOptions();
+
     @Spec
     CommandSpec spec;
 
@@ -55,11 +58,13 @@ final class PlanCommand implements Callable<Integer> {
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
-        try (FaultSimulator sim = in.simulator(options.threads)) {
+        try (FaultSimulator sim = in.simulator(options.threads);
+             ProgressBar bar = ProgressBar.ticking(err, "plan", progressOptions.mode())) {
             Plan plan = in.plan(sim);
             List<Step> steps = in.steps(sim, plan, options.distinguish);
             int largest = options.distinguish ? new Diagnosis(sim, in.faults(), steps).largestClass() : -1;
             byte[][] expected = sim.expected(steps);
+            bar.close();
             format.write(out, new PlanReport(in.machine(), in.circuit(), in.faults(), plan, steps, expected, options.program,
                     largest).report());
         }
