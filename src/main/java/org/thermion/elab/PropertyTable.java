@@ -264,7 +264,9 @@ final class PropertyTable {
             Property.of("pc", "the program counter").opens(PC),
             Property.of("inputs", "top-module inputs driven from outside (switches, sensors)",
                     new Slot.Names("ports", "input ports")).many(),
-            Property.of("outputs", "top-module outputs shown and logged", new Slot.Names("ports", "output ports")).many());
+            Property.of("outputs", "top-module outputs shown and logged", new Slot.Names("ports", "output ports")).many(),
+            Property.of("notbuilt", "module instances not built yet: the outputs they would drive become switches (machine"
+                    + " inputs named as the nets)", new Slot.Names("instances", "instance names")).many());
 
     private static final Slot.AnyOrder HEATER_OPTIONS = new Slot.AnyOrder(List.of(
             new Slot.Optional("at", List.of(q("volts", "heater wiring voltage", Unit.VOLT, above(0, 200)))),
