@@ -25,10 +25,12 @@ final class Declarations {
     final Map<String, Prop> softStarts = new LinkedHashMap<>();
     final List<Prop> realize = new ArrayList<>();
     final List<Prop> machines = new ArrayList<>();
+    final List<Prop> margins = new ArrayList<>();
     final List<Decl.Isa> isas = new ArrayList<>();
     private final Map<String, Span> userNames = new LinkedHashMap<>();
 
-    static final List<String> KINDS = List.of("tube", "stage", "rail", "heaters", "softstart", "realize", "machine");
+    static final List<String> KINDS = List.of("tube", "stage", "rail", "heaters", "softstart", "realize", "machine",
+            "margins");
 
     void add(SourceFile file, boolean library, Diagnostics diags) {
         for (Decl d : file.decls()) {
@@ -52,6 +54,7 @@ final class Declarations {
             case "heaters" -> heaters.add(p);
             case "realize" -> realize.add(p);
             case "machine" -> machines.add(p);
+            case "margins" -> margins.add(p);
             default -> diags.error(p.key().span(), "unknown declaration '" + kind + "'",
                     hintFor(kind, KINDS, "expected one of: " + String.join(", ", KINDS) + ", module, isa, include"));
         }

@@ -81,6 +81,11 @@ final class Packer {
     }
 
     /** Reads a {@code heaters on RAIL { ... }} block into rules. */
+    /** The line of each heater rule, in rule order. */
+    List<Span> ruleSpans() {
+        return List.copyOf(ruleSpans);
+    }
+
     void readRules(Prop p) {
         PropReader head = new PropReader(p, diags);
         head.expectWord("on");
