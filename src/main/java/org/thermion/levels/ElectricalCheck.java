@@ -41,6 +41,14 @@ public final class ElectricalCheck {
 
     private static void margins(LevelAnalysis a, List<Finding> out) {
         for (NetLevel n : a.nets()) {
+            if (n.high() == null && !n.stage().isEmpty() && n.voh() - n.vol() < 2 * a.minMargin()) {
+                // no margin of its own (it feeds diode gates or followers), yet its output hardly moves
+                out.add(new Finding(true, "swing", n.use(), -1, "net '" + n.name() + "' (" + n.stage()
+                        + ") swings only from " + v(n.vol()) + " to " + v(n.voh()) + " at nominal values, less than "
+                        + "twice the minimum margin (" + v(2 * a.minMargin()) + "): the stage does not switch at "
+                        + "these rails", "check the stage's grid dividers against the bias rail, or use another stage"));
+                continue;
+            }
             WorstMargin w = n.worse();
             if (w == null || n.stage().isEmpty() || !(w.worst() < a.minMargin())) {
                 continue;
@@ -63,8 +71,7 @@ public final class ElectricalCheck {
                 fix = high ? "raise the high level (a smaller plate load, a higher B+) or the receivers' dividers"
                         : "lower the low level (a stronger tube, a larger plate load) or move the receivers' dividers";
             }
-            out.add(new Finding(w.worst() < 0, "margin", new StageUse(n.source() == NetFanout.Source.LATCH, n.driver()),
-                    -1, msg, fix));
+            out.add(new Finding(w.worst() < 0, "margin", n.use(), -1, msg, fix));
         }
     }
 

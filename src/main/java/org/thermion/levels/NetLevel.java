@@ -7,9 +7,10 @@ import org.thermion.circuit.WorstMargin;
  * stages, its high and low level under that load, the receivers' most demanding thresholds, the
  * high and low noise margins at nominal values and at their worst tolerance corners, and the most
  * receivers of its heaviest kind the driver could feed at that worst corner with the declared
- * minimum margin. Volts; NaN where a figure does not apply ({@code note} says why).
+ * minimum margin. Volts; NaN where a figure does not apply ({@code note} says why). {@code use} is
+ * the driving stage use, null for a net driven from outside.
  */
-public record NetLevel(String name, String stage, NetFanout.Source source, int driver, int loads, String receivers,
+public record NetLevel(String name, String stage, StageUse use, int loads, String receivers,
                        double voh, double vol, double vih, double vil, WorstMargin high, WorstMargin low,
                        int fanOutLimit, String limitKind, String note) {
 
