@@ -41,7 +41,7 @@ public final class ElectricalCheck {
 
     private static void margins(LevelAnalysis a, List<Finding> out) {
         for (NetLevel n : a.nets()) {
-            if (n.high() == null && !n.stage().isEmpty() && n.voh() - n.vol() < 2 * a.minMargin()) {
+            if (n.high() == null && n.restoring() && n.voh() - n.vol() < 2 * a.minMargin()) {
                 // no margin of its own (it feeds diode gates or followers), yet its output hardly moves
                 out.add(new Finding(true, "swing", n.use(), -1, "net '" + n.name() + "' (" + n.stage()
                         + ") swings only from " + v(n.vol()) + " to " + v(n.voh()) + " at nominal values, less than "
@@ -133,7 +133,15 @@ public final class ElectricalCheck {
         }
     }
 
-    /** Series strings at the rail's voltage under the heaviest static load (source resistance times current). */
+    /**
+     * A rail's voltage under load: V = V0 - Rs (Ih V / V0 + Is), where the heaters (Ih at V0)
+     * scale with the voltage (fixed hot resistances) and the stages' Is is taken as fixed.
+     */
+    static double loadedVolts(double nominal, double sourceOhms, double heaterAmps, double stageAmps) {
+        return (nominal - sourceOhms * stageAmps) / (1 + sourceOhms * heaterAmps / nominal);
+    }
+
+    /** Series strings at the rail's voltage under the heaviest static load. */
     private static void heaters(Machine m, List<Finding> out) {
         if (m.heaterStrings().isEmpty()) {
             return;
@@ -147,7 +155,8 @@ public final class ElectricalCheck {
             }
             Rail rail = m.rails().get(hs.rail());
             double nominal = Math.abs(rail.volts());
-            double loaded = nominal - rail.sourceOhms() * (h.railAmps(hs.rail()) + budget.staticHighRail(hs.rail()));
+            double loaded = loadedVolts(nominal, rail.sourceOhms(), h.railAmps(hs.rail()),
+                    budget.staticHighRail(hs.rail()));
             double k = loaded / nominal;
             for (HeaterAnalysis.Heater x : s.heaters()) {
                 double volts = x.volts() * k;

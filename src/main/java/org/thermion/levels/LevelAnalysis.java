@@ -198,7 +198,7 @@ public final class LevelAnalysis {
         }
         Optional<StageCircuit> driver = circuits.circuit(st);
         if (driver.isEmpty()) {
-            return new NetLevel(node.name(), st.name(), use, loads, receiverText, Double.NaN,
+            return new NetLevel(node.name(), st.name(), use, null, false, loads, receiverText, Double.NaN,
                     Double.NaN, Double.NaN, Double.NaN, null, null, -1, "",
                     "stage " + st.name() + " declares its currents: no circuit to solve");
         }
@@ -208,7 +208,8 @@ public final class LevelAnalysis {
             NetAnalysis a = analysis.net(d, levels, List.of());
             remember(use, a);
             NoiseMargins m = a.margins();
-            return new NetLevel(node.name(), st.name(), use, loads, receiverText, m.voh(),
+            return new NetLevel(node.name(), st.name(), use, levels, MarginAnalysis.restores(d), loads, receiverText,
+                    m.voh(),
                     m.vol(), Double.NaN, Double.NaN, null, null, -1, "",
                     m.problem() != null && !"no receivers".equals(m.problem()) ? m.problem()
                             : loads == 0 ? "feeds no stage (an output)" : "its receivers declare their currents");
@@ -224,7 +225,8 @@ public final class LevelAnalysis {
         String note = m.problem() != null ? m.problem() : missing.isEmpty() ? "" : "not counted: " + missing;
         double vih = m.thresholds() == null ? Double.NaN : m.thresholds().vih();
         double vil = m.thresholds() == null ? Double.NaN : m.thresholds().vil();
-        return new NetLevel(node.name(), st.name(), use, loads, receiverText, m.voh(), m.vol(),
+        return new NetLevel(node.name(), st.name(), use, levels, MarginAnalysis.restores(d), loads, receiverText,
+                m.voh(), m.vol(),
                 vih, vil, f.high(), f.low(), f.fanOut(), f.limitKind(), note);
     }
 
@@ -268,12 +270,12 @@ public final class LevelAnalysis {
             }
         }
         if (!Double.isFinite(vil)) {
-            return new NetLevel(node.name(), "", null, loads, text, high, low, Double.NaN, Double.NaN,
+            return new NetLevel(node.name(), "", null, null, false, loads, text, high, low, Double.NaN, Double.NaN,
                     null, null, -1, "", "driven from outside");
         }
         WorstMargin h = new WorstMargin(WorstMargin.Side.HIGH, high - vih, high - vih, Corner.NOMINAL);
         WorstMargin l = new WorstMargin(WorstMargin.Side.LOW, vil - low, vil - low, Corner.NOMINAL);
-        return new NetLevel(node.name(), "", null, loads, text, high, low, vih, vil, h, l, -1, "",
+        return new NetLevel(node.name(), "", null, null, false, loads, text, high, low, vih, vil, h, l, -1, "",
                 "driven from outside (0 V / highest rail)");
     }
 

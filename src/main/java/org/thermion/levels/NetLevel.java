@@ -1,5 +1,6 @@
 package org.thermion.levels;
 
+import org.thermion.circuit.InputLevels;
 import org.thermion.circuit.WorstMargin;
 
 /**
@@ -8,9 +9,12 @@ import org.thermion.circuit.WorstMargin;
  * high and low noise margins at nominal values and at their worst tolerance corners, and the most
  * receivers of its heaviest kind the driver could feed at that worst corner with the declared
  * minimum margin. Volts; NaN where a figure does not apply ({@code note} says why). {@code use} is
- * the driving stage use, null for a net driven from outside.
+ * the driving stage use and {@code inputs} the levels its inputs were solved at (both null for a
+ * net driven from outside); {@code restoring} says whether the driver has gain (not a diode gate
+ * or a follower).
  */
-public record NetLevel(String name, String stage, StageUse use, int loads, String receivers,
+public record NetLevel(String name, String stage, StageUse use, InputLevels inputs, boolean restoring, int loads,
+                       String receivers,
                        double voh, double vol, double vih, double vil, WorstMargin high, WorstMargin low,
                        int fanOutLimit, String limitKind, String note) {
 
