@@ -23,7 +23,7 @@ public final class MarginAnalysis {
 
     private final java.util.Map<MarginKey, NoiseMargins> marginCache = new java.util.HashMap<>();
     private final java.util.Map<MarginKey, NetAnalysis> netCache = new java.util.HashMap<>();
-    private final java.util.Map<MarginKey, Critical> criticalStates = new java.util.HashMap<>();
+    private final java.util.Map<StateKey, Critical> criticalStates = new java.util.HashMap<>();
 
     private record ThresholdKey(StageCircuit receiver, Corner corner) {
     }
@@ -173,6 +173,9 @@ public final class MarginAnalysis {
     private record State(boolean stored, boolean[] in) {
     }
 
+    private record StateKey(StageCircuit driver, InputLevels levels) {
+    }
+
     /** The input states that set a net's high and low level at nominal values. */
     private record Critical(State high, State low) {
     }
@@ -183,14 +186,15 @@ public final class MarginAnalysis {
         double voh = Double.POSITIVE_INFINITY;
         double vol = Double.NEGATIVE_INFINITY;
         List<State> tried = new ArrayList<>();
-        // Neither a tolerance corner nor the number of loads changes which input state sets a
-        // level, only the level: every state is solved once, at nominal values with one load.
-        List<StageCircuit> one = receivers.size() <= 1 ? receivers : List.of(receivers.get(0));
-        boolean reference = corner.factors().isEmpty() && receivers.size() <= 1;
-        Critical critical = null;
-        if (!reference) {
-            margins(driver, levels, one, Corner.NOMINAL);
-            critical = criticalStates.get(new MarginKey(driver, levels, one, Corner.NOMINAL));
+        // Neither a tolerance corner nor the loads change which input state sets a level, only
+        // the level: every state is solved once per driver and input levels, at nominal values
+        // with the first loads asked for (the solves a net's own analysis makes anyway).
+        StateKey stateKey = new StateKey(driver, levels);
+        Critical critical = criticalStates.get(stateKey);
+        boolean reference = critical == null && corner.factors().isEmpty();
+        if (critical == null && !reference) {
+            margins(driver, levels, receivers, Corner.NOMINAL);
+            critical = criticalStates.get(stateKey);
         }
         if (critical != null) {
             if (critical.high() != null) {
@@ -225,7 +229,7 @@ public final class MarginAnalysis {
             }
         }
         if (reference) {
-            criticalStates.put(new MarginKey(driver, levels, receivers, corner), new Critical(high, low));
+            criticalStates.put(stateKey, new Critical(high, low));
         }
         if (receivers.isEmpty()) {
             return new NoiseMargins(voh, vol, null, 0, "no receivers");
