@@ -41,7 +41,7 @@ public final class ElectricalCheck {
 
     private static void margins(LevelAnalysis a, List<Finding> out) {
         for (NetLevel n : a.nets()) {
-            if (n.high() == null && n.restoring() && n.voh() - n.vol() < 2 * a.minMargin()) {
+            if (n.high() == null && n.restoring() && n.loads() > 0 && n.voh() - n.vol() < 2 * a.minMargin()) {
                 // no margin of its own (it feeds diode gates or followers), yet its output hardly moves
                 out.add(new Finding(true, "swing", n.use(), -1, "net '" + n.name() + "' (" + n.stage()
                         + ") swings only from " + v(n.vol()) + " to " + v(n.voh()) + " at nominal values, less than "
@@ -134,40 +134,29 @@ public final class ElectricalCheck {
     }
 
     /**
-     * A rail's voltage under load: V = V0 - Rs (Ih V / V0 + Is), where the heaters (Ih at V0)
-     * scale with the voltage (fixed hot resistances) and the stages' Is is taken as fixed.
+     * Series strings at the rail's voltage under the machine's static load: the budget's heater
+     * analysis already takes each rail at its loaded voltage ({@code power.LoadedRail}).
      */
-    static double loadedVolts(double nominal, double sourceOhms, double heaterAmps, double stageAmps) {
-        return (nominal - sourceOhms * stageAmps) / (1 + sourceOhms * heaterAmps / nominal);
-    }
-
-    /** Series strings at the rail's voltage under the heaviest static load. */
     private static void heaters(Machine m, List<Finding> out) {
         if (m.heaterStrings().isEmpty()) {
             return;
         }
-        Budget budget = new Budget(m);
-        HeaterAnalysis h = budget.heaters();
+        HeaterAnalysis h = new Budget(m).heaters();
         for (HeaterAnalysis.StringResult s : h.strings()) {
             HeaterString hs = s.string();
             if (hs.envelopes().size() < 2) {
                 continue;
             }
             Rail rail = m.rails().get(hs.rail());
-            double nominal = Math.abs(rail.volts());
-            double loaded = loadedVolts(nominal, rail.sourceOhms(), h.railAmps(hs.rail()),
-                    budget.staticHighRail(hs.rail()));
-            double k = loaded / nominal;
             for (HeaterAnalysis.Heater x : s.heaters()) {
-                double volts = x.volts() * k;
-                double dev = volts / x.rating().volts() - 1;
-                if (Math.abs(dev) > HeaterAnalysis.TOLERANCE + 1e-9) {
+                if (x.overVoltage() || x.underVoltage()) {
                     out.add(new Finding(true, "heater", null, hs.rule(), "series heater string " + (s.index() + 1)
                             + " on " + rail.name() + ": " + x.designator() + " " + m.tubes().get(x.tube()).name()
-                            + " gets " + v(volts) + " against " + v(x.rating().volts()) + " rated ("
-                            + String.format(Locale.ROOT, "%+.0f %%", 100 * dev) + ") with the rail at " + v(loaded)
-                            + " under full load (" + v(nominal) + " nominal; within ±10 % is common practice)",
-                            dev > 0 ? "a dropping resistor in the string, or more heaters in series"
+                            + " gets " + v(x.volts()) + " against " + v(x.rating().volts()) + " rated ("
+                            + String.format(Locale.ROOT, "%+.0f %%", 100 * x.deviation()) + ") with the rail at "
+                            + v(s.railVolts()) + " under load (" + v(Math.abs(rail.volts()))
+                            + " nominal; within ±10 % is common practice)",
+                            x.deviation() > 0 ? "a dropping resistor in the string, or more heaters in series"
                                     : "fewer heaters in the string, or a higher rail"));
                     break;
                 }
