@@ -8,7 +8,6 @@ import java.util.List;
 import java.util.Map;
 
 import org.junit.jupiter.api.Test;
-import org.thermion.circuit.LibraryCircuits;
 import org.thermion.circuit.MachineCircuits;
 import org.thermion.circuit.MarginAnalysis;
 import org.thermion.circuit.StageCircuit;
@@ -24,7 +23,7 @@ import org.thermion.model.MarginRules;
 
 /** Levels, margins and fan-out of every net of small machines, read as a builder would. */
 class LevelAnalysisTest {
-    /** Rails the library's logic stages were drawn for: 48 V B+, -12 V bias (LibraryCircuits). */
+    /** Rails the library's logic stages were drawn for: 48 V B+, -12 V bias (parts library). */
     static final String RAILS = """
             rail bplus { voltage 48 V }
             rail bias { voltage -12 V }
@@ -56,6 +55,13 @@ class LevelAnalysisTest {
         Machine m = e.elaborateText(Path.of("test.machine"), text);
         assertThat(d.hasErrors()).as("%s", d.all()).isFalse();
         return new Loaded(m, e.sourceMap(), d);
+    }
+
+    /** The machine's stage circuits by stage name. */
+    static Map<String, StageCircuit> circuits(Machine m, MachineCircuits mc) {
+        Map<String, StageCircuit> out = new java.util.HashMap<>();
+        m.stages().forEach(st -> mc.circuit(st).ifPresent(c -> out.put(st.name(), c)));
+        return out;
     }
 
     static NetLevel net(LevelAnalysis a, String name) {
@@ -103,7 +109,7 @@ class LevelAnalysisTest {
         MachineCircuits mc = MachineCircuits.of(l.machine());
         LevelAnalysis a = LevelAnalysis.of(l.machine(), mc, new Tolerances(0.05, 0.05, 0.7), 1.0);
         NetLevel mid = net(a, "mid");
-        Map<String, StageCircuit> lib = LibraryCircuits.of(mc.tubes());
+        Map<String, StageCircuit> lib = circuits(l.machine(), mc);
         MarginAnalysis m = new MarginAnalysis(mc.solver());
         StageCircuit kind = lib.get(mid.limitKind());
         int limit = mid.fanOutLimit();
@@ -120,7 +126,7 @@ class LevelAnalysisTest {
         MachineCircuits mc = MachineCircuits.of(l.machine());
         Tolerances t = new Tolerances(0.05, 0.05, 0.7);
         LevelAnalysis a = LevelAnalysis.of(l.machine(), mc, t, 1.0);
-        Map<String, StageCircuit> lib = LibraryCircuits.of(mc.tubes());
+        Map<String, StageCircuit> lib = circuits(l.machine(), mc);
         // 'mid' with its real receivers, at the input levels the machine gave its driver
         NetLevel mid = net(a, "mid");
         List<StageCircuit> receivers = List.of(lib.get("pentode_inverter"), lib.get("triode_nor2"),
