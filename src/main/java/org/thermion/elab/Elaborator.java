@@ -251,7 +251,10 @@ public final class Elaborator {
         Packer packer = new Packer(parts, diags);
         List<ModuleInstance> modules = new ArrayList<>(ex.tree.modules);
         List<SoftStart> softStarts = new ArrayList<>();
-        StagePlacement placed = StagePlacement.place(nb, parts, packer);
+        for (Prop pk : decls.packing) {
+            packer.readPacking(pk);
+        }
+        StagePlacement placed = StagePlacement.place(nb, parts, packer, modules, diags);
         int[] gateEnvelope = placed.gateEnvelope;
         int[] latchEnvelope = placed.latchEnvelope;
         SoftStartReader softStartReader = new SoftStartReader(parts, packer, diags);

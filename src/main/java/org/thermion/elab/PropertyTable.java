@@ -202,9 +202,20 @@ final class PropertyTable {
 
     static final PropertyTable REALIZE = new PropertyTable("realize", "realize { ... }", realizeEntries());
 
+    static final PropertyTable PACKING = new PropertyTable("packing", "packing { ... }",
+            Property.of("share", "`share per board TUBE ...`: sections of these tube types may share an envelope across modules of one board "
+                            + "(each instance under the top with everything below it) or of the whole machine",
+                    new Slot.Word("per"), name("scope", "sharing scope", List.of("module", "board", "machine")),
+                    new Slot.Names("tubes", "tube types"))
+                    .byDefault("per module").many(),
+            Property.of("envelope", "these stages (named by their output nets, a latch by its Q) share one envelope, "
+                            + "which keeps the given designator: a builder's already wired tube",
+                    name("name", "an envelope designator", List.of()), new Slot.Text("stages", "the stages' output nets"))
+                    .byDefault("none").many());
+
     /** Every table, in the order the reference lists them. */
-    static final List<PropertyTable> ALL = List.of(RAIL, TUBE, STAGE, HEATERS, SOFTSTART, RELAY, REALIZE, MACHINE, CLOCK,
-            ROM, PC);
+    static final List<PropertyTable> ALL = List.of(RAIL, TUBE, STAGE, HEATERS, SOFTSTART, RELAY, REALIZE, PACKING, MACHINE,
+            CLOCK, ROM, PC);
 
     Property get(String key) {
         for (Property p : properties) {
