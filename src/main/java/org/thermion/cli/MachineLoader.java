@@ -29,6 +29,15 @@ public final class MachineLoader {
         return m;
     }
 
+    /** As {@link #load}, keeping modules marked {@code notbuilt} in the logic (flagged): the whole description. */
+    public Machine loadAsDescribed(Path file, PrintWriter err) {
+        Machine m = new Elaborator(sources, diags).asDescribed().elaborate(file);
+        if (diags.hasErrors()) {
+            new DiagnosticPrinter(sources).print(diags, err);
+        }
+        return diags.hasErrors() ? null : m;
+    }
+
     /**
      * As {@link #load}, but a file of modules without a machine block (meant for {@code include})
      * is no error: the machine is null and {@link #modulesAlone()} lists its modules, checked alone.

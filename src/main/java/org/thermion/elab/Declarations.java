@@ -22,6 +22,7 @@ final class Declarations {
     final Map<String, Prop> rails = new LinkedHashMap<>();
     final Map<String, Decl.Module> modules = new LinkedHashMap<>();
     final List<Prop> heaters = new ArrayList<>();
+    final List<Prop> packing = new ArrayList<>();
     final Map<String, Prop> softStarts = new LinkedHashMap<>();
     final List<Prop> realize = new ArrayList<>();
     final List<Prop> machines = new ArrayList<>();
@@ -29,8 +30,8 @@ final class Declarations {
     final List<Decl.Isa> isas = new ArrayList<>();
     private final Map<String, Span> userNames = new LinkedHashMap<>();
 
-    static final List<String> KINDS = List.of("tube", "stage", "rail", "heaters", "softstart", "realize", "machine",
-            "margins");
+    static final List<String> KINDS = List.of("tube", "stage", "rail", "heaters", "softstart", "realize", "packing",
+            "machine", "margins");
 
     void add(SourceFile file, boolean library, Diagnostics diags) {
         for (Decl d : file.decls()) {
@@ -52,6 +53,7 @@ final class Declarations {
             case "rail" -> namedProp(rails, p, "rail", library, diags);
             case "softstart" -> namedProp(softStarts, p, "softstart", library, diags);
             case "heaters" -> heaters.add(p);
+            case "packing" -> packing.add(p);
             case "realize" -> realize.add(p);
             case "machine" -> machines.add(p);
             case "margins" -> margins.add(p);

@@ -33,6 +33,7 @@ import java.util.Map;
 public final class Elaborator {
     private final SourceSet sources;
     private final Diagnostics diags;
+    private boolean asDescribed;
     private static final int MAX_PHASES = 8;
     private List<ModuleCheck> modulesAlone = List.of();
     private SourceMap sourceMap = SourceMap.NONE;
@@ -40,6 +41,16 @@ public final class Elaborator {
     public Elaborator(SourceSet sources, Diagnostics diags) {
         this.sources = sources;
         this.diags = diags;
+    }
+
+    /**
+     * Keeps the modules a machine block marks {@code notbuilt} in the logic (still flagged not
+     * built): the whole description, for {@code verify}'s proof of the built part among the
+     * modules it was designed with.
+     */
+    public Elaborator asDescribed() {
+        this.asDescribed = true;
+        return this;
     }
 
     /** Elaborates a file on disk; null when errors were reported. */
@@ -181,6 +192,10 @@ public final class Elaborator {
                 }
             }
         }
+        NotBuilt notBuilt = NotBuilt.resolve(mb.notBuilt, ex.tree.modules, diags);
+        if (notBuilt.any() && !asDescribed) {
+            notBuilt.apply(nb, inputs, outputs);
+        }
         Rom rom = null;
         ProgramCounter pc = null;
         if (mb.romData != null) {
@@ -247,6 +262,7 @@ public final class Elaborator {
                 for (var sb : isa.state()) {
                     nb.read(sb.net());
                 }
+                IsaBuilder.checkWordSource(isa, rom, pc, decls.isas.get(0), diags);
                 if (rom != null && rom.width() != isa.wordBits()) {
                     diags.error(decls.isas.get(0).name().span(), "the isa word is " + isa.wordBits() + " bits but the ROM is "
                             + rom.width(), "make `word` and the ROM width agree");
@@ -256,8 +272,12 @@ public final class Elaborator {
 
         Packer packer = new Packer(parts, diags);
         List<ModuleInstance> modules = new ArrayList<>(ex.tree.modules);
+        modules.replaceAll(mi -> notBuilt.modules.contains(mi.id()) ? mi.notBuilt() : mi);
         List<SoftStart> softStarts = new ArrayList<>();
-        StagePlacement placed = StagePlacement.place(nb, parts, packer);
+        for (Prop pk : decls.packing) {
+            packer.readPacking(pk);
+        }
+        StagePlacement placed = StagePlacement.place(nb, parts, packer, modules, diags);
         int[] gateEnvelope = placed.gateEnvelope;
         int[] latchEnvelope = placed.latchEnvelope;
         SoftStartReader softStartReader = new SoftStartReader(parts, packer, diags);
@@ -281,7 +301,7 @@ public final class Elaborator {
         if (order == null) {
             return null;
         }
-        new Linter(nb, ex.tree, ex.mapper.driverOutputs, diags, inputs).run();
+        new Linter(nb, notBuilt.any() && !asDescribed ? notBuilt.builtPart(ex.tree) : ex.tree, ex.mapper.driverOutputs, diags, inputs).run();
         if (diags.hasErrors()) {
             return null;
         }
