@@ -1,6 +1,7 @@
 package org.thermion.cli;
 
 import org.thermion.elab.Elaborator;
+import org.thermion.elab.SourceMap;
 import org.thermion.elab.ModuleCheck;
 import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
@@ -16,6 +17,7 @@ public final class MachineLoader {
     private final SourceSet sources = new SourceSet();
     private final Diagnostics diags = new Diagnostics();
     private List<ModuleCheck> modulesAlone = List.of();
+    private SourceMap sourceMap = SourceMap.NONE;
     private boolean pointers;
 
     /** Errors printed from now on also name the section of the language reference that explains them. */
@@ -51,6 +53,7 @@ public final class MachineLoader {
         Elaborator elaborator = new Elaborator(sources, diags);
         Machine m = elaborator.elaborate(file);
         modulesAlone = elaborator.modulesAlone();
+        sourceMap = elaborator.sourceMap();
         if (diags.hasErrors() || showWarnings) {
             new DiagnosticPrinter(sources, pointers).print(diags, err);
         }
@@ -60,6 +63,11 @@ public final class MachineLoader {
     /** The modules checked on their own when the last file loaded had no machine block. */
     public List<ModuleCheck> modulesAlone() {
         return modulesAlone;
+    }
+
+    /** Where the last machine loaded was written, and its margin rules. */
+    public SourceMap sourceMap() {
+        return sourceMap;
     }
 
     public Diagnostics diagnostics() {

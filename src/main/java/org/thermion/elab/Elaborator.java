@@ -36,6 +36,7 @@ public final class Elaborator {
     private boolean asDescribed;
     private static final int MAX_PHASES = 8;
     private List<ModuleCheck> modulesAlone = List.of();
+    private SourceMap sourceMap = SourceMap.NONE;
 
     public Elaborator(SourceSet sources, Diagnostics diags) {
         this.sources = sources;
@@ -124,6 +125,11 @@ public final class Elaborator {
         }
         modulesAlone = List.copyOf(found);
         return !found.isEmpty();
+    }
+
+    /** Where the last machine elaborated was written (stage uses, heater rules) and its margin rules. */
+    public SourceMap sourceMap() {
+        return sourceMap;
     }
 
     /** The modules checked on their own when the description had no machine block (else empty). */
@@ -268,7 +274,10 @@ public final class Elaborator {
         List<ModuleInstance> modules = new ArrayList<>(ex.tree.modules);
         modules.replaceAll(mi -> notBuilt.modules.contains(mi.id()) ? mi.notBuilt() : mi);
         List<SoftStart> softStarts = new ArrayList<>();
-        StagePlacement placed = StagePlacement.place(nb, parts, packer);
+        for (Prop pk : decls.packing) {
+            packer.readPacking(pk);
+        }
+        StagePlacement placed = StagePlacement.place(nb, parts, packer, modules, diags);
         int[] gateEnvelope = placed.gateEnvelope;
         int[] latchEnvelope = placed.latchEnvelope;
         SoftStartReader softStartReader = new SoftStartReader(parts, packer, diags);
@@ -298,17 +307,26 @@ public final class Elaborator {
         }
 
         List<Gate> gates = new ArrayList<>(order.length);
+        List<Span> gateSpans = new ArrayList<>(order.length);
         int[] gateEnvOrdered = new int[order.length];
         for (int k = 0; k < order.length; k++) {
             NetBuilder.GateB g = nb.gates.get(order[k]);
             gates.add(new Gate(k, g.fn, g.in, g.out, g.stage, g.module));
+            gateSpans.add(g.span == null ? Span.none() : g.span);
             gateEnvOrdered[k] = gateEnvelope[order[k]];
         }
         List<Latch> latches = new ArrayList<>(nb.latches.size());
+        List<Span> latchSpans = new ArrayList<>(nb.latches.size());
         for (int i = 0; i < nb.latches.size(); i++) {
             NetBuilder.LatchB l = nb.latches.get(i);
             latches.add(new Latch(i, l.data(), l.enable(), l.out(), l.phase(), l.stage(), l.module()));
+            latchSpans.add(l.span() == null ? Span.none() : l.span());
         }
+        org.thermion.model.MarginRules marginRules = MarginsReader.read(decls.margins, diags);
+        if (diags.hasErrors()) {
+            return null;
+        }
+        sourceMap = new SourceMap(gateSpans, latchSpans, packer.ruleSpans(), marginRules);
         Netlist netlist = new Netlist(nb.names.toArray(new String[0]), nb.netModule.toArray(), List.copyOf(gates),
                 List.copyOf(latches));
         return new Machine(mb.name, new Clock(mb.phases, mb.period), List.copyOf(parts.tubes), List.copyOf(parts.stages),
