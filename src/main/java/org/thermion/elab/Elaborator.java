@@ -292,8 +292,15 @@ public final class Elaborator {
             NetBuilder.LatchB l = nb.latches.get(i);
             latches.add(new Latch(i, l.data(), l.enable(), l.out(), l.phase(), l.stage(), l.module()));
         }
+        String[] places = new String[nb.names.size()];
+        for (int n = 0; n < places.length; n++) {
+            org.thermion.lang.Span s = nb.driverSpan.get(n);
+            if (s != null && s.isKnown()) {
+                places[n] = s.file().getFileName() + ":" + s.line();
+            }
+        }
         Netlist netlist = new Netlist(nb.names.toArray(new String[0]), nb.netModule.toArray(), List.copyOf(gates),
-                List.copyOf(latches));
+                List.copyOf(latches), places);
         return new Machine(mb.name, new Clock(mb.phases, mb.period), List.copyOf(parts.tubes), List.copyOf(parts.stages),
                 List.copyOf(parts.rails), List.copyOf(packer.rules), List.copyOf(softStarts), List.copyOf(modules), netlist,
                 rom, pc, List.copyOf(inputs), List.copyOf(outputs), List.copyOf(packer.envelopes),

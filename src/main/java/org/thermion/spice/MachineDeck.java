@@ -220,13 +220,9 @@ public final class MachineDeck {
         }
     }
 
-    /** The logic 1 level the deck's sources use: the highest rail. */
+    /** The logic 1 level the deck's sources use: the highest rail, as timing's figures take it. */
     public double high() {
-        double h = 0;
-        for (Rail r : machine.rails()) {
-            h = Math.max(h, r.volts());
-        }
-        return h;
+        return org.thermion.timing.DelayCalculator.highRail(machine);
     }
 
     private String netNode(int net) {
