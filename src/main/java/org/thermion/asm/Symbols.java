@@ -7,7 +7,10 @@ import org.thermion.lang.program.AsmExpr;
 import org.thermion.model.AddressedBit;
 import org.thermion.model.Isa;
 
+import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Deque;
+import java.util.Iterator;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -40,6 +43,8 @@ final class Symbols {
     private final Set<String> laterLabels = new HashSet<>();
     private final Set<String> reported = new HashSet<>();
     private final Map<String, Long> known = new HashMap<>();
+    /** The constants being settled now, outermost first. */
+    private final List<String> settling = new ArrayList<>();
 
     Symbols(Isa isa, Diagnostics diags) {
         this.diags = diags;
@@ -77,23 +82,37 @@ final class Symbols {
         constants.put(name, new Constant(value, at));
         if (resolvable(value)) {
             // Everything it names is known already: settle it now, so long chains stay shallow.
-            eval(new AsmExpr.Name(new org.thermion.lang.ast.Ident(name, at)), "name", new ArrayList<>());
+            eval(new AsmExpr.Name(new org.thermion.lang.ast.Ident(name, at)), "name");
         }
     }
 
     /** True when every name in {@code e} is a bit, a label or a constant of known value. */
     private boolean resolvable(AsmExpr e) {
-        if (e instanceof AsmExpr.Num) {
-            return true;
+        for (String name : names(e)) {
+            if (!bits.containsKey(name) && !labels.containsKey(name) && !known.containsKey(name)) {
+                return false;
+            }
         }
-        if (e instanceof AsmExpr.Neg n) {
-            return resolvable(n.operand());
+        return true;
+    }
+
+    /** The names {@code e} uses, in order, found without recursion. */
+    private static List<String> names(AsmExpr e) {
+        List<String> out = new ArrayList<>();
+        Deque<AsmExpr> todo = new ArrayDeque<>();
+        todo.push(e);
+        while (!todo.isEmpty()) {
+            AsmExpr x = todo.pop();
+            if (x instanceof AsmExpr.Name n) {
+                out.add(n.name().text());
+            } else if (x instanceof AsmExpr.Neg n) {
+                todo.push(n.operand());
+            } else if (x instanceof AsmExpr.Bin bin) {
+                todo.push(bin.right());
+                todo.push(bin.left());
+            }
         }
-        if (e instanceof AsmExpr.Bin b) {
-            return resolvable(b.left()) && resolvable(b.right());
-        }
-        String name = ((AsmExpr.Name) e).name().text();
-        return bits.containsKey(name) || labels.containsKey(name) || known.containsKey(name);
+        return out;
     }
 
     private boolean taken(String name, Span at) {
@@ -115,42 +134,37 @@ final class Symbols {
 
     /** Evaluates {@code e}; null after a reported error. {@code role} words undefined-name errors. */
     Long value(AsmExpr e, String role) {
-        return eval(e, role, new ArrayList<>());
+        return eval(e, role);
     }
 
-    private Long eval(AsmExpr e, String role, List<String> evaluating) {
+    /**
+     * The value of {@code e}, with every constant it names settled first. Recursion follows only
+     * brackets, prefix minus and operator precedence (bounded by the reader's nesting limit):
+     * a long chain of operators is walked in a loop, and constants that refer to each other are
+     * settled by {@link #settle} with an explicit stack, so neither depends on the JVM's stack.
+     */
+    private Long eval(AsmExpr e, String role) {
         if (e instanceof AsmExpr.Num n) {
             return n.value();
         }
         if (e instanceof AsmExpr.Neg n) {
-            Long v = eval(n.operand(), role, evaluating);
+            Long v = eval(n.operand(), role);
             return v == null ? null : -v;
         }
-        if (e instanceof AsmExpr.Bin b) {
-            Long l = eval(b.left(), role, evaluating);
-            Long r = eval(b.right(), role, evaluating);
-            if (l == null || r == null) {
-                return null;
+        if (e instanceof AsmExpr.Bin) {
+            Deque<AsmExpr.Bin> spine = new ArrayDeque<>();
+            AsmExpr cur = e;
+            while (cur instanceof AsmExpr.Bin b) {
+                spine.push(b);
+                cur = b.left();
             }
-            try {
-                switch (b.op()) {
-                    case '+':
-                        return Math.addExact(l, r);
-                    case '-':
-                        return Math.subtractExact(l, r);
-                    case '*':
-                        return Math.multiplyExact(l, r);
-                    default:
-                        if (r == 0) {
-                            report(b.right().span(), "division by zero", null);
-                            return null;
-                        }
-                        return l / r;
-                }
-            } catch (ArithmeticException ex) {
-                report(b.span(), "value out of range", "keep constants within 62 bits");
-                return null;
+            Long acc = eval(cur, role);
+            while (!spine.isEmpty()) {
+                AsmExpr.Bin b = spine.pop();
+                Long r = eval(b.right(), role);
+                acc = acc == null || r == null ? null : apply(b, acc, r);
             }
+            return acc;
         }
         AsmExpr.Name n = (AsmExpr.Name) e;
         String name = n.name().text();
@@ -162,27 +176,12 @@ final class Symbols {
         if (l != null) {
             return l.address();
         }
-        Constant c = constants.get(name);
-        if (c != null) {
+        if (constants.containsKey(name)) {
             if (known.containsKey(name)) {
                 return known.get(name);
             }
-            if (evaluating.contains(name)) {
-                report(c.span(), "constant '" + name + "' is defined in terms of itself", "via " + String.join(" -> ", evaluating)
-                        + " -> " + name);
-                return null;
-            }
-            if (evaluating.size() >= MAX_CONST_DEPTH) {
-                report(c.span(), "constants refer to each other more than " + MAX_CONST_DEPTH + " deep",
-                        "define constants before they are used, so each one's value is known when it is read");
-                return null;
-            }
-            evaluating.add(name);
-            Long v = eval(c.value(), role, evaluating);
-            evaluating.remove(evaluating.size() - 1);
-            // A failed evaluation is remembered too: its error was reported once already.
-            known.put(name, v);
-            return v;
+            // Not known: either being settled now (a cycle or a chain too deep, reported) or not yet.
+            return settling.isEmpty() ? settle(name, role) : null;
         }
         if (laterLabels.contains(name)) {
             report(n.span(), "label '" + name + "' is defined further down; its address is not known here",
@@ -196,6 +195,72 @@ final class Symbols {
         report(n.span(), "undefined " + role + " '" + name + "'",
                 hint != null ? hint : "define it as a label (`" + name + ":`) or a constant (`.const " + name + " = ...`)");
         return null;
+    }
+
+    /**
+     * Settles constant {@code root} and, deepest first, every constant it needs: a depth-first walk
+     * with its path on an explicit stack, so a chain is limited by {@link #MAX_CONST_DEPTH}, not by
+     * the JVM. A cycle or a chain too deep is reported once and leaves the constants on it null.
+     */
+    private Long settle(String root, String role) {
+        List<String> path = settling;
+        List<Iterator<String>> pending = new ArrayList<>();
+        path.add(root);
+        pending.add(names(constants.get(root).value()).iterator());
+        while (!path.isEmpty()) {
+            int top = path.size() - 1;
+            Iterator<String> it = pending.get(top);
+            if (it.hasNext()) {
+                String dep = it.next();
+                Constant dc = constants.get(dep);
+                if (dc == null || bits.containsKey(dep) || labels.containsKey(dep) || known.containsKey(dep)) {
+                    continue;
+                }
+                if (path.contains(dep)) {
+                    report(dc.span(), "constant '" + dep + "' is defined in terms of itself",
+                            "via " + String.join(" -> ", path) + " -> " + dep);
+                    continue;
+                }
+                if (path.size() >= MAX_CONST_DEPTH) {
+                    report(dc.span(), "constants refer to each other more than " + MAX_CONST_DEPTH + " deep",
+                            "define constants before they are used, so each one's value is known when it is read");
+                    continue;
+                }
+                path.add(dep);
+                pending.add(names(dc.value()).iterator());
+                continue;
+            }
+            String done = path.get(top);
+            // Every constant it names is known now, or on the path (its error is reported).
+            Long v = eval(constants.get(done).value(), role);
+            path.remove(top);
+            pending.remove(top);
+            // A failed evaluation is remembered too: its error was reported once already.
+            known.put(done, v);
+        }
+        return known.get(root);
+    }
+
+    private Long apply(AsmExpr.Bin b, long l, long r) {
+        try {
+            switch (b.op()) {
+                case '+':
+                    return Math.addExact(l, r);
+                case '-':
+                    return Math.subtractExact(l, r);
+                case '*':
+                    return Math.multiplyExact(l, r);
+                default:
+                    if (r == 0) {
+                        report(b.right().span(), "division by zero", null);
+                        return null;
+                    }
+                    return l / r;
+            }
+        } catch (ArithmeticException ex) {
+            report(b.span(), "value out of range", "keep constants within 62 bits");
+            return null;
+        }
     }
 
     private void report(Span at, String message, String hint) {

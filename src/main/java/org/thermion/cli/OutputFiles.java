@@ -46,7 +46,8 @@ final class OutputFiles {
     enum Kind {
         HEX("an Intel HEX image", OutputFiles::isHex),
         VCD("a value change dump", head -> head.startsWith("$date") && head.contains("$version\n  thermion")),
-        POWERUP_CSV("a power-up time series", head -> head.startsWith("time_s,") || head.startsWith("time_seconds,"));
+        POWERUP_CSV("a power-up time series", head -> head.startsWith("time_s,") || head.startsWith("time_seconds,")),
+        SVG("a picture", head -> head.startsWith("<?xml") && head.contains("<!-- " + org.thermion.plot.SvgWriter.GENERATOR + " -->"));
 
         final String noun;
         private final Predicate<String> earlier;

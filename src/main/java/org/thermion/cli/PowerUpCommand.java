@@ -59,7 +59,12 @@ final class PowerUpCommand implements Callable<Integer> {
             + "RAIL_amps and RAIL_volts per rail (signed as declared), heater_N_kelvin per row N of the heaters table.")
     Path csv;
 
-    @Option(names = OutputFiles.REPLACE, description = "Let --csv replace an existing file that is not an earlier time series.")
+    @Option(names = "--svg", paramLabel = "FILE", description = "Also draw the curves as a picture (SVG): the rails' "
+            + "currents and load voltages against time; with --sweep, the peaks against the resistor.")
+    Path svg;
+
+    @Option(names = OutputFiles.REPLACE, description = "Let --csv or --svg replace an existing file that is not an "
+            + "earlier output of the same kind.")
     boolean replace;
 
     @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (the report's tables; --csv FILE writes the time series); default ${DEFAULT-VALUE}.",
@@ -81,6 +86,9 @@ final class PowerUpCommand implements Callable<Integer> {
 
     @Mixin
     CommonOptions common;
+
+    @Mixin
+    ProgressOptions progressOptions = new ProgressOptions();
 
     @Spec
     CommandSpec spec;
@@ -127,7 +135,7 @@ final class PowerUpCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         if (m.softStarts().isEmpty() && range != null) {
-            return size(m, o, mode, range, out, err);
+            return size(m, o, mode, range, loader, out, err);
         }
         StartupNetwork net;
         try {
@@ -143,7 +151,16 @@ final class PowerUpCommand implements Callable<Integer> {
             if (range != null) {
                 String name = softStartName(net, range.softStart(), "--sweep");
                 double[] values = ResistorSweep.range(range.value().from(), range.value().to(), range.value().step());
-                ResistorSweep.Result sr = ResistorSweep.run(net, o, name, values);
+                ResistorSweep.Result sr;
+                try (ProgressBar bar = ProgressBar.start(err, "resistor sweep", "resistors", progressOptions.mode())) {
+                    sr = ResistorSweep.run(net, o, name, values, done -> bar.update(done, values.length));
+                }
+                if (svg != null) {
+                    int code = PlotFile.write(svg, PowerUpFigures.sweep(sr), replace, List.of(file), loader.sources(), err);
+                    if (code != 0) {
+                        return code;
+                    }
+                }
                 format.write(out, PowerUpSweepReport.of(sr));
                 return sr.recommended() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
             }
@@ -174,13 +191,19 @@ final class PowerUpCommand implements Callable<Integer> {
                 return no.print(err);
             }
         }
+        if (svg != null) {
+            int code = PlotFile.write(svg, PowerUpFigures.curves(result), replace, List.of(file), loader.sources(), err);
+            if (code != 0) {
+                return code;
+            }
+        }
         format.write(out, report.report(width, !noPlot, ascii ? CurrentPlot.Style.ASCII : CurrentPlot.Style.BLOCKS));
         return report.ok() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
     }
 
     /** {@code --sweep} on a machine without a soft start: a resistor and bypass-time table for one rail. */
     private int size(Machine m, PowerUpOptions o, DrawMode mode, PowerUpArgs.Named<PowerUpArgs.Range> range,
-                     PrintWriter out, PrintWriter err) {
+                     MachineLoader loader, PrintWriter out, PrintWriter err) {
         try {
             StartupNetwork net = StartupNetwork.of(m, o.assumptions(), mode);
             int rail = range.softStart() == null ? inrushRail(m, net, o) : m.railIndex(range.softStart());
@@ -195,9 +218,18 @@ final class PowerUpCommand implements Callable<Integer> {
                         + " cells is too many (at most 10000)");
             }
             PowerUpOptions run = o.withSeconds(Math.max(o.seconds(), secs[secs.length - 1]));
-            SoftStartSizing.Table t = SoftStartSizing.run(net, run, rail, ohms, secs,
-                    Runtime.getRuntime().availableProcessors());
-            SizingTableText.write(out, t);
+            SoftStartSizing.Table t;
+            try (ProgressBar bar = ProgressBar.start(err, "sizing", "resistors", progressOptions.mode())) {
+                t = SoftStartSizing.run(net, run, rail, ohms, secs, Runtime.getRuntime().availableProcessors(),
+                        done -> bar.update(done, ohms.length));
+            }
+            if (svg != null) {
+                int code = PlotFile.write(svg, PowerUpFigures.sizing(t), replace, List.of(file), loader.sources(), err);
+                if (code != 0) {
+                    return code;
+                }
+            }
+            format.write(out, PowerUpSizingReport.of(t));
             out.flush();
             return t.best() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
         } catch (IllegalArgumentException | TransientFailure e) {

@@ -76,7 +76,11 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--vcd", paramLabel = "FILE", description = "Write a value change dump (IEEE 1364) here.")
     Path vcd;
 
-    @Option(names = OutputFiles.REPLACE, description = "Let --vcd replace an existing file that is not an earlier dump.")
+    @Option(names = "--svg", paramLabel = "FILE", description = "Draw the watched nets against the cycle as a picture (SVG).")
+    Path svg;
+
+    @Option(names = OutputFiles.REPLACE, description = "Let --vcd or --svg replace an existing file that is not an "
+            + "earlier output of the same kind.")
     boolean replace;
 
     @Option(names = "--vcd-all", description = "Dump every named net, not only inputs, outputs, state and watched nets.")
@@ -154,14 +158,17 @@ final class RunCommand implements Callable<Integer> {
         if (in == null) {
             return ExitCodes.BAD_INPUT;
         }
+        List<Path> named = new ArrayList<>(List.of(machineFile));
+        if (program != null) {
+            named.add(program);
+        }
+        if (inputs != null) {
+            named.add(inputs);
+        }
+        if (svg != null && watch.isEmpty()) {
+            return usage(err, "--svg draws the watched nets: name them with --watch", "e.g. --watch acc,pc");
+        }
         if (vcd != null) {
-            List<Path> named = new ArrayList<>(List.of(machineFile));
-            if (program != null) {
-                named.add(program);
-            }
-            if (inputs != null) {
-                named.add(inputs);
-            }
             OutputFiles.Refusal no = OutputFiles.check(vcd, OutputFiles.Kind.VCD, replace, named, loader.sources());
             if (no != null) {
                 return no.print(err);
@@ -204,6 +211,12 @@ final class RunCommand implements Callable<Integer> {
             }
             vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
                     + (m.pc() != null ? " nets and the pc)" : " nets)");
+        }
+        if (svg != null) {
+            int code = PlotFile.write(svg, RunFigures.watched(m.name(), result), replace, named, loader.sources(), err);
+            if (code != 0) {
+                return code;
+            }
         }
         RunReport report = new RunReport(m, program, level.name(), mode.toString(), result);
         format.write(out, report.report());

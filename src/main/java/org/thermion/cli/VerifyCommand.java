@@ -69,6 +69,9 @@ final class VerifyCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
+    @Mixin
+    ProgressOptions progressOptions = new ProgressOptions();
+
     @Spec
     CommandSpec spec;
 
@@ -88,7 +91,7 @@ final class VerifyCommand implements Callable<Integer> {
             err.println(file + ": error: machine '" + m.name() + "' has no isa block to verify against");
             return ExitCodes.BAD_INPUT;
         }
-        ProgressLine progress = new ProgressLine(err);
+        ProgressBar progress = ProgressBar.start(err, "verify", "cases", progressOptions.mode());
         Verifier.Options opt = Verifier.Options.defaults().withDecode(decode, allTargets ? 16 : 4)
                 .withSampling(spec.commandLine().getParseResult().hasMatchedOption("--samples")
                         ? Math.min(Verifier.EXHAUSTIVE_LIMIT, samples) : Verifier.EXHAUSTIVE_LIMIT, samples, seed)
@@ -97,60 +100,20 @@ final class VerifyCommand implements Callable<Integer> {
         try {
             r = new Verifier(m, opt).run();
         } catch (IllegalArgumentException e) {
+            progress.close();
             err.println(file + ": error: " + e.getMessage());
             return ExitCodes.BAD_INPUT;
         }
-        progress.done();
+        progress.close();
         MutationReport mr = null;
         if (mutate > 0) {
-            mr = new MutationRun(m, opt, r).run(mutate, seed, progress::mutant);
-            progress.done();
+            try (ProgressBar mutants = ProgressBar.start(err, "fault seeding", "mutants", progressOptions.mode())) {
+                mr = new MutationRun(m, opt, r).run(mutate, seed, mutants::update);
+            }
         }
         format.write(out, report(r, mr));
         boolean ok = r.passes() && (mr == null || mr.allIsaChangingCaught());
         return ok ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
-    }
-
-    /** A progress line on stderr for runs longer than a second. */
-    static final class ProgressLine {
-        private final PrintWriter err;
-        private final long start = System.nanoTime();
-        private long last;
-        private boolean shown;
-
-        ProgressLine(PrintWriter err) {
-            this.err = err;
-        }
-
-        void update(long done, long total) {
-            long now = System.nanoTime();
-            if (now - start < 1_000_000_000L || now - last < 250_000_000L) {
-                return;
-            }
-            last = now;
-            shown = true;
-            err.printf(Locale.ROOT, "\rverify: %d of %d cases (%d %%)", done, total, total == 0 ? 100 : done * 100 / total);
-            err.flush();
-        }
-
-        void mutant(int done, int total) {
-            long now = System.nanoTime();
-            if (now - start < 1_000_000_000L || now - last < 250_000_000L) {
-                return;
-            }
-            last = now;
-            shown = true;
-            err.printf(Locale.ROOT, "\rverify: mutant %d of %d", done, total);
-            err.flush();
-        }
-
-        void done() {
-            if (shown) {
-                err.println();
-                err.flush();
-                shown = false;
-            }
-        }
     }
 
     /** The schema version of verify's JSON ({@code org/thermion/schema/verify.schema.json}). */

@@ -172,6 +172,67 @@ public final class Diagnosis {
         return c == null ? null : c.step;
     }
 
+    /**
+     * What the lamps would show after the plan and one more step {@code next}: the candidate
+     * faults (see {@link #named}, from {@code suspects}) and the good machine where a
+     * suspect looks good, grouped by the lamps they show at that step, in order of first
+     * appearance.
+     */
+    public List<Reading> readings(List<Suspect> suspects, Step next) {
+        List<Step> longer = new ArrayList<>(steps);
+        longer.add(next);
+        int lamps = sim.circuit().lamps().size();
+        List<Fault> pool = new ArrayList<>();
+        boolean good = false;
+        for (Suspect s : suspects) {
+            good |= s.looksGood();
+            pool.addAll(named(faults, s));
+        }
+        byte[][] resp = sim.responses(pool, longer);
+        Map<ByteBuffer, Reading> groups = new java.util.LinkedHashMap<>();
+        if (good) {
+            byte[] g = sim.expected(longer)[steps.size()];
+            groups.put(ByteBuffer.wrap(g), new Reading(g, new ArrayList<>(), true));
+        }
+        for (int i = 0; i < pool.size(); i++) {
+            byte[] row = Arrays.copyOfRange(resp[i], steps.size() * lamps, (steps.size() + 1) * lamps);
+            Reading r = groups.computeIfAbsent(ByteBuffer.wrap(row), k -> new Reading(row, new ArrayList<>(), false));
+            r.faults().add(pool.get(i));
+        }
+        return List.copyOf(groups.values());
+    }
+
+    /** One way the lamps may look after a proposed step: the lamps, and who shows them. */
+    public record Reading(byte[] lamps, List<Fault> faults, boolean looksGood) {
+    }
+
+    /**
+     * A class's faults as a builder reads them: one per equivalence class (its representative),
+     * every tube, heater, relay and lamp fault on its own even where it forces the same wires
+     * as a stuck-at fault.
+     */
+    public static List<Fault> named(FaultList faults, Suspect s) {
+        List<Fault> out = new ArrayList<>();
+        for (Fault f : s.members()) {
+            if (faults.classOf(f.id()) == f.id()) {
+                out.add(f);
+            }
+        }
+        return out;
+    }
+
+    /** A class's faults, one per distinct effect (equivalent faults and faults forcing the same wires once). */
+    public static List<Fault> distinct(FaultList faults, Suspect s) {
+        java.util.Set<String> effects = new java.util.HashSet<>();
+        List<Fault> out = new ArrayList<>();
+        for (Fault f : s.members()) {
+            if (effects.add(faults.effect(f))) {
+                out.add(f);
+            }
+        }
+        return out;
+    }
+
     private record Choice(Step step, long score) {
     }
 
@@ -285,10 +346,6 @@ public final class Diagnosis {
 
     /** Distinct faults in a class: equivalent faults and faults forcing the same wires count once. */
     static int size(FaultList faults, Suspect s) {
-        java.util.Set<String> effects = new java.util.HashSet<>();
-        for (Fault f : s.members()) {
-            effects.add(faults.effect(f));
-        }
-        return effects.size();
+        return distinct(faults, s).size();
     }
 }

@@ -17,7 +17,9 @@ import org.thermion.lang.parser.MachineParser;
 import org.thermion.lang.parser.MachineParser.*;
 
 import java.nio.file.Path;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Deque;
 import java.util.List;
 
 /** Turns a parse tree into immutable AST records; the parse tree goes no further. */
@@ -169,7 +171,55 @@ final class AstBuilder {
         return new Index(hi, lo, span(i));
     }
 
+    /**
+     * Binary operators associate to the left, so a long chain is a left-deep tree: its left spine
+     * is walked in a loop, and recursion goes only as deep as brackets and precedence levels
+     * (bounded by {@link NestingLimit}), not as long as the chain.
+     */
     private Expr expr(ExprContext ctx) {
+        Deque<ExprContext> spine = new ArrayDeque<>();
+        ExprContext cur = ctx;
+        while (leftOperand(cur) != null) {
+            spine.push(cur);
+            cur = leftOperand(cur);
+        }
+        Expr acc = operand(cur);
+        while (!spine.isEmpty()) {
+            ExprContext b = spine.pop();
+            acc = new Expr.Bin(binOp(b), acc, expr(b.getChild(ExprContext.class, 1)), span(b));
+        }
+        return acc;
+    }
+
+    /** The left operand of a binary expression, null for any other kind. */
+    private static ExprContext leftOperand(ExprContext ctx) {
+        boolean binary = ctx instanceof MulExprContext || ctx instanceof AddExprContext || ctx instanceof EqExprContext
+                || ctx instanceof AndExprContext || ctx instanceof XorExprContext || ctx instanceof OrExprContext;
+        return binary ? ctx.getChild(ExprContext.class, 0) : null;
+    }
+
+    private static Expr.BinOp binOp(ExprContext ctx) {
+        if (ctx instanceof MulExprContext c) {
+            return switch (c.op.getText()) {
+                case "*" -> Expr.BinOp.MUL;
+                case "/" -> Expr.BinOp.DIV;
+                default -> Expr.BinOp.MOD;
+            };
+        }
+        if (ctx instanceof AddExprContext c) {
+            return c.op.getText().equals("+") ? Expr.BinOp.ADD : Expr.BinOp.SUB;
+        }
+        if (ctx instanceof EqExprContext) {
+            return Expr.BinOp.EQ;
+        }
+        if (ctx instanceof AndExprContext) {
+            return Expr.BinOp.AND;
+        }
+        return ctx instanceof XorExprContext ? Expr.BinOp.XOR : Expr.BinOp.OR;
+    }
+
+    /** Everything but a binary operator. */
+    private Expr operand(ExprContext ctx) {
         Span s = span(ctx);
         if (ctx instanceof ParenExprContext c) {
             return expr(c.expr());
@@ -179,30 +229,6 @@ final class AstBuilder {
         }
         if (ctx instanceof NegExprContext c) {
             return new Expr.Neg(expr(c.expr()), s);
-        }
-        if (ctx instanceof MulExprContext c) {
-            Expr.BinOp op = switch (c.op.getText()) {
-                case "*" -> Expr.BinOp.MUL;
-                case "/" -> Expr.BinOp.DIV;
-                default -> Expr.BinOp.MOD;
-            };
-            return new Expr.Bin(op, expr(c.expr(0)), expr(c.expr(1)), s);
-        }
-        if (ctx instanceof AddExprContext c) {
-            Expr.BinOp op = c.op.getText().equals("+") ? Expr.BinOp.ADD : Expr.BinOp.SUB;
-            return new Expr.Bin(op, expr(c.expr(0)), expr(c.expr(1)), s);
-        }
-        if (ctx instanceof EqExprContext c) {
-            return new Expr.Bin(Expr.BinOp.EQ, expr(c.expr(0)), expr(c.expr(1)), s);
-        }
-        if (ctx instanceof AndExprContext c) {
-            return new Expr.Bin(Expr.BinOp.AND, expr(c.expr(0)), expr(c.expr(1)), s);
-        }
-        if (ctx instanceof XorExprContext c) {
-            return new Expr.Bin(Expr.BinOp.XOR, expr(c.expr(0)), expr(c.expr(1)), s);
-        }
-        if (ctx instanceof OrExprContext c) {
-            return new Expr.Bin(Expr.BinOp.OR, expr(c.expr(0)), expr(c.expr(1)), s);
         }
         if (ctx instanceof CallExprContext c) {
             List<Expr> args = new ArrayList<>();

@@ -26,7 +26,9 @@ import org.thermion.lang.program.Statement;
 
 import java.math.BigInteger;
 import java.nio.file.Path;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Deque;
 import java.util.List;
 
 /**
@@ -86,18 +88,29 @@ public final class ProgramReader {
         return new ProgramLine(number, text, label, stmt);
     }
 
+    /** Binary chains are left-deep: their left spine is walked in a loop (see the description's reader). */
     private AsmExpr expr(ExprContext ctx, int line) {
+        Deque<ExprContext> spine = new ArrayDeque<>();
+        ExprContext cur = ctx;
+        while (cur instanceof MulExprContext || cur instanceof AddExprContext) {
+            spine.push(cur);
+            cur = cur.getChild(ExprContext.class, 0);
+        }
+        AsmExpr acc = operand(cur, line);
+        while (!spine.isEmpty()) {
+            ExprContext b = spine.pop();
+            Token op = b instanceof MulExprContext m ? m.op : ((AddExprContext) b).op;
+            acc = new AsmExpr.Bin(op.getText().charAt(0), acc, expr(b.getChild(ExprContext.class, 1), line), span(b, line));
+        }
+        return acc;
+    }
+
+    private AsmExpr operand(ExprContext ctx, int line) {
         if (ctx instanceof ParenExprContext c) {
             return expr(c.expr(), line);
         }
         if (ctx instanceof NegExprContext c) {
             return new AsmExpr.Neg(expr(c.expr(), line), span(c, line));
-        }
-        if (ctx instanceof MulExprContext c) {
-            return new AsmExpr.Bin(c.op.getText().charAt(0), expr(c.expr(0), line), expr(c.expr(1), line), span(c, line));
-        }
-        if (ctx instanceof AddExprContext c) {
-            return new AsmExpr.Bin(c.op.getText().charAt(0), expr(c.expr(0), line), expr(c.expr(1), line), span(c, line));
         }
         if (ctx instanceof NameExprContext c) {
             return new AsmExpr.Name(ident(c.NAME().getSymbol(), line));

@@ -162,14 +162,15 @@ public final class StimulusReader {
     }
 
     /** One CSV field: its unquoted text and where it starts and ends in the file. */
-    record Field(String text, Span span) {
-        Span endSpan() {
+    public record Field(String text, Span span) {
+        /** The position just after the field (for a missing field). */
+        public Span endSpan() {
             return new Span(span.file(), span.endLine(), span.endCol(), span.endLine(), span.endCol() + 1);
         }
     }
 
     /** Splits RFC 4180 text into records of fields, keeping positions for diagnostics. */
-    static final class CsvScanner {
+    public static final class CsvScanner {
         private final Path file;
         private final String text;
         private final Diagnostics diags;
@@ -177,13 +178,14 @@ public final class StimulusReader {
         private int line = 1;
         private int col = 1;
 
-        CsvScanner(Path file, String text, Diagnostics diags) {
+        public CsvScanner(Path file, String text, Diagnostics diags) {
             this.file = file;
             this.text = text.startsWith("\uFEFF") ? text.substring(1) : text;
             this.diags = diags;
         }
 
-        List<List<Field>> records() {
+        /** Every record of the text (blank lines skipped); stops at the first malformed one. */
+        public List<List<Field>> records() {
             List<List<Field>> out = new ArrayList<>();
             while (pos < text.length()) {
                 if (atLineEnd()) {

@@ -56,4 +56,32 @@ class ConstantChainTest {
         assertThat(assemble(b.toString(), d)).isNull();
         assertThat(d.all().get(0).message()).isEqualTo("constants refer to each other more than 200 deep");
     }
+
+    @Test
+    void aChainAtTheDepthLimitOfLongLinesAssemblesOnASmallStack() throws Exception {
+        // 200 constants, each the next one plus 900 ones: at the depth limit and near the reader's
+        // 1000 operators per line; settled with an explicit stack, so a quarter of the usual 1 MiB does.
+        int depth = Symbols.MAX_CONST_DEPTH;
+        int ones = 900;
+        StringBuilder b = new StringBuilder();
+        long expected = 1L + (long) (depth - 1) * ones;
+        b.append(".word C0 - ").append(expected - 1).append('\n');
+        for (int k = 0; k < depth - 1; k++) {
+            b.append(".const C").append(k).append(" = C").append(k + 1).append(" + 1".repeat(ones)).append('\n');
+        }
+        b.append(".const C").append(depth - 1).append(" = 1\n");
+        Diagnostics d = new Diagnostics();
+        java.util.concurrent.atomic.AtomicReference<Object> result = new java.util.concurrent.atomic.AtomicReference<>();
+        Thread t = new Thread(null, () -> {
+            try {
+                result.set(assemble(b.toString(), d));
+            } catch (Throwable x) {
+                result.set(x);
+            }
+        }, "small stack", 256 * 1024);
+        t.start();
+        t.join();
+        assertThat(result.get()).as("%s", d.all()).isInstanceOf(Assembly.class);
+        assertThat(((Assembly) result.get()).words()[0]).isEqualTo(1);
+    }
 }

@@ -18,11 +18,14 @@ import static org.assertj.core.api.Assertions.assertThat;
  * folder, each with the exact answer beside it in a {@code .expected} file (the command, its
  * exit code and what it printed). A {@code .machine} file is checked, a {@code .asm} file
  * assembled for the pump station, a {@code .csv} file read as the stimulus of a pump station
- * run. A case without its {@code .expected} file fails; {@code -Dgolden.update=true} writes them.
+ * run; a {@code plan-*.machine} file is given to {@code plan}, and an {@code obs-*.csv} file is read
+ * as the lamps seen on c17's plan by {@code diagnose}. A case without its {@code .expected} file
+ * fails; {@code -Dgolden.update=true} writes them.
  */
 class BadInputCorpusTest {
     static final Path DIR = Path.of("src/test/resources/org/thermion/badinput");
     static final String MACHINE = "examples/pumpstation/pumpstation.machine";
+    static final String C17 = "src/test/resources/org/thermion/faults/c17.machine";
 
     @TestFactory
     Stream<DynamicTest> everyBadInputIsAnsweredInWordsWithExitTwo() {
@@ -35,8 +38,13 @@ class BadInputCorpusTest {
 
     private static void check(Path file) {
         String name = file.toString();
+        String base = file.getFileName().toString();
         String[] args;
-        if (name.endsWith(".machine")) {
+        if (base.startsWith("plan-")) {
+            args = new String[] {"plan", name};
+        } else if (base.startsWith("obs-")) {
+            args = new String[] {"diagnose", C17, name};
+        } else if (name.endsWith(".machine")) {
             args = new String[] {"check", name};
         } else if (name.endsWith(".asm")) {
             args = new String[] {"asm", MACHINE, name};

@@ -10,7 +10,7 @@ class MainHelpTest {
     void topLevelHelpListsTheBuildersCommandsButNotBench() {
         CheckCommandTest.Result r = CheckCommandTest.run("--help");
         assertThat(r.code()).isZero();
-        assertThat(r.out()).containsPattern("(?m)^ +check ").contains("run ", "asm ", "budget ", "powerup ", "timing ", "verify ", "plan ")
+        assertThat(r.out()).containsPattern("(?m)^ +check ").contains("run ", "asm ", "budget ", "powerup ", "timing ", "verify ", "plan ", "diagnose ", "sheets ")
                 .doesNotContainPattern("(?m)^ +bench ");
     }
 

@@ -203,8 +203,8 @@ class PowerUpCommandTest {
         assertThat(r.code()).isZero();
         assertThat(r.out()).contains("sizing a soft start for rail heat").contains("balance: ").contains("*")
                 .contains("preferred value");
-        // Five resistors by three bypass times.
-        assertThat(r.out().lines().filter(l -> l.matches("  \\d.*")).count()).isEqualTo(5);
+        // Five resistors by three bypass times: grid rows hold a resistor and three peaks.
+        assertThat(r.out().lines().filter(l -> l.matches("  \\d[.\\d]*( +\\d+\\.\\d\\d[*!]?){3}")).count()).isEqualTo(5);
         Run bad = run("powerup", m.toString(), "--sweep", "1ohm..3ohm:0.5ohm", "--bypass", "4s..2s:1s");
         assertThat(bad.code()).isEqualTo(2);
         assertThat(bad.err()).startsWith("error: --bypass");

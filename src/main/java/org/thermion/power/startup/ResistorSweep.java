@@ -56,6 +56,12 @@ public final class ResistorSweep {
 
     /** Runs the sweep on soft start {@code softStart} of {@code net}. */
     public static Result run(StartupNetwork net, PowerUpOptions base, String softStart, double[] ohms) {
+        return run(net, base, softStart, ohms, done -> { });
+    }
+
+    /** As {@link #run(StartupNetwork, PowerUpOptions, String, double[])}, telling {@code progress} each value done. */
+    public static Result run(StartupNetwork net, PowerUpOptions base, String softStart, double[] ohms,
+                             java.util.function.IntConsumer progress) {
         int k = net.softStartNames().indexOf(softStart);
         if (k < 0) {
             throw new IllegalArgumentException("no soft start named '" + softStart + "'");
@@ -68,6 +74,7 @@ public final class ResistorSweep {
         for (double r : ohms) {
             Row row = row(net, o, k, rail, r);
             rows.add(row);
+            progress.accept(rows.size());
             if (row.feasible() && (best < 0 || row.worstPeak() < rows.get(best).worstPeak())) {
                 best = rows.size() - 1;
             }

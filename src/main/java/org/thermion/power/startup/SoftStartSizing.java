@@ -39,6 +39,12 @@ public final class SoftStartSizing {
 
     /** Sizes a timed soft start in {@code rail} over {@code ohms} x {@code seconds} on {@code threads} threads. */
     public static Table run(StartupNetwork base, PowerUpOptions o, int rail, double[] ohms, double[] seconds, int threads) {
+        return run(base, o, rail, ohms, seconds, threads, done -> { });
+    }
+
+    /** As {@link #run(StartupNetwork, PowerUpOptions, int, double[], double[], int)}, telling {@code progress} each resistor done. */
+    public static Table run(StartupNetwork base, PowerUpOptions o, int rail, double[] ohms, double[] seconds, int threads,
+                            java.util.function.IntConsumer progress) {
         for (double s : seconds) {
             if (!(s > 0) || s > o.seconds()) {
                 throw new IllegalArgumentException("bypass times must lie within the simulated time (0 to "
@@ -54,6 +60,7 @@ public final class SoftStartSizing {
         double limit = net.machine.rails().get(rail).limitAmps();
         Cell[][] cells = new Cell[ohms.length][];
         ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, threads));
+        java.util.concurrent.atomic.AtomicInteger finished = new java.util.concurrent.atomic.AtomicInteger();
         try {
             List<Future<Cell[]>> rows = new ArrayList<>();
             for (double r : ohms) {
@@ -67,6 +74,7 @@ public final class SoftStartSizing {
                         row[j] = new Cell(on[j], r == 0 ? on[j] : by[j], r == 0 ? 0 : w[j],
                                 !(Math.max(on[j], by[j]) >= limit));
                     }
+                    progress.accept(finished.incrementAndGet());
                     return row;
                 }));
             }

@@ -40,6 +40,7 @@ public final class StartupNetwork {
     final Emission emission;
     final List<HeaterModel> models;
     final List<String> notes;
+    final ModelAdjustment adjust;
 
     // heater states (one per position of each distinct string)
     final int states;
@@ -74,7 +75,8 @@ public final class StartupNetwork {
         }
     }
 
-    private StartupNetwork(Machine m, ThermalAssumptions a, DrawMode mode, boolean share) {
+    private StartupNetwork(Machine m, ThermalAssumptions a, DrawMode mode, boolean share, ModelAdjustment adjust) {
+        this.adjust = adjust;
         this.machine = m;
         this.assumptions = a;
         this.drawMode = mode;
@@ -103,7 +105,8 @@ public final class StartupNetwork {
                 if (!modelIndex.containsKey(mk)) {
                     TubeType tt = m.tubes().get(e.tube());
                     modelIndex.put(mk, ml.size());
-                    ml.add(HeaterCalibration.calibrate(tt, r, a));
+                    ml.add(HeaterCalibration.calibrate(tt.name(), r, adjust.warmup(tt.warmupSeconds(), a),
+                            adjust.ratio(tt.coldHotRatio()), a));
                     if (!tt.hasWarmup()) {
                         noteList.add(tt.name() + ": no warm-up time declared; " + fmt(a.defaultWarmup())
                                 + " s assumed (the controlled-warm-up figure)");
@@ -242,7 +245,7 @@ public final class StartupNetwork {
                     arc = 10;
                     noteList.add(tube.name() + ": no arc drop declared; 10 V assumed (8-12 V is typical of small gas thyratrons)");
                 }
-                Rail fr = m.rails().get(from);
+                Rail fr = rail(from);
                 check = RelayDriverCheck.of(tube.name(), fr.name(), fr.volts(), fr.sourceOhms(), arc, tw.plateOhms(),
                         ss.relay(), tube.avgCathodeAmps(), tube.peakCathodeAmps(), Double.NaN, tube.warmupSeconds());
                 if (tube.warmupSeconds() > 0) {
@@ -298,6 +301,7 @@ public final class StartupNetwork {
     /** {@code base} with one more soft start (a copy: the network stays immutable). */
     private StartupNetwork(StartupNetwork base, Soft extra) {
         this.machine = base.machine;
+        this.adjust = base.adjust;
         this.assumptions = base.assumptions;
         this.drawMode = base.drawMode;
         this.emission = base.emission;
@@ -337,7 +341,17 @@ public final class StartupNetwork {
 
     /** Builds the network of {@code m} under the given assumptions. */
     public static StartupNetwork of(Machine m, ThermalAssumptions a, DrawMode mode) {
-        return new StartupNetwork(m, a, mode, true);
+        return new StartupNetwork(m, a, mode, true, ModelAdjustment.none());
+    }
+
+    /** The network of {@code m} with the figures a bench trace corrected ({@link TraceFit}). */
+    public static StartupNetwork of(Machine m, ThermalAssumptions a, DrawMode mode, ModelAdjustment adjust) {
+        return new StartupNetwork(m, a, mode, true, adjust);
+    }
+
+    /** Rail {@code r} as the model sees it (declared, or as a bench trace corrected it). */
+    Rail rail(int r) {
+        return adjust.apply(machine.rails().get(r), r);
     }
 
     /**
@@ -345,7 +359,7 @@ public final class StartupNetwork {
      * answer (for tests of the sharing and for the bench's worst case).
      */
     public static StartupNetwork unshared(Machine m, ThermalAssumptions a, DrawMode mode) {
-        return new StartupNetwork(m, a, mode, false);
+        return new StartupNetwork(m, a, mode, false, ModelAdjustment.none());
     }
 
     /** Solves the transient. */

@@ -54,7 +54,7 @@ final class TransientCircuit {
             SoftStartState[] series = Arrays.stream(softs).filter(s -> s.soft.rail() == ri).toArray(SoftStartState[]::new);
             SoftStartState[] branches = Arrays.stream(softs).filter(s -> s.soft.thyratron() && s.soft.fromRail() == ri)
                     .toArray(SoftStartState[]::new);
-            rails[r] = new RailState(r, net.machine.rails().get(r), on, plates, net.plateSiemens[r].clone(),
+            rails[r] = new RailState(r, net.rail(r), on, plates, net.plateSiemens[r].clone(),
                     net.alwaysSiemens[r], series, branches);
         }
     }

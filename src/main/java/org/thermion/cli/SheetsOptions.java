@@ -1,0 +1,25 @@
+package org.thermion.cli;
+
+import org.thermion.cli.report.Format;
+import org.thermion.model.Machine;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+
+/** What every {@code sheets} selection takes: the machine file and the output format. */
+final class SheetsOptions {
+    @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
+    Path machineFile;
+
+    @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (default: ${DEFAULT-VALUE}).")
+    Format format = Format.text;
+
+    /** The elaborated machine, or null after printing its errors (exit 2). */
+    Machine load(PrintWriter err) {
+        Machine m = new MachineLoader().load(machineFile, err, false);
+        err.flush();
+        return m;
+    }
+}

@@ -1,0 +1,5 @@
+package org.thermion.plot;
+
+/** A marked point with its label (the balance point of a sweep, a relay closing). */
+public record Marker(String label, double x, double y) {
+}
