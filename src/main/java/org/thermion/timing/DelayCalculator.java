@@ -230,12 +230,22 @@ public final class DelayCalculator {
             double rOhms = drive.edges(circuit, loads, riseAt).riseOhms();
             double fOhms = drive.edges(circuit, loads, fallAt).fallOhms();
             problem = nominal.problem();
+            StringBuilder slowNote = new StringBuilder();
+            if (Double.isNaN(rOhms) && nominal.solved()) {
+                rOhms = nominal.riseOhms();
+                slowNote.append("no rising edge at its slow corner (").append(riseAt.describe()).append("): nominal R");
+            }
+            if (Double.isNaN(fOhms) && nominal.solved()) {
+                fOhms = nominal.fallOhms();
+                slowNote.append(slowNote.length() > 0 ? "; " : "").append("no falling edge at its slow corner (")
+                        .append(fallAt.describe()).append("): nominal R");
+            }
             if (nominal.problem().isEmpty() && !Double.isNaN(rOhms) && !Double.isNaN(fOhms)) {
                 String corner = slow == null ? "nominal"
                         : "rise: " + riseAt.describe() + "; fall: " + fallAt.describe();
                 return new StageDelay(riseGiven ? st.rise() : RcDelay.tenToNinety(rOhms, c),
                         fallGiven ? st.fall() : RcDelay.tenToNinety(fOhms, c), c, pins.get(net).size(), riseGiven,
-                        fallGiven, "", rOhms, fOhms, "computed", corner);
+                        fallGiven, slowNote.toString(), rOhms, fOhms, "computed", corner);
             }
         }
         StringBuilder note = new StringBuilder();

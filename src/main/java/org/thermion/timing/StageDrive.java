@@ -79,7 +79,8 @@ public final class StageDrive {
 
     /**
      * The corner that makes one edge slowest: each toleranced parameter (rails, resistors, emission)
-     * at the end of its tolerance that raises that edge's resistance, judged one parameter at a time.
+     * at the end of its tolerance that raises that edge's resistance (or stops the stage switching),
+     * judged one parameter at a time.
      */
     public Corner slowCorner(StageCircuit stage, List<Load> loads, Tolerances tol, boolean rise) {
         edges(stage, loads, Corner.NOMINAL);
@@ -88,7 +89,8 @@ public final class StageDrive {
             double[] ends = ends(p, tol);
             double lo = pick(edges(stage, loads, Corner.NOMINAL.with(p.label(), ends[0])), rise);
             double hi = pick(edges(stage, loads, Corner.NOMINAL.with(p.label(), ends[1])), rise);
-            double f = !(hi >= lo) ? ends[0] : ends[1];
+            // An end where the stage gives no edge at all is the worst of the two.
+            double f = Double.isNaN(lo) ? ends[0] : Double.isNaN(hi) ? ends[1] : hi >= lo ? ends[1] : ends[0];
             if (f != 1) {
                 worst = worst.with(p.label(), f);
             }
