@@ -125,7 +125,7 @@ public final class MarginAnalysis {
     }
 
     /** Input states to solve: all of them for narrow stages, the extreme ones for wide ones. */
-    static List<boolean[]> states(int n) {
+    public static List<boolean[]> states(int n) {
         List<boolean[]> out = new ArrayList<>();
         if (n <= ALL_STATES_UP_TO) {
             for (int mask = 0; mask < (1 << n); mask++) {

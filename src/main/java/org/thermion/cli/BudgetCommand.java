@@ -4,6 +4,8 @@ import org.thermion.cli.report.Format;
 import org.thermion.model.Machine;
 import org.thermion.power.Budget;
 import org.thermion.power.CurrentMeter;
+import org.thermion.power.StageDraw;
+import org.thermion.power.startup.SteadyHeaters;
 import org.thermion.sim.InitMode;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -87,6 +89,7 @@ final class BudgetCommand implements Callable<Integer> {
                 err.println("note: --cycles and --init apply to a run; without --program or --inputs the budget is static");
             }
         }
+        StageDraw draw = StageDraw.of(m);
         BudgetReport.Run run = null;
         CurrentMeter meter = null;
         if (program != null || inputs != null) {
@@ -100,11 +103,11 @@ final class BudgetCommand implements Callable<Integer> {
                 err.flush();
                 return ExitCodes.BAD_INPUT;
             }
-            meter = CurrentMeter.ofRun(m, in.rom(), in.stimulus(), cycles, mode);
+            meter = CurrentMeter.ofRun(draw, in.rom(), in.stimulus(), cycles, mode);
             run = new BudgetReport.Run(program == null ? null : program.toString(),
                     inputs == null ? null : inputs.toString(), cycles, init);
         }
-        Budget budget = new Budget(m, meter);
+        Budget budget = new Budget(draw, meter, SteadyHeaters.of(m));
         BudgetReport report = new BudgetReport(budget, run);
         format.write(out, report.report());
         out.flush();

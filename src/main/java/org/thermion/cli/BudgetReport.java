@@ -4,7 +4,11 @@ import org.thermion.model.Machine;
 import org.thermion.model.ModuleInstance;
 import org.thermion.model.Rail;
 import org.thermion.power.Budget;
+import org.thermion.model.StageType;
 import org.thermion.power.CurrentMeter;
+import org.thermion.power.DrawingInstance;
+import org.thermion.power.DrawingInstances;
+import org.thermion.power.StageDraw;
 import org.thermion.power.Finding;
 import org.thermion.power.HeaterAnalysis;
 import org.thermion.power.TubeCount;
@@ -48,7 +52,7 @@ final class BudgetReport {
     }
 
     /** The schema version of budget's JSON ({@code org/thermion/schema/budget.schema.json}). */
-    static final int VERSION = 2;
+    static final int VERSION = 3;
 
     /** The whole report: facts for every format, explanations and findings for people. */
     Report report() {
@@ -72,7 +76,8 @@ final class BudgetReport {
         r.field("plate_dissipation", PLATE_NOTE);
         r.field("caution", CAUTION);
         r.text(head());
-        for (Table t : List.of(modules(), tubes(), heaterStrings(), moduleRails(), rails(), supply(), findings())) {
+        for (Table t : List.of(modules(), tubes(), heaterStrings(), moduleHeaters(), stageDraws(), moduleRails(), rails(), supply(),
+                findings())) {
             r.table(t);
         }
         r.text(b.failed() ? "check failed" : "check passed", "", CAUTION);
@@ -87,7 +92,10 @@ final class BudgetReport {
         List<String> h = new ArrayList<>();
         h.add(String.format(Locale.ROOT, "budget of machine %s: %d tubes, %d heater strings, %d rails", m.name(),
                 m.envelopes().size(), m.heaterStrings().size(), m.rails().size()));
-        h.add("  plate and bias current: lowest and highest = every stage instance at its lowest or highest draw");
+        h.add("  plate and bias current: lowest and highest = every stage instance at its lowest or highest draw;");
+        h.add("    " + origins() + " (see 'stage draws')");
+        h.add("  heaters and the supply check at each rail's voltage under its load (nominal less the source drop),");
+        h.add("    heaters at the wire's equilibrium temperature there: the power-up's steady state");
         if (run != null) {
             h.add(String.format(Locale.ROOT, "  simulated: %s%s, %d cycles of %d phases, lane 0, latches start %s",
                     run.program(), run.inputs() == null ? "" : " with inputs " + run.inputs(), run.cycles(),
@@ -110,9 +118,8 @@ final class BudgetReport {
                 .column("sections_used", "used", COUNT, "tube sections in use")
                 .column("sections_spare", "spare", COUNT, "tube sections left free")
                 .column("heater_strings", "strings", COUNT, "heater strings holding one of its tubes")
-                .column("heater", "heater", AMPS, "the module's share of its strings' current at the rail's nominal voltage "
-                        + "(a string spanning modules counts in each)")
-                .column("heater", "heater", WATTS, "the module's share of its strings' power")
+                .column("heater", "heater", WATTS, "the module's share of its strings' power at the loaded rails "
+                        + "(a string spanning modules counts in each; currents per rail: 'heater current by module')")
                 .column("plate_lowest", "plate low", WATTS, "plate dissipation, every stage at its lowest draw")
                 .column("plate_highest", "plate high", WATTS, "plate dissipation, every stage at its highest draw");
         CurrentMeter meter = b.meter();
@@ -125,14 +132,9 @@ final class BudgetReport {
         double[] sum = new double[8];
         for (ModuleInstance mi : m.modules()) {
             TubeCount.Row c = b.tubes().module(mi.id());
-            double ha = 0;
-            for (int r = 0; r < m.rails().size(); r++) {
-                ha += b.heaters().moduleAmps(mi.id(), r);
-            }
             List<Object> row = new ArrayList<>(List.of(label(mi), c.envelopes(), c.sectionsUsed(), c.sectionsSpare(),
-                    b.heaters().moduleStrings(mi.id()), ha, b.heaters().moduleWatts(mi.id()),
+                    b.heaters().moduleStrings(mi.id()), b.heaters().moduleWatts(mi.id()),
                     b.staticPlateWatts(mi.id(), false), b.staticPlateWatts(mi.id(), true)));
-            sum[0] += ha;
             sum[1] += b.heaters().moduleWatts(mi.id());
             sum[2] += b.staticPlateWatts(mi.id(), false);
             sum[3] += b.staticPlateWatts(mi.id(), true);
@@ -146,7 +148,7 @@ final class BudgetReport {
             t.row(row.toArray());
         }
         List<Object> total = new ArrayList<>(List.of("total", b.tubes().total(), b.tubes().sectionsUsed(),
-                b.tubes().sectionsSpare(), m.heaterStrings().size(), sum[0], sum[1], sum[2], sum[3]));
+                b.tubes().sectionsSpare(), m.heaterStrings().size(), sum[1], sum[2], sum[3]));
         if (meter != null) {
             total.add(sum[4]);
             total.add(Absent.NONE);
@@ -176,13 +178,13 @@ final class BudgetReport {
 
     /** Strings with the same wiring and results share a row, with their count. */
     private Table heaterStrings() {
-        Table t = new Table("heater_strings", "heater strings (in series across their rail at its nominal voltage; "
-                + "identical strings counted together)")
+        Table t = new Table("heater_strings", "heater strings (in series across their rail at its loaded voltage, "
+                + "the supply check's 'at peak'; identical strings counted together)")
                 .column("rail", "rail", TEXT)
                 .column("count", "count", COUNT, "identical strings")
                 .column("heaters", "heaters", TEXT)
                 .column("rated", "rated", VOLTS, "sum of the heaters' rated voltages")
-                .column("string", "current", AMPS, "string current, heaters at their hot resistance")
+                .column("string", "current", AMPS, "string current, heaters at their steady resistance at that voltage")
                 .column("heater_volts", "each heater gets", TEXT)
                 .column("worst_deviation", "worst", PERCENT, "the heater furthest from its rated voltage")
                 .column("dropper", "dropper", OHMS, "declared series resistor")
@@ -297,16 +299,18 @@ final class BudgetReport {
         Table t = new Table("supply", "supply check (peak = heaters + plate and bias)")
                 .column("rail", "rail", TEXT)
                 .column("nominal", "voltage", VOLTS)
-                .column("heaters", "heaters", AMPS, "heater strings at the rail's nominal voltage, hot resistance; "
-                        + "powerup's steady state is lower by the source drop at the peak (see 'at peak')")
+                .column("heaters", "heaters", AMPS, "heater strings at the loaded voltage ('at peak'), "
+                        + "each heater at its steady temperature there")
                 .column("heaters", "heaters", WATTS)
-                .column("stages", "plate+bias", AMPS)
+                .column("stages", "plate+bias", AMPS, "plate and bias draws at the loaded voltage (each stage's "
+                        + "current scaled from the nominal rail as a conductance, as powerup takes it)")
                 .column("basis", "from", TEXT, "highest: every stage at its highest draw; simulation: the run's peak")
                 .column("peak", "peak", AMPS, "heaters plus plate and bias")
                 .column("limit", "limit", AMPS, "the supply's current limit")
                 .column("margin", "margin", AMPS, "limit less peak")
                 .column("margin", "margin", PERCENT, "margin as a share of the limit")
-                .column("at_peak", "at peak", VOLTS, "the rail's voltage at the peak, after its source resistance")
+                .column("at_peak", "at peak", VOLTS, "the rail's voltage under that load, after its source resistance "
+                        + "(solved with the load, which falls with it)")
                 .column("status", "status", TEXT);
         for (Budget.Supply s : b.supply()) {
             Rail rail = m.rails().get(s.rail());
@@ -316,6 +320,85 @@ final class BudgetReport {
                     s.over() ? "OVER" : s.limited() ? "ok" : "no limit");
         }
         return t;
+    }
+
+    /** Each module's share of each rail's heater current: amps on different rails never add up. */
+    private Table moduleHeaters() {
+        Table t = new Table("module_heaters", "heater current by module (loaded rails)")
+                .column("module", "module", TEXT)
+                .column("rail", "rail", TEXT)
+                .column("heaters", "heaters", AMPS, "the module's share of the rail's heater current (a string spanning "
+                        + "modules is shared by the voltage each heater drops)");
+        for (ModuleInstance mi : m.modules()) {
+            for (int r = 0; r < m.rails().size(); r++) {
+                double a = b.heaters().moduleAmps(mi.id(), r);
+                if (a > 0) {
+                    t.row(label(mi), m.rails().get(r).name(), a);
+                }
+            }
+        }
+        return t;
+    }
+
+    /** Every stage with instances: where its figures come from, and its draw per rail. */
+    private Table stageDraws() {
+        Table t = new Table("stage_draws", "stage draws (per instance, at the nominal rails)")
+                .column("stage", "stage", TEXT)
+                .column("figures", "figures", TEXT, "computed: solved from the stage's circuit at the machine's rails; "
+                        + "declared: the stage's draw lines; none: neither")
+                .column("instances", "instances", COUNT)
+                .column("rail", "rail", TEXT)
+                .column("low", "low", AMPS, "output low")
+                .column("high", "high", AMPS, "output high")
+                .column("plate_low", "plate low", WATTS, "plate and screen dissipation, output low")
+                .column("plate_high", "plate high", WATTS, "plate and screen dissipation, output high");
+        int[] count = instances();
+        StageDraw d = b.draw();
+        for (int s = 0; s < m.stages().size(); s++) {
+            if (count[s] == 0) {
+                continue;
+            }
+            StageType st = m.stages().get(s);
+            boolean any = false;
+            for (int r = 0; r < m.rails().size(); r++) {
+                if (d.drawsOn(st, r)) {
+                    t.row(st.name(), d.origin(st).word(), count[s], m.rails().get(r).name(), d.amps(st, r, false),
+                            d.amps(st, r, true), d.plateWatts(st, false), d.plateWatts(st, true));
+                    any = true;
+                }
+            }
+            if (!any) {
+                t.row(st.name(), d.origin(st).word(), count[s], Absent.NONE, 0.0, 0.0, d.plateWatts(st, false),
+                        d.plateWatts(st, true));
+            }
+        }
+        return t;
+    }
+
+    private int[] instances() {
+        int[] count = new int[m.stages().size()];
+        for (DrawingInstance di : DrawingInstances.of(m)) {
+            count[di.stage()]++;
+        }
+        return count;
+    }
+
+    /** "3 stages computed from their circuits at the machine's rails, 2 declared". */
+    private String origins() {
+        int[] count = instances();
+        int[] by = new int[StageDraw.Origin.values().length];
+        for (int s = 0; s < count.length; s++) {
+            if (count[s] > 0) {
+                by[b.draw().origin(m.stages().get(s)).ordinal()]++;
+            }
+        }
+        List<String> parts = new ArrayList<>();
+        parts.add(by[StageDraw.Origin.COMPUTED.ordinal()] + " stage kinds computed from their circuits at the machine's rails");
+        parts.add(by[StageDraw.Origin.DECLARED.ordinal()] + " declared");
+        if (by[StageDraw.Origin.NONE.ordinal()] > 0) {
+            parts.add(by[StageDraw.Origin.NONE.ordinal()] + " with neither (counted as drawing nothing)");
+        }
+        return String.join(", ", parts);
     }
 
     private Table findings() {

@@ -18,9 +18,12 @@ import java.util.List;
 public final class Budget {
 
     /**
-     * One rail's supply check. {@code stageAmps} is the plate and bias peak used: the
-     * simulation's when there is one, else the static highest. {@code voltsAtPeak} is the
-     * rail's voltage after its source resistance at that peak (magnitude).
+     * One rail's supply check at the rail's voltage under that load ({@code voltsAtPeak},
+     * magnitude: nominal less the source resistance's drop, solved with the load it carries).
+     * {@code heaterAmps} is the heater strings' current at that voltage; {@code stageAmps} the
+     * plate and bias peak (the simulation's when there is one, else the static highest), scaled
+     * from the nominal rail to the loaded one as the power-up model scales its loads, so the
+     * peak is the power-up's steady state for the same rail and draws.
      */
     public record Supply(int rail, double heaterAmps, double stageAmps, boolean simulated, double peakAmps,
                          double limitAmps, double marginAmps, double voltsAtPeak) {
@@ -39,6 +42,7 @@ public final class Budget {
     }
 
     private final Machine m;
+    private final StageDraw draw;
     private final TubeCount tubes;
     private final HeaterAnalysis heaters;
     private final CurrentMeter meter;
@@ -49,16 +53,25 @@ public final class Budget {
     private final List<Supply> supply;
     private final List<Finding> findings;
 
-    /** The static budget, without a simulation. */
+    /** The static budget, without a simulation, stage figures from the circuits, heaters at hot resistance. */
     public Budget(Machine m) {
         this(m, null);
     }
 
     /** The budget with a simulation's meter; {@code meter} may be null or hold no samples. */
     public Budget(Machine m, CurrentMeter meter) {
+        this(meter != null ? meter.draw() : StageDraw.of(m), meter, HeaterLaw.HOT);
+    }
+
+    /**
+     * The budget of {@code draw}'s machine with those stage figures, a simulation's meter (null or
+     * empty: none; it must meter the same figures) and heater resistance by {@code law}.
+     */
+    public Budget(StageDraw draw, CurrentMeter meter, HeaterLaw law) {
+        Machine m = draw.machine();
         this.m = m;
+        this.draw = draw;
         this.tubes = new TubeCount(m);
-        this.heaters = new HeaterAnalysis(m);
         this.meter = meter != null && meter.samples() > 0 ? meter : null;
         int mods = m.modules().size();
         int rails = m.rails().size();
@@ -66,35 +79,48 @@ public final class Budget {
         high = new double[mods][rails];
         draws = new boolean[mods][rails];
         plate = new double[mods][2];
+        java.util.Set<String> used = new java.util.HashSet<>();
         for (DrawingInstance d : DrawingInstances.of(m)) {
             StageType st = m.stages().get(d.stage());
+            used.add(st.name());
             for (int r = 0; r < rails; r++) {
                 if (d.followsNet()) {
-                    low[d.module()][r] += StageDraw.minAmps(st, r);
-                    high[d.module()][r] += StageDraw.maxAmps(st, r);
+                    low[d.module()][r] += draw.minAmps(st, r);
+                    high[d.module()][r] += draw.maxAmps(st, r);
                 } else {
-                    double a = StageDraw.amps(st, r, d.fixedHigh());
+                    double a = draw.amps(st, r, d.fixedHigh());
                     low[d.module()][r] += a;
                     high[d.module()][r] += a;
                 }
-                draws[d.module()][r] |= StageDraw.drawsOn(st, r);
+                draws[d.module()][r] |= draw.drawsOn(st, r);
             }
-            double pl = PlateDissipation.watts(m, st, false);
-            double ph = PlateDissipation.watts(m, st, true);
-            plate[d.module()][0] += d.followsNet() ? Math.min(pl, ph) : PlateDissipation.watts(m, st, d.fixedHigh());
-            plate[d.module()][1] += d.followsNet() ? Math.max(pl, ph) : PlateDissipation.watts(m, st, d.fixedHigh());
+            double pl = draw.plateWatts(st, false);
+            double ph = draw.plateWatts(st, true);
+            plate[d.module()][0] += d.followsNet() ? Math.min(pl, ph) : draw.plateWatts(st, d.fixedHigh());
+            plate[d.module()][1] += d.followsNet() ? Math.max(pl, ph) : draw.plateWatts(st, d.fixedHigh());
         }
+        HeaterAnalysis nominal = new HeaterAnalysis(m, HeaterAnalysis.nominalVolts(m), law);
+        double[] loaded = new double[rails];
+        double[] stageNominal = new double[rails];
+        for (int r = 0; r < rails; r++) {
+            stageNominal[r] = this.meter != null ? this.meter.peakRail(r) : staticHighRail(r);
+            loaded[r] = LoadedRail.volts(m.rails().get(r), nominal, r, stageNominal[r]);
+        }
+        this.heaters = new HeaterAnalysis(m, loaded, law);
         List<Supply> s = new ArrayList<>();
         List<Finding> f = new ArrayList<>(heaters.findings());
+        f.addAll(StageFindings.of(draw, used));
         for (int r = 0; r < rails; r++) {
             Rail rail = m.rails().get(r);
+            double scale = LoadedRail.scale(rail, loaded[r]);
             double heat = heaters.railAmps(r);
-            double stage = this.meter != null ? this.meter.peakRail(r) : staticHighRail(r);
+            double stage = stageNominal[r] * scale;
             double peak = heat + stage;
             Supply line = new Supply(r, heat, stage, this.meter != null, peak, rail.limitAmps(),
-                    rail.limitAmps() - peak, Math.abs(rail.volts()) - peak * rail.sourceOhms());
+                    rail.limitAmps() - peak, loaded[r]);
             s.add(line);
             String subject = "rail " + rail.name();
+            double staticPeak = heat + staticHighRail(r) * scale;
             if (line.over()) {
                 f.add(new Finding(Finding.Severity.ERROR, subject,
                         "peak " + HeaterAnalysis.amps(peak) + " ("
@@ -103,16 +129,21 @@ public final class Budget {
                                 + (line.simulated() ? " in the simulation" : " with every stage at its highest draw")
                                 + ") exceeds its limit of " + HeaterAnalysis.amps(rail.limitAmps()),
                         "raise the supply's rating or move load to another rail"));
-            } else if (this.meter != null && line.limited() && heat + staticHighRail(r) > rail.limitAmps()) {
+            } else if (this.meter != null && line.limited() && staticPeak > rail.limitAmps()) {
                 f.add(new Finding(Finding.Severity.WARNING, subject,
                         "with every stage at its highest draw the rail would take "
-                                + HeaterAnalysis.amps(heat + staticHighRail(r)) + ", over its limit of "
+                                + HeaterAnalysis.amps(staticPeak) + ", over its limit of "
                                 + HeaterAnalysis.amps(rail.limitAmps()) + "; the program run stays within it",
                         "other programs or inputs may reach the limit"));
             }
         }
         supply = List.copyOf(s);
         findings = List.copyOf(f);
+    }
+
+    /** The stage figures the budget adds up (computed or declared, per stage). */
+    public StageDraw draw() {
+        return draw;
     }
 
     public Machine machine() {
@@ -183,8 +214,9 @@ public final class Budget {
     }
 
     /**
-     * Power a module takes from all supplies: its heater share plus plate and bias current
-     * times rail voltage, at the simulation's mean when there is one, else at the highest draw.
+     * Power a module takes from all supplies: its heater share (at the loaded rails) plus plate
+     * and bias current times nominal rail voltage, at the simulation's mean when there is one,
+     * else at the highest draw.
      */
     public double supplyWatts(int module) {
         double w = heaters.moduleWatts(module);

@@ -17,7 +17,7 @@ import java.util.function.IntToLongFunction;
 /**
  * Plate and bias current of a running machine, per module and per rail, fed one sample
  * after every simulated phase, and each module's approximate plate dissipation
- * ({@link PlateDissipation}). Each drawing stage instance contributes its stage's draw
+ * ({@link StageDraw#plateWatts}). Each drawing stage instance contributes its stage's draw
  * for its output value at that moment ({@link StageDraw}); the soft-start thyratron counts
  * as conducting. Heater current is not included (it does not depend on the logic state;
  * see {@link HeaterAnalysis}). Amperes, magnitudes. Every phase lasts the same time, so the
@@ -26,6 +26,7 @@ import java.util.function.IntToLongFunction;
  * its output-low draw.
  */
 public final class CurrentMeter {
+    private final StageDraw draw;
     private final int rails;
     /** Channels per module: one per rail, then the module's plate dissipation in watts. */
     private final int channels;
@@ -58,6 +59,12 @@ public final class CurrentMeter {
      * on simulator lane 0, inputs from {@code stimulus} (null: all 0), one sample after every phase.
      */
     public static CurrentMeter ofRun(Machine m, long[] rom, Stimulus stimulus, long cycles, InitMode init) {
+        return ofRun(StageDraw.of(m), rom, stimulus, cycles, init);
+    }
+
+    /** As {@link #ofRun(Machine, long[], Stimulus, long, InitMode)} with these stage figures. */
+    public static CurrentMeter ofRun(StageDraw draw, long[] rom, Stimulus stimulus, long cycles, InitMode init) {
+        Machine m = draw.machine();
         if (cycles < 1) {
             throw new IllegalArgumentException("cycles must be at least 1, not " + cycles);
         }
@@ -66,11 +73,16 @@ public final class CurrentMeter {
         if (rom != null) {
             sim.loadRom(rom);
         }
-        CurrentMeter meter = new CurrentMeter(m);
+        CurrentMeter meter = new CurrentMeter(draw);
         RunDriver driver = new RunDriver(new LogicLane(sim), m.inputs().size(), stimulus).observe(meter.observer(sim, 0));
         driver.start();
         driver.finish(driver.run(cycles));
         return meter;
+    }
+
+    /** The stage figures this meter adds up. */
+    public StageDraw draw() {
+        return draw;
     }
 
     /** Feeds this meter from {@code sim}'s lane after every phase of a {@link RunDriver} run. */
@@ -83,7 +95,15 @@ public final class CurrentMeter {
         };
     }
 
+    /** A meter with the machine's stage figures computed from its circuits ({@link StageDraw#of}). */
     public CurrentMeter(Machine m) {
+        this(StageDraw.of(m));
+    }
+
+    /** A meter with these stage figures (and their machine). */
+    public CurrentMeter(StageDraw draw) {
+        Machine m = draw.machine();
+        this.draw = draw;
         rails = m.rails().size();
         channels = rails + 1;
         modules = m.modules().size();
@@ -98,17 +118,17 @@ public final class CurrentMeter {
             StageType st = m.stages().get(d.stage());
             if (!d.followsNet()) {
                 for (int r = 0; r < rails; r++) {
-                    base[d.module() * channels + r] += StageDraw.amps(st, r, d.fixedHigh());
+                    base[d.module() * channels + r] += draw.amps(st, r, d.fixedHigh());
                 }
-                base[d.module() * channels + rails] += PlateDissipation.watts(m, st, d.fixedHigh());
+                base[d.module() * channels + rails] += draw.plateWatts(st, d.fixedHigh());
                 continue;
             }
             int n = 0;
             int[] slots = new int[channels];
             double[] amps = new double[channels];
             for (int c = 0; c < channels; c++) {
-                double low = c < rails ? StageDraw.amps(st, c, false) : PlateDissipation.watts(m, st, false);
-                double high = c < rails ? StageDraw.amps(st, c, true) : PlateDissipation.watts(m, st, true);
+                double low = c < rails ? draw.amps(st, c, false) : draw.plateWatts(st, false);
+                double high = c < rails ? draw.amps(st, c, true) : draw.plateWatts(st, true);
                 base[d.module() * channels + c] += low;
                 if (high != low) {
                     slots[n] = d.module() * channels + c;

@@ -12,10 +12,12 @@ import java.util.Locale;
 
 /**
  * The voltage each heater really gets. A string is its heaters in series across its rail
- * with the declared dropping resistor; each heater is taken at its hot resistance (rated
- * volts over rated amps, held constant: a fair model near the rating, not during warm-up).
- * The string current is rail volts over the total resistance, and each heater's share is
- * that current times its resistance. Where a string mixes heater currents and the rule
+ * with the declared dropping resistor, at the rail's voltage under load (the supply check's
+ * loaded voltage; the rail's nominal voltage where none is given); each heater's resistance
+ * follows a {@link HeaterLaw}: its hot resistance (rated volts over rated amps, held constant),
+ * or the tungsten wire's equilibrium at the current it carries. The string current is the one
+ * at which the string's resistances take the rail's voltage, and each heater's share is that
+ * current times its resistance. Where a string mixes heater currents and the rule
  * declares {@code shunt}, every heater rated below the string's highest current gets a
  * shunt that carries the difference at its rated voltage (R = V / (Imax - I)); shunted,
  * it looks like V / Imax to the string. A parallel heater is a string of one.
@@ -76,15 +78,46 @@ public final class HeaterAnalysis {
     }
 
     private final Machine m;
+    private final double[] railVolts;
+    private final HeaterLaw law;
+    private final StringSolver solver;
     private final List<StringResult> strings;
 
+    /** Every string at its rail's nominal voltage, heaters at their hot resistance. */
     public HeaterAnalysis(Machine m) {
+        this(m, nominalVolts(m), HeaterLaw.HOT);
+    }
+
+    /** Every string at {@code railVolts} (magnitudes, by rail), heater resistance by {@code law}. */
+    public HeaterAnalysis(Machine m, double[] railVolts, HeaterLaw law) {
         this.m = m;
+        this.railVolts = railVolts.clone();
+        this.law = law;
+        this.solver = new StringSolver(m, law);
         List<StringResult> out = new ArrayList<>();
         for (int i = 0; i < m.heaterStrings().size(); i++) {
             out.add(analyse(i, m.heaterStrings().get(i)));
         }
         strings = List.copyOf(out);
+    }
+
+    /** The rails' nominal voltages, magnitudes. */
+    public static double[] nominalVolts(Machine m) {
+        double[] v = new double[m.rails().size()];
+        for (int r = 0; r < v.length; r++) {
+            v[r] = Math.abs(m.rails().get(r).volts());
+        }
+        return v;
+    }
+
+    /** The heater current {@code rail}'s strings would draw at {@code volts} (magnitude), by the same law. */
+    public double railAmpsAt(int rail, double volts) {
+        return solver.railAmpsAt(rail, volts);
+    }
+
+    /** The law the heaters' resistances follow. */
+    public HeaterLaw law() {
+        return law;
     }
 
     public List<StringResult> strings() {
@@ -174,7 +207,7 @@ public final class HeaterAnalysis {
     }
 
     private StringResult analyse(int index, HeaterString s) {
-        double railVolts = Math.abs(m.rails().get(s.rail()).volts());
+        double railVolts = this.railVolts[s.rail()];
         List<HeaterRating> ratings = s.ratings();
         int n = ratings.size();
         double design = 0;
@@ -187,14 +220,14 @@ public final class HeaterAnalysis {
         }
         boolean mixed = design - low > SAME * design;
         boolean shunts = mixed && s.shunt();
+        double[] law = StringSolver.effective(s);
+        double amps = solver.stringAmps(s, railVolts, law);
         double[] eff = new double[n];
         double total = s.dropOhms();
         for (int i = 0; i < n; i++) {
-            HeaterRating r = ratings.get(i);
-            eff[i] = shunts ? r.volts() / design : r.hotOhms();
+            eff[i] = solver.ohms(s, law, i, amps);
             total += eff[i];
         }
-        double amps = railVolts / total;
         List<Heater> heaters = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             HeaterRating r = ratings.get(i);
@@ -204,8 +237,8 @@ public final class HeaterAnalysis {
             double shunt = shunts && design - r.amps() > SAME * design ? r.volts() / (design - r.amps()) : Double.NaN;
             double shuntWatts = Double.isNaN(shunt) ? Double.NaN : v * v / shunt;
             double share = eff[i] / (total - s.dropOhms());
-            heaters.add(new Heater(env, e.designator(), e.tube(), e.module(), r, v, v / r.hotOhms(),
-                    v / r.volts() - 1, shunt, shuntWatts, share * amps));
+            heaters.add(new Heater(env, e.designator(), e.tube(), e.module(), r, v,
+                    Double.isNaN(shunt) ? amps : v / r.hotOhms(), v / r.volts() - 1, shunt, shuntWatts, share * amps));
         }
         double dropVolts = amps * s.dropOhms();
         Suggestion suggestion = null;

@@ -16,13 +16,15 @@ import org.thermion.model.TubeType;
  * {@code I x V}. Current from another positive rail (a cathode follower's plate) is taken
  * at the full rail voltage, an upper bound. A conducting gas thyratron drops its arc
  * voltage, {@code P = I x Varc}. Draws from negative rails feed grid dividers and cathode
- * resistors: resistor losses, not counted here.
+ * resistors: resistor losses, not counted here. Used for declared figures only: where a stage's
+ * figures are computed, {@link StageDraw#plateWatts} takes the tubes' own dissipation.
  */
 public final class PlateDissipation {
     private PlateDissipation() {
     }
 
-    public static double watts(Machine m, StageType st, boolean outputHigh) {
+    /** The approximation for a stage whose draws are {@code amps} per rail (declared figures) in that state. */
+    static double watts(Machine m, StageType st, double[] amps) {
         TubeType tube = m.tubes().get(st.tube());
         double w = 0;
         for (int r = 0; r < m.rails().size(); r++) {
@@ -30,7 +32,7 @@ public final class PlateDissipation {
             if (rail.volts() <= 0) {
                 continue;
             }
-            double i = StageDraw.amps(st, r, outputHigh);
+            double i = amps[r];
             if (i <= 0) {
                 continue;
             }

@@ -33,9 +33,10 @@ class BudgetTest {
         assertThat(b.staticHighRail(bplus)).isCloseTo(2 * 2.4e-3, within(1e-12));
         assertThat(b.staticLowRail(bias)).isCloseTo(0.4e-3, within(1e-12));
         assertThat(b.staticHighRail(bias)).isCloseTo(0.4e-3, within(1e-12));
-        // heater rail: two 6AU6 in series 0.3 A plus the lone 2D21 at twice its rating, 12.6 V / 10.5 ohm = 1.2 A
+        // heater rail: two 6AU6 in series 0.3 A plus the lone 2D21 at twice its rating, 12.6 V / 10.5 ohm = 1.2 A:
+        // 1.5 A at 12.6 V is 8.4 ohm hot; through the 0.02 ohm source (Ohm's law) 12.6 / 8.42 A
         Budget.Supply heat = b.supply().get(m.railIndex("heat"));
-        assertThat(heat.heaterAmps()).isCloseTo(1.5, within(1e-9));
+        assertThat(heat.heaterAmps()).isCloseTo(12.6 / 8.42, within(1e-9));
         assertThat(heat.simulated()).isFalse();
         assertThat(b.failed()).isTrue();
     }

@@ -79,10 +79,13 @@ class MeteredRunTest {
         Budget b = new Budget(m);
         assertThat(b.staticLowRail(bplus)).isCloseTo(3.3e-3, within(1e-12));
         assertThat(b.staticHighRail(bplus)).isCloseTo(8.0e-3, within(1e-12));
-        // heaters: two 6AU6 in series, 0.3 A, plus one 12AU7 at 12.6 V 0.15 A (hb9aik.ch/notes/serparfil.htm)
+        // heaters: two 6AU6 in series, 0.3 A, plus one 12AU7 at 12.6 V 0.15 A (hb9aik.ch/notes/serparfil.htm):
+        // 0.45 A at 12.6 V is 28 ohm hot; through the 0.01 ohm source the rail divides (Ohm's law) to
+        // 12.6 x 28 / 28.01 V, and the heaters take 12.6 / 28.01 A
         Budget.Supply h = b.supply().get(heat);
-        assertThat(h.heaterAmps()).isCloseTo(0.45, within(1e-9));
-        assertThat(h.marginAmps()).isCloseTo(10 - 0.45, within(1e-9));
+        assertThat(h.heaterAmps()).isCloseTo(12.6 / 28.01, within(1e-9));
+        assertThat(h.voltsAtPeak()).isCloseTo(12.6 * 28 / 28.01, within(1e-7)); // bisection to 1e-9 of the rail
+        assertThat(h.marginAmps()).isCloseTo(10 - 12.6 / 28.01, within(1e-9));
         assertThat(b.failed()).isFalse();
     }
 
@@ -92,11 +95,13 @@ class MeteredRunTest {
         Budget b = new Budget(m, CurrentMeter.ofRun(m, new long[] {0b00, 0b01, 0b11, 0b10}, null, 4, new InitMode.Zero()));
         Budget.Supply s = b.supply().get(m.railIndex("bplus"));
         assertThat(s.simulated()).isTrue();
-        assertThat(s.peakAmps()).isCloseTo(8.0e-3, within(1e-12));
+        // 8 mA at 48 V is a conductance of 8 mA / 48 V; through the 4 ohm source the rail sits at
+        // 48 / (1 + 4 x 8 mA / 48 V) and the load draws 8 mA scaled by that over 48 V (Ohm's law)
+        double volts = 48 / (1 + 4 * 8.0e-3 / 48);
+        assertThat(s.voltsAtPeak()).isCloseTo(volts, within(1e-7));
+        assertThat(s.peakAmps()).isCloseTo(8.0e-3 * volts / 48, within(1e-10));
         assertThat(s.over()).isTrue();
-        assertThat(s.marginAmps()).isCloseTo(-3.0e-3, within(1e-12));
-        // 48 V less 8 mA through the 4 ohm source
-        assertThat(s.voltsAtPeak()).isCloseTo(48 - 8.0e-3 * 4, within(1e-12));
+        assertThat(s.marginAmps()).isCloseTo(5.0e-3 - 8.0e-3 * volts / 48, within(1e-10));
         assertThat(b.failed()).isTrue();
         assertThat(b.findings()).anySatisfy(f -> assertThat(f.subject()).isEqualTo("rail bplus"));
     }
@@ -107,7 +112,8 @@ class MeteredRunTest {
         Machine m = PowerMachines.of(rommed("7 mA"));
         Budget b = new Budget(m, CurrentMeter.ofRun(m, new long[] {0b00, 0b01, 0b01, 0b00}, null, 4, new InitMode.Zero()));
         assertThat(b.failed()).isFalse();
-        assertThat(b.findings()).singleElement().satisfies(f -> {
+        // the library's declared draws differ from its circuits' (warned per stage); the rail's warning follows
+        assertThat(b.findings()).filteredOn(f -> f.subject().startsWith("rail")).singleElement().satisfies(f -> {
             assertThat(f.severity()).isEqualTo(Finding.Severity.WARNING);
             assertThat(f.subject()).isEqualTo("rail bplus");
         });
@@ -118,8 +124,8 @@ class MeteredRunTest {
         Machine m = PowerMachines.of(rommed("800 mA"));
         var inv = m.stages().stream().filter(s -> s.name().equals("pentode_inverter")).findFirst().orElseThrow();
         // conducting: 2.4 mA; 48 V - 2.4 mA x 22 k is below 2.4 mA x 4.4 k (ron) = 10.56 V: 25.3 mW
-        assertThat(PlateDissipation.watts(m, inv, false)).isCloseTo(2.4e-3 * 2.4e-3 * 4.4e3, within(1e-12));
+        assertThat(StageDraw.declaredOnly(m).plateWatts(inv, false)).isCloseTo(2.4e-3 * 2.4e-3 * 4.4e3, within(1e-12));
         // cut off: 0.05 mA; the tube drops 48 V - 0.05 mA x 22 k = 46.9 V: 2.345 mW
-        assertThat(PlateDissipation.watts(m, inv, true)).isCloseTo(0.05e-3 * (48 - 0.05e-3 * 22e3), within(1e-12));
+        assertThat(StageDraw.declaredOnly(m).plateWatts(inv, true)).isCloseTo(0.05e-3 * (48 - 0.05e-3 * 22e3), within(1e-12));
     }
 }

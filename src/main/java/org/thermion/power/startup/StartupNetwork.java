@@ -12,6 +12,7 @@ import org.thermion.model.RailDraw;
 import org.thermion.model.SoftStart;
 import org.thermion.model.StageType;
 import org.thermion.model.TubeType;
+import org.thermion.power.StageDraw;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -37,6 +38,8 @@ public final class StartupNetwork {
     final Machine machine;
     final ThermalAssumptions assumptions;
     final DrawMode drawMode;
+    /** Each stage's steady draws: computed from its circuit, or declared (the budget's figures). */
+    final StageDraw draw;
     final Emission emission;
     final List<HeaterModel> models;
     final List<String> notes;
@@ -80,6 +83,7 @@ public final class StartupNetwork {
         this.machine = m;
         this.assumptions = a;
         this.drawMode = mode;
+        this.draw = StageDraw.of(m);
         this.emission = new Emission(a);
         List<String> noteList = new ArrayList<>();
 
@@ -304,6 +308,7 @@ public final class StartupNetwork {
         this.adjust = base.adjust;
         this.assumptions = base.assumptions;
         this.drawMode = base.drawMode;
+        this.draw = base.draw;
         this.emission = base.emission;
         this.models = base.models;
         this.notes = base.notes;
@@ -384,8 +389,8 @@ public final class StartupNetwork {
 
     /** Steady current a stage instance draws from a rail under the draw mode, amperes. */
     double drawAmps(StageType st, int rail) {
-        double low = sum(st.drawLow(), rail), high = sum(st.drawHigh(), rail), always = sum(st.drawAlways(), rail);
-        return always + (drawMode == DrawMode.HIGHEST ? Math.max(low, high) : 0.5 * (low + high));
+        return drawMode == DrawMode.HIGHEST ? draw.maxAmps(st, rail)
+                : 0.5 * (draw.amps(st, rail, false) + draw.amps(st, rail, true));
     }
 
     private void addDraw(Machine m, StageType st, int[] envState, int env, List<Map<Integer, Double>> plate) {
@@ -397,16 +402,6 @@ public final class StartupNetwork {
                 plate.get(r).merge(s, amps / v, Double::sum);
             }
         }
-    }
-
-    private static double sum(List<RailDraw> draws, int rail) {
-        double a = 0;
-        for (RailDraw d : draws) {
-            if (d.rail() == rail) {
-                a += d.amps();
-            }
-        }
-        return a;
     }
 
     static String fmt(double v) {
