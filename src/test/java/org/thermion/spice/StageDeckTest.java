@@ -76,7 +76,7 @@ class StageDeckTest {
         StageCircuit nor = LibraryCircuits.of(tubes).get("triode_nor2");
         // 12AU7 per section: Cgk 1.6 pF, Cgp 1.5 pF, Cpk 0.5 pF (data sheet values, from memory).
         TubeType u7 = new TubeType("12AU7", org.thermion.model.TubeKind.TRIODE, 2, List.of(), 10, 10, 1.6e-12,
-                1.5e-12, 0.5e-12, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, "from memory");
+                1.5e-12, 0.5e-12, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, "from memory", List.of());
         StageDeck d = StageDeck.of(nor, solver, new double[] {0, 40}, false, List.of(), n -> n.equals("12AU7") ? u7 : null);
         List<SpiceCard.Capacitor> caps = d.deck().cards().stream().filter(c -> c instanceof SpiceCard.Capacitor)
                 .map(c -> (SpiceCard.Capacitor) c).toList();
