@@ -21,14 +21,13 @@ public final class CircuitBench {
         }
     }
 
-    /** Runs the workload at the library's rails (48 V B+, −12 V bias, 24 V relay). */
-    public static Result run(int n, long seed) {
-        TubeLibrary tubes = new TubeLibrary();
-        Map<String, StageCircuit> lib = LibraryCircuits.of(tubes);
-        List<StageCircuit> drivers = List.of(lib.get("pentode_inverter"), lib.get("triode_nor2"),
-                lib.get("cathode_follower"), lib.get("diode_and"), lib.get("diode_or"), lib.get("triode_flipflop"));
-        List<StageCircuit> receivers = List.of(lib.get("pentode_inverter"), lib.get("triode_nor2"));
-        StageSolver solver = new StageSolver(RailSet.volts("bplus", 48, "bias", -12, "relay", 24));
+    /** Runs the workload on the library's logic stages as {@code mc} declares them, at its rails. */
+    public static Result run(MachineCircuits mc, int n, long seed) {
+        Map<String, StageCircuit> lib = mc.circuitsByName();
+        List<StageCircuit> drivers = present(lib, "pentode_inverter", "triode_nor2", "cathode_follower", "diode_and",
+                "diode_or", "triode_flipflop");
+        List<StageCircuit> receivers = present(lib, "pentode_inverter", "triode_nor2");
+        StageSolver solver = new StageSolver(mc.rails());
         MarginAnalysis margins = new MarginAnalysis(solver);
         InputLevels levels = new InputLevels(5, 45);
         Random rnd = new Random(seed);
@@ -46,16 +45,16 @@ public final class CircuitBench {
         return new Result(n, solver.solves(), System.nanoTime() - t0, unsolved);
     }
 
-    /** Prints a measurement: {@code java -cp thermion.jar org.thermion.circuit.CircuitBench [n]}. */
-    public static void main(String[] args) {
-        int n = args.length > 0 ? Integer.parseInt(args[0]) : 10_000;
-        List<Result> runs = new ArrayList<>();
-        for (int i = 0; i < 3; i++) {
-            runs.add(run(n, 1));
+    private static List<StageCircuit> present(Map<String, StageCircuit> lib, String... names) {
+        List<StageCircuit> out = new ArrayList<>();
+        for (String n : names) {
+            if (lib.containsKey(n)) {
+                out.add(lib.get(n));
+            }
         }
-        for (Result r : runs) {
-            System.out.printf("%d stages: %.3f s, %d distinct solves, %d without a solution%n", r.stages(),
-                    r.seconds(), r.distinctSolves(), r.unsolved());
+        if (out.isEmpty()) {
+            throw new IllegalArgumentException("none of the library's logic stages has a circuit here");
         }
+        return out;
     }
 }

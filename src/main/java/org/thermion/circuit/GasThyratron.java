@@ -11,6 +11,8 @@ package org.thermion.circuit;
  */
 public record GasThyratron(String name, double arcDrop, double criticalGrid, double maxAvgAmps, String source)
         implements TubeModel {
+    /** Arc drop of a small xenon thyratron when its tube block gives none: 8 V (the 2D21's, REFERENCES.md). */
+    public static final double TYPICAL_ARC_DROP = 8;
 
     public GasThyratron {
         Checks.positive("arcDrop", arcDrop);

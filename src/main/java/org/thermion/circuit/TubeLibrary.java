@@ -1,75 +1,41 @@
 package org.thermion.circuit;
 
+import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-import static org.thermion.circuit.FitPoint.Quantity.AMPLIFICATION;
-import static org.thermion.circuit.FitPoint.Quantity.PLATE_CURRENT;
-import static org.thermion.circuit.FitPoint.Quantity.SCREEN_CURRENT;
-import static org.thermion.circuit.FitPoint.Quantity.TRANSCONDUCTANCE;
+import org.thermion.model.CurvePoint;
+import org.thermion.model.TubeCurves;
+import org.thermion.model.TubeLaw;
+import org.thermion.model.TubeType;
 
 /**
- * Model parameters for the parts library's tubes. Published sets are taken as printed; where
- * none is published the set is fitted here (at construction, a few milliseconds) to the
- * operating points listed with it, and the fit with its points and residual is kept.
- * Every figure names its source; "from memory" means recalled, not read from the sheet.
+ * The tube models of a machine, built from its tube types' declared curves (the parts library's
+ * tube blocks, or a user's own). Parameters are taken as written; where a block names parameters
+ * to fit, they are fitted here to its points (a few milliseconds each) and the fit with its
+ * points and residual is kept. Every figure names its source; "from memory" means recalled.
  */
 public final class TubeLibrary {
-    private static final String KOREN = "Koren, Glass Audio 1996 (REFERENCES.md)";
-    /** Knee of small pentodes' plate curves, not fitted (no low-voltage point): from memory. */
-    private static final double PENTODE_KVB = 20;
-
     private final Map<String, TubeModel> models = new LinkedHashMap<>();
     private final Map<String, FittedModel<?>> fits = new LinkedHashMap<>();
 
-    /** The library with every fit computed. */
-    public TubeLibrary() {
-        GridCurrentLaw g = GridCurrentLaw.KOREN_NETLIST;
-        add(new KorenTriode("12AU7", 21.5, 1.3, 1180, 84, 300, g, 2.75,
-                KOREN + "; plate rating 2.75 W from memory"));
-        add(new KorenTriode("12AX7", 100, 1.4, 1060, 600, 300, g, 1.2,
-                KOREN + "; plate rating 1.2 W from memory"));
-        add(new KorenTriode("12AT7", 60, 1.35, 460, 300, 300, g, 2.5,
-                KOREN + "; plate rating 2.5 W from memory"));
-        triodeFit(new KorenTriode("6SN7", 20, 1.3, 1500, 200, 300, g, 3.5,
-                "fitted to perceptioro.com/6SN7 (class A1 typical operation); plate rating 3.5 W from memory"),
-                List.of(FitPoint.fixed(250, Double.NaN, -8, PLATE_CURRENT, 9e-3, "perceptioro.com/6SN7"),
-                        FitPoint.fixed(250, Double.NaN, -8, TRANSCONDUCTANCE, 2.6e-3, "perceptioro.com/6SN7"),
-                        FitPoint.fixed(250, Double.NaN, -8, AMPLIFICATION, 20, "perceptioro.com/6SN7")));
-        triodeFit(new KorenTriode("6J6", 38, 1.3, 600, 300, 300, g, 1.5,
-                "fitted to operating points from memory; plate rating 1.5 W from memory"),
-                selfBiasedTriode(100, 50, 8.5e-3, 5.3e-3, 38, "from memory"));
-        triodeFit(new KorenTriode("5965", 47, 1.3, 500, 400, 300, g, 2.2,
-                "fitted to operating points from memory (weak); plate rating 2.2 W from memory"),
-                selfBiasedTriode(150, 220, 8.2e-3, 6.5e-3, 47, "from memory (weak)"));
-        triodeFit(new KorenTriode("5670", 35, 1.3, 600, 300, 300, g, 1.5,
-                "fitted to operating points from memory; plate rating 1.5 W from memory"),
-                selfBiasedTriode(150, 240, 8.2e-3, 5.5e-3, 35, "from memory"));
-        pentodeFit(new KorenPentode("6AU6", 33, 1.35, 1200, 1100, 250, PENTODE_KVB, g, 3.5, 0.75,
-                "fitted to RCA 6AU6 typical operation at 100 V and cut-off points (from memory); "
-                        + "knee Kvb 20 V and ratings 3.5 W / 0.75 W from memory"),
-                List.of("mu", "kg1", "kg2", "kp"),
-                List.of(FitPoint.selfBiased(100, 100, 150, PLATE_CURRENT, 5.0e-3, "RCA 6AU6, from memory"),
-                        FitPoint.selfBiased(100, 100, 150, SCREEN_CURRENT, 2.1e-3, "RCA 6AU6, from memory"),
-                        FitPoint.selfBiased(100, 100, 150, TRANSCONDUCTANCE, 3.9e-3, "RCA 6AU6, from memory"),
-                        FitPoint.fixed(100, 100, -4.2, PLATE_CURRENT, 10e-6, "RCA 6AU6 cut-off, from memory"),
-                        FitPoint.fixed(250, 150, -6.5, PLATE_CURRENT, 10e-6, "RCA 6AU6 cut-off, from memory")));
-        pentodeFit(new KorenPentode("6AK5", 33, 1.35, 800, 800, 140, PENTODE_KVB, g, 1.7, 0.5,
-                "fitted to typical operation from memory; knee and ratings from memory"),
-                List.of("mu", "kg1", "kg2", "kp"),
-                List.of(FitPoint.selfBiased(120, 120, 200, PLATE_CURRENT, 7.5e-3, "from memory"),
-                        FitPoint.selfBiased(120, 120, 200, SCREEN_CURRENT, 2.5e-3, "from memory"),
-                        FitPoint.selfBiased(120, 120, 200, TRANSCONDUCTANCE, 5.0e-3, "from memory")));
-        add(ChildDiode.throughPoint("6AL5", 10, 60e-3, 9e-3,
-                "from memory (unconfirmed): 60 mA per plate at 10 V; 9 mA rated d.c. per plate from memory"));
-        add(new GasThyratron("2D21", 8, -4, 0.1,
-                "arc drop 8 V (vacuumtubes.io 2D21W page: 8-12 V); critical grid -4 V, the middle of the page's "
-                        + "-2 to -6 V; 100 mA average from the same page"));
+    private TubeLibrary() {
     }
 
-    /** The model of a tube type, if the library has one. */
+    /** The models of every tube type that declares one; the others have none. */
+    public static TubeLibrary of(Collection<TubeType> tubes) {
+        TubeLibrary lib = new TubeLibrary();
+        for (TubeType t : tubes) {
+            if (t.curves() != null) {
+                lib.add(t);
+            }
+        }
+        return lib;
+    }
+
+    /** The model of a tube type, if it has one. */
     public Optional<TubeModel> model(String name) {
         return Optional.ofNullable(models.get(name));
     }
@@ -89,30 +55,49 @@ public final class TubeLibrary {
         TubeModel m = models.get(name);
         if (m == null) {
             throw new IllegalArgumentException("no model parameters for tube " + name
-                    + ": add a published set or operating points to fit");
+                    + ": add a model line (and points to fit) to its tube block");
         }
         return m;
     }
 
-    private void add(TubeModel m) {
-        models.put(m.name(), m);
+    /** A declared point as the fitter takes it. */
+    public static FitPoint fitPoint(CurvePoint p) {
+        FitPoint.Quantity q = switch (p.quantity()) {
+            case PLATE -> FitPoint.Quantity.PLATE_CURRENT;
+            case SCREEN -> FitPoint.Quantity.SCREEN_CURRENT;
+            case GM -> FitPoint.Quantity.TRANSCONDUCTANCE;
+            case MU -> FitPoint.Quantity.AMPLIFICATION;
+        };
+        return new FitPoint(p.plateVolts(), p.screenVolts(), p.gridVolts(), p.cathodeOhms(), q, p.value(), p.source());
     }
 
-    private void triodeFit(KorenTriode start, List<FitPoint> points) {
-        FittedModel<KorenTriode> f = TubeFitter.fitTriode(start, List.of("mu", "kg1", "kp"), points);
-        fits.put(start.name(), f);
-        add(f.model());
+    private void add(TubeType t) {
+        TubeCurves c = t.curves();
+        String source = c.source().isEmpty() ? t.source() : c.source();
+        GridCurrentLaw grid = Double.isNaN(c.gridK()) ? GridCurrentLaw.KOREN_NETLIST
+                : new GridCurrentLaw(c.gridK(), "declared gridcurrent of " + t.name());
+        List<FitPoint> points = c.points().stream().map(TubeLibrary::fitPoint).toList();
+        TubeModel m;
+        if (c.law() instanceof TubeLaw.Koren k && Double.isNaN(k.kg2())) {
+            KorenTriode start = new KorenTriode(t.name(), k.mu(), k.ex(), k.kg1(), k.kp(), k.kvb(), grid, c.plateWatts(),
+                    source);
+            m = c.fitted().isEmpty() ? start : keep(TubeFitter.fitTriode(start, c.fitted(), points));
+        } else if (c.law() instanceof TubeLaw.Koren k) {
+            KorenPentode start = new KorenPentode(t.name(), k.mu(), k.ex(), k.kg1(), k.kg2(), k.kp(), k.kvb(), grid,
+                    c.plateWatts(), c.screenWatts(), source);
+            m = c.fitted().isEmpty() ? start : keep(TubeFitter.fitPentode(start, c.fitted(), points));
+        } else if (c.law() instanceof TubeLaw.Diode d) {
+            m = ChildDiode.throughPoint(t.name(), d.volts(), d.amps(), t.avgCathodeAmps(), source);
+        } else {
+            TubeLaw.Gas g = (TubeLaw.Gas) c.law();
+            m = new GasThyratron(t.name(), Double.isNaN(t.arcDropVolts()) ? GasThyratron.TYPICAL_ARC_DROP
+                    : t.arcDropVolts(), g.criticalGrid(), t.avgCathodeAmps(), source);
+        }
+        models.put(t.name(), m);
     }
 
-    private void pentodeFit(KorenPentode start, List<String> free, List<FitPoint> points) {
-        FittedModel<KorenPentode> f = TubeFitter.fitPentode(start, free, points);
-        fits.put(start.name(), f);
-        add(f.model());
-    }
-
-    private static List<FitPoint> selfBiasedTriode(double vp, double rk, double ip, double gm, double mu, String src) {
-        return List.of(FitPoint.selfBiased(vp, Double.NaN, rk, PLATE_CURRENT, ip, src),
-                FitPoint.selfBiased(vp, Double.NaN, rk, TRANSCONDUCTANCE, gm, src),
-                FitPoint.selfBiased(vp, Double.NaN, rk, AMPLIFICATION, mu, src));
+    private <M extends TubeModel> M keep(FittedModel<M> f) {
+        fits.put(f.model().name(), f);
+        return f.model();
     }
 }

@@ -6,6 +6,7 @@ import org.thermion.lang.ast.Prop;
 import org.thermion.model.HeaterRating;
 import org.thermion.model.Rail;
 import org.thermion.model.RailDraw;
+import org.thermion.model.StageCircuitSpec;
 import org.thermion.model.StageFunction;
 import org.thermion.model.StageType;
 import org.thermion.model.TubeKind;
@@ -143,7 +144,8 @@ final class Parts {
         return new TubeType(name, kind, (int) b.num("sections"), List.copyOf(heaters), b.num("warmup"), b.num("coldratio"),
                 cgk, cgp, cpk, cin, cout, b.num("avgcurrent"), b.num("peakcurrent"), b.num("arcdrop"),
                 source == null ? "" : source.word("value"),
-                new BasingReader(diags).read(b.lines("basing"), kind, (int) b.num("sections")));
+                new BasingReader(diags).read(b.lines("basing"), kind, (int) b.num("sections")),
+                new TubeCurvesReader(diags).read(name, kind, b));
     }
 
     /** The stage named, built on first use; -1 (reported) when unknown. */
@@ -188,12 +190,15 @@ final class Parts {
                     "expected one of: " + String.join(", ", StageFunction.words())));
             return null;
         }
+        int errorsBefore = diags.errorCount();
         PropBlock b = PropBlock.read(PropertyTable.STAGE, p, "stage '" + name + "'", p.values().get(0).span(), diags);
+        boolean blockOk = diags.errorCount() == errorsBefore;
         PropLine tubeLine = b.line("tube");
         int tube = tubeLine == null ? -1 : tube(tubeLine.word("tube"), tubeLine.span("tube"));
         PropLine sections = b.line("sections");
         PropLine loadLine = b.line("load");
-        double load = b.num("load");
+        double load = loadLine != null && loadLine.has("lampvolts")
+                ? loadLine.num("lampvolts") / loadLine.num("lampamps") : b.num("load");
         int loadRail = loadLine == null ? -1 : stageRail(loadLine.word("rail"), loadLine.span("rail"), name, p, use);
         List<RailDraw> low = new ArrayList<>(), high = new ArrayList<>(), always = new ArrayList<>();
         for (PropLine d : b.lines("draw")) {
@@ -218,10 +223,21 @@ final class Parts {
         }
         double ron = b.has("ron") ? b.num("ron") : Double.isNaN(load) ? PropertyTable.RON_WITHOUT_LOAD : load / PropertyTable.RON_LOAD_RATIO;
         PropLine note = b.line("note");
-        return new StageType(name, function, tube, (int) b.num("sections"), sections != null && sections.has("per"),
-                b.has("fanin") ? (int) b.num("fanin") : function.defaultFanIn, Double.isNaN(load) ? 0 : load, loadRail,
+        int fanIn = b.has("fanin") ? (int) b.num("fanin") : function.defaultFanIn;
+        boolean perInput = sections != null && sections.has("per");
+        StageCircuitSpec circuit = !blockOk ? null : new StageCircuitReader(diags,
+                (r, at) -> r.equals("ground") || stageRail(r, at, name, p, use) >= 0)
+                .read(name, function, tubes.get(tube), b, (int) b.num("sections"), fanIn, perInput, p.values().get(0).span());
+        if (circuit != null && circuit.outputAtCathode() && circuit.load() == null) {
+            // A follower's load, as delays and dissipation see it, is its cathode resistor.
+            load = circuit.cathodeOhms();
+            loadRail = railIndex.getOrDefault(circuit.cathodeRail(), -1);
+        } else if (circuit != null && circuit.seriesOhms() > 0) {
+            load = circuit.seriesOhms(); // a thyratron's plate resistor, as soft starts and budgets take it
+        }
+        return new StageType(name, function, tube, (int) b.num("sections"), perInput, fanIn, Double.isNaN(load) ? 0 : load, loadRail,
                 List.copyOf(low), List.copyOf(high), List.copyOf(always), rise, fall, b.num("setup"), ron, b.num("wiring"),
-                b.num("gain"), note == null ? "" : note.word("value"));
+                b.num("gain"), note == null ? "" : note.word("value"), circuit);
     }
 
     /** The output state ({@code low}, {@code high}, {@code always}) in which a stage of {@code f} conducts; null when reported. */

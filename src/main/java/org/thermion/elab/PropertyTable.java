@@ -76,6 +76,50 @@ final class PropertyTable {
                     .byDefault("none").source(PLAUSIBLE),
             Property.of("arcdrop", "tube drop while conducting (thyratrons)", q("tube drop", Unit.VOLT, above(0, 1e3)))
                     .byDefault("none").source(PLAUSIBLE),
+            Property.of("model", "the law of the section's currents and its parameters: Koren's equations "
+                            + "(triode: mu ex kg1 kp kvb; pentode: also kg2), the 3/2-power diode law through one point, "
+                            + "or a thyratron's critical grid voltage; with where the figures come from",
+                    new Slot.Choice("law", branches(
+                            "koren", List.of(new Slot.AnyOrder(List.of(koren("mu"), koren("ex"), koren("kg1"), koren("kg2"),
+                                    koren("kp"), koren("kvb"), sourceOption()))),
+                            "diode", List.of(q("amps", "diode current", Unit.AMPERE, above(0, 100)), new Slot.Word("at"),
+                                    q("volts", "diode voltage", Unit.VOLT, above(0, 1e3)), sourceOption()),
+                            "gas", List.of(new Slot.Word("critical"),
+                                    q("critical", "critical grid voltage", Unit.VOLT, from(-200, 200)), sourceOption())),
+                            null))
+                    .byDefault("none: the tube's stages must state their currents")
+                    .source("Koren, Glass Audio 1996 (REFERENCES.md); Child-Langmuir 3/2-power law; " + PLAUSIBLE
+                            + " of 10^9 on a Koren parameter"),
+            Property.of("point", "a published figure to fit the model to or check it by: plate or screen current, "
+                            + "transconductance (mA per V) or amplification factor, at a plate voltage, a screen voltage "
+                            + "(pentodes), and a fixed grid voltage or a cathode resistor; with its source",
+                    new Slot.Choice("quantity", branches(
+                            "plate", List.of(q("amps", "plate current", Unit.AMPERE, above(0, 100))),
+                            "screen", List.of(q("amps", "screen current", Unit.AMPERE, above(0, 100))),
+                            "gm", List.of(q("amps", "transconductance", Unit.AMPERE, above(0, 100)), new Slot.Word("per"),
+                                    new Slot.Word("V")),
+                            "mu", List.of(plain("factor", "amplification factor", above(0, 1e4)))), null),
+                    new Slot.Word("at"), q("plate", "plate voltage", Unit.VOLT, above(0, 1e4)),
+                    new Slot.Optional("screen", List.of(q("screenvolts", "screen voltage", Unit.VOLT, above(0, 1e4)))),
+                    new Slot.Choice("bias", branches(
+                            "grid", List.of(q("grid", "grid voltage", Unit.VOLT, from(-1e3, 1e3))),
+                            "cathode", List.of(q("cathode", "cathode resistor", Unit.OHM, above(0, 1e7)))), null),
+                    new Slot.Word("source"), text("pointsource", "where the figure comes from"))
+                    .many().byDefault("none").source(PLAUSIBLE),
+            Property.of("fit", "model parameters fitted to the point lines when the tube is loaded (Levenberg-Marquardt on "
+                            + "the relative errors), and the fit's residual as the library states it",
+                    new Slot.Names("params", "parameter names"),
+                    new Slot.Optional("residual", List.of(plain("rms", "rms relative error in percent", from(0, 1e3)),
+                            new Slot.Word("percent"))))
+                    .byDefault("none: the model line's parameters are used as written").source(PLAUSIBLE),
+            Property.of("gridcurrent", "grid current at a positive grid voltage, for the 3/2-power grid law",
+                    q("amps", "grid current", Unit.AMPERE, above(0, 10)), new Slot.Word("at"),
+                    q("volts", "grid voltage", Unit.VOLT, above(0, 100)))
+                    .byDefault("0.5 mA at 1 V").source("matched to the 2 kOhm grid resistance of Koren's 1996 netlists"),
+            Property.of("maxplate", "rated plate dissipation per section", q("plate dissipation", Unit.WATT, above(0, 1e4)))
+                    .byDefault("unknown: not checked").source(PLAUSIBLE),
+            Property.of("maxscreen", "rated screen dissipation (pentodes)", q("screen dissipation", Unit.WATT, above(0, 1e4)))
+                    .byDefault("unknown: not checked").source(PLAUSIBLE),
             Property.of("basing", "the base and what each pin carries, as one source gives it; one line per source "
                             + "(several when sources disagree: the first is wired, the pins they differ on are flagged)",
                     name("base", "a base", List.of("miniature7", "noval", "octal")), new Slot.Text("pins", "the pins"),
@@ -94,9 +138,48 @@ final class PropertyTable {
             Property.of("fanin", "most inputs one instance takes", whole("fan-in", 1, 16))
                     .byDefault("the function's: 1 for not, buffer, latch, lamp, relay; 2 for the others")
                     .source("16 diode inputs at most (" + PLAUSIBLE + ")"),
-            Property.of("load", "plate (or cathode) load resistor and the rail it returns to",
-                    q("plate load", Unit.OHM, above(0, 100e6)), new Slot.Word("from"), name("rail", "a rail name", List.of()))
+            Property.of("load", "plate load and the rail it returns to: a resistor, a relay coil (resistance, "
+                            + "pick-up and drop-out current) or a lamp (rated volts and amps), or `direct` (the plate on the rail); a diode "
+                            + "gate's pull resistor",
+                    new Slot.Choice("loadkind", branches(
+                            "direct", List.of(),
+                            "coil", List.of(q("value", "coil resistance", Unit.OHM, above(0, 1e6)), new Slot.Word("pickup"),
+                                    q("pickup", "pick-up current", Unit.AMPERE, above(0, 10)),
+                                    new Slot.Optional("dropout", List.of(q("dropoutamps", "drop-out current", Unit.AMPERE,
+                                            from(0, 10))))),
+                            "lamp", List.of(q("lampvolts", "lamp voltage", Unit.VOLT, above(0, 1e3)),
+                                    q("lampamps", "lamp current", Unit.AMPERE, above(0, 100)))),
+                            List.of(q("plate load", Unit.OHM, above(0, 100e6)))),
+                    new Slot.Word("from"), name("rail", "a rail name", List.of()))
                     .byDefault("none").source(PLAUSIBLE + " of 100 M"),
+            Property.of("circuit", "how the sections are joined: plates tied (parallel), stacked (series), "
+                            + "cross-coupled halves (crossed), one diode per input (diodes), a thyratron and its load, "
+                            + "or none (a stage known only by its draw lines)",
+                    name("arrangement", "a circuit arrangement",
+                            List.of("parallel", "series", "crossed", "diodes", "thyratron", "none")))
+                    .byDefault("diodes for a diode tube, thyratron for a thyratron, crossed for latch, series for nand, "
+                            + "else parallel"),
+            Property.of("grid", "what each input's grid sees: `direct` from the driving output, or a divider from it "
+                            + "(series resistor, then a resistor to a rail); a grid stopper in either case",
+                    new Slot.Choice("gridkind", branches(
+                            "direct", List.of(),
+                            "divider", List.of(q("series", "grid series resistor", Unit.OHM, from(0, 100e6)),
+                                    q("tobias", "grid resistor to the rail", Unit.OHM, above(0, 100e6)), new Slot.Word("to"),
+                                    name("rail", "a rail name", List.of()))), null),
+                    new Slot.Optional("stopper", List.of(q("stopperohms", "grid stopper", Unit.OHM, from(0, 10e6)))))
+                    .byDefault("direct").source(PLAUSIBLE + " of 100 M"),
+            Property.of("cathode", "the cathode's return: `ground`, or a resistor to a rail",
+                    new Slot.Choice("cathodekind", branches("ground", List.of()),
+                            List.of(q("cathode resistor", Unit.OHM, from(0, 100e6)), new Slot.Word("to"),
+                                    name("rail", "a rail name", List.of()))))
+                    .byDefault("ground").source(PLAUSIBLE + " of 100 M"),
+            Property.of("screen", "a pentode's screen supply: dropping resistor (0 ohm for none) from a rail",
+                    q("screen resistor", Unit.OHM, from(0, 100e6)), new Slot.Word("from"), name("rail", "a rail name", List.of()))
+                    .byDefault("straight from the plate load's rail").source(PLAUSIBLE + " of 100 M"),
+            Property.of("series", "resistor in series with a thyratron's load", q("series resistor", Unit.OHM, from(0, 1e6)))
+                    .byDefault(0).source(PLAUSIBLE),
+            Property.of("output", "where the output is taken", name("at", "plate or cathode", List.of("plate", "cathode")))
+                    .byDefault("cathode for buffer, else plate"),
             Property.of("draw", "current drawn from a rail with the output low, high, always, or while the circuit "
                             + "conducts (" + conductingStates() + ")",
                     name("state", "output state", List.of("low", "high", "always", "conducting")), name("rail", "a rail name", List.of()),
@@ -248,6 +331,33 @@ final class PropertyTable {
             }
         }
         return b.toString();
+    }
+
+    private static Slot.Optional koren(String param) {
+        return new Slot.Optional(param, List.of(plain("k_" + param, "Koren parameter " + param, above(0, 1e9))));
+    }
+
+    private static Slot.Optional sourceOption() {
+        return new Slot.Optional("source", List.of(text("modelsource", "where the parameters come from")));
+    }
+
+    /** Choice branches in the order written (the reference lists them so). */
+    private static Map<String, List<Slot>> branches(Object... wordSlots) {
+        Map<String, List<Slot>> m = new LinkedHashMap<>();
+        for (int i = 0; i < wordSlots.length; i += 2) {
+            @SuppressWarnings("unchecked")
+            List<Slot> slots = (List<Slot>) wordSlots[i + 1];
+            m.put((String) wordSlots[i], slots);
+        }
+        return java.util.Collections.unmodifiableMap(m);
+    }
+
+    private static Slot.Plain plain(String id, String what, Slot.Range range) {
+        return new Slot.Plain(id, what, range);
+    }
+
+    private static Slot.Text text(String id, String what) {
+        return new Slot.Text(id, what);
     }
 
     private static String percentOfRated(double fraction) {

@@ -6,7 +6,9 @@ import java.util.List;
  * One logic function built from tube sections and resistors. Draws are per rail for the
  * output low, output high, and always. Delays are in seconds and NaN when to be computed
  * from the plate load and the driven capacitance. {@code sectionsPerInput} is true for
- * stages that take one section per input (diode gates).
+ * stages that take one section per input (diode gates). {@code circuit} is the stage's declared
+ * circuit (null for a stage known only by its typed-in currents, {@code circuit none}); where both
+ * are given, the typed-in draws override the computed ones.
  */
 public record StageType(
         String name,
@@ -26,7 +28,13 @@ public record StageType(
         double outputOhmsLow,
         double wiringFarads,
         double gain,
-        String note) {
+        String note,
+        StageCircuitSpec circuit) {
+
+    /** True when the stage declares its circuit. */
+    public boolean hasCircuit() {
+        return circuit != null;
+    }
 
     /** Sections this stage uses for an instance with {@code inputs} inputs. */
     public int sectionsFor(int inputs) {

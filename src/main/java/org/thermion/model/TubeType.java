@@ -6,7 +6,8 @@ import java.util.List;
  * A tube type by its trade designation. Capacitances are per section in farads;
  * {@code warmupSeconds} and {@code coldHotRatio} are NaN when not declared.
  * Ratings that do not apply are NaN. {@code basings}: the base and its pins, one per source
- * (several when sources disagree; empty when the description gives none).
+ * (several when sources disagree; empty when the description gives none). {@code curves} is the
+ * electrical model (null when the block declares none: the tube's stages must then state their currents).
  */
 public record TubeType(
         String name,
@@ -24,7 +25,8 @@ public record TubeType(
         double peakCathodeAmps,
         double arcDropVolts,
         String source,
-        List<Basing> basings) {
+        List<Basing> basings,
+        TubeCurves curves) {
 
     public TubeType {
         heaters = List.copyOf(heaters);

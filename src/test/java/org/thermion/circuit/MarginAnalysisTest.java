@@ -10,8 +10,8 @@ import static org.assertj.core.api.Assertions.within;
 
 /** Levels, thresholds, noise margins, fan-out and worst-case corners of library nets. */
 class MarginAnalysisTest {
-    private final TubeLibrary tubes = new TubeLibrary();
-    private final Map<String, StageCircuit> lib = LibraryCircuits.of(tubes);
+    private final TubeLibrary tubes = LibraryParts.tubes();
+    private final Map<String, StageCircuit> lib = LibraryParts.stages();
     private final RailSet rails48 = RailSet.volts("bplus", 48, "bias", -12, "relay", 24);
 
     @Test

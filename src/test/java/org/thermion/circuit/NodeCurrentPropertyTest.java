@@ -14,7 +14,7 @@ import static org.assertj.core.api.Assertions.assertThat;
  * (what the rails and inputs supply, the circuit returns). Seeded; the seed is printed.
  */
 class NodeCurrentPropertyTest {
-    private final TubeLibrary lib = new TubeLibrary();
+    private final TubeLibrary lib = LibraryParts.tubes();
 
     @Test
     void kirchhoffHoldsAtEverySolvedPoint() {

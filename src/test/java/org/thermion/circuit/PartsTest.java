@@ -11,7 +11,7 @@ import static org.assertj.core.api.Assertions.within;
 
 /** Plate loads and the library's driver stages judged against their ratings. */
 class PartsTest {
-    private final Map<String, StageCircuit> lib = LibraryCircuits.of(new TubeLibrary());
+    private final Map<String, StageCircuit> lib = LibraryParts.stages();
     private final StageSolver solver = new StageSolver(RailSet.volts("bplus", 48, "bias", -12, "relay", 24));
 
     @Test

@@ -10,7 +10,7 @@ import static org.assertj.core.api.Assertions.within;
 
 /** Operating points of single stages, checked against published figures and textbook formulas. */
 class StageSolverTest {
-    private final TubeLibrary lib = new TubeLibrary();
+    private final TubeLibrary lib = LibraryParts.tubes();
     private final RailSet rails = RailSet.volts("bplus", 48, "bias", -12, "relay", 24);
     private final StageSolver solver = new StageSolver(rails);
 

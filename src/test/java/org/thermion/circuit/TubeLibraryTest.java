@@ -12,7 +12,7 @@ import static org.assertj.core.api.Assertions.within;
  * to. Tolerance ±25 % (the published equations' usual accuracy); each point's error is stated.
  */
 class TubeLibraryTest {
-    private final TubeLibrary lib = new TubeLibrary();
+    private final TubeLibrary lib = LibraryParts.tubes();
 
     private KorenTriode triode(String n) {
         return (KorenTriode) lib.require(n);
@@ -77,6 +77,24 @@ class TubeLibraryTest {
     }
 
     @Test
+    void everyFittedTubeStatesItsResidualInTheLibraryAsTheFitFindsIt() {
+        java.util.Map<String, Double> stated = new java.util.TreeMap<>();
+        java.util.Map<String, Double> found = new java.util.TreeMap<>();
+        for (org.thermion.model.TubeType t : LibraryParts.machine().tubes()) {
+            if (t.curves() == null || t.curves().fitted().isEmpty()) {
+                continue;
+            }
+            double computed = lib.fit(t.name()).orElseThrow().rmsRelativeError() * 100;
+            System.out.printf("%s residual %.3f %%%n", t.name(), computed);
+            stated.put(t.name(), t.curves().statedResidual() * 100);
+            found.put(t.name(), computed);
+        }
+        assertThat(found).hasSize(6);
+        found.forEach((n, v) -> assertThat(stated.get(n)).as(n + " residual in the library, percent")
+                .isCloseTo(v, within(0.006)));
+    }
+
+    @Test
     void aFitRecoversAKnownSetFromItsOwnCurvePoints() {
         // Points generated from the published 12AU7 set; starting elsewhere, the fit must find it again.
         KorenTriode truth = triode("12AU7");
@@ -125,6 +143,6 @@ class TubeLibraryTest {
     @Test
     void aTubeWithoutParametersIsNamed() {
         org.assertj.core.api.Assertions.assertThatThrownBy(() -> lib.require("6X4"))
-                .hasMessageContaining("6X4").hasMessageContaining("add a published set");
+                .hasMessageContaining("6X4").hasMessageContaining("add a model line");
     }
 }

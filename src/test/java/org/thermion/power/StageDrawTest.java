@@ -1,7 +1,6 @@
 package org.thermion.power;
 
 import org.junit.jupiter.api.Test;
-import org.thermion.circuit.LibraryCircuits;
 import org.thermion.model.Machine;
 import org.thermion.model.StageType;
 
@@ -23,6 +22,7 @@ class StageDrawTest {
               sections 2
               fanin 2
               load 15 k from bplus
+              grid divider 100 k 47 k to bias
               ron 2.1 k
               gain 8
             }
@@ -56,7 +56,7 @@ class StageDrawTest {
         // Output high: both inputs at ground, both sections cut off; each grid divider carries
         // (0 V - (-24 V)) / (series + to-bias) from the driving output to the bias rail (Ohm's law),
         // and that current reaches the driving output through its plate load from B+.
-        double divider = 24.0 / (LibraryCircuits.DIVIDER.seriesOhms() + LibraryCircuits.DIVIDER.toBiasOhms());
+        double divider = 24.0 / (nor.circuit().gridSeriesOhms() + nor.circuit().gridToBiasOhms());
         assertThat(d.amps(nor, bias, true)).isCloseTo(2 * divider, within(1e-3 * divider));
         assertThat(d.amps(nor, bplus, true)).isCloseTo(2 * divider, within(1e-3 * divider));
         // Output low: a section conducts; its plate current cannot exceed the rail over the load,

@@ -24,15 +24,8 @@ public final class SimMachines {
         return check(m, src, d);
     }
 
-    /** Supplies and the operator-to-stage mapping every small test machine shares. */
-    public static final String PRELUDE = """
-            rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
-            rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
-            rail heat  { voltage 12.6 V; source 0.02 ohm; limit 40 A }
-            heaters on heat {
-              parallel 12AU7 at 12.6 V
-              series 2 of 6AL5 6AU6 across machine
-            }
+    /** A realize block choosing the parts library's stage for every operator and for latches. */
+    public static final String REALIZE_LIBRARY = """
             realize {
               not pentode_inverter
               nand pentode_nand2
@@ -43,6 +36,17 @@ public final class SimMachines {
               latch triode_flipflop
             }
             """;
+
+    /** Supplies and the operator-to-stage mapping every small test machine shares. */
+    public static final String PRELUDE = """
+            rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
+            rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
+            rail heat  { voltage 12.6 V; source 0.02 ohm; limit 40 A }
+            heaters on heat {
+              parallel 12AU7 at 12.6 V
+              series 2 of 6AL5 6AU6 across machine
+            }
+            """ + REALIZE_LIBRARY;
 
     /** Elaborates a small machine written after {@link #PRELUDE}. */
     public static Machine fromText(String text) {

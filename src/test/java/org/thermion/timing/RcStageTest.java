@@ -12,10 +12,10 @@ class RcStageTest {
 
     /** x -> pentode inverter (10 k load, 1 k ron, 1 pF wiring) -> triode inverter (gain 9) -> latch. */
     static final String RC = TimingMachines.PARTS + """
-            stage t_pinv : not { tube PQ1; sections 1; load 10 k from bplus; ron 1 k; wiring 1 pF; gain 12 }
-            stage t_tinv : not { tube TQ1; sections 1; load 20 k from bplus; ron 2 k; gain 9 }
-            stage t_follow : buffer { tube TQ1; sections 1; load 10 k from bias; ron 500 ohm; gain 0.9 }
-            stage t_ff : latch { tube TQ1; sections 2; load 10 k from bplus; rise 2 us; fall 0.5 us; setup 4 us }
+            stage t_pinv : not { tube PQ1; circuit none; sections 1; load 10 k from bplus; ron 1 k; wiring 1 pF; gain 12 }
+            stage t_tinv : not { tube TQ1; circuit none; sections 1; load 20 k from bplus; ron 2 k; gain 9 }
+            stage t_follow : buffer { tube TQ1; circuit none; sections 1; load 10 k from bias; ron 500 ohm; gain 0.9 }
+            stage t_ff : latch { tube TQ1; circuit none; sections 2; load 10 k from bplus; rise 2 us; fall 0.5 us; setup 4 us }
             realize { latch t_ff }
             module top {
               in x

@@ -10,8 +10,8 @@ class StaticTimingTest {
 
     /** Three inverters with declared delays between two latches with declared delays. */
     static final String CHAIN = TimingMachines.PARTS + """
-            stage t_inv : not { tube PQ1; sections 1; load 10 k from bplus; rise 3 us; fall 1 us }
-            stage t_ff : latch { tube TQ1; sections 2; load 10 k from bplus; rise 2 us; fall 0.5 us; setup 4 us }
+            stage t_inv : not { tube PQ1; circuit none; sections 1; load 10 k from bplus; rise 3 us; fall 1 us }
+            stage t_ff : latch { tube TQ1; circuit none; sections 2; load 10 k from bplus; rise 2 us; fall 0.5 us; setup 4 us }
             realize { not t_inv
                       latch t_ff }
             module top {
