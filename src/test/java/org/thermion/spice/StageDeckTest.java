@@ -1,7 +1,7 @@
 package org.thermion.spice;
 
 import org.junit.jupiter.api.Test;
-import org.thermion.circuit.LibraryCircuits;
+import org.thermion.circuit.MachineCircuits;
 import org.thermion.circuit.RailSet;
 import org.thermion.circuit.StageCircuit;
 import org.thermion.circuit.StageNetlist;
@@ -26,7 +26,15 @@ import static org.assertj.core.api.Assertions.within;
  */
 class StageDeckTest {
     private static final RailSet RAILS = RailSet.volts("bplus", 48.0, "bias", -24.0, "relay", 24.0);
-    private final TubeLibrary tubes = new TubeLibrary();
+    /** The library's stages and tubes, as the demo machine (which includes the library) has them. */
+    private static final MachineCircuits LIBRARY = demo();
+    private final TubeLibrary tubes = LIBRARY.tubes();
+
+    private static MachineCircuits demo() {
+        org.thermion.lang.Diagnostics d = new org.thermion.lang.Diagnostics();
+        return MachineCircuits.of(new org.thermion.elab.Elaborator(new org.thermion.lang.SourceSet(), d)
+                .elaborate(java.nio.file.Path.of("examples/pumpstation/pumpstation.machine")));
+    }
     private final StageSolver solver = new StageSolver(RAILS);
 
     private StageDeck write(StageCircuit s) {
@@ -37,7 +45,7 @@ class StageDeckTest {
 
     @Test
     void everyLibraryStageReadsBackToItsModel() {
-        for (StageCircuit s : LibraryCircuits.of(tubes).values()) {
+        for (StageCircuit s : LIBRARY.circuitsByName().values()) {
             StageDeck d = write(s);
             SpiceDeck back = SpiceReader.read(d.deck().text());
             assertThat(back.cards()).as(s.name()).isEqualTo(d.deck().cards());
@@ -73,10 +81,10 @@ class StageDeckTest {
 
     @Test
     void capacitancesComeFromTheTubeData() {
-        StageCircuit nor = LibraryCircuits.of(tubes).get("triode_nor2");
+        StageCircuit nor = LIBRARY.circuitsByName().get("triode_nor2");
         // 12AU7 per section: Cgk 1.6 pF, Cgp 1.5 pF, Cpk 0.5 pF (data sheet values, from memory).
         TubeType u7 = new TubeType("12AU7", org.thermion.model.TubeKind.TRIODE, 2, List.of(), 10, 10, 1.6e-12,
-                1.5e-12, 0.5e-12, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, "from memory", List.of());
+                1.5e-12, 0.5e-12, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, "from memory", List.of(), null);
         StageDeck d = StageDeck.of(nor, solver, new double[] {0, 40}, false, List.of(), n -> n.equals("12AU7") ? u7 : null);
         List<SpiceCard.Capacitor> caps = d.deck().cards().stream().filter(c -> c instanceof SpiceCard.Capacitor)
                 .map(c -> (SpiceCard.Capacitor) c).toList();
@@ -90,7 +98,7 @@ class StageDeckTest {
 
     @Test
     void pentodeInverterDeckIsStable() {
-        StageDeck d = write(LibraryCircuits.of(tubes).get("pentode_inverter"));
+        StageDeck d = write(LIBRARY.circuitsByName().get("pentode_inverter"));
         Golden.assertMatches(Path.of("src/test/resources/org/thermion/spice/pentode_inverter.cir"), d.deck().text());
         assertThat(d.deck().text().lines()).allSatisfy(l -> assertThat(l.length()).isLessThanOrEqualTo(SpiceDeck.WIDTH));
     }

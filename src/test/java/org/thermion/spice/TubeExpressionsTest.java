@@ -15,7 +15,14 @@ import static org.assertj.core.api.Assertions.within;
 
 /** Each B-source expression, evaluated by the deck reader's evaluator, equals the Java model's current. */
 class TubeExpressionsTest {
-    private final TubeLibrary tubes = new TubeLibrary();
+    private final TubeLibrary tubes = demo().tubes();
+
+    /** The library's tubes as the demo machine (which includes the library) has them. */
+    private static org.thermion.circuit.MachineCircuits demo() {
+        org.thermion.lang.Diagnostics d = new org.thermion.lang.Diagnostics();
+        return org.thermion.circuit.MachineCircuits.of(new org.thermion.elab.Elaborator(new org.thermion.lang.SourceSet(), d)
+                .elaborate(java.nio.file.Path.of("examples/pumpstation/pumpstation.machine")));
+    }
 
     /** Equal within 1e-12 A plus 1e-9 of the value (the two differ only in rounding). */
     private static void same(double expression, double model) {

@@ -79,7 +79,7 @@ class ShortPathAndAdviceTest {
     @Test
     void aGeneratedNetIsNamedByItsExpressionAndLine() {
         String text = StaticTimingTest.CHAIN
-                .replace("stage t_ff :", "stage t_nor : nor { tube PQ1; sections 1; load 10 k from bplus; rise 3 us; fall 1 us }\n"
+                .replace("stage t_ff :", "stage t_nor : nor { tube PQ1; circuit none; sections 1; load 10 k from bplus; rise 3 us; fall 1 us }\n"
                         + "stage t_ff :")
                 .replace("latch t_ff }", "latch t_ff\n nor t_nor }")
                 .replace("d = t_inv(c)", "d = t_inv(!(c | x))");

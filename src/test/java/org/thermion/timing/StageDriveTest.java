@@ -5,7 +5,7 @@ import org.thermion.circuit.CathodeReturn;
 import org.thermion.circuit.Corner;
 import org.thermion.circuit.GridNetwork;
 import org.thermion.circuit.KorenTriode;
-import org.thermion.circuit.LibraryCircuits;
+import org.thermion.circuit.MachineCircuits;
 import org.thermion.circuit.LoadResistor;
 import org.thermion.circuit.RailSet;
 import org.thermion.circuit.StageCircuit;
@@ -21,14 +21,22 @@ import static org.assertj.core.api.Assertions.within;
 
 /** Switching figures from operating points against textbook results. */
 class StageDriveTest {
-    private final TubeLibrary tubes = new TubeLibrary();
+    /** The library's stages and tubes, as the demo machine (which includes the library) has them. */
+    private static final MachineCircuits LIBRARY = demo();
+    private final TubeLibrary tubes = LIBRARY.tubes();
+
+    private static MachineCircuits demo() {
+        org.thermion.lang.Diagnostics d = new org.thermion.lang.Diagnostics();
+        return MachineCircuits.of(new org.thermion.elab.Elaborator(new org.thermion.lang.SourceSet(), d)
+                .elaborate(java.nio.file.Path.of("examples/pumpstation/pumpstation.machine")));
+    }
 
     @Test
     void aCutOffPlateRisesThroughItsLoadAlone() {
         // Both grids far below cut-off: the node charges through the 15 k load only, so the
         // effective resistance is the load and the edge ln 9 RC (Millman & Taub, Pulse and Digital Circuits).
         StageDrive d = new StageDrive(new StageSolver(RailSet.volts("bplus", 48.0, "bias", -24.0)), 48);
-        StageCircuit nor = LibraryCircuits.of(tubes).get("triode_nor2");
+        StageCircuit nor = LIBRARY.circuitsByName().get("triode_nor2");
         assertThat(d.edges(nor, List.of(), Corner.NOMINAL).riseOhms()).isCloseTo(15e3, within(15e3 * 0.01));
     }
 
@@ -52,14 +60,14 @@ class StageDriveTest {
         double rp = 2 * h / (u7.plateCurrent(vp + h, vin) - u7.plateCurrent(vp - h, vin));
         double mu = gm * rp;
         assertThat(gain).isCloseTo(mu * 22e3 / (rp + 22e3), within(0.03 * gain));
-        assertThat(d.millerGain(LibraryCircuits.of(tubes).get("diode_and"))).isNaN();
+        assertThat(d.millerGain(LIBRARY.circuitsByName().get("diode_and"))).isNaN();
     }
 
     @Test
     void theSlowCornerTakesTheEndsThatSlowEachEdge() {
         // At -12 V bias the library's divider drives the grid well into conduction (at -24 V it barely switches).
         StageDrive d = new StageDrive(new StageSolver(RailSet.volts("bplus", 48.0, "bias", -12.0)), 48);
-        StageCircuit inv = LibraryCircuits.of(tubes).get("pentode_inverter");
+        StageCircuit inv = LIBRARY.circuitsByName().get("pentode_inverter");
         Corner fall = d.slowCorner(inv, List.of(), Tolerances.DEFAULT, false);
         Corner rise = d.slowCorner(inv, List.of(), Tolerances.DEFAULT, true);
         // A worn tube pulls the plate down more slowly; a larger load charges it more slowly.
