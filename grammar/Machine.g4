@@ -62,6 +62,7 @@ rstmt       : rtarget '<-' rexpr                                     # rAssign
 rtarget     : ident | '[' ident ']' ;
 rexpr       : '(' rexpr ')'                             # rParen
             | '!' rexpr                                 # rNot
+            | rexpr op=('+' | '-') rexpr                # rAdd
             | rexpr '&' rexpr                           # rAnd
             | rexpr '^' rexpr                           # rXor
             | rexpr '|' rexpr                           # rOr

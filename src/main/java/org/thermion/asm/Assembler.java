@@ -97,7 +97,7 @@ public final class Assembler {
         long[] rom = new long[machine.rom().words()];
         Map<Integer, Long> wordOf = new HashMap<>();
         for (Placed p : placed) {
-            Long w = encode(p.line().statement());
+            Long w = encode(p.line().statement(), p.address());
             if (w != null) {
                 rom[p.address()] = w;
                 wordOf.put(p.line().number(), w);
@@ -210,7 +210,7 @@ public final class Assembler {
     }
 
     /** Pass two: one word, or null after a reported error. */
-    private Long encode(Statement s) {
+    private Long encode(Statement s, int address) {
         if (s instanceof Statement.Directive d) {
             Long v = symbols.value(d.value(), "name");
             if (v == null) {
@@ -244,16 +244,29 @@ public final class Assembler {
         }
         IsaField f = isa.fields().get(rule.field());
         long max = (1L << f.width()) - 1;
-        String what = rule.kind() == OperandRule.Kind.TARGET ? "a jump target (label or address)" : "a bit (name or address)";
+        boolean jumps = rule.kind() == OperandRule.Kind.TARGET || rule.kind() == OperandRule.Kind.OFFSET;
+        String what = jumps ? "a jump target (label or address)" : "a bit (name or address)";
         if (op.operand() == null) {
             diags.error(new Span(m.span().file(), m.span().line(), m.span().endCol(), m.span().line(), m.span().endCol() + 1),
                     ins.mnemonic() + " needs an operand", "expected " + what + " for the " + f.width() + "-bit field '"
                             + f.name() + "' (0.." + max + ")");
             return null;
         }
-        Long v = symbols.value(op.operand(), rule.kind() == OperandRule.Kind.TARGET ? "label" : "name");
+        Long v = symbols.value(op.operand(), jumps ? "label" : "name");
         if (v == null) {
             return null;
+        }
+        if (rule.kind() == OperandRule.Kind.OFFSET) {
+            long range = 1L << machine.pc().width();
+            long distance = rule.fieldFor(v, address, range);
+            if (distance > max) {
+                diags.error(op.operand().span(), "jump target " + v + " is out of reach of " + ins.mnemonic() + " at address "
+                        + address + ": the " + f.width() + "-bit field '" + f.name() + "' would need " + distance,
+                        "a relative jump " + (rule.step().minusField() ? "goes back" : "goes ahead") + " 0.." + max
+                                + " words from address + " + rule.step().offset());
+                return null;
+            }
+            return word | f.place(distance);
         }
         if (v < 0 || v > max) {
             diags.error(op.operand().span(), "operand " + v + (v < 0 ? " is negative: it does not fit" : " is too wide for")

@@ -61,8 +61,19 @@ public final class Boards {
         return prefix(board) + cls.letters() + nextNumber(board, cls.letters());
     }
 
-    /** The next number for the letters on the board (a tube and its socket share one number: XV3 holds V3). */
+    private final java.util.Set<String> reserved = new java.util.HashSet<>();
+
+    /** Keeps {@code number} of the letters on the board for a part the description named. */
+    void reserve(int board, String letters, int number) {
+        reserved.add(board + ":" + letters + number);
+    }
+
+    /** The next number for the letters on the board, past reserved ones (a tube and its socket share one: XV3 holds V3). */
     int nextNumber(int board, String letters) {
-        return next.merge(board + ":" + letters, 1, Integer::sum);
+        int n;
+        do {
+            n = next.merge(board + ":" + letters, 1, Integer::sum);
+        } while (reserved.contains(board + ":" + letters + n));
+        return n;
     }
 }

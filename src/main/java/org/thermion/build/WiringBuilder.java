@@ -45,11 +45,16 @@ final class WiringBuilder {
         tubeRef = new String[n];
         socketNodes = new int[n][];
         for (Envelope e : m.envelopes()) {
+            if (e.pinned() && e.designator().matches("V[0-9]{1,6}")) {
+                boards.reserve(boards.of(e.module()), "V", Integer.parseInt(e.designator().substring(1)));
+            }
+        }
+        for (Envelope e : m.envelopes()) {
             TubeType t = m.tubes().get(e.tube());
             int board = boards.of(e.module());
-            int number = boards.nextNumber(board, "V");
-            tubeRef[e.id()] = boards.prefix(board) + "V" + number;
-            socketRef[e.id()] = boards.prefix(board) + "XV" + number;
+            String name = e.pinned() ? e.designator() : "V" + boards.nextNumber(board, "V");
+            tubeRef[e.id()] = boards.prefix(board) + name;
+            socketRef[e.id()] = boards.prefix(board) + "X" + name;
             Basing b = t.basing();
             socketNodes[e.id()] = new int[b == null ? 0 : b.pinCount()];
             Arrays.fill(socketNodes[e.id()], -1);

@@ -42,6 +42,10 @@ public record FlipFlop(String name, KorenTriode tube, double loadOhms, String pl
         double high = b.fixedVolts(rail);
         b.guess(qa, stored ? high : 0.1 * high);
         b.guess(qb, stored ? 0.1 * high : high);
+        // start the grids apart too: from a symmetric start Newton finds the balanced (unstable) point
+        double cut = Double.isFinite(cross.toBiasOhms()) ? 0.5 * b.fixedVolts(b.rail(cross.biasRail())) : -0.5 * high;
+        b.guess(ga, stored ? cut : 0);
+        b.guess(gb, stored ? 0 : cut);
         return qa;
     }
 

@@ -87,7 +87,7 @@ public final class TransferCurve {
     }
 
     /** Values of the other inputs under which input 0 decides the output. */
-    private static boolean[] sensitizing(StageCircuit stage) {
+    static boolean[] sensitizing(StageCircuit stage) {
         int n = stage.inputs();
         for (int mask = 0; mask < (1 << Math.max(0, n - 1)); mask++) {
             boolean[] a = new boolean[n];

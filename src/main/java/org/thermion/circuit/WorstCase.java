@@ -23,34 +23,62 @@ public final class WorstCase {
 
     /** The high and low margins at their worst corners, with {@code n} receivers. */
     public List<WorstMargin> margins(StageCircuit driver, InputLevels levels, StageCircuit receiver, int n) {
-        List<Parameter> params = parameters(driver, receiver, n);
-        NoiseMargins nominal = analysis.margins(driver, levels, receiver, n, Corner.NOMINAL);
+        return margins(driver, levels, java.util.Collections.nCopies(n, receiver));
+    }
+
+    /** The high and low margins at their worst corners, for a net feeding {@code receivers}. */
+    public List<WorstMargin> margins(StageCircuit driver, InputLevels levels, List<StageCircuit> receivers) {
+        List<Parameter> params = parameters(driver, receivers);
+        NoiseMargins nominal = analysis.margins(driver, levels, receivers, Corner.NOMINAL);
         List<WorstMargin> out = new ArrayList<>();
         for (WorstMargin.Side side : WorstMargin.Side.values()) {
-            Corner worst = Corner.NOMINAL;
-            for (Parameter p : params) {
-                double[] ends = tolerances.ends(p);
-                double atLow = margin(side, driver, levels, receiver, n, Corner.NOMINAL.with(p.label(), ends[0]));
-                double atHigh = margin(side, driver, levels, receiver, n, Corner.NOMINAL.with(p.label(), ends[1]));
-                double pick = atLow <= atHigh ? ends[0] : ends[1];
-                if (pick != 1) {
-                    worst = worst.with(p.label(), pick);
-                }
-            }
-            out.add(new WorstMargin(side, value(side, nominal), margin(side, driver, levels, receiver, n, worst),
+            Corner worst = worstCorner(params, tolerances, c -> margin(side, driver, levels, receivers, c));
+            out.add(new WorstMargin(side, value(side, nominal), margin(side, driver, levels, receivers, worst),
                     worst));
         }
         return out;
     }
 
+    /**
+     * The corner that lowers {@code figure} most, judged one parameter at a time by the sign of
+     * its sensitivity: the figure with that parameter at the low end of its tolerance against
+     * the nominal figure (one solve each; the figures are monotonic over a tolerance this narrow).
+     * The parameter goes to the low end when that lowers the figure, else to the high end.
+     */
+    public static Corner worstCorner(List<Parameter> params, Tolerances tolerances,
+                                     java.util.function.ToDoubleFunction<Corner> figure) {
+        double nominal = figure.applyAsDouble(Corner.NOMINAL);
+        Corner worst = Corner.NOMINAL;
+        for (Parameter p : params) {
+            double[] ends = tolerances.ends(p);
+            double pick;
+            if (ends[1] == 1) {
+                // one-sided (emission: new or worn): compare the far end with nominal
+                pick = figure.applyAsDouble(Corner.NOMINAL.with(p.label(), ends[0])) <= nominal ? ends[0] : 1;
+            } else {
+                pick = figure.applyAsDouble(Corner.NOMINAL.with(p.label(), ends[0])) <= nominal ? ends[0] : ends[1];
+            }
+            if (pick != 1) {
+                worst = worst.with(p.label(), pick);
+            }
+        }
+        return worst;
+    }
+
     /** The lowest margin over every corner (2^k solves of the margin: small circuits only). */
     public WorstMargin exhaustive(WorstMargin.Side side, StageCircuit driver, InputLevels levels,
                                   StageCircuit receiver, int n) {
-        List<Parameter> params = parameters(driver, receiver, n);
+        return exhaustive(side, driver, levels, java.util.Collections.nCopies(n, receiver));
+    }
+
+    /** As {@link #exhaustive(WorstMargin.Side, StageCircuit, InputLevels, StageCircuit, int)} for mixed receivers. */
+    public WorstMargin exhaustive(WorstMargin.Side side, StageCircuit driver, InputLevels levels,
+                                  List<StageCircuit> receivers) {
+        List<Parameter> params = parameters(driver, receivers);
         if (params.size() > 16) {
             throw new IllegalArgumentException("too many parameters to enumerate: " + params.size());
         }
-        double nominal = margin(side, driver, levels, receiver, n, Corner.NOMINAL);
+        double nominal = margin(side, driver, levels, receivers, Corner.NOMINAL);
         double best = Double.POSITIVE_INFINITY;
         Corner at = Corner.NOMINAL;
         for (int mask = 0; mask < (1 << params.size()); mask++) {
@@ -61,7 +89,7 @@ public final class WorstCase {
                     c = c.with(params.get(i).label(), f);
                 }
             }
-            double m = margin(side, driver, levels, receiver, n, c);
+            double m = margin(side, driver, levels, receivers, c);
             if (m < best) {
                 best = m;
                 at = c;
@@ -72,18 +100,24 @@ public final class WorstCase {
 
     /** The parameters the net's margins depend on, in a stable order. */
     public List<Parameter> parameters(StageCircuit driver, StageCircuit receiver, int n) {
+        return parameters(driver, java.util.Collections.nCopies(n, receiver));
+    }
+
+    /** The parameters a net's margins depend on (its driver, its loads, its receivers' curves), in a stable order. */
+    public List<Parameter> parameters(StageCircuit driver, List<StageCircuit> receivers) {
         StageSolver s = analysis.solver();
-        Set<Parameter> all = new HashSet<>(s.parameters(StageSolver.DRIVER, driver,
-                java.util.Collections.nCopies(n, receiver.inputLoad())));
-        all.addAll(s.parameters(StageSolver.RECEIVER, receiver, List.of()));
+        Set<Parameter> all = new HashSet<>(s.parameters(StageSolver.DRIVER, driver, MarginAnalysis.loads(receivers)));
+        for (StageCircuit r : new java.util.LinkedHashSet<>(receivers)) {
+            all.addAll(s.parameters(StageSolver.RECEIVER, r, List.of()));
+        }
         List<Parameter> sorted = new ArrayList<>(all);
         sorted.sort(java.util.Comparator.comparing(Parameter::label));
         return sorted;
     }
 
-    private double margin(WorstMargin.Side side, StageCircuit driver, InputLevels levels, StageCircuit receiver, int n,
-                          Corner c) {
-        return value(side, analysis.margins(driver, levels, receiver, n, c));
+    private double margin(WorstMargin.Side side, StageCircuit driver, InputLevels levels,
+                          List<StageCircuit> receivers, Corner c) {
+        return value(side, analysis.margins(driver, levels, receivers, c));
     }
 
     private static double value(WorstMargin.Side side, NoiseMargins m) {

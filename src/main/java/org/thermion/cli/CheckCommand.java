@@ -2,6 +2,11 @@ package org.thermion.cli;
 
 import org.thermion.cli.report.Format;
 import picocli.CommandLine.Option;
+import org.thermion.lang.DiagnosticPrinter;
+import org.thermion.lang.Diagnostics;
+import org.thermion.levels.ElectricalCheck;
+import org.thermion.levels.Finding;
+import org.thermion.levels.LevelAnalysis;
 import org.thermion.model.Machine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -11,6 +16,7 @@ import picocli.CommandLine.Model.CommandSpec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 
 /** {@code check FILE}: parse, elaborate and lint; print a summary. */
@@ -44,6 +50,10 @@ final class CheckCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         format.write(out, new MachineSummary(m).report());
-        return ExitCodes.OK;
+        List<Finding> findings = ElectricalCheck.findings(m, LevelAnalysis.of(m, loader.sourceMap().margins()));
+        Diagnostics electrical = ElectricalDiagnostics.of(findings, loader.sourceMap());
+        new DiagnosticPrinter(loader.sources()).print(electrical, err);
+        err.flush();
+        return electrical.hasErrors() ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
     }
 }

@@ -1,6 +1,7 @@
 package org.thermion.cli;
 
 import org.thermion.elab.Elaborator;
+import org.thermion.elab.SourceMap;
 import org.thermion.elab.ModuleCheck;
 import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
@@ -16,6 +17,7 @@ public final class MachineLoader {
     private final SourceSet sources = new SourceSet();
     private final Diagnostics diags = new Diagnostics();
     private List<ModuleCheck> modulesAlone = List.of();
+    private SourceMap sourceMap = SourceMap.NONE;
 
     /** Elaborates {@code file}; prints errors and warnings to {@code err} unless quiet about warnings. */
     public Machine load(Path file, PrintWriter err, boolean showWarnings) {
@@ -27,6 +29,15 @@ public final class MachineLoader {
         return m;
     }
 
+    /** As {@link #load}, keeping modules marked {@code notbuilt} in the logic (flagged): the whole description. */
+    public Machine loadAsDescribed(Path file, PrintWriter err) {
+        Machine m = new Elaborator(sources, diags).asDescribed().elaborate(file);
+        if (diags.hasErrors()) {
+            new DiagnosticPrinter(sources).print(diags, err);
+        }
+        return diags.hasErrors() ? null : m;
+    }
+
     /**
      * As {@link #load}, but a file of modules without a machine block (meant for {@code include})
      * is no error: the machine is null and {@link #modulesAlone()} lists its modules, checked alone.
@@ -35,6 +46,7 @@ public final class MachineLoader {
         Elaborator elaborator = new Elaborator(sources, diags);
         Machine m = elaborator.elaborate(file);
         modulesAlone = elaborator.modulesAlone();
+        sourceMap = elaborator.sourceMap();
         if (diags.hasErrors() || showWarnings) {
             new DiagnosticPrinter(sources).print(diags, err);
         }
@@ -44,6 +56,11 @@ public final class MachineLoader {
     /** The modules checked on their own when the last file loaded had no machine block. */
     public List<ModuleCheck> modulesAlone() {
         return modulesAlone;
+    }
+
+    /** Where the last machine loaded was written, and its margin rules. */
+    public SourceMap sourceMap() {
+        return sourceMap;
     }
 
     public Diagnostics diagnostics() {

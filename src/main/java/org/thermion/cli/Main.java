@@ -6,8 +6,9 @@ import picocli.CommandLine.Command;
 /** The {@code thermion} command: one subcommand per job. */
 @Command(name = "thermion", mixinStandardHelpOptions = true, version = "thermion 0.1.0",
         description = "Workbench for one-bit vacuum-tube control processors.",
-        subcommands = {CheckCommand.class, RunCommand.class, AsmCommand.class, BudgetCommand.class, PowerUpCommand.class,
-                TimingCommand.class, VerifyCommand.class, SheetsCommand.class, PlanCommand.class, DiagnoseCommand.class, UiCommand.class, BenchCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {CheckCommand.class, LevelsCommand.class, RunCommand.class, AsmCommand.class, BudgetCommand.class,
+                PowerUpCommand.class, TimingCommand.class, VerifyCommand.class, SheetsCommand.class, PlanCommand.class,
+                DiagnoseCommand.class, UiCommand.class, BenchCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements java.util.concurrent.Callable<Integer> {
 
     @CommandLine.Spec

@@ -151,8 +151,10 @@ final class RunCommand implements Callable<Integer> {
         if (program == null && m.rom() != null) {
             return usage(err, "machine " + m.name() + " has a ROM: name the PROGRAM to run", null);
         }
-        if (program == null && level == Level.isa) {
-            return usage(err, "--level isa needs a machine with an isa block and a PROGRAM", null);
+        boolean switchFed = m.isa() != null && m.isa().wordFromSwitches();
+        if (program == null && level == Level.isa && !switchFed) {
+            return usage(err, "--level isa needs a machine with an isa block and a PROGRAM,"
+                    + " or an isa whose word comes from switches", null);
         }
         ProgramInput in = ProgramInput.read(m, program, inputs, loader, err);
         if (in == null) {

@@ -1,5 +1,7 @@
 package org.thermion.cli;
 
+import org.thermion.asm.Assembly;
+
 import com.googlecode.lanterna.screen.Screen;
 import com.googlecode.lanterna.screen.TerminalScreen;
 import com.googlecode.lanterna.terminal.DefaultTerminalFactory;
@@ -33,7 +35,8 @@ public final class UiCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
     Path machine;
 
-    @Parameters(index = "1", paramLabel = "PROGRAM", description = "The .asm program to load into the ROM.")
+    @Parameters(index = "1", arity = "0..1", paramLabel = "PROGRAM",
+            description = "The .asm program to load into the ROM (none for a machine whose word comes from switches).")
     Path program;
 
     @Option(names = "--inputs", paramLabel = "STIM.csv",
@@ -68,7 +71,7 @@ public final class UiCommand implements Callable<Integer> {
         if (session == null) {
             return ExitCodes.BAD_INPUT;
         }
-        return show(session, program.getFileName().toString());
+        return show(session, program == null ? "word from switches" : program.getFileName().toString());
     }
 
     /** Null when this process runs on a terminal, else the reason it does not. */
@@ -103,12 +106,25 @@ public final class UiCommand implements Callable<Integer> {
             err.flush();
             return null;
         }
+        boolean switchFed = m.isa() != null && m.isa().wordFromSwitches();
+        if (programFile == null && !switchFed) {
+            err.println("error: machine " + m.name() + " takes its instructions from a ROM: name the PROGRAM to load");
+            err.flush();
+            return null;
+        }
+        if (programFile != null && (m.rom() == null || m.isa() == null)) {
+            err.println("error: machine " + m.name() + " has no ROM to load a program into"
+                    + (switchFed ? "; its word comes from switches: leave out PROGRAM" : ""));
+            err.flush();
+            return null;
+        }
         ProgramInput in = ProgramInput.read(m, programFile, stimulusFile, loader, err);
         if (in == null) {
             err.flush();
             return null;
         }
-        return new Session(m, in.assembly(), decodeName, mode, in.stimulus());
+        Assembly asm = programFile == null ? new Assembly(new long[0], java.util.List.of()) : in.assembly();
+        return new Session(m, asm, decodeName, mode, in.stimulus());
     }
 
     /** Runs the screen until quit; the terminal is restored however the loop ends. */

@@ -147,11 +147,11 @@ final class BasingReader {
     }
 
     /** The span of {@code length} characters {@code offset} into a quoted string at {@code s}. */
-    private static Span shift(Span s, int offset, int length) {
+    static Span shift(Span s, int offset, int length) {
         if (!s.isKnown() || s.line() != s.endLine()) {
             return s;
         }
         int col = s.col() + 1 + offset;
-        return new Span(s.file(), s.line(), col, s.line(), col + Math.max(1, length) - 1);
+        return new Span(s.file(), s.line(), col, s.line(), col + Math.max(1, length));
     }
 }

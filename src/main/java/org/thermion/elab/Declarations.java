@@ -22,13 +22,16 @@ final class Declarations {
     final Map<String, Prop> rails = new LinkedHashMap<>();
     final Map<String, Decl.Module> modules = new LinkedHashMap<>();
     final List<Prop> heaters = new ArrayList<>();
+    final List<Prop> packing = new ArrayList<>();
     final Map<String, Prop> softStarts = new LinkedHashMap<>();
     final List<Prop> realize = new ArrayList<>();
     final List<Prop> machines = new ArrayList<>();
+    final List<Prop> margins = new ArrayList<>();
     final List<Decl.Isa> isas = new ArrayList<>();
     private final Map<String, Span> userNames = new LinkedHashMap<>();
 
-    static final List<String> KINDS = List.of("tube", "stage", "rail", "heaters", "softstart", "realize", "machine");
+    static final List<String> KINDS = List.of("tube", "stage", "rail", "heaters", "softstart", "realize", "packing",
+            "machine", "margins");
 
     void add(SourceFile file, boolean library, Diagnostics diags) {
         for (Decl d : file.decls()) {
@@ -50,8 +53,10 @@ final class Declarations {
             case "rail" -> namedProp(rails, p, "rail", library, diags);
             case "softstart" -> namedProp(softStarts, p, "softstart", library, diags);
             case "heaters" -> heaters.add(p);
+            case "packing" -> packing.add(p);
             case "realize" -> realize.add(p);
             case "machine" -> machines.add(p);
+            case "margins" -> margins.add(p);
             default -> diags.error(p.key().span(), "unknown declaration '" + kind + "'",
                     hintFor(kind, KINDS, "expected one of: " + String.join(", ", KINDS) + ", module, isa, include"));
         }

@@ -33,12 +33,24 @@ import java.util.Map;
 public final class Elaborator {
     private final SourceSet sources;
     private final Diagnostics diags;
+    private boolean asDescribed;
     private static final int MAX_PHASES = 8;
     private List<ModuleCheck> modulesAlone = List.of();
+    private SourceMap sourceMap = SourceMap.NONE;
 
     public Elaborator(SourceSet sources, Diagnostics diags) {
         this.sources = sources;
         this.diags = diags;
+    }
+
+    /**
+     * Keeps the modules a machine block marks {@code notbuilt} in the logic (still flagged not
+     * built): the whole description, for {@code verify}'s proof of the built part among the
+     * modules it was designed with.
+     */
+    public Elaborator asDescribed() {
+        this.asDescribed = true;
+        return this;
     }
 
     /** Elaborates a file on disk; null when errors were reported. */
@@ -115,6 +127,11 @@ public final class Elaborator {
         return !found.isEmpty();
     }
 
+    /** Where the last machine elaborated was written (stage uses, heater rules) and its margin rules. */
+    public SourceMap sourceMap() {
+        return sourceMap;
+    }
+
     /** The modules checked on their own when the description had no machine block (else empty). */
     public List<ModuleCheck> modulesAlone() {
         return modulesAlone;
@@ -174,6 +191,10 @@ public final class Elaborator {
                     nb.read(n);
                 }
             }
+        }
+        NotBuilt notBuilt = NotBuilt.resolve(mb.notBuilt, ex.tree.modules, diags);
+        if (notBuilt.any() && !asDescribed) {
+            notBuilt.apply(nb, inputs, outputs);
         }
         Rom rom = null;
         ProgramCounter pc = null;
@@ -241,6 +262,7 @@ public final class Elaborator {
                 for (var sb : isa.state()) {
                     nb.read(sb.net());
                 }
+                IsaBuilder.checkWordSource(isa, rom, pc, decls.isas.get(0), diags);
                 if (rom != null && rom.width() != isa.wordBits()) {
                     diags.error(decls.isas.get(0).name().span(), "the isa word is " + isa.wordBits() + " bits but the ROM is "
                             + rom.width(), "make `word` and the ROM width agree");
@@ -250,8 +272,12 @@ public final class Elaborator {
 
         Packer packer = new Packer(parts, diags);
         List<ModuleInstance> modules = new ArrayList<>(ex.tree.modules);
+        modules.replaceAll(mi -> notBuilt.modules.contains(mi.id()) ? mi.notBuilt() : mi);
         List<SoftStart> softStarts = new ArrayList<>();
-        StagePlacement placed = StagePlacement.place(nb, parts, packer);
+        for (Prop pk : decls.packing) {
+            packer.readPacking(pk);
+        }
+        StagePlacement placed = StagePlacement.place(nb, parts, packer, modules, diags);
         int[] gateEnvelope = placed.gateEnvelope;
         int[] latchEnvelope = placed.latchEnvelope;
         SoftStartReader softStartReader = new SoftStartReader(parts, packer, diags);
@@ -275,23 +301,32 @@ public final class Elaborator {
         if (order == null) {
             return null;
         }
-        new Linter(nb, ex.tree, ex.mapper.driverOutputs, diags, inputs).run();
+        new Linter(nb, notBuilt.any() && !asDescribed ? notBuilt.builtPart(ex.tree) : ex.tree, ex.mapper.driverOutputs, diags, inputs).run();
         if (diags.hasErrors()) {
             return null;
         }
 
         List<Gate> gates = new ArrayList<>(order.length);
+        List<Span> gateSpans = new ArrayList<>(order.length);
         int[] gateEnvOrdered = new int[order.length];
         for (int k = 0; k < order.length; k++) {
             NetBuilder.GateB g = nb.gates.get(order[k]);
             gates.add(new Gate(k, g.fn, g.in, g.out, g.stage, g.module));
+            gateSpans.add(g.span == null ? Span.none() : g.span);
             gateEnvOrdered[k] = gateEnvelope[order[k]];
         }
         List<Latch> latches = new ArrayList<>(nb.latches.size());
+        List<Span> latchSpans = new ArrayList<>(nb.latches.size());
         for (int i = 0; i < nb.latches.size(); i++) {
             NetBuilder.LatchB l = nb.latches.get(i);
             latches.add(new Latch(i, l.data(), l.enable(), l.out(), l.phase(), l.stage(), l.module()));
+            latchSpans.add(l.span() == null ? Span.none() : l.span());
         }
+        org.thermion.model.MarginRules marginRules = MarginsReader.read(decls.margins, diags);
+        if (diags.hasErrors()) {
+            return null;
+        }
+        sourceMap = new SourceMap(gateSpans, latchSpans, packer.ruleSpans(), marginRules);
         String[] places = new String[nb.names.size()];
         for (int n = 0; n < places.length; n++) {
             org.thermion.lang.Span s = nb.driverSpan.get(n);

@@ -37,6 +37,28 @@ final class IsaBuilder {
         this.outputs = outputs;
     }
 
+    /** A switch-fed word excludes a ROM; a meaning that moves the PC needs one. */
+    static void checkWordSource(Isa isa, org.thermion.model.Rom rom, org.thermion.model.ProgramCounter pc, Decl.Isa d,
+                                Diagnostics diags) {
+        if (isa.wordFromSwitches() && rom != null) {
+            diags.error(d.name().span(), "the isa's word comes from switches, but the machine has a rom too",
+                    "drop `from ...` from `word`, or the machine's rom");
+        }
+        if (pc == null && isa.inhibitNet() >= 0) {
+            diags.error(d.name().span(), "the isa inhibits the decoder to skip, but the machine has no pc",
+                    "a skip needs a program counter; drop `inhibit` from a switch-fed machine");
+        }
+        if (pc == null) {
+            for (org.thermion.model.Instruction ins : isa.instructions()) {
+                if (org.thermion.model.Meanings.writesPc(ins.body())) {
+                    diags.error(d.name().span(), ins.mnemonic() + " assigns the pc, but the machine has none",
+                            "give the machine a `pc { ... }`, or leave pc out of the meanings of a switch-fed machine");
+                    return;
+                }
+            }
+        }
+    }
+
     Isa build(Decl.Isa d) {
         int word = 0;
         List<IsaField> fields = new ArrayList<>();
@@ -46,12 +68,29 @@ final class IsaBuilder {
         Span opcodeSpan = d.span(), targetSpan = d.span(), selectSpan = d.span();
         List<StateBit> state = new ArrayList<>();
         List<Prop> bitProps = new ArrayList<>();
+        String wordPort = null;
+        Span wordPortSpan = d.span();
+        int inhibitNet = -1;
         for (Prop p : d.props()) {
             PropReader r = new PropReader(p, diags);
             switch (p.key().text()) {
                 case "word" -> {
                     word = (int) r.whole("instruction word width", 1, 63);
                     r.acceptWord("bits");
+                    if (r.acceptWord("from")) {
+                        wordPort = r.word("the machine input (switches) the word comes from");
+                        wordPortSpan = r.lastSpan();
+                    }
+                }
+                case "inhibit" -> {
+                    String path = r.word("the latch that inhibits the decoder");
+                    Span ps = r.lastSpan();
+                    if (path != null) {
+                        StateBit sb = bindState("inhibit", path, ps, ps);
+                        if (sb != null) {
+                            inhibitNet = sb.net();
+                        }
+                    }
                 }
                 case "field" -> {
                     String name = r.word("a field name");
@@ -107,8 +146,8 @@ final class IsaBuilder {
                     continue;
                 }
                 default -> diags.error(p.key().span(), "unknown property '" + p.key().text() + "' in isa",
-                        Declarations.hintFor(p.key().text(), List.of("word", "field", "opcode", "target", "select", "state", "bit", "op"),
-                                "expected word, field, opcode, target, select, state, bit or op"));
+                        Declarations.hintFor(p.key().text(), List.of("word", "field", "opcode", "target", "select", "state", "bit",
+                                "inhibit", "op"), "expected word, field, opcode, target, select, state, bit, inhibit or op"));
             }
             r.end();
         }
@@ -191,8 +230,34 @@ final class IsaBuilder {
             byCode.put(code, op);
             instrs.add(new Instruction(m, code, stmts(ctx, op.body())));
         }
+        int[] wordInputs = wordPort == null ? new int[0] : wordInputs(wordPort, wordPortSpan, word);
         return new Isa(word, List.copyOf(fields), Math.max(0, opcodeField), targetField, List.copyOf(state), List.copyOf(map),
-                selectField, List.copyOf(instrs));
+                selectField, List.copyOf(instrs), wordInputs, inhibitNet);
+    }
+
+    /** The machine inputs of {@code port} (one bit, or a bus LSB first) that carry a {@code word}-bit instruction word. */
+    private int[] wordInputs(String port, Span at, int word) {
+        java.util.TreeMap<Integer, Integer> bits = new java.util.TreeMap<>();
+        for (int i = 0; i < inputs.size(); i++) {
+            String n = inputs.get(i).name();
+            if (n.equals(port)) {
+                bits.put(0, i);
+            } else if (n.startsWith(port + "[") && n.endsWith("]")) {
+                bits.put(Integer.parseInt(n.substring(port.length() + 1, n.length() - 1)), i);
+            }
+        }
+        if (bits.isEmpty()) {
+            List<String> known = inputs.stream().map(p -> p.name().replaceAll("\\[\\d+]$", "")).distinct().toList();
+            diags.error(at, "the instruction word comes from '" + port + "', which is no machine input",
+                    Declarations.hintFor(port, known, "list the switches under `inputs` in the machine block"));
+            return new int[0];
+        }
+        if (bits.size() != word) {
+            diags.error(at, "the instruction word is " + word + " bits but input '" + port + "' has " + bits.size(),
+                    "make `word` and the switches agree");
+            return new int[0];
+        }
+        return bits.values().stream().mapToInt(Integer::intValue).toArray();
     }
 
     private long constantOf(IsaOp op) {
@@ -288,16 +353,9 @@ final class IsaBuilder {
                         out.add(new Transfer.ToSelected(v));
                     }
                 } else if (t.equals("pc")) {
-                    if (a.value() instanceof RtExpr.Ref r) {
-                        int fi = fieldIndex(c, r.name().text());
-                        if (fi < 0) {
-                            diags.error(r.span(), "a jump takes its target from a field; '" + r.name().text() + "' is not one",
-                                    Declarations.hintFor(r.name().text(), c.fields().stream().map(IsaField::name).toList(), null));
-                        } else {
-                            out.add(new Transfer.ToPc(fi));
-                        }
-                    } else {
-                        diags.error(a.value().span(), "a jump takes its target from a field", "write `pc <- operand`");
+                    Transfer pc = pcTransfer(c, a.value());
+                    if (pc != null) {
+                        out.add(pc);
                     }
                 } else {
                     int si = stateIndex(c.state(), t);
@@ -321,6 +379,57 @@ final class IsaBuilder {
             }
         }
         return out;
+    }
+
+    /** {@code pc <- FIELD} (a jump), or {@code pc <- pc [+|- FIELD] [+|- N]} (a skip or a relative jump). */
+    private Transfer pcTransfer(Ctx c, RtExpr value) {
+        if (value instanceof RtExpr.Ref r && !r.name().text().equals("pc")) {
+            int fi = fieldIndex(c, r.name().text());
+            if (fi < 0) {
+                diags.error(r.span(), "a jump takes its target from a field; '" + r.name().text() + "' is not one",
+                        Declarations.hintFor(r.name().text(), c.fields().stream().map(IsaField::name).toList(), null));
+                return null;
+            }
+            return new Transfer.ToPc(fi);
+        }
+        List<RtExpr> terms = new ArrayList<>();
+        List<Boolean> minus = new ArrayList<>();
+        flattenSum(value, false, terms, minus);
+        String how = "write `pc <- operand` (a jump), `pc <- pc + 2` (a skip) or `pc <- pc + FIELD` (a relative jump)";
+        if (!(terms.get(0) instanceof RtExpr.Ref first && first.name().text().equals("pc") && !minus.get(0))) {
+            diags.error(value.span(), "a jump takes its target from a field, or adds to pc", how);
+            return null;
+        }
+        long offset = 0;
+        int field = -1;
+        boolean minusField = false;
+        for (int k = 1; k < terms.size(); k++) {
+            RtExpr e = terms.get(k);
+            if (e instanceof RtExpr.Num n) {
+                offset += minus.get(k) ? -n.value() : n.value();
+            } else if (e instanceof RtExpr.Ref r && fieldIndex(c, r.name().text()) >= 0 && field < 0) {
+                field = fieldIndex(c, r.name().text());
+                minusField = minus.get(k);
+            } else if (e instanceof RtExpr.Ref r && fieldIndex(c, r.name().text()) >= 0) {
+                diags.error(e.span(), "a relative jump adds one field to pc, not two", how);
+                return null;
+            } else {
+                diags.error(e.span(), "pc adds numbers and one field; this is neither", how);
+                return null;
+            }
+        }
+        return new Transfer.PcStep(offset, field, minusField);
+    }
+
+    /** The terms of a sum, each with its sign; anything but '+' and '-' is one term. */
+    private static void flattenSum(RtExpr e, boolean negated, List<RtExpr> terms, List<Boolean> minus) {
+        if (e instanceof RtExpr.Bin b && (b.op() == RtExpr.Op.PLUS || b.op() == RtExpr.Op.MINUS)) {
+            flattenSum(b.left(), negated, terms, minus);
+            flattenSum(b.right(), negated ^ (b.op() == RtExpr.Op.MINUS), terms, minus);
+        } else {
+            terms.add(e);
+            minus.add(negated);
+        }
     }
 
     private boolean checkSelect(Ctx c, org.thermion.lang.ast.Ident field) {
@@ -374,6 +483,11 @@ final class IsaBuilder {
             Rtl x = expr(c, n.operand());
             return x == null ? null : new Rtl.Not(x);
         }
+        if (e instanceof RtExpr.Bin b && (b.op() == RtExpr.Op.PLUS || b.op() == RtExpr.Op.MINUS)) {
+            diags.error(b.span(), "'+' and '-' compute only the pc; a one-bit value uses & | ^ !",
+                    "write `pc <- pc + 2` for a skip");
+            return null;
+        }
         if (e instanceof RtExpr.Bin b) {
             Rtl l = expr(c, b.left());
             Rtl r = expr(c, b.right());
@@ -384,6 +498,7 @@ final class IsaBuilder {
                 case AND -> new Rtl.And(l, r);
                 case OR -> new Rtl.Or(l, r);
                 case XOR -> new Rtl.Xor(l, r);
+                case PLUS, MINUS -> null;
             };
         }
         return null;

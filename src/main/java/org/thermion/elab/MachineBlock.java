@@ -26,6 +26,8 @@ final class MachineBlock {
     Span pcJumpSpan, pcTargetSpan;
     final List<Value> inputs = new ArrayList<>();
     final List<Value> outputs = new ArrayList<>();
+    /** Module instances not built yet (their outputs become switches). */
+    final List<Value> notBuilt = new ArrayList<>();
     Span span = Span.none();
 
     static MachineBlock read(Prop p, Diagnostics diags) {
@@ -71,6 +73,9 @@ final class MachineBlock {
         }
         for (PropLine l : b.lines("outputs")) {
             m.outputs.addAll(l.tokens("ports"));
+        }
+        for (PropLine l : b.lines("notbuilt")) {
+            m.notBuilt.addAll(l.tokens("instances"));
         }
         return m;
     }

@@ -27,6 +27,14 @@ final class Packer {
     private final Diagnostics diags;
     private final Map<String, Integer> open = new HashMap<>();
     private final Map<Integer, Integer> free = new HashMap<>();
+    /** Sharing scope per tube type from {@code packing} blocks: "module" (default), "board" or "machine". */
+    final Map<Integer, String> share = new HashMap<>();
+    /** Envelopes the description names, with the stages' output nets as written. */
+    final List<Named> named = new ArrayList<>();
+
+    /** {@code envelope NAME "OUT, OUT"}: the text and where it was written. */
+    record Named(String name, String outputs, Span span) {
+    }
     private final List<Span> ruleSpans = new ArrayList<>();
 
     Packer(Parts parts, Diagnostics diags) {
@@ -36,7 +44,7 @@ final class Packer {
 
     /** Places a stage outside the netlist (a soft start's thyratron); returns the envelope. */
     int place(int tube, int module, int sections) {
-        return place(tube, module, sections, false, -1);
+        return place(tube, module, module, sections, false, -1);
     }
 
     /**
@@ -48,21 +56,35 @@ final class Packer {
         for (int k = 0; k < order.length; k++) {
             rank[order[k]] = k;
         }
-        List<Envelope> out = new ArrayList<>(envelopes.size());
+        java.util.Set<String> taken = new java.util.HashSet<>();
         for (Envelope e : envelopes) {
+            if (e.pinned()) {
+                taken.add(e.designator());
+            }
+        }
+        List<Envelope> out = new ArrayList<>(envelopes.size());
+        int number = 0;
+        for (Envelope e : envelopes) {
+            String designator = e.designator();
+            if (!e.pinned()) {
+                do {
+                    number++;
+                } while (taken.contains("V" + number));
+                designator = "V" + number;
+            }
             List<Envelope.Slot> slots = new ArrayList<>(e.slots().size());
             for (Envelope.Slot s : e.slots()) {
                 slots.add(s.latch() || s.index() < 0 ? s : new Envelope.Slot(s.section(), false, rank[s.index()]));
             }
-            out.add(new Envelope(e.id(), e.designator(), e.tube(), e.module(), e.sectionsUsed(), slots, e.pinned()));
+            out.add(new Envelope(e.id(), designator, e.tube(), e.module(), e.sectionsUsed(), slots, e.pinned()));
         }
         return out;
     }
 
     /** Places a stage instance needing {@code sections} of {@code tube} in module {@code module}; returns the envelope. */
-    int place(int tube, int module, int sections, boolean latch, int index) {
+    int place(int tube, int module, int group, int sections, boolean latch, int index) {
         TubeType t = parts.tubes.get(tube);
-        String key = tube + ":" + module;
+        String key = tube + ":" + group;
         Integer cur = open.get(key);
         if (sections > t.sections()) {
             // A stage wider than one envelope (a many-input diode gate) spans envelopes densely.
@@ -103,6 +125,19 @@ final class Packer {
         free.put(env, free.get(env) - sections);
     }
 
+    /** A new envelope the description names; its stages go in with {@link #into}. */
+    int pinned(String name, int tube, int module) {
+        int id = envelopes.size();
+        envelopes.add(new Envelope(id, name, tube, module, 0, List.of(), true));
+        free.put(id, parts.tubes.get(tube).sections());
+        return id;
+    }
+
+    /** Puts a stage into a named envelope (the caller has checked it fits). */
+    void into(int env, int sections, boolean latch, int index) {
+        use(env, sections, latch, index);
+    }
+
     private int newEnvelope(int tube, int module, int used, boolean latch, int index) {
         int id = envelopes.size();
         envelopes.add(new Envelope(id, "V" + (id + 1), tube, module, 0, List.of(), false));
@@ -111,7 +146,28 @@ final class Packer {
         return id;
     }
 
+    /** Reads a {@code packing { ... }} block: sharing scopes and named envelopes. */
+    void readPacking(Prop p) {
+        PropBlock b = PropBlock.read(PropertyTable.PACKING, p, "packing", p.key().span(), diags);
+        for (PropLine line : b.lines("share")) {
+            for (org.thermion.lang.ast.Value v : line.tokens("tubes")) {
+                int t = parts.tube(v.text(), v.span());
+                if (t >= 0) {
+                    share.put(t, line.word("scope"));
+                }
+            }
+        }
+        for (PropLine line : b.lines("envelope")) {
+            named.add(new Named(line.word("name"), line.word("stages"), line.span("stages")));
+        }
+    }
+
     /** Reads a {@code heaters on RAIL { ... }} block into rules. */
+    /** The line of each heater rule, in rule order. */
+    List<Span> ruleSpans() {
+        return List.copyOf(ruleSpans);
+    }
+
     void readRules(Prop p) {
         PropReader head = new PropReader(p, diags);
         head.expectWord("on");

@@ -195,6 +195,11 @@ final class Parts {
         boolean blockOk = diags.errorCount() == errorsBefore;
         PropLine tubeLine = b.line("tube");
         int tube = tubeLine == null ? -1 : tube(tubeLine.word("tube"), tubeLine.span("tube"));
+        if (tube >= 0 && tubes.get(tube).basings().isEmpty()) {
+            diags.warning(tubeLine.span("tube"), "stage '" + name + "' is built on " + tubes.get(tube).name()
+                    + ", which has no basing data: the wire list cannot name its pins",
+                    "add `basing BASE \"PIN electrode.section, ...\" from \"SOURCE\"` to tube " + tubes.get(tube).name());
+        }
         PropLine sections = b.line("sections");
         PropLine loadLine = b.line("load");
         double load = loadLine != null && loadLine.has("lampvolts")

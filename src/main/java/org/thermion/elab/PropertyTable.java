@@ -264,7 +264,9 @@ final class PropertyTable {
             Property.of("pc", "the program counter").opens(PC),
             Property.of("inputs", "top-module inputs driven from outside (switches, sensors)",
                     new Slot.Names("ports", "input ports")).many(),
-            Property.of("outputs", "top-module outputs shown and logged", new Slot.Names("ports", "output ports")).many());
+            Property.of("outputs", "top-module outputs shown and logged", new Slot.Names("ports", "output ports")).many(),
+            Property.of("notbuilt", "module instances not built yet: the outputs they would drive become switches (machine"
+                    + " inputs named as the nets)", new Slot.Names("instances", "instance names")).many());
 
     private static final Slot.AnyOrder HEATER_OPTIONS = new Slot.AnyOrder(List.of(
             new Slot.Optional("at", List.of(q("volts", "heater wiring voltage", Unit.VOLT, above(0, 200)))),
@@ -285,9 +287,39 @@ final class PropertyTable {
 
     static final PropertyTable REALIZE = new PropertyTable("realize", "realize { ... }", realizeEntries());
 
+    static final PropertyTable MARGINS = new PropertyTable("margins", "margins { ... }",
+            Property.of("rails", "each rail's tolerance either way, for worst-case margins",
+                    plain("rail tolerance in percent", from(0, 50)), new Slot.Word("percent"))
+                    .byDefault(100 * org.thermion.model.MarginRules.DEFAULT.rail())
+                    .source("common practice: a supply held within 5 %; " + PLAUSIBLE + " of 50 %"),
+            Property.of("resistors", "each resistor's tolerance either way",
+                    plain("resistor tolerance in percent", from(0, 50)), new Slot.Word("percent"))
+                    .byDefault(100 * org.thermion.model.MarginRules.DEFAULT.resistor())
+                    .source("common practice: 5 % (E24) resistors; " + PLAUSIBLE + " of 50 %"),
+            Property.of("endoflife", "a worn tube's emission as a share of a new tube's current",
+                    plain("end-of-life emission in percent", above(0, 100)), new Slot.Word("percent"))
+                    .byDefault(100 * org.thermion.model.MarginRules.DEFAULT.endOfLife())
+                    .source("common practice: tube testers mark a tube worn at 60-70 % of a new tube's plate current "
+                            + "or transconductance (REFERENCES.md, End of life)"),
+            Property.of("minimum", "noise margin below which check warns",
+                    q("minimum noise margin", Unit.VOLT, from(0, 1000)))
+                    .byDefault(org.thermion.model.MarginRules.DEFAULT.minMargin())
+                    .source("our own design value: room for hum and crosstalk on open wiring"));
+
+    static final PropertyTable PACKING = new PropertyTable("packing", "packing { ... }",
+            Property.of("share", "`share per board TUBE ...`: sections of these tube types may share an envelope across modules of one board "
+                            + "(each instance under the top with everything below it) or of the whole machine",
+                    new Slot.Word("per"), name("scope", "sharing scope", List.of("module", "board", "machine")),
+                    new Slot.Names("tubes", "tube types"))
+                    .byDefault("per module").many(),
+            Property.of("envelope", "these stages (named by their output nets, a latch by its Q) share one envelope, "
+                            + "which keeps the given designator: a builder's already wired tube",
+                    name("name", "an envelope designator", List.of()), new Slot.Text("stages", "the stages' output nets"))
+                    .byDefault("none").many());
+
     /** Every table, in the order the reference lists them. */
-    static final List<PropertyTable> ALL = List.of(RAIL, TUBE, STAGE, HEATERS, SOFTSTART, RELAY, REALIZE, MACHINE, CLOCK,
-            ROM, PC);
+    static final List<PropertyTable> ALL = List.of(RAIL, TUBE, STAGE, HEATERS, SOFTSTART, RELAY, REALIZE, PACKING, MACHINE,
+            CLOCK, ROM, PC, MARGINS);
 
     Property get(String key) {
         for (Property p : properties) {

@@ -279,6 +279,10 @@ final class AstBuilder {
         if (ctx instanceof RNotContext c) {
             return new RtExpr.Not(rexpr(c.rexpr()), s);
         }
+        if (ctx instanceof RAddContext c) {
+            RtExpr.Op op = c.op.getText().equals("+") ? RtExpr.Op.PLUS : RtExpr.Op.MINUS;
+            return new RtExpr.Bin(op, rexpr(c.rexpr(0)), rexpr(c.rexpr(1)), s);
+        }
         if (ctx instanceof RAndContext c) {
             return new RtExpr.Bin(RtExpr.Op.AND, rexpr(c.rexpr(0)), rexpr(c.rexpr(1)), s);
         }

@@ -83,11 +83,45 @@ public final class Meanings {
         return -1;
     }
 
+    /** The first {@code pc <- pc +/- field} in statement order (then-branch first), or null. */
+    public static Transfer.PcStep firstRelativeJump(List<Transfer> body) {
+        for (Transfer t : body) {
+            if (t instanceof Transfer.PcStep p && p.field() >= 0) {
+                return p;
+            }
+            if (t instanceof Transfer.When w) {
+                Transfer.PcStep f = firstRelativeJump(w.then());
+                if (f == null) {
+                    f = firstRelativeJump(w.otherwise());
+                }
+                if (f != null) {
+                    return f;
+                }
+            }
+        }
+        return null;
+    }
+
+    /** True when the meaning assigns the PC anywhere (a jump, a skip or a relative jump). */
+    public static boolean writesPc(List<Transfer> body) {
+        for (Transfer t : body) {
+            if (t instanceof Transfer.ToPc || t instanceof Transfer.PcStep) {
+                return true;
+            }
+            if (t instanceof Transfer.When w && (writesPc(w.then()) || writesPc(w.otherwise()))) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** Fields the meaning jumps to (their indices, ascending), empty when it never jumps. */
     public static Set<Integer> jumpFields(List<Transfer> body) {
         Set<Integer> s = new TreeSet<>();
         for (Transfer t : body) {
             if (t instanceof Transfer.ToPc p) {
+                s.add(p.field());
+            } else if (t instanceof Transfer.PcStep p && p.field() >= 0) {
                 s.add(p.field());
             } else if (t instanceof Transfer.When w) {
                 s.addAll(jumpFields(w.then()));

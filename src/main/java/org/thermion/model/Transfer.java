@@ -17,6 +17,20 @@ public sealed interface Transfer {
     record ToPc(int field) implements Transfer {
     }
 
+    /**
+     * {@code pc <- pc + offset}, {@code pc <- pc + field + offset} or {@code pc <- pc - field + offset}:
+     * a skip or a relative jump from the address of the instruction itself, modulo the PC's range.
+     *
+     * @param field the field added or subtracted, -1 for none
+     */
+    record PcStep(long offset, int field, boolean minusField) implements Transfer {
+        /** The next address from {@code pc} for {@code word}, before the PC's range is applied. */
+        public long from(long pc, long word, List<IsaField> fields) {
+            long f = field < 0 ? 0 : fields.get(field).extract(word);
+            return pc + offset + (minusField ? -f : f);
+        }
+    }
+
     /** {@code if cond { ... } else { ... }}. */
     record When(Rtl cond, List<Transfer> then, List<Transfer> otherwise) implements Transfer {
         public When {

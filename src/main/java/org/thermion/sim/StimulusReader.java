@@ -15,9 +15,11 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Reads a stimulus in RFC 4180 CSV: a header {@code cycle,NAME,...} naming machine inputs,
- * then rows {@code CYCLE,VALUE,...} with values 0 or 1 (empty keeps the previous value), in
- * increasing cycle order. Fields may be quoted; records end with CRLF or LF. Errors name
+ * Reads a stimulus in RFC 4180 CSV: a header {@code cycle,NAME,...} (or {@code cycle,phase,NAME,...})
+ * naming machine inputs or whole buses of inputs, then rows {@code CYCLE[,PHASE],VALUE,...} in
+ * increasing time order. A value is a number (decimal, {@code 0x...}, {@code 0b...}) that fits its
+ * column's bits; empty keeps the previous value; a row applies from the start of its phase (1 when
+ * there is no phase column). Fields may be quoted; records end with CRLF or LF. Errors name
  * file:line:col and say what was expected.
  */
 public final class StimulusReader {
@@ -54,49 +56,60 @@ public final class StimulusReader {
             return null;
         }
         List<Field> header = records.get(0);
-        int[] inputs = readHeader(header);
-        if (inputs == null) {
+        boolean phased = header.size() > 1 && header.get(1).text().strip().equals("phase");
+        int lead = phased ? 2 : 1;
+        List<Stimulus.Column> columns = readHeader(header, lead);
+        if (columns == null) {
             return null;
         }
         List<Stimulus.Row> rows = new ArrayList<>();
-        long last = -1;
+        long lastCycle = -1;
+        int lastPhase = machine.clock().phases();
         for (int r = 1; r < records.size(); r++) {
             List<Field> rec = records.get(r);
             Field first = rec.get(0);
             if (rec.size() != header.size()) {
                 Field at = rec.size() > header.size() ? rec.get(header.size()) : rec.get(rec.size() - 1);
                 Span s = rec.size() > header.size() ? at.span() : at.endSpan();
-                diags.error(s, "expected " + header.size() + " fields (cycle and " + (header.size() - 1)
-                        + (header.size() == 2 ? " input" : " inputs") + ", as in the header), found " + rec.size(), null);
+                diags.error(s, "expected " + header.size() + " fields (" + (phased ? "cycle, phase" : "cycle") + " and "
+                        + (header.size() - lead) + (header.size() - lead == 1 ? " input" : " inputs") + ", as in the header), found "
+                        + rec.size(), null);
                 continue;
             }
-            long cycle = readCycle(first, last);
+            long cycle = readCycle(first);
             if (cycle < 0) {
                 continue;
             }
-            last = cycle;
-            byte[] values = new byte[inputs.length];
+            int phase = phased ? readPhase(rec.get(1)) : 1;
+            if (phase < 0) {
+                continue;
+            }
+            if (cycle < lastCycle || (cycle == lastCycle && phase <= lastPhase)) {
+                Field at = cycle == lastCycle && phased ? rec.get(1) : first;
+                diags.error(at.span(), phased ? "expected a time after cycle " + lastCycle + " phase " + lastPhase
+                        + ", found cycle " + cycle + " phase " + phase : "expected a cycle after " + lastCycle + ", found " + cycle,
+                        phased ? "rows go in increasing time order: by cycle, then by phase"
+                                : "rows go in increasing cycle order, one row per cycle");
+                continue;
+            }
+            lastCycle = cycle;
+            lastPhase = phase;
+            long[] values = new long[columns.size()];
             boolean ok = true;
-            for (int k = 0; k < inputs.length; k++) {
-                Field f = rec.get(k + 1);
-                String v = f.text().strip();
-                if (v.equals("0")) {
-                    values[k] = 0;
-                } else if (v.equals("1")) {
-                    values[k] = 1;
-                } else if (v.isEmpty()) {
-                    values[k] = Stimulus.KEEP;
-                } else {
-                    diags.error(f.span(), "expected 0 or 1 for input '" + header.get(k + 1).text().strip()
-                            + "', found '" + v + "'", "leave the field empty to keep the previous value");
+            for (int k = 0; k < columns.size(); k++) {
+                Field f = rec.get(k + lead);
+                Long v = readValue(f, columns.get(k));
+                if (v == null) {
                     ok = false;
+                } else {
+                    values[k] = v;
                 }
             }
             if (ok) {
-                rows.add(new Stimulus.Row(cycle, first.span().line(), values));
+                rows.add(new Stimulus.Row(cycle, phase, first.span().line(), values));
             }
         }
-        return diags.errorCount() > before ? null : new Stimulus(inputs, List.copyOf(rows));
+        return diags.errorCount() > before ? null : new Stimulus(columns, rows);
     }
 
     private String exampleInputs() {
@@ -104,7 +117,31 @@ public final class StimulusReader {
         return String.join(",", names);
     }
 
-    private int[] readHeader(List<Field> header) {
+    /** A value for a column: empty keeps, else a number that fits the column's bits; null after an error. */
+    private Long readValue(Field f, Stimulus.Column col) {
+        String v = f.text().strip();
+        if (v.isEmpty()) {
+            return Stimulus.KEEP;
+        }
+        int width = col.bits().length;
+        long n = StimulusNumber.parse(v);
+        if (n >= 0 && (width >= 63 || n < (1L << width))) {
+            return n;
+        }
+        if (width == 1) {
+            diags.error(f.span(), "expected 0 or 1 for input '" + col.name() + "', found '" + v + "'",
+                    "leave the field empty to keep the previous value");
+        } else if (n >= 0) {
+            diags.error(f.span(), "value " + v + " does not fit the " + width + " bits of bus '" + col.name()
+                    + "' (at most " + ((1L << width) - 1) + ")", null);
+        } else {
+            diags.error(f.span(), "expected a number for bus '" + col.name() + "' (decimal, 0x... or 0b...), found '" + v + "'",
+                    "leave the field empty to keep the previous value");
+        }
+        return null;
+    }
+
+    private List<Stimulus.Column> readHeader(List<Field> header, int lead) {
         Field first = header.get(0);
         boolean ok = true;
         if (!first.text().strip().equals("cycle")) {
@@ -114,34 +151,68 @@ public final class StimulusReader {
             ok = false;
         }
         List<String> names = machine.inputs().stream().map(Port::name).toList();
+        Map<String, int[]> buses = buses();
+        List<String> known = new ArrayList<>(names);
+        known.addAll(buses.keySet());
         Map<String, Field> seen = new HashMap<>();
-        int[] inputs = new int[header.size() - 1];
-        for (int k = 1; k < header.size(); k++) {
+        Map<Integer, String> bitOwner = new HashMap<>();
+        List<Stimulus.Column> columns = new ArrayList<>();
+        for (int k = lead; k < header.size(); k++) {
             Field f = header.get(k);
             String name = f.text().strip();
             int idx = names.indexOf(name);
+            int[] bits = idx >= 0 ? new int[] {idx} : buses.get(name);
             if (name.isEmpty()) {
                 diags.error(f.span(), "expected an input name in the header, found an empty field", null);
                 ok = false;
-            } else if (idx < 0) {
-                String hint = Names.didYouMean(name, names);
+            } else if (bits == null) {
+                String hint = Names.didYouMean(name, known);
                 diags.error(f.span(), "expected an input of machine " + machine.name() + ", found '" + name + "'",
-                        hint != null ? hint : "its inputs are " + String.join(", ", names));
+                        hint != null ? hint : "its inputs are " + String.join(", ", known));
                 ok = false;
             } else if (seen.containsKey(name)) {
                 Span prev = seen.get(name).span();
                 diags.error(f.span(), "input '" + name + "' has a column already",
                         "first at column " + prev.col() + "; give each input one column");
                 ok = false;
+            } else if (bits.length > 62) {
+                diags.error(f.span(), "bus '" + name + "' has " + bits.length + " bits, more than one column holds (62)",
+                        "give its bits their own columns, e.g. " + name + "[0]");
+                ok = false;
             } else {
                 seen.put(name, f);
-                inputs[k - 1] = idx;
+                String clash = null;
+                for (int b : bits) {
+                    clash = clash == null ? bitOwner.get(b) : clash;
+                    bitOwner.put(b, name);
+                }
+                if (clash != null) {
+                    diags.error(f.span(), "column '" + name + "' sets an input that column '" + clash + "' sets too",
+                            "give each input bit one column");
+                    ok = false;
+                }
+                columns.add(new Stimulus.Column(name, bits));
             }
         }
-        return ok ? inputs : null;
+        return ok ? columns : null;
     }
 
-    private long readCycle(Field f, long last) {
+    /** Every bus of inputs ({@code word} for {@code word[0]}...), its input indices LSB first. */
+    private Map<String, int[]> buses() {
+        Map<String, java.util.TreeMap<Integer, Integer>> bits = new java.util.LinkedHashMap<>();
+        List<Port> in = machine.inputs();
+        for (int i = 0; i < in.size(); i++) {
+            String bus = NetLookup.busOf(in.get(i).name());
+            if (bus != null) {
+                bits.computeIfAbsent(bus, b -> new java.util.TreeMap<>()).put(NetLookup.bitIndex(in.get(i).name()), i);
+            }
+        }
+        Map<String, int[]> out = new java.util.LinkedHashMap<>();
+        bits.forEach((bus, m) -> out.put(bus, m.values().stream().mapToInt(Integer::intValue).toArray()));
+        return out;
+    }
+
+    private long readCycle(Field f) {
         String t = f.text().strip();
         long c;
         try {
@@ -153,12 +224,23 @@ public final class StimulusReader {
             diags.error(f.span(), "expected a cycle number (0, 1, 2, ...), found '" + t + "'", null);
             return -1;
         }
-        if (c <= last) {
-            diags.error(f.span(), "expected a cycle after " + last + ", found " + c,
-                    "rows go in increasing cycle order, one row per cycle");
+        return c;
+    }
+
+    /** A phase from 1 to the clock's phases (empty: 1); -1 after an error. */
+    private int readPhase(Field f) {
+        String t = f.text().strip();
+        int phases = machine.clock().phases();
+        if (t.isEmpty()) {
+            return 1;
+        }
+        long p = StimulusNumber.parse(t);
+        if (p < 1 || p > phases) {
+            diags.error(f.span(), "expected a phase from 1 to " + phases + ", found '" + t + "'",
+                    "the row's inputs change at the start of that phase; empty means phase 1");
             return -1;
         }
-        return c;
+        return (int) p;
     }
 
     /** One CSV field: its unquoted text and where it starts and ends in the file. */

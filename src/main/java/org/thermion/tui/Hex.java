@@ -12,11 +12,11 @@ final class Hex {
     }
 
     static String address(int address, Machine m) {
-        return pad(Integer.toHexString(address), digits(m.pc().width()));
+        return pad(Integer.toHexString(address), digits(m.pc() == null ? 1 : m.pc().width()));
     }
 
     static String word(long word, Machine m) {
-        return pad(Long.toHexString(word), digits(m.rom().width()));
+        return pad(Long.toHexString(word), digits(m.rom() != null ? m.rom().width() : m.isa() != null ? m.isa().wordBits() : 1));
     }
 
     private static String pad(String s, int n) {

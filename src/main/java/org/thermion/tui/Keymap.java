@@ -50,6 +50,9 @@ final class Keymap {
                 case 'w': return of(Command.POWER_UP_VIEW);
                 case ']': return of(Command.NEXT_RAIL);
                 case '[': return of(Command.PREVIOUS_RAIL);
+                case '+': case '=': return of(Command.WORD_UP);
+                case '-': return of(Command.WORD_DOWN);
+                case 'z': return of(Command.WORD_CLEAR);
                 case '?': case 'h': return of(Command.HELP);
                 case 'q': return of(Command.QUIT);
                 default: return null;
@@ -84,6 +87,16 @@ final class Keymap {
 
     private static Key panel(int i) {
         return new Key(Command.SHOW_PANEL, PANEL_KEYS[i].ordinal());
+    }
+
+    /** Every key, for the help overlay; a switch-fed machine's word keys among them. */
+    static List<HelpLine> help(List<String> inputNames, boolean switchFed) {
+        List<HelpLine> h = help(inputNames);
+        if (switchFed) {
+            h.add(5, new HelpLine("+ -", "instruction word switches: the next / previous word"));
+            h.add(6, new HelpLine("z", "instruction word switches: all off"));
+        }
+        return h;
     }
 
     /** Every key, for the help overlay. */

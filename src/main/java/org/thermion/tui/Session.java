@@ -64,7 +64,7 @@ public final class Session {
         this.decode = DecodeLamp.find(machine, decodeName);
         this.heaters = new HeaterAnalysis(machine);
         this.modules = ModuleLoad.of(machine, new TubeCount(machine), heaters);
-        this.breakpoints = new boolean[Math.max(1, machine.rom().words())];
+        this.breakpoints = new boolean[Math.max(1, machine.rom() == null ? 1 : machine.rom().words())];
         this.listingIndexOfAddress = new int[breakpoints.length];
         Arrays.fill(listingIndexOfAddress, -1);
         List<ListingLine> listing = assembly.listing();
@@ -101,7 +101,7 @@ public final class Session {
         for (Port p : m.outputs()) {
             nets.add(p.net());
         }
-        if (m.pc().jumpNet() >= 0) {
+        if (m.pc() != null && m.pc().jumpNet() >= 0) {
             nets.add(m.pc().jumpNet());
         }
         for (DecodeLamp d : decode) {
@@ -299,8 +299,37 @@ public final class Session {
         return address >= 0 && address < listingIndexOfAddress.length ? listingIndexOfAddress[address] : -1;
     }
 
-    /** The ROM word at the PC: the instruction being fetched or executed this cycle. */
+    /** True when the instruction word comes from switches (no ROM or PC): the UI shows a switch panel for it. */
+    public boolean switchFed() {
+        return machine.isa() != null && machine.isa().wordFromSwitches();
+    }
+
+    /** The word the switches of a switch-fed machine set now. */
+    public long switchWord() {
+        int[] bits = machine.isa().wordInputs();
+        long w = 0;
+        for (int i = 0; i < bits.length; i++) {
+            w |= input(bits[i]) ? 1L << i : 0;
+        }
+        return w;
+    }
+
+    /** Sets the word's switches to {@code word} (modulo the word's range). */
+    public void setSwitchWord(long word) {
+        int[] bits = machine.isa().wordInputs();
+        for (int i = 0; i < bits.length; i++) {
+            boolean on = (word >>> i & 1L) != 0;
+            if (input(bits[i]) != on) {
+                toggleInput(bits[i]);
+            }
+        }
+    }
+
+    /** The ROM word at the PC (the switches' word on a switch-fed machine): the instruction being fetched or executed this cycle. */
     private long wordAtPc() {
+        if (switchFed()) {
+            return switchWord();
+        }
         int pc = pc();
         long[] words = assembly.words();
         return pc >= 0 && pc < words.length ? words[pc] : 0;

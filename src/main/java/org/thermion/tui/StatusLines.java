@@ -86,7 +86,9 @@ final class StatusLines {
         int phases = s.machine().clock().phases();
         String time = machineTime(s.cycle(), s.machine().clock().periodSeconds());
         String where = String.format(" cycle %,d \u00B7 %s  phase %d of %d next  ", s.cycle(), time, s.nextPhase(), phases);
-        String at = Hex.address(s.pc(), s.machine()) + " " + instructionText(s);
+        String at = s.switchFed() ? "word " + Hex.word(s.switchWord(), s.machine()) + " "
+                + Canvas.fit(WordPanel.meaning(s.machine().isa(), s.switchWord()), 24)
+                : Hex.address(s.pc(), s.machine()) + " " + instructionText(s);
         String inst = (s.midCycle() ? "in flight " : "next up ") + at + "   ";
         String state;
         if (s.running()) {

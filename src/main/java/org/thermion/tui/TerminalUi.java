@@ -45,7 +45,7 @@ public final class TerminalUi {
         for (Port p : session.machine().inputs()) {
             names.add(p.name());
         }
-        this.help = Keymap.help(names);
+        this.help = Keymap.help(names, session.switchFed());
         this.pace = new Pace(session.machine().clock().periodSeconds());
         int first = session.listingIndex(session.pc());
         view.cursor = Math.max(0, first);
@@ -164,6 +164,7 @@ public final class TerminalUi {
                 view.followPc = true;
             }
             case TOGGLE_INPUT -> session.toggleInput(key.arg());
+            case WORD_UP, WORD_DOWN, WORD_CLEAR -> WordPanel.handle(key.command(), session, view);
             case BREAKPOINT -> {
                 ListingLine l = listing.isEmpty() ? null : listing.get(view.cursor);
                 if (l == null || !l.hasWord()) {
@@ -263,7 +264,11 @@ public final class TerminalUi {
             StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, !plan.hidden().isEmpty());
         } else {
             StatusLines.title(c, cols, session, program, plan, view);
-            ListingPanel.draw(c, plan.rect(Panel.LISTING), session, view);
+            if (session.switchFed()) {
+                WordPanel.draw(c, plan.rect(Panel.LISTING), session);
+            } else {
+                ListingPanel.draw(c, plan.rect(Panel.LISTING), session, view);
+            }
             if (plan.shows(Panel.STATE)) {
                 LampGrid.draw(c, plan.rect(Panel.STATE), "state", stateNames(), stateLevels(), "the ISA names no state bits");
             }

@@ -2,7 +2,8 @@ package org.thermion.verify;
 
 /**
  * Up to 64 cases of one instruction, one per lane, all as lane words (bit i = lane i): each
- * bit of the instruction word, each state bit and each input. {@code valid} marks the lanes in use.
+ * bit of the instruction word, each state bit and each machine input (on a switch-fed machine
+ * the word's switches carry the word). {@code valid} marks the lanes in use.
  */
 final class Batch {
     final int instruction;
@@ -10,6 +11,10 @@ final class Batch {
     final long[] state;
     final long[] inputs;
     long valid;
+    /** The PC every lane starts at. */
+    int pc;
+    /** The cycle runs with the decoder inhibited (the ISA's {@code inhibit} latch set): a skipped instruction. */
+    boolean inhibited;
 
     Batch(int instruction, int wordWidth, int stateBits, int inputBits) {
         this.instruction = instruction;
@@ -46,6 +51,8 @@ final class Batch {
     /** Copies lane {@code from} of {@code src} into lane {@code to} of this batch. */
     void copyLane(Batch src, int from, int to) {
         long bit = 1L << to;
+        pc = src.pc;
+        inhibited = src.inhibited;
         setWord(to, src.word(from));
         for (int s = 0; s < state.length; s++) {
             state[s] = (state[s] & ~bit) | (src.state(s, from) ? bit : 0);

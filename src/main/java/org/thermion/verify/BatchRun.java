@@ -14,8 +14,8 @@ import org.thermion.sim.compiled.Engine;
 
 /**
  * Runs the logic one machine cycle on a batch: all latches 0 except the ISA's state bits,
- * which take the batch's values; the ROM data nets carry each lane's instruction word; the
- * PC starts at 0. With {@code snapshot} it keeps every net's value at each phase's settle.
+ * which take the batch's values, and the inhibit latch, set for an inhibited batch; the ROM data
+ * nets (or the word's switches) carry each lane's instruction word; the PC starts at the batch's. With {@code snapshot} it keeps every net's value at each phase's settle.
  */
 final class BatchRun {
     private final Machine machine;
@@ -25,6 +25,7 @@ final class BatchRun {
     private final Snapshots snapshot = new Snapshots();
     private final int[] stateLatch;
     private final int romWidth;
+    private final int inhibitLatch;
     private final boolean[] gateDriven;
 
     BatchRun(Machine machine) {
@@ -50,6 +51,7 @@ final class BatchRun {
             }
         }
         romWidth = machine.rom() != null ? machine.rom().dataNets().length : 0;
+        inhibitLatch = isa.inhibitNet() >= 0 ? latchOf[isa.inhibitNet()] : -1;
         gateDriven = new boolean[nl.netCount()];
         for (Gate g : nl.gates()) {
             gateDriven[g.output()] = true;
@@ -73,6 +75,8 @@ final class BatchRun {
     static final class Result {
         long[] state;
         int[] pc = new int[64];
+        /** Lanes whose inhibit latch holds 1 after the cycle (0 without one). */
+        long inhibit;
         long[] lastSettle;
         long[][] atPhase;
     }
@@ -82,10 +86,24 @@ final class BatchRun {
         for (int s = 0; s < stateLatch.length; s++) {
             sim.setLatch(stateLatch[s], b.state[s]);
         }
+        if (inhibitLatch >= 0) {
+            sim.setLatch(inhibitLatch, b.inhibited ? -1L : 0L);
+        }
         for (int i = 0; i < b.inputs.length; i++) {
             sim.setInput(i, b.inputs[i]);
         }
-        sim.forceRomWord(romWidth == b.wordBits.length ? b.wordBits : java.util.Arrays.copyOf(b.wordBits, romWidth));
+        int[] switches = machine.isa().wordInputs();
+        for (int i = 0; i < switches.length; i++) {
+            sim.setInput(switches[i], b.wordBits[i]);
+        }
+        if (b.pc != 0) {
+            for (int lane = 0; lane < 64; lane++) {
+                sim.setPc(lane, b.pc);
+            }
+        }
+        if (machine.rom() != null) {
+            sim.forceRomWord(romWidth == b.wordBits.length ? b.wordBits : java.util.Arrays.copyOf(b.wordBits, romWidth));
+        }
         int phases = sim.phases();
         Result r = new Result();
         if (snapshot) {
@@ -102,6 +120,7 @@ final class BatchRun {
         for (int lane = 0; lane < 64; lane++) {
             r.pc[lane] = sim.pc(lane);
         }
+        r.inhibit = inhibitLatch >= 0 ? sim.value(machine.isa().inhibitNet()) : 0L;
         r.lastSettle = snapshot ? r.atPhase[phases] : null;
         return r;
     }

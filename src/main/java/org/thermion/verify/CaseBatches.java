@@ -1,6 +1,7 @@
 package org.thermion.verify;
 
 import org.thermion.model.Isa;
+import org.thermion.model.Meanings;
 
 import java.util.List;
 import java.util.SplittableRandom;
@@ -15,15 +16,49 @@ final class CaseBatches {
     private final Isa isa;
     private final List<OperandPlan> plans;
     private final int stateBits;
+    /** Machine inputs the cases enumerate: all but the switches of the word. */
+    private final int[] free;
     private final int inputBits;
+    private final int allInputs;
+    private final int pcMask;
     private final long seed;
 
-    CaseBatches(Isa isa, List<OperandPlan> plans, int inputBits, long seed) {
+    CaseBatches(Isa isa, List<OperandPlan> plans, int allInputs, int pcMask, long seed) {
         this.isa = isa;
         this.plans = plans;
         this.stateBits = isa.state().size();
-        this.inputBits = inputBits;
+        this.allInputs = allInputs;
+        this.free = freeInputs(isa, allInputs);
+        this.inputBits = free.length;
+        this.pcMask = pcMask;
         this.seed = seed;
+    }
+
+    /** The machine inputs that are not switches of the instruction word. */
+    static int[] freeInputs(Isa isa, int allInputs) {
+        java.util.Set<Integer> word = new java.util.HashSet<>();
+        for (int w : isa.wordInputs()) {
+            word.add(w);
+        }
+        return java.util.stream.IntStream.range(0, allInputs).filter(i -> !word.contains(i)).toArray();
+    }
+
+    private Batch batch(int k, long c0) {
+        Batch b = new Batch(k, isa.wordBits(), stateBits, allInputs);
+        if (Meanings.firstRelativeJump(plans.get(k).instruction().body()) != null) {
+            // A relative jump is checked from many addresses, so an absolute one cannot pass for it.
+            b.pc = (int) ((c0 >>> 6) * 0x9E3779B1L + 3) & pcMask;
+        }
+        return b;
+    }
+
+    /** Puts each lane's word on the word's switches (a switch-fed machine). */
+    private Batch withSwitches(Batch b) {
+        int[] w = isa.wordInputs();
+        for (int i = 0; i < w.length; i++) {
+            b.inputs[w[i]] = b.wordBits[i];
+        }
+        return b;
     }
 
     /** All cases of instruction k: every operand word, state bit and input combined. */
@@ -32,7 +67,11 @@ final class CaseBatches {
     }
 
     Batch exhaustive(int k, long c0, long count) {
-        Batch b = new Batch(k, isa.wordBits(), stateBits, inputBits);
+        return withSwitches(fill(k, c0, count));
+    }
+
+    private Batch fill(int k, long c0, long count) {
+        Batch b = batch(k, c0);
         OperandPlan plan = plans.get(k);
         SplittableRandom rnd = random(k, c0);
         int low = stateBits + inputBits;
@@ -48,7 +87,7 @@ final class CaseBatches {
                 if (j < stateBits) {
                     b.state[j] = v;
                 } else {
-                    b.inputs[j - stateBits] = v;
+                    b.inputs[free[j - stateBits]] = v;
                 }
             }
             b.valid = -1L;
@@ -68,14 +107,14 @@ final class CaseBatches {
                 b.state[s] |= (rest >>> s & 1L) << lane;
             }
             for (int i = 0; i < inputBits; i++) {
-                b.inputs[i] |= (rest >>> (stateBits + i) & 1L) << lane;
+                b.inputs[free[i]] |= (rest >>> (stateBits + i) & 1L) << lane;
             }
         }
         return b;
     }
 
     Batch sample(int k, long c0) {
-        Batch b = new Batch(k, isa.wordBits(), stateBits, inputBits);
+        Batch b = batch(k, c0);
         OperandPlan plan = plans.get(k);
         SplittableRandom rnd = random(k, c0);
         for (int lane = 0; lane < 64; lane++) {
@@ -85,10 +124,10 @@ final class CaseBatches {
             b.state[s] = rnd.nextLong();
         }
         for (int i = 0; i < inputBits; i++) {
-            b.inputs[i] = rnd.nextLong();
+            b.inputs[free[i]] = rnd.nextLong();
         }
         b.valid = -1L;
-        return b;
+        return withSwitches(b);
     }
 
     private SplittableRandom random(int k, long c0) {

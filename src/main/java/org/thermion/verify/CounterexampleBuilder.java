@@ -45,6 +45,7 @@ final class CounterexampleBuilder {
         Batch b = g.batch;
         int lane = g.lane;
         Instruction ins = plan.instruction();
+        String mn = b.inhibited ? ins.mnemonic() + " while skipped" : ins.mnemonic();
         BatchRun.Result r = logic.run(b, true);
         IsaLanes.Expected e = items.expected(b);
         String item = g.item < stateBits ? isa.state().get(g.item).name() : "pc";
@@ -64,12 +65,12 @@ final class CounterexampleBuilder {
             String enName = l.enable() < 0 ? "(always)" : text.net(l.enable());
             if (en && !w) {
                 kind = "unexpected write";
-                explanation = "latch " + item + " loaded (enable " + enName + " = 1) although " + ins.mnemonic()
+                explanation = "latch " + item + " loaded (enable " + enName + " = 1) although " + mn
                         + " does not write " + item + "; data " + text.net(l.data()) + " = " + b01(d);
                 pins = new int[]{l.enable()};
             } else if (!en && x != q) {
                 kind = "missed write";
-                explanation = "latch " + item + " did not load (enable " + enName + " = 0); " + ins.mnemonic()
+                explanation = "latch " + item + " did not load (enable " + enName + " = 0); " + mn
                         + " writes " + item + " = " + b01(x);
                 pins = new int[]{l.enable()};
             } else {
@@ -78,6 +79,14 @@ final class CounterexampleBuilder {
                         + b01(x) + " (enable " + enName + " = " + b01(en) + ")";
                 pins = new int[]{l.data()};
             }
+        } else if (isa.inhibitNet() >= 0 && (b.inhibited || bit(r.inhibit, lane))) {
+            Latch l = latchOf(isa.inhibitNet());
+            phase = l.phase();
+            kind = "skip";
+            explanation = String.format(Locale.ROOT, "inhibit latch %s = %s after the cycle, pc 0x%X; %s expects pc 0x%X"
+                    + " (a skip: the next address with the decoder inhibited, which then clears)",
+                    text.net(isa.inhibitNet()), b01(bit(r.inhibit, lane)), r.pc[lane], mn, items.expectedPc(b, e, lane));
+            pins = new int[]{l.data()};
         } else {
             phase = machine.pc().phase();
             long[] at = r.atPhase[phase];
@@ -86,7 +95,7 @@ final class CounterexampleBuilder {
             boolean jx = bit(e.jump(), lane);
             if (j != jx) {
                 kind = "jump";
-                explanation = "jump net " + (jn >= 0 ? text.net(jn) : "(none)") + " = " + b01(j) + "; " + ins.mnemonic()
+                explanation = "jump net " + (jn >= 0 ? text.net(jn) : "(none)") + " = " + b01(j) + "; " + mn
                         + (jx ? " jumps here" : " does not jump here");
                 pins = new int[]{jn};
             } else {
@@ -113,7 +122,7 @@ final class CounterexampleBuilder {
         } else {
             Neighbour nb = passingNeighbour(b, lane, g.item);
             if (nb == null) {
-                compared = "no passing case of " + ins.mnemonic() + " one bit away";
+                compared = "no passing case of " + mn + " one bit away";
                 nets = List.of();
             } else {
                 compared = "the passing case with " + nb.change;
@@ -121,10 +130,19 @@ final class CounterexampleBuilder {
                 nets = nets().firstDifferences(nb.result, nb.result, 0, nb.lane, machine.netlist().netCount(), cone, phase);
             }
         }
-        return new Counterexample(ins.mnemonic(), ins.opcode(), b.word(lane), text.operandText(ins, b.word(lane)), item,
+        return new Counterexample(mn, ins.opcode(), b.word(lane), text.operandText(ins, b.word(lane)), item,
                 kind, explanation, text.stateText(b, lane), text.inputText(b, lane), text.afterText(e.state(), lane),
-                text.afterText(r.state, lane), items.expectedPc(e, lane), r.pc[lane], g.cases, compared, nets,
+                text.afterText(r.state, lane), items.expectedPc(b, e, lane), r.pc[lane], g.cases, compared, nets,
                 nets().trace(pins, r.atPhase[phase], lane));
+    }
+
+    private Latch latchOf(int net) {
+        for (Latch l : machine.netlist().latches()) {
+            if (l.output() == net) {
+                return l;
+            }
+        }
+        throw new IllegalStateException("no latch drives " + net);
     }
 
     // Made on the first counterexample: most runs find none.

@@ -67,15 +67,9 @@ final class DecodeCheck {
         if (lineNets.length == 0 || d.problem != null) {
             return;
         }
-        long seen1 = 0;
-        long seen2 = 0;
-        for (int net : lineNets) {
-            long v = logic.value(net);
-            seen2 |= seen1 & v;
-            seen1 |= v;
-        }
+        long seen1 = anyLine();
         long none = ~seen1 & b.valid;
-        long many = seen2 & b.valid;
+        long many = twoLines() & b.valid;
         if (idle && none == b.valid) {
             d.idle = true;
             return;
@@ -86,13 +80,7 @@ final class DecodeCheck {
         }
         if (many != 0) {
             int lane = Long.numberOfTrailingZeros(many);
-            List<String> act = new ArrayList<>();
-            for (int i = 0; i < lineNets.length; i++) {
-                if ((logic.value(lineNets[i]) >>> lane & 1L) != 0) {
-                    act.add(lineNames[i]);
-                }
-            }
-            d.problem = String.join(" and ", act) + " active together (" + text.caseText(b, lane) + ")";
+            d.problem = String.join(" and ", activeLines(lane)) + " active together (" + text.caseText(b, lane) + ")";
             return;
         }
         for (int i = 0; i < lineNets.length; i++) {
@@ -108,6 +96,65 @@ final class DecodeCheck {
             }
             d.line = i;
         }
+    }
+
+    /**
+     * Reads the lines of an inhibited batch (a skipped instruction): no line, or one, is fine -
+     * the decoder is held off on purpose - but two lines at once are still wrong.
+     */
+    void checkInhibited(State d, Batch b) {
+        if (lineNets.length == 0 || d.problem != null) {
+            return;
+        }
+        long many = twoLines() & b.valid;
+        if (many != 0) {
+            int lane = Long.numberOfTrailingZeros(many);
+            d.problem = String.join(" and ", activeLines(lane)) + " active together while the decoder is inhibited ("
+                    + text.caseText(b, lane) + ")";
+        }
+    }
+
+    /** Lanes with at least one line active. */
+    private long anyLine() {
+        long seen = 0;
+        for (int net : lineNets) {
+            seen |= logic.value(net);
+        }
+        return seen;
+    }
+
+    /** Lanes with two or more lines active. */
+    private long twoLines() {
+        long seen1 = 0;
+        long seen2 = 0;
+        for (int net : lineNets) {
+            long v = logic.value(net);
+            seen2 |= seen1 & v;
+            seen1 |= v;
+        }
+        return seen2;
+    }
+
+    private List<String> activeLines(int lane) {
+        List<String> act = new ArrayList<>();
+        for (int i = 0; i < lineNets.length; i++) {
+            if ((logic.value(lineNets[i]) >>> lane & 1L) != 0) {
+                act.add(lineNames[i]);
+            }
+        }
+        return act;
+    }
+
+    /** Verdicts for the inhibited cycles that went wrong (two lines at once), after the instructions' own. */
+    List<DecodeVerdict> inhibitedVerdicts(State[] inhibited) {
+        List<DecodeVerdict> out = new ArrayList<>();
+        for (int k = 0; k < plans.size() && inhibited != null; k++) {
+            if (inhibited[k] != null && inhibited[k].problem != null) {
+                Instruction ins = plans.get(k).instruction();
+                out.add(new DecodeVerdict(ins.mnemonic() + " while skipped", ins.opcode(), null, inhibited[k].problem));
+            }
+        }
+        return out;
     }
 
     /** One verdict per instruction from the states gathered (null: not run). */

@@ -14,7 +14,8 @@ import java.util.List;
  * belongs to case i. Right-hand sides and conditions read the state before the instruction;
  * {@code [sel] <- x} writes the state bit mapped at the select address (nothing for inputs
  * and unmapped addresses); reading {@code [sel]} gives the mapped bit, 0 when unmapped;
- * {@code pc <- field} takes the field, otherwise the PC counts up by one.
+ * {@code pc <- field} takes the field, {@code pc <- pc + ...} adds to the instruction's address
+ * (a skip, a relative jump), otherwise the PC counts up by one.
  */
 public final class IsaLanes {
     private final Isa isa;
@@ -32,7 +33,12 @@ public final class IsaLanes {
      * instruction word, {@code state[s]} and {@code inputs[i]} the state and input bits.
      */
     public Expected evaluate(Instruction ins, long[] wordBits, long[] state, long[] inputs) {
-        Run r = new Run(wordBits, state, inputs);
+        return evaluate(ins, wordBits, state, inputs, 0);
+    }
+
+    /** As {@link #evaluate(Instruction, long[], long[], long[])}, every case at address {@code pc}. */
+    public Expected evaluate(Instruction ins, long[] wordBits, long[] state, long[] inputs, int pc) {
+        Run r = new Run(wordBits, state, inputs, pc);
         r.run(ins.body(), -1L);
         return new Expected(r.after, r.written, r.jump, r.target);
     }
@@ -49,7 +55,10 @@ public final class IsaLanes {
         /** Lanes whose select field addresses each bit-map entry. */
         final long[] selLanes;
 
-        Run(long[] wordBits, long[] state, long[] inputs) {
+        final int pc;
+
+        Run(long[] wordBits, long[] state, long[] inputs, int pc) {
+            this.pc = pc;
             this.words = wordBits;
             this.before = state;
             this.inputs = inputs;
@@ -102,6 +111,17 @@ public final class IsaLanes {
                                 tv |= (int) (b >>> lane & 1L) << i;
                             }
                             target[lane] = tv;
+                        }
+                    }
+                } else if (t instanceof Transfer.PcStep p) {
+                    jump |= active;
+                    for (int lane = 0; lane < 64; lane++) {
+                        if ((active >>> lane & 1L) != 0) {
+                            long word = 0;
+                            for (int b = 0; b < words.length; b++) {
+                                word |= (words[b] >>> lane & 1L) << b;
+                            }
+                            target[lane] = (int) p.from(pc, word, isa.fields());
                         }
                     }
                 } else if (t instanceof Transfer.When w) {

@@ -25,20 +25,40 @@ final class ItemComparison {
     private final List<OperandPlan> plans;
     private final int stateBits;
     private final int pcMask;
+    private final boolean canInhibit;
 
     ItemComparison(Isa isa, List<OperandPlan> plans, int pcMask) {
         this.lanes = new IsaLanes(isa);
         this.plans = plans;
         this.stateBits = isa.state().size();
         this.pcMask = pcMask;
+        this.canInhibit = isa.inhibitNet() >= 0;
     }
 
+    /** The ISA's meaning of the batch; an inhibited cycle changes no state and does not jump. */
     IsaLanes.Expected expected(Batch b) {
-        return lanes.evaluate(plans.get(b.instruction).instruction(), b.wordBits, b.state, b.inputs);
+        if (b.inhibited) {
+            return new IsaLanes.Expected(b.state.clone(), new long[stateBits], 0L, new int[64]);
+        }
+        return lanes.evaluate(plans.get(b.instruction).instruction(), b.wordBits, b.state, b.inputs, b.pc);
     }
 
-    int expectedPc(IsaLanes.Expected e, int lane) {
-        return (e.jump() >>> lane & 1L) != 0 ? e.jumpTarget()[lane] & pcMask : 1 & pcMask;
+    int expectedPc(Batch b, IsaLanes.Expected e, int lane) {
+        return (e.jump() >>> lane & 1L) != 0 ? e.jumpTarget()[lane] & pcMask : (b.pc + 1) & pcMask;
+    }
+
+    /**
+     * True when the logic's PC and inhibit latch do what the ISA says: the expected address with
+     * the decoder free next cycle, or, for a skip over one instruction, the next address with the
+     * decoder inhibited (the skipped cycle is checked on its own as an inhibited batch).
+     */
+    private boolean pcRight(Batch b, IsaLanes.Expected e, BatchRun.Result r, int lane) {
+        int want = expectedPc(b, e, lane);
+        boolean inhibits = (r.inhibit >>> lane & 1L) != 0;
+        if (r.pc[lane] == want && !inhibits) {
+            return true;
+        }
+        return canInhibit && inhibits && want == ((b.pc + 2) & pcMask) && r.pc[lane] == ((b.pc + 1) & pcMask);
     }
 
     /** Lanes where item (a state bit index, or stateBits for the PC) is wrong. */
@@ -48,7 +68,7 @@ final class ItemComparison {
         }
         long bad = 0;
         for (int lane = 0; lane < 64; lane++) {
-            if ((b.valid >>> lane & 1L) != 0 && r.pc[lane] != expectedPc(e, lane)) {
+            if ((b.valid >>> lane & 1L) != 0 && !pcRight(b, e, r, lane)) {
                 bad |= 1L << lane;
             }
         }
@@ -61,7 +81,7 @@ final class ItemComparison {
         for (int item = 0; item <= stateBits; item++) {
             long bad = wrong(b, e, r, item);
             if (bad != 0) {
-                long key = (long) k * (stateBits + 1) + item;
+                long key = ((long) k * (stateBits + 1) + item) * 2 + (b.inhibited ? 1 : 0);
                 Group g = groups.get(key);
                 if (g == null) {
                     g = new Group(k, item);

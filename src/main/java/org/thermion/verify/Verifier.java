@@ -26,6 +26,12 @@ import java.util.Map;
  * all its cases, and no two instructions may share one. An instruction whose meaning is empty
  * (it does nothing) may instead have no line active in all its cases.
  *
+ * <p>Where the ISA declares an {@code inhibit} latch (a decoder held off to skip an instruction),
+ * {@code pc <- pc + 2} may be done by the logic as the next address with the inhibit set; a second
+ * round runs every case with the inhibit set and expects no state change, the PC counting on by
+ * one, the inhibit cleared, and never two decode lines at once. A machine whose word comes from
+ * switches gets each case's word on those inputs; it has no PC to compare.
+ *
  * <p>Each wrong item (a state bit or the PC) of an instruction is reported once, with the
  * number of cases it goes wrong in and one counterexample. The counterexample says what the
  * latch was given (data and enable nets) and lists the first nets, in levelized order, that
@@ -88,6 +94,7 @@ public final class Verifier {
     private final ItemComparison items;
     private final DecodeCheck decodeCheck;
     private final CounterexampleBuilder counterexamples;
+    private final int freeInputs;
 
     public Verifier(Machine machine, Options options) {
         this.machine = machine;
@@ -95,17 +102,19 @@ public final class Verifier {
         if (isa == null) {
             throw new IllegalArgumentException("machine '" + machine.name() + "' has no isa block to verify against");
         }
-        if (machine.rom() == null || machine.pc() == null) {
-            throw new IllegalArgumentException("machine '" + machine.name() + "' needs a rom and a pc to run instructions");
+        if (!isa.wordFromSwitches() && (machine.rom() == null || machine.pc() == null)) {
+            throw new IllegalArgumentException("machine '" + machine.name() + "' needs a rom and a pc to run instructions,"
+                    + " or an instruction word from switches (`word N bits from PORT` in its isa)");
         }
         this.opt = options;
         this.logic = new BatchRun(machine);
-        int pcMask = (1 << machine.pc().width()) - 1;
+        int pcMask = machine.pc() == null ? 0 : (1 << machine.pc().width()) - 1;
         for (Instruction ins : isa.instructions()) {
             plans.add(OperandPlan.of(isa, ins, options.allTargetBits()));
         }
         CaseText text = new CaseText(machine);
-        this.cases = new CaseBatches(isa, plans, machine.inputs().size(), options.seed());
+        this.cases = new CaseBatches(isa, plans, machine.inputs().size(), pcMask, options.seed());
+        this.freeInputs = CaseBatches.freeInputs(isa, machine.inputs().size()).length;
         this.items = new ItemComparison(isa, plans, pcMask);
         this.decodeCheck = new DecodeCheck(machine.netlist(), options.decodeName(), logic, text, plans);
         this.counterexamples = new CounterexampleBuilder(machine, options, logic, items, text, pcMask);
@@ -113,7 +122,8 @@ public final class Verifier {
 
     /** Runs the check. */
     public VerifyReport run() {
-        boolean exhaustive = isa.state().size() + machine.inputs().size() <= 40;
+        boolean exhaustive = isa.state().size() + freeInputs <= 40;
+        int rounds = isa.inhibitNet() >= 0 ? 2 : 1;
         long total = 0;
         if (exhaustive) {
             for (int k = 0; k < plans.size(); k++) {
@@ -129,28 +139,40 @@ public final class Verifier {
             perInstruction = Math.max(64, (opt.sampleCases() / Math.max(1, plans.size()) + 63) / 64 * 64);
             total = perInstruction * plans.size();
         }
+        total *= rounds;
         Map<Long, ItemComparison.Group> groups = new LinkedHashMap<>();
         DecodeCheck.State[] decode = new DecodeCheck.State[plans.size()];
+        DecodeCheck.State[] skipped = new DecodeCheck.State[plans.size()];
         long done = 0;
         outer:
-        for (int k = 0; k < plans.size(); k++) {
-            decode[k] = new DecodeCheck.State();
-            long count = exhaustive ? cases.casesOf(k) : perInstruction;
+        for (int k = 0; k < plans.size() * rounds; k++) {
+            // The second round runs every case again with the decoder inhibited: the skipped instruction.
+            boolean inhibited = k >= plans.size();
+            int ik = k % plans.size();
+            DecodeCheck.State[] into = inhibited ? skipped : decode;
+            into[ik] = new DecodeCheck.State();
+            long count = exhaustive ? cases.casesOf(ik) : perInstruction;
             for (long c0 = 0; c0 < count; c0 += 64) {
-                Batch b = exhaustive ? cases.exhaustive(k, c0, count) : cases.sample(k, c0);
+                Batch b = exhaustive ? cases.exhaustive(ik, c0, count) : cases.sample(ik, c0);
+                b.inhibited = inhibited;
                 BatchRun.Result r = logic.run(b, false);
-                items.compare(k, b, r, groups);
-                decodeCheck.check(decode[k], b, plans.get(k).instruction().body().isEmpty());
+                items.compare(ik, b, r, groups);
+                if (inhibited) {
+                    decodeCheck.checkInhibited(into[ik], b);
+                } else {
+                    decodeCheck.check(into[ik], b, plans.get(ik).instruction().body().isEmpty());
+                }
                 done += Long.bitCount(b.valid);
                 if (opt.progress() != null) {
                     opt.progress().update(done, total);
                 }
-                if (opt.stopAtFirst() && (!groups.isEmpty() || decode[k].problem != null)) {
+                if (opt.stopAtFirst() && (!groups.isEmpty() || into[ik].problem != null)) {
                     break outer;
                 }
             }
         }
-        List<DecodeVerdict> lines = decodeCheck.verdicts(decode);
+        List<DecodeVerdict> lines = new ArrayList<>(decodeCheck.verdicts(decode));
+        lines.addAll(decodeCheck.inhibitedVerdicts(skipped));
         List<Counterexample> ces = new ArrayList<>();
         for (ItemComparison.Group g : groups.values()) {
             ces.add(counterexamples.build(g, plans.get(g.instruction)));
@@ -177,6 +199,21 @@ public final class Verifier {
             if (!free.isEmpty()) {
                 notes.add("opcodes without an instruction, not checked: " + String.join(" ", free));
             }
+        }
+        List<String> unbuilt = machine.modules().stream().filter(mi -> !mi.built()).map(mi -> mi.path()).toList();
+        if (!unbuilt.isEmpty()) {
+            notes.add("modules not built yet (" + String.join(", ", unbuilt) + ") were checked from their description:"
+                    + " the built part does what the ISA says when their switches are set as they would drive them");
+        }
+        if (isa.inhibitNet() >= 0) {
+            notes.add("skips: every case also ran as the instruction skipped (decoder inhibited by "
+                    + machine.netlist().netName(isa.inhibitNet()) + "): no state may change, the pc counts on, the"
+                    + " inhibit clears, and at most one decode line may be active");
+        }
+        if (isa.wordFromSwitches()) {
+            notes.add("the instruction word comes from the switches " + machine.inputs().get(isa.wordInputs()[0]).name()
+                    + ".." + machine.inputs().get(isa.wordInputs()[isa.wordInputs().length - 1]).name()
+                    + ": every word of the plan was set on them");
         }
         if (!decodeCheck.hasLines()) {
             notes.add("no decode lines named '" + opt.decodeName() + "[k]' found; name them with --decode NAME");

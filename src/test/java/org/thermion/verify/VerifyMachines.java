@@ -50,6 +50,38 @@ final class VerifyMachines {
         return elaborate(text);
     }
 
+    static final Path SKIP = Path.of("src/test/resources/org/thermion/verify/skip.machine");
+
+    /** The skip machine with {@code from} replaced by {@code to} (which must occur exactly once). */
+    static Machine skip(String from, String to) {
+        return edited(SKIP, from, to);
+    }
+
+    /** The machine in {@code file} with {@code from} replaced by {@code to} (which must occur exactly once). */
+    static Machine edited(Path file, String from, String to) {
+        String text;
+        try {
+            text = Files.readString(file);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        if (!from.isEmpty()) {
+            int at = text.indexOf(from);
+            if (at < 0 || text.indexOf(from, at + 1) >= 0) {
+                throw new AssertionError("'" + from + "' must occur once in " + file);
+            }
+            text = text.replace(from, to);
+        }
+        return elaborate(text);
+    }
+
+    static final Path PANEL = Path.of("examples/bringup-panel/bringup-panel.machine");
+
+    /** The bring-up panel example (word from switches) with {@code from} replaced by {@code to}. */
+    static Machine panel(String from, String to) {
+        return edited(PANEL, from, to);
+    }
+
     static Machine tiny() {
         return tiny("", "");
     }

@@ -22,8 +22,8 @@ public sealed interface RtExpr {
     record Not(RtExpr operand, Span span) implements RtExpr {
     }
 
-    /** Logic operators. */
-    enum Op { AND, OR, XOR }
+    /** Logic operators, and the additions only {@code pc <- pc + ...} may use. */
+    enum Op { AND, OR, XOR, PLUS, MINUS }
 
     /** A binary logic operation. */
     record Bin(Op op, RtExpr left, RtExpr right, Span span) implements RtExpr {

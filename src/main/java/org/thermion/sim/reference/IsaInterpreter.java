@@ -21,7 +21,9 @@ import java.util.List;
  * the state bit mapped at the select field's address, and nothing when that address maps to an
  * input or to nothing; reading {@code [sel]} gives the mapped input or state bit, 0 when unmapped
  * (or when the ISA has no select field). The PC takes the target field when a {@code pc <- field}
- * runs, else counts up by one modulo 2^pcWidth. A word whose opcode no instruction claims changes
+ * runs, or its own address plus or minus what a {@code pc <- pc + ...} adds (a skip, a relative
+ * jump), else counts up by one, all modulo 2^pcWidth. A switch-fed machine reads its word from the
+ * switches every cycle and has no PC. A word whose opcode no instruction claims changes
  * nothing but the PC. Addresses at or beyond the ROM's size fetch the word 0.
  */
 public final class IsaInterpreter {
@@ -40,8 +42,8 @@ public final class IsaInterpreter {
         if (isa == null) {
             throw new IllegalArgumentException("machine '" + machine.name() + "' has no isa block to interpret");
         }
-        this.pcWidth = machine.pc().width();
-        this.rom = new long[machine.rom().words()];
+        this.pcWidth = machine.pc() == null ? 0 : machine.pc().width();
+        this.rom = new long[machine.rom() == null ? 0 : machine.rom().words()];
         this.state = new boolean[isa.state().size()];
         this.inputs = new boolean[machine.inputs().size()];
     }
@@ -83,9 +85,9 @@ public final class IsaInterpreter {
         throw new IllegalArgumentException("machine '" + machine.name() + "' has no input '" + name + "'");
     }
 
-    /** Fetches the word at the PC and executes it: one machine cycle. */
+    /** Fetches the word at the PC (or reads it from the switches) and executes it: one machine cycle. */
     public void step() {
-        long word = pc < rom.length ? rom[pc] : 0;
+        long word = isa.wordFromSwitches() ? switchWord(isa, inputs) : pc < rom.length ? rom[pc] : 0;
         Outcome o = execute(isa, word, state, inputs, pc, pcWidth);
         state = o.state();
         pc = o.pc();
@@ -121,6 +123,16 @@ public final class IsaInterpreter {
         return cycle;
     }
 
+    /** The instruction word the switches of a switch-fed machine set. */
+    public static long switchWord(Isa isa, boolean[] inputs) {
+        int[] bits = isa.wordInputs();
+        long w = 0;
+        for (int i = 0; i < bits.length; i++) {
+            w |= inputs[bits[i]] ? 1L << i : 0;
+        }
+        return w;
+    }
+
     /**
      * Executes one instruction word on a copy of {@code state}.
      *
@@ -128,12 +140,12 @@ public final class IsaInterpreter {
      * @return the state after, the next PC, and which state bits the instruction wrote
      */
     public static Outcome execute(Isa isa, long word, boolean[] state, boolean[] inputs, int pc, int pcWidth) {
-        Eval ev = new Eval(isa, word, state, inputs);
+        Eval ev = new Eval(isa, word, state, inputs, pc);
         Instruction ins = isa.byOpcode(isa.opcode().extract(word));
         if (ins != null) {
             ev.run(ins.body());
         }
-        int next = ev.jumpTo >= 0 ? ev.jumpTo : pc + 1;
+        long next = ev.jumped ? ev.jumpTo : pc + 1;
         return new Outcome(ev.after, (int) (next & mask(pcWidth)), ev.written);
     }
 
@@ -153,10 +165,13 @@ public final class IsaInterpreter {
         private final boolean[] inputs;
         final boolean[] after;
         final boolean[] written;
-        int jumpTo = -1;
+        private final long pc;
+        boolean jumped;
+        long jumpTo;
 
-        Eval(Isa isa, long word, boolean[] before, boolean[] inputs) {
+        Eval(Isa isa, long word, boolean[] before, boolean[] inputs, long pc) {
             this.isa = isa;
+            this.pc = pc;
             this.word = word;
             this.before = before.clone();
             this.inputs = inputs;
@@ -176,7 +191,11 @@ public final class IsaInterpreter {
                         written[b.state()] = true;
                     }
                 } else if (t instanceof Transfer.ToPc p) {
-                    jumpTo = (int) isa.fields().get(p.field()).extract(word);
+                    jumped = true;
+                    jumpTo = isa.fields().get(p.field()).extract(word);
+                } else if (t instanceof Transfer.PcStep p) {
+                    jumped = true;
+                    jumpTo = p.from(pc, word, isa.fields());
                 } else if (t instanceof Transfer.When w) {
                     run(value(w.cond()) ? w.then() : w.otherwise());
                 }

@@ -12,7 +12,8 @@ import java.util.List;
 
 /**
  * The instruction-set meaning as the {@link RunDriver} clocks it: one instruction a cycle, run in
- * the phase the PC loads on (where the logic executes it), no gates. A net reads as the state bit
+ * the phase the PC loads on (where the logic executes it; the last phase on a switch-fed machine,
+ * whose word comes from the switches), no gates. A net reads as the state bit
  * it holds, the output it shows or the input it carries; any other net reads 0.
  */
 public final class IsaLane implements Clocked {
@@ -20,6 +21,8 @@ public final class IsaLane implements Clocked {
     private final int phases;
     private final int pcPhase;
     private final long[] rom;
+    private final boolean hasPc;
+    private final boolean switchFed;
     // Per net: the state bit it holds or shows (>= 0), or -2 - the input it carries, or -1.
     private final int[] source;
     private final boolean[] inputs;
@@ -39,8 +42,11 @@ public final class IsaLane implements Clocked {
         }
         this.isa = new IsaInterpreter(machine);
         this.phases = machine.clock().phases();
-        this.pcPhase = machine.pc().phase();
-        this.rom = Arrays.copyOf(rom, Math.min(rom.length, machine.rom().words()));
+        // A switch-fed machine has no PC: its instruction acts in the last phase, where its latches load.
+        this.pcPhase = machine.pc() == null ? phases : machine.pc().phase();
+        this.hasPc = machine.pc() != null;
+        this.switchFed = machine.isa().wordFromSwitches();
+        this.rom = Arrays.copyOf(rom, Math.min(rom.length, machine.rom() == null ? 0 : machine.rom().words()));
         isa.loadRom(this.rom);
         isa.reset();
         List<StateBit> state = machine.isa().state();
@@ -126,7 +132,7 @@ public final class IsaLane implements Clocked {
 
     @Override
     public boolean hasPc() {
-        return true;
+        return hasPc;
     }
 
     @Override
@@ -148,7 +154,7 @@ public final class IsaLane implements Clocked {
     // repeating only when it ran the same word as the cycle before it.
     @Override
     public boolean repeated() {
-        long word = pcStart < rom.length ? rom[pcStart] : 0L;
+        long word = switchFed ? IsaInterpreter.switchWord(isa.machine().isa(), inputs) : pcStart < rom.length ? rom[pcStart] : 0L;
         boolean same = isa.pc() == pcStart && word == lastWord;
         lastWord = word;
         for (int s = 0; s < before.length && same; s++) {

@@ -62,7 +62,7 @@ public final class ProgramRuns {
         RunDriver driver = new RunDriver(lane, m.inputs().size(), stimulus).stopAtFixedPoint(true).stopWhenPcUnknown(true);
         OutputRecorder outputs = new OutputRecorder(lane, m);
         driver.observe(outputs);
-        WatchTable table = new WatchTable(lane, watches, m.pc().width());
+        WatchTable table = new WatchTable(lane, watches, m.pc() == null ? 1 : m.pc().width());
         driver.observe(table);
         return run(driver, maxCycles, lane, outputs, table, null, m.isa().state(), () -> {
             StringBuilder st = new StringBuilder();

@@ -8,7 +8,7 @@ import java.util.function.IntPredicate;
 
 /**
  * The one run loop: clocks a {@link Clocked} machine phase by phase, applies stimulus rows at the
- * start of their cycles, and ends at the cycle budget, a fixed point, an unknown PC, a breakpoint,
+ * start of their cycles or phases, and ends at the cycle budget, a fixed point, an unknown PC, a breakpoint,
  * an observer's halt or a stop from outside ({@link #requestStop()} or an interrupt, checked
  * between cycles). What a caller wants to know about the run it learns through
  * {@link RunObserver}s.
@@ -154,6 +154,9 @@ public final class RunDriver {
     }
 
     private void phase(long c, int p) {
+        if (p > 1 && cursor != null && cursor.advance(c, p, inputs)) {
+            pushInputs();
+        }
         final RunObserver[] obs = active;
         if (obs.length == 0) {
             machine.stepPhase();

@@ -149,8 +149,8 @@ class RunDriverTest {
     @Test
     void stimulusRowsApplyAtTheStartOfTheirCycleAndHold() {
         int lowSw = DEMO.inputs().stream().map(p -> p.name()).toList().indexOf("low_sw");
-        byte[] on = new byte[] {1};
-        Stimulus stim = new Stimulus(new int[] {lowSw}, List.of(new Stimulus.Row(3, 2, on)));
+        Stimulus stim = new Stimulus(List.of(Stimulus.Column.bit("low_sw", lowSw)),
+                List.of(new Stimulus.Row(3, 1, 2, new long[] {1})));
         LogicLane m = lane(LOOP);
         RunDriver d = new RunDriver(m, DEMO.inputs().size(), stim).stopAtFixedPoint(true);
         int net = DEMO.inputs().get(lowSw).net();
@@ -167,5 +167,25 @@ class RunDriverTest {
         d.run(6);
         assertThat(seen).containsExactly('0', '0', '0', '1', '1', '1');
         assertThat(d.input(lowSw)).isTrue();
+    }
+
+    @Test
+    void aRowForPhaseTwoChangesTheInputBetweenThePhasesOfItsCycle() {
+        int lowSw = DEMO.inputs().stream().map(p -> p.name()).toList().indexOf("low_sw");
+        Stimulus stim = new Stimulus(List.of(Stimulus.Column.bit("low_sw", lowSw)),
+                List.of(new Stimulus.Row(1, 2, 2, new long[] {1})));
+        LogicLane m = lane(LOOP);
+        RunDriver d = new RunDriver(m, DEMO.inputs().size(), stim);
+        int net = DEMO.inputs().get(lowSw).net();
+        List<String> seen = new ArrayList<>();
+        d.observe(new RunObserver() {
+            @Override
+            public void beforePhase(long cycle, int phase) {
+                seen.add(cycle + "." + phase + "=" + m.level(net));
+            }
+        });
+        d.start();
+        d.run(3);
+        assertThat(seen).containsExactly("0.1=0", "0.2=0", "1.1=0", "1.2=1", "2.1=1", "2.2=1");
     }
 }

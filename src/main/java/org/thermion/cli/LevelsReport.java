@@ -1,0 +1,154 @@
+package org.thermion.cli;
+
+import static org.thermion.cli.report.ReportUnit.AMPS;
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.PERCENT;
+import static org.thermion.cli.report.ReportUnit.TEXT;
+import static org.thermion.cli.report.ReportUnit.VOLTS;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.thermion.circuit.Tolerances;
+import org.thermion.circuit.WorstMargin;
+import org.thermion.cli.report.Absent;
+import org.thermion.cli.report.Report;
+import org.thermion.cli.report.Table;
+import org.thermion.levels.LevelAnalysis;
+import org.thermion.levels.LoadDrive;
+import org.thermion.levels.NetLevel;
+import org.thermion.model.Machine;
+
+/** The {@code levels} report: every net worst first, then the lamp and coil drivers. */
+final class LevelsReport {
+    /** The schema version of this JSON ({@code org/thermion/schema/levels.schema.json}). */
+    static final int VERSION = 1;
+
+    private static final Absent NONE = Absent.NONE;
+
+    private final Machine machine;
+    private final LevelAnalysis analysis;
+
+    LevelsReport(Machine machine, LevelAnalysis analysis) {
+        this.machine = machine;
+        this.analysis = analysis;
+    }
+
+    Report report() {
+        Tolerances t = analysis.tolerances();
+        List<NetLevel> nets = analysis.nets();
+        int failing = 0;
+        int weak = 0;
+        for (NetLevel n : nets) {
+            double w = n.worstMargin();
+            if (w < 0) {
+                failing++;
+            } else if (w < analysis.minMargin()) {
+                weak++;
+            }
+        }
+        Report rep = new Report("levels", VERSION);
+        rep.field("machine", machine.name());
+        rep.field("rail_tolerance", PERCENT, 100 * t.rail());
+        rep.field("resistor_tolerance", PERCENT, 100 * t.resistor());
+        rep.field("end_of_life_emission", PERCENT, 100 * t.endOfLife());
+        rep.field("minimum_margin", VOLTS, analysis.minMargin());
+        rep.field("nets", nets.size());
+        rep.field("negative_margins", failing);
+        rep.field("below_minimum", weak);
+        rep.text(List.of("machine " + machine.name() + ": " + nets.size() + " nets; worst case at rails and resistors "
+                + pct(t.rail()) + ", worn tubes at " + Math.round(100 * t.endOfLife()) + " % emission; minimum margin "
+                + num(analysis.minMargin()) + " V.",
+                failing + " nets with a negative worst-case margin, " + weak + " below the minimum.", ""));
+        Table data = new Table("nets", "nets")
+                .column("net", "net", TEXT)
+                .column("driver", "driver", TEXT, "the stage that drives the net (empty: driven from outside)")
+                .column("loads", "loads", COUNT, "input pins the net feeds")
+                .column("receivers", "receivers", TEXT, "the stages it feeds, xN for N pins")
+                .column("high", "V_OH", VOLTS, "lowest high level under the load, nominal")
+                .column("low", "V_OL", VOLTS, "highest low level under the load, nominal")
+                .column("vih", "V_IH", VOLTS, "the receivers' highest input-high threshold, nominal")
+                .column("vil", "V_IL", VOLTS, "the receivers' lowest input-low threshold, nominal")
+                .column("high_margin", "NM_H", VOLTS, "V_OH - V_IH, nominal")
+                .column("low_margin", "NM_L", VOLTS, "V_IL - V_OL, nominal")
+                .column("worst_high_margin", "worst NM_H", VOLTS, "NM_H at the corner that lowers it most")
+                .column("worst_high_corner", "NM_H corner", TEXT, "that corner")
+                .column("worst_low_margin", "worst NM_L", VOLTS, "NM_L at the corner that lowers it most")
+                .column("worst_low_corner", "NM_L corner", TEXT, "that corner")
+                .column("fan_out_limit", "limit", COUNT,
+                        "most receivers of the limiting kind with the minimum margin at the worse corner")
+                .column("limit_kind", "limit kind", TEXT, "the receiving stage the limit counts")
+                .column("note", "note", TEXT);
+        Table view = new Table("nets", "nets, worst first (worst-case margins)")
+                .column("net", "net", TEXT)
+                .column("driver", "driver", TEXT)
+                .column("loads", "loads", COUNT)
+                .column("high", "V_OH", VOLTS)
+                .column("low", "V_OL", VOLTS)
+                .column("worst_high_margin", "NM_H", VOLTS)
+                .column("worst_low_margin", "NM_L", VOLTS)
+                .column("fan_out_limit", "limit", COUNT);
+        List<String> corners = new ArrayList<>();
+        for (NetLevel n : nets) {
+            data.row(n.name(), n.stage(), n.loads(), n.receivers(), v(n.voh()), v(n.vol()), v(n.vih()), v(n.vil()),
+                    n.high() == null ? NONE : v(n.high().nominal()), n.low() == null ? NONE : v(n.low().nominal()),
+                    worst(n.high()), corner(n.high()), worst(n.low()), corner(n.low()),
+                    n.fanOutLimit() < 0 ? NONE : n.fanOutLimit(), n.limitKind(), n.note());
+            view.row(n.name(), n.stage().isEmpty() ? "(outside)" : n.stage(), n.loads(), v(n.voh()), v(n.vol()),
+                    worst(n.high()), worst(n.low()), n.fanOutLimit() < 0 ? NONE : n.fanOutLimit());
+            WorstMargin w = n.worse();
+            if (w != null && w.worst() < analysis.minMargin() && corners.size() < 20) {
+                corners.add(n.name() + ": " + (w.side() == WorstMargin.Side.HIGH ? "NM_H " : "NM_L ")
+                        + num(w.worst()) + " V at " + w.corner().describe() + " (nominal " + num(w.nominal())
+                        + " V; receivers " + n.receivers() + ")" + (n.note().isEmpty() ? "" : "; " + n.note()));
+            }
+        }
+        rep.view(view);
+        rep.data(data);
+        if (!corners.isEmpty()) {
+            List<String> lines = new ArrayList<>();
+            lines.add("");
+            lines.add("below the minimum margin, with the corner that puts them there:");
+            corners.forEach(c -> lines.add("  " + c));
+            rep.text(lines);
+        }
+        Table drives = new Table("drives", "lamp and coil drivers")
+                .column("net", "net", TEXT)
+                .column("stage", "stage", TEXT)
+                .column("load", "load", TEXT, "lamp or coil")
+                .column("on", "on", AMPS, "load current with the tube conducting, nominal")
+                .column("worst_on", "worst on", AMPS, "at the corner that lowers it")
+                .column("need", "needs", AMPS, "a lamp's rated current, a coil's pick-up current")
+                .column("off", "off", AMPS, "load current with the tube cut off, nominal")
+                .column("worst_off", "worst off", AMPS, "at the corner that raises it")
+                .column("dropout", "drop-out", AMPS, "a coil's drop-out current (none: not stated)");
+        for (LoadDrive d : analysis.drives()) {
+            drives.row(d.name(), d.stage(), d.kind() == LoadDrive.Kind.LAMP ? "lamp" : "coil", v(d.onAmps()),
+                    v(d.onWorstAmps()), d.ratedAmps(), v(d.offAmps()), v(d.offWorstAmps()),
+                    d.dropoutAmps() > 0 ? d.dropoutAmps() : NONE);
+        }
+        rep.text("");
+        rep.table(drives);
+        return rep;
+    }
+
+    private static Object v(double x) {
+        return Double.isFinite(x) ? x : NONE;
+    }
+
+    private static Object worst(WorstMargin w) {
+        return w == null ? NONE : v(w.worst());
+    }
+
+    private static Object corner(WorstMargin w) {
+        return w == null ? NONE : w.corner().describe();
+    }
+
+    private static String pct(double f) {
+        return "\u00b1" + Math.round(100 * f) + " %";
+    }
+
+    static String num(double x) {
+        return String.format(java.util.Locale.ROOT, "%.2f", x);
+    }
+}

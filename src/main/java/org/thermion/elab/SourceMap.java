@@ -1,0 +1,37 @@
+package org.thermion.elab;
+
+import java.util.List;
+
+import org.thermion.lang.Span;
+import org.thermion.model.MarginRules;
+
+/**
+ * Where an elaborated machine's parts were written, for messages about them: each gate's
+ * (in the netlist's levelized order) and each latch's stage use, each heater rule's line, and
+ * the machine's margin rules (the {@code margins} block, or the defaults).
+ */
+public record SourceMap(List<Span> gates, List<Span> latches, List<Span> heaterRules, MarginRules margins) {
+    public SourceMap {
+        gates = List.copyOf(gates);
+        latches = List.copyOf(latches);
+        heaterRules = List.copyOf(heaterRules);
+    }
+
+    /** No locations known (a machine built without source), default rules. */
+    public static final SourceMap NONE = new SourceMap(List.of(), List.of(), List.of(), MarginRules.DEFAULT);
+
+    /** The span of gate {@code id}, or {@link Span#none()}. */
+    public Span gate(int id) {
+        return id >= 0 && id < gates.size() ? gates.get(id) : Span.none();
+    }
+
+    /** The span of latch {@code id}, or {@link Span#none()}. */
+    public Span latch(int id) {
+        return id >= 0 && id < latches.size() ? latches.get(id) : Span.none();
+    }
+
+    /** The span of heater rule {@code index}, or {@link Span#none()}. */
+    public Span heaterRule(int index) {
+        return index >= 0 && index < heaterRules.size() ? heaterRules.get(index) : Span.none();
+    }
+}
