@@ -1,11 +1,12 @@
 package org.thermion.circuit;
 
 /**
- * One part of a DC circuit between numbered nodes. {@link #addCurrents} adds, for every node it
+ * One part of a DC circuit between numbered nodes (public so that a netlist writer can read
+ * the parts a stage is solved with; see {@link StageNetlist}). {@link #addCurrents} adds, for every node it
  * touches, the current flowing out of that node into the part; the solver drives each free
  * node's sum to zero (Kirchhoff's current law).
  */
-sealed interface Element permits Element.Resistor, Element.Lamp, Element.Triode, Element.Pentode,
+public sealed interface Element permits Element.Resistor, Element.Lamp, Element.Triode, Element.Pentode,
         Element.Diode, Element.Grid, Element.Arc {
 
     /** Leakage across every tube path so that a cut-off tube never leaves a singular Jacobian. */
@@ -122,7 +123,7 @@ sealed interface Element permits Element.Resistor, Element.Lamp, Element.Triode,
      * resistance (numerical only: it keeps the solve smooth; 0.1 V at 100 mA); else leakage.
      */
     record Arc(String label, GasThyratron model, boolean conducting, int a, int k) implements Element {
-        static final double ARC_OHMS = 1.0;
+        public static final double ARC_OHMS = 1.0;
 
         public void addCurrents(double[] v, double[] out) {
             double vak = v[a] - v[k];

@@ -64,6 +64,45 @@ public final class StageSolver {
         return b.parameters();
     }
 
+    /**
+     * The parts and nodes a solve of this stage would use (for netlist writers): the same
+     * circuit {@link #solve} builds, not solved.
+     */
+    public StageNetlist netlist(String role, StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads,
+                                Corner corner) {
+        Circuit c = builder(role, stage, inputVolts, stored, loads, corner).build();
+        List<Double> fixed = new ArrayList<>(c.size());
+        for (double f : c.fixed) {
+            fixed.add(f);
+        }
+        return new StageNetlist(c.names, fixed, List.of(c.elements), c.output);
+    }
+
+    /**
+     * The current an ideal source holding the stage's output at {@code volts} must feed into
+     * the output node (positive into the node: the stage pulls the node up), the rest of the
+     * circuit solved around it; NaN when there is no solution. For transition times: the node's
+     * capacitance charges at this current.
+     */
+    public double heldOutputAmps(StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads,
+                                 Corner corner, double volts) {
+        CircuitBuilder b = builder(DRIVER, stage, inputVolts, stored, loads, corner);
+        if (b.missingRail() != null || !Double.isFinite(volts)) {
+            return Double.NaN;
+        }
+        Circuit c = b.build();
+        double[] fixed = c.fixed.clone();
+        double[] guess = c.guess.clone();
+        fixed[c.output] = volts;
+        guess[c.output] = volts;
+        Circuit held = new Circuit(c.names, fixed, guess, List.of(c.elements), c.output);
+        DcSolver.Solution s = DcSolver.solve(held);
+        if (s.volts() == null) {
+            return Double.NaN;
+        }
+        return -held.nodeCurrents(s.volts())[c.output];
+    }
+
     /** Distinct solves computed so far (cache misses). */
     public long solves() {
         return solves;

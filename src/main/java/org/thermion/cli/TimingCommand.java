@@ -5,7 +5,13 @@ import org.thermion.cli.report.Format;
 import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
+import org.thermion.circuit.MachineCircuits;
+import org.thermion.circuit.Tolerances;
 import org.thermion.model.Machine;
+import org.thermion.timing.DelayCalculator;
+import org.thermion.timing.NetLabels;
+import org.thermion.timing.PathAdvice;
+import org.thermion.timing.RaceChecks;
 import org.thermion.timing.InstanceDelay;
 import org.thermion.timing.PathStep;
 import org.thermion.timing.PhaseTiming;
@@ -20,7 +26,9 @@ import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
@@ -31,6 +39,7 @@ import static org.thermion.cli.report.ReportUnit.COUNT;
 import static org.thermion.cli.report.ReportUnit.FARADS;
 import static org.thermion.cli.report.ReportUnit.FLAG;
 import static org.thermion.cli.report.ReportUnit.HERTZ;
+import static org.thermion.cli.report.ReportUnit.OHMS;
 import static org.thermion.cli.report.ReportUnit.SECONDS;
 import static org.thermion.cli.report.ReportUnit.TEXT;
 
@@ -78,7 +87,7 @@ final class TimingCommand implements Callable<Integer> {
                 return ExitCodes.BAD_INPUT;
             }
         }
-        double access = 0;
+        double access = Double.NaN;
         if (romAccess != null) {
             access = parseTime(romAccess);
             if (Double.isNaN(access)) {
@@ -90,9 +99,51 @@ final class TimingCommand implements Callable<Integer> {
         if (m == null) {
             return ExitCodes.BAD_INPUT;
         }
-        TimingReport r = new StaticTiming(m, access).analyse(Double.isNaN(t) ? m.clock().periodSeconds() : t);
-        format.write(out, report(r));
-        return r.passes() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
+        Analysis a = analyse(m, Double.isNaN(t) ? m.clock().periodSeconds() : t, access);
+        format.write(out, report(a));
+        return a.passes() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
+    }
+
+    /**
+     * Timing at nominal values and at the slow corner, the remedies for failing or tight paths,
+     * the short-path checks and the warnings (a ROM access time not given, declared figures far
+     * from the computed ones).
+     */
+    record Analysis(Machine machine, TimingReport nominal, TimingReport slow, List<PathAdvice.Remedy> advice,
+                    List<RaceChecks.Check> checks, DelayCalculator calc, double romAccess, List<String> warnings) {
+        boolean passes() {
+            return nominal.passes() && slow.passes() && checks.stream().allMatch(RaceChecks.Check::passes);
+        }
+    }
+
+    /** {@code access}: the ROM access time, NaN when not given (taken as 0, with a warning). */
+    static Analysis analyse(Machine m, double period, double access) {
+        MachineCircuits circuits = MachineCircuits.of(m);
+        DelayCalculator nominal = new DelayCalculator(m, circuits, null);
+        DelayCalculator slow = new DelayCalculator(m, circuits, nominal.drive(), Tolerances.DEFAULT);
+        List<String> warnings = new ArrayList<>();
+        double rom = Double.isNaN(access) ? 0 : access;
+        if (Double.isNaN(access) && m.rom() != null && m.pc() != null) {
+            warnings.add("no ROM access time given: the ROM's data are taken as valid the moment the program "
+                    + "counter loads; give the ROM's access time with --rom-access (e.g. --rom-access 2us)");
+        }
+        TimingReport rn = new StaticTiming(m, rom, nominal).analyse(period);
+        TimingReport rs = new StaticTiming(m, rom, slow).analyse(period);
+        List<RaceChecks.Check> checks = new ArrayList<>();
+        double width = period / Math.max(1, m.clock().phases());
+        for (RaceChecks.Check c : new RaceChecks(m, nominal, rom).checks(width)) {
+            if (!c.kind().equals("pulse width")) {
+                checks.add(c);
+            }
+        }
+        checks.addAll(RaceChecks.overlaps(rs));
+        for (RaceChecks.Check c : new RaceChecks(m, slow, rom).checks(width)) {
+            if (c.kind().equals("pulse width")) {
+                checks.add(c);
+            }
+        }
+        List<PathAdvice.Remedy> advice = new PathAdvice(m, slow).advise(rs);
+        return new Analysis(m, rn, rs, advice, checks, nominal, Double.isNaN(access) ? Double.NaN : access, warnings);
     }
 
     /** Seconds from text such as {@code 50us}; NaN when it is not a positive time. */
@@ -112,21 +163,31 @@ final class TimingCommand implements Callable<Integer> {
     }
 
     /** The schema version of timing's JSON ({@code org/thermion/schema/timing.schema.json}). */
-    static final int VERSION = 2;
+    static final int VERSION = 3;
     private static final Absent NO_PATH = new Absent("no paths");
 
     /** The timing analysis as one report; the stage table only with {@code --stages}. */
-    Report report(TimingReport r) {
+    Report report(Analysis a) {
+        TimingReport r = a.nominal();
+        TimingReport slow = a.slow();
+        NetLabels labels = new NetLabels(a.machine().netlist());
         Report rep = new Report("timing", VERSION);
         rep.field("machine", r.machine());
         rep.field("phases", r.phases());
         rep.field("period", SECONDS, r.periodSeconds());
         rep.field("phase_width", SECONDS, r.phaseSeconds());
-        rep.field("passes", r.passes());
+        rep.field("passes", a.passes());
+        rep.field("rom_access", SECONDS, Double.isNaN(a.romAccess())
+                ? new Absent(a.machine().rom() == null ? "no ROM" : "not given (taken as 0)") : a.romAccess());
         PhaseTiming c = r.critical();
         Absent unconstrained = new Absent("no path constrains the clock");
         rep.field("min_period", SECONDS, c == null ? unconstrained : r.minPeriodSeconds());
         rep.field("max_clock", HERTZ, c == null ? unconstrained : r.maxClockHertz());
+        rep.field("min_period_slow", SECONDS, slow.critical() == null ? unconstrained : slow.minPeriodSeconds());
+        rep.field("max_clock_slow", HERTZ, slow.critical() == null ? unconstrained : slow.maxClockHertz());
+        rep.field("slow_corner", "each stage's rails, resistors and tube emission at the tolerance ends that slow it ("
+                + "rails and resistors " + percent(Tolerances.DEFAULT.resistor()) + ", emission down to "
+                + Math.round(Tolerances.DEFAULT.endOfLife() * 100) + " %)");
         if (c == null) {
             rep.field("critical", unconstrained);
         } else {
@@ -142,8 +203,14 @@ final class TimingCommand implements Callable<Integer> {
                         Numbers.si(r.periodSeconds(), SECONDS), Numbers.si(r.phaseSeconds(), SECONDS)),
                 "  a change launched at the end of one phase (latch outputs after their delay; inputs at the end of the "
                         + "last phase; ROM data when the PC loads) must reach each latch set-up before the end of its "
-                        + "loading phase: the next phase, or a whole cycle later for a latch of the same phase", "");
-        Table t = new Table("phases", "worst path into each phase")
+                        + "loading phase: the next phase, or a whole cycle later for a latch of the same phase",
+                "  delays: ln 9 R C, R computed from each stage's operating points where it has a circuit (else its "
+                        + "declared load and ron); slow corner: " + rep.fields().get("slow_corner"));
+        for (String w : a.warnings()) {
+            rep.text("  warning: " + w);
+        }
+        rep.text("");
+        Table t = new Table("phases", "worst path into each phase, nominal and at the slow corner")
                 .column("phase", "phase", COUNT)
                 .column("launch_phase", "launched", COUNT, "the phase at whose end the path starts")
                 .column("span", "span", COUNT, "phase widths the path may take")
@@ -152,8 +219,11 @@ final class TimingCommand implements Callable<Integer> {
                 .column("arrival", "arrival", SECONDS, "when the change reaches the endpoint")
                 .column("budget", "budget", SECONDS, "span less set-up")
                 .column("slack", "slack", SECONDS, "budget less arrival")
-                .column("result", "result", TEXT);
-        Table paths = new Table("paths", "worst paths, step by step (phase = the endpoint's phase)")
+                .column("result", "result", TEXT)
+                .column("slow_arrival", "slow arrival", SECONDS, "arrival of the worst path at the slow corner")
+                .column("slow_slack", "slow slack", SECONDS)
+                .column("slow_result", "slow result", TEXT);
+        Table paths = new Table("paths", "worst paths, step by step (phase = the endpoint's phase; nominal values)")
                 .column("phase", "phase", COUNT)
                 .column("step", "step", COUNT)
                 .column("driver", "driver", TEXT)
@@ -161,19 +231,22 @@ final class TimingCommand implements Callable<Integer> {
                 .column("edge", "edge", TEXT)
                 .column("delay", "delay", SECONDS)
                 .column("arrival", "arrival", SECONDS)
-                .column("net", "net", TEXT)
+                .column("net", "net", TEXT, "a net named by the elaborator is shown as its expression and file:line")
                 .column("module", "module", TEXT);
-        for (PhaseTiming p : r.perPhase()) {
+        for (int q = 0; q < r.perPhase().size(); q++) {
+            PhaseTiming p = r.perPhase().get(q);
+            PhaseTiming ps = slow.perPhase().get(q);
             if (!p.hasPath()) {
-                t.row(p.phase(), Absent.NONE, Absent.NONE, NO_PATH, Absent.NONE, Absent.NONE, Absent.NONE, Absent.NONE, "ok");
+                t.row(p.phase(), Absent.NONE, Absent.NONE, NO_PATH, Absent.NONE, Absent.NONE, Absent.NONE, Absent.NONE,
+                        "ok", Absent.NONE, Absent.NONE, "ok");
                 continue;
             }
             t.row(p.phase(), p.launchPhase(), p.span(), p.endpoint(), p.setup(), p.arrival(), p.budget(), p.slack(),
-                    p.passes() ? "ok" : "FAILS");
+                    verdict(p), ps.arrival(), ps.slack(), verdict(ps));
             int i = 0;
             for (PathStep st : p.path()) {
                 paths.row(p.phase(), i++, st.kind(), st.stage(), st.edge() == 'r' ? "rise" : "fall", st.delay(),
-                        st.arrival(), st.netName(), st.module());
+                        st.arrival(), labels.label(st.net()), st.module());
             }
         }
         rep.table(t).table(paths);
@@ -183,15 +256,27 @@ final class TimingCommand implements Callable<Integer> {
             rep.text(String.format(Locale.ROOT, "critical path: into %s on phase %d, %s + set-up %s over %d phase width%s",
                             c.endpoint(), c.phase(), Numbers.si(c.arrival(), SECONDS), Numbers.si(c.setup(), SECONDS), c.span(),
                             c.span() == 1 ? "" : "s"),
-                    String.format(Locale.ROOT, "shortest safe period %s: highest safe clock rate %s",
-                            Numbers.si(r.minPeriodSeconds(), SECONDS), Numbers.si(r.maxClockHertz(), HERTZ)));
+                    String.format(Locale.ROOT, "shortest safe period %s: highest safe clock rate %s nominal, %s at the "
+                                    + "slow corner", Numbers.si(r.minPeriodSeconds(), SECONDS),
+                            Numbers.si(r.maxClockHertz(), HERTZ), Numbers.si(slow.maxClockHertz(), HERTZ)));
         }
         rep.text(String.format(Locale.ROOT, "at %s: %s", Numbers.si(r.periodSeconds(), SECONDS),
-                r.passes() ? "every path settles in time" : "a path does not settle in time"));
+                a.passes() ? "every path settles in time and every short-path check holds"
+                        : !r.passes() ? "a path does not settle in time"
+                        : !slow.passes() ? "a path settles in time at nominal values but not at the slow corner"
+                        : "a short-path check fails"));
+        rep.text("");
+        TimingSections.advice(rep, a.advice());
+        rep.text("");
+        TimingSections.checks(rep, a.checks());
+        rep.text("");
+        for (String w : TimingSections.stageFigures(rep, a.machine(), a.calc())) {
+            rep.text("  warning: " + w);
+        }
         if (stages) {
             rep.text("");
-            Table st = new Table("stages", "stage delays (declared, or ln 9 RC: through the load toward its rail, through "
-                    + "the conducting tube the other way)")
+            Table st = new Table("stages", "stage delays, nominal (declared, or ln 9 R C with R from the circuit or "
+                    + "the declared load and ron)")
                     .column("kind", "kind", TEXT)
                     .column("index", "index", COUNT)
                     .column("stage", "stage", TEXT)
@@ -201,16 +286,32 @@ final class TimingCommand implements Callable<Integer> {
                     .column("fan_out", "fan-out", COUNT)
                     .column("rise", "rise", SECONDS)
                     .column("fall", "fall", SECONDS)
-                    .column("rise_given", "rise given", FLAG, "declared rather than computed")
+                    .column("rise_ohms", "rise R", OHMS, "output resistance of the rising edge")
+                    .column("fall_ohms", "fall R", OHMS)
+                    .column("basis", "R from", TEXT, "computed from the circuit, or declared")
+                    .column("rise_given", "rise given", FLAG, "a delay declared by the stage")
                     .column("fall_given", "fall given", FLAG)
                     .column("note", "note", TEXT);
             for (InstanceDelay d : r.instances()) {
                 st.row(d.kind(), d.index(), d.stage(), d.module(), d.netName(), d.delay().farads(), d.delay().fanOut(),
-                        d.delay().rise(), d.delay().fall(), d.delay().riseGiven(), d.delay().fallGiven(),
-                        d.delay().note().isEmpty() ? Absent.NONE : d.delay().note());
+                        d.delay().rise(), d.delay().fall(), ohmsOrAbsent(d.delay().riseOhms()),
+                        ohmsOrAbsent(d.delay().fallOhms()), d.delay().basis(), d.delay().riseGiven(),
+                        d.delay().fallGiven(), d.delay().note().isEmpty() ? Absent.NONE : d.delay().note());
             }
             rep.table(st);
         }
         return rep;
+    }
+
+    private static Object ohmsOrAbsent(double v) {
+        return Double.isFinite(v) ? v : Absent.NONE;
+    }
+
+    private static String verdict(PhaseTiming p) {
+        return !p.passes() ? "FAILS" : PathAdvice.tight(p) ? "tight" : "ok";
+    }
+
+    private static String percent(double f) {
+        return "+/-" + Math.round(f * 100) + " %";
     }
 }

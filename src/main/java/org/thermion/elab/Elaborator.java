@@ -327,8 +327,15 @@ public final class Elaborator {
             return null;
         }
         sourceMap = new SourceMap(gateSpans, latchSpans, packer.ruleSpans(), marginRules);
+        String[] places = new String[nb.names.size()];
+        for (int n = 0; n < places.length; n++) {
+            org.thermion.lang.Span s = nb.driverSpan.get(n);
+            if (s != null && s.isKnown()) {
+                places[n] = s.file().getFileName() + ":" + s.line();
+            }
+        }
         Netlist netlist = new Netlist(nb.names.toArray(new String[0]), nb.netModule.toArray(), List.copyOf(gates),
-                List.copyOf(latches));
+                List.copyOf(latches), places);
         return new Machine(mb.name, new Clock(mb.phases, mb.period), List.copyOf(parts.tubes), List.copyOf(parts.stages),
                 List.copyOf(parts.rails), List.copyOf(packer.rules), List.copyOf(softStarts), List.copyOf(modules), netlist,
                 rom, pc, List.copyOf(inputs), List.copyOf(outputs), packer.levelized(order),

@@ -19,11 +19,16 @@ public final class Capacitance {
      * A stage without a declared gain counts |A| = 1.
      */
     public static double input(StageType st, TubeType tube) {
+        return input(st, tube, st.gain());
+    }
+
+    /** As {@link #input(StageType, TubeType)} with the stage's gain given (NaN: counted 1). */
+    public static double input(StageType st, TubeType tube, double stageGain) {
         if (tube == null) {
             return 0;
         }
         if (tube.kind() == TubeKind.TRIODE) {
-            double gain = Double.isNaN(st.gain()) ? 1 : Math.abs(st.gain());
+            double gain = Double.isNaN(stageGain) ? 1 : Math.abs(stageGain);
             return orZero(tube.cgk()) + orZero(tube.cgp()) * (1 + gain);
         }
         return orZero(tube.cin());

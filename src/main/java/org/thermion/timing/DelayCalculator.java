@@ -1,5 +1,10 @@
 package org.thermion.timing;
 
+import org.thermion.circuit.Corner;
+import org.thermion.circuit.Load;
+import org.thermion.circuit.MachineCircuits;
+import org.thermion.circuit.StageCircuit;
+import org.thermion.circuit.Tolerances;
 import org.thermion.model.Gate;
 import org.thermion.model.Latch;
 import org.thermion.model.Machine;
@@ -13,11 +18,16 @@ import java.util.List;
 
 /**
  * Works out every stage instance's rise and fall delay. A delay the stage declares is
- * used as given; otherwise the rise is ln 9 R_load C and the fall ln 9 r_on C (swapped for
- * a load returned to a negative rail, which pulls the output down), where C is
- * the capacitance the output drives: the stage's own output capacitance, the input
- * capacitance of every stage input on the net (through free cells, which are wires or a
- * flip-flop's other plate), and the stage's wiring capacitance per connection.
+ * used as given. A stage with a circuit gets ln 9 R C with R its effective output resistance for
+ * that edge computed from its operating points under its real loads ({@link StageDrive}); a stage
+ * without one gets R_load for the rise and r_on for the fall (swapped for a load returned to a
+ * negative rail, which pulls the output down). C is the capacitance the output drives: the
+ * stage's own output capacitance, the input capacitance of every stage input on the net (through
+ * free cells, which are wires or a flip-flop's other plate; a triode's Miller term with its
+ * computed gain where it has a circuit), and the stage's wiring capacitance per connection.
+ * At the slow corner each edge's parameters sit at the tolerance ends that slow it; declared
+ * resistances are scaled to the same ends (load up by the resistor tolerance, r_on by 1 / end of
+ * life), declared delays stay as given.
  */
 public final class DelayCalculator {
     private final Machine machine;
@@ -25,8 +35,29 @@ public final class DelayCalculator {
     /** For each net, the stage-type index of every stage input pin on it (-1: a pin without a stage). */
     private final List<List<Integer>> pins;
 
+    private final MachineCircuits circuits;
+    private final StageDrive drive;
+    private final Tolerances slow;
+
+    /** Nominal delays, from the machine's own circuits where its stages have them. */
     public DelayCalculator(Machine machine) {
+        this(machine, MachineCircuits.of(machine), null);
+    }
+
+    /**
+     * Delays from {@code circuits}; {@code slow} null for nominal values, else the tolerances
+     * whose slow ends are taken.
+     */
+    public DelayCalculator(Machine machine, MachineCircuits circuits, Tolerances slow) {
+        this(machine, circuits, new StageDrive(circuits.solver(), highRail(machine)), slow);
+    }
+
+    /** As above, sharing {@code drive}'s cached figures. */
+    public DelayCalculator(Machine machine, MachineCircuits circuits, StageDrive drive, Tolerances slow) {
         this.machine = machine;
+        this.circuits = circuits;
+        this.drive = drive;
+        this.slow = slow;
         this.netlist = machine.netlist();
         int n = netlist.netCount();
         List<List<Integer>> direct = new ArrayList<>(n);
@@ -84,9 +115,56 @@ public final class DelayCalculator {
         return all;
     }
 
+    /** The level a logic 1 input is held at when figures are computed: the machine's highest rail. */
+    public static double highRail(Machine machine) {
+        double h = 0;
+        for (org.thermion.model.Rail r : machine.rails()) {
+            h = Math.max(h, r.volts());
+        }
+        return h;
+    }
+
+    /** The circuits the figures come from. */
+    public MachineCircuits circuits() {
+        return circuits;
+    }
+
+    /** The tolerances of the slow corner, or null for nominal values. */
+    public Tolerances slowTolerances() {
+        return slow;
+    }
+
+    /** The figures' source, shared by calculators of one machine. */
+    public StageDrive drive() {
+        return drive;
+    }
+
+    /** The circuit of a stage type, or null. */
+    public StageCircuit circuit(StageType st) {
+        return circuits.circuit(st).orElse(null);
+    }
+
+    /** The Miller gain a triode receiver's input is counted with: computed where it has a circuit, else declared. */
+    public double gain(StageType st) {
+        StageCircuit c = circuit(st);
+        double g = c == null ? Double.NaN : drive.millerGain(c);
+        return Double.isNaN(g) ? st.gain() : g;
+    }
+
+    /** True when {@link #gain} is computed. */
+    public boolean gainComputed(StageType st) {
+        StageCircuit c = circuit(st);
+        return c != null && !Double.isNaN(drive.millerGain(c));
+    }
+
     /** Stage-type indices of the stage inputs a net drives (-1 for off-board pins such as the PC). */
     public List<Integer> pinsOn(int net) {
         return pins.get(net);
+    }
+
+    /** The stage's own output capacitance with {@code sections} sections. */
+    public double ownFarads(StageType st, int sections) {
+        return Capacitance.output(tube(st), sections);
     }
 
     /** The capacitance the stage {@code st} sees when its output is {@code net} and uses {@code sections}. */
@@ -95,7 +173,7 @@ public final class DelayCalculator {
         for (int s : pins.get(net)) {
             if (s >= 0) {
                 StageType driven = machine.stages().get(s);
-                c += Capacitance.input(driven, tube(driven));
+                c += Capacitance.input(driven, tube(driven), gain(driven));
             }
         }
         c += Capacitance.orZero(st.wiringFarads()) * pins.get(net).size();
@@ -140,23 +218,73 @@ public final class DelayCalculator {
 
     private StageDelay delay(StageType st, int sections, int net) {
         double c = drivenFarads(st, sections, net);
-        StringBuilder note = new StringBuilder();
+        String problem = "";
         boolean riseGiven = !Double.isNaN(st.rise());
         boolean fallGiven = !Double.isNaN(st.fall());
+        StageCircuit circuit = circuit(st);
+        if (circuit != null) {
+            List<Load> loads = loadsOn(net);
+            Corner riseAt = slow == null ? Corner.NOMINAL : drive.slowCorner(circuit, loads, slow, true);
+            Corner fallAt = slow == null ? Corner.NOMINAL : drive.slowCorner(circuit, loads, slow, false);
+            StageDrive.Edges nominal = drive.edges(circuit, loads, Corner.NOMINAL);
+            double rOhms = drive.edges(circuit, loads, riseAt).riseOhms();
+            double fOhms = drive.edges(circuit, loads, fallAt).fallOhms();
+            problem = nominal.problem();
+            StringBuilder slowNote = new StringBuilder();
+            if (Double.isNaN(rOhms) && nominal.solved()) {
+                rOhms = nominal.riseOhms();
+                slowNote.append("no rising edge at its slow corner (").append(riseAt.describe()).append("): nominal R");
+            }
+            if (Double.isNaN(fOhms) && nominal.solved()) {
+                fOhms = nominal.fallOhms();
+                slowNote.append(slowNote.length() > 0 ? "; " : "").append("no falling edge at its slow corner (")
+                        .append(fallAt.describe()).append("): nominal R");
+            }
+            if (nominal.problem().isEmpty() && !Double.isNaN(rOhms) && !Double.isNaN(fOhms)) {
+                String corner = slow == null ? "nominal"
+                        : "rise: " + riseAt.describe() + "; fall: " + fallAt.describe();
+                return new StageDelay(riseGiven ? st.rise() : RcDelay.tenToNinety(rOhms, c),
+                        fallGiven ? st.fall() : RcDelay.tenToNinety(fOhms, c), c, pins.get(net).size(), riseGiven,
+                        fallGiven, slowNote.toString(), rOhms, fOhms, "computed", corner);
+            }
+        }
+        StringBuilder note = new StringBuilder();
+        if (circuit != null) {
+            note.append("circuit: ").append(problem.isEmpty() ? "no edge found" : problem).append("; declared values used");
+        }
         // A load to a negative rail pulls the output down (diode OR, cathode follower): the
         // conducting tube then pulls it up, and the load sets the fall instead of the rise.
         boolean pullDown = pullsDown(st);
+        double loadOhms = st.loadOhms() * (slow == null ? 1 : 1 + slow.resistor());
+        double tubeOhms = st.outputOhmsLow() / (slow == null ? 1 : slow.endOfLife());
         double viaLoad = Double.NaN;
         double viaTube = Double.NaN;
         if (!(pullDown ? fallGiven : riseGiven)) {
-            viaLoad = computed(st.loadOhms(), c, "no load resistor", note);
+            viaLoad = computed(loadOhms, c, "no load resistor", note);
         }
         if (!(pullDown ? riseGiven : fallGiven)) {
-            viaTube = computed(st.outputOhmsLow(), c, "no conducting resistance (ron)", note);
+            viaTube = computed(tubeOhms, c, "no conducting resistance (ron)", note);
         }
         double rise = riseGiven ? st.rise() : pullDown ? viaTube : viaLoad;
         double fall = fallGiven ? st.fall() : pullDown ? viaLoad : viaTube;
-        return new StageDelay(rise, fall, c, pins.get(net).size(), riseGiven, fallGiven, note.toString());
+        String corner = slow == null ? "nominal" : String.format(java.util.Locale.ROOT,
+                "load %+.0f %%, ron / %.2f", slow.resistor() * 100, slow.endOfLife());
+        return new StageDelay(rise, fall, c, pins.get(net).size(), riseGiven, fallGiven, note.toString(),
+                pullDown ? tubeOhms : loadOhms, pullDown ? loadOhms : tubeOhms, "declared", corner);
+    }
+
+    /** The inputs on a net that have circuits, as loads on its driver. */
+    public List<Load> loadsOn(int net) {
+        List<Load> loads = new ArrayList<>();
+        for (int s : pins.get(net)) {
+            if (s >= 0) {
+                StageCircuit rc = circuit(machine.stages().get(s));
+                if (rc != null) {
+                    loads.add(rc.inputLoad());
+                }
+            }
+        }
+        return loads;
     }
 
     /** True when the stage's load resistor returns to a negative rail. */

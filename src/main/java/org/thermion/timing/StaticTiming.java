@@ -49,10 +49,14 @@ public final class StaticTiming {
 
     /** {@code romAccessSeconds}: time from the PC loading until the off-board ROM's data are valid. */
     public StaticTiming(Machine machine, double romAccessSeconds) {
+        this(machine, romAccessSeconds, new DelayCalculator(machine));
+    }
+
+    /** With the stage delays of {@code calc} (nominal or at the slow corner). */
+    public StaticTiming(Machine machine, double romAccessSeconds, DelayCalculator calc) {
         this.machine = machine;
         this.romAccess = romAccessSeconds;
         this.netlist = machine.netlist();
-        DelayCalculator calc = new DelayCalculator(machine);
         gateDelay = calc.gates();
         latchDelay = calc.latches();
         int n = netlist.netCount();

@@ -1,0 +1,330 @@
+package org.thermion.timing;
+
+import org.thermion.circuit.Corner;
+import org.thermion.circuit.DcResult;
+import org.thermion.circuit.FlipFlop;
+import org.thermion.circuit.GridNetwork;
+import org.thermion.circuit.Load;
+import org.thermion.circuit.Parameter;
+import org.thermion.circuit.StageCircuit;
+import org.thermion.circuit.StageSolver;
+import org.thermion.circuit.Tolerances;
+import org.thermion.circuit.TubeStage;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * A stage's switching figures from its operating points. The output node's capacitance C
+ * charges at the current I(V) the stage (inputs already in their new state) and its loads feed
+ * into the node when it is held at V, so a 10-90 % edge takes t = C ∫ dV / I(V) over that part of
+ * the swing (Simpson's rule, 8 intervals). For a resistor to a final level Vf, I = (Vf - V)/R and
+ * t = ln 9 RC: the effective output resistance reported is R = t / (ln 9 C). Where I(V) reverses
+ * inside the swing (a regenerative stage such as a flip-flop, switched by its trigger), the
+ * resistance is the small-signal one at the new level instead. Inputs sit at 0 V for 0 and at the
+ * highest rail for 1; every input state is tried (the extreme ones beyond four inputs) and the
+ * slowest kept. The Miller gain is |dVplate/dVgrid| at the middle of the transfer curve.
+ * Results are cached per stage, loads and corner. Not thread-safe.
+ */
+public final class StageDrive {
+    private static final int STEPS = 8;
+    private static final double PROBE_VOLTS = 0.01;
+
+    private final StageSolver solver;
+    private final double high;
+    private final Map<Key, Edges> edges = new HashMap<>();
+    private final Map<StageCircuit, Double> gains = new HashMap<>();
+    private final Map<Key, double[]> slowestRise = new HashMap<>();
+    private final Map<Key, double[]> slowestFall = new HashMap<>();
+
+    private record Key(StageCircuit stage, List<Load> loads, Corner corner) {
+    }
+
+    /**
+     * Effective output resistances in ohms for the rising and the falling edge; NaN with
+     * {@code problem} saying why when the circuit gives none.
+     */
+    public record Edges(double riseOhms, double fallOhms, String problem) {
+        public boolean solved() {
+            return !Double.isNaN(riseOhms) && !Double.isNaN(fallOhms);
+        }
+    }
+
+    /** The least difference between a stage's 0 and 1 output levels that counts as a logic swing. */
+    public static final double MIN_SWING_VOLTS = 1.0;
+
+    /** {@code highVolts}: the level a logic 1 input is held at. */
+    public StageDrive(StageSolver solver, double highVolts) {
+        this.solver = solver;
+        this.high = highVolts;
+    }
+
+    public StageSolver solver() {
+        return solver;
+    }
+
+    /** The effective output resistances of {@code stage} with {@code loads} at {@code corner}. */
+    public Edges edges(StageCircuit stage, List<Load> loads, Corner corner) {
+        Key k = new Key(stage, List.copyOf(loads), corner);
+        Edges e = edges.get(k);
+        if (e == null) {
+            e = new Edges(ohms(stage, loads, corner, true), ohms(stage, loads, corner, false), problem(stage, loads,
+                    corner));
+            edges.put(k, e);
+        }
+        return e;
+    }
+
+    /**
+     * The corner that makes one edge slowest: each toleranced parameter (rails, resistors, emission)
+     * at the end of its tolerance that raises that edge's resistance (or stops the stage switching),
+     * judged one parameter at a time.
+     */
+    public Corner slowCorner(StageCircuit stage, List<Load> loads, Tolerances tol, boolean rise) {
+        edges(stage, loads, Corner.NOMINAL);
+        Corner worst = Corner.NOMINAL;
+        for (Parameter p : solver.parameters(StageSolver.DRIVER, stage, loads)) {
+            double[] ends = ends(p, tol);
+            double lo = pick(edges(stage, loads, Corner.NOMINAL.with(p.label(), ends[0])), rise);
+            double hi = pick(edges(stage, loads, Corner.NOMINAL.with(p.label(), ends[1])), rise);
+            // An end where the stage gives no edge at all is the worst of the two.
+            double f = Double.isNaN(lo) ? ends[0] : Double.isNaN(hi) ? ends[1] : hi >= lo ? ends[1] : ends[0];
+            if (f != 1) {
+                worst = worst.with(p.label(), f);
+            }
+        }
+        return worst;
+    }
+
+    /** The two ends of a parameter's tolerance as {@link Tolerances} states them: rails and resistors ±, emission down. */
+    static double[] ends(Parameter p, Tolerances tol) {
+        switch (p.kind()) {
+            case RAIL:
+                return new double[] {1 - tol.rail(), 1 + tol.rail()};
+            case RESISTOR:
+                return new double[] {1 - tol.resistor(), 1 + tol.resistor()};
+            default:
+                return new double[] {tol.endOfLife(), 1};
+        }
+    }
+
+    private static double pick(Edges e, boolean rise) {
+        return rise ? e.riseOhms() : e.fallOhms();
+    }
+
+    /** Why a stage gives no edge here: no DC solution, or no logic swing between its states. */
+    private String problem(StageCircuit stage, List<Load> loads, Corner corner) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (boolean stored : stored(stage)) {
+            for (boolean[] in : states(stage.inputs())) {
+                DcResult r = solver.solve(stage, volts(in), stored, loads, corner);
+                if (!r.solved()) {
+                    return "no DC solution: " + ((org.thermion.circuit.NoDcSolution) r).reason();
+                }
+                double v = r.point().outputVolts();
+                if (stage.logic(in, stored)) {
+                    hi = Math.min(hi == Double.NEGATIVE_INFINITY ? v : hi, v);
+                } else {
+                    lo = Math.max(lo == Double.POSITIVE_INFINITY ? v : lo, v);
+                }
+            }
+        }
+        if (!(hi - lo >= MIN_SWING_VOLTS)) {
+            return String.format(java.util.Locale.ROOT, "its 1 level (%.1f V) is not %.0f V above its 0 level (%.1f V) "
+                    + "at these rails and loads", hi, MIN_SWING_VOLTS, lo);
+        }
+        return "";
+    }
+
+    private double ohms(StageCircuit stage, List<Load> loads, Corner corner, boolean rise) {
+        List<double[]> lows = new ArrayList<>();
+        List<double[]> highs = new ArrayList<>();
+        for (boolean stored : stored(stage)) {
+            for (boolean[] in : states(stage.inputs())) {
+                DcResult r = solver.solve(stage, volts(in), stored, loads, corner);
+                if (!r.solved()) {
+                    return Double.NaN;
+                }
+                double[] entry = {r.point().outputVolts(), stored ? 1 : 0, encode(in)};
+                (stage.logic(in, stored) ? highs : lows).add(entry);
+            }
+        }
+        if (lows.isEmpty() || highs.isEmpty()) {
+            return Double.NaN;
+        }
+        // The edge starts from the far level (lowest low for a rise, highest high for a fall).
+        double from = rise ? Double.POSITIVE_INFINITY : Double.NEGATIVE_INFINITY;
+        for (double[] e : rise ? lows : highs) {
+            from = rise ? Math.min(from, e[0]) : Math.max(from, e[0]);
+        }
+        // The slowest final state is found at nominal values and kept for the corners.
+        Key nominal = new Key(stage, List.copyOf(loads), Corner.NOMINAL);
+        Map<Key, double[]> slowest = rise ? slowestRise : slowestFall;
+        double[] known = slowest.get(nominal);
+        if (known != null && !corner.equals(Corner.NOMINAL)) {
+            for (double[] fin : rise ? highs : lows) {
+                if (fin[1] == known[1] && fin[2] == known[2]) {
+                    return transition(stage, loads, corner, fin, from);
+                }
+            }
+        }
+        double worst = Double.NaN;
+        double[] worstState = null;
+        for (double[] fin : rise ? highs : lows) {
+            double r = transition(stage, loads, corner, fin, from);
+            if (!(r <= worst)) {
+                worst = r;
+                worstState = fin;
+            }
+        }
+        if (corner.equals(Corner.NOMINAL) && worstState != null) {
+            slowest.put(nominal, worstState);
+        }
+        return worst;
+    }
+
+    /** Effective resistance of the edge from {@code from} volts to the level of state {@code fin}. */
+    private double transition(StageCircuit stage, List<Load> loads, Corner corner, double[] fin, double from) {
+        double to = fin[0];
+        double[] in = volts(decode(fin[2], stage.inputs()));
+        boolean stored = fin[1] != 0;
+        double swing = to - from;
+        if (Math.abs(swing) < MIN_SWING_VOLTS) {
+            return Double.NaN;
+        }
+        double a = from + 0.1 * swing;
+        double h = 0.8 * swing / STEPS;
+        double sum = 0;
+        boolean regenerative = false;
+        for (int i = 0; i <= STEPS; i++) {
+            double amps = solver.heldOutputAmps(stage, in, stored, loads, corner, a + i * h);
+            if (!(amps * Math.signum(swing) > 0)) {
+                regenerative = true;
+                break;
+            }
+            double w = i == 0 || i == STEPS ? 1 : i % 2 == 1 ? 4 : 2;
+            sum += w / amps;
+        }
+        if (!regenerative) {
+            return sum * h / 3 / Math.log(9);
+        }
+        // Small-signal resistance at the new level: the current a small step back from it draws.
+        double step = PROBE_VOLTS * Math.signum(swing);
+        double amps = solver.heldOutputAmps(stage, in, stored, loads, corner, to - step);
+        return amps * Math.signum(swing) > 0 ? Math.abs(step / amps) : Double.NaN;
+    }
+
+    /**
+     * |dVplate/dVgrid| of a tube stage at the middle of its transfer curve (the first input swept,
+     * the others at the level that leaves it in control); NaN for other stages.
+     */
+    public double millerGain(StageCircuit stage) {
+        Double g = gains.get(stage);
+        if (g == null) {
+            g = gain(stage);
+            gains.put(stage, g);
+        }
+        return g;
+    }
+
+    private double gain(StageCircuit stage) {
+        if (!(stage instanceof TubeStage t) || t.output() != TubeStage.Output.PLATE) {
+            return Double.NaN;
+        }
+        double rest = t.arrangement() == TubeStage.Arrangement.SERIES ? high : 0;
+        double vLow = out(t, 0, rest);
+        double vHigh = out(t, high, rest);
+        if (Double.isNaN(vLow) || Double.isNaN(vHigh)) {
+            return Double.NaN;
+        }
+        double mid = (vLow + vHigh) / 2;
+        double a = 0;
+        double b = high;
+        for (int i = 0; i < 50; i++) {
+            double m = (a + b) / 2;
+            double v = out(t, m, rest);
+            if (Double.isNaN(v)) {
+                return Double.NaN;
+            }
+            if ((v > mid) == (vLow > mid)) {
+                a = m;
+            } else {
+                b = m;
+            }
+        }
+        double at = (a + b) / 2;
+        double slope = (out(t, at + PROBE_VOLTS, rest) - out(t, at - PROBE_VOLTS, rest)) / (2 * PROBE_VOLTS);
+        return Math.abs(slope) / gridRatio(t.grid());
+    }
+
+    /** dVgrid/dVin of a grid network with no grid current: the divider's ratio. */
+    static double gridRatio(GridNetwork g) {
+        if (g.seriesOhms() == 0 || !Double.isFinite(g.toBiasOhms())) {
+            return 1;
+        }
+        return g.toBiasOhms() / (g.seriesOhms() + g.toBiasOhms());
+    }
+
+    private double out(TubeStage t, double first, double rest) {
+        double[] in = new double[t.inputs()];
+        java.util.Arrays.fill(in, rest);
+        in[0] = first;
+        DcResult r = solver.solve(t, in, false, List.of(), Corner.NOMINAL);
+        return r.solved() ? r.point().outputVolts() : Double.NaN;
+    }
+
+    private double[] volts(boolean[] in) {
+        double[] v = new double[in.length];
+        for (int i = 0; i < in.length; i++) {
+            v[i] = in[i] ? high : 0;
+        }
+        return v;
+    }
+
+    private static boolean[] stored(StageCircuit s) {
+        return s instanceof FlipFlop ? new boolean[] {false, true} : new boolean[] {false};
+    }
+
+    private static double encode(boolean[] in) {
+        long m = 0;
+        for (int i = 0; i < in.length; i++) {
+            m |= in[i] ? 1L << i : 0;
+        }
+        return m;
+    }
+
+    private static boolean[] decode(double code, int n) {
+        long m = (long) code;
+        boolean[] in = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            in[i] = (m >> i & 1) != 0;
+        }
+        return in;
+    }
+
+    /** Input states tried: all for up to four inputs; none, one, all but one and all beyond (inputs are alike). */
+    static List<boolean[]> states(int n) {
+        List<boolean[]> out = new ArrayList<>();
+        if (n <= 4) {
+            for (int mask = 0; mask < (1 << n); mask++) {
+                out.add(decode(mask, n));
+            }
+            return out;
+        }
+        boolean[] one = new boolean[n];
+        one[0] = true;
+        boolean[] allButOne = new boolean[n];
+        java.util.Arrays.fill(allButOne, true);
+        allButOne[0] = false;
+        boolean[] all = new boolean[n];
+        java.util.Arrays.fill(all, true);
+        out.add(new boolean[n]);
+        out.add(one);
+        out.add(allButOne);
+        out.add(all);
+        return out;
+    }
+}
