@@ -54,13 +54,9 @@ final class DiagnoseObservations {
     byte[][] parse(Path file, String text, SourceSet sources) {
         sources.put(file, text);
         int before = diags.errorCount();
-        List<List<Field>> records = new CsvScanner(file, text, diags).records();
-        if (diags.errorCount() > before) {
-            return null;
-        }
-        if (records.isEmpty()) {
-            diags.error(new Span(file, 1, 1, 1, 2), "empty observation file: expected a header line",
-                    "the first line is 'step' followed by lamp names, e.g. step," + exampleLamps());
+        List<List<Field>> records = new CsvScanner(file, text, diags).table("observation file",
+                "the first line is 'step' followed by lamp names, e.g. step," + exampleLamps());
+        if (records == null) {
             return null;
         }
         List<Field> header = records.get(0);

@@ -34,13 +34,9 @@ record PowerUpTrace(Path file, String column, double[] t, double[] amps) {
         }
         sources.put(file, text);
         int before = diags.errorCount();
-        List<List<Field>> records = new CsvScanner(file, text, diags).records();
-        if (diags.errorCount() > before) {
-            return null;
-        }
-        if (records.isEmpty()) {
-            diags.error(new Span(file, 1, 1, 1, 2), "empty trace: expected a header line",
-                    "the first line names the columns, e.g. time_seconds,current_amps");
+        List<List<Field>> records = new CsvScanner(file, text, diags).table("trace",
+                "the first line names the columns, e.g. time_seconds,current_amps");
+        if (records == null) {
             return null;
         }
         List<Field> head = records.get(0);

@@ -321,35 +321,6 @@ public final class FaultCircuit {
         return gatePins[gate][pin];
     }
 
-    /** The slot latch {@code latch} reads as data. */
-    public int latchDataSlot(int latch) {
-        return slotOfLatch(latch, latchData);
-    }
-
-    /** The slot latch {@code latch} reads as enable, or -1 when it loads every time. */
-    public int latchEnableSlot(int latch) {
-        return slotOfLatch(latch, latchEnable);
-    }
-
-    private int slotOfLatch(int latch, int[][] table) {
-        int p = machine.netlist().latches().get(latch).phase() - 1;
-        int[] idx = latchIndex[p];
-        for (int k = 0; k < idx.length; k++) {
-            if (idx[k] == latch) {
-                return table[p][k];
-            }
-        }
-        throw new IllegalArgumentException("no latch " + latch);
-    }
-
-    public int pcJumpSlot() {
-        return pcJump;
-    }
-
-    public int pcTargetSlot(int bit) {
-        return pcTarget[bit];
-    }
-
     /** Number of operations in the flat program (gates and branch copies). */
     public int operations() {
         int n = 0;

@@ -56,12 +56,6 @@ final class LaneMachine {
         forceSources();
     }
 
-    /** Removes every force. */
-    void clearForces() {
-        Arrays.fill(f0, 0L);
-        Arrays.fill(f1, 0L);
-    }
-
     /** Forces {@code slot} to {@code value} on the lanes in {@code lanes}. */
     void force(int slot, boolean value, long lanes) {
         if (value) {
@@ -333,15 +327,4 @@ final class LaneMachine {
         nextPhase = o.nextPhase;
     }
 
-    /** Copies lane {@code from} of {@code o} into every lane of this machine (state, inputs, values). */
-    void broadcast(LaneMachine o, int from) {
-        for (int s = 0; s < v.length; s++) {
-            v[s] = -(o.v[s] >>> from & 1L);
-            x[s] = -(o.x[s] >>> from & 1L);
-        }
-        int p = o.pc(from);
-        Arrays.fill(pc, Math.max(p, 0));
-        pcX = p < 0 ? -1L : 0L;
-        nextPhase = o.nextPhase;
-    }
 }

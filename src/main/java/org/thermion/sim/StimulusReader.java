@@ -46,13 +46,9 @@ public final class StimulusReader {
     public Stimulus parse(Path file, String text) {
         sources.put(file, text);
         int before = diags.errorCount();
-        List<List<Field>> records = new CsvScanner(file, text, diags).records();
-        if (diags.errorCount() > before) {
-            return null;
-        }
-        if (records.isEmpty()) {
-            diags.error(new Span(file, 1, 1, 1, 2), "empty stimulus: expected a header line",
-                    "the first line is 'cycle' followed by input names, e.g. cycle," + exampleInputs());
+        List<List<Field>> records = new CsvScanner(file, text, diags).table("stimulus",
+                "the first line is 'cycle' followed by input names, e.g. cycle," + exampleInputs());
+        if (records == null) {
             return null;
         }
         List<Field> header = records.get(0);
@@ -264,6 +260,23 @@ public final class StimulusReader {
             this.file = file;
             this.text = text.startsWith("\uFEFF") ? text.substring(1) : text;
             this.diags = diags;
+        }
+
+        /**
+         * The records, the first being the header line; null once a malformed record or an empty
+         * file ("empty WHAT: expected a header line", with {@code hint}) has been reported.
+         */
+        public List<List<Field>> table(String what, String hint) {
+            int before = diags.errorCount();
+            List<List<Field>> records = records();
+            if (diags.errorCount() > before) {
+                return null;
+            }
+            if (records.isEmpty()) {
+                diags.error(new Span(file, 1, 1, 1, 2), "empty " + what + ": expected a header line", hint);
+                return null;
+            }
+            return records;
         }
 
         /** Every record of the text (blank lines skipped); stops at the first malformed one. */

@@ -172,10 +172,6 @@ public final class VcdWriter {
         return sb.toString();
     }
 
-    public VcdTimebase timebase() {
-        return time;
-    }
-
     /** Writes the header and the initial values ({@code $dumpvars} at time 0) from the simulator's present state. */
     public void begin(Simulator sim, String date, String version) {
         StringBuilder sb = new StringBuilder();

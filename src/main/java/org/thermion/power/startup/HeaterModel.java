@@ -182,13 +182,6 @@ public final class HeaterModel {
         return cathodeLossK * (pow4(cathode) - pow4(ambientKelvin));
     }
 
-    /** The cathode temperature in the steady state with the wire at {@code wire} kelvin. */
-    public double steadyCathode(double wire) {
-        // Heat in from the wire equals heat radiated: g (Th^4 - Tk^4) = k_k (Tk^4 - Ta^4).
-        double t4 = (couplingK * pow4(wire) + cathodeLossK * pow4(ambientKelvin)) / (couplingK + cathodeLossK);
-        return Math.sqrt(Math.sqrt(t4));
-    }
-
     /** Heater wire temperature as a fraction of its operating temperature. */
     public double fraction(double kelvin) {
         return kelvin / hotKelvin;

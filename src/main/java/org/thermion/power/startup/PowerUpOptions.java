@@ -62,10 +62,6 @@ public record PowerUpOptions(double seconds, Map<String, Double> resistorOhms, D
         return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, assumptions, hold, resistorRating);
     }
 
-    public PowerUpOptions withResistorRating(ResistorRating r) {
-        return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, assumptions, holdBypass, r);
-    }
-
     public PowerUpOptions withAssumptions(ThermalAssumptions a) {
         return new PowerUpOptions(seconds, resistorOhms, drawMode, sampleSeconds, a, holdBypass, resistorRating);
     }
