@@ -41,7 +41,7 @@ final class SheetsParts extends SheetsDocument {
             err.println("error: --spares takes 0 to 1000 (percent) and --derating a fraction above 0 up to 1");
             return null;
         }
-        BuildDocuments docs = BuildDocuments.of(m);
+        BuildDocuments docs = documents(m);
         PartsList list = PartsList.of(docs.wiring(), 0, spares, derating);
         int budget = new TubeCount(m).total();
         failed = list.tubesUsed() != budget || list.tubesUsed() != m.envelopes().size();

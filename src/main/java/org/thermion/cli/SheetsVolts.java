@@ -66,7 +66,7 @@ final class SheetsVolts extends SheetsDocument {
             }
             states.addAll(ChartStates.afterSteps(m, rom, steps));
         }
-        BuildDocuments docs = BuildDocuments.of(m);
+        BuildDocuments docs = documents(m);
         PinVoltages volts = new PinVoltages(docs);
         List<PinVoltages.Chart> charts = new ArrayList<>();
         for (PinVoltages.State s : states) {
