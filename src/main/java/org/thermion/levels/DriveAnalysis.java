@@ -56,8 +56,12 @@ final class DriveAnalysis {
         this.tolerances = tolerances;
     }
 
-    /** Every gate whose stage drives a lamp or a coil, its input at the levels of its input net; then the soft starts. */
-    List<LoadDrive> drives(NetFanout fanout, double[] low, double[] high) {
+    /**
+     * Every gate whose stage drives a lamp or a coil, its input at the levels of its input net
+     * (nominal; at the worst corner also the levels that net has at its own worst corners); then
+     * the soft starts.
+     */
+    List<LoadDrive> drives(NetFanout fanout, double[] low, double[] high, double[] worstLow, double[] worstHigh) {
         List<LoadDrive> out = new ArrayList<>();
         for (Gate g : machine.netlist().gates()) {
             if (g.stage() < 0) {
@@ -79,14 +83,9 @@ final class DriveAnalysis {
             double rated = load instanceof Lamp lamp ? lamp.ratedAmps()
                     : load instanceof RelayCoil coil ? coil.pickupAmps() : Double.NaN;
             double dropout = load instanceof RelayCoil coil ? coil.dropoutAmps() : Double.NaN;
-            double lo = low[g.input(0)];
-            double hi = high[g.input(0)];
-            for (int p = 1; p < g.arity(); p++) {
-                lo = Math.max(lo, low[g.input(p)]);
-                hi = Math.min(hi, high[g.input(p)]);
-            }
-            InputLevels levels = LevelAnalysis.outward(lo, hi);
-            Figures f = cache.computeIfAbsent(List.of(c.get(), levels), k -> solve(c.get(), levels.low(), levels.high()));
+            InputLevels levels = levels(g, low, high);
+            InputLevels worst = levels(g, worstLow, worstHigh);
+            Figures f = cache.computeIfAbsent(List.of(c.get(), levels, worst), k -> solve(c.get(), levels, worst));
             boolean follower = c.get() instanceof TubeStage ts && ts.output() == TubeStage.Output.CATHODE;
             out.add(new LoadDrive(new StageUse(false, g.id()), -1, fanout.nodeOf(g.output()).name(), st.name(), kind,
                     f.on(), f.onWorst(), f.onCorner(), f.off(), f.offWorst(), f.offCorner(), rated, dropout,
@@ -150,22 +149,34 @@ final class DriveAnalysis {
         return load instanceof org.thermion.circuit.LoadResistor r ? r.ohms() : Double.NaN;
     }
 
-    private Figures solve(StageCircuit stage, double lo, double hi) {
-        StageSolver s = circuits.solver();
-        // a higher grid means more current in every arrangement (a follower's too; a thyratron fires and holds)
-        double onVolts = hi;
-        double offVolts = lo;
-        ToDoubleFunction<Corner> onAmps = c -> amps(s, stage, onVolts, false, c);
-        ToDoubleFunction<Corner> offAmps = c -> -amps(s, stage, offVolts, false, c);
-        List<Parameter> params = parameters(s, stage);
-        Corner onCorner = WorstCase.worstCorner(params, tolerances, onAmps);
-        Corner offCorner = WorstCase.worstCorner(params, tolerances, offAmps);
-        NoDcSolution unsolved = unsolved(s, stage, hi, false);
-        if (unsolved == null) {
-            unsolved = unsolved(s, stage, lo, false);
+    /** The worst of the input nets' levels, rounded outward. */
+    private static InputLevels levels(Gate g, double[] low, double[] high) {
+        double lo = low[g.input(0)];
+        double hi = high[g.input(0)];
+        for (int p = 1; p < g.arity(); p++) {
+            lo = Math.max(lo, low[g.input(p)]);
+            hi = Math.min(hi, high[g.input(p)]);
         }
-        return new Figures(onAmps.applyAsDouble(Corner.NOMINAL), onAmps.applyAsDouble(onCorner), onCorner,
-                -offAmps.applyAsDouble(Corner.NOMINAL), -offAmps.applyAsDouble(offCorner), offCorner, unsolved);
+        return LevelAnalysis.outward(lo, hi);
+    }
+
+    private Figures solve(StageCircuit stage, InputLevels levels, InputLevels worst) {
+        StageSolver s = circuits.solver();
+        // a higher grid means more current in every arrangement (a follower's too; a thyratron fires and holds);
+        // at the worst corner the input is also at its driving net's worst level
+        ToDoubleFunction<Corner> onAmps = c -> amps(s, stage, levels.high(), false, c);
+        ToDoubleFunction<Corner> offAmps = c -> -amps(s, stage, levels.low(), false, c);
+        ToDoubleFunction<Corner> onWorst = c -> Math.min(onAmps.applyAsDouble(c), amps(s, stage, worst.high(), false, c));
+        ToDoubleFunction<Corner> offWorst = c -> Math.min(offAmps.applyAsDouble(c), -amps(s, stage, worst.low(), false, c));
+        List<Parameter> params = parameters(s, stage);
+        Corner onCorner = WorstCase.worstCorner(params, tolerances, onWorst);
+        Corner offCorner = WorstCase.worstCorner(params, tolerances, offWorst);
+        NoDcSolution unsolved = unsolved(s, stage, levels.high(), false);
+        if (unsolved == null) {
+            unsolved = unsolved(s, stage, levels.low(), false);
+        }
+        return new Figures(onAmps.applyAsDouble(Corner.NOMINAL), onWorst.applyAsDouble(onCorner), onCorner,
+                -offAmps.applyAsDouble(Corner.NOMINAL), -offWorst.applyAsDouble(offCorner), offCorner, unsolved);
     }
 
     private static List<Parameter> parameters(StageSolver s, StageCircuit stage) {
