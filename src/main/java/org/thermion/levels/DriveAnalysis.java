@@ -76,6 +76,7 @@ final class DriveAnalysis {
             if (load == null) {
                 continue;
             }
+            String part = part(c.get());
             LoadDrive.Kind kind = load instanceof Lamp ? LoadDrive.Kind.LAMP : LoadDrive.Kind.COIL;
             if (kind == LoadDrive.Kind.COIL && !(load instanceof RelayCoil) && st.function() != StageFunction.RELAY) {
                 continue; // a lamp stage with a plain resistor: nothing to judge
@@ -85,7 +86,7 @@ final class DriveAnalysis {
             double dropout = load instanceof RelayCoil coil ? coil.dropoutAmps() : Double.NaN;
             InputLevels levels = levels(g, low, high);
             InputLevels worst = levels(g, worstLow, worstHigh);
-            Figures f = cache.computeIfAbsent(List.of(c.get(), levels, worst), k -> solve(c.get(), levels, worst));
+            Figures f = cache.computeIfAbsent(List.of(c.get(), levels, worst), k -> solve(c.get(), part, levels, worst));
             boolean follower = c.get() instanceof TubeStage ts && ts.output() == TubeStage.Output.CATHODE;
             out.add(new LoadDrive(new StageUse(false, g.id()), -1, fanout.nodeOf(g.output()).name(), st.name(), kind,
                     f.on(), f.onWorst(), f.onCorner(), f.off(), f.offWorst(), f.offCorner(), rated, dropout,
@@ -119,7 +120,7 @@ final class DriveAnalysis {
         ThyratronStage driver = new ThyratronStage(ts.name(), ts.tube(), coil, ts.plateRail(), ts.plateOhms(), ts.grid(),
                 ts.cathode());
         StageSolver solver = circuits.solver();
-        ToDoubleFunction<Corner> onAmps = k -> amps(solver, driver, 0, true, k);
+        ToDoubleFunction<Corner> onAmps = k -> amps(solver, driver, LOAD, 0, true, k);
         List<Parameter> params = parameters(solver, driver);
         Corner onCorner = WorstCase.worstCorner(params, tolerances, onAmps);
         NoDcSolution unsolved = unsolved(solver, driver, 0, true);
@@ -128,15 +129,30 @@ final class DriveAnalysis {
                 Double.NaN, coil.ohms(), r.ratedVolts(), false, unsolved);
     }
 
-    /** The load a lamp or relay stage drives (its plate load), or null for other circuits. */
+    /** The solver's label of a stage's plate load, and of a coil in its cathode. */
+    private static final String LOAD = "load";
+    private static final String CATHODE = "cathode";
+
+    /**
+     * The load a lamp or relay stage drives: its plate load, or a follower's coil in its cathode;
+     * null for other circuits.
+     */
     private static PlateLoad loadOf(StageCircuit c) {
         if (c instanceof TubeStage ts) {
+            if (ts.cathode().coil() != null) {
+                return ts.cathode().coil();
+            }
             return ts.load().direct() ? null : ts.load();
         }
         if (c instanceof ThyratronStage ts) {
             return ts.load();
         }
         return null;
+    }
+
+    /** Which part of the stage carries the load's current. */
+    private static String part(StageCircuit c) {
+        return c instanceof TubeStage ts && ts.cathode().coil() != null ? CATHODE : LOAD;
     }
 
     private static double ohmsOf(PlateLoad load) {
@@ -160,14 +176,15 @@ final class DriveAnalysis {
         return LevelAnalysis.outward(lo, hi);
     }
 
-    private Figures solve(StageCircuit stage, InputLevels levels, InputLevels worst) {
+    private Figures solve(StageCircuit stage, String part, InputLevels levels, InputLevels worst) {
         StageSolver s = circuits.solver();
         // a higher grid means more current in every arrangement (a follower's too; a thyratron fires and holds);
         // at the worst corner the input is also at its driving net's worst level
-        ToDoubleFunction<Corner> onAmps = c -> amps(s, stage, levels.high(), false, c);
-        ToDoubleFunction<Corner> offAmps = c -> -amps(s, stage, levels.low(), false, c);
-        ToDoubleFunction<Corner> onWorst = c -> Math.min(onAmps.applyAsDouble(c), amps(s, stage, worst.high(), false, c));
-        ToDoubleFunction<Corner> offWorst = c -> Math.min(offAmps.applyAsDouble(c), -amps(s, stage, worst.low(), false, c));
+        ToDoubleFunction<Corner> onAmps = c -> amps(s, stage, part, levels.high(), false, c);
+        ToDoubleFunction<Corner> offAmps = c -> -amps(s, stage, part, levels.low(), false, c);
+        ToDoubleFunction<Corner> onWorst = c -> Math.min(onAmps.applyAsDouble(c), amps(s, stage, part, worst.high(), false, c));
+        ToDoubleFunction<Corner> offWorst = c -> Math.min(offAmps.applyAsDouble(c),
+                -amps(s, stage, part, worst.low(), false, c));
         List<Parameter> params = parameters(s, stage);
         Corner onCorner = WorstCase.worstCorner(params, tolerances, onWorst);
         Corner offCorner = WorstCase.worstCorner(params, tolerances, offWorst);
@@ -196,8 +213,8 @@ final class DriveAnalysis {
         return s.solve(stage, in, stored, List.of(), c);
     }
 
-    private static double amps(StageSolver s, StageCircuit stage, double volts, boolean stored, Corner c) {
+    private static double amps(StageSolver s, StageCircuit stage, String part, double volts, boolean stored, Corner c) {
         DcResult r = solveAt(s, stage, volts, stored, c);
-        return r.solved() ? Math.abs(r.point().partAmps(StageSolver.DRIVER + ".load")) : Double.NaN;
+        return r.solved() ? Math.abs(r.point().partAmps(StageSolver.DRIVER + "." + part)) : Double.NaN;
     }
 }
