@@ -55,6 +55,19 @@ final class PowerUpCommand implements Callable<Integer> {
                     + "resistor (default: ${DEFAULT-VALUE}).", defaultValue = "2s..20s:2s")
     String bypass;
 
+    @Option(names = "--fit", paramLabel = "TRACE.csv", description = "Fit the model to a current measured at switch-on "
+            + "(CSV: time_seconds, then a current column such as current_amps) and report the fitted figures, their "
+            + "uncertainty and what the trace cannot tell.")
+    Path fit;
+
+    @Option(names = "--calibrate", paramLabel = "TRACE.csv", description = "Fit the model to the trace as --fit does, then "
+            + "run the prediction asked for (the power-up, or --sweep) with the fitted figures.")
+    Path calibrate;
+
+    @Option(names = "--trace-rail", paramLabel = "RAIL", description = "The rail the trace measured (default: the rail its "
+            + "current column names, as RAIL_amps, else the one with the largest switch-on current).")
+    String traceRail;
+
     @Option(names = "--csv", paramLabel = "FILE", description = "Write the time series to FILE (RFC 4180): time_seconds, "
             + "RAIL_amps and RAIL_volts per rail (signed as declared), heater_N_kelvin per row N of the heaters table.")
     Path csv;
@@ -93,6 +106,9 @@ final class PowerUpCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    /** The fit --calibrate made (null without one). */
+    private PowerUpFit.Done fitted;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
@@ -129,6 +145,28 @@ final class PowerUpCommand implements Callable<Integer> {
         if (m == null) {
             return ExitCodes.BAD_INPUT;
         }
+        if (fit != null && calibrate != null) {
+            err.println("error: give --fit (report the fit) or --calibrate (predict with it), not both");
+            return ExitCodes.BAD_INPUT;
+        }
+        if (fit != null || calibrate != null) {
+            fitted = PowerUpFit.fit(m, fit != null ? fit : calibrate, traceRail, o, mode, loader, err);
+            if (fitted == null) {
+                return ExitCodes.BAD_INPUT;
+            }
+            if (fit != null) {
+                if (svg != null) {
+                    int code = PlotFile.write(svg, PowerUpFit.figure(fitted), replace, List.of(file, fit), loader.sources(), err);
+                    if (code != 0) {
+                        return code;
+                    }
+                }
+                format.write(out, PowerUpFit.report(fitted));
+                out.flush();
+                return ExitCodes.OK;
+            }
+            o = o.withAssumptions(fitted.result().assumptions());
+        }
         if (m.softStarts().isEmpty() && !rs.isEmpty()) {
             err.println("error: " + file + " declares no soft start, so --resistor has nothing to change; "
                     + "--sweep sizes one");
@@ -139,7 +177,7 @@ final class PowerUpCommand implements Callable<Integer> {
         }
         StartupNetwork net;
         try {
-            net = StartupNetwork.of(m, o.assumptions(), mode);
+            net = network(m, o, mode);
         } catch (TransientFailure e) {
             err.println("error: " + file + ": " + e.getMessage());
             return ExitCodes.BAD_INPUT;
@@ -156,12 +194,12 @@ final class PowerUpCommand implements Callable<Integer> {
                     sr = ResistorSweep.run(net, o, name, values, done -> bar.update(done, values.length));
                 }
                 if (svg != null) {
-                    int code = PlotFile.write(svg, PowerUpFigures.sweep(sr), replace, List.of(file), loader.sources(), err);
+                    int code = PlotFile.write(svg, PowerUpFigures.sweep(sr), replace, inputs(), loader.sources(), err);
                     if (code != 0) {
                         return code;
                     }
                 }
-                format.write(out, PowerUpSweepReport.of(sr));
+                format.write(out, calibrated(PowerUpSweepReport.of(sr)));
                 return sr.recommended() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
             }
         } catch (IllegalArgumentException | TransientFailure e) {
@@ -179,7 +217,7 @@ final class PowerUpCommand implements Callable<Integer> {
         }
         PowerUpReport report = new PowerUpReport(result, advice);
         if (csv != null) {
-            OutputFiles.Refusal no = OutputFiles.check(csv, OutputFiles.Kind.POWERUP_CSV, replace, List.of(file), loader.sources());
+            OutputFiles.Refusal no = OutputFiles.check(csv, OutputFiles.Kind.POWERUP_CSV, replace, inputs(), loader.sources());
             if (no == null) {
                 try {
                     OutputFiles.write(csv, PowerUpSeries.of(result), StandardCharsets.UTF_8);
@@ -192,12 +230,12 @@ final class PowerUpCommand implements Callable<Integer> {
             }
         }
         if (svg != null) {
-            int code = PlotFile.write(svg, PowerUpFigures.curves(result), replace, List.of(file), loader.sources(), err);
+            int code = PlotFile.write(svg, PowerUpFigures.curves(result), replace, inputs(), loader.sources(), err);
             if (code != 0) {
                 return code;
             }
         }
-        format.write(out, report.report(width, !noPlot, ascii ? CurrentPlot.Style.ASCII : CurrentPlot.Style.BLOCKS));
+        format.write(out, calibrated(report.report(width, !noPlot, ascii ? CurrentPlot.Style.ASCII : CurrentPlot.Style.BLOCKS)));
         return report.ok() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
     }
 
@@ -205,7 +243,7 @@ final class PowerUpCommand implements Callable<Integer> {
     private int size(Machine m, PowerUpOptions o, DrawMode mode, PowerUpArgs.Named<PowerUpArgs.Range> range,
                      MachineLoader loader, PrintWriter out, PrintWriter err) {
         try {
-            StartupNetwork net = StartupNetwork.of(m, o.assumptions(), mode);
+            StartupNetwork net = network(m, o, mode);
             int rail = range.softStart() == null ? inrushRail(m, net, o) : m.railIndex(range.softStart());
             if (rail < 0) {
                 throw new IllegalArgumentException("--sweep: no rail named '" + range.softStart() + "'");
@@ -224,12 +262,12 @@ final class PowerUpCommand implements Callable<Integer> {
                         done -> bar.update(done, ohms.length));
             }
             if (svg != null) {
-                int code = PlotFile.write(svg, PowerUpFigures.sizing(t), replace, List.of(file), loader.sources(), err);
+                int code = PlotFile.write(svg, PowerUpFigures.sizing(t), replace, inputs(), loader.sources(), err);
                 if (code != 0) {
                     return code;
                 }
             }
-            format.write(out, PowerUpSizingReport.of(t));
+            format.write(out, calibrated(PowerUpSizingReport.of(t)));
             out.flush();
             return t.best() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
         } catch (IllegalArgumentException | TransientFailure e) {
@@ -238,8 +276,24 @@ final class PowerUpCommand implements Callable<Integer> {
         }
     }
 
+    /** The files this run reads (never to be written over). */
+    private List<Path> inputs() {
+        return calibrate == null ? List.of(file) : List.of(file, calibrate);
+    }
+
+    /** {@code r} with a line naming the fitted figures when the model was calibrated. */
+    private org.thermion.cli.report.Report calibrated(org.thermion.cli.report.Report r) {
+        return fitted == null ? r : r.text("", PowerUpFit.note(fitted));
+    }
+
+    /** The machine's network, with the figures a trace fitted when --calibrate gave one. */
+    private StartupNetwork network(Machine m, PowerUpOptions o, DrawMode mode) {
+        return fitted == null ? StartupNetwork.of(m, o.assumptions(), mode)
+                : StartupNetwork.of(m, o.assumptions(), mode, fitted.result().adjustment());
+    }
+
     /** The rail with heater strings whose switch-on current is largest: the one a soft start is for. */
-    private static int inrushRail(Machine m, StartupNetwork net, PowerUpOptions o) {
+    static int inrushRail(Machine m, StartupNetwork net, PowerUpOptions o) {
         PowerUpResult r = net.solve(o.withSampleSeconds(0));
         int best = -1;
         for (org.thermion.model.HeaterString hs : m.heaterStrings()) {

@@ -16,7 +16,7 @@ import java.util.concurrent.Callable;
         description = {"Build documents: envelopes and spare sections, the pin-level wire list, heater wiring, "
                 + "the parts list and more; one selection at a time.",
                 "Run `sheets SELECTION --help` for a selection's options."},
-        subcommands = {SheetsPacking.class})
+        subcommands = {SheetsPacking.class, SheetsWires.class, SheetsSockets.class, SheetsHeaters.class, SheetsParts.class})
 final class SheetsCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;

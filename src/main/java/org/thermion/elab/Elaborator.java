@@ -299,7 +299,7 @@ public final class Elaborator {
                 List.copyOf(latches));
         return new Machine(mb.name, new Clock(mb.phases, mb.period), List.copyOf(parts.tubes), List.copyOf(parts.stages),
                 List.copyOf(parts.rails), List.copyOf(packer.rules), List.copyOf(softStarts), List.copyOf(modules), netlist,
-                rom, pc, List.copyOf(inputs), List.copyOf(outputs), List.copyOf(packer.envelopes),
+                rom, pc, List.copyOf(inputs), List.copyOf(outputs), packer.levelized(order),
                 List.copyOf(packer.strings), isa, gateEnvOrdered, latchEnvelope, built);
     }
 

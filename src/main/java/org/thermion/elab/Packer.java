@@ -34,8 +34,33 @@ final class Packer {
         this.diags = diags;
     }
 
-    /** Places a stage instance needing {@code sections} of {@code tube} in module {@code module}; returns the envelope. */
+    /** Places a stage outside the netlist (a soft start's thyratron); returns the envelope. */
     int place(int tube, int module, int sections) {
+        return place(tube, module, sections, false, -1);
+    }
+
+    /**
+     * The envelopes with their gate slots renumbered to the levelized order ({@code order[k]} is the
+     * builder's index of gate k).
+     */
+    List<Envelope> levelized(int[] order) {
+        int[] rank = new int[order.length];
+        for (int k = 0; k < order.length; k++) {
+            rank[order[k]] = k;
+        }
+        List<Envelope> out = new ArrayList<>(envelopes.size());
+        for (Envelope e : envelopes) {
+            List<Envelope.Slot> slots = new ArrayList<>(e.slots().size());
+            for (Envelope.Slot s : e.slots()) {
+                slots.add(s.latch() || s.index() < 0 ? s : new Envelope.Slot(s.section(), false, rank[s.index()]));
+            }
+            out.add(new Envelope(e.id(), e.designator(), e.tube(), e.module(), e.sectionsUsed(), slots, e.pinned()));
+        }
+        return out;
+    }
+
+    /** Places a stage instance needing {@code sections} of {@code tube} in module {@code module}; returns the envelope. */
+    int place(int tube, int module, int sections, boolean latch, int index) {
         TubeType t = parts.tubes.get(tube);
         String key = tube + ":" + module;
         Integer cur = open.get(key);
@@ -45,13 +70,13 @@ final class Packer {
             int left = sections;
             if (cur != null && free.get(cur) > 0) {
                 int take = Math.min(left, free.get(cur));
-                use(cur, take);
+                use(cur, take, latch, index);
                 first = cur;
                 left -= take;
             }
             while (left > 0) {
                 int take = Math.min(left, t.sections());
-                int e = newEnvelope(tube, module, take);
+                int e = newEnvelope(tube, module, take, latch, index);
                 open.put(key, e);
                 first = first < 0 ? e : first;
                 left -= take;
@@ -59,24 +84,30 @@ final class Packer {
             return first;
         }
         if (cur != null && free.get(cur) >= sections) {
-            use(cur, sections);
+            use(cur, sections, latch, index);
             return cur;
         }
-        int e = newEnvelope(tube, module, sections);
+        int e = newEnvelope(tube, module, sections, latch, index);
         open.put(key, e);
         return e;
     }
 
-    private void use(int env, int sections) {
+    private void use(int env, int sections, boolean latch, int index) {
         Envelope e = envelopes.get(env);
-        envelopes.set(env, new Envelope(e.id(), e.designator(), e.tube(), e.module(), e.sectionsUsed() + sections));
+        List<Envelope.Slot> slots = new ArrayList<>(e.slots());
+        for (int s = 0; s < sections; s++) {
+            slots.add(new Envelope.Slot(e.sectionsUsed() + s + 1, latch, index));
+        }
+        envelopes.set(env, new Envelope(e.id(), e.designator(), e.tube(), e.module(), e.sectionsUsed() + sections, slots,
+                e.pinned()));
         free.put(env, free.get(env) - sections);
     }
 
-    private int newEnvelope(int tube, int module, int used) {
+    private int newEnvelope(int tube, int module, int used, boolean latch, int index) {
         int id = envelopes.size();
-        envelopes.add(new Envelope(id, "V" + (id + 1), tube, module, used));
-        free.put(id, parts.tubes.get(tube).sections() - used);
+        envelopes.add(new Envelope(id, "V" + (id + 1), tube, module, 0, List.of(), false));
+        free.put(id, parts.tubes.get(tube).sections());
+        use(id, used, latch, index);
         return id;
     }
 

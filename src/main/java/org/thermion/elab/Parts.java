@@ -142,7 +142,8 @@ final class Parts {
         PropLine source = b.line("source");
         return new TubeType(name, kind, (int) b.num("sections"), List.copyOf(heaters), b.num("warmup"), b.num("coldratio"),
                 cgk, cgp, cpk, cin, cout, b.num("avgcurrent"), b.num("peakcurrent"), b.num("arcdrop"),
-                source == null ? "" : source.word("value"));
+                source == null ? "" : source.word("value"),
+                new BasingReader(diags).read(b.lines("basing"), kind, (int) b.num("sections")));
     }
 
     /** The stage named, built on first use; -1 (reported) when unknown. */

@@ -76,6 +76,13 @@ final class PropertyTable {
                     .byDefault("none").source(PLAUSIBLE),
             Property.of("arcdrop", "tube drop while conducting (thyratrons)", q("tube drop", Unit.VOLT, above(0, 1e3)))
                     .byDefault("none").source(PLAUSIBLE),
+            Property.of("basing", "the base and what each pin carries, as one source gives it; one line per source "
+                            + "(several when sources disagree: the first is wired, the pins they differ on are flagged)",
+                    name("base", "a base", List.of("miniature7", "noval", "octal")), new Slot.Text("pins", "the pins"),
+                    new Slot.Word("from"), new Slot.Text("from", "the basing's source"))
+                    .byDefault("none (the wire list needs it)").many()
+                    .source("pins as `N electrode.section`, comma-separated; electrodes plate grid screen suppressor "
+                            + "shield cathode, and heater tap ic nc without a section"),
             Property.of("source", "where the tube's figures come from", text("the source of the data")).byDefault("empty"));
 
     static final PropertyTable STAGE = new PropertyTable("stage", "stage NAME : FUNCTION { ... }",

@@ -49,7 +49,7 @@ final class StagePlacement {
         java.util.Arrays.fill(gateEnvelope, -1);
         java.util.Arrays.fill(latchEnvelope, -1);
         for (Item it : items) {
-            int env = packer.place(it.tube(), it.module(), it.sections());
+            int env = packer.place(it.tube(), it.module(), it.sections(), it.latch(), it.index());
             (it.latch() ? latchEnvelope : gateEnvelope)[it.index()] = env;
         }
         return new StagePlacement(gateEnvelope, latchEnvelope);

@@ -5,7 +5,8 @@ import java.util.List;
 /**
  * A tube type by its trade designation. Capacitances are per section in farads;
  * {@code warmupSeconds} and {@code coldHotRatio} are NaN when not declared.
- * Ratings that do not apply are NaN.
+ * Ratings that do not apply are NaN. {@code basings}: the base and its pins, one per source
+ * (several when sources disagree; empty when the description gives none).
  */
 public record TubeType(
         String name,
@@ -22,7 +23,33 @@ public record TubeType(
         double avgCathodeAmps,
         double peakCathodeAmps,
         double arcDropVolts,
-        String source) {
+        String source,
+        List<Basing> basings) {
+
+    public TubeType {
+        heaters = List.copyOf(heaters);
+        basings = List.copyOf(basings);
+    }
+
+    /** The basing wired from (the first declared), or null when the tube has none. */
+    public Basing basing() {
+        return basings.isEmpty() ? null : basings.get(0);
+    }
+
+    /** Pins on which two of the declared basings disagree (their wiring depends on which source is right). */
+    public java.util.SortedSet<Integer> doubtfulPins() {
+        java.util.SortedSet<Integer> out = new java.util.TreeSet<>();
+        for (Basing other : basings.subList(Math.min(1, basings.size()), basings.size())) {
+            Basing first = basings.get(0);
+            int n = Math.max(first.pinCount(), other.pinCount());
+            for (int pin = 1; pin <= n; pin++) {
+                if (!java.util.Objects.equals(first.at(pin), other.at(pin))) {
+                    out.add(pin);
+                }
+            }
+        }
+        return out;
+    }
 
     /** The heater rating used when nothing else is chosen: the first one declared. */
     public HeaterRating defaultHeater() {

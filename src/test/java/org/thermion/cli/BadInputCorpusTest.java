@@ -42,6 +42,8 @@ class BadInputCorpusTest {
         String[] args;
         if (base.startsWith("plan-")) {
             args = new String[] {"plan", name};
+        } else if (base.startsWith("trace-")) {
+            args = new String[] {"powerup", MACHINE, "--fit", name};
         } else if (base.startsWith("obs-")) {
             args = new String[] {"diagnose", C17, name};
         } else if (name.endsWith(".machine")) {

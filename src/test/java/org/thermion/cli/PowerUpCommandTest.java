@@ -209,4 +209,39 @@ class PowerUpCommandTest {
         assertThat(bad.code()).isEqualTo(2);
         assertThat(bad.err()).startsWith("error: --bypass");
     }
+
+    @Test
+    @org.junit.jupiter.api.Timeout(300)
+    void aPredictionRunsOnTheFiguresABenchTraceFitted(@org.junit.jupiter.api.io.TempDir Path dir) throws IOException {
+        // The demo trace was made at 12.2 V and 0.03 ohm (the machine declares 12.6 V and 0.02 ohm).
+        Path svg = dir.resolve("fit.svg");
+        Run fit = run("powerup", "examples/pumpstation/pumpstation.machine", "--fit", "examples/pumpstation/heat-trace.csv",
+                "--format", "csv", "--svg", svg.toString());
+        assertThat(fit.err()).isEmpty();
+        assertThat(fit.code()).isZero();
+        assertThat(fit.out()).contains("figures,supply_voltage,").contains("figures,cathode_heat_ratio,2.25,,2.25,ratio,not determined");
+        assertThat(Files.readString(svg)).contains("data-name=\"measured\"").contains("data-name=\"fitted model\"");
+        Run declared = run("powerup", "examples/pumpstation/pumpstation.machine", "--time", "15s", "--format", "csv");
+        Run calibrated = run("powerup", "examples/pumpstation/pumpstation.machine", "--time", "15s", "--format", "csv",
+                "--calibrate", "examples/pumpstation/heat-trace.csv");
+        assertThat(calibrated.err()).isEmpty();
+        // A lower supply voltage behind more source resistance: the heat rail ends the run drawing less.
+        assertThat(steady(calibrated.out(), "heat")).isLessThan(steady(declared.out(), "heat"));
+        Run both = run("powerup", "examples/pumpstation/pumpstation.machine", "--fit", "a.csv", "--calibrate", "b.csv");
+        assertThat(both.code()).isEqualTo(2);
+    }
+
+    /** The current at the end of the run of {@code rail} from the rails table of powerup's CSV. */
+    private static double steady(String csv, String rail) {
+        String[] head = null;
+        for (String line : csv.split("\r?\n")) {
+            String[] f = line.split(",", -1);
+            if (f[0].equals("table") && f.length > 1 && f[1].equals("rail")) {
+                head = f;
+            } else if (head != null && f[0].equals("rails") && f[1].equals(rail)) {
+                return Double.parseDouble(f[java.util.Arrays.asList(head).indexOf("end_amps")]);
+            }
+        }
+        throw new AssertionError("no rails row for " + rail + " in\n" + csv);
+    }
 }

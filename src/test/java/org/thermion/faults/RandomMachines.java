@@ -9,7 +9,7 @@ import java.util.Random;
  * phases (some with a load enable), a web of nand/nor/and/or/xor/not logic over switches,
  * latch outputs and earlier nets, and a few outputs.
  */
-final class RandomMachines {
+public final class RandomMachines {
     private static final String SUPPLIES = """
             rail heat  { voltage 12.6 V; source 0.02 ohm; limit 40 A }
             rail bias  { voltage -24 V; source 10 ohm; limit 500 mA }
@@ -33,7 +33,7 @@ final class RandomMachines {
     }
 
     /** A machine text drawn from {@code seed}. */
-    static String text(long seed) {
+    public static String text(long seed) {
         Random r = new Random(seed);
         int inputs = 2 + r.nextInt(4);
         int latches = r.nextInt(4);

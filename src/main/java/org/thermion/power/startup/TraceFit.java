@@ -80,7 +80,7 @@ public final class TraceFit {
     private final double[] scale;
     private final double sourceRef;
     private final double[] start;
-    private int runs;
+    private final java.util.concurrent.atomic.AtomicInteger runs = new java.util.concurrent.atomic.AtomicInteger();
 
     private TraceFit(Machine m, ThermalAssumptions a, DrawMode mode, int rail, double[] t, double[] amps) {
         this.machine = m;
@@ -258,7 +258,7 @@ public final class TraceFit {
 
     /** The model's rail current at each trace time, over the scale: one transient run. */
     private double[] model(double[] p) {
-        runs++;
+        runs.incrementAndGet();
         ThermalAssumptions a = base.withCathodeHeatRatio(Math.exp(p[2]));
         double offset = p[5];
         double end = t[t.length - 1] - offset;
@@ -290,24 +290,25 @@ public final class TraceFit {
         return f;
     }
 
-    /** Forward differences, except the offset: minus the model's own slope at each point. */
+    /**
+     * Forward differences, the offset's step one sampling interval wide; the six extra runs are
+     * independent, so they share the cores.
+     */
     private RealMatrix jacobian(double[] p, double[] f) {
         RealMatrix j = new Array2DRowRealMatrix(f.length, p.length);
-        for (int k = 0; k < 5; k++) {
-            double h = 1e-3 * Math.max(1, Math.abs(p[k]));
+        double dt = Math.max(1e-4, (t[t.length - 1] - t[0]) / (2.0 * t.length));
+        double[][] cols = java.util.stream.IntStream.range(0, p.length).parallel().mapToObj(k -> {
+            double h = k == 5 ? dt : 1e-3 * Math.max(1, Math.abs(p[k]));
             double[] q = p.clone();
             q[k] += h;
             double[] g = model(q);
-            for (int i = 0; i < f.length; i++) {
-                j.setEntry(i, k, (g[i] - f[i]) / h);
+            for (int i = 0; i < g.length; i++) {
+                g[i] = (g[i] - f[i]) / h;
             }
-        }
-        double[] q = p.clone();
-        double h = Math.max(1e-4, (t[t.length - 1] - t[0]) / (2.0 * t.length));
-        q[5] += h;
-        double[] g = model(q);
-        for (int i = 0; i < f.length; i++) {
-            j.setEntry(i, 5, (g[i] - f[i]) / h);
+            return g;
+        }).toArray(double[][]::new);
+        for (int k = 0; k < p.length; k++) {
+            j.setColumn(k, cols[k]);
         }
         return j;
     }
@@ -339,6 +340,6 @@ public final class TraceFit {
 
     /** Transient runs so far (the fit's cost). */
     int runs() {
-        return runs;
+        return runs.get();
     }
 }

@@ -1,0 +1,115 @@
+package org.thermion.build;
+
+import org.thermion.circuit.MachineCircuits;
+import org.thermion.model.Envelope;
+import org.thermion.model.Gate;
+import org.thermion.model.Latch;
+import org.thermion.model.Machine;
+import org.thermion.model.Netlist;
+import org.thermion.model.Port;
+import org.thermion.model.SoftStart;
+import org.thermion.power.HeaterAnalysis;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Everything the build documents are printed from: the wiring (parts, nodes, sockets) made from the
+ * stage circuits and the packing, and the heater strings in order. Built once per machine.
+ */
+public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.HeaterRun> heaters) {
+
+    public static BuildDocuments of(Machine m) {
+        MachineCircuits circuits = MachineCircuits.of(m);
+        WiringBuilder w = new WiringBuilder(m);
+        Dissipation heat = new Dissipation(m, circuits);
+        StageWiring stages = new StageWiring(w, circuits, heat);
+        Netlist n = m.netlist();
+        Map<Integer, List<int[]>> sections = new HashMap<>();
+        for (Envelope e : m.envelopes()) {
+            for (Envelope.Slot s : e.slots()) {
+                if (s.index() >= 0) {
+                    int key = s.latch() ? StageKey.latch(n, s.index()) : StageKey.gate(s.index());
+                    sections.computeIfAbsent(key, k -> new ArrayList<>()).add(new int[] {e.id(), s.section()});
+                }
+            }
+        }
+        Map<Integer, Integer> latchByQ = new HashMap<>();
+        for (Latch l : n.latches()) {
+            latchByQ.put(l.output(), l.id());
+        }
+        int[] qbar = new int[n.latches().size()];
+        java.util.Arrays.fill(qbar, -1);
+        for (Gate g : n.gates()) {
+            Integer l = g.stage() < 0 && g.fn() == org.thermion.model.GateFn.NOT ? latchByQ.get(g.input(0)) : null;
+            if (l != null) {
+                qbar[l] = g.output();
+            }
+        }
+        for (Gate g : n.gates()) {
+            if (g.stage() >= 0) {
+                stages.gate(g, sections.getOrDefault(StageKey.gate(g.id()), List.of()), -1);
+            } else if (!Aliases.isAlias(g) && (g.fn() != org.thermion.model.GateFn.NOT || !latchByQ.containsKey(g.input(0)))) {
+                w.problems.add("free connection " + n.netName(g.output()) + " is not a flip-flop's second output: wire it by hand");
+            }
+        }
+        for (Latch l : n.latches()) {
+            if (l.stage() >= 0) {
+                stages.latch(l, sections.getOrDefault(StageKey.latch(n, l.id()), List.of()), qbar[l.id()]);
+            }
+        }
+        int ground = w.rail(org.thermion.circuit.RailSet.GROUND);
+        for (Envelope e : m.envelopes()) {
+            if (w.has(e.id(), 0, org.thermion.model.Electrode.SHIELD)) {
+                w.pin(e.id(), 0, org.thermion.model.Electrode.SHIELD, ground);
+            }
+        }
+        for (Port p : m.inputs()) {
+            w.multiLead(PartClass.SWITCH, "toggle switch", 0, "input " + p.name(), -1, new String[] {"common"},
+                    new int[] {w.net(p.net())});
+        }
+        external(m, w);
+        HeaterWiring hw = new HeaterWiring(w);
+        hw.wire(new HeaterAnalysis(m));
+        for (SoftStart s : m.softStarts()) {
+            w.parts.add(new Part(w.boards.next(0, PartClass.RESISTOR), PartClass.RESISTOR, s.resistorOhms(), "power resistor",
+                    0, "soft start " + s.name(), s.ratedWatts(), -1));
+            w.parts.add(new Part(w.boards.next(0, PartClass.RELAY), PartClass.RELAY, s.relay().coilOhms(),
+                    "relay, coil " + Values.ohms(s.relay().coilOhms()), 0, "bypass of soft start " + s.name(), Double.NaN, -1));
+        }
+        return new BuildDocuments(m, w.build(), List.copyOf(hw.runs));
+    }
+
+    /** The ROM's data lines and the program counter's inputs end on one connector each. */
+    private static void external(Machine m, WiringBuilder w) {
+        if (m.rom() != null) {
+            int[] data = m.rom().dataNets();
+            String[] pins = new String[data.length];
+            int[] nodes = new int[data.length];
+            for (int i = 0; i < data.length; i++) {
+                pins[i] = "D" + i;
+                nodes[i] = w.net(data[i]);
+            }
+            w.multiLead(PartClass.CONNECTOR, "connector, " + data.length + " ways", 0, "ROM data lines", -1, pins, nodes);
+        }
+        if (m.pc() != null) {
+            int[] t = m.pc().targetNets();
+            List<String> pins = new ArrayList<>();
+            List<Integer> nodes = new ArrayList<>();
+            if (m.pc().jumpNet() >= 0) {
+                pins.add("jump");
+                nodes.add(w.net(m.pc().jumpNet()));
+            }
+            for (int i = 0; i < t.length; i++) {
+                pins.add("T" + i);
+                nodes.add(w.net(t[i]));
+            }
+            if (!pins.isEmpty()) {
+                w.multiLead(PartClass.CONNECTOR, "connector, " + pins.size() + " ways", 0, "program counter inputs", -1,
+                        pins.toArray(new String[0]), nodes.stream().mapToInt(Integer::intValue).toArray());
+            }
+        }
+    }
+}

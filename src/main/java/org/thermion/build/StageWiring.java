@@ -1,0 +1,293 @@
+package org.thermion.build;
+
+import org.thermion.circuit.CathodeReturn;
+import org.thermion.circuit.DiodeGate;
+import org.thermion.circuit.FlipFlop;
+import org.thermion.circuit.GridNetwork;
+import org.thermion.circuit.Lamp;
+import org.thermion.circuit.LoadResistor;
+import org.thermion.circuit.MachineCircuits;
+import org.thermion.circuit.PlateLoad;
+import org.thermion.circuit.RailSet;
+import org.thermion.circuit.RelayCoil;
+import org.thermion.circuit.ScreenSupply;
+import org.thermion.circuit.StageCircuit;
+import org.thermion.circuit.ThyratronStage;
+import org.thermion.circuit.TubeStage;
+import org.thermion.model.Electrode;
+import org.thermion.model.Gate;
+import org.thermion.model.Latch;
+import org.thermion.model.StageFunction;
+import org.thermion.model.StageType;
+import org.thermion.model.TubeKind;
+
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Wires one stage instance from its circuit ({@link MachineCircuits}): sections onto socket pins,
+ * plate load, cathode return, screen supply, grid networks, as {@code CircuitBuilder} joins them.
+ * A stage without a circuit (declared currents) is wired by its function: load resistor to its
+ * rail, one grid per input (a pentode's second input on its suppressor), cathodes to ground.
+ */
+final class StageWiring {
+    private final WiringBuilder w;
+    private final MachineCircuits circuits;
+    private final Dissipation heat;
+
+    StageWiring(WiringBuilder w, MachineCircuits circuits, Dissipation heat) {
+        this.w = w;
+        this.circuits = circuits;
+        this.heat = heat;
+    }
+
+    /** A stage instance being wired: its key, type, sections (envelope, section), board and name for local nodes. */
+    private record Instance(int key, StageType type, List<int[]> sections, int board, String name) {
+    }
+
+    void gate(Gate g, List<int[]> sections, int qbarOf) {
+        StageType st = w.m.stages().get(g.stage());
+        Instance in = new Instance(StageKey.gate(g.id()), st, sections, w.boards.of(g.module()),
+                w.m.netlist().netName(g.output()));
+        Optional<StageCircuit> c = circuits.circuit(st);
+        if (c.isPresent() && c.get() instanceof TubeStage t) {
+            tubeStage(in, t, g.inputs(), w.net(g.output()));
+        } else if (c.isPresent() && c.get() instanceof DiodeGate d) {
+            diodeGate(in, d.kind() == DiodeGate.Kind.AND, d.pullOhms(), d.pullRail(), "pull", g.inputs(), g.output());
+        } else if (c.isPresent() && c.get() instanceof ThyratronStage t) {
+            thyratron(in, t, g.input(0), g.output());
+        } else {
+            declared(in, g.inputs(), g.output());
+        }
+    }
+
+    void latch(Latch l, List<int[]> sections, int qbar) {
+        StageType st = w.m.stages().get(l.stage());
+        Instance in = new Instance(StageKey.latch(w.m.netlist(), l.id()), st, sections, w.boards.of(l.module()),
+                w.m.netlist().netName(l.output()));
+        Optional<StageCircuit> c = circuits.circuit(st);
+        int q = w.net(l.output());
+        int qb = qbar >= 0 ? w.net(qbar) : w.local(in.name + "/plateB", org.thermion.build.Node.Kind.LOCAL);
+        String rail;
+        double load;
+        GridNetwork cross;
+        CathodeReturn cathode;
+        if (c.isPresent() && c.get() instanceof FlipFlop f) {
+            rail = f.plateRail();
+            load = f.loadOhms();
+            cross = f.cross();
+            cathode = f.cathode();
+        } else {
+            rail = w.m.rails().get(Math.max(0, st.loadRail())).name();
+            load = st.loadOhms() > 0 ? st.loadOhms() : 10e3;
+            cross = GridNetwork.direct();
+            cathode = CathodeReturn.grounded();
+            w.problems.add("stage " + st.name() + " has no flip-flop circuit: " + in.name + " is wired with its declared load and direct cross-coupling");
+        }
+        int r = w.rail(rail);
+        resistor(in, "load", load, r, q, "plate load A");
+        resistor(in, "load", load, r, qb, "plate load B");
+        int k = cathode(in, cathode);
+        int ga = grid(in, cross, qb, "A");
+        int gb = grid(in, cross, q, "B");
+        section(in, 0, Electrode.PLATE, q);
+        section(in, 0, Electrode.GRID, ga);
+        section(in, 0, Electrode.CATHODE, k);
+        section(in, 1, Electrode.PLATE, qb);
+        section(in, 1, Electrode.GRID, gb);
+        section(in, 1, Electrode.CATHODE, k);
+        // The circuit leaves the steering out of its DC model: the latch's data, load enable and
+        // clock phase end on a terminal board beside it, with both grids, for the steering network.
+        int enable = l.enable() >= 0 ? w.net(l.enable()) : w.rail(RailSet.GROUND);
+        int clock = w.local("clock phase " + l.phase(), org.thermion.build.Node.Kind.RAIL);
+        w.multiLead(PartClass.TERMINAL, "steering terminals", in.board, "steering of " + in.name, in.key,
+                new String[] {"data", "load", "clock", "grid A", "grid B"},
+                new int[] {w.net(l.data()), enable, clock, ga, gb});
+    }
+
+    private void tubeStage(Instance in, TubeStage t, int[] inputs, int out) {
+        boolean cathodeOut = t.output() == TubeStage.Output.CATHODE;
+        int rail = w.rail(t.plateRail());
+        int plate = t.load().direct() ? rail : cathodeOut ? w.local(in.name + "/plate", Node.Kind.LOCAL) : out;
+        if (!t.load().direct()) {
+            load(in, t.load(), rail, plate);
+        }
+        int k = cathodeOut ? cathodeTo(in, t.cathode(), out) : cathode(in, t.cathode());
+        int screen = t.screen() == null ? -1 : screen(in, t.screen());
+        int spi = t.sectionsPerInput();
+        boolean series = t.arrangement() == TubeStage.Arrangement.SERIES;
+        int below = k;
+        for (int i = 0; i < inputs.length; i++) {
+            int g = grid(in, t.grid(), w.net(inputs[i]), String.valueOf(i));
+            int p = series && i < inputs.length - 1 ? w.local(in.name + "/stack" + i, Node.Kind.LOCAL) : plate;
+            int kk = series ? below : k;
+            for (int s = 0; s < spi; s++) {
+                int sec = i * spi + s;
+                section(in, sec, Electrode.PLATE, p);
+                section(in, sec, Electrode.GRID, g);
+                section(in, sec, Electrode.CATHODE, kk);
+                if (screen >= 0) {
+                    section(in, sec, Electrode.SCREEN, screen);
+                    optional(in, sec, Electrode.SUPPRESSOR, kk);
+                }
+            }
+            below = p;
+        }
+    }
+
+    private void diodeGate(Instance in, boolean and, double pullOhms, String pullRail, String what, int[] inputs, int output) {
+        int out = w.net(output);
+        resistor(in, what, pullOhms, out, w.rail(pullRail), and ? "pull-up" : "pull-down");
+        for (int i = 0; i < inputs.length; i++) {
+            int input = w.net(inputs[i]);
+            section(in, i, Electrode.PLATE, and ? out : input);
+            section(in, i, Electrode.CATHODE, and ? input : out);
+        }
+    }
+
+    private void thyratron(Instance in, ThyratronStage t, int input, int output) {
+        int rail = w.rail(t.plateRail());
+        int top = rail;
+        if (t.plateOhms() > 0) {
+            top = w.local(in.name + "/feed", Node.Kind.LOCAL);
+            resistor(in, "plate", t.plateOhms(), rail, top, "plate resistor");
+        }
+        int anode = w.net(output);
+        load(in, t.load(), top, anode);
+        int k = cathode(in, t.cathode());
+        int g = grid(in, t.grid(), w.net(input), "0");
+        section(in, 0, Electrode.PLATE, anode);
+        section(in, 0, Electrode.GRID, g);
+        section(in, 0, Electrode.CATHODE, k);
+        optional(in, 0, Electrode.SCREEN, k);
+    }
+
+    /** A stage without a circuit, wired by its function from the declared load. */
+    private void declared(Instance in, int[] inputs, int output) {
+        StageType st = in.type;
+        String rail = st.loadRail() >= 0 ? w.m.rails().get(st.loadRail()).name() : RailSet.GROUND;
+        boolean diode = w.m.tubes().get(st.tube()).kind() == TubeKind.DIODE;
+        if (diode) {
+            diodeGate(in, st.function() == StageFunction.AND, st.loadOhms(), rail, "load", inputs, output);
+            return;
+        }
+        int out = w.net(output);
+        if (st.loadOhms() > 0) {
+            resistor(in, "load", st.loadOhms(), w.rail(rail), out, "plate load");
+        }
+        int ground = w.rail(RailSet.GROUND);
+        int sections = in.sections.size();
+        boolean pentode = w.m.tubes().get(st.tube()).kind() == TubeKind.PENTODE;
+        for (int s = 0; s < sections; s++) {
+            section(in, s, Electrode.PLATE, out);
+            section(in, s, Electrode.CATHODE, ground);
+            if (pentode) {
+                section(in, s, Electrode.SCREEN, w.rail(rail));
+            }
+        }
+        for (int i = 0; i < inputs.length; i++) {
+            int input = w.net(inputs[i]);
+            if (i < sections) {
+                section(in, i, Electrode.GRID, input);
+            } else if (pentode && i == sections) {
+                section(in, 0, Electrode.SUPPRESSOR, input);
+            } else {
+                w.problems.add("stage " + st.name() + " (" + in.name + "): input " + (i + 1) + " has no electrode to go to");
+            }
+        }
+        if (pentode && inputs.length <= sections) {
+            for (int s = 0; s < sections; s++) {
+                optional(in, s, Electrode.SUPPRESSOR, ground);
+            }
+        }
+    }
+
+    private void load(Instance in, PlateLoad load, int rail, int plate) {
+        if (load instanceof LoadResistor r) {
+            resistor(in, "load", r.ohms(), rail, plate, "plate load");
+        } else if (load instanceof RelayCoil c) {
+            w.twoLead(PartClass.RELAY, c.ohms(), "relay, coil " + ohmsText(c.ohms()), in.board, "relay in the plate of " + in.name,
+                    Double.NaN, in.key, rail, plate);
+        } else if (load instanceof Lamp l) {
+            w.twoLead(PartClass.LAMP, l.hotOhms(), "lamp " + volts(l.ratedVolts()) + " V " + milli(l.ratedAmps()) + " mA",
+                    in.board, "lamp in the plate of " + in.name, l.ratedVolts() * l.ratedAmps(), in.key, rail, plate);
+        }
+    }
+
+    private int cathode(Instance in, CathodeReturn c) {
+        if (c.ohms() == 0) {
+            return w.rail(c.rail());
+        }
+        return cathodeTo(in, c, w.local(in.name + "/cathode", Node.Kind.LOCAL));
+    }
+
+    private int cathodeTo(Instance in, CathodeReturn c, int k) {
+        if (c.ohms() == 0) {
+            w.problems.add(in.name + ": a cathode output without a cathode resistor");
+            return k;
+        }
+        resistor(in, "cathode", c.ohms(), k, w.rail(c.rail()), "cathode resistor");
+        return k;
+    }
+
+    private int screen(Instance in, ScreenSupply s) {
+        if (s.ohms() == 0) {
+            return w.rail(s.rail());
+        }
+        int node = w.local(in.name + "/screen", Node.Kind.LOCAL);
+        resistor(in, "screen", s.ohms(), w.rail(s.rail()), node, "screen resistor");
+        return node;
+    }
+
+    /** The grid network from {@code input}; returns the node the grid pin goes to. */
+    private int grid(Instance in, GridNetwork g, int input, String tag) {
+        int tap = input;
+        if (g.seriesOhms() > 0) {
+            tap = w.local(in.name + "/tap" + tag, Node.Kind.LOCAL);
+            resistor(in, "grid.series", g.seriesOhms(), input, tap, "grid series " + tag);
+        }
+        if (Double.isFinite(g.toBiasOhms()) && g.toBiasOhms() > 0) {
+            resistor(in, "grid.tobias", g.toBiasOhms(), tap, w.rail(g.biasRail()), "grid to bias " + tag);
+        }
+        if (g.stopperOhms() > 0) {
+            int pin = w.local(in.name + "/grid" + tag, Node.Kind.LOCAL);
+            resistor(in, "grid.stopper", g.stopperOhms(), tap, pin, "grid stopper " + tag);
+            return pin;
+        }
+        return tap;
+    }
+
+    private void resistor(Instance in, String label, double ohms, int a, int b, String role) {
+        w.twoLead(PartClass.RESISTOR, ohms, "resistor", in.board, role + " of " + in.name, heat.watts(in.type, label, ohms),
+                in.key, a, b);
+    }
+
+    /** Section {@code i} of the instance's sections (0-based) gets electrode {@code e} on {@code node}. */
+    private void section(Instance in, int i, Electrode e, int node) {
+        if (i >= in.sections.size()) {
+            w.problems.add(in.name + ": stage " + in.type.name() + " needs section " + (i + 1) + " but has " + in.sections.size());
+            return;
+        }
+        int[] es = in.sections.get(i);
+        w.pin(es[0], es[1], e, node);
+    }
+
+    /** As {@link #section}, only where the tube has that electrode on a pin. */
+    private void optional(Instance in, int i, Electrode e, int node) {
+        if (i < in.sections.size() && w.has(in.sections.get(i)[0], in.sections.get(i)[1], e)) {
+            section(in, i, e, node);
+        }
+    }
+
+    static String ohmsText(double ohms) {
+        return Values.ohms(ohms);
+    }
+
+    private static String volts(double v) {
+        return Values.plain(v);
+    }
+
+    private static String milli(double a) {
+        return Values.plain(a * 1e3);
+    }
+}

@@ -1,0 +1,32 @@
+package org.thermion.build;
+
+import java.util.Locale;
+
+/** Values written into part types for people and orders: {@code 22k}, {@code 4k7} style avoided, plain SI. */
+final class Values {
+    private Values() {
+    }
+
+    /** {@code 22 kohm}, {@code 1.9 kohm}, {@code 470 ohm}, {@code 1 Mohm}. */
+    static String ohms(double ohms) {
+        if (ohms >= 1e6) {
+            return plain(ohms / 1e6) + " Mohm";
+        }
+        if (ohms >= 1e3) {
+            return plain(ohms / 1e3) + " kohm";
+        }
+        return plain(ohms) + " ohm";
+    }
+
+    /** A number with at most three significant figures and no trailing zeros. */
+    static String plain(double v) {
+        String s = String.format(Locale.ROOT, "%.3g", v);
+        if (s.contains("e") || s.contains("E")) {
+            return s;
+        }
+        if (s.contains(".")) {
+            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+        return s;
+    }
+}

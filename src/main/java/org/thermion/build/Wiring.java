@@ -1,0 +1,45 @@
+package org.thermion.build;
+
+import java.util.List;
+
+/**
+ * The machine as a builder wires it: every part with its designator, every node with the leads
+ * it joins, every socket pin by pin, and what could not be wired (findings for the checks).
+ */
+public record Wiring(List<String> boards, List<Part> parts, List<Node> nodes, List<Socket> sockets,
+                     List<String> problems) {
+    public Wiring {
+        boards = List.copyOf(boards);
+        parts = List.copyOf(parts);
+        nodes = List.copyOf(nodes);
+        sockets = List.copyOf(sockets);
+        problems = List.copyOf(problems);
+    }
+
+    /**
+     * One tube socket: the envelope it holds, its designators, tube type and base, and per pin
+     * (index = pin - 1) what the basing puts there, the node it is wired to (-1: none) and whether
+     * that pin depends on a basing doubt.
+     */
+    public record Socket(int envelope, String ref, String tubeRef, String tube, String base, int board,
+                         List<String> electrodes, int[] nodes, boolean[] doubtful) {
+        public Socket {
+            electrodes = List.copyOf(electrodes);
+            nodes = nodes.clone();
+            doubtful = doubtful.clone();
+        }
+
+        /** The node of pin {@code pin} (1-based), -1 for none. */
+        public int node(int pin) {
+            return nodes[pin - 1];
+        }
+
+        public boolean doubtful(int pin) {
+            return doubtful[pin - 1];
+        }
+
+        public int pins() {
+            return nodes.length;
+        }
+    }
+}

@@ -1,0 +1,75 @@
+package org.thermion.cli;
+
+import org.thermion.build.BuildDocuments;
+import org.thermion.build.PartsList;
+import org.thermion.cli.report.Report;
+import org.thermion.cli.report.Table;
+import org.thermion.model.Machine;
+import org.thermion.power.TubeCount;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+import java.io.PrintWriter;
+
+import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.NUMBER;
+import static org.thermion.cli.report.ReportUnit.OHMS;
+import static org.thermion.cli.report.ReportUnit.PERCENT;
+import static org.thermion.cli.report.ReportUnit.TEXT;
+import static org.thermion.cli.report.ReportUnit.WATTS;
+
+/** {@code sheets parts MACHINE}: what to order, one row per orderable item. */
+@Command(name = "parts", mixinStandardHelpOptions = true,
+        description = {"Parts list: tubes with spares, sockets per base, resistors at their E24 value (IEC 60063) with "
+                + "a wattage rating from their dissipation and the derating, relays, lamps, switches, connectors.",
+                "Exit 1 when the tubes listed differ from the packing's envelopes or budget's tube count."})
+final class SheetsParts extends SheetsDocument {
+    @Option(names = "--spares", paramLabel = "PERCENT",
+            description = "Spare tubes per type, percent of those used, rounded up, at least one "
+                    + "(default: ${DEFAULT-VALUE}, common practice).")
+    double spares = PartsList.DEFAULT_SPARE_PERCENT;
+
+    @Option(names = "--derating", paramLabel = "FRACTION",
+            description = "Fraction of its rating a resistor may dissipate in service (default: ${DEFAULT-VALUE}, common practice).")
+    double derating = PartsList.DEFAULT_DERATING;
+
+    private boolean failed;
+
+    @Override
+    Report report(Machine m, PrintWriter err) {
+        if (!(spares >= 0 && spares <= 1000) || !(derating > 0 && derating <= 1)) {
+            err.println("error: --spares takes 0 to 1000 (percent) and --derating a fraction above 0 up to 1");
+            return null;
+        }
+        BuildDocuments docs = BuildDocuments.of(m);
+        PartsList list = PartsList.of(docs.wiring(), 0, spares, derating);
+        int budget = new TubeCount(m).total();
+        failed = list.tubesUsed() != budget || list.tubesUsed() != m.envelopes().size();
+        Table t = new Table("parts", "Parts to order")
+                .column("item", "item", TEXT).column("type", "type", TEXT).column("value", "value", OHMS)
+                .column("rating", "rating", WATTS).column("dissipation", "max", WATTS,
+                        "the most one of them dissipates (operating points; a rail-span bound where none solved)")
+                .column("used", "used", COUNT).column("spares", "spare", COUNT).column("order", "order", COUNT);
+        for (PartsList.Row r : list.rows()) {
+            t.row(r.item(), r.type(), SheetsHeaters.num(r.ohms()), SheetsHeaters.num(r.ratedWatts()),
+                    SheetsHeaters.num(r.maxWatts()), r.used(), r.spares(), r.order());
+        }
+        Report rep = start(m, "parts")
+                .field("tubes", list.tubesUsed())
+                .field("budget_tubes", budget)
+                .field("envelopes", m.envelopes().size())
+                .field("spare_percent", PERCENT, spares)
+                .field("derating", NUMBER, derating)
+                .table(t);
+        if (failed) {
+            rep.text("check: the parts list has " + list.tubesUsed() + " tubes, the packing " + m.envelopes().size()
+                    + " envelopes and budget " + budget + " tubes; they must agree");
+        }
+        return rep;
+    }
+
+    @Override
+    int exitCode() {
+        return failed ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
+    }
+}

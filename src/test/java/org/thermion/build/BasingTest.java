@@ -1,0 +1,77 @@
+package org.thermion.build;
+
+import org.junit.jupiter.api.Test;
+import org.thermion.model.Basing;
+import org.thermion.model.Electrode;
+import org.thermion.model.Machine;
+import org.thermion.model.TubeType;
+
+import java.util.List;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** The library's basing lines against published pinouts, two independent sources per tube where we have them. */
+class BasingTest {
+    private static final Machine DEMO = BuildMachines.file(BuildMachines.PUMPSTATION);
+
+    private static TubeType tube(Machine m, String name) {
+        return m.tubes().stream().filter(t -> t.name().equals(name)).findFirst().orElseThrow();
+    }
+
+    /** Checks the noval twin-triode pinout shared by the 12AU7 family. */
+    private static void assertTwinTriode(Basing b) {
+        assertThat(b.base()).isEqualTo("noval");
+        // Source 1: boxed-roc.com/misc/12ax7/12ax7.htm: pin 1 plate, 2 grid, 3 cathode; the other triode
+        // 6 plate, 7 grid, 8 cathode; heater 9-4 and 9-5, 4 and 5 tied for 6.3 V.
+        // Source 2: tubeofile.com/tubes/12BH7 (same pinout; REFERENCES.md): 1 plate (2), 2 grid (2),
+        // 3 cathode (2), 4 and 5 heater, 9 centre tap.
+        assertThat(b.pinsFor(Electrode.PLATE, 2)).containsExactly(1);
+        assertThat(b.pinsFor(Electrode.GRID, 2)).containsExactly(2);
+        assertThat(b.pinsFor(Electrode.CATHODE, 2)).containsExactly(3);
+        assertThat(b.pinsFor(Electrode.HEATER, 0)).containsExactly(4, 5);
+        assertThat(b.pinsFor(Electrode.TAP, 0)).containsExactly(9);
+        // Only source 1 gives these; from memory they match too.
+        assertThat(b.pinsFor(Electrode.PLATE, 1)).containsExactly(6);
+        assertThat(b.pinsFor(Electrode.GRID, 1)).containsExactly(7);
+        assertThat(b.pinsFor(Electrode.CATHODE, 1)).containsExactly(8);
+    }
+
+    @Test
+    void twelveAU7MatchesTwoSources() {
+        assertTwinTriode(tube(DEMO, "12AU7").basing());
+    }
+
+    @Test
+    void twelveAX7MatchesTwoSources() {
+        Machine m = BuildMachines.text(WireListTestData.usesTube("12AX7"));
+        assertTwinTriode(tube(m, "12AX7").basing());
+    }
+
+    @Test
+    void twoD21KeepsBothDisagreeingSourcesAndFlagsEveryPinTheyDifferOn() {
+        Machine m = BuildMachines.text(WireListTestData.usesTube("2D21"));
+        TubeType t = tube(m, "2D21");
+        assertThat(t.basings()).hasSize(2);
+        // r-type.org EN91 page: 1 grid 1, 2 cathode, 3 heater, 4 heater, 5 grid 2, 6 anode, 7 grid 2.
+        Basing first = t.basings().get(0);
+        assertThat(first.pinsFor(Electrode.GRID, 1)).containsExactly(1);
+        assertThat(first.pinsFor(Electrode.CATHODE, 1)).containsExactly(2);
+        assertThat(first.pinsFor(Electrode.PLATE, 1)).containsExactly(6);
+        assertThat(first.pinsFor(Electrode.SCREEN, 1)).containsExactly(5, 7);
+        // vacuumtubes.io 2D21W page: 1 nc, 2 grid 1, 3 cathode, 4 heater, 5 heater, 6 grid 2.
+        Basing second = t.basings().get(1);
+        assertThat(second.pinsFor(Electrode.GRID, 1)).containsExactly(2);
+        assertThat(second.pinsFor(Electrode.HEATER, 0)).containsExactly(4, 5);
+        // They agree on pin 4 only (a heater in both).
+        assertThat(t.doubtfulPins()).containsExactly(1, 2, 3, 5, 6, 7);
+    }
+
+    @Test
+    void everyLibraryTubeUsedByTheExamplesHasABasing() {
+        for (TubeType t : DEMO.tubes()) {
+            assertThat(t.basing()).as(t.name()).isNotNull();
+            assertThat(t.basing().source()).as(t.name()).isNotBlank();
+        }
+        assertThat(List.of(tube(DEMO, "6AL5").basing().pinCount())).containsExactly(7);
+    }
+}
