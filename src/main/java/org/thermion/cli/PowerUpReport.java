@@ -298,10 +298,35 @@ final class PowerUpReport {
         return h;
     }
 
+    /** When every cathode emits (all tubes conduct) and what each rail then carries, with its sag from nominal. */
+    private String conductLine() {
+        double at = r.allEmitSeconds();
+        if (Double.isNaN(at)) {
+            return "  some cathode does NOT reach its emission threshold within the run: not every tube conducts";
+        }
+        StringBuilder b = new StringBuilder("  every cathode emits by " + Numbers.si(at, SECONDS) + " (all tubes conduct); then:");
+        for (RailTransient rt : r.rails()) {
+            if (!rt.hasLoad()) {
+                continue;
+            }
+            int i = 0;
+            while (i + 1 < rt.t().length && rt.t()[i] < at) {
+                i++;
+            }
+            double v = rt.busVolts()[i];
+            b.append(' ').append(rt.name()).append(' ').append(Numbers.si(rt.amps()[i], AMPS)).append(" at ")
+                    .append(Numbers.si(Math.copySign(v, rt.volts()), VOLTS))
+                    .append(String.format(Locale.ROOT, " (%+.1f %%),", 100 * (v / Math.abs(rt.volts()) - 1)));
+        }
+        b.setLength(b.length() - 1);
+        return b.toString();
+    }
+
     private List<String> heaterLines() {
         List<String> out = new ArrayList<>();
         double all = r.allWarmSeconds();
         out.add("  every heater at 95 % of operating temperature " + (Double.isNaN(all) ? "NOT within the run" : "by " + Numbers.si(all, SECONDS)));
+        out.add(conductLine());
         HeaterWarmup worst = r.worstMixedOverVoltage();
         if (worst == null) {
             out.add("  no string mixes heater types");
