@@ -80,8 +80,8 @@ final class PropertyTable {
                             + "(triode: mu ex kg1 kp kvb; pentode: also kg2), the 3/2-power diode law through one point, "
                             + "or a thyratron's critical grid voltage; with where the figures come from",
                     new Slot.Choice("law", branches(
-                            "koren", List.of(new Slot.AnyOrder(List.of(koren("mu"), koren("ex"), koren("kg1"), koren("kg2"),
-                                    koren("kp"), koren("kvb"), sourceOption()))),
+                            "koren", List.of(new Slot.AnyOrder(List.of(koren("mu", above(0, 1e3)), koren("ex", from(1, 2)),
+                                    koren("kg1"), koren("kg2"), koren("kp"), koren("kvb"), sourceOption()))),
                             "diode", List.of(q("amps", "diode current", Unit.AMPERE, above(0, 100)), new Slot.Word("at"),
                                     q("volts", "diode voltage", Unit.VOLT, above(0, 1e3)), sourceOption()),
                             "gas", List.of(new Slot.Word("critical"),
@@ -89,7 +89,8 @@ final class PropertyTable {
                             null))
                     .byDefault("none: the tube's stages must state their currents")
                     .source("Koren, Glass Audio 1996 (REFERENCES.md); Child-Langmuir 3/2-power law; " + PLAUSIBLE
-                            + " of 10^9 on a Koren parameter"),
+                            + " of 10^9 on a Koren parameter, 1000 on mu (small tubes stay near 100) and 1 to 2 on ex "
+                            + "(the 3/2-power law's exponent; Koren's sets 1.3 to 1.4)"),
             Property.of("point", "a published figure to fit the model to or check it by: plate or screen current, "
                             + "transconductance (mA per V) or amplification factor, at a plate voltage, a screen voltage "
                             + "(pentodes), and a fixed grid voltage or a cathode resistor; with its source",
@@ -382,7 +383,11 @@ final class PropertyTable {
     }
 
     private static Slot.Optional koren(String param) {
-        return new Slot.Optional(param, List.of(plain("k_" + param, "Koren parameter " + param, above(0, 1e9))));
+        return koren(param, above(0, 1e9));
+    }
+
+    private static Slot.Optional koren(String param, Slot.Range range) {
+        return new Slot.Optional(param, List.of(plain("k_" + param, "Koren parameter " + param, range)));
     }
 
     private static Slot.Optional sourceOption() {
