@@ -191,7 +191,8 @@ final class PowerUpCommand implements Callable<Integer> {
                 double[] values = ResistorSweep.range(range.value().from(), range.value().to(), range.value().step());
                 ResistorSweep.Result sr;
                 try (ProgressBar bar = ProgressBar.start(err, "resistor sweep", "resistors", progressOptions.mode())) {
-                    sr = ResistorSweep.run(net, o, name, values, done -> bar.update(done, values.length));
+                    sr = ResistorSweep.run(net, o, name, values, Runtime.getRuntime().availableProcessors(),
+                            done -> bar.update(done, values.length));
                 }
                 if (svg != null) {
                     int code = PlotFile.write(svg, PowerUpFigures.sweep(sr), replace, inputs(), loader.sources(), err);

@@ -224,6 +224,8 @@ final class PropertyTable {
                     q("soft-start resistor", Unit.OHM, above(0, 1e6)),
                     new Slot.Optional("rated", List.of(q("watts", "resistor rating", Unit.WATT, above(0, 1e9)))))
                     .required("resistor 2 ohm rated 50 W").source(PLAUSIBLE),
+            Property.of("covers", "the loads behind the resistor (module instances, tube types); the rest is fed ahead of it",
+                    new Slot.Names("loads", "module instances or tube types")).byDefault("the whole rail"),
             Property.of("relay", "the bypass relay's coil data").opens(RELAY)
                     .byDefault("a 12 V relay of 100 ohm, figures as in the relay block's defaults"),
             Property.of("bypass", "what closes the bypass relay: a delay, or a thyratron stage warming",
