@@ -12,7 +12,7 @@ import static org.assertj.core.api.Assertions.within;
 class MarginAnalysisTest {
     private final TubeLibrary tubes = LibraryParts.tubes();
     private final Map<String, StageCircuit> lib = LibraryParts.stages();
-    private final RailSet rails48 = RailSet.volts("bplus", 48, "bias", -12, "relay", 24);
+    private final RailSet rails48 = RailSet.volts("bplus", 48, "bias", -24, "relay", 24);
 
     @Test
     void inverterThresholdsAreItsUnityGainPoints() {
@@ -27,7 +27,7 @@ class MarginAnalysisTest {
     }
 
     private double out(StageSolver s, double v) {
-        return s.solveAs(StageSolver.RECEIVER, lib.get("triode_nor2"), new double[] {v, -12}, false, List.of(),
+        return s.solveAs(StageSolver.RECEIVER, lib.get("triode_nor2"), new double[] {v, -24}, false, List.of(),
                 Corner.NOMINAL).point().outputVolts();
     }
 
@@ -111,10 +111,11 @@ class MarginAnalysisTest {
         MarginAnalysis a = new MarginAnalysis(s);
         NetAnalysis net = a.net(lib.get("diode_and"), new InputLevels(5, 45), lib.get("triode_nor2"), 3);
         assertThat(net.points()).hasSize(16).allMatch(DcResult::solved);
-        // AND of four, all inputs high (45 V) above the output: every diode is off, and the 47 k pull-up
-        // from 48 V meets three receivers' dividers (100 k + 47 k to -12 V, 49 k together); by hand
-        // (48*49 - 12*47) / 96 = 18.625 V. The grids sit below their cathodes, so no grid current.
-        assertThat(net.margins().voh()).isCloseTo(18.625, within(0.001));
+        // AND of four, all inputs high (45 V) above the output: every diode is off, and the 330 k
+        // pull-up from 48 V meets three receivers' dividers (470 k + 560 k to -24 V, 343.3 k together);
+        // by hand (48*343.33 - 24*330) / 673.33 = 12.713 V. Each grid tap then sits at
+        // (12.713*560 - 24*470) / 1030 = -4.0 V, below its cathode, so no grid current.
+        assertThat(net.margins().voh()).isCloseTo(12.713, within(0.001));
         long solves = s.solves();
         assertThat(a.net(lib.get("diode_and"), new InputLevels(5, 45), lib.get("triode_nor2"), 3)).isSameAs(net);
         assertThat(s.solves()).isEqualTo(solves);

@@ -20,8 +20,8 @@ class SheetsSpiceTest {
         // Input 1 is held at the machine's highest rail (48 V), input 0 at 0 V.
         assertThat(d.card("Vin1")).isEqualTo(new SpiceCard.VoltageSource("Vin1", "in1", "0", 48));
         assertThat(d.card("Vin0")).isEqualTo(new SpiceCard.VoltageSource("Vin0", "in0", "0", 0));
-        // The library's 15 k plate load and two receivers' grid dividers.
-        assertThat(d.card("Rload")).isEqualTo(new SpiceCard.Resistor("Rload", "bplus", "plate", 15000));
+        // The library's 100 k plate load and two receivers' grid dividers.
+        assertThat(d.card("Rload")).isEqualTo(new SpiceCard.Resistor("Rload", "bplus", "plate", 100000));
         assertThat(d.cards()).filteredOn(c -> c.name().startsWith("Rreceiver_grid_series")).hasSize(2);
         assertThat(r.out().lines()).allSatisfy(l -> assertThat(l.length()).isLessThanOrEqualTo(SpiceDeck.WIDTH));
     }

@@ -26,7 +26,7 @@ class LevelAnalysisTest {
     /** Rails the library's logic stages were drawn for: 48 V B+, -12 V bias (parts library). */
     static final String RAILS = """
             rail bplus { voltage 48 V }
-            rail bias { voltage -12 V }
+            rail bias { voltage -24 V }
             rail heat { voltage 12.6 V }
             heaters on heat { parallel 6AU6 12AU7 6AL5 }
             realize { not pentode_inverter; nor triode_nor2; and diode_and }
