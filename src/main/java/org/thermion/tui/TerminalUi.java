@@ -293,12 +293,12 @@ public final class TerminalUi {
             StatusLines.title(c, cols, session, program, null, view);
             bench().draw(c, new Rect(0, 1, cols, rows - 3));
             StatusLines.status(c, cols, rows - 2, session, view);
-            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, false);
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), session.switchFed(), view, false);
         } else if (view.mode == View.Mode.POWER_UP) {
             StatusLines.title(c, cols, session, program, null, view);
             powerUp.draw(c, new Rect(0, 1, cols, rows - 3), view);
             StatusLines.status(c, cols, rows - 2, session, view);
-            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, !plan.hidden().isEmpty());
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), session.switchFed(), view, !plan.hidden().isEmpty());
         } else {
             StatusLines.title(c, cols, session, program, plan, view);
             if (session.switchFed()) {
@@ -320,7 +320,7 @@ public final class TerminalUi {
                 PowerPanel.draw(c, plan.rect(Panel.POWER), session);
             }
             StatusLines.status(c, cols, rows - 2, session, view);
-            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, !plan.hidden().isEmpty());
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), session.switchFed(), view, !plan.hidden().isEmpty());
         }
         if (view.help && !plan.tooSmall()) {
             HelpOverlay.draw(c, cols, rows, help, view.helpPage);
