@@ -54,7 +54,7 @@ final class IoPanel {
             for (int i = 0; i < rows && i < changes.size(); i++) {
                 OutputChange ch = changes.get(changes.size() - 1 - i);
                 int row = in.row() + 1 + i;
-                String when = Canvas.padLeft(String.format("%,d", ch.cycle()), 9) + "." + ch.phase();
+                String when = Canvas.padLeft(String.format("%,d", s.cycleBase() + ch.cycle()), 9) + "." + ch.phase();
                 int x = cc.text(logCol, row, when + " ", Palette.DIM);
                 if (ch.value().length() == 1) {
                     Level l = Level.of(ch.value().charAt(0));

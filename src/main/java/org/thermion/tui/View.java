@@ -23,4 +23,6 @@ final class View {
     /** Runs keep to the machine's declared clock instead of going flat out. */
     boolean machineSpeed;
     String message = "";
+    /** What a reload said (changes and what was kept, or the saved files' errors); null when closed. */
+    Notice notice;
 }
