@@ -66,6 +66,11 @@ final class VerifyCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (default: ${DEFAULT-VALUE}).")
     Format format = Format.text;
 
+    @Option(names = "--threads", paramLabel = "N",
+            description = "Instructions checked at once, each on its own simulator; the report is the same for any N"
+                    + " (default: the processors, ${DEFAULT-VALUE}).")
+    int threads = Runtime.getRuntime().availableProcessors();
+
     @Mixin
     CommonOptions common;
 
@@ -79,8 +84,8 @@ final class VerifyCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        if (mutate < 0 || samples < 64 || max < 0) {
-            err.println("error: --mutate and --max take a count >= 0, --samples at least 64");
+        if (mutate < 0 || samples < 64 || max < 0 || threads < 1) {
+            err.println("error: --mutate and --max take a count >= 0, --samples at least 64, --threads at least 1");
             return ExitCodes.BAD_INPUT;
         }
         Machine m = new MachineLoader().load(file, err, false);
@@ -99,7 +104,7 @@ final class VerifyCommand implements Callable<Integer> {
         Verifier.Options opt = Verifier.Options.defaults().withDecode(decode, allTargets ? 16 : 4)
                 .withSampling(spec.commandLine().getParseResult().hasMatchedOption("--samples")
                         ? Math.min(Verifier.EXHAUSTIVE_LIMIT, samples) : Verifier.EXHAUSTIVE_LIMIT, samples, seed)
-                .withProgress(mutate > 0 ? null : progress::update);
+                .withProgress(mutate > 0 ? null : progress::update).withThreads(threads);
         VerifyReport r;
         try {
             r = new Verifier(m, opt).run();
