@@ -337,6 +337,11 @@ public final class Session {
         return address >= 0 && address < listingIndexOfAddress.length ? listingIndexOfAddress[address] : -1;
     }
 
+    /** How the bus {@code name} (an input or output bus) is written: hexadecimal unless the description declares a radix. */
+    public Radix radix(String name) {
+        return Radix.HEX;
+    }
+
     /** True when the instruction word comes from switches (no ROM or PC): the UI shows a switch panel for it. */
     public boolean switchFed() {
         return machine.isa() != null && machine.isa().wordFromSwitches();

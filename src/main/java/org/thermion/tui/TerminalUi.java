@@ -310,6 +310,10 @@ public final class TerminalUi {
                     bench().start();
                 }
             }
+            case BUS_BITS -> {
+                view.bits = !view.bits;
+                view.message = view.bits ? "every bus bit on its own row" : "buses as numbers";
+            }
             case NEXT_RAIL -> view.rail++;
             case PREVIOUS_RAIL -> view.rail--;
             case HELP -> {
@@ -380,7 +384,7 @@ public final class TerminalUi {
                         "no decode nets of the name given were found in the top module");
             }
             if (plan.shows(Panel.IO)) {
-                IoPanel.draw(c, plan.rect(Panel.IO), session);
+                IoPanel.draw(c, plan.rect(Panel.IO), session, view);
             }
             if (plan.shows(Panel.POWER)) {
                 PowerPanel.draw(c, plan.rect(Panel.POWER), session);
@@ -418,7 +422,7 @@ public final class TerminalUi {
             case DECODE:
                 return LampGrid.height(decodeNames(), width);
             case IO:
-                return IoPanel.height(session);
+                return IoPanel.height(session, view);
             case POWER:
                 return PowerPanel.height(session);
             default:
