@@ -19,7 +19,8 @@ import java.util.Map;
  * Everything the build documents are printed from: the wiring (parts, nodes, sockets) made from the
  * stage circuits and the packing, and the heater strings in order. Built once per machine.
  */
-public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.HeaterRun> heaters) {
+public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.HeaterRun> heaters,
+                             MachineCircuits circuits) {
 
     public static BuildDocuments of(Machine m) {
         MachineCircuits circuits = MachineCircuits.of(m);
@@ -36,18 +37,8 @@ public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.H
                 }
             }
         }
-        Map<Integer, Integer> latchByQ = new HashMap<>();
-        for (Latch l : n.latches()) {
-            latchByQ.put(l.output(), l.id());
-        }
-        int[] qbar = new int[n.latches().size()];
-        java.util.Arrays.fill(qbar, -1);
-        for (Gate g : n.gates()) {
-            Integer l = g.stage() < 0 && g.fn() == org.thermion.model.GateFn.NOT ? latchByQ.get(g.input(0)) : null;
-            if (l != null) {
-                qbar[l] = g.output();
-            }
-        }
+        Map<Integer, Integer> latchByQ = latchesByOutput(n);
+        int[] qbar = complements(n);
         for (Gate g : n.gates()) {
             if (g.stage() >= 0) {
                 stages.gate(g, sections.getOrDefault(StageKey.gate(g.id()), List.of()), -1);
@@ -79,7 +70,29 @@ public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.H
             w.parts.add(new Part(w.boards.next(0, PartClass.RELAY), PartClass.RELAY, s.relay().coilOhms(),
                     "relay, coil " + Values.ohms(s.relay().coilOhms()), 0, "bypass of soft start " + s.name(), Double.NaN, -1));
         }
-        return new BuildDocuments(m, w.build(), List.copyOf(hw.runs));
+        return new BuildDocuments(m, w.build(), List.copyOf(hw.runs), circuits);
+    }
+
+    private static Map<Integer, Integer> latchesByOutput(Netlist n) {
+        Map<Integer, Integer> latchByQ = new HashMap<>();
+        for (Latch l : n.latches()) {
+            latchByQ.put(l.output(), l.id());
+        }
+        return latchByQ;
+    }
+
+    /** Per latch, the net of its complement (a free inverter of its output: the flip-flop's second plate), -1 for none. */
+    static int[] complements(Netlist n) {
+        Map<Integer, Integer> latchByQ = latchesByOutput(n);
+        int[] qbar = new int[n.latches().size()];
+        java.util.Arrays.fill(qbar, -1);
+        for (Gate g : n.gates()) {
+            Integer l = g.stage() < 0 && g.fn() == org.thermion.model.GateFn.NOT ? latchByQ.get(g.input(0)) : null;
+            if (l != null) {
+                qbar[l] = g.output();
+            }
+        }
+        return qbar;
     }
 
     /** The ROM's data lines and the program counter's inputs end on one connector each. */

@@ -67,7 +67,7 @@ final class StageWiring {
                 w.m.netlist().netName(l.output()));
         Optional<StageCircuit> c = circuits.circuit(st);
         int q = w.net(l.output());
-        int qb = qbar >= 0 ? w.net(qbar) : w.local(in.name + "/plateB", org.thermion.build.Node.Kind.LOCAL);
+        int qb = qbar >= 0 ? w.net(qbar) : w.stageLocal(in.key, in.name, "plateB");
         String rail;
         double load;
         GridNetwork cross;
@@ -108,7 +108,7 @@ final class StageWiring {
     private void tubeStage(Instance in, TubeStage t, int[] inputs, int out) {
         boolean cathodeOut = t.output() == TubeStage.Output.CATHODE;
         int rail = w.rail(t.plateRail());
-        int plate = t.load().direct() ? rail : cathodeOut ? w.local(in.name + "/plate", Node.Kind.LOCAL) : out;
+        int plate = t.load().direct() ? rail : cathodeOut ? w.stageLocal(in.key, in.name, "plate") : out;
         if (!t.load().direct()) {
             load(in, t.load(), rail, plate);
         }
@@ -119,7 +119,7 @@ final class StageWiring {
         int below = k;
         for (int i = 0; i < inputs.length; i++) {
             int g = grid(in, t.grid(), w.net(inputs[i]), String.valueOf(i));
-            int p = series && i < inputs.length - 1 ? w.local(in.name + "/stack" + i, Node.Kind.LOCAL) : plate;
+            int p = series && i < inputs.length - 1 ? w.stageLocal(in.key, in.name, "stack" + i) : plate;
             int kk = series ? below : k;
             for (int s = 0; s < spi; s++) {
                 int sec = i * spi + s;
@@ -149,7 +149,7 @@ final class StageWiring {
         int rail = w.rail(t.plateRail());
         int top = rail;
         if (t.plateOhms() > 0) {
-            top = w.local(in.name + "/feed", Node.Kind.LOCAL);
+            top = w.stageLocal(in.key, in.name, "feed");
             resistor(in, "plate", t.plateOhms(), rail, top, "plate resistor");
         }
         int anode = w.net(output);
@@ -218,7 +218,7 @@ final class StageWiring {
         if (c.ohms() == 0) {
             return w.rail(c.rail());
         }
-        return cathodeTo(in, c, w.local(in.name + "/cathode", Node.Kind.LOCAL));
+        return cathodeTo(in, c, w.stageLocal(in.key, in.name, "cathode"));
     }
 
     private int cathodeTo(Instance in, CathodeReturn c, int k) {
@@ -234,7 +234,7 @@ final class StageWiring {
         if (s.ohms() == 0) {
             return w.rail(s.rail());
         }
-        int node = w.local(in.name + "/screen", Node.Kind.LOCAL);
+        int node = w.stageLocal(in.key, in.name, "screen");
         resistor(in, "screen", s.ohms(), w.rail(s.rail()), node, "screen resistor");
         return node;
     }
@@ -243,14 +243,14 @@ final class StageWiring {
     private int grid(Instance in, GridNetwork g, int input, String tag) {
         int tap = input;
         if (g.seriesOhms() > 0) {
-            tap = w.local(in.name + "/tap" + tag, Node.Kind.LOCAL);
+            tap = w.stageLocal(in.key, in.name, "tap" + tag);
             resistor(in, "grid.series", g.seriesOhms(), input, tap, "grid series " + tag);
         }
         if (Double.isFinite(g.toBiasOhms()) && g.toBiasOhms() > 0) {
             resistor(in, "grid.tobias", g.toBiasOhms(), tap, w.rail(g.biasRail()), "grid to bias " + tag);
         }
         if (g.stopperOhms() > 0) {
-            int pin = w.local(in.name + "/grid" + tag, Node.Kind.LOCAL);
+            int pin = w.stageLocal(in.key, in.name, "grid" + tag);
             resistor(in, "grid.stopper", g.stopperOhms(), tap, pin, "grid stopper " + tag);
             return pin;
         }

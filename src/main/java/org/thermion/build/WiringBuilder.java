@@ -30,6 +30,8 @@ final class WiringBuilder {
     private final List<Node.Kind> kinds = new ArrayList<>();
     private final List<Integer> nets = new ArrayList<>();
     private final List<List<Lead>> leads = new ArrayList<>();
+    private final Map<Integer, Integer> stageOf = new HashMap<>();
+    private final Map<Integer, String> pointOf = new HashMap<>();
     private final String[] socketRef;
     private final String[] tubeRef;
     private final int[][] socketNodes;
@@ -89,6 +91,14 @@ final class WiringBuilder {
     /** A node inside one stage or heater string, named for people. */
     int local(String name, Node.Kind kind) {
         return node("local:" + name, name, kind, -1);
+    }
+
+    /** A node inside stage instance {@code stage} ({@link StageKey}): node {@code point} of its circuit. */
+    int stageLocal(int stage, String name, String point) {
+        int n = local(name + "/" + point, Node.Kind.LOCAL);
+        stageOf.put(n, stage);
+        pointOf.put(n, point);
+        return n;
     }
 
     private int node(String key, String name, Node.Kind kind, int net) {
@@ -167,7 +177,8 @@ final class WiringBuilder {
     Wiring build() {
         List<Node> nodes = new ArrayList<>(nodeNames.size());
         for (int i = 0; i < nodeNames.size(); i++) {
-            nodes.add(new Node(nodeNames.get(i), kinds.get(i), nets.get(i), leads.get(i)));
+            nodes.add(new Node(nodeNames.get(i), kinds.get(i), nets.get(i), leads.get(i), stageOf.getOrDefault(i, -1),
+                    pointOf.get(i)));
         }
         List<Wiring.Socket> sockets = new ArrayList<>();
         for (Envelope e : m.envelopes()) {

@@ -13,8 +13,11 @@ final class DcSolver {
     private static final int MAX_ITERATIONS = 200;
     private static final double MAX_STEP_VOLTS = 20;
 
-    /** The node voltages, or null with {@link #failure} set. */
-    record Solution(double[] volts, int iterations, String failure) {
+    /** The node voltages, or null with {@link #failure} set and the change that would cure it. */
+    record Solution(double[] volts, int iterations, String failure, String fix) {
+        Solution(double[] volts, int iterations) {
+            this(volts, iterations, null, null);
+        }
     }
 
     private DcSolver() {
@@ -24,13 +27,14 @@ final class DcSolver {
         int floating = c.floatingNode();
         if (floating >= 0) {
             return new Solution(null, 0, "node '" + c.names.get(floating)
-                    + "' has no DC path to a rail (a floating grid or an open load)");
+                    + "' has no DC path to a rail (a floating grid or an open load)",
+                    "give every grid a resistor to a rail (`grid divider 100 k 47 k to bias`) and every plate a load");
         }
         int[] free = freeNodes(c);
         double[] v = c.guess.clone();
         int it = newton(c, free, v, 1.0, 0);
         if (it >= 0) {
-            return new Solution(v, it, null);
+            return new Solution(v, it);
         }
         v = c.guess.clone();
         int total = 0;
@@ -41,18 +45,20 @@ final class DcSolver {
             total += Math.max(n, 0);
         }
         if (ok) {
-            return new Solution(v, total, null);
+            return new Solution(v, total);
         }
         v = c.guess.clone();
         for (int step = 1; step <= 20; step++) {
             int n = newton(c, free, v, step / 20.0, 0);
             if (n < 0) {
                 return new Solution(null, total, "Newton's method did not converge, not even by conductance or "
-                        + "source stepping");
+                        + "source stepping", "look for a part value far from its neighbours (a load or divider off by "
+                        + "a factor of 1000, a tube model with extreme parameters), or state the stage's currents with "
+                        + "draw lines");
             }
             total += n;
         }
-        return new Solution(v, total, null);
+        return new Solution(v, total);
     }
 
     private static int[] freeNodes(Circuit c) {

@@ -33,7 +33,8 @@ final class PointReader {
             if (r != null && Double.isFinite(r.limitAmps()) && Math.abs(e.getValue()) > r.limitAmps()) {
                 return new NoDcSolution(stage, String.format(java.util.Locale.ROOT,
                         "rail %s cannot supply the load: %.2f mA drawn, limit %.2f mA", e.getKey(),
-                        e.getValue() * 1e3, r.limitAmps() * 1e3));
+                        Math.abs(e.getValue()) * 1e3, r.limitAmps() * 1e3), "raise rail " + e.getKey()
+                        + "'s current limit, or use a larger plate load so that the stage draws less");
             }
         }
         List<PartCurrent> parts = new ArrayList<>();

@@ -132,17 +132,19 @@ public final class StageSolver {
         solves++;
         for (double v : inputVolts) {
             if (!Double.isFinite(v)) {
-                return new NoDcSolution(stage.name(), "input voltage is not a number: " + v);
+                return new NoDcSolution(stage.name(), "input voltage is not a number: " + v,
+                        "give the stage's driving net a level (its driver has no DC solution either)");
             }
         }
         CircuitBuilder b = builder(role, stage, inputVolts, stored, loads, corner);
         if (b.missingRail() != null) {
-            return new NoDcSolution(stage.name(), "no rail named " + b.missingRail());
+            return new NoDcSolution(stage.name(), "no rail named " + b.missingRail(),
+                    "declare `rail " + b.missingRail() + " { voltage ... }` or name another rail in the stage");
         }
         Circuit c = b.build();
         DcSolver.Solution s = DcSolver.solve(c);
         if (s.volts() == null) {
-            return new NoDcSolution(stage.name(), s.failure());
+            return new NoDcSolution(stage.name(), s.failure(), s.fix());
         }
         return PointReader.read(stage.name(), c, s, rails, role + ".");
     }

@@ -27,7 +27,7 @@ public final class TubeFitter {
     /** Fits the {@code free} parameters of {@code start} to {@code points}. */
     public static FittedModel<KorenTriode> fitTriode(KorenTriode start, List<String> free, List<FitPoint> points) {
         double[] all = {start.mu(), start.ex(), start.kg1(), start.kp(), start.kvb()};
-        Fit r = fit(all, index(TRIODE, free), points,
+        Fit r = fit(all, index(TRIODE, free), TRIODE, points,
                 p -> start.with(p[0], p[1], p[2], p[3], p[4], start.source()));
         double[] p = r.params;
         KorenTriode m = start.with(p[0], p[1], p[2], p[3], p[4], start.source());
@@ -37,7 +37,7 @@ public final class TubeFitter {
     /** Fits the {@code free} parameters of {@code start} to {@code points}. */
     public static FittedModel<KorenPentode> fitPentode(KorenPentode start, List<String> free, List<FitPoint> points) {
         double[] all = {start.mu(), start.ex(), start.kg1(), start.kg2(), start.kp(), start.kvb()};
-        Fit r = fit(all, index(PENTODE, free), points,
+        Fit r = fit(all, index(PENTODE, free), PENTODE, points,
                 p -> start.with(p[0], p[1], p[2], p[3], p[4], p[5], start.source()));
         double[] p = r.params;
         KorenPentode m = start.with(p[0], p[1], p[2], p[3], p[4], p[5], start.source());
@@ -72,19 +72,34 @@ public final class TubeFitter {
         return idx;
     }
 
-    private static Fit fit(double[] all, int[] free, List<FitPoint> points, Maker maker) {
+    /**
+     * The fit; an {@link IllegalArgumentException} saying why when it does not converge or a
+     * parameter runs away to zero or infinity (points that no curve of the law passes through).
+     */
+    private static Fit fit(double[] all, int[] free, List<String> names, List<FitPoint> points, Maker maker) {
         double[] start = new double[free.length];
         for (int i = 0; i < free.length; i++) {
             start[i] = Math.log(all[free[i]]);
         }
-        LeastSquaresOptimizer.Optimum opt = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
-                .start(start)
-                .target(new double[points.size()])
-                .maxEvaluations(10_000)
-                .maxIterations(1_000)
-                .model(x -> valueAndJacobian(x, all, free, points, maker))
-                .build());
+        LeastSquaresOptimizer.Optimum opt;
+        try {
+            opt = new LevenbergMarquardtOptimizer().optimize(new LeastSquaresBuilder()
+                    .start(start)
+                    .target(new double[points.size()])
+                    .maxEvaluations(10_000)
+                    .maxIterations(1_000)
+                    .model(x -> valueAndJacobian(x, all, free, points, maker))
+                    .build());
+        } catch (org.hipparchus.exception.MathIllegalStateException e) {
+            throw new IllegalArgumentException("the fit to its points did not converge (" + e.getMessage() + ")");
+        }
         double[] p = params(opt.getPoint().toArray(), all, free);
+        for (int i : free) {
+            if (!(p[i] > Double.MIN_NORMAL) || !(p[i] < 1e12)) {
+                throw new IllegalArgumentException("the fit to its points ran away: " + names.get(i) + " went to "
+                        + (p[i] >= 1e12 ? "infinity" : "zero") + ", so no curve of the law passes near the points");
+            }
+        }
         return new Fit(p, opt.getIterations());
     }
 

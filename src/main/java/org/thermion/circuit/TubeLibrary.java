@@ -24,15 +24,31 @@ public final class TubeLibrary {
     private TubeLibrary() {
     }
 
-    /** The models of every tube type that declares one; the others have none. */
+    /**
+     * The models of every tube type that declares one; the others have none, nor has a tube whose
+     * model cannot be built ({@link #problem}, reported at its fit line when the machine was read).
+     */
     public static TubeLibrary of(Collection<TubeType> tubes) {
         TubeLibrary lib = new TubeLibrary();
         for (TubeType t : tubes) {
-            if (t.curves() != null) {
+            if (t.curves() != null && problem(t) == null) {
                 lib.add(t);
             }
         }
         return lib;
+    }
+
+    /** Why the declared model of {@code t} cannot be built (its fit fails or runs away); null when it can. */
+    public static String problem(TubeType t) {
+        if (t.curves() == null) {
+            return null;
+        }
+        try {
+            new TubeLibrary().add(t);
+            return null;
+        } catch (IllegalArgumentException | org.hipparchus.exception.MathRuntimeException e) {
+            return e.getMessage();
+        }
     }
 
     /** The model of a tube type, if it has one. */

@@ -10,7 +10,7 @@ import org.thermion.lang.Span;
 import org.thermion.levels.Finding;
 
 /**
- * {@code check}'s electrical findings as diagnostics at the stage use (or heater rule) they
+ * {@code check}'s electrical findings as diagnostics at the stage use (heater rule, soft start) they
  * concern. A line that places many stages (a module used many times, a loop) gets one
  * diagnostic per kind of finding: the worst one, and how many more there are.
  */
@@ -24,7 +24,7 @@ final class ElectricalDiagnostics {
         Map<String, Span> spans = new LinkedHashMap<>();
         for (Finding f : findings) {
             Span s = f.use() != null ? (f.use().latch() ? where.latch(f.use().index()) : where.gate(f.use().index()))
-                    : where.heaterRule(f.heaterRule());
+                    : f.softStart() >= 0 ? where.softStart(f.softStart()) : where.heaterRule(f.heaterRule());
             String key = s + "|" + f.kind() + "|" + f.error();
             if (first.putIfAbsent(key, f) == null) {
                 spans.put(key, s);

@@ -4,6 +4,7 @@ import org.thermion.elab.Elaborator;
 import org.thermion.elab.SourceMap;
 import org.thermion.elab.ModuleCheck;
 import org.thermion.lang.DiagnosticPrinter;
+import org.thermion.circuit.TubeLibrary;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.SourceSet;
 import org.thermion.model.Machine;
@@ -38,7 +39,7 @@ public final class MachineLoader {
 
     /** As {@link #load}, keeping modules marked {@code notbuilt} in the logic (flagged): the whole description. */
     public Machine loadAsDescribed(Path file, PrintWriter err) {
-        Machine m = new Elaborator(sources, diags).asDescribed().elaborate(file);
+        Machine m = new Elaborator(sources, diags).asDescribed().withTubeModelCheck(TubeLibrary::problem).elaborate(file);
         if (diags.hasErrors()) {
             new DiagnosticPrinter(sources).print(diags, err);
         }
@@ -50,7 +51,7 @@ public final class MachineLoader {
      * is no error: the machine is null and {@link #modulesAlone()} lists its modules, checked alone.
      */
     public Machine loadOrModules(Path file, PrintWriter err, boolean showWarnings) {
-        Elaborator elaborator = new Elaborator(sources, diags);
+        Elaborator elaborator = new Elaborator(sources, diags).withTubeModelCheck(TubeLibrary::problem);
         Machine m = elaborator.elaborate(file);
         modulesAlone = elaborator.modulesAlone();
         sourceMap = elaborator.sourceMap();

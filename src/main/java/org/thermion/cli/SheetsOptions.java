@@ -16,9 +16,13 @@ final class SheetsOptions {
     @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (default: ${DEFAULT-VALUE}).")
     Format format = Format.text;
 
+    /** The loader of the last {@link #load}: its sources serve diagnostics of files read beside the machine. */
+    MachineLoader loader;
+
     /** The elaborated machine, or null after printing its errors (exit 2). */
     Machine load(PrintWriter err) {
-        Machine m = new MachineLoader().load(machineFile, err, false);
+        loader = new MachineLoader();
+        Machine m = loader.load(machineFile, err, false);
         err.flush();
         return m;
     }

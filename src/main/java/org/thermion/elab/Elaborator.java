@@ -7,6 +7,7 @@ import org.thermion.lang.ast.Decl;
 import org.thermion.lang.ast.Prop;
 import org.thermion.lang.ast.SourceFile;
 import org.thermion.lang.ast.Value;
+import org.thermion.model.BuiltBlock;
 import org.thermion.model.Clock;
 import org.thermion.model.Gate;
 import org.thermion.model.Isa;
@@ -37,6 +38,7 @@ public final class Elaborator {
     private static final int MAX_PHASES = 8;
     private List<ModuleCheck> modulesAlone = List.of();
     private SourceMap sourceMap = SourceMap.NONE;
+    private TubeModelCheck modelCheck = TubeModelCheck.NONE;
 
     public Elaborator(SourceSet sources, Diagnostics diags) {
         this.sources = sources;
@@ -50,6 +52,12 @@ public final class Elaborator {
      */
     public Elaborator asDescribed() {
         this.asDescribed = true;
+        return this;
+    }
+
+    /** Reports a tube model that {@code check} cannot build (a fit that runs away) at the tube's fit line. */
+    public Elaborator withTubeModelCheck(TubeModelCheck check) {
+        this.modelCheck = check;
         return this;
     }
 
@@ -138,7 +146,7 @@ public final class Elaborator {
     }
 
     private Machine buildChecked(Declarations decls, List<SourceFile> files) {
-        Parts parts = new Parts(decls, diags);
+        Parts parts = new Parts(decls, diags, modelCheck);
         if (decls.machines.isEmpty() && checkModulesAlone(decls, parts, files)) {
             return null;
         }
@@ -281,12 +289,17 @@ public final class Elaborator {
         int[] gateEnvelope = placed.gateEnvelope;
         int[] latchEnvelope = placed.latchEnvelope;
         SoftStartReader softStartReader = new SoftStartReader(parts, packer, diags);
+        List<Span> softStartSpans = new ArrayList<>();
         for (Prop p : decls.softStarts.values()) {
             SoftStart ss = softStartReader.read(p, modules);
             if (ss != null) {
                 softStarts.add(ss);
+                softStartSpans.add(p.block().stream().filter(q -> q.key().text().equals("bypass")).map(Prop::span)
+                        .findFirst().orElse(p.span()));
             }
         }
+        List<BuiltBlock> built = new BuiltBlocks(parts, packer, diags).build(mb, pc != null ? pc.width() : 0,
+                rom != null ? rom.words() : 0, rom != null ? rom.width() : 0, modules);
         for (Prop h : decls.heaters) {
             packer.readRules(h);
         }
@@ -326,7 +339,7 @@ public final class Elaborator {
         if (diags.hasErrors()) {
             return null;
         }
-        sourceMap = new SourceMap(gateSpans, latchSpans, packer.ruleSpans(), marginRules);
+        sourceMap = new SourceMap(gateSpans, latchSpans, packer.ruleSpans(), softStartSpans, marginRules);
         String[] places = new String[nb.names.size()];
         for (int n = 0; n < places.length; n++) {
             org.thermion.lang.Span s = nb.driverSpan.get(n);
@@ -339,7 +352,7 @@ public final class Elaborator {
         return new Machine(mb.name, new Clock(mb.phases, mb.period), List.copyOf(parts.tubes), List.copyOf(parts.stages),
                 List.copyOf(parts.rails), List.copyOf(packer.rules), List.copyOf(softStarts), List.copyOf(modules), netlist,
                 rom, pc, List.copyOf(inputs), List.copyOf(outputs), packer.levelized(order),
-                List.copyOf(packer.strings), isa, gateEnvOrdered, latchEnvelope);
+                List.copyOf(packer.strings), isa, gateEnvOrdered, latchEnvelope, built);
     }
 
     /** A bus port becomes one machine bit per line: {@code code[0]}, {@code code[1]}, ... */

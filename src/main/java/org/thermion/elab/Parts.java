@@ -35,10 +35,18 @@ final class Parts {
     private final java.util.Set<String> missingRails = new java.util.HashSet<>();
     private final Declarations decls;
     private final Diagnostics diags;
+    private final TubeModelCheck modelCheck;
+    /** Tubes whose model line was written but is in error (reported at the tube). */
+    private final java.util.Set<String> modelInError = new java.util.HashSet<>();
 
     Parts(Declarations decls, Diagnostics diags) {
+        this(decls, diags, TubeModelCheck.NONE);
+    }
+
+    Parts(Declarations decls, Diagnostics diags, TubeModelCheck modelCheck) {
         this.decls = decls;
         this.diags = diags;
+        this.modelCheck = modelCheck;
         for (Prop p : decls.rails.values()) {
             rail(p);
         }
@@ -141,11 +149,19 @@ final class Parts {
         double cin = b.has("cin") ? b.num("cin") : cgk + cgp;
         double cout = b.has("cout") ? b.num("cout") : cpk + cgp;
         PropLine source = b.line("source");
-        return new TubeType(name, kind, (int) b.num("sections"), List.copyOf(heaters), b.num("warmup"), b.num("coldratio"),
-                cgk, cgp, cpk, cin, cout, b.num("avgcurrent"), b.num("peakcurrent"), b.num("arcdrop"),
+        TubeCurvesReader curvesReader = new TubeCurvesReader(diags);
+        TubeType t = new TubeType(name, kind, (int) b.num("sections"), List.copyOf(heaters), b.num("warmup"),
+                b.num("coldratio"), cgk, cgp, cpk, cin, cout, b.num("avgcurrent"), b.num("peakcurrent"), b.num("arcdrop"),
                 source == null ? "" : source.word("value"),
                 new BasingReader(diags).read(b.lines("basing"), kind, (int) b.num("sections")),
-                new TubeCurvesReader(diags).read(name, kind, b));
+                curvesReader.read(name, kind, b));
+        if (t.curves() != null && !curvesReader.buildable(t, b, modelCheck)) {
+            t = t.withCurves(null);
+        }
+        if (t.curves() == null && (b.has("model") || b.rejected("model"))) {
+            modelInError.add(name);
+        }
+        return t;
     }
 
     /** The stage named, built on first use; -1 (reported) when unknown. */
@@ -231,7 +247,7 @@ final class Parts {
         int fanIn = b.has("fanin") ? (int) b.num("fanin") : function.defaultFanIn;
         boolean perInput = sections != null && sections.has("per");
         StageCircuitSpec circuit = !blockOk ? null : new StageCircuitReader(diags,
-                (r, at) -> r.equals("ground") || stageRail(r, at, name, p, use) >= 0)
+                (r, at) -> r.equals("ground") || stageRail(r, at, name, p, use) >= 0, modelInError::contains)
                 .read(name, function, tubes.get(tube), b, (int) b.num("sections"), fanIn, perInput, p.values().get(0).span());
         if (circuit != null && circuit.outputAtCathode() && circuit.load() == null) {
             // A follower's load, as delays and dissipation see it, is its cathode resistor.

@@ -20,6 +20,8 @@ final class PropBlock {
     private final PropertyTable table;
     private final Map<String, List<PropLine>> lines = new LinkedHashMap<>();
     private final Map<String, PropBlock> nested = new HashMap<>();
+    /** Keys written with at least one line dropped for an error (already reported). */
+    private final java.util.Set<String> rejected = new java.util.HashSet<>();
 
     private PropBlock(PropertyTable table) {
         this.table = table;
@@ -56,6 +58,8 @@ final class PropBlock {
             PropLine line = new PropReader(q, diags).line(p);
             if (line != null) {
                 b.lines.computeIfAbsent(key, k -> new ArrayList<>()).add(line);
+            } else {
+                b.rejected.add(key);
             }
         }
         for (Property p : table.properties) {
@@ -78,6 +82,11 @@ final class PropBlock {
 
     boolean has(String key) {
         return lines.containsKey(key);
+    }
+
+    /** True when a line of {@code key} was written but dropped for an error already reported. */
+    boolean rejected(String key) {
+        return rejected.contains(key);
     }
 
     /** The main number of {@code key}, or the table's default (NaN where it has none). */

@@ -80,8 +80,8 @@ final class PropertyTable {
                             + "(triode: mu ex kg1 kp kvb; pentode: also kg2), the 3/2-power diode law through one point, "
                             + "or a thyratron's critical grid voltage; with where the figures come from",
                     new Slot.Choice("law", branches(
-                            "koren", List.of(new Slot.AnyOrder(List.of(koren("mu"), koren("ex"), koren("kg1"), koren("kg2"),
-                                    koren("kp"), koren("kvb"), sourceOption()))),
+                            "koren", List.of(new Slot.AnyOrder(List.of(koren("mu", above(0, 1e3)), koren("ex", from(1, 2)),
+                                    koren("kg1"), koren("kg2"), koren("kp"), koren("kvb"), sourceOption()))),
                             "diode", List.of(q("amps", "diode current", Unit.AMPERE, above(0, 100)), new Slot.Word("at"),
                                     q("volts", "diode voltage", Unit.VOLT, above(0, 1e3)), sourceOption()),
                             "gas", List.of(new Slot.Word("critical"),
@@ -89,7 +89,8 @@ final class PropertyTable {
                             null))
                     .byDefault("none: the tube's stages must state their currents")
                     .source("Koren, Glass Audio 1996 (REFERENCES.md); Child-Langmuir 3/2-power law; " + PLAUSIBLE
-                            + " of 10^9 on a Koren parameter"),
+                            + " of 10^9 on a Koren parameter, 1000 on mu (small tubes stay near 100) and 1 to 2 on ex "
+                            + "(the 3/2-power law's exponent; Koren's sets 1.3 to 1.4)"),
             Property.of("point", "a published figure to fit the model to or check it by: plate or screen current, "
                             + "transconductance (mA per V) or amplification factor, at a plate voltage, a screen voltage "
                             + "(pentodes), and a fixed grid voltage or a cathode resistor; with its source",
@@ -235,7 +236,13 @@ final class PropertyTable {
             Property.of("phases", "clock phases per machine cycle", whole("number of phases", 1, 8)).byDefault(2)
                     .source(PLAUSIBLE),
             Property.of("period", "machine cycle period (phases share it equally)", q("clock period", Unit.SECOND, above(0, 3600)))
-                    .byDefault(100e-6).source("demo value; " + PLAUSIBLE));
+                    .byDefault(100e-6).source("demo value; " + PLAUSIBLE),
+            Property.of("uses", "a stage the clock generator is built from: N instances of a stage per phase, or once",
+                    whole("instances", 1, 1000000), name("stage", "a stage name", List.of()),
+                    new Slot.Choice("scale", orderedMap("per", List.of(name("unit", "one of phase", List.of("phase"))),
+                            "once", List.of()), null)).many().source(PLAUSIBLE),
+            Property.of("offboard", "the clock generator is not made of tubes and is not counted; optionally why",
+                    new Slot.Optional("because", List.of(text("what it is made of")))).byDefault("counted when `uses` lines state its stages, else left out"));
 
     static final PropertyTable ROM = new PropertyTable("rom", "rom { ... } inside the machine block",
             Property.of("words", "ROM size in words", whole("ROM size in words", 1, 1 << 20)).byDefault(256)
@@ -244,7 +251,12 @@ final class PropertyTable {
                     .byDefault("the data port's width").source("one 64-bit word per lane (the simulator's limit)"),
             Property.of("data", "the top module's input port the ROM drives",
                     name("port", "the top module's input port for ROM data", List.of())),
-            Property.of("offboard", "the ROM is built outside the tube logic").byDefault("offboard"));
+            Property.of("uses", "a stage the ROM's decoding and drivers are built from: N instances of a stage per word or bit or address or line, or once",
+                    whole("instances", 1, 1000000), name("stage", "a stage name", List.of()),
+                    new Slot.Choice("scale", orderedMap("per", List.of(name("unit", "one of word, bit, address, line", List.of("word", "bit", "address", "line"))),
+                            "once", List.of()), null)).many().source(PLAUSIBLE),
+            Property.of("offboard", "the ROM is not made of tubes and is not counted; optionally why",
+                    new Slot.Optional("because", List.of(text("what it is made of")))).byDefault("counted when `uses` lines state its stages, else left out"));
 
     static final PropertyTable PC = new PropertyTable("pc", "pc { ... } inside the machine block",
             Property.of("width", "program counter width in bits", whole("program counter width", 1, 20))
@@ -255,7 +267,12 @@ final class PropertyTable {
                     name("port", "the top module's jump output", List.of())),
             Property.of("target", "the top module's output bus the PC loads",
                     name("port", "the top module's jump-target output", List.of())),
-            Property.of("offboard", "the program counter is built outside the tube logic").byDefault("offboard"));
+            Property.of("uses", "a stage the program counter is built from: N instances of a stage per bit, or once",
+                    whole("instances", 1, 1000000), name("stage", "a stage name", List.of()),
+                    new Slot.Choice("scale", orderedMap("per", List.of(name("unit", "one of bit", List.of("bit"))),
+                            "once", List.of()), null)).many().source(PLAUSIBLE),
+            Property.of("offboard", "the program counter is not made of tubes and is not counted; optionally why",
+                    new Slot.Optional("because", List.of(text("what it is made of")))).byDefault("counted when `uses` lines state its stages, else left out"));
 
     static final PropertyTable MACHINE = new PropertyTable("machine", "machine NAME { ... }",
             Property.of("clock", "the clock").opens(CLOCK),
@@ -366,7 +383,11 @@ final class PropertyTable {
     }
 
     private static Slot.Optional koren(String param) {
-        return new Slot.Optional(param, List.of(plain("k_" + param, "Koren parameter " + param, above(0, 1e9))));
+        return koren(param, above(0, 1e9));
+    }
+
+    private static Slot.Optional koren(String param, Slot.Range range) {
+        return new Slot.Optional(param, List.of(plain("k_" + param, "Koren parameter " + param, range)));
     }
 
     private static Slot.Optional sourceOption() {

@@ -71,7 +71,7 @@ final class SoftStartReader {
         int module = modules.size();
         modules.add(new ModuleInstance(module, name, "softstart", 0));
         int env = packer.place(st.tube(), module, st.sections());
-        return new BypassTrigger.ThyratronWarm(env, st.tube(), st.loadOhms(), st.loadRail());
+        return new BypassTrigger.ThyratronWarm(env, st.tube(), st.loadOhms(), st.loadRail(), s);
     }
 
     private static Relay relay(PropBlock r) {

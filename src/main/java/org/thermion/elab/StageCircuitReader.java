@@ -27,10 +27,13 @@ final class StageCircuitReader {
     private final Diagnostics diags;
     /** Checks a rail name (reporting it when unknown): name, span. */
     private final BiPredicate<String, Span> rail;
+    /** Tubes whose model line is written but in error (reported there): their stages say no more. */
+    private final java.util.function.Predicate<String> modelInError;
 
-    StageCircuitReader(Diagnostics diags, BiPredicate<String, Span> rail) {
+    StageCircuitReader(Diagnostics diags, BiPredicate<String, Span> rail, java.util.function.Predicate<String> modelInError) {
         this.diags = diags;
         this.rail = rail;
+        this.modelInError = modelInError;
     }
 
     /** The stage's circuit; null for a stage known by its draws (or after a reported error). */
@@ -45,12 +48,14 @@ final class StageCircuitReader {
             return null; // a stage known by its typed-in currents, as stages were before circuits
         }
         if (tube.curves() == null) {
-            if (!declared) {
+            if (!declared && !modelInError.test(tube.name())) {
                 PropLine t = b.line("tube");
                 diags.error(t == null ? titleSpan : t.span("tube"), "stage '" + stage + "': tube '" + tube.name()
-                                + "' has no model parameters and the stage states no currents",
+                                + "' has no model line (" + TubeCurvesReader.needs(tube.kind())
+                                + ") and the stage states no currents, so its circuit cannot be solved",
                         "add `" + TubeCurvesReader.example(tube.kind()) + "` to tube " + tube.name()
-                                + "'s block, or `draw <state> <rail> <amps>` lines (or `circuit none`) to the stage");
+                                + "'s block with the figures' source, or `draw <state> <rail> <amps>` lines "
+                                + "(or `circuit none`) to the stage");
             }
             return null;
         }

@@ -7,6 +7,7 @@ import org.thermion.model.CurvePoint;
 import org.thermion.model.TubeCurves;
 import org.thermion.model.TubeKind;
 import org.thermion.model.TubeLaw;
+import org.thermion.model.TubeType;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -33,7 +34,7 @@ final class TubeCurvesReader {
     TubeCurves read(String tube, TubeKind kind, PropBlock b) {
         PropLine m = b.line("model");
         if (m == null) {
-            if (!b.lines("point").isEmpty() || b.has("fit")) {
+            if (!b.rejected("model") && (!b.lines("point").isEmpty() || b.has("fit"))) {
                 Span at = b.has("fit") ? b.line("fit").prop().key().span() : b.lines("point").get(0).prop().key().span();
                 diags.error(at, "tube '" + tube + "' has points or a fit but no model line",
                         "add `" + example(kind) + "` with starting values for the fit");
@@ -55,7 +56,7 @@ final class TubeCurvesReader {
         double residual = Double.NaN;
         PropLine fit = b.line("fit");
         if (fit != null) {
-            if (!fitted(tube, kind, fit, points, fitted)) {
+            if (!fitted(tube, kind, fit, points, b.rejected("point"), fitted)) {
                 return null;
             }
             residual = fit.has("residual") ? fit.num("rms") / 100 : Double.NaN;
@@ -64,6 +65,22 @@ final class TubeCurvesReader {
         double gridK = g == null ? Double.NaN : g.num("amps") / Math.pow(g.num("volts"), 1.5);
         String source = m.has("modelsource") ? m.word("modelsource") : "";
         return new TubeCurves(law, points, fitted, residual, gridK, b.num("maxplate"), b.num("maxscreen"), source);
+    }
+
+    /**
+     * Whether the tube's model can be built as the circuits will build it (fitted to its points);
+     * if not, an error at its {@code fit} line (or its model line) says why.
+     */
+    boolean buildable(TubeType t, PropBlock b, TubeModelCheck check) {
+        String why = check.problem(t);
+        if (why == null) {
+            return true;
+        }
+        PropLine at = b.has("fit") ? b.line("fit") : b.line("model");
+        diags.error(at.prop().key().span(), "tube '" + t.name() + "': " + why,
+                b.has("fit") ? "check the point lines against the tube's sheet (a unit, a sign, a decimal point), "
+                        + "give more points, or fit fewer parameters" : "check the model line's parameters");
+        return false;
     }
 
     private TubeLaw law(String tube, TubeKind kind, PropLine m) {
@@ -127,7 +144,8 @@ final class TubeCurvesReader {
                 cathode ? Double.NaN : p.num("grid"), cathode ? p.num("cathode") : 0, p.word("pointsource"));
     }
 
-    private boolean fitted(String tube, TubeKind kind, PropLine fit, List<CurvePoint> points, List<String> into) {
+    private boolean fitted(String tube, TubeKind kind, PropLine fit, List<CurvePoint> points, boolean pointRejected,
+                           List<String> into) {
         List<String> known = kind == TubeKind.PENTODE ? PENTODE_PARAMS : kind == TubeKind.TRIODE ? TRIODE_PARAMS : List.of();
         for (Value v : fit.tokens("params")) {
             if (!known.contains(v.text())) {
@@ -143,6 +161,9 @@ final class TubeCurvesReader {
             into.add(v.text());
         }
         if (points.size() < into.size()) {
+            if (pointRejected) {
+                return false; // a point line's own error is reported: counting the rest would only repeat it
+            }
             diags.error(fit.prop().key().span(), "tube '" + tube + "': " + into.size() + " parameters to fit but "
                     + points.size() + " point lines", "give at least one point per fitted parameter, or fit fewer");
             return false;
@@ -159,6 +180,20 @@ final class TubeCurvesReader {
                 return "gas";
             default:
                 return "koren";
+        }
+    }
+
+    /** What a kind of tube's model line must give, in words, for messages about a missing one. */
+    static String needs(TubeKind kind) {
+        switch (kind) {
+            case PENTODE:
+                return "Koren's parameters " + String.join(", ", PENTODE_PARAMS);
+            case DIODE:
+                return "one point of its 3/2-power law (current at a voltage)";
+            case THYRATRON:
+                return "its critical grid voltage";
+            default:
+                return "Koren's parameters " + String.join(", ", TRIODE_PARAMS);
         }
     }
 

@@ -12,29 +12,43 @@ import org.thermion.circuit.DcResult;
 import org.thermion.circuit.InputLevels;
 import org.thermion.circuit.Lamp;
 import org.thermion.circuit.MachineCircuits;
+import org.thermion.circuit.NoDcSolution;
 import org.thermion.circuit.Parameter;
+import org.thermion.circuit.PlateLoad;
 import org.thermion.circuit.RelayCoil;
 import org.thermion.circuit.StageCircuit;
 import org.thermion.circuit.StageSolver;
+import org.thermion.circuit.ThyratronStage;
 import org.thermion.circuit.Tolerances;
 import org.thermion.circuit.TubeStage;
 import org.thermion.circuit.WorstCase;
+import org.thermion.model.BypassTrigger;
 import org.thermion.model.Gate;
 import org.thermion.model.Machine;
+import org.thermion.model.Relay;
+import org.thermion.model.SoftStart;
+import org.thermion.model.StageFunction;
 import org.thermion.model.StageType;
 
 /**
- * Lamp and relay-coil drivers: the current in the plate load with the stage's input at its
- * driving net's high level (the tube conducts: lamp lit, coil pulled in) and at its low level
- * (cut off), at nominal values and at the tolerance corner that lowers the "on" current or raises
- * the "off" current. Uses of one kind (stage, input levels) are solved once.
+ * Lamp and relay-coil drivers: the current in the load with the stage's input at its driving
+ * net's high level (the tube conducts: lamp lit, coil pulled in; a thyratron fires) and at its
+ * low level (cut off), at nominal values and at the tolerance corner that lowers the "on" current
+ * or raises the "off" current. Tube stages and thyratron stages alike; a relay stage whose load
+ * is a plain resistor is listed with its pick-up unknown. Each soft start's bypass relay is judged
+ * the same way: its coil in place of the thyratron stage's load, the tube fired. Uses of one kind
+ * (stage, input levels) are solved once.
  */
 final class DriveAnalysis {
     private final Machine machine;
     private final MachineCircuits circuits;
     private final Tolerances tolerances;
-    private final Map<List<Object>, double[]> cache = new HashMap<>();
-    private final Map<List<Object>, Corner[]> corners = new HashMap<>();
+    private final Map<List<Object>, Figures> cache = new HashMap<>();
+
+    /** One kind of drive's currents and corners. */
+    private record Figures(double on, double onWorst, Corner onCorner, double off, double offWorst, Corner offCorner,
+                           NoDcSolution unsolved) {
+    }
 
     DriveAnalysis(Machine machine, MachineCircuits circuits, Tolerances tolerances) {
         this.machine = machine;
@@ -42,7 +56,7 @@ final class DriveAnalysis {
         this.tolerances = tolerances;
     }
 
-    /** Every gate whose stage drives a lamp or a coil, its input at the levels of its input net. */
+    /** Every gate whose stage drives a lamp or a coil, its input at the levels of its input net; then the soft starts. */
     List<LoadDrive> drives(NetFanout fanout, double[] low, double[] high) {
         List<LoadDrive> out = new ArrayList<>();
         for (Gate g : machine.netlist().gates()) {
@@ -54,23 +68,17 @@ final class DriveAnalysis {
                 continue;
             }
             Optional<StageCircuit> c = circuits.circuit(st);
-            if (c.isEmpty() || !(c.get() instanceof TubeStage ts)) {
+            PlateLoad load = c.map(DriveAnalysis::loadOf).orElse(null);
+            if (load == null) {
                 continue;
             }
-            LoadDrive.Kind kind;
-            double rated;
-            double dropout;
-            if (ts.load() instanceof Lamp lamp) {
-                kind = LoadDrive.Kind.LAMP;
-                rated = lamp.ratedAmps();
-                dropout = Double.NaN;
-            } else if (ts.load() instanceof RelayCoil coil) {
-                kind = LoadDrive.Kind.COIL;
-                rated = coil.pickupAmps();
-                dropout = coil.dropoutAmps();
-            } else {
-                continue;
+            LoadDrive.Kind kind = load instanceof Lamp ? LoadDrive.Kind.LAMP : LoadDrive.Kind.COIL;
+            if (kind == LoadDrive.Kind.COIL && !(load instanceof RelayCoil) && st.function() != StageFunction.RELAY) {
+                continue; // a lamp stage with a plain resistor: nothing to judge
             }
+            double rated = load instanceof Lamp lamp ? lamp.ratedAmps()
+                    : load instanceof RelayCoil coil ? coil.pickupAmps() : Double.NaN;
+            double dropout = load instanceof RelayCoil coil ? coil.dropoutAmps() : Double.NaN;
             double lo = low[g.input(0)];
             double hi = high[g.input(0)];
             for (int p = 1; p < g.arity(); p++) {
@@ -78,39 +86,107 @@ final class DriveAnalysis {
                 hi = Math.min(hi, high[g.input(p)]);
             }
             InputLevels levels = LevelAnalysis.outward(lo, hi);
-            List<Object> key = List.of(ts, levels);
-            double[] a = cache.get(key);
-            if (a == null) {
-                a = solve(ts, levels.low(), levels.high(), key);
-                cache.put(key, a);
+            Figures f = cache.computeIfAbsent(List.of(c.get(), levels), k -> solve(c.get(), levels.low(), levels.high()));
+            boolean follower = c.get() instanceof TubeStage ts && ts.output() == TubeStage.Output.CATHODE;
+            out.add(new LoadDrive(new StageUse(false, g.id()), -1, fanout.nodeOf(g.output()).name(), st.name(), kind,
+                    f.on(), f.onWorst(), f.onCorner(), f.off(), f.offWorst(), f.offCorner(), rated, dropout,
+                    ohmsOf(load), Double.NaN, follower, f.unsolved()));
+        }
+        for (int i = 0; i < machine.softStarts().size(); i++) {
+            LoadDrive d = softStart(i, machine.softStarts().get(i));
+            if (d != null) {
+                out.add(d);
             }
-            Corner[] cs = corners.get(key);
-            out.add(new LoadDrive(new StageUse(false, g.id()), fanout.nodeOf(g.output()).name(), st.name(), kind, a[0],
-                    a[1], cs[0], a[2], a[3], cs[1], rated, dropout));
         }
         return List.copyOf(out);
     }
 
-    private double[] solve(TubeStage ts, double lo, double hi, List<Object> key) {
-        StageSolver s = circuits.solver();
-        // the tube conducts with its input high when its output is at the plate (an inverting driver)
-        double on = ts.inverting() ? hi : lo;
-        double off = ts.inverting() ? lo : hi;
-        ToDoubleFunction<Corner> onAmps = c -> amps(s, ts, on, c);
-        ToDoubleFunction<Corner> offAmps = c -> -amps(s, ts, off, c);
-        List<Parameter> params = new ArrayList<>(s.parameters(StageSolver.DRIVER, ts, List.of()));
-        params.sort(java.util.Comparator.comparing(Parameter::label));
+    /**
+     * A soft start's bypass relay on its thyratron stage: the relay block's coil in place of the
+     * stage's load, the tube fired (it fires by warming, not by its grid).
+     */
+    private LoadDrive softStart(int index, SoftStart s) {
+        if (!(s.trigger() instanceof BypassTrigger.ThyratronWarm w)) {
+            return null;
+        }
+        StageType st = machine.stages().get(w.stage());
+        Optional<StageCircuit> c = circuits.circuit(st);
+        if (c.isEmpty() || !(c.get() instanceof ThyratronStage ts)) {
+            return null;
+        }
+        Relay r = s.relay();
+        RelayCoil coil = new RelayCoil(r.coilOhms(), r.pickupVolts() / r.coilOhms(),
+                Math.min(r.dropoutVolts(), r.pickupVolts()) / r.coilOhms());
+        ThyratronStage driver = new ThyratronStage(ts.name(), ts.tube(), coil, ts.plateRail(), ts.plateOhms(), ts.grid(),
+                ts.cathode());
+        StageSolver solver = circuits.solver();
+        ToDoubleFunction<Corner> onAmps = k -> amps(solver, driver, 0, true, k);
+        List<Parameter> params = parameters(solver, driver);
         Corner onCorner = WorstCase.worstCorner(params, tolerances, onAmps);
-        Corner offCorner = WorstCase.worstCorner(params, tolerances, offAmps);
-        corners.put(key, new Corner[] {onCorner, offCorner});
-        return new double[] {onAmps.applyAsDouble(Corner.NOMINAL), onAmps.applyAsDouble(onCorner),
-            -offAmps.applyAsDouble(Corner.NOMINAL), -offAmps.applyAsDouble(offCorner)};
+        NoDcSolution unsolved = unsolved(solver, driver, 0, true);
+        return new LoadDrive(null, index, s.name(), st.name(), LoadDrive.Kind.COIL, onAmps.applyAsDouble(Corner.NOMINAL),
+                onAmps.applyAsDouble(onCorner), onCorner, Double.NaN, Double.NaN, Corner.NOMINAL, coil.pickupAmps(),
+                Double.NaN, coil.ohms(), r.ratedVolts(), false, unsolved);
     }
 
-    private static double amps(StageSolver s, TubeStage ts, double volts, Corner c) {
-        double[] in = new double[ts.inputs()];
+    /** The load a lamp or relay stage drives (its plate load), or null for other circuits. */
+    private static PlateLoad loadOf(StageCircuit c) {
+        if (c instanceof TubeStage ts) {
+            return ts.load().direct() ? null : ts.load();
+        }
+        if (c instanceof ThyratronStage ts) {
+            return ts.load();
+        }
+        return null;
+    }
+
+    private static double ohmsOf(PlateLoad load) {
+        if (load instanceof RelayCoil c) {
+            return c.ohms();
+        }
+        if (load instanceof Lamp l) {
+            return l.hotOhms();
+        }
+        return load instanceof org.thermion.circuit.LoadResistor r ? r.ohms() : Double.NaN;
+    }
+
+    private Figures solve(StageCircuit stage, double lo, double hi) {
+        StageSolver s = circuits.solver();
+        // a higher grid means more current in every arrangement (a follower's too; a thyratron fires and holds)
+        double onVolts = hi;
+        double offVolts = lo;
+        ToDoubleFunction<Corner> onAmps = c -> amps(s, stage, onVolts, false, c);
+        ToDoubleFunction<Corner> offAmps = c -> -amps(s, stage, offVolts, false, c);
+        List<Parameter> params = parameters(s, stage);
+        Corner onCorner = WorstCase.worstCorner(params, tolerances, onAmps);
+        Corner offCorner = WorstCase.worstCorner(params, tolerances, offAmps);
+        NoDcSolution unsolved = unsolved(s, stage, hi, false);
+        if (unsolved == null) {
+            unsolved = unsolved(s, stage, lo, false);
+        }
+        return new Figures(onAmps.applyAsDouble(Corner.NOMINAL), onAmps.applyAsDouble(onCorner), onCorner,
+                -offAmps.applyAsDouble(Corner.NOMINAL), -offAmps.applyAsDouble(offCorner), offCorner, unsolved);
+    }
+
+    private static List<Parameter> parameters(StageSolver s, StageCircuit stage) {
+        List<Parameter> params = new ArrayList<>(s.parameters(StageSolver.DRIVER, stage, List.of()));
+        params.sort(java.util.Comparator.comparing(Parameter::label));
+        return params;
+    }
+
+    private static NoDcSolution unsolved(StageSolver s, StageCircuit stage, double volts, boolean stored) {
+        DcResult r = solveAt(s, stage, volts, stored, Corner.NOMINAL);
+        return r instanceof NoDcSolution no ? no : null;
+    }
+
+    private static DcResult solveAt(StageSolver s, StageCircuit stage, double volts, boolean stored, Corner c) {
+        double[] in = new double[stage.inputs()];
         java.util.Arrays.fill(in, volts);
-        DcResult r = s.solve(ts, in, false, List.of(), c);
+        return s.solve(stage, in, stored, List.of(), c);
+    }
+
+    private static double amps(StageSolver s, StageCircuit stage, double volts, boolean stored, Corner c) {
+        DcResult r = solveAt(s, stage, volts, stored, c);
         return r.solved() ? Math.abs(r.point().partAmps(StageSolver.DRIVER + ".load")) : Double.NaN;
     }
 }

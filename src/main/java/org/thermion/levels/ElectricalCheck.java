@@ -6,6 +6,7 @@ import java.util.Locale;
 
 import org.thermion.circuit.DcResult;
 import org.thermion.circuit.NetAnalysis;
+import org.thermion.circuit.NoDcSolution;
 import org.thermion.circuit.TubeDissipation;
 import org.thermion.circuit.WorstMargin;
 import org.thermion.model.HeaterString;
@@ -15,9 +16,11 @@ import org.thermion.power.Budget;
 import org.thermion.power.HeaterAnalysis;
 
 /**
- * What {@code check} says about a machine's electrical design: a net whose worst-case margin is
- * negative (an error) or below the declared minimum (a warning); a coil that does not reach its
- * pick-up current at its worst corner, or stays above its drop-out current when it must release;
+ * What {@code check} says about a machine's electrical design: a stage with no DC solution (why,
+ * and the cure); a net whose worst-case margin is negative (an error) or below the declared minimum
+ * (a warning); a coil that does not reach its pick-up current at its worst corner (a logic relay
+ * stage's, a thyratron's, a soft start's bypass relay), or stays above its drop-out current when it
+ * must release; a soft start's coil over its rated voltage (a warning);
  * a lamp outside ±{@value #LAMP_BAND_PERCENT} % of its rated current (common practice); a tube
  * over its plate or screen rating; a series heater string with a heater outside ±10 % of its
  * rating at the rail's voltage under the machine's heaviest static load (common practice).
@@ -25,6 +28,8 @@ import org.thermion.power.HeaterAnalysis;
 public final class ElectricalCheck {
     /** A lamp is judged within ± this share of its rated current (common practice). */
     public static final int LAMP_BAND_PERCENT = 10;
+    /** A relay coil held continuously above its rated voltage by more than this share runs hot (common practice). */
+    public static final int COIL_OVER_PERCENT = 10;
 
     private ElectricalCheck() {
     }
@@ -32,11 +37,32 @@ public final class ElectricalCheck {
     /** Every finding, nets worst first, then drivers, tubes and heater strings. */
     public static List<Finding> findings(Machine m, LevelAnalysis a) {
         List<Finding> out = new ArrayList<>();
+        unsolved(a, out);
         margins(a, out);
         drives(a, out);
         ratings(a, out);
         heaters(m, out);
         return out;
+    }
+
+    /** A stage use with no DC solution in some input state, once per use: why, and the cure. */
+    private static void unsolved(LevelAnalysis a, List<Finding> out) {
+        for (int i = 0; i < a.points().size(); i++) {
+            for (DcResult r : a.points().get(i).points()) {
+                if (r instanceof NoDcSolution no) {
+                    out.add(new Finding(true, "nodc", a.pointUses().get(i), -1, "stage " + no.stage()
+                            + " has no DC solution at the machine's rails: " + no.reason(), no.fix()));
+                    break;
+                }
+            }
+        }
+        for (LoadDrive d : a.drives()) {
+            if (d.unsolved() != null) {
+                out.add(new Finding(true, "nodc", d.use(), -1, d.softStart(), "stage " + d.stage() + " driving "
+                        + (d.use() == null ? "the bypass relay of soft start '" : "'") + d.name()
+                        + "' has no DC solution at the machine's rails: " + d.unsolved().reason(), d.unsolved().fix()));
+            }
+        }
     }
 
     private static void margins(LevelAnalysis a, List<Finding> out) {
@@ -51,6 +77,14 @@ public final class ElectricalCheck {
             }
             WorstMargin w = n.worse();
             if (w == null || n.stage().isEmpty() || !(w.worst() < a.minMargin())) {
+                continue;
+            }
+            if (Double.isInfinite(w.worst())) {
+                out.add(new Finding(true, "nodc", n.use(), -1, "stage " + n.stage() + " driving net '" + n.name()
+                        + "' has a DC solution at nominal values but none at the tolerance corner " + w.corner().describe()
+                        + " (nominal " + (w.side() == WorstMargin.Side.HIGH ? "high" : "low") + " margin "
+                        + v(w.nominal()) + "): the circuit is on the edge of what its parts allow",
+                        "run `thermion levels` for the net's figures; give the stage's rails and loads more room"));
                 continue;
             }
             boolean high = w.side() == WorstMargin.Side.HIGH;
@@ -77,21 +111,11 @@ public final class ElectricalCheck {
 
     private static void drives(LevelAnalysis a, List<Finding> out) {
         for (LoadDrive d : a.drives()) {
+            if (d.unsolved() != null) {
+                continue; // reported as having no DC solution
+            }
             if (d.kind() == LoadDrive.Kind.COIL) {
-                if (!(d.onWorstAmps() >= d.ratedAmps())) {
-                    out.add(new Finding(true, "coil", d.use(), -1, "relay coil of '" + d.name() + "' (" + d.stage()
-                            + ") gets " + ma(d.onWorstAmps()) + " at " + d.onCorner().describe() + " (nominal "
-                            + ma(d.onAmps()) + ") against its pick-up current of " + ma(d.ratedAmps())
-                            + ": it may never pull in",
-                            "a coil of lower resistance or current, more tube sections in parallel, or a higher rail"));
-                }
-                if (d.dropoutAmps() > 0 && d.offWorstAmps() > d.dropoutAmps()) {
-                    out.add(new Finding(true, "coil", d.use(), -1, "relay coil of '" + d.name() + "' (" + d.stage()
-                            + ") keeps " + ma(d.offWorstAmps()) + " when cut off at " + d.offCorner().describe()
-                            + ", above its drop-out current of " + ma(d.dropoutAmps()) + ": it may never release",
-                            "cut the tube off harder (a more negative bias at its grid) or use a coil with a higher "
-                                    + "drop-out current"));
-                }
+                coil(d, out);
             } else {
                 double dev = d.onAmps() / d.ratedAmps() - 1;
                 if (!(Math.abs(dev) <= LAMP_BAND_PERCENT / 100.0)) {
@@ -103,6 +127,53 @@ public final class ElectricalCheck {
                                     + "rail" : "a series resistor or a lamp of higher rating"));
                 }
             }
+        }
+    }
+
+    /** A relay coil: pick-up at its worst corner, drop-out when cut off, a soft start's coil against its rating. */
+    private static void coil(LoadDrive d, List<Finding> out) {
+        String what = d.use() == null ? "bypass relay coil of soft start '" + d.name() + "' (driven by " + d.stage() + ")"
+                : "relay coil of '" + d.name() + "' (" + d.stage() + ")";
+        if (Double.isNaN(d.ratedAmps())) {
+            out.add(new Finding(false, "coil", d.use(), -1, d.softStart(), what + " is a plain "
+                    + ohms(d.coilOhms()) + " resistor: its pick-up current is not stated, so whether it pulls in "
+                    + "(" + ma(d.onAmps()) + " nominal) cannot be judged",
+                    "write the load as `load coil " + ohms(d.coilOhms()) + " pickup <amps> from <rail>`"));
+            return;
+        }
+        if (!(d.onWorstAmps() >= d.ratedAmps())) {
+            double share = d.onWorstAmps() / d.ratedAmps();
+            String volts = Double.isNaN(d.coilOhms()) ? "" : " (" + v(d.onWorstAmps() * d.coilOhms()) + " across it against "
+                    + v(d.ratedAmps() * d.coilOhms()) + " to pick up)";
+            String fix;
+            if (d.follower()) {
+                fix = "a cathode follower gives its load at most the grid's swing less the grid-to-cathode voltage: put "
+                        + "the coil in the plate circuit of a stage that cuts off and saturates, or use a coil that picks "
+                        + "up at " + ma(d.onWorstAmps() * 0.9) + " or less";
+            } else if (d.use() == null) {
+                fix = "a smaller `series` plate resistor in stage " + d.stage() + ", a coil of lower pick-up voltage, or a "
+                        + "higher rail";
+            } else {
+                fix = "a coil of lower resistance or current, more tube sections in parallel, or a higher rail";
+            }
+            out.add(new Finding(true, "coil", d.use(), -1, d.softStart(), what + " gets " + ma(d.onWorstAmps())
+                    + volts + " at " + d.onCorner().describe() + " (nominal " + ma(d.onAmps()) + "), "
+                    + String.format(Locale.ROOT, "%.0f %%", 100 * share) + " of its pick-up current of "
+                    + ma(d.ratedAmps()) + ": it may never pull in", fix));
+        }
+        if (d.dropoutAmps() > 0 && d.offWorstAmps() > d.dropoutAmps()) {
+            out.add(new Finding(true, "coil", d.use(), -1, what + " keeps " + ma(d.offWorstAmps()) + " when cut off at "
+                    + d.offCorner().describe() + ", above its drop-out current of " + ma(d.dropoutAmps())
+                    + ": it may never release",
+                    "cut the tube off harder (a more negative bias at its grid) or use a coil with a higher "
+                            + "drop-out current"));
+        }
+        double coilVolts = d.onAmps() * d.coilOhms();
+        if (d.ratedVolts() > 0 && coilVolts > (1 + COIL_OVER_PERCENT / 100.0) * d.ratedVolts()) {
+            out.add(new Finding(false, "coil", d.use(), -1, d.softStart(), what + " gets " + v(coilVolts)
+                    + " at nominal values against its rated " + v(d.ratedVolts()) + " (more than +" + COIL_OVER_PERCENT
+                    + " % is common practice's limit for continuous duty): it runs hot",
+                    "a larger series plate resistor, or a coil rated for the rail"));
         }
     }
 
@@ -170,6 +241,13 @@ public final class ElectricalCheck {
 
     static String ma(double amps) {
         return String.format(Locale.ROOT, "%.2f mA", amps * 1e3);
+    }
+
+    static String ohms(double ohms) {
+        boolean k = ohms >= 1000;
+        String n = new java.math.BigDecimal(k ? ohms / 1000 : ohms).round(new java.math.MathContext(3)).stripTrailingZeros()
+                .toPlainString();
+        return n + (k ? " k" : " ohm");
     }
 
     static String w(double watts) {

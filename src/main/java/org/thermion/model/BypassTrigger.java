@@ -9,9 +9,10 @@ public sealed interface BypassTrigger {
 
     /**
      * A gas thyratron that fires once its cathode reaches its emission threshold, driving the
-     * relay coil through a plate resistor from a rail. {@code envelope} is the thyratron's envelope.
+     * relay coil through a plate resistor from a rail. {@code envelope} is the thyratron's envelope,
+     * {@code stage} the relay-driver stage type named.
      */
-    record ThyratronWarm(int envelope, int tube, double plateOhms, int fromRail)
+    record ThyratronWarm(int envelope, int tube, double plateOhms, int fromRail, int stage)
             implements BypassTrigger {
     }
 }

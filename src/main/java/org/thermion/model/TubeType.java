@@ -68,6 +68,12 @@ public record TubeType(
         return null;
     }
 
+    /** The same tube with another electrical model (null: none). */
+    public TubeType withCurves(TubeCurves other) {
+        return new TubeType(name, kind, sections, heaters, warmupSeconds, coldHotRatio, cgk, cgp, cpk, cin, cout,
+                avgCathodeAmps, peakCathodeAmps, arcDropVolts, source, basings, other);
+    }
+
     public boolean hasWarmup() {
         return !Double.isNaN(warmupSeconds);
     }

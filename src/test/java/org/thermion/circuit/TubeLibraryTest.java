@@ -145,4 +145,16 @@ class TubeLibraryTest {
         org.assertj.core.api.Assertions.assertThatThrownBy(() -> lib.require("6X4"))
                 .hasMessageContaining("6X4").hasMessageContaining("add a model line");
     }
+
+    @Test
+    void aFitToPointsNoCurvePassesThroughSaysSoInsteadOfReturningInfiniteParameters() {
+        // amperes at a millivolt and microamperes at 9 kV with the grid far positive: mistyped points
+        List<FitPoint> pts = List.of(
+                FitPoint.fixed(0.001, Double.NaN, -900, FitPoint.Quantity.PLATE_CURRENT, 99, "mistyped"),
+                FitPoint.fixed(9000, Double.NaN, 900, FitPoint.Quantity.PLATE_CURRENT, 1e-6, "mistyped"),
+                FitPoint.fixed(1, Double.NaN, 0, FitPoint.Quantity.TRANSCONDUCTANCE, 90, "mistyped"));
+        org.assertj.core.api.Assertions.assertThatThrownBy(
+                        () -> TubeFitter.fitTriode(triode("12AU7"), List.of("mu", "kg1", "kp"), pts))
+                .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("ran away");
+    }
 }

@@ -47,7 +47,9 @@ class CheckLanguagePointersTest {
         Set<String> headings = headingAnchors();
         List<Path> cases;
         try (Stream<Path> s = Files.list(Path.of("src/test/resources/org/thermion/badinput"))) {
-            cases = s.filter(p -> p.toString().endsWith(".machine")).sorted().toList();
+            // check-* cases fail the electrical judgement of a well-formed description: no language pointer
+            cases = s.filter(p -> p.toString().endsWith(".machine") && !p.getFileName().toString().startsWith("check-"))
+                    .sorted().toList();
         }
         int pointers = 0;
         for (Path c : cases) {

@@ -122,4 +122,135 @@ class ElectricalCheckTest {
             assertThat(x.message()).contains("gets 5.09 V against 6.30 V rated (-19 %)", "rail at 10.18 V");
         });
     }
+
+    /** A bench board of our own: an inverter pair on 48 V with a 24 V relay rail; the stages under test added. */
+    static String board(String rails, String extra, String module) {
+        return rails + """
+                rail bias { voltage -24 V }
+                rail heat { voltage 6.3 V }
+                rail relay { voltage 24 V; source 1 ohm }
+                heaters on heat { parallel 12AU7 2D21 }
+                stage bench_inverter : not {
+                  tube 12AU7
+                  load 47 k from bplus
+                  grid divider 100 k 100 k to bias
+                }
+                realize { not bench_inverter }
+                """ + extra + """
+                module top {
+                  in a
+                  out y
+                  net m
+                  m = !a
+                  y = !m
+                """ + module + """
+                }
+                machine bench { top top; inputs a; outputs y }
+                """;
+    }
+
+    @Test
+    void aRailThatCannotSupplyTheLoadIsAnErrorAtEachStageUseSayingWhyAndWhatCuresIt() {
+        LevelAnalysisTest.Loaded l = LevelAnalysisTest.load(board("rail bplus { voltage 48 V; limit 0.1 mA }\n", "", ""));
+        List<Finding> f = ElectricalCheck.findings(l.machine(), LevelAnalysis.of(l.machine(), l.where().margins()));
+        assertThat(f).hasSize(2).allSatisfy(x -> {
+            assertThat(x.error()).isTrue();
+            assertThat(x.kind()).isEqualTo("nodc");
+            assertThat(x.message()).contains("stage bench_inverter has no DC solution", "rail bplus cannot supply the load",
+                    "limit 0.10 mA");
+            assertThat(x.fix()).contains("raise rail bplus's current limit");
+        });
+        // m = !a and y = !m: lines 16 and 17 of the text
+        assertThat(f).extracting(x -> l.where().gate(x.use().index()).line()).containsExactlyInAnyOrder(16, 17);
+        // the same board with a supply that can feed it has none
+        assertThat(findings(board("rail bplus { voltage 48 V; limit 400 mA }\n", "", ""))).isEmpty();
+    }
+
+    static String softStart(String relay) {
+        return board("rail bplus { voltage 48 V }\n", """
+                stage bench_bypass : relay {
+                  tube 2D21
+                  load 160 ohm from relay
+                  series 100 ohm
+                }
+                softstart heater_soft on heat {
+                  resistor 0.5 ohm rated 50 W
+                  relay { %s }
+                  bypass when bench_bypass warm
+                }
+                """.formatted(relay), "");
+    }
+
+    @Test
+    void aSoftStartsBypassCoilIsJudgedAgainstItsPickUpAtTheCornerThatStarvesIt() {
+        // Ohm's law: (24 V - 8 V arc drop of the 2D21, library) / (1 + 100 + 160 ohm) = 61.30 mA,
+        // 9.81 V across the coil; with the relay rail 5 % low and both resistors 5 % high:
+        // (22.8 - 8) / (1 + 105 + 168) = 54.01 mA.
+        LevelAnalysisTest.Loaded ok = LevelAnalysisTest.load(softStart("coil 160 ohm; rated 12 V; pickup 8 V"));
+        LevelAnalysis a = LevelAnalysis.of(ok.machine(), ok.where().margins());
+        LoadDrive bypass = a.drives().stream().filter(d -> d.softStart() == 0).findFirst().orElseThrow();
+        assertThat(bypass.onAmps()).isCloseTo(16.0 / 261, within(1e-5));
+        assertThat(bypass.onWorstAmps()).isCloseTo(14.8 / 274, within(1e-5));
+        assertThat(bypass.ratedAmps()).isCloseTo(8.0 / 160, within(1e-9));
+        assertThat(ElectricalCheck.findings(ok.machine(), a)).isEmpty();
+
+        LevelAnalysisTest.Loaded shortOf = LevelAnalysisTest.load(softStart("coil 160 ohm; rated 12 V; pickup 10 V"));
+        List<Finding> f = ElectricalCheck.findings(shortOf.machine(),
+                LevelAnalysis.of(shortOf.machine(), shortOf.where().margins()));
+        assertThat(f).singleElement().satisfies(x -> {
+            assertThat(x.error()).isTrue();
+            assertThat(x.kind()).isEqualTo("coil");
+            assertThat(x.use()).isNull();
+            assertThat(x.message()).contains("soft start 'heater_soft'", "gets 54.01 mA", "8.64 V across it against 10.00 V",
+                    "86 % of its pick-up current of 62.50 mA");
+            assertThat(x.fix()).contains("`series` plate resistor in stage bench_bypass");
+            assertThat(shortOf.where().softStart(x.softStart()).line()).isEqualTo(20); // the bypass line
+        });
+
+        // rated 6 V: the coil's 9.81 V is 64 % over its rating (over +10 %, common practice): a warning
+        List<Finding> hot = findings(softStart("coil 160 ohm; rated 6 V; pickup 4 V"));
+        assertThat(hot).singleElement().satisfies(x -> {
+            assertThat(x.error()).isFalse();
+            assertThat(x.message()).contains("gets 9.81 V at nominal values against its rated 6.00 V");
+        });
+    }
+
+    static String thyratronRelay(String load) {
+        return board("rail bplus { voltage 48 V }\n", """
+                stage bench_thyratron : relay {
+                  tube 2D21
+                  %s
+                  series 100 ohm
+                  grid divider 100 k 47 k to bias
+                }
+                """.formatted(load), """
+                  net pulled
+                  pulled = bench_thyratron(a)
+                """);
+    }
+
+    @Test
+    void aThyratronRelayStageInTheLogicIsJudgedByItsCoil() {
+        // a high input (48 V, from outside) puts the grid at -24 + 72 x 47/147 = -1.0 V, above the
+        // 2D21's critical -4 V: it fires, and the coil carries (24 - 8) / (1 + 100 + 160) = 61.30 mA
+        LevelAnalysisTest.Loaded l = LevelAnalysisTest.load(thyratronRelay("load coil 160 ohm pickup 50 mA from relay"));
+        LevelAnalysis a = LevelAnalysis.of(l.machine(), l.where().margins());
+        LoadDrive d = a.drives().get(0);
+        assertThat(d.stage()).isEqualTo("bench_thyratron");
+        assertThat(d.onAmps()).isCloseTo(16.0 / 261, within(1e-5));
+        assertThat(d.offAmps()).isCloseTo(0, within(1e-9));
+        assertThat(ElectricalCheck.findings(l.machine(), a)).isEmpty();
+
+        assertThat(findings(thyratronRelay("load coil 160 ohm pickup 70 mA from relay"))).singleElement()
+                .satisfies(x -> {
+                    assertThat(x.error()).isTrue();
+                    assertThat(x.message()).contains("relay coil of 'pulled' (bench_thyratron)", "may never pull in");
+                });
+        // the coil written as a plain resistor: its pick-up is unknown, which check says
+        assertThat(findings(thyratronRelay("load 160 ohm from relay"))).singleElement().satisfies(x -> {
+            assertThat(x.error()).isFalse();
+            assertThat(x.message()).contains("is a plain 160 ohm resistor: its pick-up current is not stated");
+            assertThat(x.fix()).contains("load coil 160 ohm pickup <amps>");
+        });
+    }
 }

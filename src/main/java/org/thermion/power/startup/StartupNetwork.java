@@ -2,16 +2,16 @@ package org.thermion.power.startup;
 
 import org.thermion.model.BypassTrigger;
 import org.thermion.model.Envelope;
-import org.thermion.model.Gate;
 import org.thermion.model.HeaterRating;
 import org.thermion.model.HeaterString;
-import org.thermion.model.Latch;
 import org.thermion.model.Machine;
 import org.thermion.model.Rail;
 import org.thermion.model.RailDraw;
 import org.thermion.model.SoftStart;
 import org.thermion.model.StageType;
 import org.thermion.model.TubeType;
+import org.thermion.power.DrawingInstance;
+import org.thermion.power.DrawingInstances;
 import org.thermion.power.StageDraw;
 
 import java.util.ArrayList;
@@ -202,14 +202,9 @@ public final class StartupNetwork {
         for (int r = 0; r < nr; r++) {
             plate.add(new HashMap<>());
         }
-        for (Gate g : m.netlist().gates()) {
-            if (g.stage() >= 0) {
-                addDraw(m, m.stages().get(g.stage()), envState, m.gateEnvelope(g.id()), plate);
-            }
-        }
-        for (Latch l : m.netlist().latches()) {
-            if (l.stage() >= 0) {
-                addDraw(m, m.stages().get(l.stage()), envState, m.latchEnvelope(l.id()), plate);
+        for (DrawingInstance d : DrawingInstances.of(m)) {
+            if (d.kind() != DrawingInstance.Kind.BYPASS) { // the bypass thyratron is the relay driver's
+                addDraw(m, m.stages().get(d.stage()), envState, d.envelope(), plate);
             }
         }
         plateState = new int[nr][];

@@ -1,0 +1,85 @@
+package org.thermion.build;
+
+import org.junit.jupiter.api.Test;
+import org.thermion.faults.Step;
+import org.thermion.model.Machine;
+
+import java.util.List;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+/** The voltage chart against Ohm's law, a heater data sheet and Koren's published triode equation. */
+class PinVoltagesTest {
+    /** Three inverters on 12AU7 sections (two envelopes), heaters two in series on 25.2 V; our own demo values. */
+    static final String MACHINE = """
+            rail heat { voltage 25.2 V }
+            rail bplus { voltage 150 V }
+            rail bias { voltage -24 V }
+            heaters on heat { series 2 of 12AU7 }
+            stage inv : not { tube 12AU7; sections 1; fanin 1; circuit parallel; load 47 k from bplus; grid divider 100 k 100 k to bias; cathode ground }
+            realize { not inv }
+            module top {
+              in a, b, c
+              out x, y, z
+              x = !a
+              y = !b
+              z = !c
+            }
+            machine probe { top top; inputs a, b, c; outputs x, y, z }
+            """;
+
+    private final Machine m = BuildMachines.text(MACHINE);
+    private final BuildDocuments docs = BuildDocuments.of(m);
+    private final PinVoltages chart = new PinVoltages(docs);
+
+    private double at(PinVoltages.Chart c, String socket, int pin) {
+        Wiring.Socket s = docs.wiring().sockets().stream().filter(x -> x.ref().equals(socket)).findFirst().orElseThrow();
+        return c.volts(s.node(pin));
+    }
+
+    /** Plate current of one 12AU7 section by Koren 1996: mu 21.5, ex 1.3, kg1 1180, kp 84, kvb 300 (REFERENCES.md). */
+    private static double koren(double vp, double vg) {
+        double e1 = vp / 84 * Math.log1p(Math.exp(84 * (1 / 21.5 + vg / Math.sqrt(300 + vp * vp))));
+        return Math.pow(e1, 1.3) / 1180 * 2;
+    }
+
+    @Test
+    void atRestAGridSitsAtItsDividerAndThePlateCarriesOnlyKorensTailCurrent() {
+        PinVoltages.Chart rest = chart.at(ChartStates.atRest(m, null));
+        // switch off: 0 V into 100 k / 100 k to -24 V gives -12 V by Ohm's law (no grid current below the cathode)
+        assertThat(at(rest, "XV1", 7)).isCloseTo(-12.0, within(0.01));
+        assertThat(at(rest, "XV1", 8)).isEqualTo(0.0);
+        // beyond cut-off (about -Vp/mu = -7 V) Koren's law keeps a small tail: the 47 k load drops it
+        double vp = at(rest, "XV1", 6);
+        assertThat((150 - vp) / 47e3).isCloseTo(koren(vp, -12.0), within(koren(vp, -12.0) * 0.001));
+        assertThat(vp).isBetween(140.0, 150.0);
+        assertThat(rest.warnings()).isEmpty();
+    }
+
+    @Test
+    void heaterPinsStepDownTheStringByTwelvePointSixVolts() {
+        // 12AU7 heater: 12.6 V across pins 4-5 (hb9aik.ch/notes/serparfil.htm, tubeofile.com/tubes/12BH7,
+        // REFERENCES.md): two in series on 25.2 V, the first from the rail, the second to ground.
+        PinVoltages.Chart rest = chart.at(ChartStates.atRest(m, null));
+        assertThat(at(rest, "XV1", 4)).isCloseTo(25.2, within(1e-9));
+        assertThat(at(rest, "XV1", 5)).isCloseTo(12.6, within(0.01));
+        assertThat(at(rest, "XV2", 4)).isCloseTo(12.6, within(0.01));
+        assertThat(at(rest, "XV2", 5)).isEqualTo(0.0);
+    }
+
+    @Test
+    void aConductingSectionsPlateSatisfiesKorensEquationThroughItsLoad() {
+        List<PinVoltages.State> states = ChartStates.afterSteps(m, null, List.of(new Step(new boolean[] {true, false, false}, 1)));
+        PinVoltages.Chart on = chart.at(states.get(0));
+        double vp = at(on, "XV1", 6);
+        double vg = at(on, "XV1", 7);
+        // the grid is driven from 150 V through 100 k: it draws grid current and stands a little above the cathode
+        assertThat(vg).isBetween(0.0, 2.0);
+        double ip = koren(vp, vg);
+        assertThat((150 - vp) / 47e3).isCloseTo(ip, within(ip * 0.001));
+        assertThat(vp).isLessThan(100);
+        // the other two sections stay as at rest
+        assertThat(at(on, "XV1", 1)).isEqualTo(at(chart.at(ChartStates.atRest(m, null)), "XV1", 1));
+    }
+}
