@@ -15,6 +15,11 @@ public enum Radix {
         this.bitsPerDigit = bitsPerDigit;
     }
 
+    /** The radix of a base the machine declares (16, 10, 8 or 2). */
+    static Radix of(int base) {
+        return base == 10 ? DECIMAL : base == 8 ? OCTAL : base == 2 ? BINARY : HEX;
+    }
+
     /**
      * The number the levels (least significant first) make, as wide as the bus. A digit with an
      * unknown bit is {@code x}; in decimal any unknown bit makes the whole number {@code x}.

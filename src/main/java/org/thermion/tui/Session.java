@@ -339,7 +339,7 @@ public final class Session {
 
     /** How the bus {@code name} (an input or output bus) is written: hexadecimal unless the description declares a radix. */
     public Radix radix(String name) {
-        return Radix.HEX;
+        return Radix.of(machine.radix(name));
     }
 
     /** True when the instruction word comes from switches (no ROM or PC): the UI shows a switch panel for it. */

@@ -57,4 +57,19 @@ class BusDisplayTest {
         f.type("v");
         assertThat(f.text()).doesNotContain("word[0]");
     }
+
+    @Test
+    void aDeclaredRadixIsHonoured() throws IOException {
+        String text = java.nio.file.Files.readString(WordPanelTest.PANEL).replace("  inputs word d0 d1\n",
+                "  inputs word d0 d1\n  radix binary word\n");
+        org.thermion.lang.Diagnostics d = new org.thermion.lang.Diagnostics();
+        org.thermion.model.Machine m = new org.thermion.elab.Elaborator(new org.thermion.lang.SourceSet(), d)
+                .elaborateText(WordPanelTest.PANEL, text);
+        assertThat(d.hasErrors()).isFalse();
+        Session s = new Session(m, new org.thermion.asm.Assembly(new long[0], List.of()), DecodeLamp.DEFAULT_NAME,
+                new org.thermion.sim.InitMode.Zero(), null);
+        UiFixture f = new UiFixture(s, 100, 30, "word from switches");
+        f.type("+++");
+        assertThat(f.line("1-6 ")).contains("word 0b000011");
+    }
 }
