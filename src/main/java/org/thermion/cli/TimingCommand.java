@@ -253,9 +253,9 @@ final class TimingCommand implements Callable<Integer> {
         if (c == null) {
             rep.text("no path constrains the clock");
         } else {
-            rep.text(String.format(Locale.ROOT, "critical path: into %s on phase %d, %s + set-up %s over %d phase width%s",
-                            c.endpoint(), c.phase(), Numbers.si(c.arrival(), SECONDS), Numbers.si(c.setup(), SECONDS), c.span(),
-                            c.span() == 1 ? "" : "s"),
+            rep.text(String.format(Locale.ROOT, "critical path: into %s on phase %d, %s + set-up %s over %s",
+                            c.endpoint(), c.phase(), Numbers.si(c.arrival(), SECONDS), Numbers.si(c.setup(), SECONDS),
+                            Numbers.count(c.span(), "phase width")),
                     String.format(Locale.ROOT, "shortest safe period %s: highest safe clock rate %s nominal, %s at the "
                                     + "slow corner", Numbers.si(r.minPeriodSeconds(), SECONDS),
                             Numbers.si(r.maxClockHertz(), HERTZ), Numbers.si(slow.maxClockHertz(), HERTZ)));

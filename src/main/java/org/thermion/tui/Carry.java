@@ -20,9 +20,6 @@ import java.util.function.Function;
  * lines what changed in the description and program and what could not be kept.
  */
 final class Carry {
-    /** Names listed before "and N more". */
-    private static final int NAMES = 4;
-
     private Carry() {
     }
 
@@ -181,7 +178,7 @@ final class Carry {
         gone.removeAll(now);
         List<String> added = new ArrayList<>(now);
         added.removeAll(was);
-        String plural = noun.endsWith("h") ? noun + "es" : noun + "s";
+        String plural = Words.plural(noun);
         if (!added.isEmpty()) {
             out.add((added.size() == 1 ? "new " + noun + ": " : "new " + plural + ": ") + list(added));
         }
@@ -259,16 +256,11 @@ final class Carry {
         return m;
     }
 
-    /** Up to four names, then how many more. */
-    static String list(List<String> names) {
-        List<String> shown = names.subList(0, Math.min(NAMES, names.size()));
-        String s = String.join(", ", shown);
-        return names.size() > NAMES ? s + " and " + (names.size() - NAMES) + " more" : s;
+    private static String list(List<String> names) {
+        return Words.list(names);
     }
 
-    /** A counted noun that agrees with its number ("1 switch", "2 switches"). */
-    static String count(long n, String noun) {
-        String plural = noun.endsWith("h") ? noun + "es" : noun + "s";
-        return n + " " + (n == 1 ? noun : plural);
+    private static String count(long n, String noun) {
+        return Words.count(n, noun);
     }
 }
