@@ -54,6 +54,14 @@ final class Carry {
         names(out, "switch", portNames(a.inputs()), portNames(b.inputs()));
         names(out, "lamp", portNames(a.outputs()), portNames(b.outputs()));
         instructions(out, a, b);
+        java.util.Set<String> buses = new java.util.TreeSet<>(a.radixes().keySet());
+        buses.addAll(b.radixes().keySet());
+        for (String bus : buses) {
+            if (a.radix(bus) != b.radix(bus)) {
+                out.add("bus " + bus + " now written in " + Radix.of(b.radix(bus)).word() + " (was "
+                        + Radix.of(a.radix(bus)).word() + ")");
+            }
+        }
         long[] wa = old.assembly().words();
         long[] wb = fresh.assembly().words();
         int differ = 0;

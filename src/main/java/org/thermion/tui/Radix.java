@@ -15,6 +15,11 @@ public enum Radix {
         this.bitsPerDigit = bitsPerDigit;
     }
 
+    /** The word the description uses for it. */
+    String word() {
+        return name().toLowerCase(java.util.Locale.ROOT);
+    }
+
     /** The radix of a base the machine declares (16, 10, 8 or 2). */
     static Radix of(int base) {
         return base == 10 ? DECIMAL : base == 8 ? OCTAL : base == 2 ? BINARY : HEX;

@@ -71,5 +71,6 @@ class BusDisplayTest {
         UiFixture f = new UiFixture(s, 100, 30, "word from switches");
         f.type("+++");
         assertThat(f.line("1-6 ")).contains("word 0b000011");
+        assertThat(Carry.changes(WordPanelTest.panel(100, 30).session, s)).contains("bus word now written in binary (was hex)");
     }
 }
