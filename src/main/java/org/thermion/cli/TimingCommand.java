@@ -9,7 +9,7 @@ import org.thermion.circuit.MachineCircuits;
 import org.thermion.circuit.Tolerances;
 import org.thermion.model.Machine;
 import org.thermion.timing.DelayCalculator;
-import org.thermion.timing.NetLabels;
+import org.thermion.model.NetLabels;
 import org.thermion.timing.PathAdvice;
 import org.thermion.timing.RaceChecks;
 import org.thermion.timing.InstanceDelay;
