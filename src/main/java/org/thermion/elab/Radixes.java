@@ -30,7 +30,10 @@ final class Radixes {
         Map<String, Integer> out = new LinkedHashMap<>();
         for (int i = 0; i < mb.radixBuses.size(); i++) {
             Value v = mb.radixBuses.get(i);
-            if (!buses.contains(v.text())) {
+            if (!buses.contains(v.text()) && ports.stream().anyMatch(p -> p.name().equals(v.text()))) {
+                diags.error(v.span(), "'" + v.text() + "' is one bit, not a bus: a radix is for a bus of several bits",
+                        "declare the port with a width (e.g. in " + v.text() + "[4]) or leave it out of the radix line");
+            } else if (!buses.contains(v.text())) {
                 List<String> known = new ArrayList<>(buses);
                 diags.error(v.span(), "no input or output bus '" + v.text() + "' to write in a radix",
                         Declarations.hintFor(v.text(), known, known.isEmpty()
