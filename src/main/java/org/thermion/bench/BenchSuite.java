@@ -97,6 +97,9 @@ public final class BenchSuite {
             rows.add(BenchRow.target(who, "heap per stage instance", bytes / stages, "B", HEAP_PER_STAGE, true, "2 KB"));
             speeds(rows, who, m, stages);
             LevelsBench.rows(rows, who, m, quick, who.equals(label(10_000)));
+            if (stages <= 10_000) {
+                SheetsBench.rows(rows, who, m, quick, who.equals(label(10_000)));
+            }
         }
         Machine demoMachine = sources.get(0).elaborate();
         verify(rows, demoMachine);

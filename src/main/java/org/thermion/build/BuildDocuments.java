@@ -23,8 +23,13 @@ public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.H
                              MachineCircuits circuits) {
 
     public static BuildDocuments of(Machine m) {
+        return of(m, Designations.NONE);
+    }
+
+    /** As {@link #of(Machine)}, parts keeping the designators {@code d} gives them. */
+    public static BuildDocuments of(Machine m, Designations d) {
         MachineCircuits circuits = MachineCircuits.of(m);
-        WiringBuilder w = new WiringBuilder(m);
+        WiringBuilder w = new WiringBuilder(m, d);
         Dissipation heat = new Dissipation(m, circuits);
         StageWiring stages = new StageWiring(w, circuits, heat);
         Netlist n = m.netlist();
@@ -65,10 +70,9 @@ public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.H
         HeaterWiring hw = new HeaterWiring(w);
         hw.wire(new HeaterAnalysis(m));
         for (SoftStart s : m.softStarts()) {
-            w.parts.add(new Part(w.boards.next(0, PartClass.RESISTOR), PartClass.RESISTOR, s.resistorOhms(), "power resistor",
-                    0, "soft start " + s.name(), s.ratedWatts(), -1));
-            w.parts.add(new Part(w.boards.next(0, PartClass.RELAY), PartClass.RELAY, s.relay().coilOhms(),
-                    "relay, coil " + Values.ohms(s.relay().coilOhms()), 0, "bypass of soft start " + s.name(), Double.NaN, -1));
+            w.loose(PartClass.RESISTOR, s.resistorOhms(), "power resistor", 0, "soft start " + s.name(), s.ratedWatts());
+            w.loose(PartClass.RELAY, s.relay().coilOhms(), "relay, coil " + Values.ohms(s.relay().coilOhms()), 0,
+                    "bypass of soft start " + s.name(), Double.NaN);
         }
         return new BuildDocuments(m, w.build(), List.copyOf(hw.runs), circuits);
     }

@@ -38,9 +38,11 @@ final class WiringBuilder {
     private final List<Set<Integer>> doubts = new ArrayList<>();
     private final Set<String> missingBasing = new java.util.TreeSet<>();
 
-    WiringBuilder(Machine m) {
+    private final Set<String> roles = new java.util.HashSet<>();
+
+    WiringBuilder(Machine m, Designations designations) {
         this.m = m;
-        this.boards = new Boards(m);
+        this.boards = new Boards(m, designations);
         this.aliases = new Aliases(m.netlist());
         int n = m.envelopes().size();
         socketRef = new String[n];
@@ -51,17 +53,33 @@ final class WiringBuilder {
                 boards.reserve(boards.of(e.module()), "V", Integer.parseInt(e.designator().substring(1)));
             }
         }
+        String[] roleOf = new String[n];
+        String[] refOf = new String[n];
+        for (Envelope e : m.envelopes()) {
+            int board = boards.of(e.module());
+            roleOf[e.id()] = role("tube " + m.tubes().get(e.tube()).name() + " for " + holds(e));
+            refOf[e.id()] = e.pinned() ? boards.prefix(board) + e.designator()
+                    : boards.fromFile(board, PartClass.TUBE, designations.byRole().get(roleOf[e.id()]));
+        }
+        // a tube whose stages changed keeps the designator of the recorded tube it shares most stages with
+        for (Envelope e : m.envelopes()) {
+            if (refOf[e.id()] == null) {
+                refOf[e.id()] = boards.closestTube(boards.of(e.module()), roleOf[e.id()]);
+            }
+        }
         for (Envelope e : m.envelopes()) {
             TubeType t = m.tubes().get(e.tube());
             int board = boards.of(e.module());
-            String name = e.pinned() ? e.designator() : "V" + boards.nextNumber(board, "V");
-            tubeRef[e.id()] = boards.prefix(board) + name;
-            socketRef[e.id()] = boards.prefix(board) + "X" + name;
+            String role = roleOf[e.id()];
+            String prefix = boards.prefix(board);
+            String name = (refOf[e.id()] != null ? refOf[e.id()] : boards.next(board, PartClass.TUBE)).substring(prefix.length());
+            tubeRef[e.id()] = prefix + name;
+            socketRef[e.id()] = prefix + "X" + name;
             Basing b = t.basing();
             socketNodes[e.id()] = new int[b == null ? 0 : b.pinCount()];
             Arrays.fill(socketNodes[e.id()], -1);
             doubts.add(t.doubtfulPins());
-            parts.add(new Part(tubeRef[e.id()], PartClass.TUBE, Double.NaN, t.name(), board, "envelope " + (e.id() + 1), Double.NaN, -1));
+            parts.add(new Part(tubeRef[e.id()], PartClass.TUBE, Double.NaN, t.name(), board, role, Double.NaN, -1));
             parts.add(new Part(socketRef[e.id()], PartClass.SOCKET, Double.NaN, b == null ? "base unknown" : b.base(), board,
                     "socket of " + tubeRef[e.id()], Double.NaN, -1));
             if (b == null) {
@@ -71,6 +89,27 @@ final class WiringBuilder {
         for (String t : missingBasing) {
             problems.add("tube " + t + " has no basing data: its pins are shown as '?'; add a `basing` line to its tube block");
         }
+    }
+
+    /** The stage instances in an envelope's sections, by their output nets ("spare" for an empty one). */
+    private String holds(Envelope e) {
+        java.util.SortedSet<String> names = new java.util.TreeSet<>();
+        for (Envelope.Slot s : e.slots()) {
+            if (s.index() >= 0) {
+                int out = s.latch() ? m.netlist().latches().get(s.index()).output() : m.netlist().gates().get(s.index()).output();
+                names.add(m.netlist().netName(out));
+            }
+        }
+        return names.isEmpty() ? "spare sections" : String.join(", ", names);
+    }
+
+    /** {@code role}, made unique among the parts (a part's role is its key in the designations file). */
+    String role(String role) {
+        String r = role;
+        for (int k = 2; !roles.add(r); k++) {
+            r = role + " (" + k + ")";
+        }
+        return r;
     }
 
     String tubeRef(int env) {
@@ -118,10 +157,19 @@ final class WiringBuilder {
         leads.get(node).add(lead);
     }
 
+    /** A part with no leads in the wiring (a soft start's power resistor and relay); returns its designator. */
+    String loose(PartClass cls, double ohms, String type, int board, String role, double watts) {
+        String key = role(role);
+        String ref = boards.designate(board, cls, key);
+        parts.add(new Part(ref, cls, ohms, type, board, key, watts, -1));
+        return ref;
+    }
+
     /** A two-lead part between nodes {@code a} and {@code b}; returns its designator. */
     String twoLead(PartClass cls, double ohms, String type, int board, String role, double watts, int owner, int a, int b) {
-        String ref = boards.next(board, cls);
-        parts.add(new Part(ref, cls, ohms, type, board, role, watts, owner));
+        String key = role(role);
+        String ref = boards.designate(board, cls, key);
+        parts.add(new Part(ref, cls, ohms, type, board, key, watts, owner));
         connect(a, new Lead(ref, "1", "end 1", false));
         connect(b, new Lead(ref, "2", "end 2", false));
         return ref;
@@ -129,8 +177,9 @@ final class WiringBuilder {
 
     /** A part with named leads, each to its node; returns its designator. */
     String multiLead(PartClass cls, String type, int board, String role, int owner, String[] pins, int[] nodes) {
-        String ref = boards.next(board, cls);
-        parts.add(new Part(ref, cls, Double.NaN, type, board, role, Double.NaN, owner));
+        String key = role(role);
+        String ref = boards.designate(board, cls, key);
+        parts.add(new Part(ref, cls, Double.NaN, type, board, key, Double.NaN, owner));
         for (int i = 0; i < pins.length; i++) {
             connect(nodes[i], new Lead(ref, pins[i], pins[i], false));
         }

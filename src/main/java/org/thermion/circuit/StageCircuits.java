@@ -27,7 +27,8 @@ public final class StageCircuits {
 
     private static StageCircuit build(StageType stage, StageCircuitSpec s, TubeModel tube) {
         String name = stage.name();
-        CathodeReturn cathode = new CathodeReturn(s.cathodeOhms(), s.cathodeRail());
+        CathodeReturn cathode = new CathodeReturn(s.cathodeOhms(), s.cathodeRail(), Double.isNaN(s.cathodeCoilPickupAmps())
+                ? null : new RelayCoil(s.cathodeOhms(), s.cathodeCoilPickupAmps(), 0));
         GridNetwork grid = new GridNetwork(s.gridSeriesOhms(), s.gridToBiasOhms(), s.gridRail(), s.gridStopperOhms());
         int inputs = Math.max(1, stage.fanIn());
         switch (s.arrangement()) {

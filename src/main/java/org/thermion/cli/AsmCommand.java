@@ -12,11 +12,8 @@ import org.thermion.asm.Listing;
 import org.thermion.lang.SourceText;
 import org.thermion.model.Machine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -26,14 +23,13 @@ import java.util.List;
 
 import static org.thermion.cli.report.ReportUnit.COUNT;
 import static org.thermion.cli.report.ReportUnit.TEXT;
-import java.util.concurrent.Callable;
 
 /** {@code asm MACHINE PROGRAM}: assemble a program for a machine into Intel HEX and a listing. */
 @Command(name = "asm", mixinStandardHelpOptions = true,
         description = {"Assemble a program for a machine's instruction set.",
                 "Writes Intel HEX (I8HEX; past 64 KiB, I32HEX with type-04 records) to FILE with -o, else to standard output; --listing prints the listing "
                         + "(instead of the HEX when there is no -o)."})
-final class AsmCommand implements Callable<Integer> {
+final class AsmCommand extends CommandBase {
     @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
     Path machineFile;
 
@@ -53,16 +49,10 @@ final class AsmCommand implements Callable<Integer> {
             description = "The listing as text, csv or json (csv and json imply --listing; default: ${DEFAULT-VALUE}).")
     Format format;
 
-    @Mixin
-    CommonOptions common;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() throws IOException {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         MachineLoader loader = new MachineLoader();
         Machine m = loader.load(machineFile, err, false);
         if (m == null) {

@@ -10,10 +10,7 @@ import org.thermion.bench.BenchRow;
 import org.thermion.bench.BenchSuite;
 import org.thermion.sim.compiled.Engine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -26,14 +23,13 @@ import static org.thermion.cli.report.ReportUnit.FLAG;
 import static org.thermion.cli.report.ReportUnit.NUMBER;
 import static org.thermion.cli.report.ReportUnit.SECONDS;
 import static org.thermion.cli.report.ReportUnit.TEXT;
-import java.util.concurrent.Callable;
 
 /** {@code bench}: speed and scale of elaboration and simulation, against their targets. */
 @Command(name = "bench", mixinStandardHelpOptions = true, hidden = true, // a developer tool: DEVELOPERS.md documents it
         description = "Measure elaboration time, heap per stage instance and simulation speed of each engine"
                 + " on the demo and on synthetic machines, beside the straight-line reference; each figure"
                 + " is shown against its target. One run, with warm-up; takes a minute or two (--quick: seconds).")
-final class BenchCommand implements Callable<Integer> {
+final class BenchCommand extends CommandBase {
     @Option(names = "--sizes", split = ",", paramLabel = "N",
             description = "Synthetic machine sizes in stage instances (default: 1000,10000,100000).")
     List<Integer> sizes;
@@ -62,16 +58,10 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (default text).")
     Format format = Format.text;
 
-    @Mixin
-    CommonOptions common;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         List<Integer> n = sizes != null ? sizes : quick ? List.of(1000, 10_000) : List.of(1000, 10_000, 100_000);
         for (int s : n) {
             if (s < 200 || s > 2_000_000) {

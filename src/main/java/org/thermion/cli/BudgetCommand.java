@@ -1,6 +1,5 @@
 package org.thermion.cli;
 
-import org.thermion.cli.report.Format;
 import org.thermion.model.Machine;
 import org.thermion.power.Budget;
 import org.thermion.power.CurrentMeter;
@@ -8,15 +7,11 @@ import org.thermion.power.StageDraw;
 import org.thermion.power.startup.SteadyHeaters;
 import org.thermion.sim.InitMode;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 
 /**
  * {@code budget MACHINE}: tube count, heater strings, plate and bias current and the supply
@@ -30,7 +25,7 @@ import java.util.concurrent.Callable;
                         + "minimum, mean and peak current over every phase, and the cycle and phase of the peak.",
                 "Exit code 1 when a check fails: a rail over its limit, a heater over its rating band, "
                         + "a string mixing heater currents without shunts."})
-final class BudgetCommand implements Callable<Integer> {
+final class BudgetCommand extends ReportCommand {
     @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
     Path machineFile;
 
@@ -50,32 +45,18 @@ final class BudgetCommand implements Callable<Integer> {
             description = "Latches at power-up: zero, random:SEED or unknown (default: ${DEFAULT-VALUE}).")
     String init;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
-            description = "text, csv or json (default: ${DEFAULT-VALUE}).")
-    Format format;
-
-    @Mixin
-    CommonOptions common;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         if (cycles < 1) {
-            err.println("error: --cycles must be at least 1, not " + cycles);
-            err.flush();
-            return ExitCodes.BAD_INPUT;
+            return badInput("--cycles must be at least 1, not " + cycles);
         }
         InitMode mode;
         try {
             mode = InitMode.parse(init);
         } catch (IllegalArgumentException e) {
-            err.println("error: --init: " + e.getMessage());
-            err.flush();
-            return ExitCodes.BAD_INPUT;
+            return badInput("--init: " + e.getMessage());
         }
         MachineLoader loader = new MachineLoader();
         Machine m = loader.load(machineFile, err, false);
@@ -94,9 +75,7 @@ final class BudgetCommand implements Callable<Integer> {
         CurrentMeter meter = null;
         if (program != null || inputs != null) {
             if (program == null && m.rom() != null) {
-                err.println("error: --inputs needs --program: machine " + m.name() + " runs from a ROM");
-                err.flush();
-                return ExitCodes.BAD_INPUT;
+                return badInput("--inputs needs --program: machine " + m.name() + " runs from a ROM");
             }
             ProgramInput in = ProgramInput.read(m, program, inputs, loader, err);
             if (in == null) {

@@ -1,6 +1,5 @@
 package org.thermion.cli;
 
-import org.thermion.cli.report.Format;
 import picocli.CommandLine.Option;
 import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
@@ -9,35 +8,21 @@ import org.thermion.levels.Finding;
 import org.thermion.levels.LevelAnalysis;
 import org.thermion.model.Machine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
 
 /** {@code check FILE}: parse, elaborate and lint; print a summary. */
 @Command(name = "check", mixinStandardHelpOptions = true,
         description = "Parse, elaborate and lint a machine description; print its summary.")
-final class CheckCommand implements Callable<Integer> {
+final class CheckCommand extends ReportCommand {
     @Parameters(paramLabel = "FILE", description = "The .machine file.")
     Path file;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
-            description = "text, csv or json (default: ${DEFAULT-VALUE}).")
-    Format format;
-
     @Option(names = "--watch", description = "Check again whenever the file or one it includes is saved (Ctrl-C stops).")
     boolean watch;
-
-    @Mixin
-    CommonOptions common;
-
-    @Spec
-    CommandSpec spec;
 
     @Override
     public Integer call() {
@@ -45,18 +30,18 @@ final class CheckCommand implements Callable<Integer> {
             return checkOnce(new MachineLoader());
         }
         int[] last = new int[1];
-        new CheckWatch(spec.commandLine().getOut()).run(() -> {
+        new CheckWatch(out()).run(() -> {
             MachineLoader loader = new MachineLoader();
             last[0] = checkOnce(loader);
-            spec.commandLine().getErr().flush();
+            err().flush();
             return loader.sources().files();
         }, 0);
         return last[0];
     }
 
     private int checkOnce(MachineLoader fresh) {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         MachineLoader loader = fresh.withLanguagePointers();
         Machine m = loader.loadOrModules(file, err, true);
         if (m == null && !loader.diagnostics().hasErrors() && !loader.modulesAlone().isEmpty()) {

@@ -1,6 +1,5 @@
 package org.thermion.cli;
 
-import org.thermion.cli.report.Format;
 import org.thermion.faults.Diagnosis;
 import org.thermion.faults.Effort;
 import org.thermion.faults.FaultSimulator;
@@ -10,15 +9,12 @@ import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
 
 /** {@code diagnose MACHINE SEEN.csv}: which faults explain the lamps the builder saw while following the plan. */
 @Command(name = "diagnose", mixinStandardHelpOptions = true,
@@ -30,7 +26,7 @@ import java.util.concurrent.Callable;
                 "SEEN.csv: a header 'step,LAMP,...' with lamps of the plan, then one row per step you looked at: "
                         + "1 lit, 0 dark, empty when you did not look. Give the same --program and --distinguish as "
                         + "to 'plan', so the steps are the ones you followed."})
-final class DiagnoseCommand implements Callable<Integer> {
+final class DiagnoseCommand extends ReportCommand {
     @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
     Path machineFile;
 
@@ -44,20 +40,10 @@ final class DiagnoseCommand implements Callable<Integer> {
             description = "Show the N best groups of faults (default: ${DEFAULT-VALUE}).")
     int top;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
-            description = "text, csv or json (default: ${DEFAULT-VALUE}).")
-    Format format;
-
-    @Mixin
-    CommonOptions common;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         if (!options.valid(err) || top < 1) {
             if (top < 1) {
                 err.println("error: --top must be at least 1, not " + top);

@@ -2,18 +2,12 @@ package org.thermion.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 
-import org.thermion.cli.report.Format;
 import org.thermion.levels.LevelAnalysis;
 import org.thermion.model.Machine;
 
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code levels FILE}: every net's logic levels, noise margins, load and fan-out limit, worst first. */
 @Command(name = "levels", mixinStandardHelpOptions = true,
@@ -22,26 +16,16 @@ import picocli.CommandLine.Spec;
                 + "high and low level, the receivers' thresholds, both margins at nominal values and at the "
                 + "tolerance corner that worsens each (named), and the most loads the driver could feed. Worst "
                 + "net first. Lamp and coil drivers follow with their load currents.",
-                "Tolerances come from the machine's `margins { ... }` block (defaults: rails and resistors 5 %, "
-                        + "worn tubes at 70 % emission)."})
-final class LevelsCommand implements Callable<Integer> {
+                "Tolerances come from the machine's `margins { ... }` block (defaults: rails and resistors 5 %%, "
+                        + "worn tubes at 70 %% emission)."})
+final class LevelsCommand extends ReportCommand {
     @Parameters(paramLabel = "FILE", description = "The .machine file.")
     Path file;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
-            description = "text, csv or json (default: ${DEFAULT-VALUE}).")
-    Format format;
-
-    @Mixin
-    CommonOptions common;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         MachineLoader loader = new MachineLoader();
         Machine m = loader.load(file, err, false);
         if (m == null) {

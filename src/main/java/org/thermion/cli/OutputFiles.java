@@ -47,6 +47,7 @@ final class OutputFiles {
         HEX("an Intel HEX image", OutputFiles::isHex),
         VCD("a value change dump", head -> head.startsWith("$date") && head.contains("$version\n  thermion")),
         POWERUP_CSV("a power-up time series", head -> head.startsWith("time_s,") || head.startsWith("time_seconds,")),
+        DESIGNATORS("a designators file", head -> head.startsWith(org.thermion.build.Designations.HEADER)),
         SVG("a picture", head -> head.startsWith("<?xml") && head.contains("<!-- " + org.thermion.plot.SvgWriter.GENERATOR + " -->"));
 
         final String noun;

@@ -1,21 +1,16 @@
 package org.thermion.cli;
 
-import org.thermion.cli.report.Format;
 import org.thermion.faults.Diagnosis;
 import org.thermion.faults.FaultSimulator;
 import org.thermion.faults.Plan;
 import org.thermion.faults.Step;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
 
 /** {@code plan MACHINE}: the fault list and a bring-up test plan for the switch panel and lamps. */
 @Command(name = "plan", mixinStandardHelpOptions = true,
@@ -25,30 +20,20 @@ import java.util.concurrent.Callable;
                 + "fault: detected at a step, proven undetectable (and why), or aborted when the effort ran out.",
                 "Lamps are the machine's outputs, its ISA state bits and its lamp and relay stages; latches power "
                         + "up unknown. A machine with a ROM runs the --program given."})
-final class PlanCommand implements Callable<Integer> {
+final class PlanCommand extends ReportCommand {
     @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
     Path machineFile;
 
     @Mixin
     PlanOptions options;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
-            description = "text, csv or json (default: ${DEFAULT-VALUE}).")
-    Format format;
-
-    @Mixin
-    CommonOptions common;
-
     @Mixin
     ProgressOptions progressOptions = new ProgressOptions();
 
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         if (!options.valid(err)) {
             err.flush();
             return ExitCodes.BAD_INPUT;

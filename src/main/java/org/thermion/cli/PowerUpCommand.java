@@ -16,15 +16,12 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.Callable;
 
 /** {@code powerup MACHINE}: the switch-on transient of every rail, the soft start and its relay driver. */
 @Command(name = "powerup", mixinStandardHelpOptions = true,
@@ -34,7 +31,7 @@ import java.util.concurrent.Callable;
                 "Rail currents: switch-on peak = the inrush before any bypass (none when the current only rises), "
                         + "bypass peak = the highest after the bypass, steady state = the end of the run once settled "
                         + "(moved under 1 % over its last tenth). Every current is a magnitude; volts are signed as declared."})
-final class PowerUpCommand implements Callable<Integer> {
+final class PowerUpCommand extends CommandBase {
     @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
     Path file;
 
@@ -98,21 +95,15 @@ final class PowerUpCommand implements Callable<Integer> {
     boolean ascii;
 
     @Mixin
-    CommonOptions common;
-
-    @Mixin
     ProgressOptions progressOptions = new ProgressOptions();
-
-    @Spec
-    CommandSpec spec;
 
     /** The fit --calibrate made (null without one). */
     private PowerUpFit.Done fitted;
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         PowerUpOptions o;
         PowerUpArgs.Named<PowerUpArgs.Range> range = null;
         List<PowerUpArgs.Named<Double>> rs;
@@ -137,8 +128,7 @@ final class PowerUpCommand implements Callable<Integer> {
             o = PowerUpOptions.defaults().withSeconds(seconds).withDrawMode(mode)
                     .withSampleSeconds(Math.max(0.001, seconds / 3000));
         } catch (IllegalArgumentException e) {
-            err.println("error: " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+            return badInput(e.getMessage());
         }
         MachineLoader loader = new MachineLoader();
         Machine m = loader.load(file, err, false);
@@ -146,8 +136,7 @@ final class PowerUpCommand implements Callable<Integer> {
             return ExitCodes.BAD_INPUT;
         }
         if (fit != null && calibrate != null) {
-            err.println("error: give --fit (report the fit) or --calibrate (predict with it), not both");
-            return ExitCodes.BAD_INPUT;
+            return badInput("give --fit (report the fit) or --calibrate (predict with it), not both");
         }
         if (fit != null || calibrate != null) {
             fitted = PowerUpFit.fit(m, fit != null ? fit : calibrate, traceRail, o, mode, loader, err);
@@ -168,9 +157,8 @@ final class PowerUpCommand implements Callable<Integer> {
             o = o.withAssumptions(fitted.result().assumptions());
         }
         if (m.softStarts().isEmpty() && !rs.isEmpty()) {
-            err.println("error: " + file + " declares no soft start, so --resistor has nothing to change; "
+            return badInput(file + " declares no soft start, so --resistor has nothing to change; "
                     + "--sweep sizes one");
-            return ExitCodes.BAD_INPUT;
         }
         if (m.softStarts().isEmpty() && range != null) {
             return size(m, o, mode, range, loader, out, err);
@@ -179,8 +167,7 @@ final class PowerUpCommand implements Callable<Integer> {
         try {
             net = network(m, o, mode);
         } catch (TransientFailure e) {
-            err.println("error: " + file + ": " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+            return badInput(file + ": " + e.getMessage());
         }
         try {
             for (PowerUpArgs.Named<Double> r : rs) {
@@ -191,7 +178,8 @@ final class PowerUpCommand implements Callable<Integer> {
                 double[] values = ResistorSweep.range(range.value().from(), range.value().to(), range.value().step());
                 ResistorSweep.Result sr;
                 try (ProgressBar bar = ProgressBar.start(err, "resistor sweep", "resistors", progressOptions.mode())) {
-                    sr = ResistorSweep.run(net, o, name, values, done -> bar.update(done, values.length));
+                    sr = ResistorSweep.run(net, o, name, values, Runtime.getRuntime().availableProcessors(),
+                            done -> bar.update(done, values.length));
                 }
                 if (svg != null) {
                     int code = PlotFile.write(svg, PowerUpFigures.sweep(sr), replace, inputs(), loader.sources(), err);
@@ -203,8 +191,7 @@ final class PowerUpCommand implements Callable<Integer> {
                 return sr.recommended() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
             }
         } catch (IllegalArgumentException | TransientFailure e) {
-            err.println("error: " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+            return badInput(e.getMessage());
         }
         PowerUpResult result;
         List<BypassDelay.Advice> advice;
@@ -212,8 +199,7 @@ final class PowerUpCommand implements Callable<Integer> {
             result = net.solve(o);
             advice = BypassDelay.suggest(net, o);
         } catch (TransientFailure e) {
-            err.println("error: " + file + ": " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+            return badInput(file + ": " + e.getMessage());
         }
         PowerUpReport report = new PowerUpReport(result, advice);
         if (csv != null) {
@@ -271,8 +257,7 @@ final class PowerUpCommand implements Callable<Integer> {
             out.flush();
             return t.best() == null ? ExitCodes.CHECK_FAILED : ExitCodes.OK;
         } catch (IllegalArgumentException | TransientFailure e) {
-            err.println("error: " + e.getMessage());
-            return ExitCodes.BAD_INPUT;
+            return badInput(e.getMessage());
         }
     }
 

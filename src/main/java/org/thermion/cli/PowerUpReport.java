@@ -246,6 +246,10 @@ final class PowerUpReport {
             String trig = s.thyratron()
                     ? (Double.isNaN(s.triggerTime()) ? "thyratron did not fire within the run" : "thyratron fired at " + Numbers.si(s.triggerTime(), SECONDS))
                     : (Double.isNaN(s.triggerTime()) ? "delay beyond the run" : "delay of " + Numbers.si(s.triggerTime(), SECONDS));
+            if (!s.covers().isEmpty()) {
+                out.add("  covers    " + String.join(", ", s.covers()) + "; the rest of rail " + rail
+                        + " is fed ahead of the resistor");
+            }
             out.add("  trigger   " + trig);
             out.add("  bypass    " + (s.bypassed() ? "relay closed at " + Numbers.si(s.bypassTime(), SECONDS) : "NOT within the run: the resistor stays in circuit"));
             out.add("  resistor  " + Numbers.si(s.joules(), JOULES) + " dissipated; peak " + Numbers.si(s.peakWatts(), WATTS) + ", mean "

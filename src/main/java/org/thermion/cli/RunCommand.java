@@ -13,11 +13,8 @@ import org.thermion.sim.RunResult;
 import org.thermion.sim.Stimulus;
 import org.thermion.sim.VcdWriter;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -30,7 +27,6 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import java.util.concurrent.Callable;
 
 /**
  * {@code run MACHINE [PROGRAM]}: assemble a program and run it on the machine's logic or its ISA.
@@ -43,7 +39,7 @@ import java.util.concurrent.Callable;
                         + "state. The run ends at the cycle limit or at a fixed point (a cycle that changes nothing "
                         + "while no stimulus row is still to come). Exit 1 when an unknown value reaches an output or "
                         + "the jump (with --init unknown)."})
-final class RunCommand implements Callable<Integer> {
+final class RunCommand extends ReportCommand {
     enum Level { logic, isa }
 
     @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
@@ -86,21 +82,11 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--vcd-all", description = "Dump every named net, not only inputs, outputs, state and watched nets.")
     boolean vcdAll;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
-            description = "text, csv or json; default ${DEFAULT-VALUE}.")
-    Format format;
-
     @Option(names = "--engine", paramLabel = "ENGINE", defaultValue = "auto", hidden = true, // for developers (DEVELOPERS.md)
             description = "compiled (the logic as generated straight-line bytecode), array (flat gate arrays) or auto "
                     + "(compiled for small machines, and for long runs on all but the largest, array otherwise); default ${DEFAULT-VALUE}. "
                     + "All give the same results; unknown-mode runs use the array engine.")
     String engine;
-
-    @Mixin
-    CommonOptions common;
-
-    @Spec
-    CommandSpec spec;
 
     /** The simulator on the chosen engine; the compiled one is not built for three-valued runs, which never use it. */
     private org.thermion.sim.Simulator simulator(Machine m, InitMode mode) {
@@ -116,27 +102,27 @@ final class RunCommand implements Callable<Integer> {
         try {
             org.thermion.sim.compiled.Engine.parse(engine);
         } catch (IllegalArgumentException e) {
-            return usage(spec.commandLine().getErr(), "--engine: " + e.getMessage(), null);
+            return badInput("--engine: " + e.getMessage());
         }
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         if (vcd != null && level == Level.isa) {
-            return usage(err, "--vcd needs --level logic: the ISA level has no nets to dump", null);
+            return badInput("--vcd needs --level logic: the ISA level has no nets to dump");
         }
         if (vcdAll && vcd == null) {
-            return usage(err, "--vcd-all needs --vcd FILE", null);
+            return badInput("--vcd-all needs --vcd FILE");
         }
         if (cycles < 1) {
-            return usage(err, "--cycles must be at least 1, found " + cycles, null);
+            return badInput("--cycles must be at least 1, found " + cycles);
         }
         InitMode mode;
         try {
             mode = InitMode.parse(init);
         } catch (IllegalArgumentException e) {
-            return usage(err, "--init: " + e.getMessage(), null);
+            return badInput("--init: " + e.getMessage());
         }
         if (level == Level.isa && mode instanceof InitMode.Unknown) {
-            return usage(err, "--init unknown needs --level logic: the ISA level has no unknown values", null);
+            return badInput("--init unknown needs --level logic: the ISA level has no unknown values");
         }
         MachineLoader loader = new MachineLoader();
         Machine m = loader.load(machineFile, err, false);
@@ -145,16 +131,16 @@ final class RunCommand implements Callable<Integer> {
         }
         boolean programmable = m.isa() != null && m.rom() != null && m.pc() != null;
         if (program != null && !programmable) {
-            return usage(err, machineFile + ": machine " + m.name() + " needs an isa block, a rom and a pc to run programs",
+            return badInput(machineFile + ": machine " + m.name() + " needs an isa block, a rom and a pc to run programs",
                     "leave out PROGRAM to run its logic from the stimulus alone");
         }
         if (program == null && m.rom() != null) {
-            return usage(err, "machine " + m.name() + " has a ROM: name the PROGRAM to run", null);
+            return badInput("machine " + m.name() + " has a ROM: name the PROGRAM to run");
         }
         boolean switchFed = m.isa() != null && m.isa().wordFromSwitches();
         if (program == null && level == Level.isa && !switchFed) {
-            return usage(err, "--level isa needs a machine with an isa block and a PROGRAM,"
-                    + " or an isa whose word comes from switches", null);
+            return badInput("--level isa needs a machine with an isa block and a PROGRAM,"
+                    + " or an isa whose word comes from switches");
         }
         ProgramInput in = ProgramInput.read(m, program, inputs, loader, err);
         if (in == null) {
@@ -168,7 +154,7 @@ final class RunCommand implements Callable<Integer> {
             named.add(inputs);
         }
         if (svg != null && watch.isEmpty()) {
-            return usage(err, "--svg draws the watched nets: name them with --watch", "e.g. --watch acc,pc");
+            return badInput("--svg draws the watched nets: name them with --watch", "e.g. --watch acc,pc");
         }
         if (vcd != null) {
             OutputFiles.Refusal no = OutputFiles.check(vcd, OutputFiles.Kind.VCD, replace, named, loader.sources());
@@ -191,7 +177,7 @@ final class RunCommand implements Callable<Integer> {
         try {
             watches = watch.isEmpty() ? List.of() : level == Level.isa ? Watches.isa(m, watch) : Watches.logic(m, watch);
         } catch (IllegalArgumentException e) {
-            return usage(err, "--watch: " + e.getMessage(),
+            return badInput("--watch: " + e.getMessage(),
                     level == Level.isa ? null : "names are as 'check' lists them, e.g. acc, line[3], a bus by its name, pc");
         }
         long started = System.nanoTime();
@@ -209,7 +195,7 @@ final class RunCommand implements Callable<Integer> {
                         ZonedDateTime.now().format(DateTimeFormatter.RFC_1123_DATE_TIME), spec.root().version()[0]);
                 file.commit();
             } catch (IOException | java.io.UncheckedIOException e) {
-                return usage(err, "cannot write the VCD to " + vcd + ": " + e.getMessage(), null);
+                return badInput("cannot write the VCD to " + vcd + ": " + e.getMessage());
             }
             vcdNote = "value change dump written to " + vcd + " (" + dumped.stream().distinct().count()
                     + (m.pc() != null ? " nets and the pc)" : " nets)");
@@ -257,14 +243,5 @@ final class RunCommand implements Callable<Integer> {
         }
         s.addAll(watched);
         return new ArrayList<>(s);
-    }
-
-    private static int usage(PrintWriter err, String message, String hint) {
-        err.println("error: " + message);
-        if (hint != null) {
-            err.println("  = " + hint);
-        }
-        err.flush();
-        return ExitCodes.BAD_INPUT;
     }
 }

@@ -17,7 +17,7 @@ import java.util.concurrent.Callable;
                 + "the parts list and more; one selection at a time.",
                 "Run `sheets SELECTION --help` for a selection's options."},
         subcommands = {SheetsPacking.class, SheetsWires.class, SheetsSockets.class, SheetsHeaters.class, SheetsParts.class,
-                SheetsSpice.class, SheetsVolts.class})
+                SheetsSpice.class, SheetsVolts.class, SheetsDesignators.class, SheetsChanges.class, SheetsRom.class})
 final class SheetsCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;

@@ -1,5 +1,7 @@
 package org.thermion.cli;
 
+import org.thermion.build.BuildDocuments;
+import org.thermion.build.Designations;
 import org.thermion.cli.report.Report;
 import org.thermion.model.Machine;
 import picocli.CommandLine.Mixin;
@@ -15,7 +17,7 @@ import java.util.concurrent.Callable;
  */
 abstract class SheetsDocument implements Callable<Integer> {
     /** Raised with any key of any selection: they share one schema, {@code sheets.schema.json}. */
-    static final int VERSION = 2;
+    static final int VERSION = 4;
 
     @Mixin
     SheetsOptions options;
@@ -25,6 +27,14 @@ abstract class SheetsDocument implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    /** The designators file beside the machine (read before {@link #report}). */
+    Designations designations = Designations.NONE;
+
+    /** The machine's build documents, parts keeping the designators recorded beside it. */
+    BuildDocuments documents(Machine m) {
+        return BuildDocuments.of(m, designations);
+    }
 
     /** The document for {@code m}; null after printing why it cannot be made (exit 2). */
     abstract Report report(Machine m, PrintWriter err);
@@ -40,6 +50,11 @@ abstract class SheetsDocument implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         Machine m = options.load(err);
         if (m == null) {
+            return ExitCodes.BAD_INPUT;
+        }
+        designations = options.designations(err);
+        if (designations == null) {
+            err.flush();
             return ExitCodes.BAD_INPUT;
         }
         Report r = report(m, err);

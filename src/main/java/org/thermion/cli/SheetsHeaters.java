@@ -28,7 +28,7 @@ final class SheetsHeaters extends SheetsDocument {
 
     @Override
     Report report(Machine m, PrintWriter err) {
-        BuildDocuments docs = BuildDocuments.of(m);
+        BuildDocuments docs = documents(m);
         Table strings = new Table("strings", "Heater strings")
                 .column("string", "string", COUNT).column("rail", "rail", TEXT).column("rail_volts", "rail", VOLTS)
                 .column("current", "current", AMPS).column("heaters", "heaters", COUNT)

@@ -33,6 +33,10 @@ final class SheetsParts extends SheetsDocument {
             description = "Fraction of its rating a resistor may dissipate in service (default: ${DEFAULT-VALUE}, common practice).")
     double derating = PartsList.DEFAULT_DERATING;
 
+    @Option(names = "--program", paramLabel = "FILE",
+            description = "The program of a machine whose ROM is a diode matrix: its diodes are ordered too (see `sheets rom`).")
+    java.nio.file.Path program;
+
     private boolean failed;
 
     @Override
@@ -41,8 +45,24 @@ final class SheetsParts extends SheetsDocument {
             err.println("error: --spares takes 0 to 1000 (percent) and --derating a fraction above 0 up to 1");
             return null;
         }
-        BuildDocuments docs = BuildDocuments.of(m);
-        PartsList list = PartsList.of(docs.wiring(), 0, spares, derating);
+        long diodes = 0;
+        if (program != null) {
+            if (m.rom() == null) {
+                err.println("error: --program: machine " + m.name() + " has no ROM");
+                return null;
+            }
+            ProgramInput in = ProgramInput.read(m, program, null, options.loader, err);
+            if (in == null) {
+                return null;
+            }
+            if (in.rom().length > m.rom().words()) {
+                err.println("error: " + program + " assembles to " + in.rom().length + " words; the ROM holds " + m.rom().words());
+                return null;
+            }
+            diodes = org.thermion.build.DiodeMatrix.of(m.rom(), in.rom()).diodes().size();
+        }
+        BuildDocuments docs = documents(m);
+        PartsList list = PartsList.of(docs.wiring(), diodes, spares, derating);
         int budget = new TubeCount(m).total();
         failed = list.tubesUsed() != budget || list.tubesUsed() != m.envelopes().size();
         Table t = new Table("parts", "Parts to order")

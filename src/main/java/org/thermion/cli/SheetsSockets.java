@@ -1,6 +1,5 @@
 package org.thermion.cli;
 
-import org.thermion.build.BuildDocuments;
 import org.thermion.build.Wiring;
 import org.thermion.cli.report.Absent;
 import org.thermion.cli.report.Report;
@@ -21,7 +20,7 @@ final class SheetsSockets extends SheetsDocument {
 
     @Override
     Report report(Machine m, PrintWriter err) {
-        Wiring w = BuildDocuments.of(m).wiring();
+        Wiring w = documents(m).wiring();
         Table t = new Table("pins", "Socket pins")
                 .column("socket", "socket", TEXT).column("tube", "tube", TEXT).column("type", "type", TEXT)
                 .column("base", "base", TEXT).column("pin", "pin", COUNT).column("electrode", "carries", TEXT)

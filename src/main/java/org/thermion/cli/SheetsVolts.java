@@ -19,6 +19,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 
@@ -66,7 +67,7 @@ final class SheetsVolts extends SheetsDocument {
             }
             states.addAll(ChartStates.afterSteps(m, rom, steps));
         }
-        BuildDocuments docs = BuildDocuments.of(m);
+        BuildDocuments docs = documents(m);
         PinVoltages volts = new PinVoltages(docs);
         List<PinVoltages.Chart> charts = new ArrayList<>();
         for (PinVoltages.State s : states) {
@@ -121,13 +122,13 @@ final class SheetsVolts extends SheetsDocument {
         Table view = new Table("rest", "At rest after reset (volts to chassis)")
                 .column("socket", "socket", TEXT).column("type", "type", TEXT).column("pin", "pin", COUNT)
                 .column("electrode", "carries", TEXT).column("net", "wired to", TEXT)
-                .column("volts", "volts", VOLTS, "? = no voltage known (see below); open = pin not wired");
+                .column("volts", "volts V", TEXT, "? = no voltage known (see below); open = pin not wired");
         Map<String, Integer> reasons = new TreeMap<>();
         for (Wiring.Socket s : w.sockets()) {
             for (int p = 1; p <= s.pins(); p++) {
                 int node = s.node(p);
                 view.row(s.ref(), s.tube(), p, s.electrodes().get(p - 1),
-                        node < 0 ? new Absent("open") : w.nodes().get(node).name(), reading(rest, node, "open"));
+                        node < 0 ? new Absent("open") : w.nodes().get(node).name(), shown(rest, node));
                 if (node >= 0 && Double.isNaN(rest.volts(node))) {
                     reasons.merge(rest.note(node), 1, Integer::sum);
                 }
@@ -156,8 +157,8 @@ final class SheetsVolts extends SheetsDocument {
     private static Table changes(Wiring w, List<PinVoltages.Chart> charts, Map<String, Integer> reasons) {
         Table t = new Table("changes", "Pins that move during the plan (volts to chassis)")
                 .column("state", "after", TEXT).column("socket", "socket", TEXT).column("pin", "pin", COUNT)
-                .column("electrode", "carries", TEXT).column("before", "before", VOLTS)
-                .column("volts", "now", VOLTS);
+                .column("electrode", "carries", TEXT).column("before", "before V", TEXT)
+                .column("volts", "now V", TEXT);
         for (int k = 1; k < charts.size(); k++) {
             PinVoltages.Chart before = charts.get(k - 1);
             PinVoltages.Chart now = charts.get(k);
@@ -174,8 +175,8 @@ final class SheetsVolts extends SheetsDocument {
                     }
                     boolean moved = Double.isNaN(a) != Double.isNaN(b) || Math.abs(a - b) > CHANGE;
                     if (moved) {
-                        t.row(now.state().name(), s.ref(), p, s.electrodes().get(p - 1), reading(before, node, "open"),
-                                reading(now, node, "open"));
+                        t.row(now.state().name(), s.ref(), p, s.electrodes().get(p - 1), shown(before, node),
+                                shown(now, node));
                     }
                 }
             }
@@ -190,6 +191,15 @@ final class SheetsVolts extends SheetsDocument {
         }
         double v = c.volts(node);
         return Double.isNaN(v) ? new Absent("?") : Math.round(v * 10) / 10.0;
+    }
+
+    /** The reading as a meter on a 0.1 V resolution shows it, for text. */
+    private static String shown(PinVoltages.Chart c, int node) {
+        if (node < 0) {
+            return "open";
+        }
+        double v = c.volts(node);
+        return Double.isNaN(v) ? "?" : String.format(Locale.ROOT, "%.1f", Math.round(v * 10) / 10.0 + 0.0);
     }
 
     private static Object note(PinVoltages.Chart c, int node) {

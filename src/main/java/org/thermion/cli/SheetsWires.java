@@ -28,7 +28,7 @@ final class SheetsWires extends SheetsDocument {
 
     @Override
     Report report(Machine m, PrintWriter err) {
-        BuildDocuments docs = BuildDocuments.of(m);
+        BuildDocuments docs = documents(m);
         Wiring w = docs.wiring();
         List<String> checks = WireChecks.run(m, w);
         failed = !checks.isEmpty();

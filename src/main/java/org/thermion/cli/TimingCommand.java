@@ -1,7 +1,6 @@
 package org.thermion.cli;
 
 import org.thermion.cli.report.Absent;
-import org.thermion.cli.report.Format;
 import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
@@ -18,11 +17,8 @@ import org.thermion.timing.PhaseTiming;
 import org.thermion.timing.StaticTiming;
 import org.thermion.timing.TimingReport;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -31,7 +27,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.concurrent.Callable;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -49,7 +44,7 @@ import static org.thermion.cli.report.ReportUnit.TEXT;
                 + "the capacitance it drives), the worst path into each phase's latches, its slack, and the "
                 + "highest safe clock rate.",
                 "Exit 1 when a path does not settle in time at the clock period."})
-final class TimingCommand implements Callable<Integer> {
+final class TimingCommand extends ReportCommand {
     private static final Pattern TIME = Pattern.compile("\\s*([0-9]*\\.?[0-9]+(?:[eE][-+]?[0-9]+)?)\\s*(s|ms|us|ns)\\s*");
 
     @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
@@ -63,36 +58,25 @@ final class TimingCommand implements Callable<Integer> {
             description = "Access time of the off-board ROM, from the PC loading to valid data (default: 0).")
     String romAccess;
 
-    @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (default: ${DEFAULT-VALUE}).")
-    Format format = Format.text;
-
     @Option(names = "--stages", description = "Also list every stage instance's rise and fall delay.")
     boolean stages;
 
-    @Mixin
-    CommonOptions common;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         double t = Double.NaN;
         if (period != null) {
             t = parseTime(period);
             if (Double.isNaN(t)) {
-                err.println("error: --period '" + period + "' is not a time; write a positive number with s, ms, us or ns (e.g. 50us)");
-                return ExitCodes.BAD_INPUT;
+                return badInput("--period '" + period + "' is not a time; write a positive number with s, ms, us or ns (e.g. 50us)");
             }
         }
         double access = Double.NaN;
         if (romAccess != null) {
             access = parseTime(romAccess);
             if (Double.isNaN(access)) {
-                err.println("error: --rom-access '" + romAccess + "' is not a time; write a positive number with s, ms, us or ns (e.g. 2us)");
-                return ExitCodes.BAD_INPUT;
+                return badInput("--rom-access '" + romAccess + "' is not a time; write a positive number with s, ms, us or ns (e.g. 2us)");
             }
         }
         Machine m = new MachineLoader().load(file, err, false);

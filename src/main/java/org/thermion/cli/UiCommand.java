@@ -14,24 +14,20 @@ import org.thermion.tui.PowerUpView;
 import org.thermion.tui.Session;
 import org.thermion.tui.TerminalUi;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 
 /** {@code ui MACHINE PROGRAM}: step a program in the terminal, watching registers, decode lines and power. */
 @Command(name = "ui", mixinStandardHelpOptions = true,
         description = {"Step and run a program on a machine in the terminal: the listing, every state bit, "
             + "the decode lines, switches and lamps, and the power drawn per module and rail.",
             "Press ? inside for the keys; q or Ctrl-C quits."})
-public final class UiCommand implements Callable<Integer> {
+public final class UiCommand extends CommandBase {
     @Parameters(index = "0", paramLabel = "MACHINE", description = "The .machine file.")
     Path machine;
 
@@ -51,15 +47,9 @@ public final class UiCommand implements Callable<Integer> {
             description = "Decode lines are the top module's nets NAME[k], k an opcode (default: ${DEFAULT-VALUE}).")
     String decodeNet;
 
-    @Mixin
-    CommonOptions common;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() throws IOException {
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter err = err();
         String why = whyNoTerminal();
         if (why != null) {
             err.println("error: ui needs an interactive terminal, but " + why + ".");

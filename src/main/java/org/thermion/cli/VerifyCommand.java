@@ -1,7 +1,6 @@
 package org.thermion.cli;
 
 import org.thermion.cli.report.Absent;
-import org.thermion.cli.report.Format;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
 import org.thermion.model.Machine;
@@ -16,10 +15,8 @@ import org.thermion.verify.Verifier;
 import org.thermion.verify.VerifyReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -28,7 +25,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.concurrent.Callable;
 
 import static org.thermion.cli.report.ReportUnit.COUNT;
 import static org.thermion.cli.report.ReportUnit.FLAG;
@@ -40,7 +36,7 @@ import static org.thermion.cli.report.ReportUnit.TEXT;
                 + "a set of patterns), every combination of state bits and inputs, one machine cycle each. "
                 + "Also checks that each instruction activates exactly one decode line.",
                 "Exit 1 with counterexamples when the logic does not do what the ISA says."})
-final class VerifyCommand implements Callable<Integer> {
+final class VerifyCommand extends ReportCommand {
     @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
     Path file;
 
@@ -63,30 +59,20 @@ final class VerifyCommand implements Callable<Integer> {
     @Option(names = "--max", paramLabel = "N", description = "Counterexamples to print (default: ${DEFAULT-VALUE}).")
     int max = 10;
 
-    @Option(names = "--format", paramLabel = "FORMAT", description = "text, csv or json (default: ${DEFAULT-VALUE}).")
-    Format format = Format.text;
-
     @Option(names = "--threads", paramLabel = "N",
             description = "Instructions checked at once, each on its own simulator; the report is the same for any N"
                     + " (default: the processors, ${DEFAULT-VALUE}).")
     int threads = Runtime.getRuntime().availableProcessors();
 
     @Mixin
-    CommonOptions common;
-
-    @Mixin
     ProgressOptions progressOptions = new ProgressOptions();
-
-    @Spec
-    CommandSpec spec;
 
     @Override
     public Integer call() {
-        PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter out = out();
+        PrintWriter err = err();
         if (mutate < 0 || samples < 64 || max < 0 || threads < 1) {
-            err.println("error: --mutate and --max take a count >= 0, --samples at least 64, --threads at least 1");
-            return ExitCodes.BAD_INPUT;
+            return badInput("--mutate and --max take a count >= 0, --samples at least 64, --threads at least 1");
         }
         Machine m = new MachineLoader().load(file, err, false);
         if (m != null && m.modules().stream().anyMatch(mi -> !mi.built())) {

@@ -305,6 +305,8 @@ public final class Elaborator {
         }
         if (!diags.hasErrors()) {
             packer.wire(mb.span);
+            softStartReader.checkCovers(softStarts, packer.strings, packer.envelopes,
+                    parts.tubes.stream().map(t -> t.name()).toList());
         }
         if (diags.hasErrors()) {
             return null;

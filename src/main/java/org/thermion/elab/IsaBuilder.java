@@ -5,23 +5,22 @@ import org.thermion.lang.Span;
 import org.thermion.lang.ast.Decl;
 import org.thermion.lang.ast.IsaOp;
 import org.thermion.lang.ast.Prop;
-import org.thermion.lang.ast.RtExpr;
-import org.thermion.lang.ast.RtStmt;
 import org.thermion.model.AddressedBit;
 import org.thermion.model.Instruction;
 import org.thermion.model.Isa;
 import org.thermion.model.IsaField;
 import org.thermion.model.Port;
-import org.thermion.model.Rtl;
 import org.thermion.model.StateBit;
-import org.thermion.model.Transfer;
 
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-/** Resolves an {@code isa} block against the elaborated logic. */
+/**
+ * Resolves an {@code isa} block against the elaborated logic: word, fields, state bits, the bit
+ * map and the opcodes; each instruction's meaning goes to {@link IsaMeanings}.
+ */
 final class IsaBuilder {
     private final Diagnostics diags;
     private final Map<String, Signal> topScope;
@@ -204,7 +203,7 @@ final class IsaBuilder {
         List<Instruction> instrs = new ArrayList<>();
         Map<Long, IsaOp> byCode = new HashMap<>();
         Map<String, IsaOp> byName = new HashMap<>();
-        Ctx ctx = new Ctx(fields, state, selectField, targetField);
+        IsaMeanings meanings = new IsaMeanings(diags, fields, state, inputs, selectField);
         for (IsaOp op : d.ops()) {
             long code = constantOf(op);
             String m = op.mnemonic().text();
@@ -228,7 +227,7 @@ final class IsaBuilder {
                 continue;
             }
             byCode.put(code, op);
-            instrs.add(new Instruction(m, code, stmts(ctx, op.body())));
+            instrs.add(new Instruction(m, code, meanings.stmts(op.body())));
         }
         int[] wordInputs = wordPort == null ? new int[0] : wordInputs(wordPort, wordPortSpan, word);
         return new Isa(word, List.copyOf(fields), Math.max(0, opcodeField), targetField, List.copyOf(state), List.copyOf(map),
@@ -335,173 +334,4 @@ final class IsaBuilder {
         }
         return -1;
     }
-
-    private record Ctx(List<IsaField> fields, List<StateBit> state, int selectField, int targetField) {
-    }
-
-    private List<Transfer> stmts(Ctx c, List<RtStmt> body) {
-        List<Transfer> out = new ArrayList<>();
-        for (RtStmt s : body) {
-            if (s instanceof RtStmt.Assign a) {
-                String t = a.target().text();
-                if (a.selected()) {
-                    if (!checkSelect(c, a.target())) {
-                        continue;
-                    }
-                    Rtl v = expr(c, a.value());
-                    if (v != null) {
-                        out.add(new Transfer.ToSelected(v));
-                    }
-                } else if (t.equals("pc")) {
-                    Transfer pc = pcTransfer(c, a.value());
-                    if (pc != null) {
-                        out.add(pc);
-                    }
-                } else {
-                    int si = stateIndex(c.state(), t);
-                    if (si < 0) {
-                        diags.error(a.target().span(), "unknown state bit '" + t + "'",
-                                Declarations.hintFor(t, c.state().stream().map(StateBit::name).toList(), "declare it with `state " + t + " = LATCH`"));
-                        continue;
-                    }
-                    Rtl v = expr(c, a.value());
-                    if (v != null) {
-                        out.add(new Transfer.ToState(si, v));
-                    }
-                }
-            } else if (s instanceof RtStmt.If i) {
-                Rtl cond = expr(c, i.cond());
-                List<Transfer> then = stmts(c, i.then());
-                List<Transfer> otherwise = stmts(c, i.otherwise());
-                if (cond != null) {
-                    out.add(new Transfer.When(cond, then, otherwise));
-                }
-            }
-        }
-        return out;
-    }
-
-    /** {@code pc <- FIELD} (a jump), or {@code pc <- pc [+|- FIELD] [+|- N]} (a skip or a relative jump). */
-    private Transfer pcTransfer(Ctx c, RtExpr value) {
-        if (value instanceof RtExpr.Ref r && !r.name().text().equals("pc")) {
-            int fi = fieldIndex(c, r.name().text());
-            if (fi < 0) {
-                diags.error(r.span(), "a jump takes its target from a field; '" + r.name().text() + "' is not one",
-                        Declarations.hintFor(r.name().text(), c.fields().stream().map(IsaField::name).toList(), null));
-                return null;
-            }
-            return new Transfer.ToPc(fi);
-        }
-        List<RtExpr> terms = new ArrayList<>();
-        List<Boolean> minus = new ArrayList<>();
-        flattenSum(value, false, terms, minus);
-        String how = "write `pc <- operand` (a jump), `pc <- pc + 2` (a skip) or `pc <- pc + FIELD` (a relative jump)";
-        if (!(terms.get(0) instanceof RtExpr.Ref first && first.name().text().equals("pc") && !minus.get(0))) {
-            diags.error(value.span(), "a jump takes its target from a field, or adds to pc", how);
-            return null;
-        }
-        long offset = 0;
-        int field = -1;
-        boolean minusField = false;
-        for (int k = 1; k < terms.size(); k++) {
-            RtExpr e = terms.get(k);
-            if (e instanceof RtExpr.Num n) {
-                offset += minus.get(k) ? -n.value() : n.value();
-            } else if (e instanceof RtExpr.Ref r && fieldIndex(c, r.name().text()) >= 0 && field < 0) {
-                field = fieldIndex(c, r.name().text());
-                minusField = minus.get(k);
-            } else if (e instanceof RtExpr.Ref r && fieldIndex(c, r.name().text()) >= 0) {
-                diags.error(e.span(), "a relative jump adds one field to pc, not two", how);
-                return null;
-            } else {
-                diags.error(e.span(), "pc adds numbers and one field; this is neither", how);
-                return null;
-            }
-        }
-        return new Transfer.PcStep(offset, field, minusField);
-    }
-
-    /** The terms of a sum, each with its sign; anything but '+' and '-' is one term. */
-    private static void flattenSum(RtExpr e, boolean negated, List<RtExpr> terms, List<Boolean> minus) {
-        if (e instanceof RtExpr.Bin b && (b.op() == RtExpr.Op.PLUS || b.op() == RtExpr.Op.MINUS)) {
-            flattenSum(b.left(), negated, terms, minus);
-            flattenSum(b.right(), negated ^ (b.op() == RtExpr.Op.MINUS), terms, minus);
-        } else {
-            terms.add(e);
-            minus.add(negated);
-        }
-    }
-
-    private boolean checkSelect(Ctx c, org.thermion.lang.ast.Ident field) {
-        int fi = fieldIndex(c, field.text());
-        if (fi < 0 || fi != c.selectField()) {
-            diags.error(field.span(), "'[" + field.text() + "]' needs the isa's select field",
-                    c.selectField() < 0 ? "add `select FIELD` to the isa" : "write [" + c.fields().get(c.selectField()).name() + "]");
-            return false;
-        }
-        return true;
-    }
-
-    private int fieldIndex(Ctx c, String name) {
-        for (int i = 0; i < c.fields().size(); i++) {
-            if (c.fields().get(i).name().equals(name)) {
-                return i;
-            }
-        }
-        return -1;
-    }
-
-    private Rtl expr(Ctx c, RtExpr e) {
-        if (e instanceof RtExpr.Num n) {
-            if (n.value() != 0 && n.value() != 1) {
-                diags.error(n.span(), "a one-bit value is 0 or 1, not " + n.value(), null);
-                return null;
-            }
-            return new Rtl.Const(n.value() == 1);
-        }
-        if (e instanceof RtExpr.Select s) {
-            return checkSelect(c, s.field()) ? new Rtl.Selected() : null;
-        }
-        if (e instanceof RtExpr.Ref r) {
-            String name = r.name().text();
-            int si = stateIndex(c.state(), name);
-            if (si >= 0) {
-                return new Rtl.State(si);
-            }
-            int in = indexOf(inputs, name);
-            if (in >= 0) {
-                return new Rtl.Input(in);
-            }
-            List<String> known = new ArrayList<>();
-            c.state().forEach(x -> known.add(x.name()));
-            inputs.forEach(x -> known.add(x.name()));
-            diags.error(r.span(), "unknown name '" + name + "' in an instruction's meaning",
-                    Declarations.hintFor(name, known, "name a state bit or a machine input"));
-            return null;
-        }
-        if (e instanceof RtExpr.Not n) {
-            Rtl x = expr(c, n.operand());
-            return x == null ? null : new Rtl.Not(x);
-        }
-        if (e instanceof RtExpr.Bin b && (b.op() == RtExpr.Op.PLUS || b.op() == RtExpr.Op.MINUS)) {
-            diags.error(b.span(), "'+' and '-' compute only the pc; a one-bit value uses & | ^ !",
-                    "write `pc <- pc + 2` for a skip");
-            return null;
-        }
-        if (e instanceof RtExpr.Bin b) {
-            Rtl l = expr(c, b.left());
-            Rtl r = expr(c, b.right());
-            if (l == null || r == null) {
-                return null;
-            }
-            return switch (b.op()) {
-                case AND -> new Rtl.And(l, r);
-                case OR -> new Rtl.Or(l, r);
-                case XOR -> new Rtl.Xor(l, r);
-                case PLUS, MINUS -> null;
-            };
-        }
-        return null;
-    }
-
 }

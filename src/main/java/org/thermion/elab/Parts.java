@@ -117,6 +117,17 @@ final class Parts {
         return -1;
     }
 
+    /** Whether a tube type of that name is declared (here or in the library). */
+    boolean hasTube(String name) {
+        return tubeIndex.containsKey(name) || decls.tubes.containsKey(name);
+    }
+
+    /** The index of a tube type some stage already uses, or -1. */
+    int usedTube(String name) {
+        Integer i = tubeIndex.get(name);
+        return i == null ? -1 : i;
+    }
+
     int tube(String name, Span at) {
         Integer i = tubeIndex.get(name);
         if (i != null) {

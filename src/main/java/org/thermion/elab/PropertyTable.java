@@ -169,8 +169,12 @@ final class PropertyTable {
                                     name("rail", "a rail name", List.of()))), null),
                     new Slot.Optional("stopper", List.of(q("stopperohms", "grid stopper", Unit.OHM, from(0, 10e6)))))
                     .byDefault("direct").source(PLAUSIBLE + " of 100 M"),
-            Property.of("cathode", "the cathode's return: `ground`, or a resistor to a rail",
-                    new Slot.Choice("cathodekind", branches("ground", List.of()),
+            Property.of("cathode", "the cathode's return: `ground`, a resistor to a rail, or a relay coil to a rail "
+                            + "(resistance and pick-up current: a follower driving its coil)",
+                    new Slot.Choice("cathodekind", branches("ground", List.of(),
+                            "coil", List.of(q("value", "cathode coil resistance", Unit.OHM, above(0, 1e6)),
+                                    new Slot.Word("pickup"), q("cathodepickup", "pick-up current", Unit.AMPERE, above(0, 10)),
+                                    new Slot.Word("to"), name("rail", "a rail name", List.of()))),
                             List.of(q("cathode resistor", Unit.OHM, from(0, 100e6)), new Slot.Word("to"),
                                     name("rail", "a rail name", List.of()))))
                     .byDefault("ground").source(PLAUSIBLE + " of 100 M"),
@@ -224,6 +228,8 @@ final class PropertyTable {
                     q("soft-start resistor", Unit.OHM, above(0, 1e6)),
                     new Slot.Optional("rated", List.of(q("watts", "resistor rating", Unit.WATT, above(0, 1e9)))))
                     .required("resistor 2 ohm rated 50 W").source(PLAUSIBLE),
+            Property.of("covers", "the loads behind the resistor (module instances, tube types); the rest is fed ahead of it",
+                    new Slot.Names("loads", "module instances or tube types")).byDefault("the whole rail"),
             Property.of("relay", "the bypass relay's coil data").opens(RELAY)
                     .byDefault("a 12 V relay of 100 ohm, figures as in the relay block's defaults"),
             Property.of("bypass", "what closes the bypass relay: a delay, or a thyratron stage warming",

@@ -92,6 +92,12 @@ final class StageCircuitReader {
                 : function == StageFunction.BUFFER && arr == Arrangement.PARALLEL;
         PropLine k = b.line("cathode");
         double kOhms = k == null || "ground".equals(k.word("cathodekind")) ? 0 : k.num();
+        boolean cathodeCoil = k != null && "coil".equals(k.word("cathodekind"));
+        if (cathodeCoil && function != StageFunction.RELAY) {
+            diags.error(k.prop().key().span(), "stage '" + stage + "': a coil in the cathode belongs to a relay stage, not "
+                    + function.word(), "write `cathode 10 k to <rail>` for a plain resistor");
+            return null;
+        }
         String kRail = kOhms > 0 || (k != null && k.has("rail")) ? k.word("rail") : "ground";
         if (plate == null && (load == null || !(arr == Arrangement.PARALLEL && cathodeOut))) {
             diags.error(titleSpan, "stage '" + stage + "' has no load", "add `load 22 k from <rail>` (a coil or a lamp; `direct` only for an output at the cathode)");
@@ -136,7 +142,7 @@ final class StageCircuitReader {
         return new StageCircuitSpec(arr, plate, loadRail == null ? "ground" : loadRail, kOhms, kRail,
                 divider ? g.num("series") : 0, divider ? g.num("tobias") : Double.POSITIVE_INFINITY,
                 divider ? g.word("rail") : "ground", g != null && g.has("stopper") ? g.num("stopperohms") : 0,
-                screenOhms, screenRail, b.num("series"), cathodeOut);
+                screenOhms, screenRail, b.num("series"), cathodeOut, cathodeCoil ? k.num("cathodepickup") : Double.NaN);
     }
 
     private static Arrangement byDefault(StageFunction f, TubeKind kind) {

@@ -21,6 +21,8 @@ import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
+import java.util.function.BiFunction;
+import java.util.function.Function;
 
 /** Turns a parse tree into immutable AST records; the parse tree goes no further. */
 final class AstBuilder {
@@ -177,16 +179,25 @@ final class AstBuilder {
      * (bounded by {@link NestingLimit}), not as long as the chain.
      */
     private Expr expr(ExprContext ctx) {
-        Deque<ExprContext> spine = new ArrayDeque<>();
-        ExprContext cur = ctx;
-        while (leftOperand(cur) != null) {
+        return leftDeep(ctx, AstBuilder::leftOperand, this::operand,
+                (b, acc) -> new Expr.Bin(binOp(b), acc, expr(b.getChild(ExprContext.class, 1)), span(b)));
+    }
+
+    /**
+     * A left-associative chain from its parse tree: the left spine ({@code left} gives a node's left
+     * operand, null below the chain) walked in a loop from the innermost operand outwards, each
+     * node joined to what is built so far by {@code join}.
+     */
+    private static <C, T> T leftDeep(C ctx, Function<C, C> left, Function<C, T> operand, BiFunction<C, T, T> join) {
+        Deque<C> spine = new ArrayDeque<>();
+        C cur = ctx;
+        while (left.apply(cur) != null) {
             spine.push(cur);
-            cur = leftOperand(cur);
+            cur = left.apply(cur);
         }
-        Expr acc = operand(cur);
+        T acc = operand.apply(cur);
         while (!spine.isEmpty()) {
-            ExprContext b = spine.pop();
-            acc = new Expr.Bin(binOp(b), acc, expr(b.getChild(ExprContext.class, 1)), span(b));
+            acc = join.apply(spine.pop(), acc);
         }
         return acc;
     }
@@ -271,26 +282,41 @@ final class AstBuilder {
         return out;
     }
 
+    /**
+     * An instruction's meaning, built as {@link #expr} builds a description expression: the left
+     * spine of a binary chain in a loop ({@link #leftDeep}), recursion only for brackets, prefix
+     * operators and right operands (bounded by {@link NestingLimit}).
+     */
     private RtExpr rexpr(RexprContext ctx) {
+        return leftDeep(ctx, AstBuilder::rLeftOperand, this::rOperand,
+                (b, acc) -> new RtExpr.Bin(rBinOp(b), acc, rexpr(b.getChild(RexprContext.class, 1)), span(b)));
+    }
+
+    /** The left operand of a binary meaning, null for any other kind. */
+    private static RexprContext rLeftOperand(RexprContext ctx) {
+        boolean binary = ctx instanceof RAddContext || ctx instanceof RAndContext || ctx instanceof RXorContext
+                || ctx instanceof ROrContext;
+        return binary ? ctx.getChild(RexprContext.class, 0) : null;
+    }
+
+    private static RtExpr.Op rBinOp(RexprContext ctx) {
+        if (ctx instanceof RAddContext c) {
+            return c.op.getText().equals("+") ? RtExpr.Op.PLUS : RtExpr.Op.MINUS;
+        }
+        if (ctx instanceof RAndContext) {
+            return RtExpr.Op.AND;
+        }
+        return ctx instanceof RXorContext ? RtExpr.Op.XOR : RtExpr.Op.OR;
+    }
+
+    /** Everything in a meaning but a binary operator. */
+    private RtExpr rOperand(RexprContext ctx) {
         Span s = span(ctx);
         if (ctx instanceof RParenContext c) {
             return rexpr(c.rexpr());
         }
         if (ctx instanceof RNotContext c) {
             return new RtExpr.Not(rexpr(c.rexpr()), s);
-        }
-        if (ctx instanceof RAddContext c) {
-            RtExpr.Op op = c.op.getText().equals("+") ? RtExpr.Op.PLUS : RtExpr.Op.MINUS;
-            return new RtExpr.Bin(op, rexpr(c.rexpr(0)), rexpr(c.rexpr(1)), s);
-        }
-        if (ctx instanceof RAndContext c) {
-            return new RtExpr.Bin(RtExpr.Op.AND, rexpr(c.rexpr(0)), rexpr(c.rexpr(1)), s);
-        }
-        if (ctx instanceof RXorContext c) {
-            return new RtExpr.Bin(RtExpr.Op.XOR, rexpr(c.rexpr(0)), rexpr(c.rexpr(1)), s);
-        }
-        if (ctx instanceof ROrContext c) {
-            return new RtExpr.Bin(RtExpr.Op.OR, rexpr(c.rexpr(0)), rexpr(c.rexpr(1)), s);
         }
         if (ctx instanceof RSelectContext c) {
             return new RtExpr.Select(ident(c.ident()), s);

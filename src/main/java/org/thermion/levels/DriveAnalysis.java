@@ -56,8 +56,12 @@ final class DriveAnalysis {
         this.tolerances = tolerances;
     }
 
-    /** Every gate whose stage drives a lamp or a coil, its input at the levels of its input net; then the soft starts. */
-    List<LoadDrive> drives(NetFanout fanout, double[] low, double[] high) {
+    /**
+     * Every gate whose stage drives a lamp or a coil, its input at the levels of its input net
+     * (nominal; at the worst corner also the levels that net has at its own worst corners); then
+     * the soft starts.
+     */
+    List<LoadDrive> drives(NetFanout fanout, double[] low, double[] high, double[] worstLow, double[] worstHigh) {
         List<LoadDrive> out = new ArrayList<>();
         for (Gate g : machine.netlist().gates()) {
             if (g.stage() < 0) {
@@ -72,6 +76,7 @@ final class DriveAnalysis {
             if (load == null) {
                 continue;
             }
+            String part = part(c.get());
             LoadDrive.Kind kind = load instanceof Lamp ? LoadDrive.Kind.LAMP : LoadDrive.Kind.COIL;
             if (kind == LoadDrive.Kind.COIL && !(load instanceof RelayCoil) && st.function() != StageFunction.RELAY) {
                 continue; // a lamp stage with a plain resistor: nothing to judge
@@ -79,14 +84,9 @@ final class DriveAnalysis {
             double rated = load instanceof Lamp lamp ? lamp.ratedAmps()
                     : load instanceof RelayCoil coil ? coil.pickupAmps() : Double.NaN;
             double dropout = load instanceof RelayCoil coil ? coil.dropoutAmps() : Double.NaN;
-            double lo = low[g.input(0)];
-            double hi = high[g.input(0)];
-            for (int p = 1; p < g.arity(); p++) {
-                lo = Math.max(lo, low[g.input(p)]);
-                hi = Math.min(hi, high[g.input(p)]);
-            }
-            InputLevels levels = LevelAnalysis.outward(lo, hi);
-            Figures f = cache.computeIfAbsent(List.of(c.get(), levels), k -> solve(c.get(), levels.low(), levels.high()));
+            InputLevels levels = levels(g, low, high);
+            InputLevels worst = levels(g, worstLow, worstHigh);
+            Figures f = cache.computeIfAbsent(List.of(c.get(), levels, worst), k -> solve(c.get(), part, levels, worst));
             boolean follower = c.get() instanceof TubeStage ts && ts.output() == TubeStage.Output.CATHODE;
             out.add(new LoadDrive(new StageUse(false, g.id()), -1, fanout.nodeOf(g.output()).name(), st.name(), kind,
                     f.on(), f.onWorst(), f.onCorner(), f.off(), f.offWorst(), f.offCorner(), rated, dropout,
@@ -120,7 +120,7 @@ final class DriveAnalysis {
         ThyratronStage driver = new ThyratronStage(ts.name(), ts.tube(), coil, ts.plateRail(), ts.plateOhms(), ts.grid(),
                 ts.cathode());
         StageSolver solver = circuits.solver();
-        ToDoubleFunction<Corner> onAmps = k -> amps(solver, driver, 0, true, k);
+        ToDoubleFunction<Corner> onAmps = k -> amps(solver, driver, LOAD, 0, true, k);
         List<Parameter> params = parameters(solver, driver);
         Corner onCorner = WorstCase.worstCorner(params, tolerances, onAmps);
         NoDcSolution unsolved = unsolved(solver, driver, 0, true);
@@ -129,15 +129,30 @@ final class DriveAnalysis {
                 Double.NaN, coil.ohms(), r.ratedVolts(), false, unsolved);
     }
 
-    /** The load a lamp or relay stage drives (its plate load), or null for other circuits. */
+    /** The solver's label of a stage's plate load, and of a coil in its cathode. */
+    private static final String LOAD = "load";
+    private static final String CATHODE = "cathode";
+
+    /**
+     * The load a lamp or relay stage drives: its plate load, or a follower's coil in its cathode;
+     * null for other circuits.
+     */
     private static PlateLoad loadOf(StageCircuit c) {
         if (c instanceof TubeStage ts) {
+            if (ts.cathode().coil() != null) {
+                return ts.cathode().coil();
+            }
             return ts.load().direct() ? null : ts.load();
         }
         if (c instanceof ThyratronStage ts) {
             return ts.load();
         }
         return null;
+    }
+
+    /** Which part of the stage carries the load's current. */
+    private static String part(StageCircuit c) {
+        return c instanceof TubeStage ts && ts.cathode().coil() != null ? CATHODE : LOAD;
     }
 
     private static double ohmsOf(PlateLoad load) {
@@ -150,22 +165,35 @@ final class DriveAnalysis {
         return load instanceof org.thermion.circuit.LoadResistor r ? r.ohms() : Double.NaN;
     }
 
-    private Figures solve(StageCircuit stage, double lo, double hi) {
-        StageSolver s = circuits.solver();
-        // a higher grid means more current in every arrangement (a follower's too; a thyratron fires and holds)
-        double onVolts = hi;
-        double offVolts = lo;
-        ToDoubleFunction<Corner> onAmps = c -> amps(s, stage, onVolts, false, c);
-        ToDoubleFunction<Corner> offAmps = c -> -amps(s, stage, offVolts, false, c);
-        List<Parameter> params = parameters(s, stage);
-        Corner onCorner = WorstCase.worstCorner(params, tolerances, onAmps);
-        Corner offCorner = WorstCase.worstCorner(params, tolerances, offAmps);
-        NoDcSolution unsolved = unsolved(s, stage, hi, false);
-        if (unsolved == null) {
-            unsolved = unsolved(s, stage, lo, false);
+    /** The worst of the input nets' levels, rounded outward. */
+    private static InputLevels levels(Gate g, double[] low, double[] high) {
+        double lo = low[g.input(0)];
+        double hi = high[g.input(0)];
+        for (int p = 1; p < g.arity(); p++) {
+            lo = Math.max(lo, low[g.input(p)]);
+            hi = Math.min(hi, high[g.input(p)]);
         }
-        return new Figures(onAmps.applyAsDouble(Corner.NOMINAL), onAmps.applyAsDouble(onCorner), onCorner,
-                -offAmps.applyAsDouble(Corner.NOMINAL), -offAmps.applyAsDouble(offCorner), offCorner, unsolved);
+        return LevelAnalysis.outward(lo, hi);
+    }
+
+    private Figures solve(StageCircuit stage, String part, InputLevels levels, InputLevels worst) {
+        StageSolver s = circuits.solver();
+        // a higher grid means more current in every arrangement (a follower's too; a thyratron fires and holds);
+        // at the worst corner the input is also at its driving net's worst level
+        ToDoubleFunction<Corner> onAmps = c -> amps(s, stage, part, levels.high(), false, c);
+        ToDoubleFunction<Corner> offAmps = c -> -amps(s, stage, part, levels.low(), false, c);
+        ToDoubleFunction<Corner> onWorst = c -> Math.min(onAmps.applyAsDouble(c), amps(s, stage, part, worst.high(), false, c));
+        ToDoubleFunction<Corner> offWorst = c -> Math.min(offAmps.applyAsDouble(c),
+                -amps(s, stage, part, worst.low(), false, c));
+        List<Parameter> params = parameters(s, stage);
+        Corner onCorner = WorstCase.worstCorner(params, tolerances, onWorst);
+        Corner offCorner = WorstCase.worstCorner(params, tolerances, offWorst);
+        NoDcSolution unsolved = unsolved(s, stage, levels.high(), false);
+        if (unsolved == null) {
+            unsolved = unsolved(s, stage, levels.low(), false);
+        }
+        return new Figures(onAmps.applyAsDouble(Corner.NOMINAL), onWorst.applyAsDouble(onCorner), onCorner,
+                -offAmps.applyAsDouble(Corner.NOMINAL), -offWorst.applyAsDouble(offCorner), offCorner, unsolved);
     }
 
     private static List<Parameter> parameters(StageSolver s, StageCircuit stage) {
@@ -185,8 +213,8 @@ final class DriveAnalysis {
         return s.solve(stage, in, stored, List.of(), c);
     }
 
-    private static double amps(StageSolver s, StageCircuit stage, double volts, boolean stored, Corner c) {
+    private static double amps(StageSolver s, StageCircuit stage, String part, double volts, boolean stored, Corner c) {
         DcResult r = solveAt(s, stage, volts, stored, c);
-        return r.solved() ? Math.abs(r.point().partAmps(StageSolver.DRIVER + ".load")) : Double.NaN;
+        return r.solved() ? Math.abs(r.point().partAmps(StageSolver.DRIVER + "." + part)) : Double.NaN;
     }
 }

@@ -28,7 +28,8 @@ import org.thermion.model.StageType;
  * Levels and noise margins of every node of a machine, under its real load, at its own rails.
  * Each node's driver is solved with every input pin it feeds as a load; its inputs stand at the
  * nominal levels of the nodes that drive them (nodes come in levelized order, latches first),
- * rounded outward to {@value #GRID} V so nodes alike share one solve. Inputs from outside the tube
+ * rounded outward to {@value #GRID} V so nodes alike share one solve; its worst-case margins also
+ * at the levels those nodes have at their own worst corners, where that is worse. Inputs from outside the tube
  * logic (switches, the ROM, constants) are taken as switched between 0 V and the highest rail.
  * Each margin is then taken to the tolerance corner that worsens it ({@link WorstCase}). Nodes of
  * one kind (driver, input levels, receivers) are analysed once: a large machine costs one
@@ -51,11 +52,15 @@ public final class LevelAnalysis {
     private final List<StageUse> pointUses = new ArrayList<>();
     private final List<LoadDrive> drives;
 
-    private record Kind(StageCircuit driver, InputLevels levels, List<StageCircuit> receivers) {
+    private record Kind(StageCircuit driver, InputLevels levels, InputLevels worstLevels, List<StageCircuit> receivers) {
     }
 
+    /**
+     * One kind's figures; {@code worstVoh}/{@code worstVol} the net's own levels at the corners of
+     * its worst high and low margins (what the stages it drives see in their worst case).
+     */
     private record Figures(NoiseMargins nominal, WorstMargin high, WorstMargin low, int fanOut, String limitKind,
-                           NetAnalysis points) {
+                           NetAnalysis points, double worstVoh, double worstVol) {
     }
 
     private LevelAnalysis(Machine machine, MachineCircuits circuits, Tolerances tolerances, double minMargin) {
@@ -70,8 +75,10 @@ public final class LevelAnalysis {
         double[] low = new double[high.length];
         double outsideHigh = outsideHigh(machine);
         java.util.Arrays.fill(high, outsideHigh);
+        double[] worstHigh = high.clone();
+        double[] worstLow = low.clone();
         for (NetFanout.Node node : order(fanout)) {
-            NetLevel level = analyse(fanout, node, low, high);
+            NetLevel level = analyse(fanout, node, low, high, worstLow, worstHigh);
             if (level == null) {
                 continue;
             }
@@ -80,11 +87,13 @@ public final class LevelAnalysis {
                 for (int net : node.nets()) {
                     high[net] = level.voh();
                     low[net] = level.vol();
+                    worstHigh[net] = Double.isFinite(level.worstVoh()) ? Math.min(level.voh(), level.worstVoh()) : level.voh();
+                    worstLow[net] = Double.isFinite(level.worstVol()) ? Math.max(level.vol(), level.worstVol()) : level.vol();
                 }
             }
         }
         nets.sort(Comparator.comparingDouble(LevelAnalysis::sortKey).thenComparing(NetLevel::name));
-        this.drives = new DriveAnalysis(machine, circuits, tolerances).drives(fanout, low, high);
+        this.drives = new DriveAnalysis(machine, circuits, tolerances).drives(fanout, low, high, worstLow, worstHigh);
     }
 
     /** Analyses {@code machine} at its circuits' rails with these tolerances and minimum margin (volts). */
@@ -171,7 +180,8 @@ public final class LevelAnalysis {
         return h;
     }
 
-    private NetLevel analyse(NetFanout fanout, NetFanout.Node node, double[] low, double[] high) {
+    private NetLevel analyse(NetFanout fanout, NetFanout.Node node, double[] low, double[] high, double[] worstLow,
+                             double[] worstHigh) {
         List<StageCircuit> receivers = new ArrayList<>();
         List<String> missing = new ArrayList<>();
         for (NetFanout.Pin p : node.pins()) {
@@ -198,26 +208,26 @@ public final class LevelAnalysis {
         }
         Optional<StageCircuit> driver = circuits.circuit(st);
         if (driver.isEmpty()) {
-            return new NetLevel(node.name(), st.name(), use, null, false, loads, receiverText, Double.NaN,
-                    Double.NaN, Double.NaN, Double.NaN, null, null, -1, "",
+            return new NetLevel(node.name(), st.name(), use, null, null, false, loads, receiverText, Double.NaN,
+                    Double.NaN, Double.NaN, Double.NaN, null, null, -1, "", Double.NaN, Double.NaN,
                     "stage " + st.name() + " declares its currents: no circuit to solve");
         }
         StageCircuit d = driver.get();
         InputLevels levels = inputLevels(d, use, low, high);
+        InputLevels worstLevels = inputLevels(d, use, worstLow, worstHigh);
         if (receivers.isEmpty()) {
             NetAnalysis a = analysis.net(d, levels, List.of());
             remember(use, a);
             NoiseMargins m = a.margins();
-            return new NetLevel(node.name(), st.name(), use, levels, MarginAnalysis.restores(d), loads, receiverText,
-                    m.voh(),
-                    m.vol(), Double.NaN, Double.NaN, null, null, -1, "",
+            return new NetLevel(node.name(), st.name(), use, levels, worstLevels, MarginAnalysis.restores(d), loads,
+                    receiverText, m.voh(), m.vol(), Double.NaN, Double.NaN, null, null, -1, "", Double.NaN, Double.NaN,
                     m.problem() != null && !"no receivers".equals(m.problem()) ? m.problem()
                             : loads == 0 ? "feeds no stage (an output)" : "its receivers declare their currents");
         }
-        Kind kind = new Kind(d, levels, List.copyOf(receivers));
+        Kind kind = new Kind(d, levels, worstLevels, List.copyOf(receivers));
         Figures f = byKind.get(kind);
         if (f == null) {
-            f = figures(d, levels, receivers);
+            f = figures(d, levels, worstLevels, receivers);
             byKind.put(kind, f);
         }
         remember(use, f.points());
@@ -225,9 +235,9 @@ public final class LevelAnalysis {
         String note = m.problem() != null ? m.problem() : missing.isEmpty() ? "" : "not counted: " + missing;
         double vih = m.thresholds() == null ? Double.NaN : m.thresholds().vih();
         double vil = m.thresholds() == null ? Double.NaN : m.thresholds().vil();
-        return new NetLevel(node.name(), st.name(), use, levels, MarginAnalysis.restores(d), loads, receiverText,
-                m.voh(), m.vol(),
-                vih, vil, f.high(), f.low(), f.fanOut(), f.limitKind(), note);
+        return new NetLevel(node.name(), st.name(), use, levels, worstLevels, MarginAnalysis.restores(d), loads,
+                receiverText, m.voh(), m.vol(), vih, vil, f.high(), f.low(), f.fanOut(), f.limitKind(), f.worstVoh(),
+                f.worstVol(), note);
     }
 
     private void remember(StageUse use, NetAnalysis a) {
@@ -235,26 +245,49 @@ public final class LevelAnalysis {
         points.add(a);
     }
 
-    private Figures figures(StageCircuit d, InputLevels levels, List<StageCircuit> receivers) {
+    /**
+     * A kind's figures. Each worst-case margin is the lower of two: with the driver's inputs at
+     * their nominal levels, and at the levels their own drivers give at their worst corners (an
+     * upstream stage worn or off tolerance hands on a poorer level). The two corners are found
+     * apart, so a rail may sit at one end upstream and the other here: conservative.
+     */
+    private Figures figures(StageCircuit d, InputLevels levels, InputLevels worstLevels, List<StageCircuit> receivers) {
         NetAnalysis a = analysis.net(d, levels, receivers);
         NoiseMargins nominal = a.margins();
         if (nominal.problem() != null) {
-            return new Figures(nominal, null, null, -1, "", a);
+            return new Figures(nominal, null, null, -1, "", a, Double.NaN, Double.NaN);
         }
         List<WorstMargin> w = worstCase.margins(d, levels, receivers);
+        InputLevels highAt = levels;
+        InputLevels lowAt = levels;
         WorstMargin high = w.get(0);
         WorstMargin low = w.get(1);
-        Corner corner = high.worst() <= low.worst() ? high.corner() : low.corner();
+        if (!worstLevels.equals(levels)) {
+            List<WorstMargin> fromWorst = worstCase.margins(d, worstLevels, receivers);
+            if (fromWorst.get(0).worst() < high.worst()) {
+                high = new WorstMargin(high.side(), high.nominal(), fromWorst.get(0).worst(), fromWorst.get(0).corner());
+                highAt = worstLevels;
+            }
+            if (fromWorst.get(1).worst() < low.worst()) {
+                low = new WorstMargin(low.side(), low.nominal(), fromWorst.get(1).worst(), fromWorst.get(1).corner());
+                lowAt = worstLevels;
+            }
+        }
+        boolean highWorse = high.worst() <= low.worst();
+        Corner corner = highWorse ? high.corner() : low.corner();
+        InputLevels limitAt = highWorse ? highAt : lowAt;
         int limit = Integer.MAX_VALUE;
         String limitKind = "";
         for (StageCircuit r : new java.util.LinkedHashSet<>(receivers)) {
-            int k = analysis.fanOut(d, levels, r, minMargin, corner);
+            int k = analysis.fanOut(d, limitAt, r, minMargin, corner);
             if (k < limit) {
                 limit = k;
                 limitKind = r.name();
             }
         }
-        return new Figures(nominal, high, low, limit, limitKind, a);
+        double worstVoh = analysis.margins(d, highAt, receivers, high.corner()).voh();
+        double worstVol = analysis.margins(d, lowAt, receivers, low.corner()).vol();
+        return new Figures(nominal, high, low, limit, limitKind, a, worstVoh, worstVol);
     }
 
     /** A line driven from outside: its levels are the switch's, its thresholds its receivers'. */
@@ -270,13 +303,13 @@ public final class LevelAnalysis {
             }
         }
         if (!Double.isFinite(vil)) {
-            return new NetLevel(node.name(), "", null, null, false, loads, text, high, low, Double.NaN, Double.NaN,
-                    null, null, -1, "", "driven from outside");
+            return new NetLevel(node.name(), "", null, null, null, false, loads, text, high, low, Double.NaN,
+                    Double.NaN, null, null, -1, "", Double.NaN, Double.NaN, "driven from outside");
         }
         WorstMargin h = new WorstMargin(WorstMargin.Side.HIGH, high - vih, high - vih, Corner.NOMINAL);
         WorstMargin l = new WorstMargin(WorstMargin.Side.LOW, vil - low, vil - low, Corner.NOMINAL);
-        return new NetLevel(node.name(), "", null, null, false, loads, text, high, low, vih, vil, h, l, -1, "",
-                "driven from outside (0 V / highest rail)");
+        return new NetLevel(node.name(), "", null, null, null, false, loads, text, high, low, vih, vil, h, l, -1, "",
+                Double.NaN, Double.NaN, "driven from outside (0 V / highest rail)");
     }
 
     /** The stage use that drives a node (a complement is driven by its latch). */

@@ -9,11 +9,13 @@ package org.thermion.model;
  * @param gridSeriesOhms  from the driving output to the grid tap; 0 for a direct connection
  * @param gridToBiasOhms  from the tap to {@code gridRail}; infinite for none
  * @param screenOhms      screen dropping resistor; NaN when the stage has no screen supply
+ * @param cathodeCoilPickupAmps the pick-up current of a relay coil that is the cathode resistor (a
+ *                        follower driving its coil); NaN when the cathode resistor is a plain one
  */
 public record StageCircuitSpec(Arrangement arrangement, PlateLoadSpec load, String loadRail, double cathodeOhms,
                                String cathodeRail, double gridSeriesOhms, double gridToBiasOhms, String gridRail,
                                double gridStopperOhms, double screenOhms, String screenRail, double seriesOhms,
-                               boolean outputAtCathode) {
+                               boolean outputAtCathode, double cathodeCoilPickupAmps) {
 
     /** How a stage's tube sections are joined. */
     public enum Arrangement {

@@ -55,6 +55,9 @@ public final class MachineDeck {
     private final Map<Integer, String> complementNode = new HashMap<>();
     private final Map<Integer, String> renamed = new HashMap<>();
     private final Map<String, Integer> netOfNode = new java.util.TreeMap<>();
+    private final Map<Integer, String> nodeOfNet = new HashMap<>();
+    private final Map<StageCircuit, StageNetlist> netlists = new HashMap<>();
+    private final Map<StageCircuit, List<String>> localNames = new HashMap<>();
 
     public MachineDeck(Machine machine, MachineCircuits circuits) {
         this.machine = machine;
@@ -123,10 +126,10 @@ public final class MachineDeck {
             w.note(n);
         }
         w.note("");
-        Set<String> present = new TreeSet<>();
+        Set<String> present = new java.util.HashSet<>();
         for (SpiceDeck.Line l : body) {
             if (l.card() != null) {
-                present.addAll(List.of(l.card().line().split(" ")).subList(1, 3));
+                present.addAll(l.card().nodes());
             }
         }
         w.note("rails");
@@ -160,9 +163,10 @@ public final class MachineDeck {
             notes.add(what + ": stage " + st.name() + " has no circuit (declared currents); its net is held by a source");
             return;
         }
-        StageNetlist sn = circuits.solver().netlist(StageSolver.DRIVER, c, new double[c.inputs()], false, List.of(),
-                Corner.NOMINAL);
-        List<String> local = StageDeck.nodeNames(sn);
+        // every instance of a stage type has the same parts: build them once
+        StageNetlist sn = netlists.computeIfAbsent(c, k -> circuits.solver().netlist(StageSolver.DRIVER, k,
+                new double[k.inputs()], false, List.of(), Corner.NOMINAL));
+        List<String> local = localNames.computeIfAbsent(c, k -> StageDeck.nodeNames(sn));
         List<String> names = new ArrayList<>();
         double keep = keepLevel(c);
         List<Integer> surplus = new ArrayList<>();
@@ -231,8 +235,12 @@ public final class MachineDeck {
         if (c != null) {
             return c;
         }
-        String node = "n_" + SpiceNames.clean(nl.netName(n));
-        netOfNode.put(node, n);
+        String node = nodeOfNet.get(n);
+        if (node == null) {
+            node = "n_" + SpiceNames.clean(nl.netName(n));
+            nodeOfNet.put(n, node);
+            netOfNode.put(node, n);
+        }
         return node;
     }
 

@@ -13,6 +13,21 @@ public sealed interface SpiceCard permits SpiceCard.Resistor, SpiceCard.Capacito
     /** The card as one logical line. */
     String line();
 
+    /** The two nodes the element joins, in card order. */
+    default java.util.List<String> nodes() {
+        if (this instanceof Resistor r) {
+            return java.util.List.of(r.a(), r.b());
+        }
+        if (this instanceof Capacitor c) {
+            return java.util.List.of(c.a(), c.b());
+        }
+        if (this instanceof VoltageSource v) {
+            return java.util.List.of(v.plus(), v.minus());
+        }
+        CurrentExpression b = (CurrentExpression) this;
+        return java.util.List.of(b.from(), b.to());
+    }
+
     /** {@code Rname a b ohms}. */
     record Resistor(String name, String a, String b, double ohms) implements SpiceCard {
         public String line() {

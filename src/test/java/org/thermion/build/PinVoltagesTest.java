@@ -82,4 +82,43 @@ class PinVoltagesTest {
         // the other two sections stay as at rest
         assertThat(at(on, "XV1", 1)).isEqualTo(at(chart.at(ChartStates.atRest(m, null)), "XV1", 1));
     }
+
+    /** A cross-coupled 12AU7 flip-flop loaded from a switch; our own demo values. */
+    static final String FLIP_FLOP = """
+            rail heat { voltage 12.6 V }
+            rail bplus { voltage 150 V }
+            rail bias { voltage -100 V }
+            heaters on heat { parallel 12AU7 at 12.6 V }
+            stage ff : latch { tube 12AU7; sections 2; fanin 1; circuit crossed; load 22 k from bplus; grid divider 100 k 100 k to bias; cathode ground }
+            realize { latch ff }
+            module top {
+              in a
+              out y
+              latch q on phase 1 = a
+              y = !q
+            }
+            machine probe { clock { phases 1; period 100 us }; top top; inputs a; outputs y }
+            """;
+
+    @Test
+    void aFlipFlopsPlatesSwapWithItsStoredBitAndTheCutOffGridSitsOnItsDivider() {
+        Machine ff = BuildMachines.text(FLIP_FLOP);
+        BuildDocuments d = BuildDocuments.of(ff);
+        PinVoltages chart = new PinVoltages(d);
+        Wiring.Socket s = d.wiring().sockets().get(0);
+        PinVoltages.Chart rest = chart.at(ChartStates.atRest(ff, null));
+        PinVoltages.Chart set = chart.at(ChartStates.afterSteps(ff, null, List.of(new Step(new boolean[] {true}, 1))).get(0));
+        // 12AU7 noval pins (REFERENCES.md): 6 plate.1 (Q), 7 grid.1, 1 plate.2, 2 grid.2
+        double qRest = rest.volts(s.node(6));
+        double qbRest = rest.volts(s.node(1));
+        assertThat(qRest).as("Q cleared: its section conducts").isLessThan(qbRest - 50);
+        assertThat(set.volts(s.node(6))).isCloseTo(qbRest, within(1e-6));
+        assertThat(set.volts(s.node(1))).isCloseTo(qRest, within(1e-6));
+        // the cut-off side's grid draws no current: 100 k / 100 k between the other plate and -100 V (Ohm's law)
+        assertThat(rest.volts(s.node(2))).isCloseTo((qRest - 100) / 2, within(0.01));
+        // the conducting side's grid is held near its cathode by grid current, though its divider alone gives (qb - 100) / 2
+        assertThat(rest.volts(s.node(7))).isBetween(0.0, 2.0).isLessThan((qbRest - 100) / 2);
+        assertThat(rest.warnings()).isEmpty();
+        assertThat(set.warnings()).isEmpty();
+    }
 }

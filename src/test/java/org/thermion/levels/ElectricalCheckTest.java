@@ -253,4 +253,36 @@ class ElectricalCheckTest {
             assertThat(x.fix()).contains("load coil 160 ohm pickup <amps>");
         });
     }
+
+    @Test
+    void aCathodeFollowerRelayDriverThatGivesItsCoilOnlyPartOfItsPickUpIsAnErrorWithTheNumbersAndAFix() {
+        // both 12AU7 sections as a follower, its 1 k coil in the cathode, its grid on a switch at 48 V
+        String text = board("rail bplus { voltage 48 V }\n", """
+                stage follower_relay : relay {
+                  tube 12AU7
+                  sections 2
+                  load direct from bplus
+                  cathode coil 1 k pickup 45 mA to ground
+                  output cathode
+                }
+                """, """
+                  net pulled
+                  pulled = follower_relay(a)
+                """);
+        LevelAnalysisTest.Loaded l = LevelAnalysisTest.load(text);
+        LevelAnalysis a = LevelAnalysis.of(l.machine(), l.where().margins());
+        LoadDrive d = a.drives().get(0);
+        assertThat(d.follower()).isTrue();
+        // a follower's cathode stays below its grid (48 V here): less than 48 V / 1 k = 48 mA in the coil,
+        // and the grid-to-cathode voltage the current needs takes some volts more (Koren's law)
+        assertThat(d.onAmps()).isLessThan(48e-3).isGreaterThan(30e-3);
+        assertThat(d.onWorstAmps()).isLessThan(d.onAmps());
+        assertThat(ElectricalCheck.findings(l.machine(), a)).singleElement().satisfies(x -> {
+            assertThat(x.error()).isTrue();
+            assertThat(x.kind()).isEqualTo("coil");
+            assertThat(x.message()).contains("relay coil of 'pulled' (follower_relay)", "of its pick-up current of 45.00 mA",
+                    "V across it against 45.00 V to pick up");
+            assertThat(x.fix()).contains("a cathode follower gives its load at most the grid's swing");
+        });
+    }
 }

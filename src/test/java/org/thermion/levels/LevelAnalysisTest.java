@@ -140,4 +140,56 @@ class LevelAnalysisTest {
                     within(0.02 * Math.abs(side.nominal() - all.worst()) + 1e-6));
         }
     }
+
+    /** Four inverters of our own in a row (12AU7 section, 47 k from 48 V, 100 k / 100 k to -24 V). */
+    static final String ROW = """
+            rail bplus { voltage 48 V }
+            rail bias { voltage -24 V }
+            rail heat { voltage 6.3 V }
+            heaters on heat { parallel 12AU7 }
+            stage bench_inverter : not {
+              tube 12AU7
+              load 47 k from bplus
+              grid divider 100 k 100 k to bias
+            }
+            realize { not bench_inverter }
+            module top {
+              in a
+              out y
+              net m1, m2, m3
+              m1 = !a
+              m2 = !m1
+              m3 = !m2
+              y = !m3
+            }
+            machine row { top top; inputs a; outputs y }
+            """;
+
+    @Test
+    void aWorstCaseMarginTakesItsDriversInputAtTheDrivingNetsWorstCornerLevel() {
+        Loaded l = load(ROW);
+        MachineCircuits mc = MachineCircuits.of(l.machine());
+        Tolerances t = Tolerances.DEFAULT;
+        LevelAnalysis a = LevelAnalysis.of(l.machine(), mc, t, 1.0);
+        StageCircuit inv = circuits(l.machine(), mc).get("bench_inverter");
+        List<StageCircuit> receivers = List.of(inv);
+        WorstCase wc = new WorstCase(new MarginAnalysis(mc.solver()), t);
+        NetLevel m1 = net(a, "m1");
+        NetLevel m2 = net(a, "m2");
+        // m1's driver is fed from outside: its worst-case inputs are its nominal ones
+        assertThat(m1.worstInputs()).isEqualTo(m1.inputs());
+        // m2's driver sees m1, whose high level at its worst corner is below its nominal one
+        assertThat(m1.worstVoh()).isLessThan(m1.voh() - 1);
+        assertThat(m2.worstInputs().high()).isLessThan(m2.inputs().high() - 1);
+        // with its input that much lower m2's driver conducts less, so its low level rises: the
+        // worst-case low margin is lower than with the input at m1's nominal level
+        WorstMargin atNominalInput = wc.margins(inv, m2.inputs(), receivers).get(1);
+        WorstMargin atWorstInput = wc.margins(inv, m2.worstInputs(), receivers).get(1);
+        assertThat(m2.low().worst()).isLessThan(atNominalInput.worst() - 0.1);
+        assertThat(m2.low().worst()).isCloseTo(atWorstInput.worst(), within(1e-9));
+        assertThat(m2.low().nominal()).isCloseTo(atNominalInput.nominal(), within(1e-9));
+        // and the sensitivity corner still matches exhaustive enumeration at those input levels
+        WorstMargin all = wc.exhaustive(WorstMargin.Side.LOW, inv, m2.worstInputs(), receivers);
+        assertThat(m2.low().worst()).isCloseTo(all.worst(), within(0.02 * Math.abs(m2.low().nominal() - all.worst()) + 1e-6));
+    }
 }

@@ -3,20 +3,22 @@ package org.thermion.power.startup;
 import org.thermion.model.Rail;
 
 /**
- * One rail through a run: what hangs on it (heater strings, plate and bias loads tied to the
- * heaters that warm their cathodes, thyratron plate circuits fed from it, the soft starts in
- * series with it), its circuit solved algebraically at each point, and its peaks so far. Plate
- * and bias loads follow their cathodes' emission, not the heater wire.
+ * One rail through a run: what hangs on its bus (heater strings, plate and bias loads tied to the
+ * heaters that warm their cathodes, thyratron plate circuits fed from it), the soft starts in
+ * series with it, the partial soft starts that feed some loads from the bus through their own
+ * resistors, its circuit solved algebraically at each point, and its peaks so far. Plate and bias
+ * loads follow their cathodes' emission, not the heater wire.
  */
 final class RailState {
     final int index;
     final Rail rail;
-    final StringState[] strings;
-    final HeaterState[] plateHeaters;
-    final double[] plateSiemens;
-    final double alwaysSiemens;
+    /** What hangs on the rail's bus. */
+    final LoadNode bus;
+    /** Soft starts in series with the whole rail. */
     final SoftStartState[] series;
-    final SoftStartState[] thyratronBranches;
+    /** Soft starts feeding some of the rail's loads from the bus, each through its resistor to its own node. */
+    final SoftStartState[] partial;
+    private final SoftStartState[] all;
 
     // At the point last solved.
     double seriesOhms;
@@ -33,21 +35,21 @@ final class RailState {
     double limitSince = Double.NaN;
     double inLimit;
 
-    RailState(int index, Rail rail, StringState[] strings, HeaterState[] plateHeaters, double[] plateSiemens,
-              double alwaysSiemens, SoftStartState[] series, SoftStartState[] thyratronBranches) {
+    RailState(int index, Rail rail, LoadNode bus, SoftStartState[] series, SoftStartState[] partial) {
         this.index = index;
         this.rail = rail;
-        this.strings = strings;
-        this.plateHeaters = plateHeaters;
-        this.plateSiemens = plateSiemens;
-        this.alwaysSiemens = alwaysSiemens;
+        this.bus = bus;
         this.series = series;
-        this.thyratronBranches = thyratronBranches;
+        this.partial = partial;
+        this.all = java.util.Arrays.copyOf(series, series.length + partial.length);
+        System.arraycopy(partial, 0, all, series.length, partial.length);
     }
 
     /**
-     * Solves the rail: source and soft-start resistances in series with the strings, the plate loads
-     * (scaled by emission) and the fired thyratron branches (a conductance behind the arc drop).
+     * Solves the rail: the source and the whole-rail soft-start resistances in series with the bus;
+     * on the bus its own loads and, through each partial soft start's resistor (shorted once
+     * bypassed), that soft start's node. A node of conductance G behind R draws
+     * (G v - I) / (1 + R G) at bus voltage v, I the fired thyratron branches' source current.
      */
     void solve(double[] y, Emission emission) {
         double vs = Math.abs(rail.volts());
@@ -58,40 +60,37 @@ final class RailState {
             }
         }
         seriesOhms = rser;
-        double g = alwaysSiemens;
-        for (StringState st : strings) {
-            g += st.count * st.siemens;
+        bus.load(y, emission);
+        for (SoftStartState s : partial) {
+            s.node.load(y, emission);
         }
-        for (int i = 0; i < plateHeaters.length; i++) {
-            HeaterState h = plateHeaters[i];
-            g += plateSiemens[i] * h.emission(y, emission);
-        }
-        double bg = 0, bge = 0;
-        for (SoftStartState s : thyratronBranches) {
-            if (s.fired) {
-                bg += s.soft.branchSiemens();
-                bge += s.soft.branchSiemens() * s.soft.branchVolts();
-            }
-        }
+        double g;
+        double e;
         double vn;
-        double ask;
-        if (rser > 0) {
-            vn = (vs / rser + bge) / (1 / rser + g + bg);
-            if (bg > 0 && vn < bge / bg) {
-                bg = 0;
-                bge = 0;
-                vn = vs / (1 + g * rser);
+        // Each pass takes out thyratron branches whose node fell below the arc drop; at most one pass per node.
+        for (int pass = 0; ; pass++) {
+            g = bus.totalSiemens();
+            e = bus.branchAmps;
+            for (SoftStartState s : partial) {
+                double r = s.bypassed ? 0 : s.ohms;
+                double gn = s.node.totalSiemens();
+                g += gn / (1 + r * gn);
+                e += s.node.branchAmps / (1 + r * gn);
             }
-            ask = (g + bg) * vn - bge;   // the same as (vs - vn) / rser, without cancellation
-        } else {
-            vn = vs;
-            ask = g * vs + Math.max(0, bg * vs - bge);
+            vn = rser > 0 ? (vs / rser + e) / (1 / rser + g) : vs;
+            boolean changed = bus.clamp(vn);
+            for (SoftStartState s : partial) {
+                changed |= s.node.clamp(nodeVolts(s, vn));
+            }
+            if (!changed || pass > partial.length) {
+                break;
+            }
         }
+        double ask = g * vn - e;   // the same as (vs - vn) / rser, without cancellation
         double a = ask;
         if (ask > rail.limitAmps()) {
             a = rail.limitAmps();
-            double gt = g + bg;
-            vn = gt > 0 ? Math.min(vs, (a + bge) / gt) : vs;
+            vn = g > 0 ? Math.min(vs, (a + e) / g) : vs;
         }
         if (!Double.isFinite(a) || !Double.isFinite(vn)) {
             throw new TransientFailure("rail " + rail.name() + ": the circuit has no finite solution (" + fmtV(vs)
@@ -101,19 +100,21 @@ final class RailState {
         amps = a;
         volts = vn;
         demand = ask;
-        for (SoftStartState s : thyratronBranches) {
-            // A fired branch conducts while the bus stands above the arc drop (bg is zeroed when it does not).
-            double ib = s.fired && bg > 0 ? Math.max(0, vn - s.soft.branchVolts()) * s.soft.branchSiemens() : 0;
-            s.coilVolts = ib * s.soft.check().relay().coilOhms();
-            s.plateVolts = ib * s.soft.check().plateOhms();
-            s.busVolts = vn;
-        }
-        for (StringState st : strings) {
-            st.carry(vn);
-        }
+        bus.carry(vn);
         for (SoftStartState s : series) {
             s.dissipate(a);
         }
+        for (SoftStartState s : partial) {
+            double v = nodeVolts(s, vn);
+            s.node.carry(v);
+            s.dissipate(s.node.amps(v));
+        }
+    }
+
+    /** The voltage at a partial soft start's node for bus voltage {@code bus}. */
+    private static double nodeVolts(SoftStartState s, double bus) {
+        double r = s.bypassed ? 0 : s.ohms;
+        return (bus + r * s.node.branchAmps) / (1 + r * s.node.totalSiemens());
     }
 
     private static String fmtV(double v) {
@@ -122,7 +123,7 @@ final class RailState {
 
     /** A soft-start resistor sits in this rail. */
     boolean hasSoftStart() {
-        for (SoftStartState s : series) {
+        for (SoftStartState s : all()) {
             if (s.ohms > 0) {
                 return true;
             }
@@ -132,7 +133,7 @@ final class RailState {
 
     /** Some soft-start resistor of this rail has been bypassed. */
     boolean bypassed() {
-        for (SoftStartState s : series) {
+        for (SoftStartState s : all()) {
             if (s.bypassed && s.ohms > 0) {
                 return true;
             }
@@ -143,7 +144,7 @@ final class RailState {
     /** Earliest bypass of a resistor in this rail (NaN: none). */
     double bypassTime() {
         double bt = Double.NaN;
-        for (SoftStartState s : series) {
+        for (SoftStartState s : all()) {
             if (s.ohms > 0 && !Double.isNaN(s.bypassTime)) {
                 bt = Double.isNaN(bt) ? s.bypassTime : Math.min(bt, s.bypassTime);
             }
@@ -152,7 +153,19 @@ final class RailState {
     }
 
     boolean hasLoad() {
-        return strings.length > 0 || plateHeaters.length > 0 || alwaysSiemens > 0 || thyratronBranches.length > 0;
+        if (bus.any()) {
+            return true;
+        }
+        for (SoftStartState s : partial) {
+            if (s.node.any()) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private SoftStartState[] all() {
+        return all;
     }
 
     void observe(double t) {

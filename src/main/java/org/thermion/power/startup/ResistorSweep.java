@@ -1,13 +1,13 @@
 package org.thermion.power.startup;
 
-import java.util.ArrayList;
 import java.util.List;
 
 /**
  * Solves the transient for a range of soft-start resistor values and recommends the one that
  * makes the larger of the two current peaks (switch-on, bypass) smallest, among the values whose
  * supply stays within its current limit and whose resistor stays within its rating (mean
- * dissipation while in circuit) and actually gets bypassed within the run.
+ * dissipation while in circuit) and actually gets bypassed within the run. Values run on a pool
+ * of threads ({@link SweepPool}); the earliest of equal peaks wins, whatever the finishing order.
  */
 public final class ResistorSweep {
     private ResistorSweep() {
@@ -54,13 +54,16 @@ public final class ResistorSweep {
         return v;
     }
 
-    /** Runs the sweep on soft start {@code softStart} of {@code net}. */
+    /** Runs the sweep on soft start {@code softStart} of {@code net}, on every core. */
     public static Result run(StartupNetwork net, PowerUpOptions base, String softStart, double[] ohms) {
-        return run(net, base, softStart, ohms, done -> { });
+        return run(net, base, softStart, ohms, Runtime.getRuntime().availableProcessors(), done -> { });
     }
 
-    /** As {@link #run(StartupNetwork, PowerUpOptions, String, double[])}, telling {@code progress} each value done. */
-    public static Result run(StartupNetwork net, PowerUpOptions base, String softStart, double[] ohms,
+    /**
+     * As {@link #run(StartupNetwork, PowerUpOptions, String, double[])}, on {@code threads} threads
+     * ({@link SweepPool}), telling {@code progress} how many values are done.
+     */
+    public static Result run(StartupNetwork net, PowerUpOptions base, String softStart, double[] ohms, int threads,
                              java.util.function.IntConsumer progress) {
         int k = net.softStartNames().indexOf(softStart);
         if (k < 0) {
@@ -69,14 +72,12 @@ public final class ResistorSweep {
         StartupNetwork.Soft soft = net.softs.get(k);
         int rail = soft.rail();
         PowerUpOptions o = base.withSampleSeconds(0);
-        List<Row> rows = new ArrayList<>();
+        List<Row> rows = SweepPool.map(ohms.length, threads, i -> row(net, o, k, rail, ohms[i]), progress);
         int best = -1;
-        for (double r : ohms) {
-            Row row = row(net, o, k, rail, r);
-            rows.add(row);
-            progress.accept(rows.size());
+        for (int i = 0; i < rows.size(); i++) {
+            Row row = rows.get(i);
             if (row.feasible() && (best < 0 || row.worstPeak() < rows.get(best).worstPeak())) {
-                best = rows.size() - 1;
+                best = i;
             }
         }
         Row preferred = null;

@@ -1,5 +1,7 @@
 package org.thermion.power.startup;
 
+import java.util.List;
+
 /**
  * One soft-start network through power-up.
  *
@@ -19,11 +21,16 @@ package org.thermion.power.startup;
  * @param contactAmps   the bypass relay's declared contact rating (NaN: none declared)
  * @param makeAmps      current the contacts make: the rail's bypass peak (NaN: never closed)
  * @param carryAmps     current they carry at the end of the run
+ * @param covers        the loads behind the resistor as the {@code covers} line names them (empty: the whole rail);
+ *                      for a partial soft start the contacts make and carry its own branch's current
  */
 public record SoftStartResult(String name, int rail, double ohms, double ratedWatts, double triggerTime,
                               double bypassTime, double joules, double peakWatts, double meanWatts, boolean thyratron,
                               double neededWatts, ResistorRating rating, double contactAmps, double makeAmps,
-                              double carryAmps) {
+                              double carryAmps, List<String> covers) {
+    public SoftStartResult {
+        covers = List.copyOf(covers);
+    }
 
     public boolean bypassed() {
         return !Double.isNaN(bypassTime);

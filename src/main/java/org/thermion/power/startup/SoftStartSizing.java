@@ -1,18 +1,12 @@
 package org.thermion.power.startup;
 
-import java.util.ArrayList;
-import java.util.List;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
 
 /**
  * Sizes a soft start for a rail that has none: a resistor and a timed bypass, as a two-way table
  * of the larger of the two current peaks (switch-on, bypass). One run per resistor, with the relay
  * held open, serves every bypass time: the state at each bypass time gives the switch-on peak so far
  * and the current the instant after closing ({@link TransientRun#probe}). Resistors are shared out
- * over a pool of threads (the network is immutable; each run owns its state).
+ * over a pool of threads ({@link SweepPool}).
  */
 public final class SoftStartSizing {
     private SoftStartSizing() {
@@ -58,40 +52,18 @@ public final class SoftStartSizing {
         double end = Math.min(o.seconds(), times[times.length - 1] + 1e-3);
         PowerUpOptions held = o.withHoldBypass(true).withSampleSeconds(0).withSeconds(Math.max(PowerUpOptions.MIN_SECONDS, end));
         double limit = net.machine.rails().get(rail).limitAmps();
-        Cell[][] cells = new Cell[ohms.length][];
-        ExecutorService pool = Executors.newFixedThreadPool(Math.max(1, threads));
-        java.util.concurrent.atomic.AtomicInteger finished = new java.util.concurrent.atomic.AtomicInteger();
-        try {
-            List<Future<Cell[]>> rows = new ArrayList<>();
-            for (double r : ohms) {
-                rows.add(pool.submit(() -> {
-                    TransientRun run = new TransientRun(net, held.withResistor(StartupNetwork.SIZING, r));
-                    BypassProbe probe = run.probe(k, times);
-                    run.run();
-                    double[] on = probe.switchOn(), by = probe.bypass(), w = probe.watts();
-                    Cell[] row = new Cell[times.length];
-                    for (int j = 0; j < times.length; j++) {
-                        row[j] = new Cell(on[j], r == 0 ? on[j] : by[j], r == 0 ? 0 : w[j],
-                                !(Math.max(on[j], by[j]) >= limit));
-                    }
-                    progress.accept(finished.incrementAndGet());
-                    return row;
-                }));
+        Cell[][] cells = SweepPool.map(ohms.length, threads, i -> {
+            double r = ohms[i];
+            TransientRun run = new TransientRun(net, held.withResistor(StartupNetwork.SIZING, r));
+            BypassProbe probe = run.probe(k, times);
+            run.run();
+            double[] on = probe.switchOn(), by = probe.bypass(), w = probe.watts();
+            Cell[] row = new Cell[times.length];
+            for (int j = 0; j < times.length; j++) {
+                row[j] = new Cell(on[j], r == 0 ? on[j] : by[j], r == 0 ? 0 : w[j], !(Math.max(on[j], by[j]) >= limit));
             }
-            for (int i = 0; i < ohms.length; i++) {
-                cells[i] = rows.get(i).get();
-            }
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("sizing interrupted", e);
-        } catch (ExecutionException e) {
-            if (e.getCause() instanceof RuntimeException re) {
-                throw re;
-            }
-            throw new IllegalStateException(e.getCause());
-        } finally {
-            pool.shutdownNow();
-        }
+            return row;
+        }, progress).toArray(new Cell[0][]);
         int bi = -1, bj = -1;
         for (int i = 0; i < ohms.length; i++) {
             for (int j = 0; j < times.length; j++) {

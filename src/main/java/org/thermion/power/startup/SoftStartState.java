@@ -15,6 +15,8 @@ final class SoftStartState {
     final double tau;
     /** The thyratron's heater, when a thyratron triggers the bypass. */
     final HeaterState thyratron;
+    /** The loads behind a partial soft start's resistor (null: it is in series with the whole rail); set once, when built. */
+    LoadNode node;
 
     boolean bypassed;
     boolean fired;
@@ -118,8 +120,14 @@ final class SoftStartState {
                 firstClose, openings, firstOpening);
     }
 
-    void dissipate(double railAmps) {
-        watts = bypassed ? 0 : railAmps * railAmps * ohms;
+    /** Current through the resistor or the closed contacts at the point last solved, amperes. */
+    double amps;
+    /** Highest current through the closed contacts so far (NaN: never closed). */
+    double peakClosed = Double.NaN;
+
+    void dissipate(double amps) {
+        this.amps = amps;
+        watts = bypassed ? 0 : amps * amps * ohms;
     }
 
     /** Peak of the lagged power so far, watts. */
@@ -131,6 +139,9 @@ final class SoftStartState {
     }
 
     void observe(double[] y) {
+        if (bypassed && ohms > 0 && (Double.isNaN(peakClosed) || amps > peakClosed)) {
+            peakClosed = amps;
+        }
         peakWatts = Math.max(peakWatts, watts);
         neededWatts = Math.max(neededWatts, y[heat]);
     }

@@ -54,27 +54,45 @@ public final class StartupNetwork {
 
     // distinct strings
     final int[] groupRail;
+    /** The partial soft start whose resistor feeds the string (index in {@link #softs}; -1: the rail's bus). */
+    final int[] groupSoft;
     final int[] groupCount;
     final double[] groupDrop;
     final int[][] groupStates;
     final String[] groupLabel;
     final boolean[] groupMixed;
 
-    // per rail
-    final int[][] railGroups;
-    final int[][] plateState;
-    final double[][] plateSiemens;
-    final double[] alwaysSiemens;
+    /** Per rail, the loads on its bus (behind its whole-rail soft starts, ahead of its partial ones). */
+    final Loads[] railLoads;
 
     // soft starts
     final List<Soft> softs;
 
-    /** A soft-start network as the solver sees it. */
+    /**
+     * A soft-start network as the solver sees it. {@code covered} holds the loads behind a partial
+     * soft start's resistor (null: it is in series with the whole rail); {@code branchSoft} is the
+     * partial soft start of rail {@code fromRail} whose resistor feeds the thyratron's plate circuit
+     * (-1: the rail's bus).
+     */
     record Soft(String name, int rail, double declaredOhms, double ratedWatts, double delay, int thyState,
                 int fromRail, double branchSiemens, double branchVolts, double contactAmps,
-                double operate, RelayDriverCheck check) {
+                double operate, RelayDriverCheck check, Loads covered, int branchSoft) {
         boolean thyratron() {
             return thyState >= 0;
+        }
+
+        boolean partial() {
+            return covered != null;
+        }
+    }
+
+    /**
+     * The loads at one node of a rail: heater string groups, plate and bias conductances tied to the
+     * heater state that warms their cathodes, and those with no heater (always drawing).
+     */
+    record Loads(int[] groups, int[] plateState, double[] plateSiemens, double alwaysSiemens) {
+        boolean any() {
+            return groups.length > 0 || plateState.length > 0 || alwaysSiemens > 0;
         }
     }
 
@@ -98,9 +116,11 @@ public final class StartupNetwork {
         int[] envString = new int[m.envelopes().size()];
         int[] envPos = new int[m.envelopes().size()];
         Arrays.fill(envString, -1);
+        List<Integer> groupCover = new ArrayList<>();
         for (HeaterString hs : m.heaterStrings()) {
+            int cover = partialCovering(m, hs.rail(), ss -> ss.cover().coversString(hs, m.envelopes()));
             StringBuilder key = new StringBuilder().append(hs.rail()).append('|').append(hs.dropOhms()).append('|')
-                    .append(hs.shunt()).append('|').append(share ? 0 : groupFirst.size());
+                    .append(hs.shunt()).append('|').append(cover).append('|').append(share ? 0 : groupFirst.size());
             for (int i = 0; i < hs.envelopes().size(); i++) {
                 Envelope e = m.envelopes().get(hs.envelopes().get(i));
                 HeaterRating r = hs.ratings().get(i);
@@ -122,6 +142,7 @@ public final class StartupNetwork {
                 g = groupFirst.size();
                 groupIndex.put(key.toString(), g);
                 groupFirst.add(hs);
+                groupCover.add(cover);
                 counts.add(0);
             }
             counts.set(g, counts.get(g) + 1);
@@ -133,6 +154,7 @@ public final class StartupNetwork {
         this.models = List.copyOf(ml);
         int ng = groupFirst.size();
         groupRail = new int[ng];
+        groupSoft = groupCover.stream().mapToInt(Integer::intValue).toArray();
         groupCount = new int[ng];
         groupDrop = new double[ng];
         groupStates = new int[ng][];
@@ -166,6 +188,9 @@ public final class StartupNetwork {
             if (hs.dropOhms() > 0) {
                 label.append(" + ").append(fmt(hs.dropOhms())).append(" ohm");
             }
+            if (groupSoft[g] >= 0) {
+                label.append(" behind ").append(m.softStarts().get(groupSoft[g]).name());
+            }
             groupLabel[g] = label.toString();
             groupMixed[g] = tubeTypes.size() > 1;
         }
@@ -180,47 +205,40 @@ public final class StartupNetwork {
             statePosition[s] = st.get(s)[2];
             stateShunt[s] = shunts.get(s);
         }
+        // Loads per node: nodes 0..nr-1 are the rails' buses, node nr + k the far side of soft start k.
         int nr = m.rails().size();
+        int nodes = nr + m.softStarts().size();
         List<List<Integer>> rg = new ArrayList<>();
-        for (int r = 0; r < nr; r++) {
+        List<Map<Integer, Double>> plate = new ArrayList<>();
+        for (int n = 0; n < nodes; n++) {
             rg.add(new ArrayList<>());
+            plate.add(new HashMap<>());
         }
         for (int g = 0; g < ng; g++) {
-            rg.get(groupRail[g]).add(g);
+            rg.get(groupSoft[g] < 0 ? groupRail[g] : nr + groupSoft[g]).add(g);
         }
-        railGroups = new int[nr][];
-        for (int r = 0; r < nr; r++) {
-            railGroups[r] = rg.get(r).stream().mapToInt(Integer::intValue).toArray();
-        }
-
-        // Plate and bias loads, summed per rail and per heater state.
         int[] envState = new int[m.envelopes().size()];
         for (int e = 0; e < envState.length; e++) {
             envState[e] = envString[e] < 0 ? -1 : groupStates[envString[e]][envPos[e]];
         }
-        List<Map<Integer, Double>> plate = new ArrayList<>();
-        for (int r = 0; r < nr; r++) {
-            plate.add(new HashMap<>());
-        }
         for (DrawingInstance d : DrawingInstances.of(m)) {
             if (d.kind() != DrawingInstance.Kind.BYPASS) { // the bypass thyratron is the relay driver's
-                addDraw(m, m.stages().get(d.stage()), envState, d.envelope(), plate);
+                addDraw(m, m.stages().get(d.stage()), d.module(), envState, d.envelope(), plate);
             }
         }
-        plateState = new int[nr][];
-        plateSiemens = new double[nr][];
-        alwaysSiemens = new double[nr];
-        for (int r = 0; r < nr; r++) {
-            Map<Integer, Double> p = plate.get(r);
+        Loads[] nodeLoads = new Loads[nodes];
+        for (int n = 0; n < nodes; n++) {
+            Map<Integer, Double> p = plate.get(n);
             Double always = p.remove(-1);
-            alwaysSiemens[r] = always == null ? 0 : always;
             int[] keys = p.keySet().stream().mapToInt(Integer::intValue).sorted().toArray();
-            plateState[r] = keys;
-            plateSiemens[r] = new double[keys.length];
+            double[] siemens = new double[keys.length];
             for (int i = 0; i < keys.length; i++) {
-                plateSiemens[r][i] = p.get(keys[i]);
+                siemens[i] = p.get(keys[i]);
             }
+            nodeLoads[n] = new Loads(rg.get(n).stream().mapToInt(Integer::intValue).toArray(), keys, siemens,
+                    always == null ? 0 : always);
         }
+        railLoads = Arrays.copyOf(nodeLoads, nr);
 
         // Soft starts.
         List<Soft> sl = new ArrayList<>();
@@ -229,6 +247,7 @@ public final class StartupNetwork {
             int thy = -1;
             double bs = 0, bv = 0;
             int from = -1;
+            int branchSoft = -1;
             RelayDriverCheck check = null;
             if (ss.trigger() instanceof BypassTrigger.AfterDelay d) {
                 delay = d.seconds();
@@ -238,6 +257,8 @@ public final class StartupNetwork {
                     throw new IllegalArgumentException("soft start " + ss.name() + ": its thyratron has no heater string");
                 }
                 from = tw.fromRail();
+                int module = m.envelopes().get(tw.envelope()).module();
+                branchSoft = partialCovering(m, from, c -> c.cover().coversModule(module));
                 TubeType tube = m.tubes().get(tw.tube());
                 double arc = tube.arcDropVolts();
                 if (Double.isNaN(arc)) {
@@ -256,7 +277,8 @@ public final class StartupNetwork {
                 bv = arc;
             }
             sl.add(new Soft(ss.name(), ss.rail(), ss.resistorOhms(), ss.ratedWatts(), delay, thy, from, bs, bv,
-                    ss.relay().contactAmps(), ss.relay().operateSeconds(), check));
+                    ss.relay().contactAmps(), ss.relay().operateSeconds(), check,
+                    ss.cover().isWholeRail() ? null : nodeLoads[nr + sl.size()], branchSoft));
         }
         softs = List.copyOf(sl);
         notes = List.copyOf(noteList);
@@ -318,10 +340,8 @@ public final class StartupNetwork {
         this.groupStates = base.groupStates;
         this.groupLabel = base.groupLabel;
         this.groupMixed = base.groupMixed;
-        this.railGroups = base.railGroups;
-        this.plateState = base.plateState;
-        this.plateSiemens = base.plateSiemens;
-        this.alwaysSiemens = base.alwaysSiemens;
+        this.groupSoft = base.groupSoft;
+        this.railLoads = base.railLoads;
         List<Soft> sl = new ArrayList<>(base.softs);
         sl.add(extra);
         this.softs = List.copyOf(sl);
@@ -336,7 +356,7 @@ public final class StartupNetwork {
      */
     StartupNetwork withTimedSoftStart(int rail) {
         return new StartupNetwork(this, new Soft(SIZING, rail, 0, Double.POSITIVE_INFINITY, Double.NaN, -1, -1, 0, 0,
-                Double.NaN, 0, null));
+                Double.NaN, 0, null, null, -1));
     }
 
     /** Builds the network of {@code m} under the given assumptions. */
@@ -388,15 +408,28 @@ public final class StartupNetwork {
                 : 0.5 * (draw.amps(st, rail, false) + draw.amps(st, rail, true));
     }
 
-    private void addDraw(Machine m, StageType st, int[] envState, int env, List<Map<Integer, Double>> plate) {
-        for (int r = 0; r < m.rails().size(); r++) {
+    private void addDraw(Machine m, StageType st, int module, int[] envState, int env, List<Map<Integer, Double>> plate) {
+        int nr = m.rails().size();
+        for (int r = 0; r < nr; r++) {
             double v = Math.abs(m.rails().get(r).volts());
             double amps = drawAmps(st, r);
             if (amps > 0 && v > 0) {
                 int s = env < 0 ? -1 : envState[env];
-                plate.get(r).merge(s, amps / v, Double::sum);
+                int soft = partialCovering(m, r, ss -> ss.cover().coversModule(module));
+                plate.get(soft < 0 ? r : nr + soft).merge(s, amps / v, Double::sum);
             }
         }
+    }
+
+    /** The partial soft start of rail {@code rail} that covers a load (index in the machine's list), or -1. */
+    private static int partialCovering(Machine m, int rail, java.util.function.Predicate<SoftStart> covers) {
+        for (int k = 0; k < m.softStarts().size(); k++) {
+            SoftStart ss = m.softStarts().get(k);
+            if (ss.rail() == rail && !ss.cover().isWholeRail() && covers.test(ss)) {
+                return k;
+            }
+        }
+        return -1;
     }
 
     static String fmt(double v) {

@@ -43,20 +43,37 @@ final class TransientCircuit {
         for (int k = 0; k < ns; k++) {
             StartupNetwork.Soft s = net.softs.get(k);
             double ohms = o.resistorOhms().getOrDefault(s.name(), s.declaredOhms());
-            softs[k] = new SoftStartState(s, ohms, 2 * n + k, 2 * n + ns + k, o.resistorRating().tau(), s.thyratron() ? heaters[s.thyState()] : null);
+            softs[k] = new SoftStartState(s, ohms, 2 * n + k, 2 * n + ns + k, o.resistorRating().tau(),
+                    s.thyratron() ? heaters[s.thyState()] : null);
+        }
+        for (int k = 0; k < ns; k++) {
+            if (softs[k].soft.partial()) {
+                softs[k].node = node(softs[k].soft.covered(), -1, k);
+            }
         }
         int nr = net.machine.rails().size();
         rails = new RailState[nr];
         for (int r = 0; r < nr; r++) {
             int ri = r;
-            StringState[] on = Arrays.stream(net.railGroups[r]).mapToObj(g -> strings[g]).toArray(StringState[]::new);
-            HeaterState[] plates = Arrays.stream(net.plateState[r]).mapToObj(s -> heaters[s]).toArray(HeaterState[]::new);
-            SoftStartState[] series = Arrays.stream(softs).filter(s -> s.soft.rail() == ri).toArray(SoftStartState[]::new);
-            SoftStartState[] branches = Arrays.stream(softs).filter(s -> s.soft.thyratron() && s.soft.fromRail() == ri)
+            SoftStartState[] series = Arrays.stream(softs).filter(s -> s.soft.rail() == ri && !s.soft.partial())
                     .toArray(SoftStartState[]::new);
-            rails[r] = new RailState(r, net.rail(r), on, plates, net.plateSiemens[r].clone(),
-                    net.alwaysSiemens[r], series, branches);
+            SoftStartState[] partial = Arrays.stream(softs).filter(s -> s.soft.rail() == ri && s.soft.partial())
+                    .toArray(SoftStartState[]::new);
+            rails[r] = new RailState(r, net.rail(r), node(net.railLoads[r], r, -1), series, partial);
         }
+    }
+
+    /**
+     * The run's state of a node's loads; its thyratron branches are those fed from rail {@code rail}'s
+     * bus, or (rail -1) from behind soft start {@code soft}.
+     */
+    private LoadNode node(StartupNetwork.Loads loads, int rail, int soft) {
+        StringState[] on = Arrays.stream(loads.groups()).mapToObj(g -> strings[g]).toArray(StringState[]::new);
+        HeaterState[] plates = Arrays.stream(loads.plateState()).mapToObj(s -> heaters[s]).toArray(HeaterState[]::new);
+        SoftStartState[] branches = Arrays.stream(softs).filter(s -> s.soft.thyratron()
+                && (rail >= 0 ? s.soft.fromRail() == rail && s.soft.branchSoft() < 0 : s.soft.branchSoft() == soft))
+                .toArray(SoftStartState[]::new);
+        return new LoadNode(on, plates, loads.plateSiemens().clone(), loads.alwaysSiemens(), branches);
     }
 
     /** Solves the circuit for the temperatures in {@code y} under the present relay states. */

@@ -62,7 +62,8 @@ final class TransientRecorder {
         }
         List<SoftStartResult> softResults = new ArrayList<>();
         List<RelayDriverCheck> checks = new ArrayList<>();
-        for (SoftStartState ss : softs) {
+        for (int k = 0; k < softs.length; k++) {
+            SoftStartState ss = softs[k];
             StartupNetwork.Soft s = ss.soft;
             double trig = s.thyratron() ? ss.fireTime : (s.delay() <= end ? s.delay() : Double.NaN);
             double inCircuit = Double.isNaN(ss.bypassTime) ? end : ss.bypassTime;
@@ -71,7 +72,8 @@ final class TransientRecorder {
             softResults.add(new SoftStartResult(s.name(), s.rail(), ss.ohms, s.ratedWatts(), none ? Double.NaN : trig,
                     none ? Double.NaN : ss.bypassTime, joules, ss.peakWatts, inCircuit > 0 ? joules / inCircuit : 0,
                     s.thyratron(), ss.neededWatts, o.resistorRating(), ss.soft.contactAmps(),
-                    rails[s.rail()].peakBy, rails[s.rail()].amps));
+                    s.partial() ? ss.peakClosed : rails[s.rail()].peakBy, s.partial() ? ss.amps : rails[s.rail()].amps,
+                    s.partial() ? net.machine.softStarts().get(k).cover().names() : List.of()));
             if (s.check() != null) {
                 RelayDriverCheck c = s.check();
                 checks.add(c.simulated(ss.fireTime, ss.coil()));

@@ -50,26 +50,4 @@ public final class TungstenResistivity {
         }
         return spline.value(kelvin);
     }
-
-    /** Lowest and highest tabulated temperature. */
-    public double minKelvin() {
-        return KELVIN[0];
-    }
-
-    public double maxKelvin() {
-        return KELVIN[KELVIN.length - 1];
-    }
-
-    /** Number of tabulated points (for tests and reports). */
-    public int points() {
-        return KELVIN.length;
-    }
-
-    public double tabulatedKelvin(int i) {
-        return KELVIN[i];
-    }
-
-    public double tabulatedValue(int i) {
-        return MICRO_OHM_CM[i];
-    }
 }

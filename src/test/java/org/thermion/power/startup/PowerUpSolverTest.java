@@ -92,6 +92,19 @@ class PowerUpSolverTest {
     }
 
     @Test
+    void aSweepOnTwoThreadsGivesTheSameTableAsOnOne() {
+        StartupNetwork net = StartupNetwork.of(inverters("2 ohm", "40 A"), ThermalAssumptions.standard(), DrawMode.HIGHEST);
+        double[] ohms = ResistorSweep.range(1, 3, 0.5);
+        java.util.Set<Integer> heard = java.util.concurrent.ConcurrentHashMap.newKeySet();
+        ResistorSweep.Result one = ResistorSweep.run(net, PowerUpOptions.defaults(), "heat_soft", ohms, 1, d -> { });
+        ResistorSweep.Result two = ResistorSweep.run(net, PowerUpOptions.defaults(), "heat_soft", ohms, 2, heard::add);
+        assertThat(two.rows()).isEqualTo(one.rows());
+        assertThat(two.best()).isEqualTo(one.best());
+        assertThat(two.rows()).extracting(ResistorSweep.Row::ohms).containsExactly(1.0, 1.5, 2.0, 2.5, 3.0);
+        assertThat(heard).containsExactlyInAnyOrder(1, 2, 3, 4, 5);
+    }
+
+    @Test
     void aStringSwitchedStraightOnIsHotInRoughlyTenSeconds() {
         // Common practice: series strings of controlled-warm-up heaters are hot in roughly ten seconds
         // (within a factor of two). Four 6.3 V heaters on 24 V with no soft-start resistor: about 5 s here.

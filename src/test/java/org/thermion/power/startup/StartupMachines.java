@@ -131,6 +131,54 @@ final class StartupMachines {
                 """;
     }
 
+    /**
+     * Two boards ({@code front}, {@code back}) of two buffers each on a test tube type of our own
+     * (6.3 V 0.3 A heater, cold-to-hot ratio 7, each buffer drawing 3 mA from a 48 V B+ behind
+     * 4 ohm); per board one string of two heaters on a 12.6 V rail behind 0.1 ohm. {@code soft} is
+     * the soft-start block (or empty).
+     */
+    static String boards(String soft) {
+        return """
+                tube TT6 {
+                  kind triode
+                  sections 1
+                  heater 6.3 V 300 mA
+                  coldratio 7
+                  warmup 11 s
+                  source "a test type of our own"
+                }
+                stage tt_buffer : buffer {
+                  tube TT6
+                  sections 1
+                  fanin 1
+                  draw always bplus 3 mA
+                }
+                rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
+                rail heat  { voltage 12.6 V; source 0.1 ohm; limit 40 A }
+                heaters on heat { series 2 of TT6 per module }
+                %s
+                module pair {
+                  in a
+                  out y
+                  net n
+                  n = tt_buffer(a)
+                  y = tt_buffer(n)
+                }
+                module boards {
+                  in a
+                  out y, z
+                  use pair as front (a: a, y: y)
+                  use pair as back (a: a, y: z)
+                }
+                machine boards {
+                  clock { phases 1; period 100 us }
+                  top boards
+                  inputs a
+                  outputs y z
+                }
+                """.formatted(soft);
+    }
+
     static Machine elaborate(String text) {
         Diagnostics d = new Diagnostics();
         Machine m = new Elaborator(new SourceSet(), d).elaborateText(Path.of("test.machine"), text);
