@@ -73,6 +73,7 @@ final class BudgetReport {
         } else {
             r.field("simulation", new Absent("not simulated"));
         }
+        r.field("left_out", b.leftOut());
         r.field("plate_dissipation", PLATE_NOTE);
         r.field("caution", CAUTION);
         r.text(head());
@@ -92,6 +93,9 @@ final class BudgetReport {
         List<String> h = new ArrayList<>();
         h.add(String.format(Locale.ROOT, "budget of machine %s: %d tubes, %d heater strings, %d rails", m.name(),
                 m.envelopes().size(), m.heaterStrings().size(), m.rails().size()));
+        List<String> out = b.leftOut();
+        h.add(out.isEmpty() ? "  the totals count every part: the logic and the built blocks"
+                : "  the totals leave out: " + String.join("; ", out));
         h.add("  plate and bias current: lowest and highest = every stage instance at its lowest or highest draw;");
         h.add("    " + origins() + " (see 'stage draws')");
         h.add("  heaters and the supply check at each rail's voltage under its load (nominal less the source drop),");

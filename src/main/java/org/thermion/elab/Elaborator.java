@@ -7,6 +7,7 @@ import org.thermion.lang.ast.Decl;
 import org.thermion.lang.ast.Prop;
 import org.thermion.lang.ast.SourceFile;
 import org.thermion.lang.ast.Value;
+import org.thermion.model.BuiltBlock;
 import org.thermion.model.Clock;
 import org.thermion.model.Gate;
 import org.thermion.model.Isa;
@@ -297,6 +298,8 @@ public final class Elaborator {
                         .findFirst().orElse(p.span()));
             }
         }
+        List<BuiltBlock> built = new BuiltBlocks(parts, packer, diags).build(mb, pc != null ? pc.width() : 0,
+                rom != null ? rom.words() : 0, rom != null ? rom.width() : 0, modules);
         for (Prop h : decls.heaters) {
             packer.readRules(h);
         }
@@ -351,7 +354,7 @@ public final class Elaborator {
         return new Machine(mb.name, new Clock(mb.phases, mb.period), List.copyOf(parts.tubes), List.copyOf(parts.stages),
                 List.copyOf(parts.rails), List.copyOf(packer.rules), List.copyOf(softStarts), List.copyOf(modules), netlist,
                 rom, pc, List.copyOf(inputs), List.copyOf(outputs), packer.levelized(order),
-                List.copyOf(packer.strings), isa, gateEnvOrdered, latchEnvelope);
+                List.copyOf(packer.strings), isa, gateEnvOrdered, latchEnvelope, built);
     }
 
     /** A bus port becomes one machine bit per line: {@code code[0]}, {@code code[1]}, ... */

@@ -24,6 +24,10 @@ final class MachineBlock {
     int pcWidth, pcPhase;
     String pcJump, pcTarget;
     Span pcJumpSpan, pcTargetSpan;
+    /** What the pc, rom and clock blocks say of how they are built. */
+    BlockSpec pcSpec = BlockSpec.NONE;
+    BlockSpec romSpec = BlockSpec.NONE;
+    BlockSpec clockSpec = BlockSpec.NONE;
     final List<Value> inputs = new ArrayList<>();
     final List<Value> outputs = new ArrayList<>();
     /** Module instances not built yet (their outputs become switches). */
@@ -42,6 +46,7 @@ final class MachineBlock {
         PropBlock clock = b.nested("clock");
         m.phases = (int) clock.num("phases");
         m.period = clock.num("period");
+        m.clockSpec = BlockSpec.read(clock);
         PropLine top = b.line("top");
         if (top != null) {
             m.top = top.word("module");
@@ -50,6 +55,7 @@ final class MachineBlock {
         PropBlock rom = b.nested("rom");
         m.romWords = (int) rom.num("words");
         m.romWidth = rom.has("width") ? (int) rom.num("width") : 0;
+        m.romSpec = BlockSpec.read(rom);
         PropLine data = rom.line("data");
         if (data != null) {
             m.romData = data.word("port");
@@ -58,6 +64,7 @@ final class MachineBlock {
         PropBlock pc = b.nested("pc");
         m.pcWidth = pc.has("width") ? (int) pc.num("width") : 0;
         m.pcPhase = pc.has("phase") ? (int) pc.num("phase") : 0;
+        m.pcSpec = BlockSpec.read(pc);
         PropLine jump = pc.line("jump");
         if (jump != null) {
             m.pcJump = jump.word("port");

@@ -83,7 +83,7 @@ final class PropertyTable {
                             "koren", List.of(new Slot.AnyOrder(List.of(koren("mu", above(0, 1e3)), koren("ex", from(1, 2)),
                                     koren("kg1"), koren("kg2"), koren("kp"), koren("kvb"), sourceOption()))),
                             "diode", List.of(q("amps", "diode current", Unit.AMPERE, above(0, 100)), new Slot.Word("at"),
-                                    q("volts", "diode voltage", Unit.VOLT, above(0, 1e3)), sourceOption()),
+                                    q("volts", "diode voltage", Unit.VOLT, from(0.1, 1e3)), sourceOption()),
                             "gas", List.of(new Slot.Word("critical"),
                                     q("critical", "critical grid voltage", Unit.VOLT, from(-200, 200)), sourceOption())),
                             null))
@@ -115,7 +115,7 @@ final class PropertyTable {
                     .byDefault("none: the model line's parameters are used as written").source(PLAUSIBLE),
             Property.of("gridcurrent", "grid current at a positive grid voltage, for the 3/2-power grid law",
                     q("amps", "grid current", Unit.AMPERE, above(0, 10)), new Slot.Word("at"),
-                    q("volts", "grid voltage", Unit.VOLT, above(0, 100)))
+                    q("volts", "grid voltage", Unit.VOLT, from(0.1, 100)))
                     .byDefault("0.5 mA at 1 V").source("matched to the 2 kOhm grid resistance of Koren's 1996 netlists"),
             Property.of("maxplate", "rated plate dissipation per section", q("plate dissipation", Unit.WATT, above(0, 1e4)))
                     .byDefault("unknown: not checked").source(PLAUSIBLE),
@@ -242,7 +242,13 @@ final class PropertyTable {
             Property.of("phases", "clock phases per machine cycle", whole("number of phases", 1, 8)).byDefault(2)
                     .source(PLAUSIBLE),
             Property.of("period", "machine cycle period (phases share it equally)", q("clock period", Unit.SECOND, above(0, 3600)))
-                    .byDefault(100e-6).source("demo value; " + PLAUSIBLE));
+                    .byDefault(100e-6).source("demo value; " + PLAUSIBLE),
+            Property.of("uses", "a stage the clock generator is built from: N instances of a stage per phase, or once",
+                    whole("instances", 1, 1000000), name("stage", "a stage name", List.of()),
+                    new Slot.Choice("scale", orderedMap("per", List.of(name("unit", "one of phase", List.of("phase"))),
+                            "once", List.of()), null)).many().source(PLAUSIBLE),
+            Property.of("offboard", "the clock generator is not made of tubes and is not counted; optionally why",
+                    new Slot.Optional("because", List.of(text("what it is made of")))).byDefault("counted when `uses` lines state its stages, else left out"));
 
     static final PropertyTable ROM = new PropertyTable("rom", "rom { ... } inside the machine block",
             Property.of("words", "ROM size in words", whole("ROM size in words", 1, 1 << 20)).byDefault(256)
@@ -251,7 +257,12 @@ final class PropertyTable {
                     .byDefault("the data port's width").source("one 64-bit word per lane (the simulator's limit)"),
             Property.of("data", "the top module's input port the ROM drives",
                     name("port", "the top module's input port for ROM data", List.of())),
-            Property.of("offboard", "the ROM is built outside the tube logic").byDefault("offboard"));
+            Property.of("uses", "a stage the ROM's decoding and drivers are built from: N instances of a stage per word or bit or address or line, or once",
+                    whole("instances", 1, 1000000), name("stage", "a stage name", List.of()),
+                    new Slot.Choice("scale", orderedMap("per", List.of(name("unit", "one of word, bit, address, line", List.of("word", "bit", "address", "line"))),
+                            "once", List.of()), null)).many().source(PLAUSIBLE),
+            Property.of("offboard", "the ROM is not made of tubes and is not counted; optionally why",
+                    new Slot.Optional("because", List.of(text("what it is made of")))).byDefault("counted when `uses` lines state its stages, else left out"));
 
     static final PropertyTable PC = new PropertyTable("pc", "pc { ... } inside the machine block",
             Property.of("width", "program counter width in bits", whole("program counter width", 1, 20))
@@ -262,7 +273,12 @@ final class PropertyTable {
                     name("port", "the top module's jump output", List.of())),
             Property.of("target", "the top module's output bus the PC loads",
                     name("port", "the top module's jump-target output", List.of())),
-            Property.of("offboard", "the program counter is built outside the tube logic").byDefault("offboard"));
+            Property.of("uses", "a stage the program counter is built from: N instances of a stage per bit, or once",
+                    whole("instances", 1, 1000000), name("stage", "a stage name", List.of()),
+                    new Slot.Choice("scale", orderedMap("per", List.of(name("unit", "one of bit", List.of("bit"))),
+                            "once", List.of()), null)).many().source(PLAUSIBLE),
+            Property.of("offboard", "the program counter is not made of tubes and is not counted; optionally why",
+                    new Slot.Optional("because", List.of(text("what it is made of")))).byDefault("counted when `uses` lines state its stages, else left out"));
 
     static final PropertyTable MACHINE = new PropertyTable("machine", "machine NAME { ... }",
             Property.of("clock", "the clock").opens(CLOCK),

@@ -24,7 +24,7 @@ public final class LanguageSections {
             Map.entry("relay", "relay"), Map.entry("realize", "realize"), Map.entry("module", "module"),
             Map.entry("machine", "machine"), Map.entry("clock", "clock"), Map.entry("rom", "rom"),
             Map.entry("pc", "pc"), Map.entry("isa", "isa"), Map.entry("latch", "latch-timing"),
-            Map.entry("op", "instruction-meanings"), Map.entry("offboard", "what-offboard-leaves-out"));
+            Map.entry("op", "instruction-meanings"), Map.entry("offboard", "built-blocks-the-clock-the-program-counter-and-the-rom"));
 
     /** Sections for errors in the text itself, before any statement is read. */
     static final String LEXICAL = "lexical-rules";

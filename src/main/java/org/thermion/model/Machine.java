@@ -4,7 +4,8 @@ import java.util.List;
 
 /**
  * An elaborated machine: parts, supplies, the module hierarchy, the netlist, its
- * physical packing into envelopes and heater strings, and its instruction set.
+ * physical packing into envelopes and heater strings, its instruction set, and the built
+ * blocks outside the logic (program counter, ROM decoding, clock generator; {@link BuiltBlock}).
  */
 public record Machine(
         String name,
@@ -24,9 +25,21 @@ public record Machine(
         List<HeaterString> heaterStrings,
         Isa isa,
         int[] gateEnvelope,
-        int[] latchEnvelope) {
+        int[] latchEnvelope,
+        List<BuiltBlock> built) {
+
+    /** A machine without built blocks (program counter, ROM decoding and clock not described). */
+    public Machine(String name, Clock clock, List<TubeType> tubes, List<StageType> stages, List<Rail> rails,
+                   List<HeaterRule> heaterRules, List<SoftStart> softStarts, List<ModuleInstance> modules,
+                   Netlist netlist, Rom rom, ProgramCounter pc, List<Port> inputs, List<Port> outputs,
+                   List<Envelope> envelopes, List<HeaterString> heaterStrings, Isa isa, int[] gateEnvelope,
+                   int[] latchEnvelope) {
+        this(name, clock, tubes, stages, rails, heaterRules, softStarts, modules, netlist, rom, pc, inputs, outputs,
+                envelopes, heaterStrings, isa, gateEnvelope, latchEnvelope, List.of());
+    }
 
     public Machine {
+        built = List.copyOf(built);
         tubes = List.copyOf(tubes);
         stages = List.copyOf(stages);
         rails = List.copyOf(rails);

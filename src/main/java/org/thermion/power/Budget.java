@@ -84,7 +84,7 @@ public final class Budget {
             StageType st = m.stages().get(d.stage());
             used.add(st.name());
             for (int r = 0; r < rails; r++) {
-                if (d.followsNet()) {
+                if (d.followsNet() || d.unsimulated()) {
                     low[d.module()][r] += draw.minAmps(st, r);
                     high[d.module()][r] += draw.maxAmps(st, r);
                 } else {
@@ -96,8 +96,9 @@ public final class Budget {
             }
             double pl = draw.plateWatts(st, false);
             double ph = draw.plateWatts(st, true);
-            plate[d.module()][0] += d.followsNet() ? Math.min(pl, ph) : draw.plateWatts(st, d.fixedHigh());
-            plate[d.module()][1] += d.followsNet() ? Math.max(pl, ph) : draw.plateWatts(st, d.fixedHigh());
+            boolean free = d.followsNet() || d.unsimulated();
+            plate[d.module()][0] += free ? Math.min(pl, ph) : draw.plateWatts(st, d.fixedHigh());
+            plate[d.module()][1] += free ? Math.max(pl, ph) : draw.plateWatts(st, d.fixedHigh());
         }
         HeaterAnalysis nominal = new HeaterAnalysis(m, HeaterAnalysis.nominalVolts(m), law);
         double[] loaded = new double[rails];
@@ -139,6 +140,14 @@ public final class Budget {
         }
         supply = List.copyOf(s);
         findings = List.copyOf(f);
+    }
+
+    /**
+     * What the totals leave out and why: built blocks declared offboard or whose stages are not
+     * stated (program counter, ROM, clock generator), in the machine's order.
+     */
+    public List<String> leftOut() {
+        return m.built().stream().filter(bb -> !bb.counted()).map(org.thermion.model.BuiltBlock::leftOut).toList();
     }
 
     /** The stage figures the budget adds up (computed or declared, per stage). */

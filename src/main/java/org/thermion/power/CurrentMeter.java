@@ -118,9 +118,10 @@ public final class CurrentMeter {
             StageType st = m.stages().get(d.stage());
             if (!d.followsNet()) {
                 for (int r = 0; r < rails; r++) {
-                    base[d.module() * channels + r] += draw.amps(st, r, d.fixedHigh());
+                    base[d.module() * channels + r] += d.unsimulated() ? draw.maxAmps(st, r) : draw.amps(st, r, d.fixedHigh());
                 }
-                base[d.module() * channels + rails] += draw.plateWatts(st, d.fixedHigh());
+                base[d.module() * channels + rails] += d.unsimulated()
+                        ? Math.max(draw.plateWatts(st, false), draw.plateWatts(st, true)) : draw.plateWatts(st, d.fixedHigh());
                 continue;
             }
             int n = 0;

@@ -1,5 +1,6 @@
 package org.thermion.power;
 
+import org.thermion.model.BuiltBlock;
 import org.thermion.model.BypassTrigger;
 import org.thermion.model.Gate;
 import org.thermion.model.Latch;
@@ -42,6 +43,15 @@ public final class DrawingInstances {
                 if (stage >= 0) {
                     out.add(new DrawingInstance(DrawingInstance.Kind.BYPASS, i, stage,
                             m.envelopes().get(t.envelope()).module(), t.envelope(), -1, true));
+                }
+            }
+        }
+        for (int b = 0; b < m.built().size(); b++) {
+            BuiltBlock bb = m.built().get(b);
+            for (BuiltBlock.Instances in : bb.stages()) {
+                for (int i = 0; i < in.count(); i++) {
+                    out.add(new DrawingInstance(DrawingInstance.Kind.BUILT, b, in.stage(), bb.module(), in.envelope(i),
+                            -1, false));
                 }
             }
         }

@@ -52,18 +52,23 @@ class ExamplesTest {
         for (Envelope e : m.envelopes()) {
             tubes.merge(m.tubes().get(e.tube()).name(), 1, Integer::sum);
         }
-        // 12AU7: one per flip-flop (2 sections) and one per lamp driver (both sections) = 3 + 8.
+        // 12AU7: one per flip-flop (2 sections) and one per lamp driver (both sections) = 3 + 8,
+        // and the clock generator: a multivibrator pair (2 sections) and one phase driver (1 section),
+        // each in its own envelope of the clock module = 2.
         // 6AL5: 8 gates x 3 inputs = 24 diode sections, two to an envelope = 12.
-        assertThat(tubes).containsEntry("12AU7", 11).containsEntry("6AL5", 12).hasSize(2);
-        // Heaters: 11 x 12AU7 each across 12.6 V, 12 x 6AL5 in pairs = 6 strings.
-        assertThat(m.heaterStrings()).hasSize(11 + 6);
+        assertThat(tubes).containsEntry("12AU7", 11 + 2).containsEntry("6AL5", 12).hasSize(2);
+        // Heaters: 13 x 12AU7 each across 12.6 V, 12 x 6AL5 in pairs = 6 strings.
+        assertThat(m.heaterStrings()).hasSize(13 + 6);
         assertThat(m.inputs()).extracting(p -> p.name()).containsExactly("code[0]", "code[1]", "code[2]", "load");
     }
 
     @Test
     void demoMachineIsOfTheIntendedSizeAndBindsItsIsa() {
         Machine m = load(Path.of("examples/pumpstation/pumpstation.machine"), new Diagnostics());
-        assertThat(m.envelopes().size()).isBetween(60, 150);
+        // the logic's 135 envelopes, the program counter's and the clock generator's (the ROM is a diode board)
+        assertThat(m.envelopes().size()).isBetween(150, 250);
+        assertThat(m.built()).extracting(b -> b.block() + ":" + b.counted())
+                .containsExactly("pc:true", "rom:false", "clock:true");
         assertThat(m.isa().instructions()).hasSize(16);
         assertThat(m.isa().state()).extracting(s -> s.name())
                 .containsExactly("acc", "carry", "pump", "alarm", "sum", "ready", "s0", "s1", "s2", "s3");

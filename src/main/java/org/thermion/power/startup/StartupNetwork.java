@@ -2,15 +2,15 @@ package org.thermion.power.startup;
 
 import org.thermion.model.BypassTrigger;
 import org.thermion.model.Envelope;
-import org.thermion.model.Gate;
 import org.thermion.model.HeaterRating;
 import org.thermion.model.HeaterString;
-import org.thermion.model.Latch;
 import org.thermion.model.Machine;
 import org.thermion.model.Rail;
 import org.thermion.model.SoftStart;
 import org.thermion.model.StageType;
 import org.thermion.model.TubeType;
+import org.thermion.power.DrawingInstance;
+import org.thermion.power.DrawingInstances;
 import org.thermion.power.StageDraw;
 
 import java.util.ArrayList;
@@ -211,14 +211,9 @@ public final class StartupNetwork {
         for (int e = 0; e < envState.length; e++) {
             envState[e] = envString[e] < 0 ? -1 : groupStates[envString[e]][envPos[e]];
         }
-        for (Gate g : m.netlist().gates()) {
-            if (g.stage() >= 0) {
-                addDraw(m, m.stages().get(g.stage()), g.module(), envState, m.gateEnvelope(g.id()), plate);
-            }
-        }
-        for (Latch l : m.netlist().latches()) {
-            if (l.stage() >= 0) {
-                addDraw(m, m.stages().get(l.stage()), l.module(), envState, m.latchEnvelope(l.id()), plate);
+        for (DrawingInstance d : DrawingInstances.of(m)) {
+            if (d.kind() != DrawingInstance.Kind.BYPASS) { // the bypass thyratron is the relay driver's
+                addDraw(m, m.stages().get(d.stage()), d.module(), envState, d.envelope(), plate);
             }
         }
         NodeLoads[] nodeLoads = new NodeLoads[nodes];
