@@ -67,6 +67,12 @@ public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.H
                     new int[] {w.net(p.net())});
         }
         external(m, w);
+        for (org.thermion.model.BuiltBlock b : m.built()) {
+            if (b.counted() && !b.stages().isEmpty()) {
+                w.problems.add("the " + b.what() + "'s tubes are counted and their heaters wired; its stages are not in "
+                        + "the logic, so their other pins are left open here: wire them from the block's own drawing");
+            }
+        }
         HeaterWiring hw = new HeaterWiring(w);
         hw.wire(new HeaterAnalysis(m));
         for (SoftStart s : m.softStarts()) {

@@ -9,8 +9,9 @@ import java.util.Map;
  * What to do on the chassis to turn one revision of a machine into the next: parts to take out,
  * wires to unsolder, wires that move from one node to another, parts whose value or type changes,
  * parts to fit and wires to add, in the order a builder works. Parts are matched by what they do
- * (their role: {@code plate load of x}), so a part keeps its identity when others come and go;
- * a lead by its part and pin, and a wire by the node it reaches (nodes by name).
+ * (their role: {@code plate load of x}), tubes and sockets by designator, so a part keeps its
+ * identity when others come and go; a lead by its part and pin, a wire by the node it reaches
+ * (nodes by name).
  */
 public record Rewiring(List<Change> changes) {
     public Rewiring {

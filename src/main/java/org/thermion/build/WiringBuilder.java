@@ -91,7 +91,7 @@ final class WiringBuilder {
         }
     }
 
-    /** The stage instances in an envelope's sections, by their output nets ("spare" for an empty one). */
+    /** The stage instances in an envelope's sections, by their output nets (else its module, or "spare sections"). */
     private String holds(Envelope e) {
         java.util.SortedSet<String> names = new java.util.TreeSet<>();
         for (Envelope.Slot s : e.slots()) {
@@ -100,7 +100,12 @@ final class WiringBuilder {
                 names.add(m.netlist().netName(out));
             }
         }
-        return names.isEmpty() ? "spare sections" : String.join(", ", names);
+        if (names.isEmpty()) {
+            // a block built outside the logic (program counter, ROM decoding, clock) has no gates in its sections
+            String path = m.modules().get(e.module()).path();
+            return path.isEmpty() ? "spare sections" : "the stages of " + path;
+        }
+        return String.join(", ", names);
     }
 
     /** {@code role}, made unique among the parts (a part's role is its key in the designations file). */

@@ -113,7 +113,7 @@ final class LevelsReport {
             rep.text(lines);
         }
         Table drives = new Table("drives", "lamp and coil drivers")
-                .column("net", "net", TEXT)
+                .column("net", "net", TEXT, "the net the stage drives; for a soft start's bypass relay, the soft start")
                 .column("stage", "stage", TEXT)
                 .column("load", "load", TEXT, "lamp or coil")
                 .column("on", "on", AMPS, "load current with the tube conducting, nominal")
@@ -124,7 +124,7 @@ final class LevelsReport {
                 .column("dropout", "drop-out", AMPS, "a coil's drop-out current (none: not stated)");
         for (LoadDrive d : analysis.drives()) {
             drives.row(d.name(), d.stage(), d.kind() == LoadDrive.Kind.LAMP ? "lamp" : "coil", v(d.onAmps()),
-                    v(d.onWorstAmps()), d.ratedAmps(), v(d.offAmps()), v(d.offWorstAmps()),
+                    v(d.onWorstAmps()), v(d.ratedAmps()), v(d.offAmps()), v(d.offWorstAmps()),
                     d.dropoutAmps() > 0 ? d.dropoutAmps() : NONE);
         }
         rep.text("");

@@ -3,7 +3,9 @@ package org.thermion.cli;
 import org.thermion.build.DiodeMatrix;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
+import org.thermion.model.BuiltBlock;
 import org.thermion.model.Machine;
+import org.thermion.model.StageType;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
@@ -79,10 +81,47 @@ final class SheetsRom extends SheetsDocument {
         if (used < m.rom().words()) {
             notes.add("word lines " + wordLine(used) + " to " + wordLine(m.rom().words() - 1) + " hold no diodes");
         }
-        notes.add(m.rom().offBoard() ? "the ROM is offboard: its decoding is not counted in the machine's tubes"
-                : "the ROM's decoding is counted with the machine's tubes");
+        BuiltBlock block = m.built().stream().filter(b -> b.block().equals("rom")).findFirst().orElse(null);
+        if (block == null || !block.counted()) {
+            notes.add("address decoding: " + (block == null ? "not described" : block.leftOut()));
+            r.field("decoding_tubes", 0);
+        } else {
+            Table dec = decoding(m, block);
+            r.field("decoding_tubes", tubes(block).size()).table(dec);
+        }
         r.text(notes);
         return r;
+    }
+
+    /** The envelopes the block's stages are packed into. */
+    private static java.util.Set<Integer> tubes(BuiltBlock block) {
+        java.util.Set<Integer> envelopes = new java.util.TreeSet<>();
+        for (BuiltBlock.Instances in : block.stages()) {
+            for (int e : in.envelopes()) {
+                envelopes.add(e);
+            }
+        }
+        return envelopes;
+    }
+
+    /** The ROM's address decoding and drivers as its block states them: each stage, its instances and the tubes holding them. */
+    private Table decoding(Machine m, BuiltBlock block) {
+        java.util.Map<Integer, String> tubeRef = new java.util.HashMap<>();
+        for (org.thermion.build.Wiring.Socket s : documents(m).wiring().sockets()) {
+            tubeRef.put(s.envelope(), s.tubeRef());
+        }
+        Table t = new Table("decoding", "Address decoding and drivers (the rom block's stages)")
+                .column("stage", "stage", TEXT).column("tube", "tube", TEXT).column("instances", "instances", COUNT)
+                .column("tubes", "in tubes", TEXT);
+        for (BuiltBlock.Instances in : block.stages()) {
+            StageType st = m.stages().get(in.stage());
+            java.util.Set<String> refs = new java.util.LinkedHashSet<>();
+            for (int e : in.envelopes()) {
+                refs.add(tubeRef.getOrDefault(e, "envelope " + (e + 1)));
+            }
+            t.row(st.name(), m.tubes().get(st.tube()).name(), in.count(), String.join(" ", refs));
+        }
+        return t;
     }
 
     /** Word line by word line, one column per bit line from the highest bit down, x where a diode sits. */

@@ -83,7 +83,7 @@ final class PropertyTable {
                             "koren", List.of(new Slot.AnyOrder(List.of(koren("mu", above(0, 1e3)), koren("ex", from(1, 2)),
                                     koren("kg1"), koren("kg2"), koren("kp"), koren("kvb"), sourceOption()))),
                             "diode", List.of(q("amps", "diode current", Unit.AMPERE, above(0, 100)), new Slot.Word("at"),
-                                    q("volts", "diode voltage", Unit.VOLT, above(0, 1e3)), sourceOption()),
+                                    q("volts", "diode voltage", Unit.VOLT, from(0.1, 1e3)), sourceOption()),
                             "gas", List.of(new Slot.Word("critical"),
                                     q("critical", "critical grid voltage", Unit.VOLT, from(-200, 200)), sourceOption())),
                             null))
@@ -115,7 +115,7 @@ final class PropertyTable {
                     .byDefault("none: the model line's parameters are used as written").source(PLAUSIBLE),
             Property.of("gridcurrent", "grid current at a positive grid voltage, for the 3/2-power grid law",
                     q("amps", "grid current", Unit.AMPERE, above(0, 10)), new Slot.Word("at"),
-                    q("volts", "grid voltage", Unit.VOLT, above(0, 100)))
+                    q("volts", "grid voltage", Unit.VOLT, from(0.1, 100)))
                     .byDefault("0.5 mA at 1 V").source("matched to the 2 kOhm grid resistance of Koren's 1996 netlists"),
             Property.of("maxplate", "rated plate dissipation per section", q("plate dissipation", Unit.WATT, above(0, 1e4)))
                     .byDefault("unknown: not checked").source(PLAUSIBLE),

@@ -77,7 +77,7 @@ final class TubeCurvesReader {
             return true;
         }
         PropLine at = b.has("fit") ? b.line("fit") : b.line("model");
-        diags.error(at.prop().key().span(), "tube '" + t.name() + "': " + why,
+        diags.error(at.prop().key().span(), "tube '" + t.name() + "': its model cannot be built: " + why,
                 b.has("fit") ? "check the point lines against the tube's sheet (a unit, a sign, a decimal point), "
                         + "give more points, or fit fewer parameters" : "check the model line's parameters");
         return false;

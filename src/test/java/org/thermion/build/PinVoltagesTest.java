@@ -121,4 +121,30 @@ class PinVoltagesTest {
         assertThat(rest.warnings()).isEmpty();
         assertThat(set.warnings()).isEmpty();
     }
+
+    @Test
+    void onRandomMachinesEveryWiredNodeStandsBetweenTheRailsOrSaysWhyNot() {
+        for (long seed = 1; seed <= 12; seed++) {
+            String text = org.thermion.faults.RandomMachines.text(seed);
+            Machine r = BuildMachines.text(text);
+            BuildDocuments d = BuildDocuments.of(r);
+            double lowest = r.rails().stream().mapToDouble(org.thermion.model.Rail::volts).min().orElse(0);
+            double highest = r.rails().stream().mapToDouble(org.thermion.model.Rail::volts).max().orElse(0);
+            List<PinVoltages.State> states = new java.util.ArrayList<>(List.of(ChartStates.atRest(r, null)));
+            states.addAll(ChartStates.afterSteps(r, null, Step.random(new java.util.Random(seed), r.inputs().size(), 3, 2)));
+            for (PinVoltages.State state : states) {
+                PinVoltages.Chart c = new PinVoltages(d).at(state);
+                for (int n = 0; n < d.wiring().nodes().size(); n++) {
+                    double v = c.volts(n);
+                    String what = "seed " + seed + ", " + state.name() + ", node " + d.wiring().nodes().get(n).name();
+                    if (Double.isNaN(v)) {
+                        assertThat(c.note(n)).as(what).isNotBlank();
+                    } else {
+                        // a passive circuit between the rails cannot leave them (ground included)
+                        assertThat(v).as(what).isBetween(Math.min(0, lowest) - 1e-6, Math.max(0, highest) + 1e-6);
+                    }
+                }
+            }
+        }
+    }
 }

@@ -110,6 +110,7 @@ class StageSolverTest {
         DcSolver.Solution s = DcSolver.solve(b.build());
         assertThat(s.volts()).isNull();
         assertThat(s.failure()).contains("'grid'").contains("floating grid");
+        assertThat(s.fix()).contains("give every grid a resistor to a rail");
     }
 
     @Test
@@ -118,6 +119,7 @@ class StageSolverTest {
         DcResult r = new StageSolver(weak).solve(relayStage(), new double[] {0}, false, List.of(), Corner.NOMINAL);
         assertThat(r).isInstanceOf(NoDcSolution.class);
         assertThat(((NoDcSolution) r).reason()).contains("rail bplus cannot supply the load").contains("limit 1.00 mA");
+        assertThat(((NoDcSolution) r).fix()).contains("raise rail bplus's current limit");
     }
 
     @Test
