@@ -6,7 +6,6 @@ import org.thermion.model.HeaterRating;
 import org.thermion.model.HeaterString;
 import org.thermion.model.Machine;
 import org.thermion.model.Rail;
-import org.thermion.model.RailDraw;
 import org.thermion.model.SoftStart;
 import org.thermion.model.StageType;
 import org.thermion.model.TubeType;
@@ -21,7 +20,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-// About 400 lines: one reduction whose grouping tables (strings, rails, plates) are built together and read by index.
+// About 400 lines: one reduction whose grouping tables (strings, nodes, plates, soft starts) are built together and read by index.
 /**
  * The machine's supplies reduced to what the power-up transient needs: calibrated heater models,
  * heater strings grouped by identity (identical strings on one rail share one temperature
@@ -63,7 +62,7 @@ public final class StartupNetwork {
     final boolean[] groupMixed;
 
     /** Per rail, the loads on its bus (behind its whole-rail soft starts, ahead of its partial ones). */
-    final Loads[] railLoads;
+    final NodeLoads[] railLoads;
 
     // soft starts
     final List<Soft> softs;
@@ -76,7 +75,7 @@ public final class StartupNetwork {
      */
     record Soft(String name, int rail, double declaredOhms, double ratedWatts, double delay, int thyState,
                 int fromRail, double branchSiemens, double branchVolts, double contactAmps,
-                double operate, RelayDriverCheck check, Loads covered, int branchSoft) {
+                double operate, RelayDriverCheck check, NodeLoads covered, int branchSoft) {
         boolean thyratron() {
             return thyState >= 0;
         }
@@ -86,15 +85,6 @@ public final class StartupNetwork {
         }
     }
 
-    /**
-     * The loads at one node of a rail: heater string groups, plate and bias conductances tied to the
-     * heater state that warms their cathodes, and those with no heater (always drawing).
-     */
-    record Loads(int[] groups, int[] plateState, double[] plateSiemens, double alwaysSiemens) {
-        boolean any() {
-            return groups.length > 0 || plateState.length > 0 || alwaysSiemens > 0;
-        }
-    }
 
     private StartupNetwork(Machine m, ThermalAssumptions a, DrawMode mode, boolean share, ModelAdjustment adjust) {
         this.adjust = adjust;
@@ -106,7 +96,7 @@ public final class StartupNetwork {
         List<String> noteList = new ArrayList<>();
 
         // Heater models per tube type and rating.
-        checkFinite(m);
+        FiniteInputs.check(m);
         Map<String, Integer> modelIndex = new LinkedHashMap<>();
         List<HeaterModel> ml = new ArrayList<>();
         // Distinct strings.
@@ -205,7 +195,7 @@ public final class StartupNetwork {
             statePosition[s] = st.get(s)[2];
             stateShunt[s] = shunts.get(s);
         }
-        // Loads per node: nodes 0..nr-1 are the rails' buses, node nr + k the far side of soft start k.
+        // NodeLoads per node: nodes 0..nr-1 are the rails' buses, node nr + k the far side of soft start k.
         int nr = m.rails().size();
         int nodes = nr + m.softStarts().size();
         List<List<Integer>> rg = new ArrayList<>();
@@ -226,7 +216,7 @@ public final class StartupNetwork {
                 addDraw(m, m.stages().get(d.stage()), d.module(), envState, d.envelope(), plate);
             }
         }
-        Loads[] nodeLoads = new Loads[nodes];
+        NodeLoads[] nodeLoads = new NodeLoads[nodes];
         for (int n = 0; n < nodes; n++) {
             Map<Integer, Double> p = plate.get(n);
             Double always = p.remove(-1);
@@ -235,7 +225,7 @@ public final class StartupNetwork {
             for (int i = 0; i < keys.length; i++) {
                 siemens[i] = p.get(keys[i]);
             }
-            nodeLoads[n] = new Loads(rg.get(n).stream().mapToInt(Integer::intValue).toArray(), keys, siemens,
+            nodeLoads[n] = new NodeLoads(rg.get(n).stream().mapToInt(Integer::intValue).toArray(), keys, siemens,
                     always == null ? 0 : always);
         }
         railLoads = Arrays.copyOf(nodeLoads, nr);
@@ -282,41 +272,6 @@ public final class StartupNetwork {
         }
         softs = List.copyOf(sl);
         notes = List.copyOf(noteList);
-    }
-
-    /** Every value the transient uses must be a finite number: an infinity leaves no solution. */
-    private static void checkFinite(Machine m) {
-        List<String> bad = new ArrayList<>();
-        for (Rail r : m.rails()) {
-            if (!Double.isFinite(r.volts()) || !Double.isFinite(r.sourceOhms()) || Double.isNaN(r.limitAmps())) {
-                bad.add("rail " + r.name() + " (voltage " + r.volts() + " V, source " + r.sourceOhms() + " ohm, limit "
-                        + r.limitAmps() + " A)");
-            }
-        }
-        for (SoftStart s : m.softStarts()) {
-            if (!Double.isFinite(s.resistorOhms())) {
-                bad.add("soft start " + s.name() + " (resistor " + s.resistorOhms() + " ohm)");
-            }
-        }
-        for (StageType st : m.stages()) {
-            for (List<RailDraw> ds : List.of(st.drawLow(), st.drawHigh(), st.drawAlways())) {
-                for (RailDraw d : ds) {
-                    if (!Double.isFinite(d.amps())) {
-                        bad.add("stage " + st.name() + " (draw " + d.amps() + " A from rail "
-                                + m.rails().get(d.rail()).name() + ")");
-                    }
-                }
-            }
-        }
-        for (HeaterString hs : m.heaterStrings()) {
-            if (!Double.isFinite(hs.dropOhms())) {
-                bad.add("a heater string on rail " + m.rails().get(hs.rail()).name() + " (dropping resistor "
-                        + hs.dropOhms() + " ohm)");
-            }
-        }
-        if (!bad.isEmpty()) {
-            throw new TransientFailure("the power-up model needs finite values; not finite: " + String.join("; ", bad));
-        }
     }
 
     /** {@code base} with one more soft start (a copy: the network stays immutable). */

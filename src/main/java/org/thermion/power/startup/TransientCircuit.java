@@ -67,7 +67,7 @@ final class TransientCircuit {
      * The run's state of a node's loads; its thyratron branches are those fed from rail {@code rail}'s
      * bus, or (rail -1) from behind soft start {@code soft}.
      */
-    private LoadNode node(StartupNetwork.Loads loads, int rail, int soft) {
+    private LoadNode node(NodeLoads loads, int rail, int soft) {
         StringState[] on = Arrays.stream(loads.groups()).mapToObj(g -> strings[g]).toArray(StringState[]::new);
         HeaterState[] plates = Arrays.stream(loads.plateState()).mapToObj(s -> heaters[s]).toArray(HeaterState[]::new);
         SoftStartState[] branches = Arrays.stream(softs).filter(s -> s.soft.thyratron()

@@ -85,4 +85,26 @@ class PartialSoftStartTest {
         // The resistor carries the back board's current only: 111.1 uS x 47.9547 V = 5.328 mA, 28.4 mW.
         assertThat(s.peakWatts()).isCloseTo(5.328e-3 * 5.328e-3 * 1000, within(28.4e-3 * 0.02));
     }
+
+    @Test
+    void aSoftStartCoveringEveryLoadOfItsRailIsTheWholeRailSoftStart() {
+        // 8 inverters, two strings of four 6AU6 on the heat rail, bypassed by a 2D21 warming on its own rail:
+        // covering every heater string puts nothing on the bus ahead of the resistor, the same circuit.
+        String whole = StartupMachines.invertersWithThyratron(8, "50 ohm");
+        String covered = whole.replace("  resistor 2 ohm rated 150 W", "  resistor 2 ohm rated 150 W\n  covers 6AU6");
+        assertThat(covered).isNotEqualTo(whole);
+        PowerUpResult a = PowerUpSolver.solve(StartupMachines.elaborate(whole), PowerUpOptions.defaults());
+        PowerUpResult b = PowerUpSolver.solve(StartupMachines.elaborate(covered), PowerUpOptions.defaults());
+        RailTransient ha = rail(a, "heat");
+        RailTransient hb = rail(b, "heat");
+        assertThat(hb.switchOnPeak()).isCloseTo(ha.switchOnPeak(), within(1e-9 * ha.switchOnPeak()));
+        assertThat(hb.bypassTime()).isCloseTo(ha.bypassTime(), within(1e-6));
+        assertThat(hb.bypassPeak()).isCloseTo(ha.bypassPeak(), within(1e-6 * ha.bypassPeak()));
+        assertThat(hb.finalAmps()).isCloseTo(ha.finalAmps(), within(1e-6 * ha.finalAmps()));
+        SoftStartResult sa = a.softStarts().get(0);
+        SoftStartResult sb = b.softStarts().get(0);
+        assertThat(sb.joules()).isCloseTo(sa.joules(), within(1e-6 * sa.joules()));
+        assertThat(sb.makeAmps()).isCloseTo(sa.makeAmps(), within(1e-6 * sa.makeAmps()));
+        assertThat(sb.covers()).containsExactly("6AU6");
+    }
 }
