@@ -220,6 +220,7 @@ public final class BenchSuite {
         double t = best(() -> cases[0] = new Verifier(demo, Verifier.Options.defaults()).run().cases(), quick ? 1 : 3);
         rows.add(BenchRow.info("demo", "verify: " + cases[0] + " cases", t, "s"));
         rows.add(BenchRow.info("demo", "verify: cases/s", cases[0] / t, "/s"));
+        VerifyBench.threadRow(rows, "demo", demo, quick);
     }
 
     /** Power-up solve times on the demo: 30 s of switch-on, and a 50-point soft-start resistor sweep. */

@@ -69,6 +69,8 @@ public final class FaultBench {
         }
         long[] rom = m.rom() == null ? null : assemble(m, program, null);
         demoRows(rows, m, rom, quick);
+        progress.accept("measuring verify on the demo, 1 and 2 threads");
+        VerifyBench.threadRow(rows, "demo", m, quick);
         progress.accept("measuring fault simulation and plan generation on the synthetic 10^4-stage machine");
         SyntheticMachine s = SyntheticMachine.ofSize(10_000);
         Machine big = elaborate(Path.of(s.name() + ".machine"), s.text());
@@ -139,7 +141,8 @@ public final class FaultBench {
     }
 
 
-    private static double best(Runnable r, int runs) {
+    /** Best wall time of {@code runs} runs, no warm-up (the caller warms), in seconds. */
+    static double best(Runnable r, int runs) {
         double b = Double.MAX_VALUE;
         for (int i = 0; i < runs; i++) {
             long t0 = System.nanoTime();

@@ -32,7 +32,7 @@ final class DefaultRun {
                 return ExitCodes.INTERNAL;
             }
             try {
-                return UiCommand.show(s, program.getFileName().toString());
+                return UiCommand.show(s, program.getFileName().toString(), null);
             } catch (IOException e) {
                 err.println("error: the terminal failed: " + e.getMessage());
                 err.flush();

@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.cli.report.Numbers;
 import org.thermion.faults.Diagnosis;
 import org.thermion.faults.ObservedLamp;
 import org.thermion.lang.Diagnostics;
@@ -72,7 +73,7 @@ final class DiagnoseObservations {
                 Field at = rec.size() > header.size() ? rec.get(header.size()) : rec.get(rec.size() - 1);
                 Span s = rec.size() > header.size() ? at.span() : at.endSpan();
                 int n = header.size() - 1;
-                diags.error(s, "expected " + header.size() + " fields (the step and " + n + (n == 1 ? " lamp" : " lamps")
+                diags.error(s, "expected " + header.size() + " fields (the step and " + Numbers.count(n, "lamp")
                         + ", as in the header), found " + rec.size(), null);
                 continue;
             }
@@ -154,7 +155,7 @@ final class DiagnoseObservations {
             return -1;
         }
         if (s > steps) {
-            diags.error(f.span(), "step " + s + " is beyond the plan, which has " + steps + (steps == 1 ? " step" : " steps"),
+            diags.error(f.span(), "step " + s + " is beyond the plan, which has " + Numbers.count(steps, "step"),
                     planHint);
             return -1;
         }

@@ -90,11 +90,20 @@ final class PlanReport {
                 tail.add(Numbers.count(above, "group") + " still "
                         + (above == 1 ? "holds" : "hold") + " more than " + PlanInputs.MOST_IN_GROUP + " faults: no "
                         + "switch setting clocked up to " + Effort.DEFAULT.maxCycles() + " cycles after the plan tells "
-                        + (above == 1 ? "its" : "their") + " faults apart; they look alike at every lamp with this program");
+                        + (above == 1 ? "its" : "their") + " faults apart; " + alike());
             }
         }
         r.text(tail);
         return r;
+    }
+
+    // Why such groups stay: the program a ROM machine runs is fixed, the switches are all a switch-fed one has.
+    private String alike() {
+        if (program != null) {
+            return "they look alike at every lamp while this program runs (a second program that runs the"
+                    + " instructions and bit addresses this one leaves out would tell them apart)";
+        }
+        return "they look alike at every lamp for every setting of the switches";
     }
 
     private Table stepTable() {

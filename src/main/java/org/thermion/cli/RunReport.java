@@ -57,7 +57,7 @@ final class RunReport {
         List<String> head = new ArrayList<>();
         head.add("run " + machine.name() + ": " + (program == null ? "no program" : "program " + program) + ", "
                 + level + " level, init " + init);
-        head.add(r.cycles() + (r.cycles() == 1 ? " cycle" : " cycles") + "; stopped: " + r.stop());
+        head.add(Numbers.count(r.cycles(), "cycle") + "; stopped: " + r.stop());
         head.add("machine time " + Numbers.si(machineSeconds(), ReportUnit.SECONDS) + " (a cycle is "
                 + Numbers.si(machine.clock().periodSeconds(), ReportUnit.SECONDS) + " on the real machine)");
         if (!init.equals("zero")) {
@@ -113,7 +113,7 @@ final class RunReport {
         } else {
             rep.table(unknowns);
         }
-        Table state = new Table("state", "final state after " + r.cycles() + (r.cycles() == 1 ? " cycle" : " cycles"))
+        Table state = new Table("state", "final state after " + Numbers.count(r.cycles(), "cycle"))
                 .column("name", "state", TEXT)
                 .column("value", "value", TEXT);
         for (int i = 0; i < r.stateNames().size(); i++) {

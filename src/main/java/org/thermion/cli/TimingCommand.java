@@ -8,7 +8,7 @@ import org.thermion.circuit.MachineCircuits;
 import org.thermion.circuit.Tolerances;
 import org.thermion.model.Machine;
 import org.thermion.timing.DelayCalculator;
-import org.thermion.timing.NetLabels;
+import org.thermion.model.NetLabels;
 import org.thermion.timing.PathAdvice;
 import org.thermion.timing.RaceChecks;
 import org.thermion.timing.InstanceDelay;
@@ -237,9 +237,9 @@ final class TimingCommand extends ReportCommand {
         if (c == null) {
             rep.text("no path constrains the clock");
         } else {
-            rep.text(String.format(Locale.ROOT, "critical path: into %s on phase %d, %s + set-up %s over %d phase width%s",
-                            c.endpoint(), c.phase(), Numbers.si(c.arrival(), SECONDS), Numbers.si(c.setup(), SECONDS), c.span(),
-                            c.span() == 1 ? "" : "s"),
+            rep.text(String.format(Locale.ROOT, "critical path: into %s on phase %d, %s + set-up %s over %s",
+                            c.endpoint(), c.phase(), Numbers.si(c.arrival(), SECONDS), Numbers.si(c.setup(), SECONDS),
+                            Numbers.count(c.span(), "phase width")),
                     String.format(Locale.ROOT, "shortest safe period %s: highest safe clock rate %s nominal, %s at the "
                                     + "slow corner", Numbers.si(r.minPeriodSeconds(), SECONDS),
                             Numbers.si(r.maxClockHertz(), HERTZ), Numbers.si(slow.maxClockHertz(), HERTZ)));

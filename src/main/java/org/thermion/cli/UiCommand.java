@@ -57,11 +57,12 @@ public final class UiCommand extends CommandBase {
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
-        Session session = open(machine, program, inputs, init, decodeNet, err);
+        UiReload reload = new UiReload(machine, program, inputs, init, decodeNet);
+        Session session = reload.first(err);
         if (session == null) {
             return ExitCodes.BAD_INPUT;
         }
-        return show(session, program == null ? "word from switches" : program.getFileName().toString());
+        return show(session, program == null ? "word from switches" : program.getFileName().toString(), reload);
     }
 
     /** Null when this process runs on a terminal, else the reason it does not. */
@@ -82,6 +83,12 @@ public final class UiCommand extends CommandBase {
     /** Loads the machine and program into a session, printing diagnostics; null on bad input. */
     static Session open(Path machineFile, Path programFile, Path stimulusFile, String initText, String decodeName,
                         PrintWriter err) {
+        return open(machineFile, programFile, stimulusFile, initText, decodeName, err, new MachineLoader());
+    }
+
+    /** As above, reading through {@code loader} (whose sources then name every file read). */
+    static Session open(Path machineFile, Path programFile, Path stimulusFile, String initText, String decodeName,
+                        PrintWriter err, MachineLoader loader) {
         InitMode mode;
         try {
             mode = InitMode.parse(initText);
@@ -90,7 +97,6 @@ public final class UiCommand extends CommandBase {
             err.flush();
             return null;
         }
-        MachineLoader loader = new MachineLoader();
         Machine m = loader.load(machineFile, err, false);
         if (m == null) {
             err.flush();
@@ -117,8 +123,8 @@ public final class UiCommand extends CommandBase {
         return new Session(m, asm, decodeName, mode, in.stimulus());
     }
 
-    /** Runs the screen until quit; the terminal is restored however the loop ends. */
-    static int show(Session session, String programName) throws IOException {
+    /** Runs the screen until quit, reloading when a file {@code reload} read is saved; the terminal is restored however the loop ends. */
+    static int show(Session session, String programName, UiReload reload) throws IOException {
         Terminal terminal = new DefaultTerminalFactory(System.out, System.in, StandardCharsets.UTF_8)
                 .setForceTextTerminal(true)
                 .setUnixTerminalCtrlCBehaviour(UnixLikeTerminal.CtrlCBehaviour.TRAP)
@@ -126,7 +132,11 @@ public final class UiCommand extends CommandBase {
         Screen screen = new TerminalScreen(terminal);
         screen.startScreen();
         try {
-            new TerminalUi(screen, session, programName, new PowerUpView(session.machine())).loop();
+            TerminalUi ui = new TerminalUi(screen, session, programName, new PowerUpView(session.machine()));
+            if (reload != null) {
+                ui.reloadOnSave(reload);
+            }
+            ui.loop();
         } finally {
             screen.stopScreen();
         }

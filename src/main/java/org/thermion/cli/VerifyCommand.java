@@ -59,6 +59,11 @@ final class VerifyCommand extends ReportCommand {
     @Option(names = "--max", paramLabel = "N", description = "Counterexamples to print (default: ${DEFAULT-VALUE}).")
     int max = 10;
 
+    @Option(names = "--threads", paramLabel = "N",
+            description = "Instructions checked at once, each on its own simulator; the report is the same for any N"
+                    + " (default: the processors, ${DEFAULT-VALUE}).")
+    int threads = Runtime.getRuntime().availableProcessors();
+
     @Mixin
     ProgressOptions progressOptions = new ProgressOptions();
 
@@ -66,8 +71,8 @@ final class VerifyCommand extends ReportCommand {
     public Integer call() {
         PrintWriter out = out();
         PrintWriter err = err();
-        if (mutate < 0 || samples < 64 || max < 0) {
-            return badInput("--mutate and --max take a count >= 0, --samples at least 64");
+        if (mutate < 0 || samples < 64 || max < 0 || threads < 1) {
+            return badInput("--mutate and --max take a count >= 0, --samples at least 64, --threads at least 1");
         }
         Machine m = new MachineLoader().load(file, err, false);
         if (m != null && m.modules().stream().anyMatch(mi -> !mi.built())) {
@@ -85,7 +90,7 @@ final class VerifyCommand extends ReportCommand {
         Verifier.Options opt = Verifier.Options.defaults().withDecode(decode, allTargets ? 16 : 4)
                 .withSampling(spec.commandLine().getParseResult().hasMatchedOption("--samples")
                         ? Math.min(Verifier.EXHAUSTIVE_LIMIT, samples) : Verifier.EXHAUSTIVE_LIMIT, samples, seed)
-                .withProgress(mutate > 0 ? null : progress::update);
+                .withProgress(mutate > 0 ? null : progress::update).withThreads(threads);
         VerifyReport r;
         try {
             r = new Verifier(m, opt).run();

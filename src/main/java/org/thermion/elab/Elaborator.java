@@ -200,7 +200,7 @@ public final class Elaborator {
                 }
             }
         }
-        NotBuilt notBuilt = NotBuilt.resolve(mb.notBuilt, ex.tree.modules, diags);
+        NotBuilt notBuilt = NotBuilt.resolve(mb.notBuilt, mb.notBuiltHeld, ex.tree.modules, diags);
         if (notBuilt.any() && !asDescribed) {
             notBuilt.apply(nb, inputs, outputs);
         }
@@ -354,7 +354,8 @@ public final class Elaborator {
         return new Machine(mb.name, new Clock(mb.phases, mb.period), List.copyOf(parts.tubes), List.copyOf(parts.stages),
                 List.copyOf(parts.rails), List.copyOf(packer.rules), List.copyOf(softStarts), List.copyOf(modules), netlist,
                 rom, pc, List.copyOf(inputs), List.copyOf(outputs), packer.levelized(order),
-                List.copyOf(packer.strings), isa, gateEnvOrdered, latchEnvelope, built);
+                List.copyOf(packer.strings), isa, gateEnvOrdered, latchEnvelope, built,
+                Radixes.of(mb, inputs, outputs, diags));
     }
 
     /** A bus port becomes one machine bit per line: {@code code[0]}, {@code code[1]}, ... */

@@ -32,6 +32,11 @@ final class MachineBlock {
     final List<Value> outputs = new ArrayList<>();
     /** Module instances not built yet (their outputs become switches). */
     final List<Value> notBuilt = new ArrayList<>();
+    /** Per {@link #notBuilt} entry: the level its outputs are held at, or -1 for switches. */
+    final List<Integer> notBuiltHeld = new ArrayList<>();
+    /** Buses and the radix the screen writes them in (16, 10, 8 or 2), as declared. */
+    final List<Value> radixBuses = new ArrayList<>();
+    final List<Integer> radixes = new ArrayList<>();
     Span span = Span.none();
 
     static MachineBlock read(Prop p, Diagnostics diags) {
@@ -82,7 +87,18 @@ final class MachineBlock {
             m.outputs.addAll(l.tokens("ports"));
         }
         for (PropLine l : b.lines("notbuilt")) {
-            m.notBuilt.addAll(l.tokens("instances"));
+            List<Value> names = l.tokens("instances");
+            m.notBuilt.addAll(names);
+            int held = l.has("held") ? (int) l.num("value") : -1;
+            names.forEach(n -> m.notBuiltHeld.add(held));
+        }
+        for (PropLine l : b.lines("radix")) {
+            String r = l.word("radix");
+            int base = "decimal".equals(r) ? 10 : "octal".equals(r) ? 8 : "binary".equals(r) ? 2 : 16;
+            for (Value v : l.tokens("buses")) {
+                m.radixBuses.add(v);
+                m.radixes.add(base);
+            }
         }
         return m;
     }

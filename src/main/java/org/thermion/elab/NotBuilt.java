@@ -2,6 +2,8 @@ package org.thermion.elab;
 
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.ast.Value;
+import org.thermion.lang.Span;
+import org.thermion.model.GateFn;
 import org.thermion.model.ModuleInstance;
 import org.thermion.model.Port;
 
@@ -16,25 +18,36 @@ import java.util.Set;
  * Takes the module instances a machine block marks {@code notbuilt} out of the logic, so every
  * command sees the half-built machine on the bench: their stages and latches go (no tubes, no
  * heater, no faults), and each net they drove that built logic (or a machine output) still reads
- * becomes a machine input named as the net, a switch the builder sets by hand.
+ * becomes a machine input named as the net, a switch the builder sets by hand, or, for an
+ * instance declared {@code held 0} or {@code held 1}, a wire tied to that level.
  */
 final class NotBuilt {
     /** Instance ids not built (whole subtrees), and the switches that replace their outputs. */
     final Set<Integer> modules = new HashSet<>();
     final List<Port> switches = new ArrayList<>();
+    /** Instance id to the level its outputs are held at (0 or 1); instances not here become switches. */
+    final Map<Integer, Integer> held = new HashMap<>();
 
     private NotBuilt() {
     }
 
-    /** Resolves the names against the instance tree; unknown names and the top are errors. */
-    static NotBuilt resolve(List<Value> names, List<ModuleInstance> tree, Diagnostics diags) {
+    /**
+     * Resolves the names against the instance tree; unknown names and the top are errors.
+     * {@code levels} gives per name the level its outputs are held at, or -1 for switches.
+     */
+    static NotBuilt resolve(List<Value> names, List<Integer> levels, List<ModuleInstance> tree, Diagnostics diags) {
         NotBuilt nb = new NotBuilt();
-        for (Value v : names) {
+        for (int k = 0; k < names.size(); k++) {
+            Value v = names.get(k);
             String path = v.text();
+            int level = k < levels.size() ? levels.get(k) : -1;
             boolean found = false;
             for (ModuleInstance mi : tree) {
                 if (mi.parent() >= 0 && (mi.path().equals(path) || mi.path().startsWith(path + "."))) {
                     nb.modules.add(mi.id());
+                    if (level >= 0) {
+                        nb.held.put(mi.id(), level);
+                    }
                     found |= mi.path().equals(path);
                 }
             }
@@ -60,6 +73,7 @@ final class NotBuilt {
         Set<Integer> outputNets = new HashSet<>();
         outputs.forEach(p -> outputNets.add(p.net()));
         List<Integer> orphaned = new ArrayList<>();
+        Map<Integer, Integer> level = new HashMap<>();
         List<NetBuilder.GateB> gates = new ArrayList<>();
         for (NetBuilder.GateB g : net.gates) {
             if (modules.contains(g.module)) {
@@ -67,6 +81,7 @@ final class NotBuilt {
                     net.reads.set(i, net.reads.get(i) - 1);
                 }
                 orphaned.add(g.out);
+                level.put(g.out, held.getOrDefault(g.module, -1));
             } else {
                 net.driver.set(g.out, gates.size());
                 gates.add(g);
@@ -80,6 +95,7 @@ final class NotBuilt {
                     net.reads.set(l.enable(), net.reads.get(l.enable()) - 1);
                 }
                 orphaned.add(l.out());
+                level.put(l.out(), held.getOrDefault(l.module(), -1));
             } else {
                 net.driver.set(l.out(), -10 - latches.size());
                 latches.add(l);
@@ -94,7 +110,15 @@ final class NotBuilt {
             if (seen.put(n, true) != null) {
                 continue;
             }
-            if (net.reads.get(n) > 0 || outputNets.contains(n)) {
+            if ((net.reads.get(n) > 0 || outputNets.contains(n)) && level.get(n) >= 0) {
+                // Tied on the bench: a free wire from the constant (a flip-flop's complement the other way).
+                Integer source = net.complementSource.get(n);
+                int at = source != null && level.containsKey(source) ? 1 - level.get(n) : level.get(n);
+                int constant = at == 1 ? org.thermion.model.Netlist.CONST1 : org.thermion.model.Netlist.CONST0;
+                net.read(constant);
+                net.gates.add(new NetBuilder.GateB(GateFn.BUF, new int[] {constant}, n, -1, net.netModule.get(n), Span.none()));
+                net.driver.set(n, net.gates.size() - 1);
+            } else if (net.reads.get(n) > 0 || outputNets.contains(n)) {
                 net.driver.set(n, NetBuilder.EXTERNAL);
                 Port p = new Port(net.names.get(n), n);
                 inputs.add(p);

@@ -289,7 +289,13 @@ final class PropertyTable {
                     new Slot.Names("ports", "input ports")).many(),
             Property.of("outputs", "top-module outputs shown and logged", new Slot.Names("ports", "output ports")).many(),
             Property.of("notbuilt", "module instances not built yet: the outputs they would drive become switches (machine"
-                    + " inputs named as the nets)", new Slot.Names("instances", "instance names")).many());
+                    + " inputs named as the nets), or with `held 0` / `held 1` stay at that level (tied on the bench)",
+                    new Slot.Names("instances", "instance names"),
+                    new Slot.Optional("held", List.of(whole("the level an unbuilt module's outputs are held at", 0, 1))))
+                    .many(),
+            Property.of("radix", "how the screen writes these input or output buses: hex, decimal, octal or binary",
+                    name("radix", "radix", List.of("hex", "decimal", "octal", "binary")),
+                    new Slot.Names("buses", "bus names")).many().byDefault("hex"));
 
     private static final Slot.AnyOrder HEATER_OPTIONS = new Slot.AnyOrder(List.of(
             new Slot.Optional("at", List.of(q("volts", "heater wiring voltage", Unit.VOLT, above(0, 200)))),

@@ -22,6 +22,9 @@ public final class PlanGenerator {
     private final Effort effort;
     private final FaultCircuit c;
     private final List<boolean[]> settings;
+    /** How many more states the faulty machine alone may visit than a pair search. */
+    static final int ALONE_FACTOR = 16;
+
     private final boolean allSettings;
     private final boolean sequential;
 
@@ -49,6 +52,8 @@ public final class PlanGenerator {
         Outcome[] outcome = new Outcome[all.size()];
         boolean[] observable = Observability.of(c);
         StateSearch search = new StateSearch(sim, settings, allSettings, effort.searchStates());
+        // One machine's states are far fewer than pairs: the faulty machine alone may search further.
+        StateSearch deep = new StateSearch(sim, settings, allSettings, effort.searchStates() * ALONE_FACTOR);
         StateSearch.Result[] proof = new StateSearch.Result[all.size()];
         // One search of the good machine: a fault whose wires never hold the other known value
         // anywhere reachable leaves every known lamp as it is (three-valued logic is monotone).
@@ -93,6 +98,22 @@ public final class PlanGenerator {
                 }
             }
             sim.run(jobs);
+            // Pairs of states may be too many to visit; the faulty machine alone is often few:
+            // if none of its reachable states shows a known lamp, no step can tell it.
+            List<java.util.concurrent.Callable<Void>> alone = new ArrayList<>();
+            for (int i : open) {
+                if (proof[i].end() == StateSearch.End.BUDGET && proof[i].blurred()) {
+                    Fault f = all.get(i);
+                    alone.add(() -> {
+                        if (deep.lampsNeverKnown(f, sim.loaded(List.of(f), 0, 1), 0)) {
+                            proof[i] = new StateSearch.Result(StateSearch.End.EXHAUSTED, List.of(), proof[i].provoked(), true,
+                                    proof[i].visited());
+                        }
+                        return null;
+                    });
+                }
+            }
+            sim.run(alone);
             int next = -1;
             for (int i : open) {
                 if (proof[i].end() == StateSearch.End.EXHAUSTED) {

@@ -57,12 +57,43 @@ final class StateSearch {
         return r.end() == End.EXHAUSTED;
     }
 
+    /**
+     * The faulty machine alone from power-up (lane {@code fl} of {@code faulty}): true when every
+     * reachable state was visited and no lamp was ever known in it, at any phase, under any
+     * setting. A lamp tells a fault only where it is known in both machines, so such a fault can
+     * never be detected: its machine never leaves the unknown power-up state where a lamp shows.
+     */
+    boolean lampsNeverKnown(Fault fault, LaneMachine faulty, int fl) {
+        FaultCircuit c = sim.circuit();
+        long[] seen0 = new long[c.slotCount];
+        long[] seen1 = new long[c.slotCount];
+        Result r = search(fault, faulty, fl, faulty, fl, seen0, seen1, true);
+        if (r.end() != End.EXHAUSTED) {
+            return false;
+        }
+        for (ObservedLamp l : c.lamps()) {
+            if ((seen0[l.slot()] | seen1[l.slot()]) != 0L) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     private Result search(Fault fault, LaneMachine good, int gl, LaneMachine faulty, int fl, long[] seen0, long[] seen1) {
+        return search(fault, good, gl, faulty, fl, seen0, seen1, false);
+    }
+
+    /** {@code faultyAlone}: both machines carry the fault (one machine's reach; nothing is ever found). */
+    private Result search(Fault fault, LaneMachine good, int gl, LaneMachine faulty, int fl, long[] seen0, long[] seen1,
+                          boolean faultyAlone) {
         FaultCircuit c = sim.circuit();
         LaneMachine g = sim.machine();
         LaneMachine b = sim.machine();
         for (Force f : fault.forces()) {
             b.force(f.slot(), f.value(), -1L);
+            if (faultyAlone) {
+                g.force(f.slot(), f.value(), -1L);
+            }
         }
         int kw = g.keyWords();
         List<long[]> nodes = new ArrayList<>();
@@ -120,6 +151,10 @@ final class StateSearch {
                 } while (g.nextPhase() != 1);
                 g.settle();
                 b.settle();
+                if (faultyAlone) {
+                    // The lamps as the cycle leaves them count too.
+                    see(g, live, seen0, seen1);
+                }
                 provoked |= (provoked(fault, g) & live) != 0L;
                 long det = differs(c, g, b) & live;
                 blurred |= (blurs(c, g, b) & live) != 0L;

@@ -1,6 +1,7 @@
 package org.thermion.model;
 
 import java.util.List;
+import java.util.Map;
 
 /**
  * An elaborated machine: parts, supplies, the module hierarchy, the netlist, its
@@ -26,7 +27,8 @@ public record Machine(
         Isa isa,
         int[] gateEnvelope,
         int[] latchEnvelope,
-        List<BuiltBlock> built) {
+        List<BuiltBlock> built,
+        Map<String, Integer> radixes) {
 
     /** A machine without built blocks (program counter, ROM decoding and clock not described). */
     public Machine(String name, Clock clock, List<TubeType> tubes, List<StageType> stages, List<Rail> rails,
@@ -38,8 +40,24 @@ public record Machine(
                 envelopes, heaterStrings, isa, gateEnvelope, latchEnvelope, List.of());
     }
 
+    /** A machine whose buses are all written in hexadecimal. */
+    public Machine(String name, Clock clock, List<TubeType> tubes, List<StageType> stages, List<Rail> rails,
+                   List<HeaterRule> heaterRules, List<SoftStart> softStarts, List<ModuleInstance> modules,
+                   Netlist netlist, Rom rom, ProgramCounter pc, List<Port> inputs, List<Port> outputs,
+                   List<Envelope> envelopes, List<HeaterString> heaterStrings, Isa isa, int[] gateEnvelope,
+                   int[] latchEnvelope, List<BuiltBlock> built) {
+        this(name, clock, tubes, stages, rails, heaterRules, softStarts, modules, netlist, rom, pc, inputs, outputs,
+                envelopes, heaterStrings, isa, gateEnvelope, latchEnvelope, built, Map.of());
+    }
+
+    /** The radix (16, 10, 8 or 2) the machine block declares for an input or output bus; 16 when it declares none. */
+    public int radix(String bus) {
+        return radixes.getOrDefault(bus, 16);
+    }
+
     public Machine {
         built = List.copyOf(built);
+        radixes = Map.copyOf(radixes);
         tubes = List.copyOf(tubes);
         stages = List.copyOf(stages);
         rails = List.copyOf(rails);

@@ -1,5 +1,6 @@
 package org.thermion.timing;
 
+import org.thermion.model.NetLabels;
 import org.thermion.circuit.Corner;
 import org.thermion.circuit.DiodeGate;
 import org.thermion.circuit.FlipFlop;

@@ -1,5 +1,6 @@
 package org.thermion.timing;
 
+import org.thermion.model.NetLabels;
 import org.thermion.model.Gate;
 import org.thermion.model.Latch;
 import org.thermion.model.Machine;

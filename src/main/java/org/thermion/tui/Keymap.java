@@ -54,6 +54,7 @@ final class Keymap {
                 case '+': case '=': return of(Command.WORD_UP);
                 case '-': return of(Command.WORD_DOWN);
                 case 'z': return of(Command.WORD_CLEAR);
+                case 'v': return of(Command.BUS_BITS);
                 case '?': case 'h': return of(Command.HELP);
                 case 'q': return of(Command.QUIT);
                 default: return null;
@@ -112,6 +113,7 @@ final class Keymap {
             String key = i < INPUT_KEYS.length() ? String.valueOf(INPUT_KEYS.charAt(i)) : "-";
             h.add(new HelpLine(key, "flip switch " + inputNames.get(i)));
         }
+        h.add(new HelpLine("v", "buses as numbers, or every bit on its own"));
         h.add(new HelpLine("b", "set or clear a breakpoint on the cursor line"));
         h.add(new HelpLine("B", "clear every breakpoint"));
         h.add(new HelpLine("Up Down  k j", "move the listing cursor"));

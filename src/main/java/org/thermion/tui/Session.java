@@ -51,6 +51,8 @@ public final class Session {
     private final CurrentMeter meter;
     private boolean running;
     private Stop stop;
+    /** Cycles run before a reload, so the count goes on across it. */
+    private long cycleBase;
 
     /**
      * A session on lane 0 of a new simulator. {@code stimulus} (null for none) sets inputs
@@ -115,6 +117,7 @@ public final class Session {
     /** Latches to their power-up state, PC 0, cycle 0, meter cleared; switches stay where they are. */
     public void reset() {
         running = false;
+        cycleBase = 0;
         sim.reset(init);
         meter.reset();
         driver.start();
@@ -230,6 +233,36 @@ public final class Session {
         Arrays.fill(breakpoints, false);
     }
 
+    // ---- carrying state over from the session before a reload (see Carry) ---------------
+
+    /** Sets latch {@code index} (netlist order) to a known level without running a phase. */
+    void carryLatch(int index, boolean on) {
+        sim.setLatch(index, on ? -1L : 0L);
+    }
+
+    void carryPc(int address) {
+        sim.setPc(LANE, address);
+    }
+
+    void carryCycles(long cycles) {
+        cycleBase = cycles;
+    }
+
+    /** Sets a switch where the old session had it. */
+    void carryInput(int index, boolean on) {
+        driver.setInput(index, on);
+    }
+
+    /** After the carries: the logic settles on them, the meter starts again from here. */
+    void carried(String why) {
+        sim.settle();
+        meter.reset();
+        meter.sample(sim, LANE);
+        Arrays.fill(everKnown, false);
+        lostKnowledge();
+        stop = new Stop(Stop.Reason.RELOADED, why);
+    }
+
     // ---- what the screen reads ------------------------------------------------------
 
     public Machine machine() {
@@ -287,7 +320,12 @@ public final class Session {
     }
 
     public long cycle() {
-        return sim.cycle();
+        return cycleBase + sim.cycle();
+    }
+
+    /** Cycles counted before the last reload; the simulator's own count starts after them. */
+    long cycleBase() {
+        return cycleBase;
     }
 
     public int nextPhase() {
@@ -297,6 +335,11 @@ public final class Session {
     /** The listing line of an address, or -1 when the program has no word there. */
     public int listingIndex(int address) {
         return address >= 0 && address < listingIndexOfAddress.length ? listingIndexOfAddress[address] : -1;
+    }
+
+    /** How the bus {@code name} (an input or output bus) is written: hexadecimal unless the description declares a radix. */
+    public Radix radix(String name) {
+        return Radix.of(machine.radix(name));
     }
 
     /** True when the instruction word comes from switches (no ROM or PC): the UI shows a switch panel for it. */

@@ -139,37 +139,69 @@ final class StatusLines {
         return "(no program word)";
     }
 
-    static void keys(Canvas c, int cols, int row, int inputs, View v, boolean panelsHidden) {
+    /** A hint on the key line: the key, what it does, and how long it stays when room runs out (higher stays longer). */
+    private record Hint(String key, String word, int keep) {
+        int width() {
+            return key.length() + word.length() + 3;
+        }
+    }
+
+    /**
+     * The key line. When it does not fit, hints give way lowest {@code keep} first (the
+     * rightmost of equals first), so help, quit, the switches (and a switch-fed machine's word
+     * keys) and the panel key while panels are hidden stay at 80 columns; the rest keep their order.
+     */
+    static void keys(Canvas c, int cols, int row, int inputs, boolean switchFed, View v, boolean panelsHidden) {
         c.text(0, row, " ".repeat(cols), Palette.TEXT, Palette.BACKGROUND);
-        String[][] hints;
+        List<Hint> hints = new java.util.ArrayList<>();
         if (v.mode == View.Mode.POWER_UP) {
-            hints = new String[][] {{"[ ]", "rail"}, {"w", "back"}, {"?", "help"}, {"q", "quit"}};
+            hints.add(new Hint("[ ]", "rail", 5));
+            hints.add(new Hint("w", "back", 8));
         } else if (v.mode == View.Mode.BENCH) {
-            hints = new String[][] {{"Space", "lit/dark"}, {"Enter", "record"}, {"d", "back"}, {"Up/Down", "lamp"},
-                {"Left/Right", "step"}, {"x", "not looked"}, {"e", "as expected"}, {"?", "help"}, {"q", "quit"}};
+            hints.add(new Hint("Space", "lit/dark", 8));
+            hints.add(new Hint("Enter", "record", 8));
+            hints.add(new Hint("d", "back", 7));
+            hints.add(new Hint("Up/Down", "lamp", 6));
+            hints.add(new Hint("Left/Right", "step", 4));
+            hints.add(new Hint("x", "not looked", 3));
+            hints.add(new Hint("e", "as expected", 5));
         } else {
             String sw = inputs == 0 ? "" : inputs == 1 ? "1" : inputs <= 10 ? "1-" + Keymap.INPUT_KEYS.charAt(inputs - 1) : "1-0 !-)";
-            hints = new String[][] {{"p", "phase"}, {"c", "cycle"}, {"Space", "run/pause"}, {"r", "reset"},
-                {sw, "switches"}, {"b", "breakpoint"}, {"t", "pace"}, {"w", "power-up"}, {"Tab", "panels"}, {"?", "help"}, {"q", "quit"}};
-        }
-        // Help and quit always stay, and the panel key while panels are hidden; the others give way from the right.
-        int keep = panelsHidden ? 3 : 2;
-        int total = 1;
-        for (String[] h : hints) {
-            if (!h[0].isEmpty()) {
-                total += h[0].length() + h[1].length() + 3;
+            hints.add(new Hint("p", "phase", 4));
+            hints.add(new Hint("c", "cycle", 7));
+            hints.add(new Hint("Space", "run/pause", 6));
+            hints.add(new Hint("r", "reset", 5));
+            if (!sw.isEmpty()) {
+                hints.add(new Hint(sw, "switches", 8));
             }
+            if (switchFed) {
+                hints.add(new Hint("+ -", "word", 8));
+            }
+            hints.add(new Hint("b", "breakpoint", 2));
+            hints.add(new Hint("t", "pace", 1));
+            hints.add(new Hint("w", "power-up", 3));
+            hints.add(new Hint("Tab", "panels", panelsHidden ? 9 : 0));
         }
-        List<String[]> shown = new java.util.ArrayList<>(List.of(hints));
-        shown.removeIf(h -> h[0].isEmpty());
-        while (total > cols && shown.size() > keep) {
-            String[] h = shown.remove(shown.size() - keep - 1);
-            total -= h[0].length() + h[1].length() + 3;
+        hints.add(new Hint("?", "help", 10));
+        hints.add(new Hint("q", "quit", 10));
+        int total = 1;
+        for (Hint h : hints) {
+            total += h.width();
+        }
+        while (total > cols && hints.size() > 2) {
+            Hint drop = hints.get(0);
+            for (Hint h : hints) {
+                if (h.keep() <= drop.keep()) {
+                    drop = h;
+                }
+            }
+            hints.remove(drop);
+            total -= drop.width();
         }
         int x = 1;
-        for (String[] h : shown) {
-            x = c.text(x, row, h[0], Palette.KEY);
-            x = c.text(x + 1, row, h[1], Palette.DIM) + 2;
+        for (Hint h : hints) {
+            x = c.text(x, row, h.key(), Palette.KEY);
+            x = c.text(x + 1, row, h.word(), Palette.DIM) + 2;
         }
     }
 }

@@ -4,7 +4,7 @@ package org.thermion.tui;
 public record Stop(Reason reason, String detail) {
 
     /** The kinds of stop the session knows. */
-    public enum Reason { RESET, STEPPED, PAUSED, BREAKPOINT, UNKNOWN }
+    public enum Reason { RESET, STEPPED, PAUSED, BREAKPOINT, UNKNOWN, RELOADED }
 
     /** The phrase the status line shows. */
     public String text() {

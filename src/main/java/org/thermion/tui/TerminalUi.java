@@ -25,34 +25,87 @@ public final class TerminalUi {
     static final long BATCH = 2_000;
 
     private final Screen screen;
-    private final Session session;
     private final View view = new View();
     private final String program;
-    private final PowerUpView powerUp;
+    private final Frame frame = new Frame(new Cells());
+    // The session and what is made from its machine: all replaced together when a reload succeeds.
+    private Session session;
+    private PowerUpView powerUp;
     /** The bench mode, made when first opened (its plan takes a while on a large machine). */
     private BenchView bench;
-    private final List<Keymap.HelpLine> help;
-    private final Frame frame = new Frame(new Cells());
+    private List<Keymap.HelpLine> help;
+    private Pace pace;
     private boolean quit;
     private long rateCycles;
     private long rateSince = System.nanoTime();
-    private final Pace pace;
+    /** Reads the files again after a save; null when the UI does not watch them. */
+    private Reloader reloader;
+    private FileStamps stamps;
+    private long lastPoll;
 
     public TerminalUi(Screen screen, Session session, String program, PowerUpView powerUp) {
         this.screen = screen;
-        this.session = session;
         this.program = program;
-        this.powerUp = powerUp;
-        List<String> names = new ArrayList<>();
-        for (Port p : session.machine().inputs()) {
-            names.add(p.name());
-        }
-        this.help = Keymap.help(names, session.switchFed());
-        this.pace = new Pace(session.machine().clock().periodSeconds());
+        use(session, powerUp);
         int first = session.listingIndex(session.pc());
         view.cursor = Math.max(0, first);
         // Open at the instruction, not at the file's header comments: a few lines of context above it.
         view.top = Math.max(0, first - 3);
+    }
+
+    private void use(Session s, PowerUpView p) {
+        this.session = s;
+        this.powerUp = p;
+        this.bench = null;
+        List<String> names = new ArrayList<>();
+        for (Port port : s.machine().inputs()) {
+            names.add(port.name());
+        }
+        this.help = Keymap.help(names, s.switchFed());
+        this.pace = new Pace(s.machine().clock().periodSeconds());
+    }
+
+    /** Watches the files {@code r} read and reloads when one is saved (polled between frames). */
+    public TerminalUi reloadOnSave(Reloader r) {
+        this.reloader = r;
+        this.stamps = new FileStamps(r.files());
+        return this;
+    }
+
+    /** Polls the watched files at most every {@link FileStamps#POLL_MILLIS}; reloads after a save. */
+    void pollFiles(long nowNanos) {
+        if (reloader == null || nowNanos - lastPoll < FileStamps.POLL_MILLIS * 1_000_000L) {
+            return;
+        }
+        lastPoll = nowNanos;
+        java.nio.file.Path saved = stamps.poll();
+        if (saved != null) {
+            reload(saved.getFileName().toString());
+        }
+    }
+
+    /**
+     * Reads the files again. Good files: a new session carrying the old one's state where the
+     * machine still fits, and a notice of what changed. Bad files: the old session runs on and
+     * the notice shows the located errors.
+     */
+    void reload(String savedName) {
+        Reloader.Result r = reloader.load();
+        stamps = new FileStamps(r.files());
+        if (r instanceof Reloader.Failed f) {
+            view.notice = new Notice(savedName + " has errors: the machine before the save runs on", f.lines(), true);
+            view.message = "fix the error and save again";
+            return;
+        }
+        Session fresh = ((Reloader.Loaded) r).session();
+        boolean wasRunning = session.running();
+        List<String> lines = Carry.over(session, fresh, view);
+        if (view.mode == View.Mode.BENCH) {
+            view.mode = View.Mode.MAIN;
+        }
+        use(fresh, new PowerUpView(fresh.machine()));
+        view.notice = new Notice("reloaded after " + savedName + " was saved", lines, false);
+        view.message = wasRunning ? "the reload stopped the run; Space runs on" : "";
     }
 
     /** Reads keys, runs and draws until quit. The caller owns starting and stopping the screen. */
@@ -68,6 +121,7 @@ public final class TerminalUi {
                 break;
             }
             runFor(RUN_NANOS);
+            pollFiles(System.nanoTime());
             draw();
             long left = FRAME_NANOS - (System.nanoTime() - start);
             if (left > 0) {
@@ -117,6 +171,11 @@ public final class TerminalUi {
         return quit;
     }
 
+    /** The session on screen (a new one after each good reload). */
+    Session session() {
+        return session;
+    }
+
     View view() {
         return view;
     }
@@ -140,6 +199,13 @@ public final class TerminalUi {
     /** Acts on one key. */
     public void handle(KeyStroke stroke) {
         Key key = Keymap.resolve(stroke, session.machine().inputs().size());
+        if (view.notice != null) {
+            // The notice closes on any key, and the key still does its work (Esc only closes).
+            view.notice = null;
+            if (key != null && key.command() == Command.CLOSE) {
+                return;
+            }
+        }
         if (view.help) {
             boolean turn = stroke.getKeyType() == KeyType.PageDown
                     || stroke.getKeyType() == KeyType.Character && stroke.getCharacter() == ' ';
@@ -244,6 +310,10 @@ public final class TerminalUi {
                     bench().start();
                 }
             }
+            case BUS_BITS -> {
+                view.bits = !view.bits;
+                view.message = view.bits ? "every bus bit on its own row" : "buses as numbers";
+            }
             case NEXT_RAIL -> view.rail++;
             case PREVIOUS_RAIL -> view.rail--;
             case HELP -> {
@@ -293,12 +363,12 @@ public final class TerminalUi {
             StatusLines.title(c, cols, session, program, null, view);
             bench().draw(c, new Rect(0, 1, cols, rows - 3));
             StatusLines.status(c, cols, rows - 2, session, view);
-            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, false);
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), session.switchFed(), view, false);
         } else if (view.mode == View.Mode.POWER_UP) {
             StatusLines.title(c, cols, session, program, null, view);
             powerUp.draw(c, new Rect(0, 1, cols, rows - 3), view);
             StatusLines.status(c, cols, rows - 2, session, view);
-            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, !plan.hidden().isEmpty());
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), session.switchFed(), view, !plan.hidden().isEmpty());
         } else {
             StatusLines.title(c, cols, session, program, plan, view);
             if (session.switchFed()) {
@@ -314,13 +384,16 @@ public final class TerminalUi {
                         "no decode nets of the name given were found in the top module");
             }
             if (plan.shows(Panel.IO)) {
-                IoPanel.draw(c, plan.rect(Panel.IO), session);
+                IoPanel.draw(c, plan.rect(Panel.IO), session, view);
             }
             if (plan.shows(Panel.POWER)) {
                 PowerPanel.draw(c, plan.rect(Panel.POWER), session);
             }
             StatusLines.status(c, cols, rows - 2, session, view);
-            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), view, !plan.hidden().isEmpty());
+            StatusLines.keys(c, cols, rows - 1, session.machine().inputs().size(), session.switchFed(), view, !plan.hidden().isEmpty());
+        }
+        if (view.notice != null && !view.help && !plan.tooSmall()) {
+            view.notice.draw(c, cols, rows);
         }
         if (view.help && !plan.tooSmall()) {
             HelpOverlay.draw(c, cols, rows, help, view.helpPage);
@@ -349,7 +422,7 @@ public final class TerminalUi {
             case DECODE:
                 return LampGrid.height(decodeNames(), width);
             case IO:
-                return IoPanel.height(session);
+                return IoPanel.height(session, view);
             case POWER:
                 return PowerPanel.height(session);
             default:

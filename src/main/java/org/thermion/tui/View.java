@@ -23,4 +23,8 @@ final class View {
     /** Runs keep to the machine's declared clock instead of going flat out. */
     boolean machineSpeed;
     String message = "";
+    /** Buses shown bit by bit (v) instead of as one number each. */
+    boolean bits;
+    /** What a reload said (changes and what was kept, or the saved files' errors); null when closed. */
+    Notice notice;
 }

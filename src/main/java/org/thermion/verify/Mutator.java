@@ -202,7 +202,7 @@ public final class Mutator {
         Machine m = machine;
         return new Machine(m.name(), m.clock(), m.tubes(), m.stages(), m.rails(), m.heaterRules(), m.softStarts(),
                 m.modules(), mutated, m.rom(), m.pc(), m.inputs(), m.outputs(), m.envelopes(), m.heaterStrings(), m.isa(),
-                envelope.stream().mapToInt(Integer::intValue).toArray(), m.latchEnvelope(), m.built());
+                envelope.stream().mapToInt(Integer::intValue).toArray(), m.latchEnvelope(), m.built(), m.radixes());
     }
 
     private static int addNet(List<String> names, List<Integer> modules, String name, int module) {

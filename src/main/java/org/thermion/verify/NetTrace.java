@@ -3,6 +3,7 @@ package org.thermion.verify;
 import org.thermion.model.Gate;
 import org.thermion.model.Machine;
 import org.thermion.model.ModuleInstance;
+import org.thermion.model.NetLabels;
 import org.thermion.model.Netlist;
 
 import java.util.ArrayList;
@@ -18,12 +19,15 @@ final class NetTrace {
     private final int maxNets;
     // Per net: the gate driving it, or -1.
     private final int[] driver;
+    /** Generated nets ("u.$4") shown as the expression that computes them and its file:line. */
+    private final NetLabels labels;
 
     /** @param maxNets nets listed per counterexample (the trace lists three times as many gates) */
     NetTrace(Machine machine, int maxNets) {
         this.machine = machine;
         this.maxNets = maxNets;
         Netlist nl = machine.netlist();
+        this.labels = new NetLabels(nl);
         this.driver = new int[nl.netCount()];
         java.util.Arrays.fill(driver, -1);
         for (Gate g : nl.gates()) {
@@ -56,14 +60,27 @@ final class NetTrace {
             Gate g = nl.gates().get(driver[n]);
             StringBuilder ins = new StringBuilder();
             for (int i : g.inputs()) {
-                ins.append(ins.length() == 0 ? "" : " ").append(nl.netName(i)).append('=').append(b01(bit(at[i], lane)));
+                ins.append(ins.length() == 0 ? "" : " ").append(name(i, false)).append('=').append(b01(bit(at[i], lane)));
                 todo.add(new int[]{i, g.stage() < 0 ? e[1] : e[1] + 1});
             }
             String fn = g.stage() < 0 ? (g.fn() == org.thermion.model.GateFn.NOT ? "complement" : "wire")
                     : g.fn().name().toLowerCase(Locale.ROOT);
-            out.add(new TraceLine(e[1], nl.netName(n), module(nl.netModule(n)), fn, ins.toString(), bit(at[n], lane)));
+            out.add(new TraceLine(e[1], name(n, true), module(nl.netModule(n)), fn, ins.toString(), bit(at[n], lane)));
         }
         return List.copyOf(out);
+    }
+
+    /**
+     * A net as the builder wrote it: its name, or for a net the elaborator made ("u.$4") the
+     * expression in brackets, with the file:line of its statement where {@code place} asks.
+     */
+    private String name(int n, boolean place) {
+        Netlist nl = machine.netlist();
+        if (!nl.isGenerated(n)) {
+            return nl.netName(n);
+        }
+        String where = nl.netPlace(n);
+        return "[" + labels.expression(n, 2) + "]" + (place && where != null ? " (" + where + ")" : "");
     }
 
     /** Nets in the fan-in of {@code pins}, back to latches, inputs and ROM data. */
@@ -113,7 +130,7 @@ final class NetTrace {
                 boolean va = bit(a.atPhase[p][n], la);
                 boolean vb = bit(b.atPhase[p][n], lb);
                 if (va != vb) {
-                    out.add(new NetDiff(n, nl.netName(n), module(nl.netModule(n)), p, va, vb));
+                    out.add(new NetDiff(n, name(n, true), module(nl.netModule(n)), p, va, vb));
                     if (out.size() >= maxNets) {
                         break;
                     }

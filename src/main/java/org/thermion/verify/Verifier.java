@@ -59,29 +59,35 @@ public final class Verifier {
      * @param reference     the unmutated machine to compare nets with, or null
      * @param maxNets       nets listed per counterexample
      * @param exhaustiveLimit beyond this many cases the check samples
+     * @param threads       instructions checked at once (each thread its own simulator); the report is the same for any count
      */
     public record Options(int allTargetBits, long sampleCases, long seed, String decodeName, boolean stopAtFirst,
-                          Machine reference, int maxNets, Progress progress, long exhaustiveLimit) {
+                          Machine reference, int maxNets, Progress progress, long exhaustiveLimit, int threads) {
         public static Options defaults() {
-            return new Options(4, 1L << 22, 1, "line", false, null, 8, null, EXHAUSTIVE_LIMIT);
+            return new Options(4, 1L << 22, 1, "line", false, null, 8, null, EXHAUSTIVE_LIMIT, 1);
+        }
+
+        public Options withThreads(int n) {
+            return new Options(allTargetBits, sampleCases, seed, decodeName, stopAtFirst, reference, maxNets, progress,
+                    exhaustiveLimit, Math.max(1, n));
         }
 
         public Options withReference(Machine ref, boolean stop) {
-            return new Options(allTargetBits, sampleCases, seed, decodeName, stop, ref, maxNets, progress, exhaustiveLimit);
+            return new Options(allTargetBits, sampleCases, seed, decodeName, stop, ref, maxNets, progress, exhaustiveLimit, threads);
         }
 
         public Options withProgress(Progress p) {
             return new Options(allTargetBits, sampleCases, seed, decodeName, stopAtFirst, reference, maxNets, p,
-                    exhaustiveLimit);
+                    exhaustiveLimit, threads);
         }
 
         public Options withSampling(long limit, long samples, long newSeed) {
-            return new Options(allTargetBits, samples, newSeed, decodeName, stopAtFirst, reference, maxNets, progress, limit);
+            return new Options(allTargetBits, samples, newSeed, decodeName, stopAtFirst, reference, maxNets, progress, limit, threads);
         }
 
         public Options withDecode(String name, int targetBits) {
             return new Options(targetBits, sampleCases, seed, name, stopAtFirst, reference, maxNets, progress,
-                    exhaustiveLimit);
+                    exhaustiveLimit, threads);
         }
     }
 
@@ -108,7 +114,7 @@ public final class Verifier {
         }
         this.opt = options;
         this.logic = new BatchRun(machine);
-        int pcMask = machine.pc() == null ? 0 : (1 << machine.pc().width()) - 1;
+        int pcMask = pcMask();
         for (Instruction ins : isa.instructions()) {
             plans.add(OperandPlan.of(isa, ins, options.allTargetBits()));
         }
@@ -140,36 +146,34 @@ public final class Verifier {
             total = perInstruction * plans.size();
         }
         total *= rounds;
+        int units = plans.size() * rounds;
+        Unit[] results = new Unit[units];
+        Progress progress = opt.progress() == null ? null : new SharedProgress(opt.progress(), total);
+        boolean exh = exhaustive;
+        long per = perInstruction;
+        if (opt.threads() <= 1 || opt.stopAtFirst() || units == 1) {
+            // In order, on this thread's simulator; a fault-seeding run stops at the first instruction that shows it.
+            for (int k = 0; k < units; k++) {
+                results[k] = unit(k, exh, per, logic, items, decodeCheck, progress);
+                if (opt.stopAtFirst() && results[k].failed()) {
+                    break;
+                }
+            }
+        } else {
+            inParallel(results, exh, per, progress);
+        }
         Map<Long, ItemComparison.Group> groups = new LinkedHashMap<>();
         DecodeCheck.State[] decode = new DecodeCheck.State[plans.size()];
         DecodeCheck.State[] skipped = new DecodeCheck.State[plans.size()];
         long done = 0;
-        outer:
-        for (int k = 0; k < plans.size() * rounds; k++) {
-            // The second round runs every case again with the decoder inhibited: the skipped instruction.
-            boolean inhibited = k >= plans.size();
-            int ik = k % plans.size();
-            DecodeCheck.State[] into = inhibited ? skipped : decode;
-            into[ik] = new DecodeCheck.State();
-            long count = exhaustive ? cases.casesOf(ik) : perInstruction;
-            for (long c0 = 0; c0 < count; c0 += 64) {
-                Batch b = exhaustive ? cases.exhaustive(ik, c0, count) : cases.sample(ik, c0);
-                b.inhibited = inhibited;
-                BatchRun.Result r = logic.run(b, false);
-                items.compare(ik, b, r, groups);
-                if (inhibited) {
-                    decodeCheck.checkInhibited(into[ik], b);
-                } else {
-                    decodeCheck.check(into[ik], b, plans.get(ik).instruction().body().isEmpty());
-                }
-                done += Long.bitCount(b.valid);
-                if (opt.progress() != null) {
-                    opt.progress().update(done, total);
-                }
-                if (opt.stopAtFirst() && (!groups.isEmpty() || into[ik].problem != null)) {
-                    break outer;
-                }
+        // Merged in instruction order: the report is the same for any number of threads.
+        for (int k = 0; k < units; k++) {
+            if (results[k] == null) {
+                break;
             }
+            (k >= plans.size() ? skipped : decode)[k % plans.size()] = results[k].decode;
+            groups.putAll(results[k].groups);
+            done += results[k].done;
         }
         List<DecodeVerdict> lines = new ArrayList<>(decodeCheck.verdicts(decode));
         lines.addAll(decodeCheck.inhibitedVerdicts(skipped));
@@ -184,6 +188,106 @@ public final class Verifier {
         }
         return new VerifyReport(machine.name(), done, exhaustive, opt.seed(), List.copyOf(planText), opt.decodeName(),
                 lines, List.copyOf(ces), notes());
+    }
+
+    /** What one instruction (or its skipped round) showed. */
+    private static final class Unit {
+        final Map<Long, ItemComparison.Group> groups = new LinkedHashMap<>();
+        final DecodeCheck.State decode = new DecodeCheck.State();
+        long done;
+
+        boolean failed() {
+            return !groups.isEmpty() || decode.problem != null;
+        }
+    }
+
+    /**
+     * Unit {@code k}: every batch of instruction {@code k % plans} (the second round runs every
+     * case again with the decoder inhibited: the skipped instruction), on the given simulator.
+     */
+    private Unit unit(int k, boolean exhaustive, long perInstruction, BatchRun run, ItemComparison compare,
+                      DecodeCheck decodeLines, Progress progress) {
+        boolean inhibited = k >= plans.size();
+        int ik = k % plans.size();
+        Unit u = new Unit();
+        long count = exhaustive ? cases.casesOf(ik) : perInstruction;
+        for (long c0 = 0; c0 < count; c0 += 64) {
+            Batch b = exhaustive ? cases.exhaustive(ik, c0, count) : cases.sample(ik, c0);
+            b.inhibited = inhibited;
+            BatchRun.Result r = run.run(b, false);
+            compare.compare(ik, b, r, u.groups);
+            if (inhibited) {
+                decodeLines.checkInhibited(u.decode, b);
+            } else {
+                decodeLines.check(u.decode, b, plans.get(ik).instruction().body().isEmpty());
+            }
+            int n = Long.bitCount(b.valid);
+            u.done += n;
+            if (progress != null) {
+                progress.update(n, 0);
+            }
+            if (opt.stopAtFirst() && u.failed()) {
+                break;
+            }
+        }
+        return u;
+    }
+
+    // Each thread takes the next unit and runs it on its own simulator.
+    private void inParallel(Unit[] results, boolean exhaustive, long perInstruction, Progress progress) {
+        int threads = Math.min(opt.threads(), results.length);
+        java.util.concurrent.atomic.AtomicInteger next = new java.util.concurrent.atomic.AtomicInteger();
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "verify");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            List<java.util.concurrent.Future<?>> running = new ArrayList<>();
+            for (int t = 0; t < threads; t++) {
+                running.add(pool.submit(() -> {
+                    BatchRun run = new BatchRun(machine);
+                    ItemComparison compare = new ItemComparison(isa, plans, pcMask());
+                    DecodeCheck decodeLines = new DecodeCheck(machine.netlist(), opt.decodeName(), run,
+                            new CaseText(machine), plans);
+                    for (int k = next.getAndIncrement(); k < results.length; k = next.getAndIncrement()) {
+                        results[k] = unit(k, exhaustive, perInstruction, run, compare, decodeLines, progress);
+                    }
+                }));
+            }
+            for (java.util.concurrent.Future<?> f : running) {
+                f.get();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("verify was interrupted", e);
+        } catch (java.util.concurrent.ExecutionException e) {
+            throw e.getCause() instanceof RuntimeException re ? re : new IllegalStateException(e.getCause());
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    private int pcMask() {
+        return machine.pc() == null ? 0 : (1 << machine.pc().width()) - 1;
+    }
+
+    /** Adds up the cases done on every thread and hands the sum to the caller's progress, one thread at a time. */
+    private static final class SharedProgress implements Progress {
+        private final Progress to;
+        private final long total;
+        private long done;
+
+        SharedProgress(Progress to, long total) {
+            this.to = to;
+            this.total = total;
+        }
+
+        @Override
+        public synchronized void update(long cases, long ignored) {
+            done += cases;
+            to.update(done, total);
+        }
     }
 
     private List<String> notes() {

@@ -35,14 +35,14 @@ class CheckWatchTest {
         try {
             waitFor(() -> out.toString().contains("watching 1 file"));
             assertThat(err.toString()).doesNotContain("error:");
-            Thread.sleep(CheckWatch.POLL_MILLIS * 2);
+            Thread.sleep(org.thermion.tui.FileStamps.POLL_MILLIS * 2);
             Files.writeString(f, good.replace("n22 = pentode_nand2(n10, n16)", "n22 = pentode_nand2(n10, n16"),
                     StandardCharsets.UTF_8);
             waitFor(() -> err.toString().contains("error:"));
             assertThat(out.toString()).contains("changed: checking again");
             assertThat(err.toString()).contains(f + ":").contains("language.md#");
             int before = out.toString().split("watching", -1).length;
-            Thread.sleep(CheckWatch.POLL_MILLIS * 2);
+            Thread.sleep(org.thermion.tui.FileStamps.POLL_MILLIS * 2);
             Files.writeString(f, good + "\n", StandardCharsets.UTF_8);
             waitFor(() -> out.toString().split("watching", -1).length > before);
             assertThat(out.toString()).contains("machine c17");

@@ -66,4 +66,40 @@ class NotBuiltTest {
         assertThat(described.inputs()).hasSize(whole.inputs().size());
         assertThat(described.modules().stream().filter(mi -> !mi.built()).map(ModuleInstance::path)).containsExactly("osel");
     }
+
+    @Test
+    void anUnbuiltModuleHeldAtALevelTiesItsOutputsInsteadOfAddingSwitches() throws IOException {
+        Machine whole = demo("", false);
+        for (int level = 0; level <= 1; level++) {
+            Machine held = demo("  notbuilt osel held " + level + "\n", false);
+            assertThat(held.inputs()).hasSize(whole.inputs().size());
+            // The seven nets osel drove for the built part now read the level on every lane.
+            org.thermion.sim.Simulator sim = new org.thermion.sim.Simulator(held);
+            sim.reset(new org.thermion.sim.InitMode.Zero());
+            sim.settle();
+            for (String net : java.util.List.of("src", "grp[2]", "grp[3]", "pos[0]", "pos[3]")) {
+                int n = java.util.Arrays.asList(held.netlist().netNames()).indexOf(net);
+                assertThat(n).as(net).isPositive();
+                assertThat(sim.value(n)).as(net + " held " + level).isEqualTo(level == 1 ? -1L : 0L);
+            }
+            // Ties are wires, not stages: the tube count is the half-built one.
+            assertThat(held.stageInstanceCount()).isEqualTo(demo("  notbuilt osel\n", false).stageInstanceCount());
+        }
+    }
+
+    @Test
+    void aDeclaredRadixNamesABusOfTheInputsOrOutputs() throws IOException {
+        String text = Files.readString(Path.of("examples", "decoder-board", "decoder-board.machine"))
+                .replace("  outputs lamp\n", "  outputs lamp\n  radix binary lamp\n  radix decimal code\n");
+        SourceSet s = new SourceSet();
+        Diagnostics d = new Diagnostics();
+        Machine m = new Elaborator(s, d).elaborateText(Path.of("board.machine"), text);
+        assertThat(d.hasErrors()).isFalse();
+        assertThat(m.radix("lamp")).isEqualTo(2);
+        assertThat(m.radix("code")).isEqualTo(10);
+        assertThat(m.radix("load")).isEqualTo(16);
+        Diagnostics bad = new Diagnostics();
+        new Elaborator(new SourceSet(), bad).elaborateText(Path.of("board.machine"), text.replace("radix decimal code", "radix decimal lamps"));
+        assertThat(bad.all()).anySatisfy(x -> assertThat(x.message()).contains("no input or output bus 'lamps'"));
+    }
 }

@@ -3,6 +3,8 @@ package org.thermion.faults;
 import org.junit.jupiter.api.Test;
 import org.thermion.model.Machine;
 
+import java.util.List;
+
 import static org.assertj.core.api.Assertions.assertThat;
 
 class PlanGeneratorTest {
@@ -41,6 +43,19 @@ class PlanGeneratorTest {
             System.out.println("demo plan: " + plan.steps().size() + " steps " + plan.counts() + " of "
                     + plan.faults().size() + " in " + (System.nanoTime() - t0) / 1e6 + " ms " + plan.steps());
             assertThat(plan.count(Outcome.DETECTED)).isGreaterThan(plan.faults().size() / 2);
+            // Issue 18 item 7: every fault detected or proven, none left to the effort budget.
+            assertThat(plan.count(Outcome.ABORTED)).isZero();
+            // A proof must hold against any steps: long random sequences detect none of the proven faults.
+            List<Fault> proven = new java.util.ArrayList<>();
+            for (int i = 0; i < plan.faults().size(); i++) {
+                if (plan.outcome()[i].proven()) {
+                    proven.add(plan.faults().get(i));
+                }
+            }
+            for (int seed = 1; seed <= 4; seed++) {
+                List<Step> random = Step.random(new java.util.Random(seed), demo.inputs().size(), 60, 16);
+                assertThat(sim.firstDetection(proven, random)).as("seed " + seed).containsOnly(-1);
+            }
             double random = RandomSequences.median(sim, plan.faults(), plan.count(Outcome.DETECTED), 16, 400);
             System.out.println("demo: random sequences need " + random + " steps for the same coverage");
             assertThat((double) plan.steps().size()).isLessThanOrEqualTo(random / 2);

@@ -1,5 +1,6 @@
 package org.thermion.timing;
 
+import org.thermion.model.NetLabels;
 import org.junit.jupiter.api.Test;
 import org.thermion.circuit.MachineCircuits;
 import org.thermion.circuit.Tolerances;

@@ -219,7 +219,7 @@ class KeyHandlingTest {
     private static final Map<String, Command> KEYS = Map.ofEntries(
             Map.entry("p", Command.STEP_PHASE),
             Map.entry("+", Command.WORD_UP), Map.entry("=", Command.WORD_UP),
-            Map.entry("-", Command.WORD_DOWN), Map.entry("z", Command.WORD_CLEAR),
+            Map.entry("-", Command.WORD_DOWN), Map.entry("z", Command.WORD_CLEAR), Map.entry("v", Command.BUS_BITS),
             Map.entry("c", Command.STEP_CYCLE), Map.entry("Enter", Command.STEP_CYCLE),
             Map.entry(" ", Command.RUN_PAUSE), Map.entry("g", Command.RUN_PAUSE),
             Map.entry("r", Command.RESET), Map.entry("t", Command.PACE),

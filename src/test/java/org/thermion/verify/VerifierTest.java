@@ -127,6 +127,21 @@ class VerifierTest {
     }
 
     @Test
+    void twoThreadsGiveTheReportOfOneWhetherItPassesOrFails() {
+        // Broken machines give counterexamples and decode problems that must come out in the same order.
+        for (Machine m : java.util.List.of(VerifyMachines.tiny(), VerifyMachines.tiny("line[1] = op == 1", "line[1] = op == 3"),
+                VerifyMachines.skip("en = !skip", "en = 1"),
+                VerifyMachines.skip("line[0] = en & op == 0\n  line[1] = en & op == 1",
+                        "line[0] = (en & op == 0) | !en\n  line[1] = (en & op == 1) | !en"))) {
+            VerifyReport one = verify(m);
+            VerifyReport two = new Verifier(m, Verifier.Options.defaults().withThreads(2)).run();
+            VerifyReport three = new Verifier(m, Verifier.Options.defaults().withThreads(3)).run();
+            assertThat(two).isEqualTo(one);
+            assertThat(three).isEqualTo(one);
+        }
+    }
+
+    @Test
     void aSkipDoneByInhibitingTheDecoderPassesWhenTheIsaDeclaresTheInhibit() {
         VerifyReport r = verify(VerifyMachines.skip("", ""));
         // By hand: 3 state bits and 2 inputs: 32 states; LD and ST x 4 select values, SKZ 1 word,

@@ -1,8 +1,5 @@
-package org.thermion.timing;
+package org.thermion.model;
 
-import org.thermion.model.Gate;
-import org.thermion.model.GateFn;
-import org.thermion.model.Netlist;
 
 /**
  * How reports name a net: its own name, or for a net the elaborator generated ("lu.$22") the
@@ -37,7 +34,7 @@ public final class NetLabels {
     }
 
     /** The expression computing {@code net}, generated inputs expanded {@code depth} levels deep. */
-    String expression(int net, int depth) {
+    public String expression(int net, int depth) {
         if (!nl.isGenerated(net) || driver[net] < 0 || depth == 0) {
             return nl.isGenerated(net) ? "(...)" : nl.netName(net);
         }
