@@ -9,7 +9,8 @@ package org.thermion.power.startup;
  * @param limitAmps       its current limit (infinite when none)
  * @param t               sample times (a bypass shows as two samples at the same time)
  * @param amps            rail current at each sample
- * @param busVolts        voltage at the loads (after source and soft-start resistances)
+ * @param busVolts        voltage at the rail's bus (after the source and whole-rail soft-start resistances;
+ *                        loads a partial soft start covers sit one resistor further)
  * @param switchOnPeak    highest current before the bypass (the whole run when the rail has no soft start)
  * @param switchOnTime    when it occurred
  * @param bypassPeak      highest current from the bypass on (NaN without a bypass)
