@@ -21,7 +21,7 @@ import java.nio.file.Path;
 @Command(name = "budget", mixinStandardHelpOptions = true,
         description = {"Tube and power budget of a machine: tubes per module and type, heater strings, "
                 + "plate and bias current per module and rail, and each rail's peak against its limit.",
-                "With --program the machine runs the program (simulator lane 0) and the report adds the now, "
+                "With --program the machine runs the program and the report adds the now, "
                         + "minimum, mean and peak current over every phase, and the cycle and phase of the peak.",
                 "Exit code 1 when a check fails: a rail over its limit, a heater over its rating band, "
                         + "a string mixing heater currents without shunts."})

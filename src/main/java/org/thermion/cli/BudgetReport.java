@@ -101,7 +101,7 @@ final class BudgetReport {
         h.add("  heaters and the supply check at each rail's voltage under its load (nominal less the source drop),");
         h.add("    heaters at the wire's equilibrium temperature there: the power-up's steady state");
         if (run != null) {
-            h.add(String.format(Locale.ROOT, "  simulated: %s%s, %d cycles of %d phases, lane 0, latches start %s",
+            h.add(String.format(Locale.ROOT, "  simulated: %s%s, %d cycles of %d phases, latches start %s",
                     run.program(), run.inputs() == null ? "" : " with inputs " + run.inputs(), run.cycles(),
                     m.clock().phases(), run.init()));
             h.add("    min, mean and peak over every phase; now = the last phase; cycles count from 0, phases from 1"
