@@ -11,6 +11,18 @@ import org.thermion.model.MarginRules;
 /** What check says about a machine's circuits, on machines small enough to work out by hand. */
 class ElectricalCheckTest {
 
+    /** A library inverter whose output feeds another inverter and one NOR: two loads. */
+    private static final String TWO_LOADS = """
+            module top {
+              in a, b
+              out y, w
+              net mid
+              mid = !a
+              y = !mid
+              w = !(mid | b)
+            }
+            """;
+
     static List<Finding> findings(String text) {
         LevelAnalysisTest.Loaded l = LevelAnalysisTest.load(text);
         return ElectricalCheck.findings(l.machine(), LevelAnalysis.of(l.machine(), l.where().margins()));
@@ -18,17 +30,7 @@ class ElectricalCheckTest {
 
     @Test
     void upToFourLoadsOnALibraryInverterPassAndAFifthIsAnErrorNamingTheLimit() {
-        String two = LevelAnalysisTest.RAILS + """
-                module top {
-                  in a, b
-                  out y, w
-                  net mid
-                  mid = !a
-                  y = !mid
-                  w = !(mid | b)
-                }
-                machine two { top top; inputs a b; outputs y w }
-                """;
+        String two = LevelAnalysisTest.RAILS + TWO_LOADS + "machine two { top top; inputs a b; outputs y w }\n";
         assertThat(findings(two)).isEmpty();
         assertThat(findings(LevelAnalysisTest.CHAIN)).isEmpty();
         // The same inverter feeding five inputs: at its worst corner its high level falls below V_IH
@@ -56,18 +58,8 @@ class ElectricalCheckTest {
 
     @Test
     void aDeclaredMinimumMarginTurnsAThinNetIntoAWarning() {
-        String text = LevelAnalysisTest.RAILS + """
-                margins { rails 2 percent; minimum 20 V }
-                module top {
-                  in a, b
-                  out y, w
-                  net mid
-                  mid = !a
-                  y = !mid
-                  w = !(mid | b)
-                }
-                machine thin { top top; inputs a b; outputs y w }
-                """;
+        String text = LevelAnalysisTest.RAILS + "margins { rails 2 percent; minimum 20 V }\n" + TWO_LOADS
+                + "machine thin { top top; inputs a b; outputs y w }\n";
         LevelAnalysisTest.Loaded l = LevelAnalysisTest.load(text);
         assertThat(l.where().margins()).isEqualTo(new MarginRules(0.02, 0.05, 0.70, 20));
         List<Finding> f = ElectricalCheck.findings(l.machine(), LevelAnalysis.of(l.machine(), l.where().margins()));
