@@ -96,13 +96,16 @@ final class StageWiring {
         section(in, 1, Electrode.PLATE, qb);
         section(in, 1, Electrode.GRID, gb);
         section(in, 1, Electrode.CATHODE, k);
-        // The circuit leaves the steering out of its DC model: the latch's data, load enable and
-        // clock phase end on a terminal board beside it, with both grids, for the steering network.
+        // The data input's load in the circuit is one grid network (FlipFlop.inputLoad): its divider
+        // from the data net to the bias rail is wired here, part by part. The circuit has no gating
+        // parts: the divider's tap, the load enable and the clock phase end on a terminal board with
+        // both grids, for the builder's steering gate.
+        int steer = grid(in, cross, w.net(l.data()), "D", "steering");
         int enable = l.enable() >= 0 ? w.net(l.enable()) : w.rail(RailSet.GROUND);
         int clock = w.local("clock phase " + l.phase(), org.thermion.build.Node.Kind.RAIL);
         w.multiLead(PartClass.TERMINAL, "steering terminals", in.board, "steering of " + in.name, in.key,
-                new String[] {"data", "load", "clock", "grid A", "grid B"},
-                new int[] {w.net(l.data()), enable, clock, ga, gb});
+                new String[] {"steering tap", "load", "clock", "grid A", "grid B"},
+                new int[] {steer, enable, clock, ga, gb});
     }
 
     private void tubeStage(Instance in, TubeStage t, int[] inputs, int out) {
@@ -241,17 +244,22 @@ final class StageWiring {
 
     /** The grid network from {@code input}; returns the node the grid pin goes to. */
     private int grid(Instance in, GridNetwork g, int input, String tag) {
+        return grid(in, g, input, tag, "grid");
+    }
+
+    /** As {@link #grid(Instance, GridNetwork, int, String)}, its parts' roles starting with {@code what}. */
+    private int grid(Instance in, GridNetwork g, int input, String tag, String what) {
         int tap = input;
         if (g.seriesOhms() > 0) {
             tap = w.stageLocal(in.key, in.name, "tap" + tag);
-            resistor(in, "grid.series", g.seriesOhms(), input, tap, "grid series " + tag);
+            resistor(in, "grid.series", g.seriesOhms(), input, tap, what + " series " + tag);
         }
         if (Double.isFinite(g.toBiasOhms()) && g.toBiasOhms() > 0) {
-            resistor(in, "grid.tobias", g.toBiasOhms(), tap, w.rail(g.biasRail()), "grid to bias " + tag);
+            resistor(in, "grid.tobias", g.toBiasOhms(), tap, w.rail(g.biasRail()), what + " to bias " + tag);
         }
         if (g.stopperOhms() > 0) {
-            int pin = w.stageLocal(in.key, in.name, "grid" + tag);
-            resistor(in, "grid.stopper", g.stopperOhms(), tap, pin, "grid stopper " + tag);
+            int pin = w.stageLocal(in.key, in.name, what + tag);
+            resistor(in, "grid.stopper", g.stopperOhms(), tap, pin, what + " stopper " + tag);
             return pin;
         }
         return tap;
