@@ -49,6 +49,7 @@ final class StageWiring {
         StageType st = w.m.stages().get(g.stage());
         Instance in = new Instance(StageKey.gate(g.id()), st, sections, w.boards.of(g.module()),
                 w.m.netlist().netName(g.output()));
+        w.place(in.name, sections);
         Optional<StageCircuit> c = circuits.circuit(st);
         if (c.isPresent() && c.get() instanceof TubeStage t) {
             tubeStage(in, t, g.inputs(), w.net(g.output()));
@@ -65,6 +66,7 @@ final class StageWiring {
         StageType st = w.m.stages().get(l.stage());
         Instance in = new Instance(StageKey.latch(w.m.netlist(), l.id()), st, sections, w.boards.of(l.module()),
                 w.m.netlist().netName(l.output()));
+        w.place(in.name, sections);
         Optional<StageCircuit> c = circuits.circuit(st);
         int q = w.net(l.output());
         int qb = qbar >= 0 ? w.net(qbar) : w.stageLocal(in.key, in.name, "plateB");
