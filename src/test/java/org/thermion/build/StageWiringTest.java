@@ -48,6 +48,34 @@ class StageWiringTest {
     }
 
     @Test
+    void aBuiltBlocksTubesAreWiredFromTheirStagesNotOnlyTheirHeaters() {
+        // the pump station's program counter, ROM decoding and clock are stated with `uses` lines
+        for (java.nio.file.Path p : new java.nio.file.Path[] {BuildMachines.DECODER, BuildMachines.PUMPSTATION}) {
+            Machine m = BuildMachines.file(p);
+            Wiring w = BuildDocuments.of(m).wiring();
+            assertThat(WireChecks.run(m, w)).as(p.toString()).isEmpty();
+            assertThat(w.problems()).as(p.toString()).noneMatch(s -> s.contains("left open"));
+            int instances = 0;
+            for (org.thermion.model.BuiltBlock b : m.built()) {
+                for (org.thermion.model.BuiltBlock.Instances u : b.stages()) {
+                    instances += b.counted() ? u.count() : 0;
+                }
+            }
+            long placed = w.placements().stream().filter(pl -> pl.stage().contains(": ")).count();
+            assertThat(placed).as(p.toString()).isEqualTo(instances).isPositive();
+            Map<String, List<String>> leadsOf = leads(w);
+            // the clock's free-running pair: both plate loads and both cross-coupling dividers, both leads each
+            for (String role : List.of("plate load A", "plate load B", "grid series A", "grid to bias A", "grid series B",
+                    "grid to bias B")) {
+                Part r = part(w, role + " of clock generator: triode_flipflop 1");
+                assertThat(leadsOf.get(r.ref())).as(role).hasSize(2);
+            }
+            assertThat(w.placements()).filteredOn(pl -> pl.stage().equals("clock generator: triode_flipflop 1"))
+                    .singleElement().satisfies(pl -> assertThat(pl.sections()).hasSize(2));
+        }
+    }
+
+    @Test
     void everyTwoLeadPartHasBothLeadsOnTheExamplesAndRandomMachines() {
         List<Machine> machines = new ArrayList<>(List.of(BuildMachines.file(BuildMachines.DECODER),
                 BuildMachines.file(BuildMachines.PUMPSTATION)));
