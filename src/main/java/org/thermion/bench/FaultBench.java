@@ -7,6 +7,7 @@ import org.thermion.faults.Effort;
 import org.thermion.faults.Fault;
 import org.thermion.faults.FaultCircuit;
 import org.thermion.faults.FaultList;
+import org.thermion.faults.SocketPins;
 import org.thermion.faults.FaultSimulator;
 import org.thermion.faults.OneFaultSimulator;
 import org.thermion.faults.Outcome;
@@ -84,7 +85,7 @@ public final class FaultBench {
 
     private static void demoRows(List<BenchRow> rows, Machine m, long[] rom, boolean quick) {
         FaultCircuit c = FaultCircuit.of(m);
-        FaultList faults = FaultList.of(c);
+        FaultList faults = FaultList.of(c, SocketPins.of(m)); // as plan makes it, solder bridges included
         try (FaultSimulator one = new FaultSimulator(c, rom, 1); FaultSimulator two = new FaultSimulator(c, rom, 2)) {
             new PlanGenerator(two, faults, Effort.DEFAULT).generate();
             Plan[] plan = new Plan[1];

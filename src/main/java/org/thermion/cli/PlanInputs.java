@@ -7,6 +7,7 @@ import org.thermion.faults.FaultList;
 import org.thermion.faults.FaultSimulator;
 import org.thermion.faults.Plan;
 import org.thermion.faults.PlanGenerator;
+import org.thermion.faults.SocketPins;
 import org.thermion.faults.Step;
 import org.thermion.model.Machine;
 
@@ -50,7 +51,7 @@ record PlanInputs(Machine machine, Path program, long[] rom, FaultCircuit circui
             err.println(machineFile + ": " + nothingToWatch(m));
             return null;
         }
-        return new PlanInputs(m, program, rom, c, FaultList.of(c), loader);
+        return new PlanInputs(m, program, rom, c, FaultList.of(c, SocketPins.of(m)), loader);
     }
 
     /** What a builder is told about a machine that shows nothing: what to declare so it does. */

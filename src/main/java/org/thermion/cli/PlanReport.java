@@ -53,13 +53,16 @@ final class PlanReport {
 
     Report report() {
         Report r = new Report("plan", VERSION);
-        int tube = faults.all().size() - faults.stuckAtCount();
+        int bridges = faults.bridges().size();
+        int tube = faults.all().size() - faults.stuckAtCount() - bridges;
         r.field("machine", m.name());
         r.field("program", program == null ? new Absent("none") : program.toString());
         r.field("stuck_at_faults", faults.stuckAtCount());
         r.field("stuck_at_collapsed", faults.stuckAtCollapsedCount());
         r.field("stuck_at_targets", faults.stuckAtTargetCount());
         r.field("tube_faults", tube);
+        r.field("bridge_faults", bridges);
+        r.field("bridge_collapsed", faults.bridgeCollapsedCount());
         r.field("steps", steps.size());
         for (Outcome o : Outcome.values()) {
             r.field(o.name().toLowerCase(Locale.ROOT), plan.count(o));
@@ -69,8 +72,9 @@ final class PlanReport {
         head.add(String.format(Locale.ROOT, "bring-up plan for machine %s%s", m.name(),
                 program == null ? "" : " running " + program));
         head.add(String.format(Locale.ROOT, "  faults: %d stuck-at (%d after equivalence collapsing, %d aimed at after "
-                + "dominance), %d tube, heater, relay and lamp faults", faults.stuckAtCount(),
-                faults.stuckAtCollapsedCount(), faults.stuckAtTargetCount(), tube));
+                + "dominance), %d tube, heater, relay and lamp faults, %d solder bridges between neighbouring "
+                + "socket pins (%d pairs of nets)", faults.stuckAtCount(), faults.stuckAtCollapsedCount(),
+                faults.stuckAtTargetCount(), tube, bridges, faults.bridgeCollapsedCount()));
         head.add("  switch on, then follow the steps: set the switches, clock the cycles, compare the lamps");
         head.add("  lamps: lit = expect lit, dark = every other lamp dark, unknown = not yet settled, ignore");
         head.add("");

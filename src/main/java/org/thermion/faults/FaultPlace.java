@@ -43,6 +43,17 @@ public record FaultPlace(String module, String stage, String net, String envelop
                 FaultPlace w = wire(c, c.sites().get(g.output()), f.kind().words);
                 return new FaultPlace(w.module, w.stage, w.net, w.envelope, w.text);
             }
+            case BRIDGE: {
+                Bridge b = f.bridge();
+                String a = shown(m.netlist().netName(b.slotA()));
+                String other = shown(m.netlist().netName(b.slotB()));
+                int module = b.envelope() >= 0 && b.envelope() < m.envelopes().size()
+                        ? m.envelopes().get(b.envelope()).module() : -1;
+                String env = b.tube() + " (" + b.type() + ")";
+                return new FaultPlace(module(m, module), "", a + " / " + other, env, f.kind().words + " on socket "
+                        + b.socket() + " pins " + Math.min(b.pinA(), b.pinB()) + "-" + Math.max(b.pinA(), b.pinB())
+                        + ": " + name(a) + " and " + name(other) + ", " + b.behaviour(a, other));
+            }
             default: {
                 ObservedLamp lamp = c.lamps().get(f.subject());
                 return new FaultPlace("", "", m.netlist().netName(lamp.net()), "", "lamp " + lamp.name() + ": "
@@ -106,6 +117,10 @@ public record FaultPlace(String module, String stage, String net, String envelop
     private static String shown(String net) {
         int dot = net.lastIndexOf('.');
         return net.startsWith("$", dot + 1) ? UNNAMED : net;
+    }
+
+    private static String name(String net) {
+        return net.equals(UNNAMED) ? "an unnamed net" : "net " + net;
     }
 
     private static String arrow(String net) {

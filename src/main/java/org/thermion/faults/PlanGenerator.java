@@ -153,6 +153,11 @@ public final class PlanGenerator {
     }
 
     private static boolean provokable(Fault f, long[] seen0, long[] seen1) {
+        Bridge b = f.bridge();
+        if (b != null) {
+            // seen apart, each at some time: more than the two ever being unlike at once, so sound
+            return (seen0[b.slotA()] != 0L && seen1[b.slotB()] != 0L) || (seen1[b.slotA()] != 0L && seen0[b.slotB()] != 0L);
+        }
         for (Force x : f.forces()) {
             if ((x.value() ? seen0[x.slot()] : seen1[x.slot()]) != 0L) {
                 return true;
@@ -162,8 +167,8 @@ public final class PlanGenerator {
     }
 
     private static boolean reaches(Fault f, boolean[] observable) {
-        for (Force x : f.forces()) {
-            if (observable[x.slot()]) {
+        for (int slot : f.slots()) {
+            if (observable[slot]) {
                 return true;
             }
         }

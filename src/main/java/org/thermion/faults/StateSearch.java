@@ -89,11 +89,9 @@ final class StateSearch {
         FaultCircuit c = sim.circuit();
         LaneMachine g = sim.machine();
         LaneMachine b = sim.machine();
-        for (Force f : fault.forces()) {
-            b.force(f.slot(), f.value(), -1L);
-            if (faultyAlone) {
-                g.force(f.slot(), f.value(), -1L);
-            }
+        b.inject(fault, -1L);
+        if (faultyAlone) {
+            g.inject(fault, -1L);
         }
         int kw = g.keyWords();
         List<long[]> nodes = new ArrayList<>();
@@ -202,6 +200,13 @@ final class StateSearch {
     /** Lanes where some wire of the fault holds a known value other than the one the fault forces. */
     static long provoked(Fault fault, LaneMachine good) {
         long p = 0L;
+        Bridge br = fault.bridge();
+        if (br != null) {
+            // the two nets known and different: the bridge joins unlike levels
+            int a = br.slotA();
+            int b = br.slotB();
+            p |= ~good.x[a] & ~good.x[b] & (good.v[a] ^ good.v[b]);
+        }
         for (Force f : fault.forces()) {
             long v = good.v[f.slot()];
             p |= ~good.x[f.slot()] & (f.value() ? ~v : v);
