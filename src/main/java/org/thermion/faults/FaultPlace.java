@@ -113,6 +113,21 @@ public record FaultPlace(String module, String stage, String net, String envelop
     /** How a net the elaborator made for a sub-expression (no name in the source) is shown. */
     static final String UNNAMED = "(unnamed)";
 
+    /** Stem {@code slot}'s net as a builder finds it: its name, or for a net with none the stage driving it. */
+    static String netLabel(FaultCircuit c, int slot) {
+        FaultPlace p = wire(c, c.sites().get(slot), "");
+        if (!p.net.equals(UNNAMED)) {
+            return p.net;
+        }
+        return "the unnamed output of " + (p.stage.isEmpty() ? "a stage" : p.stage)
+                + (p.module.isEmpty() ? "" : " in " + p.module) + (p.envelope.isEmpty() ? "" : ", tube " + p.envelope);
+    }
+
+    /** A net's name as a builder is shown it: a generated net ("lu.$18") as {@link #UNNAMED}. */
+    static String shownName(String net) {
+        return shown(net);
+    }
+
     // A generated net ("lu.$18") means nothing to a builder: say it has no name.
     private static String shown(String net) {
         int dot = net.lastIndexOf('.');

@@ -176,7 +176,7 @@ public final class PlanGenerator {
     }
 
     /** Runs of cycles with the same settings become one step: the search's path shows the fault at its last cycle. */
-    private static List<Step> merge(List<boolean[]> cycles) {
+    static List<Step> merge(List<boolean[]> cycles) {
         List<Step> out = new ArrayList<>();
         int k = 0;
         while (k < cycles.size()) {
@@ -390,7 +390,7 @@ public final class PlanGenerator {
         return out;
     }
 
-    private static List<boolean[]> sample(int n, int count) {
+    static List<boolean[]> sample(int n, int count) {
         Random r = new Random(n * 7919L + count);
         List<boolean[]> out = new ArrayList<>();
         out.add(new boolean[n]);
