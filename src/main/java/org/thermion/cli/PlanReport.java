@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Absent;
 import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
@@ -87,7 +88,7 @@ final class PlanReport {
         if (largest >= 0) {
             tail.add("largest group of faults the steps cannot tell apart: " + largest);
             if (above > 0) {
-                tail.add(Numbers.count(above, "group") + " still "
+                tail.add(Nouns.count(above, "group") + " still "
                         + (above == 1 ? "holds" : "hold") + " more than " + PlanInputs.MOST_IN_GROUP + " faults: no "
                         + "switch setting clocked up to " + Effort.DEFAULT.maxCycles() + " cycles after the plan tells "
                         + (above == 1 ? "its" : "their") + " faults apart; " + alike());
