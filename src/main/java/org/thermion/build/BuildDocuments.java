@@ -67,12 +67,7 @@ public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.H
                     new int[] {w.net(p.net())});
         }
         external(m, w);
-        for (org.thermion.model.BuiltBlock b : m.built()) {
-            if (b.counted() && !b.stages().isEmpty()) {
-                w.problems.add("the " + b.what() + "'s tubes are counted and their heaters wired; its stages are not in "
-                        + "the logic, so their other pins are left open here: wire them from the block's own drawing");
-            }
-        }
+        built(m, w, stages);
         HeaterWiring hw = new HeaterWiring(w);
         hw.wire(new HeaterAnalysis(m));
         for (SoftStart s : m.softStarts()) {
@@ -81,6 +76,48 @@ public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.H
                     "bypass of soft start " + s.name(), Double.NaN);
         }
         return new BuildDocuments(m, w.build(), List.copyOf(hw.runs), circuits);
+    }
+
+    /**
+     * The stages of the built blocks (program counter, ROM decoding, clock), each instance in the
+     * sections the packer gave it: the free slots (no gate or latch) of its envelope, in the order
+     * the instances were placed, spilling into the next envelopes of the block for a wide stage.
+     */
+    private static void built(Machine m, WiringBuilder w, StageWiring stages) {
+        Map<Integer, java.util.ArrayDeque<Integer>> free = new HashMap<>();
+        for (Envelope e : m.envelopes()) {
+            for (Envelope.Slot s : e.slots()) {
+                if (s.index() < 0) {
+                    free.computeIfAbsent(e.id(), k -> new java.util.ArrayDeque<>()).add(s.section());
+                }
+            }
+        }
+        int key = m.netlist().gates().size() + m.netlist().latches().size();
+        for (org.thermion.model.BuiltBlock b : m.built()) {
+            if (!b.counted()) {
+                continue;
+            }
+            Map<String, Integer> numbered = new HashMap<>();
+            for (org.thermion.model.BuiltBlock.Instances u : b.stages()) {
+                org.thermion.model.StageType st = m.stages().get(u.stage());
+                int need = st.sectionsFor(st.fanIn());
+                for (int i = 0; i < u.count(); i++) {
+                    List<int[]> at = new ArrayList<>();
+                    for (int env = u.envelope(i); at.size() < need && env < m.envelopes().size(); env++) {
+                        Envelope e = m.envelopes().get(env);
+                        java.util.ArrayDeque<Integer> q = free.get(env);
+                        while (q != null && !q.isEmpty() && at.size() < need && e.module() == b.module()) {
+                            at.add(new int[] {env, q.poll()});
+                        }
+                    }
+                    String name = b.what() + ": " + st.name() + " " + numbered.merge(st.name(), 1, Integer::sum);
+                    if (at.size() < need) {
+                        w.problems.add(name + " found " + at.size() + " of its " + need + " sections in the packing");
+                    }
+                    stages.built(name, st, at, b.module(), key++);
+                }
+            }
+        }
     }
 
     private static Map<Integer, Integer> latchesByOutput(Netlist n) {

@@ -7,8 +7,9 @@ import java.util.Map;
 
 /**
  * What to do on the chassis to turn one revision of a machine into the next: parts to take out,
- * wires to unsolder, wires that move from one node to another, parts whose value or type changes,
- * parts to fit and wires to add, in the order a builder works. Parts are matched by what they do
+ * wires to unsolder, stages the packing moved to other tube sections, wires that move from one node
+ * to another, parts whose value or type changes, parts to fit and wires to add, in the order a
+ * builder works. Parts are matched by what they do
  * (their role: {@code plate load of x}), tubes and sockets by designator, so a part keeps its
  * identity when others come and go; a lead by its part and pin, a wire by the node it reaches
  * (nodes by name).
@@ -19,11 +20,12 @@ public record Rewiring(List<Change> changes) {
     }
 
     /** What a change does. */
-    public enum Action { REMOVE_PART, REMOVE_WIRE, MOVE_WIRE, CHANGE_PART, RENUMBER, ADD_PART, ADD_WIRE }
+    public enum Action { REMOVE_PART, REMOVE_WIRE, MOVE_STAGE, MOVE_WIRE, CHANGE_PART, RENUMBER, ADD_PART, ADD_WIRE }
 
     /**
-     * One change: its action, the designator it concerns (the new one where the part stays), the
-     * pin for a wire ("" for a part), what it is, the state before and after ("" where none).
+     * One change: its action, the designator it concerns (the new one where the part stays; a moved
+     * stage: the tube it now sits in), the pin for a wire ("" for a part or stage), what it is, the
+     * state before and after ("" where none; a moved stage: its sections, "V1.2").
      */
     public record Change(Action action, String ref, String pin, String what, String before, String after) {
     }
@@ -84,11 +86,37 @@ public record Rewiring(List<Change> changes) {
         }
         List<Change> all = new ArrayList<>(removeWires);
         all.addAll(removeParts);
+        all.addAll(stageMoves(old, now));
         all.addAll(moves);
         all.addAll(changed);
         all.addAll(addParts);
         all.addAll(addWires);
         return new Rewiring(all);
+    }
+
+    /**
+     * Stages present in both revisions whose tube sections differ (the packing moved them: another
+     * envelope, another section, more or fewer sections), in the new revision's order.
+     */
+    private static List<Change> stageMoves(Wiring old, Wiring now) {
+        Map<String, List<String>> was = new LinkedHashMap<>();
+        for (Wiring.Placement p : old.placements()) {
+            was.put(p.stage(), p.sections());
+        }
+        List<Change> out = new ArrayList<>();
+        for (Wiring.Placement p : now.placements()) {
+            List<String> before = was.get(p.stage());
+            if (before != null && !before.equals(p.sections())) {
+                String tube = p.sections().isEmpty() ? "" : p.sections().get(0).replaceAll("\\.[0-9]+$", "");
+                out.add(new Change(Action.MOVE_STAGE, tube, "", "stage " + p.stage(), sections(before),
+                        sections(p.sections())));
+            }
+        }
+        return out;
+    }
+
+    private static String sections(List<String> s) {
+        return s.isEmpty() ? "no section" : String.join(" ", s);
     }
 
     /** Wires by part (class letters, then number) and pin, as a builder goes round the chassis. */

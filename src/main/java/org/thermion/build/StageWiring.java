@@ -49,25 +49,82 @@ final class StageWiring {
         StageType st = w.m.stages().get(g.stage());
         Instance in = new Instance(StageKey.gate(g.id()), st, sections, w.boards.of(g.module()),
                 w.m.netlist().netName(g.output()));
+        w.place(in.name, sections);
         Optional<StageCircuit> c = circuits.circuit(st);
-        if (c.isPresent() && c.get() instanceof TubeStage t) {
-            tubeStage(in, t, g.inputs(), w.net(g.output()));
-        } else if (c.isPresent() && c.get() instanceof DiodeGate d) {
-            diodeGate(in, d.kind() == DiodeGate.Kind.AND, d.pullOhms(), d.pullRail(), "pull", g.inputs(), g.output());
-        } else if (c.isPresent() && c.get() instanceof ThyratronStage t) {
-            thyratron(in, t, g.input(0), g.output());
-        } else {
-            declared(in, g.inputs(), g.output());
+        int[] inputs = new int[g.arity()];
+        for (int i = 0; i < inputs.length; i++) {
+            inputs[i] = w.net(g.input(i));
         }
+        function(in, c, inputs, w.net(g.output()));
+    }
+
+    /** A stage with no flip-flop circuit, from the nodes of its inputs to the node of its output. */
+    private void function(Instance in, Optional<StageCircuit> c, int[] inputs, int out) {
+        if (c.isPresent() && c.get() instanceof TubeStage t) {
+            tubeStage(in, t, inputs, out);
+        } else if (c.isPresent() && c.get() instanceof DiodeGate d) {
+            diodeGate(in, d.kind() == DiodeGate.Kind.AND, d.pullOhms(), d.pullRail(), "pull", inputs, out);
+        } else if (c.isPresent() && c.get() instanceof ThyratronStage t) {
+            thyratron(in, t, inputs.length > 0 ? inputs[0] : w.stageLocal(in.key, in.name, "in0"), out);
+        } else {
+            declared(in, inputs, out);
+        }
+    }
+
+    /**
+     * Stage instance {@code index} of a built block (program counter, ROM decoding, clock): its parts
+     * and socket pins from its circuit like any stage's; its inputs and outputs are not nets of the
+     * logic, so they end on a terminal board of the instance, to be joined as the block's own drawing
+     * says. {@code key} is past every gate and latch key.
+     */
+    void built(String name, StageType st, List<int[]> sections, int module, int key) {
+        Instance in = new Instance(key, st, sections, w.boards.of(module), name);
+        w.place(name, sections);
+        Optional<StageCircuit> c = circuits.circuit(st);
+        List<String> pins = new java.util.ArrayList<>();
+        List<Integer> nodes = new java.util.ArrayList<>();
+        if (st.function() == StageFunction.LATCH) {
+            int q = w.stageLocal(key, name, "plateA");
+            int qb = w.stageLocal(key, name, "plateB");
+            int data = w.local(name + "/data", Node.Kind.LOCAL);
+            int load = w.local(name + "/load", Node.Kind.LOCAL);
+            int clock = w.local(name + "/clock", Node.Kind.LOCAL);
+            flipFlop(in, c, q, qb, data, load, clock);
+            pins.addAll(List.of("Q", "not Q", "data", "load", "clock"));
+            nodes.addAll(List.of(q, qb, data, load, clock));
+        } else {
+            int n = c.map(StageCircuit::inputs).orElse(st.fanIn());
+            int[] inputs = new int[Math.max(n, 0)];
+            for (int i = 0; i < inputs.length; i++) {
+                inputs[i] = w.local(name + "/in" + i, Node.Kind.LOCAL);
+                pins.add("in " + i);
+                nodes.add(inputs[i]);
+            }
+            int out = w.local(name + "/out", Node.Kind.LOCAL);
+            function(in, c, inputs, out);
+            pins.add("out");
+            nodes.add(out);
+        }
+        w.multiLead(PartClass.TERMINAL, "block terminals", in.board, "terminals of " + name, key,
+                pins.toArray(new String[0]), nodes.stream().mapToInt(Integer::intValue).toArray());
     }
 
     void latch(Latch l, List<int[]> sections, int qbar) {
         StageType st = w.m.stages().get(l.stage());
         Instance in = new Instance(StageKey.latch(w.m.netlist(), l.id()), st, sections, w.boards.of(l.module()),
                 w.m.netlist().netName(l.output()));
+        w.place(in.name, sections);
         Optional<StageCircuit> c = circuits.circuit(st);
         int q = w.net(l.output());
         int qb = qbar >= 0 ? w.net(qbar) : w.stageLocal(in.key, in.name, "plateB");
+        int enable = l.enable() >= 0 ? w.net(l.enable()) : w.rail(RailSet.GROUND);
+        int clock = w.local("clock phase " + l.phase(), org.thermion.build.Node.Kind.RAIL);
+        flipFlop(in, c, q, qb, w.net(l.data()), enable, clock);
+    }
+
+    /** A cross-coupled pair between plates {@code q} and {@code qb}, steered from {@code data}. */
+    private void flipFlop(Instance in, Optional<StageCircuit> c, int q, int qb, int data, int enable, int clock) {
+        StageType st = in.type;
         String rail;
         double load;
         GridNetwork cross;
@@ -96,13 +153,14 @@ final class StageWiring {
         section(in, 1, Electrode.PLATE, qb);
         section(in, 1, Electrode.GRID, gb);
         section(in, 1, Electrode.CATHODE, k);
-        // The circuit leaves the steering out of its DC model: the latch's data, load enable and
-        // clock phase end on a terminal board beside it, with both grids, for the steering network.
-        int enable = l.enable() >= 0 ? w.net(l.enable()) : w.rail(RailSet.GROUND);
-        int clock = w.local("clock phase " + l.phase(), org.thermion.build.Node.Kind.RAIL);
+        // The data input's load in the circuit is one grid network (FlipFlop.inputLoad): its divider
+        // from the data net to the bias rail is wired here, part by part. The circuit has no gating
+        // parts: the divider's tap, the load enable and the clock phase end on a terminal board with
+        // both grids, for the builder's steering gate.
+        int steer = grid(in, cross, data, "D", "steering");
         w.multiLead(PartClass.TERMINAL, "steering terminals", in.board, "steering of " + in.name, in.key,
-                new String[] {"data", "load", "clock", "grid A", "grid B"},
-                new int[] {w.net(l.data()), enable, clock, ga, gb});
+                new String[] {"steering tap", "load", "clock", "grid A", "grid B"},
+                new int[] {steer, enable, clock, ga, gb});
     }
 
     private void tubeStage(Instance in, TubeStage t, int[] inputs, int out) {
@@ -118,7 +176,7 @@ final class StageWiring {
         boolean series = t.arrangement() == TubeStage.Arrangement.SERIES;
         int below = k;
         for (int i = 0; i < inputs.length; i++) {
-            int g = grid(in, t.grid(), w.net(inputs[i]), String.valueOf(i));
+            int g = grid(in, t.grid(), inputs[i], String.valueOf(i));
             int p = series && i < inputs.length - 1 ? w.stageLocal(in.key, in.name, "stack" + i) : plate;
             int kk = series ? below : k;
             for (int s = 0; s < spi; s++) {
@@ -135,11 +193,10 @@ final class StageWiring {
         }
     }
 
-    private void diodeGate(Instance in, boolean and, double pullOhms, String pullRail, String what, int[] inputs, int output) {
-        int out = w.net(output);
+    private void diodeGate(Instance in, boolean and, double pullOhms, String pullRail, String what, int[] inputs, int out) {
         resistor(in, what, pullOhms, out, w.rail(pullRail), and ? "pull-up" : "pull-down");
         for (int i = 0; i < inputs.length; i++) {
-            int input = w.net(inputs[i]);
+            int input = inputs[i];
             section(in, i, Electrode.PLATE, and ? out : input);
             section(in, i, Electrode.CATHODE, and ? input : out);
         }
@@ -152,10 +209,10 @@ final class StageWiring {
             top = w.stageLocal(in.key, in.name, "feed");
             resistor(in, "plate", t.plateOhms(), rail, top, "plate resistor");
         }
-        int anode = w.net(output);
+        int anode = output;
         load(in, t.load(), top, anode);
         int k = cathode(in, t.cathode());
-        int g = grid(in, t.grid(), w.net(input), "0");
+        int g = grid(in, t.grid(), input, "0");
         section(in, 0, Electrode.PLATE, anode);
         section(in, 0, Electrode.GRID, g);
         section(in, 0, Electrode.CATHODE, k);
@@ -163,15 +220,14 @@ final class StageWiring {
     }
 
     /** A stage without a circuit, wired by its function from the declared load. */
-    private void declared(Instance in, int[] inputs, int output) {
+    private void declared(Instance in, int[] inputs, int out) {
         StageType st = in.type;
         String rail = st.loadRail() >= 0 ? w.m.rails().get(st.loadRail()).name() : RailSet.GROUND;
         boolean diode = w.m.tubes().get(st.tube()).kind() == TubeKind.DIODE;
         if (diode) {
-            diodeGate(in, st.function() == StageFunction.AND, st.loadOhms(), rail, "load", inputs, output);
+            diodeGate(in, st.function() == StageFunction.AND, st.loadOhms(), rail, "load", inputs, out);
             return;
         }
-        int out = w.net(output);
         if (st.loadOhms() > 0) {
             resistor(in, "load", st.loadOhms(), w.rail(rail), out, "plate load");
         }
@@ -186,7 +242,7 @@ final class StageWiring {
             }
         }
         for (int i = 0; i < inputs.length; i++) {
-            int input = w.net(inputs[i]);
+            int input = inputs[i];
             if (i < sections) {
                 section(in, i, Electrode.GRID, input);
             } else if (pentode && i == sections) {
@@ -241,17 +297,22 @@ final class StageWiring {
 
     /** The grid network from {@code input}; returns the node the grid pin goes to. */
     private int grid(Instance in, GridNetwork g, int input, String tag) {
+        return grid(in, g, input, tag, "grid");
+    }
+
+    /** As {@link #grid(Instance, GridNetwork, int, String)}, its parts' roles starting with {@code what}. */
+    private int grid(Instance in, GridNetwork g, int input, String tag, String what) {
         int tap = input;
         if (g.seriesOhms() > 0) {
             tap = w.stageLocal(in.key, in.name, "tap" + tag);
-            resistor(in, "grid.series", g.seriesOhms(), input, tap, "grid series " + tag);
+            resistor(in, "grid.series", g.seriesOhms(), input, tap, what + " series " + tag);
         }
         if (Double.isFinite(g.toBiasOhms()) && g.toBiasOhms() > 0) {
-            resistor(in, "grid.tobias", g.toBiasOhms(), tap, w.rail(g.biasRail()), "grid to bias " + tag);
+            resistor(in, "grid.tobias", g.toBiasOhms(), tap, w.rail(g.biasRail()), what + " to bias " + tag);
         }
         if (g.stopperOhms() > 0) {
-            int pin = w.stageLocal(in.key, in.name, "grid" + tag);
-            resistor(in, "grid.stopper", g.stopperOhms(), tap, pin, "grid stopper " + tag);
+            int pin = w.stageLocal(in.key, in.name, what + tag);
+            resistor(in, "grid.stopper", g.stopperOhms(), tap, pin, what + " stopper " + tag);
             return pin;
         }
         return tap;

@@ -16,7 +16,7 @@ import java.util.Map;
 /**
  * The wire list's own checks: every socket pin in at most one node; pins the basing marks as
  * internal connections (ic) or not connected (nc) carry nothing; every electrode of every used
- * section, and every heater pin, is wired. Each failure is one line for people.
+ * section (a built block's included), and every heater pin, is wired. Each failure is one line for people.
  */
 public final class WireChecks {
     private WireChecks() {
@@ -34,6 +34,12 @@ public final class WireChecks {
                 if (earlier != null && !earlier.equals(n.name())) {
                     out.add(l.label() + " is in two nets: " + earlier + " and " + n.name());
                 }
+            }
+        }
+        java.util.Set<Integer> builtModules = new java.util.HashSet<>();
+        for (org.thermion.model.BuiltBlock bb : m.built()) {
+            if (bb.counted()) {
+                builtModules.add(bb.module());
             }
         }
         for (Wiring.Socket s : w.sockets()) {
@@ -54,7 +60,7 @@ public final class WireChecks {
                 }
             }
             for (Envelope.Slot slot : e.slots()) {
-                if (slot.index() < 0) {
+                if (slot.index() < 0 && !builtModules.contains(e.module())) {
                     continue;
                 }
                 for (Electrode el : needed(t.kind())) {

@@ -7,13 +7,26 @@ import java.util.List;
  * it joins, every socket pin by pin, and what could not be wired (findings for the checks).
  */
 public record Wiring(List<String> boards, List<Part> parts, List<Node> nodes, List<Socket> sockets,
-                     List<String> problems) {
+                     List<String> problems, List<Placement> placements) {
     public Wiring {
         boards = List.copyOf(boards);
         parts = List.copyOf(parts);
         nodes = List.copyOf(nodes);
         sockets = List.copyOf(sockets);
         problems = List.copyOf(problems);
+        placements = List.copyOf(placements);
+    }
+
+    /** A wiring that records no stage placements (documents that never compare revisions). */
+    public Wiring(List<String> boards, List<Part> parts, List<Node> nodes, List<Socket> sockets, List<String> problems) {
+        this(boards, parts, nodes, sockets, problems, List.of());
+    }
+
+    /** Where one stage instance sits: its name and its tube sections, "V3.2" (tube designator, section). */
+    public record Placement(String stage, List<String> sections) {
+        public Placement {
+            sections = List.copyOf(sections);
+        }
     }
 
     /**

@@ -39,6 +39,7 @@ final class WiringBuilder {
     private final Set<String> missingBasing = new java.util.TreeSet<>();
 
     private final Set<String> roles = new java.util.HashSet<>();
+    private final List<Wiring.Placement> placements = new ArrayList<>();
 
     WiringBuilder(Machine m, Designations designations) {
         this.m = m;
@@ -218,6 +219,15 @@ final class WiringBuilder {
         }
     }
 
+    /** Records the tube sections ({envelope, section}) stage instance {@code name} is wired in. */
+    void place(String name, List<int[]> sections) {
+        List<String> at = new ArrayList<>(sections.size());
+        for (int[] s : sections) {
+            at.add(tubeRef[s[0]] + "." + s[1]);
+        }
+        placements.add(new Wiring.Placement(name, at));
+    }
+
     String socketRef(int env) {
         return socketRef[env];
     }
@@ -250,6 +260,6 @@ final class WiringBuilder {
             sockets.add(new Wiring.Socket(e.id(), socketRef[e.id()], tubeRef[e.id()], t.name(), b == null ? "?" : b.base(),
                     boards.of(e.module()), electrodes, socketNodes[e.id()], doubtful));
         }
-        return new Wiring(boards.names(), parts, nodes, sockets, problems);
+        return new Wiring(boards.names(), parts, nodes, sockets, problems, placements);
     }
 }

@@ -72,7 +72,7 @@ final class PowerUpReport {
     }
 
     /** The schema version of powerup's JSON ({@code org/thermion/schema/powerup.schema.json}). */
-    static final int VERSION = 2;
+    static final int VERSION = 3;
     /** A rail has settled when its current moved less than this share over the last tenth of the run. */
     static final double SETTLED = 0.01;
     static final Absent NONE = new Absent("none");
@@ -201,6 +201,7 @@ final class PowerUpReport {
         Table t = new Table("soft_starts", "soft starts")
                 .column("name", "name", TEXT)
                 .column("rail", "rail", TEXT)
+                .column("covers", "covers", TEXT, "the loads behind the resistor; the rest of the rail is fed ahead of it")
                 .column("resistor", "resistor", OHMS)
                 .column("rated", "rated", WATTS)
                 .column("thyratron", "thyratron", FLAG)
@@ -220,7 +221,7 @@ final class PowerUpReport {
                 .column("resting", "resting", AMPS);
         for (SoftStartResult s : r.softStarts()) {
             BypassDelay.Advice a = adviceFor(s.name());
-            t.row(s.name(), r.rail(s.rail()).name(), s.ohms(), Double.isInfinite(s.ratedWatts()) ? new Absent("no rating") : s.ratedWatts(),
+            t.row(s.name(), r.rail(s.rail()).name(), s.covers().isEmpty() ? "whole rail" : String.join("; ", s.covers()), s.ohms(), Double.isInfinite(s.ratedWatts()) ? new Absent("no rating") : s.ratedWatts(),
                     s.thyratron(), Double.isNaN(s.triggerTime()) ? new Absent("did not fire") : s.triggerTime(),
                     s.bypassed() ? s.bypassTime() : new Absent("not bypassed"), s.joules(), s.peakWatts(), s.meanWatts(),
                     s.withinRating(), s.neededWatts(), Double.isNaN(s.suggestedWatts()) ? new Absent("beyond the common list") : s.suggestedWatts(),

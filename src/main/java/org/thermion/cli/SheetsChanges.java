@@ -20,7 +20,8 @@ import static org.thermion.cli.report.ReportUnit.TEXT;
 /** {@code sheets changes MACHINE NEW}: what to rewire to turn one revision of a machine into the next. */
 @Command(name = "changes", mixinStandardHelpOptions = true,
         description = {"What to rewire between two revisions of a machine: wires to unsolder, parts to take out, "
-                + "wires that move to another node, parts whose value or type changes, parts to fit and wires to add.",
+                + "stages the packing moved to other tube sections, wires that move to another node, parts whose "
+                + "value or type changes, parts to fit and wires to add.",
                 "Parts are matched by what they do (plate load of x), designators read from each revision's "
                         + "NAME.designators (the new revision takes the old one's file when it has none)."})
 final class SheetsChanges extends SheetsDocument {
@@ -54,6 +55,7 @@ final class SheetsChanges extends SheetsDocument {
                 .field("parts_removed", r.count(Rewiring.Action.REMOVE_PART))
                 .field("parts_added", r.count(Rewiring.Action.ADD_PART))
                 .field("parts_changed", r.count(Rewiring.Action.CHANGE_PART))
+                .field("stages_moved", r.count(Rewiring.Action.MOVE_STAGE))
                 .field("wires_removed", r.count(Rewiring.Action.REMOVE_WIRE))
                 .field("wires_moved", r.count(Rewiring.Action.MOVE_WIRE))
                 .field("wires_added", r.count(Rewiring.Action.ADD_WIRE))

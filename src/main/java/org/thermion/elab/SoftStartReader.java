@@ -34,6 +34,7 @@ final class SoftStartReader {
     private final Diagnostics diags;
     /** The names each soft start's {@code covers} line was written with, for the checks after wiring. */
     private final Map<SoftStart, List<Value>> coverLines = new IdentityHashMap<>();
+    private final Map<SoftStart, Span> coverSpans = new IdentityHashMap<>();
 
     SoftStartReader(Parts parts, Packer packer, Diagnostics diags) {
         this.parts = parts;
@@ -62,21 +63,39 @@ final class SoftStartReader {
         }
         double watts = resistor.has("rated") ? resistor.num("watts") : Double.POSITIVE_INFINITY;
         Relay relay = b.hasBlock("relay") ? relay(b.nested("relay")) : Relay.standard();
+        SoftStart ss = new SoftStart(name, rail, resistor.num(), watts, relay, trigger, SoftStartCover.wholeRail());
         PropLine covers = b.line("covers");
-        SoftStartCover cover = covers == null ? SoftStartCover.wholeRail() : covers.tokens("loads").isEmpty() ? null
-                : cover(covers.tokens("loads"), name, rail, modules);
-        if (cover == null) {
-            if (covers != null && covers.tokens("loads").isEmpty()) {
-                diags.error(covers.span("loads"), "soft start '" + name + "' covers nothing",
-                        "name the module instances or tube types behind its resistor, or leave out the `covers` line");
-            }
-            return null;
-        }
-        SoftStart ss = new SoftStart(name, rail, resistor.num(), watts, relay, trigger, cover);
         if (covers != null) {
             coverLines.put(ss, covers.tokens("loads"));
+            coverSpans.put(ss, covers.span("loads"));
         }
         return ss;
+    }
+
+    /**
+     * {@code ss} with the loads its {@code covers} line names; null when reported. Called once every
+     * soft start is read, so that a thyratron another soft start's bypass brings in can be covered
+     * whichever block comes first.
+     */
+    SoftStart withCovers(SoftStart ss, List<ModuleInstance> modules) {
+        List<Value> names = coverLines.get(ss);
+        if (names == null) {
+            return ss;
+        }
+        coverLines.remove(ss);
+        if (names.isEmpty()) {
+            diags.error(coverSpans.get(ss), "soft start '" + ss.name() + "' covers nothing",
+                    "name the module instances or tube types behind its resistor, or leave out the `covers` line");
+            return null;
+        }
+        SoftStartCover cover = cover(names, ss.name(), ss.rail(), modules);
+        if (cover == null) {
+            return null;
+        }
+        SoftStart covered = new SoftStart(ss.name(), ss.rail(), ss.resistorOhms(), ss.ratedWatts(), ss.relay(),
+                ss.trigger(), cover);
+        coverLines.put(covered, names);
+        return covered;
     }
 
     /** The loads named in a {@code covers} line: module instances (with their subtrees), else tube types. */

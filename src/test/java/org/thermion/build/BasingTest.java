@@ -30,7 +30,9 @@ class BasingTest {
         assertThat(b.pinsFor(Electrode.CATHODE, 2)).containsExactly(3);
         assertThat(b.pinsFor(Electrode.HEATER, 0)).containsExactly(4, 5);
         assertThat(b.pinsFor(Electrode.TAP, 0)).containsExactly(9);
-        // Only source 1 gives these; from memory they match too.
+        // Source 1 gives these, and source 3 for the ECC82 (the 12AU7's European equivalent):
+        // radio-electronics.com/info/data/thermionic-valves/pin_connections/tube_connections.php, row
+        // ECC82: a'' g'' k'' h h a' g' k' hct (pins 1 to 9; ' the first triode, '' the second).
         assertThat(b.pinsFor(Electrode.PLATE, 1)).containsExactly(6);
         assertThat(b.pinsFor(Electrode.GRID, 1)).containsExactly(7);
         assertThat(b.pinsFor(Electrode.CATHODE, 1)).containsExactly(8);
@@ -64,6 +66,19 @@ class BasingTest {
         assertThat(second.pinsFor(Electrode.HEATER, 0)).containsExactly(4, 5);
         // They agree on pin 4 only (a heater in both).
         assertThat(t.doubtfulPins()).containsExactly(1, 2, 3, 5, 6, 7);
+    }
+
+    @Test
+    void sixAL5MatchesThePublishedTableOfItsEuropeanEquivalent() {
+        Basing b = tube(DEMO, "6AL5").basing();
+        // radio-electronics.com tube_connections table, row EB91: k' a'' h h k'' s a' (pins 1 to 7).
+        assertThat(b.base()).isEqualTo("miniature7");
+        assertThat(b.pinsFor(Electrode.CATHODE, 1)).containsExactly(1);
+        assertThat(b.pinsFor(Electrode.PLATE, 2)).containsExactly(2);
+        assertThat(b.pinsFor(Electrode.HEATER, 0)).containsExactly(3, 4);
+        assertThat(b.pinsFor(Electrode.CATHODE, 2)).containsExactly(5);
+        assertThat(b.pinsFor(Electrode.SHIELD, 0)).containsExactly(6);
+        assertThat(b.pinsFor(Electrode.PLATE, 1)).containsExactly(7);
     }
 
     @Test

@@ -66,6 +66,22 @@ class RewiringTest {
     }
 
     @Test
+    void stagesThePackingMovedAreListedAsMovesBeforeTheirWires() throws IOException {
+        Designations saved = read(DIR.resolve("rev-a.designators"));
+        Rewiring r = Rewiring.between(BuildDocuments.of(a, saved).wiring(), BuildDocuments.of(b, saved).wiring());
+        // x is gone, so y moves from the twin triode's second section to its first; w's OR grows a third diode
+        assertThat(r.changes()).filteredOn(c -> c.action() == Rewiring.Action.MOVE_STAGE).containsExactly(
+                new Rewiring.Change(Rewiring.Action.MOVE_STAGE, "V1", "", "stage y", "V1.2", "V1.1"),
+                new Rewiring.Change(Rewiring.Action.MOVE_STAGE, "V2", "", "stage w", "V2.1 V2.2", "V2.1 V2.2 V3.1"));
+        int firstStage = r.changes().indexOf(r.changes().stream()
+                .filter(c -> c.action() == Rewiring.Action.MOVE_STAGE).findFirst().orElseThrow());
+        int firstWire = r.changes().indexOf(r.changes().stream()
+                .filter(c -> c.action() == Rewiring.Action.MOVE_WIRE).findFirst().orElseThrow());
+        assertThat(firstStage).isLessThan(firstWire);
+        assertThat(r.count(Rewiring.Action.MOVE_STAGE)).isEqualTo(2);
+    }
+
+    @Test
     void savingKeepsEveryRecordedNumberAndRetiresTheGoneParts() throws IOException {
         Designations saved = read(DIR.resolve("rev-a.designators"));
         String text = saved.write("panel", BuildDocuments.of(b, saved).wiring());

@@ -194,7 +194,7 @@ class VerifierTest {
         assertThat(r.cases()).isEqualTo(3200);
         assertThat(r.exhaustive()).isTrue();
         assertThat(r.passes()).isTrue();
-        VerifyReport bad = verify(VerifyMachines.panel("(line[2] & !src)", "(line[2] & src)"));
+        VerifyReport bad = verify(VerifyMachines.panel("(line[2] & src_n)", "(line[2] & src_b)"));
         assertThat(bad.counterexamples()).singleElement().satisfies(c -> {
             assertThat(c.mnemonic()).isEqualTo("LDN");
             assertThat(c.item()).isEqualTo("acc");

@@ -107,4 +107,39 @@ class PartialSoftStartTest {
         assertThat(sb.makeAmps()).isCloseTo(sa.makeAmps(), within(1e-6 * sa.makeAmps()));
         assertThat(sb.covers()).containsExactly("6AU6");
     }
+
+    @Test
+    void aThyratronWhoseHeaterSitsBehindAnotherPartialSoftStartFiresLaterAndItsBypassFollows() {
+        // The 2D21 (6.3 V 0.6 A heater, 10.5 ohm hot) on the pilot rail, and a soft start on that rail
+        // covering only the 2D21's heaters: hot, 2 ohm in series leaves the heater about 5.2 V (below),
+        // 83 % of rated, so its cathode reaches the firing threshold later (the 2D21 fires later at 90 %
+        // heater voltage than at 100 %: issue text, observed practice). The heat rail's bypass follows the
+        // firing by the bypass relay's 10 ms operate time either way.
+        String plain = StartupMachines.invertersWithThyratron(8, "50 ohm");
+        String slowed = plain.replace("softstart heat_soft on heat {", """
+                softstart pilot_soft on pilot {
+                  resistor 2 ohm rated 25 W
+                  covers 2D21
+                  bypass after 1000 s
+                }
+                softstart heat_soft on heat {""");
+        assertThat(slowed).isNotEqualTo(plain);
+        PowerUpOptions run = PowerUpOptions.defaults().withSeconds(40);
+        PowerUpResult a = PowerUpSolver.solve(StartupMachines.elaborate(plain), run);
+        PowerUpResult b = PowerUpSolver.solve(StartupMachines.elaborate(slowed), run);
+        SoftStartResult heatA = a.softStarts().stream().filter(s -> s.name().equals("heat_soft")).findFirst().orElseThrow();
+        SoftStartResult heatB = b.softStarts().stream().filter(s -> s.name().equals("heat_soft")).findFirst().orElseThrow();
+        SoftStartResult pilot = b.softStarts().stream().filter(s -> s.name().equals("pilot_soft")).findFirst().orElseThrow();
+        assertThat(pilot.covers()).containsExactly("2D21");
+        assertThat(pilot.bypassed()).isFalse();
+        assertThat(heatA.bypassed()).isTrue();
+        assertThat(heatB.bypassed()).isTrue();
+        // Later by more than a tenth: a cathode that reaches the threshold on 84 % heater power.
+        assertThat(heatB.triggerTime()).isGreaterThan(1.1 * heatA.triggerTime());
+        assertThat(heatB.bypassTime() - heatB.triggerTime()).isCloseTo(heatA.bypassTime() - heatA.triggerTime(), within(2e-3));
+        // Hot, the pilot resistor carries the heater current. A cooler tungsten wire has a lower resistance:
+        // with the filament rule I ~ V^0.6 (from memory), I = 0.6 (V / 6.3)^0.6 and V = 6.3 - 2 I meet at
+        // 0.536 A, 5.23 V (at a fixed 10.5 ohm it would be 0.504 A).
+        assertThat(pilot.carryAmps()).isCloseTo(0.536, within(0.536 * 0.03));
+    }
 }

@@ -182,7 +182,7 @@ final class StartupMachines {
     static Machine elaborate(String text) {
         Diagnostics d = new Diagnostics();
         Machine m = new Elaborator(new SourceSet(), d).elaborateText(Path.of("test.machine"), text);
-        assertThat(d.hasErrors()).as(d.toString()).isFalse();
+        assertThat(d.hasErrors()).as(d.all().toString()).isFalse();
         assertThat(m).isNotNull();
         return m;
     }

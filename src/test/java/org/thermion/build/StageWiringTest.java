@@ -1,0 +1,126 @@
+package org.thermion.build;
+
+import org.junit.jupiter.api.Test;
+import org.thermion.faults.RandomMachines;
+import org.thermion.model.Latch;
+import org.thermion.model.Machine;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/**
+ * Every part of a stage's circuit is in the wire list with its designator and both leads; a
+ * flip-flop's steering divider (the load its data input is modelled with) included.
+ */
+class StageWiringTest {
+
+    @Test
+    void aFlipFlopsDataFeedsItsSteeringDividerNotABareTerminal() {
+        Machine m = BuildMachines.file(BuildMachines.DECODER);
+        Wiring w = BuildDocuments.of(m).wiring();
+        Map<String, List<String>> leadsOf = leads(w);
+        int checked = 0;
+        for (Latch l : m.netlist().latches()) {
+            if (l.stage() < 0) {
+                continue;
+            }
+            String name = m.netlist().netName(l.output());
+            Part series = part(w, "steering series D of " + name);
+            Part toBias = part(w, "steering to bias D of " + name);
+            // the library's triode_flipflop: grid divider 470 k 560 k to bias, the same for the data input
+            assertThat(series.ohms()).isEqualTo(470e3);
+            assertThat(toBias.ohms()).isEqualTo(560e3);
+            assertThat(series.owner()).isEqualTo(StageKey.latch(m.netlist(), l.id()));
+            String data = m.netlist().netName(l.data());
+            assertThat(leadsOf.get(series.ref())).containsExactly(data, name + "/tapD");
+            assertThat(leadsOf.get(toBias.ref())).containsExactly(name + "/tapD", "bias");
+            Part tb = part(w, "steering of " + name);
+            assertThat(nodeOf(w, tb.ref(), "steering tap")).isEqualTo(name + "/tapD");
+            assertThat(nodeOf(w, tb.ref(), "data")).isNull();
+            checked++;
+        }
+        assertThat(checked).isEqualTo(3);
+    }
+
+    @Test
+    void aBuiltBlocksTubesAreWiredFromTheirStagesNotOnlyTheirHeaters() {
+        // the pump station's program counter, ROM decoding and clock are stated with `uses` lines
+        for (java.nio.file.Path p : new java.nio.file.Path[] {BuildMachines.DECODER, BuildMachines.PUMPSTATION}) {
+            Machine m = BuildMachines.file(p);
+            Wiring w = BuildDocuments.of(m).wiring();
+            assertThat(WireChecks.run(m, w)).as(p.toString()).isEmpty();
+            assertThat(w.problems()).as(p.toString()).noneMatch(s -> s.contains("left open"));
+            int instances = 0;
+            for (org.thermion.model.BuiltBlock b : m.built()) {
+                for (org.thermion.model.BuiltBlock.Instances u : b.stages()) {
+                    instances += b.counted() ? u.count() : 0;
+                }
+            }
+            long placed = w.placements().stream().filter(pl -> pl.stage().contains(": ")).count();
+            assertThat(placed).as(p.toString()).isEqualTo(instances).isPositive();
+            Map<String, List<String>> leadsOf = leads(w);
+            // the clock's free-running pair: both plate loads and both cross-coupling dividers, both leads each
+            for (String role : List.of("plate load A", "plate load B", "grid series A", "grid to bias A", "grid series B",
+                    "grid to bias B")) {
+                Part r = part(w, role + " of clock generator: triode_flipflop 1");
+                assertThat(leadsOf.get(r.ref())).as(role).hasSize(2);
+            }
+            assertThat(w.placements()).filteredOn(pl -> pl.stage().equals("clock generator: triode_flipflop 1"))
+                    .singleElement().satisfies(pl -> assertThat(pl.sections()).hasSize(2));
+        }
+    }
+
+    @Test
+    void everyTwoLeadPartHasBothLeadsOnTheExamplesAndRandomMachines() {
+        List<Machine> machines = new ArrayList<>(List.of(BuildMachines.file(BuildMachines.DECODER),
+                BuildMachines.file(BuildMachines.PUMPSTATION)));
+        for (long seed = 1; seed <= 10; seed++) {
+            machines.add(BuildMachines.text(RandomMachines.text(seed)));
+        }
+        Set<PartClass> twoLead = Set.of(PartClass.RESISTOR, PartClass.RELAY, PartClass.LAMP);
+        for (Machine m : machines) {
+            Wiring w = BuildDocuments.of(m).wiring();
+            Map<String, List<String>> leadsOf = leads(w);
+            for (Part p : w.parts()) {
+                if (twoLead.contains(p.cls()) && p.owner() >= 0) {
+                    assertThat(p.ref()).as(p.role()).matches("(A\\d+)?(R|K|DS)\\d+");
+                    assertThat(leadsOf.get(p.ref())).as(p.ref() + " " + p.role()).hasSize(2);
+                }
+            }
+        }
+    }
+
+    private static Part part(Wiring w, String role) {
+        return w.parts().stream().filter(p -> p.role().equals(role)).findFirst()
+                .orElseThrow(() -> new AssertionError("no part " + role));
+    }
+
+    /** Part designator -> the names of the nodes its leads are on, lead 1 first. */
+    private static Map<String, List<String>> leads(Wiring w) {
+        Map<String, Map<String, String>> byPin = new HashMap<>();
+        for (Node n : w.nodes()) {
+            for (Lead l : n.leads()) {
+                byPin.computeIfAbsent(l.ref(), k -> new java.util.TreeMap<>()).put(l.pin(), n.name());
+            }
+        }
+        Map<String, List<String>> out = new HashMap<>();
+        byPin.forEach((ref, pins) -> out.put(ref, List.copyOf(pins.values())));
+        return out;
+    }
+
+    private static String nodeOf(Wiring w, String ref, String pin) {
+        for (Node n : w.nodes()) {
+            for (Lead l : n.leads()) {
+                if (l.ref().equals(ref) && l.pin().equals(pin)) {
+                    return n.name();
+                }
+            }
+        }
+        return null;
+    }
+}
