@@ -130,11 +130,12 @@ final class RunReport {
     /** The watched nets side by side, one row per cycle, for people. */
     private Table watchGrid() {
         boolean pc = machine.pc() != null;
-        Table t = new Table("watch_grid", pc ? "watched, at the end of each cycle (pc: the instruction the cycle ran)"
-                : "watched, at the end of each cycle");
+        // "ran", not "pc": a watched pc beside it holds the next address, and two columns named pc read as one
+        Table t = new Table("watch_grid", pc ? "watched, at the end of each cycle (ran: the address of the instruction"
+                + " the cycle ran)" : "watched, at the end of each cycle");
         t.column("cycle", "cycle", COUNT);
         if (pc) {
-            t.column("pc", "pc", COUNT);
+            t.column("ran", "ran", COUNT);
         }
         for (int i = 0; i < r.watchNames().size(); i++) {
             t.column("net_" + (i + 1), r.watchNames().get(i), TEXT);
