@@ -398,7 +398,9 @@ final class BudgetReport {
             }
         }
         List<String> parts = new ArrayList<>();
-        parts.add(Nouns.count(by[StageDraw.Origin.COMPUTED.ordinal()], "stage kind") + " computed from their circuits at the machine's rails");
+        int computed = by[StageDraw.Origin.COMPUTED.ordinal()];
+        parts.add(Nouns.count(computed, "stage kind") + " computed from " + (computed == 1 ? "its circuit" : "their circuits")
+                + " at the machine's rails");
         parts.add(by[StageDraw.Origin.DECLARED.ordinal()] + " declared");
         if (by[StageDraw.Origin.NONE.ordinal()] > 0) {
             parts.add(by[StageDraw.Origin.NONE.ordinal()] + " with neither (counted as drawing nothing)");
