@@ -2,7 +2,6 @@ package org.thermion.cli;
 
 import org.thermion.text.Nouns;
 import org.thermion.cli.report.Absent;
-import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
 import org.thermion.faults.FaultCircuit;
