@@ -143,8 +143,6 @@ class ReloadTest {
     @Test
     void namesAreListedShortAndCountedNounsAgree() {
         assertThat(Words.list(List.of("a", "b", "c", "d", "e", "f"))).isEqualTo("a, b, c, d and 2 more");
-        assertThat(Words.count(1, "switch")).isEqualTo("1 switch");
-        assertThat(Words.count(2, "switch")).isEqualTo("2 switches");
         assertThat(Notice.wrap(List.of("file:1:2: error: expected a clock phase here"), 20))
                 .containsExactly("file:1:2: error:", "    expected a clock", "    phase here");
     }
