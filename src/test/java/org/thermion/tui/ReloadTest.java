@@ -118,7 +118,7 @@ class ReloadTest {
         f.ui.reload("pumpstation.machine");
         f.ui.draw();
         assertThat(f.ui.session()).isSameAs(before);
-        assertThat(f.text()).contains("pumpstation.machine has errors").contains("pumpstation.machine:117:");
+        assertThat(f.text()).contains("pumpstation.machine has errors").contains("pumpstation.machine:134:");
         f.assertGolden("reload-error-100x30.txt");
         // The old machine still steps; saving a good file again reloads.
         f.type("c");
