@@ -20,8 +20,8 @@ class BuiltBlockBudgetTest {
     @Test
     void statedStagesAreCountedInTubesHeatersAndBplus() {
         Machine plain = PowerMachines.of(machine("offboard", "offboard", "offboard"));
-        Machine counted = PowerMachines.of(machine("uses 1 triode_flipflop per bit",
-                "offboard because \"a diode matrix\"", "uses 1 cathode_follower per phase"));
+        Machine counted = PowerMachines.of(machine("uses 1 counted_flipflop per bit",
+                "offboard because \"a diode matrix\"", "uses 1 counted_follower per phase"));
         BuiltBlock pc = counted.built().stream().filter(b -> b.block().equals("pc")).findFirst().orElseThrow();
         assertThat(pc.counted()).isTrue();
         // two bits, one flip-flop (both sections of a 12AU7) each: two envelopes in the pc module
@@ -34,10 +34,10 @@ class BuiltBlockBudgetTest {
         assertThat(counted.envelopes()).hasSize(plain.envelopes().size() + 3);
         // each new 12AU7 is on the parallel 12.6 V rule: three more heaters of 0.15 A (datasheet rating)
         assertThat(counted.heaterStrings()).hasSize(plain.heaterStrings().size() + 3);
-        // declared library draws: triode_flipflop 3.2 mA always, cathode_follower 3.0 mA always on bplus
+        // typed-in draws (counted-stages.machine): counted_flipflop 3.2 mA always, counted_follower 3.0 mA always on bplus
         int bplus = counted.railIndex("bplus");
-        Budget a = new Budget(StageDraw.declaredOnly(plain), null, HeaterLaw.HOT);
-        Budget b = new Budget(StageDraw.declaredOnly(counted), null, HeaterLaw.HOT);
+        Budget a = new Budget(plain);
+        Budget b = new Budget(counted);
         assertThat(b.staticHighRail(bplus) - a.staticHighRail(bplus)).isCloseTo(2 * 3.2e-3 + 2 * 3.0e-3, within(1e-12));
         assertThat(b.staticLowRail(bplus) - a.staticLowRail(bplus)).isCloseTo(2 * 3.2e-3 + 2 * 3.0e-3, within(1e-12));
         assertThat(b.leftOut()).containsExactly("ROM: declared offboard (a diode matrix), not made of tubes");
@@ -46,7 +46,7 @@ class BuiltBlockBudgetTest {
     @Test
     void aBlockThatStatesNothingIsLeftOutAndSaysWhy() {
         Machine m = PowerMachines.of(machine("", "", ""));
-        Budget b = new Budget(StageDraw.declaredOnly(m), null, HeaterLaw.HOT);
+        Budget b = new Budget(m);
         assertThat(b.leftOut()).hasSize(3).allSatisfy(s -> assertThat(s).contains("its stages are not stated"));
     }
 }

@@ -10,11 +10,11 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 /**
- * Draws are the library's stage declarations: pentode_inverter low 2.4 mA / high 0.05 mA
- * from bplus plus 0.2 mA bias always; triode_flipflop 3.2 mA bplus and 0.6 mA bias always.
+ * Draws are typed-in figures (counted-stages.machine): counted_inverter low 2.4 mA / high 0.05 mA
+ * from bplus plus 0.2 mA bias always; counted_flipflop 3.2 mA bplus and 0.6 mA bias always.
  */
 class CurrentMeterTest {
-    static final String SMALL = """
+    static final String SMALL = PowerMachines.COUNTED_STAGES + """
             rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
             rail bias  { voltage -24 V; source 10 ohm; limit 150 mA }
             rail heat  { voltage 12.6 V; source 0.1 ohm; limit 10 A }
@@ -23,8 +23,8 @@ class CurrentMeterTest {
               parallel 12AU7 at 12.6 V
             }
             realize {
-              not pentode_inverter
-              latch triode_flipflop
+              not counted_inverter
+              latch counted_flipflop
             }
             module top {
               in a
@@ -44,10 +44,11 @@ class CurrentMeterTest {
     @Test
     void stageDrawAddsAlwaysToTheStateDraw() {
         Machine m = PowerMachines.of(SMALL);
-        var inv = m.stages().stream().filter(s -> s.name().equals("pentode_inverter")).findFirst().orElseThrow();
+        var inv = m.stages().stream().filter(s -> s.name().equals("counted_inverter")).findFirst().orElseThrow();
         int bplus = m.railIndex("bplus");
         int bias = m.railIndex("bias");
-        StageDraw d = StageDraw.declaredOnly(m);
+        StageDraw d = StageDraw.of(m);
+        assertThat(d.origin(inv)).isEqualTo(StageDraw.Origin.DECLARED);
         assertThat(d.amps(inv, bplus, false)).isCloseTo(2.4e-3, within(1e-12));
         assertThat(d.amps(inv, bplus, true)).isCloseTo(0.05e-3, within(1e-12));
         assertThat(d.amps(inv, bias, true)).isCloseTo(0.2e-3, within(1e-12));

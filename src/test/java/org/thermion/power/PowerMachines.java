@@ -12,7 +12,22 @@ import java.nio.file.Path;
 
 /** Elaborates small machine descriptions written inside tests. */
 final class PowerMachines {
+    /**
+     * Stages known only by typed-in currents ({@code circuit none}): counted_inverter, counted_flipflop,
+     * counted_follower, counted_and, counted_or, counted_lamp. Tests of the budget's arithmetic use them,
+     * so a hand count stays a hand count; the library's stages are solved from their circuits.
+     */
+    static final String COUNTED_STAGES = read(Path.of("src/test/resources/org/thermion/power/counted-stages.machine"));
+
     private PowerMachines() {
+    }
+
+    private static String read(Path p) {
+        try {
+            return java.nio.file.Files.readString(p);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
     }
 
     static Machine of(String text) {

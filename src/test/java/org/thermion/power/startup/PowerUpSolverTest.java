@@ -115,10 +115,19 @@ class PowerUpSolverTest {
 
     @Test
     void heatersReachNinetyFivePercentAndPlateLoadsComeAlive() {
-        PowerUpResult r = PowerUpSolver.solve(inverters("2 ohm", "40 A"), PowerUpOptions.defaults());
+        // the inverters with typed-in currents (2.4 mA conducting, 0.05 mA cut off: a stage of our own, no circuit)
+        String counted = StartupMachines.inverters(88, "2 ohm", "after 10 s", "40 A").replace("realize { not pentode_inverter }", """
+                stage counted_inverter : not {
+                  tube 6AU6
+                  circuit none
+                  draw low bplus 2.4 mA
+                  draw high bplus 0.05 mA
+                }
+                realize { not counted_inverter }""");
+        PowerUpResult r = PowerUpSolver.solve(StartupMachines.elaborate(counted), PowerUpOptions.defaults());
         assertThat(r.allWarmSeconds()).isBetween(5.0, 30.0);
         RailTransient bplus = r.rails().stream().filter(x -> x.name().equals("bplus")).findFirst().orElseThrow();
-        // Nothing flows before the cathodes emit; at the end every inverter draws its 2.4 mA (library stage).
+        // Nothing flows before the cathodes emit; at the end every inverter draws its highest, 2.4 mA.
         assertThat(bplus.amps()[0]).isLessThan(1e-6);
         double expected = 88 * 2.4e-3 * 48 / (48 + 4 * 88 * 2.4e-3);   // conductance load behind the 4 ohm source
         assertThat(bplus.finalAmps()).isCloseTo(expected, within(0.01 * expected));
