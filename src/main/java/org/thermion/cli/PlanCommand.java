@@ -1,6 +1,7 @@
 package org.thermion.cli;
 
 import org.thermion.faults.Diagnosis;
+import org.thermion.faults.Separation;
 import org.thermion.faults.FaultSimulator;
 import org.thermion.faults.Plan;
 import org.thermion.faults.Step;
@@ -46,14 +47,15 @@ final class PlanCommand extends ReportCommand {
         try (FaultSimulator sim = in.simulator(options.threads);
              ProgressBar bar = ProgressBar.ticking(err, "plan", progressOptions.mode())) {
             Plan plan = in.plan(sim);
-            List<Step> steps = in.steps(sim, plan, options.distinguish);
+            Separation sep = in.separation(sim, plan, options.distinguish);
+            List<Step> steps = sep.steps();
             Diagnosis d = options.distinguish ? new Diagnosis(sim, in.faults(), steps) : null;
             int largest = d == null ? -1 : d.largestClass();
             int above = d == null ? 0 : d.classesAbove(PlanInputs.MOST_IN_GROUP);
             byte[][] expected = sim.expected(steps);
             bar.close();
             format.write(out, new PlanReport(in.machine(), in.circuit(), in.faults(), plan, steps, expected, options.program,
-                    largest, above).report());
+                    largest, above, sep.alike()).report());
         }
         out.flush();
         return ExitCodes.OK;

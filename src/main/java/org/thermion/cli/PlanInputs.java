@@ -1,12 +1,13 @@
 package org.thermion.cli;
 
-import org.thermion.faults.Diagnosis;
 import org.thermion.faults.Effort;
 import org.thermion.faults.FaultCircuit;
 import org.thermion.faults.FaultList;
 import org.thermion.faults.FaultSimulator;
 import org.thermion.faults.Plan;
 import org.thermion.faults.PlanGenerator;
+import org.thermion.faults.Separation;
+import org.thermion.faults.SocketPins;
 import org.thermion.faults.Step;
 import org.thermion.model.Machine;
 
@@ -50,7 +51,7 @@ record PlanInputs(Machine machine, Path program, long[] rom, FaultCircuit circui
             err.println(machineFile + ": " + nothingToWatch(m));
             return null;
         }
-        return new PlanInputs(m, program, rom, c, FaultList.of(c), loader);
+        return new PlanInputs(m, program, rom, c, FaultList.of(c, SocketPins.of(m)), loader);
     }
 
     /** What a builder is told about a machine that shows nothing: what to declare so it does. */
@@ -72,6 +73,12 @@ record PlanInputs(Machine machine, Path program, long[] rom, FaultCircuit circui
 
     /** The plan's steps, extended with distinguishing steps when asked. */
     List<Step> steps(FaultSimulator sim, Plan plan, boolean distinguish) {
-        return distinguish ? Diagnosis.extend(sim, faults, plan.steps(), MOST_IN_GROUP, Effort.DEFAULT) : plan.steps();
+        return separation(sim, plan, distinguish).steps();
+    }
+
+    /** The plan extended with distinguishing steps when asked, with the groups that stay too large and why. */
+    Separation separation(FaultSimulator sim, Plan plan, boolean distinguish) {
+        return distinguish ? Separation.of(sim, faults, plan.steps(), MOST_IN_GROUP, Effort.DEFAULT)
+                : new Separation(plan.steps(), List.of());
     }
 }

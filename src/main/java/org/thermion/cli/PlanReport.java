@@ -5,13 +5,13 @@ import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
 import org.thermion.faults.FaultCircuit;
-import org.thermion.faults.Effort;
 import org.thermion.faults.Fault;
 import org.thermion.faults.FaultList;
 import org.thermion.faults.FaultPlace;
 import org.thermion.faults.FaultSimulator;
 import org.thermion.faults.Outcome;
 import org.thermion.faults.Plan;
+import org.thermion.faults.Separation;
 import org.thermion.faults.Step;
 import org.thermion.model.Machine;
 
@@ -37,9 +37,10 @@ final class PlanReport {
     private final Path program;
     private final int largest;
     private final int above;
+    private final List<Separation.Alike> alike;
 
     PlanReport(Machine m, FaultCircuit c, FaultList faults, Plan plan, List<Step> steps, byte[][] expected, Path program,
-               int largest, int above) {
+               int largest, int above, List<Separation.Alike> alike) {
         this.m = m;
         this.c = c;
         this.faults = faults;
@@ -49,17 +50,21 @@ final class PlanReport {
         this.program = program;
         this.largest = largest;
         this.above = above;
+        this.alike = List.copyOf(alike);
     }
 
     Report report() {
         Report r = new Report("plan", VERSION);
-        int tube = faults.all().size() - faults.stuckAtCount();
+        int bridges = faults.bridges().size();
+        int tube = faults.all().size() - faults.stuckAtCount() - bridges;
         r.field("machine", m.name());
         r.field("program", program == null ? new Absent("none") : program.toString());
         r.field("stuck_at_faults", faults.stuckAtCount());
         r.field("stuck_at_collapsed", faults.stuckAtCollapsedCount());
         r.field("stuck_at_targets", faults.stuckAtTargetCount());
         r.field("tube_faults", tube);
+        r.field("bridge_faults", bridges);
+        r.field("bridge_collapsed", faults.bridgeCollapsedCount());
         r.field("steps", steps.size());
         for (Outcome o : Outcome.values()) {
             r.field(o.name().toLowerCase(Locale.ROOT), plan.count(o));
@@ -69,14 +74,18 @@ final class PlanReport {
         head.add(String.format(Locale.ROOT, "bring-up plan for machine %s%s", m.name(),
                 program == null ? "" : " running " + program));
         head.add(String.format(Locale.ROOT, "  faults: %d stuck-at (%d after equivalence collapsing, %d aimed at after "
-                + "dominance), %d tube, heater, relay and lamp faults", faults.stuckAtCount(),
-                faults.stuckAtCollapsedCount(), faults.stuckAtTargetCount(), tube));
+                + "dominance), %d tube, heater, relay and lamp faults, %d solder bridges between neighbouring "
+                + "socket pins (%d pairs of nets)", faults.stuckAtCount(), faults.stuckAtCollapsedCount(),
+                faults.stuckAtTargetCount(), tube, bridges, faults.bridgeCollapsedCount()));
         head.add("  switch on, then follow the steps: set the switches, clock the cycles, compare the lamps");
         head.add("  lamps: lit = expect lit, dark = every other lamp dark, unknown = not yet settled, ignore");
         head.add("");
         r.text(head);
         r.table(stepTable());
         r.table(faultTable());
+        if (!alike.isEmpty()) {
+            r.table(groupTable());
+        }
         List<String> tail = new ArrayList<>();
         tail.add("");
         StringBuilder counts = new StringBuilder();
@@ -87,10 +96,8 @@ final class PlanReport {
         if (largest >= 0) {
             tail.add("largest group of faults the steps cannot tell apart: " + largest);
             if (above > 0) {
-                tail.add(Numbers.count(above, "group") + " still "
-                        + (above == 1 ? "holds" : "hold") + " more than " + PlanInputs.MOST_IN_GROUP + " faults: no "
-                        + "switch setting clocked up to " + Effort.DEFAULT.maxCycles() + " cycles after the plan tells "
-                        + (above == 1 ? "its" : "their") + " faults apart; " + alike());
+                tail.add(Numbers.count(above, "group") + " still " + (above == 1 ? "holds" : "hold") + " more than "
+                        + PlanInputs.MOST_IN_GROUP + " faults (table groups): " + alike());
             }
         }
         r.text(tail);
@@ -99,11 +106,37 @@ final class PlanReport {
 
     // Why such groups stay: the program a ROM machine runs is fixed, the switches are all a switch-fed one has.
     private String alike() {
+        boolean proven = alike.stream().allMatch(Separation.Alike::proven);
+        String how = proven ? "proven for each: " : "proven where the table says yes (elsewhere the search budget ran out): ";
         if (program != null) {
-            return "they look alike at every lamp while this program runs (a second program that runs the"
-                    + " instructions and bit addresses this one leaves out would tell them apart)";
+            return how + "no run of steps after the plan, under any switch settings, tells its faults apart at the lamps"
+                    + " while this program runs; column other program says whether a second program showed them apart,"
+                    + " column lamp on which net's lamp would split them";
         }
-        return "they look alike at every lamp for every setting of the switches";
+        return how + "no run of steps after the plan, under any switch settings, tells its faults apart at the lamps;"
+                + " they differ inside the machine only, and a lamp on the net named would split them";
+    }
+
+    private Table groupTable() {
+        Table t = new Table("groups", "groups the steps cannot split")
+                .column("faults", "faults", COUNT, "distinct faults in the group")
+                .column("proven", "proven", TEXT, "yes: no run of steps after the plan tells them apart")
+                .column("lamp_on", "lamp on", TEXT, "the net whose lamp would split the group best")
+                .column("split", "split", TEXT, "the parts that lamp would split it into")
+                .column("other_program", "other program", TEXT, "splits: a random program ("
+                        + Separation.PROGRAMS + " tried) shows them apart; no: none did; -: no ROM")
+                .column("members", "members", TEXT);
+        for (Separation.Alike a : alike) {
+            List<String> names = new ArrayList<>();
+            for (Fault f : a.faults()) {
+                names.add(FaultPlace.of(c, f).text());
+            }
+            t.row(a.faults().size(), a.proven() ? "yes" : "no", a.net() == null ? "(none)" : a.net(),
+                    a.parts().isEmpty() ? "(none)" : a.parts().stream().map(String::valueOf)
+                            .collect(java.util.stream.Collectors.joining(" + ")),
+                    a.otherProgram() == null ? "-" : a.otherProgram() ? "splits" : "no", String.join("; ", names));
+        }
+        return t;
     }
 
     private Table stepTable() {

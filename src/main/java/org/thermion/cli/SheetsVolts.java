@@ -9,6 +9,7 @@ import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
 import org.thermion.faults.FaultCircuit;
 import org.thermion.faults.FaultList;
+import org.thermion.faults.SocketPins;
 import org.thermion.faults.FaultSimulator;
 import org.thermion.faults.Step;
 import org.thermion.model.Machine;
@@ -87,7 +88,7 @@ final class SheetsVolts extends SheetsDocument {
             err.println(options.machineFile + ": " + PlanInputs.nothingToWatch(m));
             return null;
         }
-        PlanInputs in = new PlanInputs(m, program, rom, c, FaultList.of(c), options.loader);
+        PlanInputs in = new PlanInputs(m, program, rom, c, FaultList.of(c, SocketPins.of(m)), options.loader);
         try (FaultSimulator sim = in.simulator(2)) {
             return in.plan(sim).steps();
         }

@@ -312,7 +312,7 @@ public final class Diagnosis {
         return h;
     }
 
-    private static long squares(long[] keys) {
+    static long squares(long[] keys) {
         long[] k = keys.clone();
         Arrays.sort(k);
         long sum = 0;

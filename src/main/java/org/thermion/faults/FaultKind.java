@@ -13,7 +13,9 @@ public enum FaultKind {
     /** A relay that never pulls in. */
     RELAY_OPEN("relay never pulls in"),
     /** A burnt-out lamp: it stays dark whatever its net does. */
-    LAMP_BURNT("burnt-out lamp");
+    LAMP_BURNT("burnt-out lamp"),
+    /** A solder bridge between neighbouring socket pins joining two nets. */
+    BRIDGE("solder bridge");
 
     public final String words;
 

@@ -17,7 +17,9 @@ import java.util.Map;
  * The fault list of a machine: single stuck-at-0 and stuck-at-1 on every wire (inputs, stage
  * outputs, fan-out branches, program-memory lines), and the faults a tube builder meets, each
  * as the wires it forces: dead tubes, open heaters in series strings, relays that never pull
- * in, burnt-out lamps. Stuck-at faults are collapsed by structural equivalence (a gate's
+ * in, burnt-out lamps; and, once the sockets' pins are known, solder bridges between neighbouring
+ * pins that join two nets ({@link Bridge}, one per pair of pins; the collapsed list keeps one per
+ * pair of nets, since two bridges joining the same nets act alike). Stuck-at faults are collapsed by structural equivalence (a gate's
  * controlling value on an input is its output stuck at the value that input forces);
  * dominance marks further faults that plan generation need not aim at, never used for
  * diagnosis.
@@ -32,8 +34,10 @@ public final class FaultList {
     /** The stuck-at fault of (slot, value) at {@code slot * 2 + value}, or -1. */
     private final int[] saIndex;
     private final int stuckAtCollapsed;
+    private final List<Bridge> bridges;
+    private final int bridgeCollapsed;
 
-    private FaultList(FaultCircuit c) {
+    private FaultList(FaultCircuit c, List<SocketPins> sockets) {
         this.circuit = c;
         Machine m = c.machine;
         List<Fault> f = new ArrayList<>();
@@ -97,6 +101,28 @@ public final class FaultList {
         }
 
         tubeFaults(c, f);
+        int firstBridge = f.size();
+        List<Bridge> br = new ArrayList<>();
+        Map<Long, Integer> byNets = new LinkedHashMap<>();
+        List<Integer> bridgeClass = new ArrayList<>();
+        BridgeRule rule = new BridgeRule(c);
+        for (SocketPins sp : sockets) {
+            for (int[] pq : SocketPins.neighbours(sp.base(), sp.pins())) {
+                int a = sp.net(pq[0]);
+                int b = sp.net(pq[1]);
+                if (a < 0 || b < 0 || a == b || !sites.get(a).line() || !sites.get(b).line()) {
+                    continue;
+                }
+                Bridge bridge = rule.bridge(a, b, sp, pq[0], pq[1]);
+                long key = (long) bridge.slotA() << 32 | bridge.slotB();
+                Integer first = byNets.putIfAbsent(key, f.size());
+                bridgeClass.add(first == null ? f.size() : first);
+                f.add(new Fault(f.size(), FaultKind.BRIDGE, br.size(), List.of(), bridge));
+                br.add(bridge);
+            }
+        }
+        this.bridges = List.copyOf(br);
+        this.bridgeCollapsed = byNets.size();
         this.all = List.copyOf(f);
         classOf = new int[all.size()];
         System.arraycopy(classIds, 0, classOf, 0, stuckAtCount);
@@ -104,16 +130,27 @@ public final class FaultList {
         for (int i = 0; i < stuckAtCount; i++) {
             dominated[i] = domClass[classIds[i]];
         }
-        for (int i = stuckAtCount; i < all.size(); i++) {
+        for (int i = stuckAtCount; i < firstBridge; i++) {
             classOf[i] = i;
             reps.add(all.get(i));
+        }
+        for (int i = firstBridge; i < all.size(); i++) {
+            classOf[i] = bridgeClass.get(i - firstBridge);
+            if (classOf[i] == i) {
+                reps.add(all.get(i));
+            }
         }
         this.collapsed = List.copyOf(reps);
     }
 
     /** Builds the fault list of a flattened machine. */
     public static FaultList of(FaultCircuit c) {
-        return new FaultList(c);
+        return new FaultList(c, List.of());
+    }
+
+    /** Builds the fault list with solder bridges between neighbouring pins of {@code sockets}. */
+    public static FaultList of(FaultCircuit c, List<SocketPins> sockets) {
+        return new FaultList(c, sockets);
     }
 
     private static void equivalences(GateFn fn, UnionFind uf, int[] sa, int pin, int out, int n) {
@@ -232,7 +269,7 @@ public final class FaultList {
         return circuit;
     }
 
-    /** Every fault, stuck-at faults first (two per wire), then the tube builder's faults. */
+    /** Every fault, stuck-at faults first (two per wire), then the tube builder's faults, then bridges. */
     public List<Fault> all() {
         return all;
     }
@@ -252,6 +289,9 @@ public final class FaultList {
      * (a dead single-stage tube is its output stuck), equivalent stuck-at faults share a key.
      */
     public String effect(Fault f) {
+        if (f.bridge() != null) {
+            return "br" + f.bridge().slotA() + "-" + f.bridge().slotB();
+        }
         if (f.forces().size() == 1) {
             Force x = f.forces().get(0);
             int sa = saIndex[x.slot() * 2 + (x.value() ? 1 : 0)];
@@ -281,6 +321,16 @@ public final class FaultList {
     /** True when plan generation need not aim at this fault (it dominates another). */
     public boolean dominated(int id) {
         return dominated[id];
+    }
+
+    /** Every solder bridge of the full list, in order ({@link Fault#subject()} indexes it). */
+    public List<Bridge> bridges() {
+        return bridges;
+    }
+
+    /** Bridges in the collapsed list: one per pair of nets joined. */
+    public int bridgeCollapsedCount() {
+        return bridgeCollapsed;
     }
 
     public int stuckAtCount() {

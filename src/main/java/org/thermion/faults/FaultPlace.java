@@ -43,6 +43,17 @@ public record FaultPlace(String module, String stage, String net, String envelop
                 FaultPlace w = wire(c, c.sites().get(g.output()), f.kind().words);
                 return new FaultPlace(w.module, w.stage, w.net, w.envelope, w.text);
             }
+            case BRIDGE: {
+                Bridge b = f.bridge();
+                String a = shown(m.netlist().netName(b.slotA()));
+                String other = shown(m.netlist().netName(b.slotB()));
+                int module = b.envelope() >= 0 && b.envelope() < m.envelopes().size()
+                        ? m.envelopes().get(b.envelope()).module() : -1;
+                String env = b.tube() + " (" + b.type() + ")";
+                return new FaultPlace(module(m, module), "", a + " / " + other, env, f.kind().words + " on socket "
+                        + b.socket() + " pins " + Math.min(b.pinA(), b.pinB()) + "-" + Math.max(b.pinA(), b.pinB())
+                        + ": " + name(a) + " and " + name(other) + ", " + b.behaviour(a, other));
+            }
             default: {
                 ObservedLamp lamp = c.lamps().get(f.subject());
                 return new FaultPlace("", "", m.netlist().netName(lamp.net()), "", "lamp " + lamp.name() + ": "
@@ -102,10 +113,29 @@ public record FaultPlace(String module, String stage, String net, String envelop
     /** How a net the elaborator made for a sub-expression (no name in the source) is shown. */
     static final String UNNAMED = "(unnamed)";
 
+    /** Stem {@code slot}'s net as a builder finds it: its name, or for a net with none the stage driving it. */
+    static String netLabel(FaultCircuit c, int slot) {
+        FaultPlace p = wire(c, c.sites().get(slot), "");
+        if (!p.net.equals(UNNAMED)) {
+            return p.net;
+        }
+        return "the unnamed output of " + (p.stage.isEmpty() ? "a stage" : p.stage)
+                + (p.module.isEmpty() ? "" : " in " + p.module) + (p.envelope.isEmpty() ? "" : ", tube " + p.envelope);
+    }
+
+    /** A net's name as a builder is shown it: a generated net ("lu.$18") as {@link #UNNAMED}. */
+    static String shownName(String net) {
+        return shown(net);
+    }
+
     // A generated net ("lu.$18") means nothing to a builder: say it has no name.
     private static String shown(String net) {
         int dot = net.lastIndexOf('.');
         return net.startsWith("$", dot + 1) ? UNNAMED : net;
+    }
+
+    private static String name(String net) {
+        return net.equals(UNNAMED) ? "an unnamed net" : "net " + net;
     }
 
     private static String arrow(String net) {

@@ -123,9 +123,7 @@ public final class FaultSimulator implements AutoCloseable {
     LaneMachine loaded(List<Fault> faults, int from, int n) {
         LaneMachine m = machine();
         for (int l = 0; l < n; l++) {
-            for (Force f : faults.get(from + l).forces()) {
-                m.force(f.slot(), f.value(), 1L << l);
-            }
+            m.inject(faults.get(from + l), 1L << l);
         }
         m.powerUp();
         return m;

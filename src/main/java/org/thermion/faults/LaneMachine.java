@@ -8,6 +8,13 @@ import java.util.Arrays;
  * own faults as force masks per slot ({@code f0}: forced to 0, {@code f1}: forced to 1),
  * applied wherever a slot is written, so one flat program serves every batch of faults.
  * Latches power up unknown, the program counter at 0; each lane has its own counter.
+ *
+ * <p>A lane may instead carry a solder bridge: both nets then show one joined value, which
+ * depends on what their drivers give. A settle then runs the program until the joined values stop
+ * changing, starting them unknown: every operation is monotone in three-valued logic, so the
+ * values only ever become known and the result is the least fixed point, whatever the order (a
+ * bridge that closes a loop and finds no stable level stays unknown). A latch output's joined value
+ * is what it holds afterwards: a flip-flop pulled over by a bridge stays over.
  */
 final class LaneMachine {
     static final int LANES = 64;
@@ -24,6 +31,18 @@ final class LaneMachine {
     private final long[] loadV;
     private final long[] loadX;
     private final int pcMask;
+    // Solder bridges (allocated with the first): per bridge its lanes; per slot the lanes it is
+    // joined on, the joined value and the value its driver gives on its own.
+    private Bridge[] bridges = new Bridge[0];
+    private long[] bridgeLanes = new long[0];
+    private int[] bridgedSlots = new int[0];
+    private long[] bm;
+    private long[] jv;
+    private long[] jx;
+    private long[] rawV;
+    private long[] rawX;
+    private long[] swV;
+    private long[] swX;
 
     LaneMachine(FaultCircuit c, long[] rom) {
         this.c = c;
@@ -50,13 +69,55 @@ final class LaneMachine {
             x[q] = -1L;
         }
         v[1] = -1L;
+        if (swV != null) {
+            Arrays.fill(swV, 0L);
+            Arrays.fill(swX, 0L);
+        }
         Arrays.fill(pc, 0);
         pcX = 0L;
         nextPhase = 1;
         forceSources();
     }
 
-    /** Forces {@code slot} to {@code value} on the lanes in {@code lanes}. */
+    /** Puts fault {@code f} on the lanes in {@code lanes}. */
+    void inject(Fault f, long lanes) {
+        for (Force x : f.forces()) {
+            force(x.slot(), x.value(), lanes);
+        }
+        if (f.bridge() != null) {
+            bridge(f.bridge(), lanes);
+        }
+    }
+
+    /** Joins the bridge's two nets on the lanes in {@code lanes}. */
+    void bridge(Bridge b, long lanes) {
+        if (bm == null) {
+            bm = new long[c.slotCount];
+            jv = new long[c.slotCount];
+            jx = new long[c.slotCount];
+            rawV = new long[c.slotCount];
+            rawX = new long[c.slotCount];
+            swV = new long[c.slotCount];
+            swX = new long[c.slotCount];
+            for (int s : c.inputSlots) {
+                swV[s] = v[s];
+                swX[s] = x[s];
+            }
+        }
+        int n = bridges.length;
+        bridges = Arrays.copyOf(bridges, n + 1);
+        bridgeLanes = Arrays.copyOf(bridgeLanes, n + 1);
+        bridges[n] = b;
+        bridgeLanes[n] = lanes;
+        for (int s : new int[] {b.slotA(), b.slotB()}) {
+            if (bm[s] == 0L) {
+                bridgedSlots = Arrays.copyOf(bridgedSlots, bridgedSlots.length + 1);
+                bridgedSlots[bridgedSlots.length - 1] = s;
+            }
+            bm[s] |= lanes;
+        }
+    }
+
     void force(int slot, boolean value, long lanes) {
         if (value) {
             f1[slot] |= lanes;
@@ -70,6 +131,10 @@ final class LaneMachine {
         int s = c.inputSlots[i];
         v[s] = lanes;
         x[s] = 0L;
+        if (swV != null) {
+            swV[s] = lanes;
+            swX[s] = 0L;
+        }
     }
 
     /** Sets every input alike on every lane. */
@@ -132,6 +197,75 @@ final class LaneMachine {
             readRom();
         }
         forceSources();
+        if (bm == null) {
+            run();
+            return;
+        }
+        for (int s : bridgedSlots) {
+            // what it gives on its own: a switch its setting (a joined value may sit in v), a ROM
+            // line or a latch what it holds; other lanes' forces applied
+            if (c.sites().get(s).place() == Site.Place.INPUT) {
+                long m = f0[s] | f1[s];
+                rawV[s] = (swV[s] & ~m) | f1[s];
+                rawX[s] = swX[s] & ~m;
+            } else {
+                rawV[s] = v[s];
+                rawX[s] = x[s];
+            }
+            jv[s] = 0L;
+            jx[s] = bm[s];
+        }
+        for (int pass = 0; pass <= LANES + 1; pass++) {
+            for (int s : bridgedSlots) {
+                if (c.sites().get(s).place().stem() && c.sites().get(s).place() != Site.Place.GATE_OUT) {
+                    long b = bm[s];
+                    v[s] = (rawV[s] & ~b) | (jv[s] & b);
+                    x[s] = (rawX[s] & ~b) | (jx[s] & b);
+                }
+            }
+            run();
+            if (!joinAgain()) {
+                return;
+            }
+        }
+    }
+
+    // Joins each bridge's two driven values; true when some joined value changed.
+    private boolean joinAgain() {
+        boolean changed = false;
+        for (int k = 0; k < bridges.length; k++) {
+            Bridge br = bridges[k];
+            long lanes = bridgeLanes[k];
+            int a = br.slotA();
+            int b = br.slotB();
+            long a1 = rawV[a] | rawX[a];
+            long a0 = ~rawV[a] | rawX[a];
+            long b1 = rawV[b] | rawX[b];
+            long b0 = ~rawV[b] | rawX[b];
+            long can1 = a1 & b1;
+            long can0 = a0 & b0;
+            long m01 = a0 & b1;
+            long m10 = a1 & b0;
+            can1 |= br.whenA0B1() != 0 ? m01 : 0L;
+            can0 |= br.whenA0B1() != 1 ? m01 : 0L;
+            can1 |= br.whenA1B0() != 0 ? m10 : 0L;
+            can0 |= br.whenA1B0() != 1 ? m10 : 0L;
+            long nx = can1 & can0 & lanes;
+            long nv = can1 & ~can0 & lanes;
+            if ((((jv[a] ^ nv) | (jx[a] ^ nx)) & lanes) != 0L) {
+                changed = true;
+                jv[a] = (jv[a] & ~lanes) | nv;
+                jx[a] = (jx[a] & ~lanes) | nx;
+                jv[b] = (jv[b] & ~lanes) | nv;
+                jx[b] = (jx[b] & ~lanes) | nx;
+            }
+        }
+        return changed;
+    }
+
+    /** Every operation of the flat program in order (a bridged gate output keeps its driven value aside). */
+    private void run() {
+        final long[] bm = this.bm;
         final int[] code = c.code;
         final long[] v = this.v;
         final long[] x = this.x;
@@ -195,6 +329,13 @@ final class LaneMachine {
             long m = f0[out] | f1[out];
             v[out] = (rv & ~m) | f1[out];
             x[out] = rx & ~m;
+            if (bm != null && bm[out] != 0L) {
+                long b = bm[out];
+                rawV[out] = v[out];
+                rawX[out] = x[out];
+                v[out] = (v[out] & ~b) | (jv[out] & b);
+                x[out] = (x[out] & ~b) | (jx[out] & b);
+            }
         }
     }
 
@@ -325,6 +466,12 @@ final class LaneMachine {
         System.arraycopy(o.pc, 0, pc, 0, LANES);
         pcX = o.pcX;
         nextPhase = o.nextPhase;
+        if (swV != null) {
+            for (int s : c.inputSlots) {
+                swV[s] = o.swV != null ? o.swV[s] : o.v[s];
+                swX[s] = o.swV != null ? o.swX[s] : o.x[s];
+            }
+        }
     }
 
 }

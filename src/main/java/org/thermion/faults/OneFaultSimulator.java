@@ -38,6 +38,7 @@ public final class OneFaultSimulator {
             List<Port> ins = m.inputs();
             for (int i = 0; i < ins.size(); i++) {
                 r.val[ins.get(i).net()] = (byte) (st.input(i) ? 1 : 0);
+                r.switches[ins.get(i).net()] = r.val[ins.get(i).net()];
             }
             for (int k = 0; k < st.cycles() * m.clock().phases(); k++) {
                 r.phase();
@@ -54,13 +55,21 @@ public final class OneFaultSimulator {
     private final class Run {
         final byte[] val = new byte[m.netlist().netCount()];
         final byte[] stem = new byte[val.length];
+        final byte[] switches = new byte[val.length];
         final Fault fault;
+        final Bridge bridge;
+        // A bridge's joined value, and what each of its two nets' drivers gives on its own.
+        byte joined;
+        byte ownA;
+        byte ownB;
+        boolean walking;
         int pc;
         boolean pcUnknown;
         int nextPhase = 1;
 
         Run(Fault fault) {
             this.fault = fault;
+            this.bridge = fault == null ? null : fault.bridge();
             Arrays.fill(stem, (byte) -1);
             if (fault != null) {
                 for (Force f : fault.forces()) {
@@ -93,9 +102,53 @@ public final class OneFaultSimulator {
             if (stem[net] >= 0) {
                 val[net] = stem[net];
             }
+            if (walking && bridge != null && (net == bridge.slotA() || net == bridge.slotB())) {
+                if (net == bridge.slotA()) {
+                    ownA = val[net];
+                } else {
+                    ownB = val[net];
+                }
+                val[net] = joined;
+            }
         }
 
+        /**
+         * Without a bridge, one walk of the netlist. With one, walks again and again from the joined
+         * value unknown until it stays the same; a latch starts every walk from what it held.
+         */
         void settle() {
+            if (bridge == null) {
+                walk();
+                return;
+            }
+            walking = true;
+            byte heldA = val[bridge.slotA()];
+            byte heldB = val[bridge.slotB()];
+            joined = X;
+            while (true) {
+                val[bridge.slotA()] = source(bridge.slotA(), heldA);
+                val[bridge.slotB()] = source(bridge.slotB(), heldB);
+                walk();
+                byte j = bridge.join(ownA, ownB);
+                if (j == joined) {
+                    walking = false;
+                    return;
+                }
+                joined = j;
+            }
+        }
+
+        // What a net that no gate drives shows before the walk: a switch its setting, a latch what it held.
+        private byte source(int net, byte held) {
+            for (Port p : m.inputs()) {
+                if (p.net() == net) {
+                    return switches[net];
+                }
+            }
+            return held;
+        }
+
+        void walk() {
             if (m.rom() != null) {
                 int[] d = m.rom().dataNets();
                 long word = pc < rom.length ? rom[pc] : 0L;

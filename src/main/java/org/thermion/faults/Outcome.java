@@ -13,9 +13,10 @@ public enum Outcome {
     /**
      * Proven: no sequence of steps shows a known wrong lamp, but the fault leaves some lamp
      * unknown where the good machine's is known (it keeps the machine from leaving its unknown
-     * power-up state; a builder may see it, depending on how the flip-flops came up).
+     * power-up state, or a solder bridge joins two drivers that fight to a level between the
+     * thresholds; a builder may see it, depending on how the flip-flops came up or where the level sits).
      */
-    UNKNOWN_STATE("undetectable from an unknown power-up state: lamps stay unknown"),
+    UNKNOWN_STATE("undetectable: lamps stay unknown"),
     /** The effort budget ran out before it was detected or proven undetectable. */
     ABORTED("aborted: effort budget ran out");
 

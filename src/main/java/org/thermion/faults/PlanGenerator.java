@@ -153,6 +153,11 @@ public final class PlanGenerator {
     }
 
     private static boolean provokable(Fault f, long[] seen0, long[] seen1) {
+        Bridge b = f.bridge();
+        if (b != null) {
+            // seen apart, each at some time: more than the two ever being unlike at once, so sound
+            return (seen0[b.slotA()] != 0L && seen1[b.slotB()] != 0L) || (seen1[b.slotA()] != 0L && seen0[b.slotB()] != 0L);
+        }
         for (Force x : f.forces()) {
             if ((x.value() ? seen0[x.slot()] : seen1[x.slot()]) != 0L) {
                 return true;
@@ -162,8 +167,8 @@ public final class PlanGenerator {
     }
 
     private static boolean reaches(Fault f, boolean[] observable) {
-        for (Force x : f.forces()) {
-            if (observable[x.slot()]) {
+        for (int slot : f.slots()) {
+            if (observable[slot]) {
                 return true;
             }
         }
@@ -171,7 +176,7 @@ public final class PlanGenerator {
     }
 
     /** Runs of cycles with the same settings become one step: the search's path shows the fault at its last cycle. */
-    private static List<Step> merge(List<boolean[]> cycles) {
+    static List<Step> merge(List<boolean[]> cycles) {
         List<Step> out = new ArrayList<>();
         int k = 0;
         while (k < cycles.size()) {
@@ -385,7 +390,7 @@ public final class PlanGenerator {
         return out;
     }
 
-    private static List<boolean[]> sample(int n, int count) {
+    static List<boolean[]> sample(int n, int count) {
         Random r = new Random(n * 7919L + count);
         List<boolean[]> out = new ArrayList<>();
         out.add(new boolean[n]);

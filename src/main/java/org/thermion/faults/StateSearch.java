@@ -67,7 +67,7 @@ final class StateSearch {
         FaultCircuit c = sim.circuit();
         long[] seen0 = new long[c.slotCount];
         long[] seen1 = new long[c.slotCount];
-        Result r = search(fault, faulty, fl, faulty, fl, seen0, seen1, true);
+        Result r = search(fault, faulty, fl, faulty, fl, seen0, seen1, true, null);
         if (r.end() != End.EXHAUSTED) {
             return false;
         }
@@ -80,20 +80,32 @@ final class StateSearch {
     }
 
     private Result search(Fault fault, LaneMachine good, int gl, LaneMachine faulty, int fl, long[] seen0, long[] seen1) {
-        return search(fault, good, gl, faulty, fl, seen0, seen1, false);
+        return search(fault, good, gl, faulty, fl, seen0, seen1, false, null);
     }
 
-    /** {@code faultyAlone}: both machines carry the fault (one machine's reach; nothing is ever found). */
+    /**
+     * Searches for a run of cycles that tells fault {@code a}'s machine from fault {@code b}'s,
+     * starting from lane 0 of {@code withA} and {@code withB} (machines carrying them, at a cycle
+     * start): FOUND with the settings, EXHAUSTED when no run of cycles ever can.
+     */
+    Result tellApart(Fault a, LaneMachine withA, Fault b, LaneMachine withB) {
+        return search(b, withA, 0, withB, 0, null, null, false, a);
+    }
+
+    /**
+     * {@code faultyAlone}: both machines carry the fault (one machine's reach; nothing is ever found);
+     * {@code other}: the first machine carries that fault instead of none.
+     */
     private Result search(Fault fault, LaneMachine good, int gl, LaneMachine faulty, int fl, long[] seen0, long[] seen1,
-                          boolean faultyAlone) {
+                          boolean faultyAlone, Fault other) {
         FaultCircuit c = sim.circuit();
         LaneMachine g = sim.machine();
         LaneMachine b = sim.machine();
-        for (Force f : fault.forces()) {
-            b.force(f.slot(), f.value(), -1L);
-            if (faultyAlone) {
-                g.force(f.slot(), f.value(), -1L);
-            }
+        b.inject(fault, -1L);
+        if (faultyAlone) {
+            g.inject(fault, -1L);
+        } else if (other != null) {
+            g.inject(other, -1L);
         }
         int kw = g.keyWords();
         List<long[]> nodes = new ArrayList<>();
@@ -202,6 +214,13 @@ final class StateSearch {
     /** Lanes where some wire of the fault holds a known value other than the one the fault forces. */
     static long provoked(Fault fault, LaneMachine good) {
         long p = 0L;
+        Bridge br = fault.bridge();
+        if (br != null) {
+            // the two nets known and different: the bridge joins unlike levels
+            int a = br.slotA();
+            int b = br.slotB();
+            p |= ~good.x[a] & ~good.x[b] & (good.v[a] ^ good.v[b]);
+        }
         for (Force f : fault.forces()) {
             long v = good.v[f.slot()];
             p |= ~good.x[f.slot()] & (f.value() ? ~v : v);

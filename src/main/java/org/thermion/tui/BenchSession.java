@@ -4,6 +4,7 @@ import org.thermion.faults.Diagnosis;
 import org.thermion.faults.Effort;
 import org.thermion.faults.FaultCircuit;
 import org.thermion.faults.FaultList;
+import org.thermion.faults.SocketPins;
 import org.thermion.faults.FaultPlace;
 import org.thermion.faults.FaultSimulator;
 import org.thermion.faults.PlanGenerator;
@@ -45,7 +46,7 @@ final class BenchSession {
             throw new IllegalArgumentException("machine " + machine.name() + " has no lamps: declare outputs in its "
                     + "machine block, or drive a lamp with a lamp or relay stage");
         }
-        this.faults = FaultList.of(circuit);
+        this.faults = FaultList.of(circuit, SocketPins.of(machine));
         this.sim = new FaultSimulator(circuit, rom, 2);
         this.steps = new PlanGenerator(sim, faults, Effort.DEFAULT).generate().steps();
         this.expected = sim.expected(steps);

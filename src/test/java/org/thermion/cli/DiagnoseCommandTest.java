@@ -23,8 +23,8 @@ class DiagnoseCommandTest {
 
     @Test
     void lampsOfAWorkingMachineSayNothingIsWrongAndExitZero(@org.junit.jupiter.api.io.TempDir Path dir) throws IOException {
-        // What c17's plan expects at its four steps (the plan command's golden file): n23; n22; both; none.
-        Path f = seen(dir, "step,n22,n23", "1,0,1", "2,1,0", "3,1,1", "4,0,0");
+        // What c17's plan expects at its four steps (the plan command's golden file): n22; n23; both; none.
+        Path f = seen(dir, "step,n22,n23", "1,1,0", "2,0,1", "3,1,1", "4,0,0");
         ReportChecks.Result r = ReportChecks.run("diagnose", C17, f.toString(), "--format", "json");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.OK);
         JsonNode tree = ReportChecks.assertJson(r.out());
@@ -34,8 +34,8 @@ class DiagnoseCommandTest {
 
     @Test
     void aLampStuckLitPointsAtItsNandStageAndTubeFirst(@org.junit.jupiter.api.io.TempDir Path dir) throws IOException {
-        // n22 lit at every step where the plan expects it dark (steps 1 and 4): n22 stuck at 1.
-        Path f = seen(dir, "step,n22,n23", "1,1,1", "2,1,0", "3,1,1", "4,1,0");
+        // n22 lit at every step where the plan expects it dark (steps 2 and 4): n22 stuck at 1.
+        Path f = seen(dir, "step,n22,n23", "1,1,0", "2,1,1", "3,1,1", "4,1,0");
         ReportChecks.Result r = ReportChecks.run("diagnose", C17, f.toString(), "--format", "json");
         assertThat(r.code()).as(r.err()).isEqualTo(ExitCodes.CHECK_FAILED);
         JsonNode tree = ReportChecks.assertJson(r.out());

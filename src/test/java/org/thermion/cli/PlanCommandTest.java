@@ -34,6 +34,24 @@ class PlanCommandTest {
     }
 
     @Test
+    void theBringUpPanelsDistinguishedPlanSaysWhyEachLargeGroupStaysAndWhichLampWouldSplitIt() {
+        ReportChecks.Result r = ReportChecks.run("plan", "examples/bringup-panel/bringup-panel.machine", "--distinguish",
+                "--format", "json");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode tree = ReportChecks.assertJson(r.out());
+        assertThat(tree.path("bridge_faults").asInt()).isGreaterThanOrEqualTo(tree.path("bridge_collapsed").asInt())
+                .isPositive();
+        JsonNode groups = tree.path("tables").path("groups");
+        assertThat(groups.size()).isPositive();
+        for (JsonNode g : groups) {
+            assertThat(g.path("faults").asInt()).isGreaterThan(3);
+            assertThat(g.path("proven").asString()).isEqualTo("yes");
+            assertThat(g.path("lamp_on").asString()).isNotEqualTo("(none)");
+            assertThat(g.path("other_program").asString()).isEqualTo("-");
+        }
+    }
+
+    @Test
     void aMachineWithARomNeedsItsProgram() {
         ReportChecks.Result r = ReportChecks.run("plan", "examples/pumpstation/pumpstation.machine");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);

@@ -37,7 +37,8 @@ class FaultFiguresTest {
         Machine demo = Bench.demo();
         long[] rom = Bench.demoRom(demo);
         FaultCircuit c = FaultCircuit.of(demo);
-        FaultList faults = FaultList.of(c);
+        FaultList faults = FaultList.of(c, SocketPins.of(demo));
+        System.out.printf("FIGURE demo bridges: %d, %d collapsed%n", faults.bridges().size(), faults.bridgeCollapsedCount());
         System.out.printf("FIGURE demo faults: %d stuck-at, %d collapsed (%d after dominance), %d all, %d collapsed all%n",
                 faults.stuckAtCount(), faults.stuckAtCollapsedCount(), faults.stuckAtTargetCount(), faults.all().size(),
                 faults.collapsed().size());
@@ -49,9 +50,14 @@ class FaultFiguresTest {
             long cpu0 = mx.getCurrentThreadCpuTime();
             long wall0 = System.nanoTime();
             new PlanGenerator(one, faults, Effort.DEFAULT).generate();
-            System.out.printf("FIGURE demo plan generation on 1 thread: %.3f s CPU, %.3f s wall (load average %.1f)%n",
+            System.out.printf("FIGURE demo plan generation on 1 thread, bridges included: %.3f s CPU, %.3f s wall (load average %.1f)%n",
                     (mx.getCurrentThreadCpuTime() - cpu0) / 1e9, (System.nanoTime() - wall0) / 1e9,
                     java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
+            FaultList plain = FaultList.of(c);
+            cpu0 = mx.getCurrentThreadCpuTime();
+            new PlanGenerator(one, plain, Effort.DEFAULT).generate();
+            System.out.printf("FIGURE demo plan generation on 1 thread, no bridges: %.3f s CPU%n",
+                    (mx.getCurrentThreadCpuTime() - cpu0) / 1e9);
             List<Fault> all = plan.faults();
             double t1 = bestSeconds(7, () -> one.firstDetection(all, plan.steps()));
             double t2 = bestSeconds(7, () -> two.firstDetection(all, plan.steps()));

@@ -11,10 +11,15 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 class FaultSimulatorTest {
 
-    /** Every fault's lamps, every step, from the fast simulator and from the one-at-a-time reference. */
+    /**
+     * Every fault's lamps, every step, from the fast simulator and from the one-at-a-time reference:
+     * the machine's faults with its sockets' solder bridges, and bridges between nets picked at random
+     * with every joining table (loops through a bridge, latch outputs, switches, fights included).
+     */
     private static void assertAgree(Machine m, long[] rom, List<Step> steps, String what) {
         FaultCircuit c = FaultCircuit.of(m);
-        List<Fault> faults = FaultList.of(c).all();
+        List<Fault> faults = new ArrayList<>(FaultList.of(c, SocketPins.of(m)).all());
+        faults.addAll(randomBridges(c, what.hashCode(), faults.size(), 48));
         OneFaultSimulator ref = new OneFaultSimulator(c, rom);
         try (FaultSimulator fast = new FaultSimulator(c, rom, 2)) {
             byte[][] got = fast.responses(faults, steps);
@@ -35,6 +40,29 @@ class FaultSimulatorTest {
                         .isEqualTo(firstDifference(refGood, ref.run(f, steps), lamps));
             }
         }
+    }
+
+    /** {@code n} bridges between random stems (inputs, ROM lines, gate and latch outputs), ids from {@code firstId}. */
+    static List<Fault> randomBridges(FaultCircuit c, long seed, int firstId, int n) {
+        java.util.Random r = new java.util.Random(seed);
+        List<Integer> stems = new ArrayList<>();
+        for (Site s : c.sites()) {
+            if (s.line() && s.place().stem()) {
+                stems.add(s.slot());
+            }
+        }
+        List<Fault> out = new ArrayList<>();
+        for (int k = 0; k < n && stems.size() >= 2; k++) {
+            int a = stems.get(r.nextInt(stems.size()));
+            int b = stems.get(r.nextInt(stems.size()));
+            if (a == b) {
+                continue;
+            }
+            Bridge br = new Bridge(Math.min(a, b), Math.max(a, b), (byte) r.nextInt(3), (byte) r.nextInt(3), "XV" + k,
+                    "V" + k, "6AL5", -1, 1, 2);
+            out.add(new Fault(firstId + out.size(), FaultKind.BRIDGE, k, List.of(), br));
+        }
+        return out;
     }
 
     private static int firstDifference(byte[] good, byte[] bad, int lamps) {
