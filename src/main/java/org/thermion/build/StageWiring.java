@@ -282,7 +282,13 @@ final class StageWiring {
             w.problems.add(in.name + ": a cathode output without a cathode resistor");
             return k;
         }
-        resistor(in, "cathode", c.ohms(), k, w.rail(c.rail()), "cathode resistor");
+        if (c.coil() != null) {
+            // a follower driving its relay: the cathode return is the coil, a relay on the parts list
+            w.twoLead(PartClass.RELAY, c.ohms(), "relay, coil " + ohmsText(c.ohms()), in.board, "relay in the cathode of "
+                    + in.name, Double.NaN, in.key, k, w.rail(c.rail()));
+        } else {
+            resistor(in, "cathode", c.ohms(), k, w.rail(c.rail()), "cathode resistor");
+        }
         return k;
     }
 

@@ -30,7 +30,7 @@ import java.util.List;
                 + "soft-start resistor runs over its rating or is never bypassed, or the relay driver check fails.",
                 "Rail currents: switch-on peak = the inrush before any bypass (none when the current only rises), "
                         + "bypass peak = the highest after the bypass, steady state = the end of the run once settled "
-                        + "(moved under 1 % over its last tenth). Every current is a magnitude; volts are signed as declared."})
+                        + "(moved under 1 %% over its last tenth). Every current is a magnitude; volts are signed as declared."})
 final class PowerUpCommand extends CommandBase {
     @Parameters(paramLabel = "MACHINE", description = "The .machine file.")
     Path file;

@@ -264,8 +264,10 @@ final class Parts {
             // A follower's load, as delays and dissipation see it, is its cathode resistor.
             load = circuit.cathodeOhms();
             loadRail = railIndex.getOrDefault(circuit.cathodeRail(), -1);
-        } else if (circuit != null && circuit.seriesOhms() > 0) {
-            load = circuit.seriesOhms(); // a thyratron's plate resistor, as soft starts and budgets take it
+        } else if (circuit != null && circuit.arrangement() == StageCircuitSpec.Arrangement.THYRATRON) {
+            // A thyratron's plate resistor, as soft starts and budgets take it (0 without one): its load line is
+            // the relay coil, which a soft start's relay block states again, so it must not count twice.
+            load = circuit.seriesOhms();
         }
         return new StageType(name, function, tube, (int) b.num("sections"), perInput, fanIn, Double.isNaN(load) ? 0 : load, loadRail,
                 List.copyOf(low), List.copyOf(high), List.copyOf(always), rise, fall, b.num("setup"), ron, b.num("wiring"),

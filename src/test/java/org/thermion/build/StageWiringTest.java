@@ -97,6 +97,39 @@ class StageWiringTest {
     }
 
     @Test
+    void aFollowersCathodeCoilIsARelayOnTheWireListNotAResistor() {
+        Machine m = BuildMachines.text("""
+                rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
+                rail heat { voltage 12.6 V; source 0.01 ohm; limit 10 A }
+                heaters on heat { parallel 12AU7 at 12.6 V }
+                stage follower_relay : relay {
+                  tube 12AU7
+                  sections 2
+                  load direct from bplus
+                  cathode coil 1 k pickup 30 mA to ground
+                  output cathode
+                }
+                module top {
+                  in a
+                  out pulled
+                  pulled = follower_relay(a)
+                }
+                machine coil {
+                  clock { phases 1; period 100 us }
+                  top top
+                  inputs a
+                  outputs pulled
+                }
+                """);
+        Wiring w = BuildDocuments.of(m).wiring();
+        Part coil = part(w, "relay in the cathode of pulled");
+        assertThat(coil.cls()).isEqualTo(PartClass.RELAY);
+        assertThat(coil.ohms()).isEqualTo(1e3);
+        assertThat(leads(w).get(coil.ref())).hasSize(2).contains("ground");
+        assertThat(w.parts()).noneMatch(p -> p.cls() == PartClass.RESISTOR && p.role().startsWith("cathode resistor"));
+    }
+
+    @Test
     void aBuiltBlocksTubesAreWiredFromTheirStagesNotOnlyTheirHeaters() {
         // the pump station's program counter, ROM decoding and clock are stated with `uses` lines
         for (java.nio.file.Path p : new java.nio.file.Path[] {BuildMachines.DECODER, BuildMachines.PUMPSTATION}) {

@@ -134,6 +134,23 @@ class PowerUpSolverTest {
     }
 
     @Test
+    void aThyratronWhoseCoilIsItsOnlyPlateLoadCountsTheCoilOnce() {
+        // A thyratron stage with a circuit and no series resistor: its load line is the relay coil (100 ohm, the
+        // soft start's relay block states the same coil). The coil sees (24 V - 8 V arc drop) / 100 ohm = 160 mA
+        // from the stiff relay rail (Ohm's law), not half of it as if a second 100 ohm stood in series.
+        String text = StartupMachines.invertersWithThyratron(88, "100 ohm").replace("""
+                  draw high relay 100 mA
+                  draw low relay 0 mA
+                """, """
+                  grid divider 100 k 47 k to bias
+                """);
+        PowerUpResult r = PowerUpSolver.solve(StartupMachines.elaborate(text), PowerUpOptions.defaults().withSampleSeconds(0.01));
+        RelayDriverCheck c = r.relayChecks().get(0);
+        assertThat(c.plateOhms()).isZero();
+        assertThat(c.coilAmps()).isCloseTo((24 - 8.0) / 100, within(1e-9));
+    }
+
+    @Test
     void aThyratronTriggerClosesTheRelayOneOperateTimeAfterFiring() {
         Machine m = StartupMachines.elaborate(StartupMachines.invertersWithThyratron(88, "50 ohm"));
         PowerUpResult r = PowerUpSolver.solve(m, PowerUpOptions.defaults().withSampleSeconds(0.001));
