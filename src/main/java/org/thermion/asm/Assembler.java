@@ -230,7 +230,7 @@ public final class Assembler {
             List<String> known = isa.instructions().stream().map(Instruction::mnemonic).toList();
             String near = Names.nearestWord(m.text(), known, 2);
             diags.error(m.span(), "unknown mnemonic '" + m.text() + "'",
-                    near != null ? "did you mean '" + near + "'?" : "the " + isa.instructions().size() + " instructions are " + String.join(" ", known));
+                    near != null ? "did you mean '" + near + "'?" : (known.size() == 1 ? "the one instruction is " : "the " + known.size() + " instructions are ") + String.join(" ", known));
             return null;
         }
         long word = isa.opcode().place(ins.opcode());

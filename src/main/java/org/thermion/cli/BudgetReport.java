@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.model.Machine;
 import org.thermion.model.ModuleInstance;
 import org.thermion.model.Rail;
@@ -52,7 +53,7 @@ final class BudgetReport {
     }
 
     /** The schema version of budget's JSON ({@code org/thermion/schema/budget.schema.json}). */
-    static final int VERSION = 3;
+    static final int VERSION = 4;
 
     /** The whole report: facts for every format, explanations and findings for people. */
     Report report() {
@@ -67,7 +68,7 @@ final class BudgetReport {
             s.put("program", run.program());
             s.put("inputs", run.inputs());
             s.put("cycles", run.cycles());
-            s.put("lane", 0);
+            s.put("phases", m.clock().phases());
             s.put("init", run.init());
             r.field("simulation", s);
         } else {
@@ -91,8 +92,8 @@ final class BudgetReport {
 
     private List<String> head() {
         List<String> h = new ArrayList<>();
-        h.add(String.format(Locale.ROOT, "budget of machine %s: %d tubes, %d heater strings, %d rails", m.name(),
-                m.envelopes().size(), m.heaterStrings().size(), m.rails().size()));
+        h.add("budget of machine " + m.name() + ": " + Nouns.count(m.envelopes().size(), "tube") + ", "
+                + Nouns.count(m.heaterStrings().size(), "heater string") + ", " + Nouns.count(m.rails().size(), "rail"));
         List<String> out = b.leftOut();
         h.add(out.isEmpty() ? "  the totals count every part: the logic and the built blocks"
                 : "  the totals leave out: " + String.join("; ", out));
@@ -101,9 +102,9 @@ final class BudgetReport {
         h.add("  heaters and the supply check at each rail's voltage under its load (nominal less the source drop),");
         h.add("    heaters at the wire's equilibrium temperature there: the power-up's steady state");
         if (run != null) {
-            h.add(String.format(Locale.ROOT, "  simulated: %s%s, %d cycles of %d phases, latches start %s",
-                    run.program(), run.inputs() == null ? "" : " with inputs " + run.inputs(), run.cycles(),
-                    m.clock().phases(), run.init()));
+            h.add("  simulated: " + run.program() + (run.inputs() == null ? "" : " with inputs " + run.inputs()) + ", "
+                    + Nouns.count(run.cycles(), "cycle") + " of " + Nouns.count(m.clock().phases(), "phase")
+                    + ", latches start " + run.init());
             h.add("    min, mean and peak over every phase; now = the last phase; cycles count from 0, phases from 1"
                     + (run.init().startsWith("unknown") ? "; an unknown output counts at its low draw" : ""));
         } else {
@@ -397,7 +398,9 @@ final class BudgetReport {
             }
         }
         List<String> parts = new ArrayList<>();
-        parts.add(by[StageDraw.Origin.COMPUTED.ordinal()] + " stage kinds computed from their circuits at the machine's rails");
+        int computed = by[StageDraw.Origin.COMPUTED.ordinal()];
+        parts.add(Nouns.count(computed, "stage kind") + " computed from " + (computed == 1 ? "its circuit" : "their circuits")
+                + " at the machine's rails");
         parts.add(by[StageDraw.Origin.DECLARED.ordinal()] + " declared");
         if (by[StageDraw.Origin.NONE.ordinal()] > 0) {
             parts.add(by[StageDraw.Origin.NONE.ordinal()] + " with neither (counted as drawing nothing)");

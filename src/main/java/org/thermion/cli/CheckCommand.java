@@ -45,7 +45,7 @@ final class CheckCommand extends ReportCommand {
         MachineLoader loader = fresh.withLanguagePointers();
         Machine m = loader.loadOrModules(file, err, true);
         if (m == null && !loader.diagnostics().hasErrors() && !loader.modulesAlone().isEmpty()) {
-            format.write(out, new ModuleCheckSummary(file, loader.modulesAlone()).report());
+            format.write(out, new ModuleCheckSummary(file, loader.modulesAloneChecked()).report());
             return ExitCodes.OK;
         }
         if (m == null) {

@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Numbers;
 import org.thermion.tui.FileStamps;
 
@@ -31,7 +32,7 @@ final class CheckWatch {
         while (true) {
             FileStamps seen = new FileStamps(check.get());
             done++;
-            out.println("-- watching " + Numbers.count(seen.size(), "file") + " for changes; Ctrl-C stops");
+            out.println("-- watching " + Nouns.count(seen.size(), "file") + " for changes; Ctrl-C stops");
             out.flush();
             if (rounds > 0 && done >= rounds) {
                 return;

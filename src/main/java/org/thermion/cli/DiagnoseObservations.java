@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Numbers;
 import org.thermion.faults.Diagnosis;
 import org.thermion.faults.ObservedLamp;
@@ -73,7 +74,7 @@ final class DiagnoseObservations {
                 Field at = rec.size() > header.size() ? rec.get(header.size()) : rec.get(rec.size() - 1);
                 Span s = rec.size() > header.size() ? at.span() : at.endSpan();
                 int n = header.size() - 1;
-                diags.error(s, "expected " + header.size() + " fields (the step and " + Numbers.count(n, "lamp")
+                diags.error(s, "expected " + header.size() + " fields (the step and " + Nouns.count(n, "lamp")
                         + ", as in the header), found " + rec.size(), null);
                 continue;
             }
@@ -155,7 +156,7 @@ final class DiagnoseObservations {
             return -1;
         }
         if (s > steps) {
-            diags.error(f.span(), "step " + s + " is beyond the plan, which has " + Numbers.count(steps, "step"),
+            diags.error(f.span(), "step " + s + " is beyond the plan, which has " + Nouns.count(steps, "step"),
                     planHint);
             return -1;
         }

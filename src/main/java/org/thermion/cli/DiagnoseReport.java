@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Absent;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
@@ -15,7 +16,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import static org.thermion.cli.report.Numbers.count;
+import static org.thermion.text.Nouns.count;
 import static org.thermion.cli.report.ReportUnit.COUNT;
 import static org.thermion.cli.report.ReportUnit.TEXT;
 

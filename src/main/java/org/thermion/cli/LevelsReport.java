@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import static org.thermion.cli.report.ReportUnit.AMPS;
 import static org.thermion.cli.report.ReportUnit.COUNT;
 import static org.thermion.cli.report.ReportUnit.PERCENT;
@@ -56,10 +57,10 @@ final class LevelsReport {
         rep.field("nets", nets.size());
         rep.field("negative_margins", failing);
         rep.field("below_minimum", weak);
-        rep.text(List.of("machine " + machine.name() + ": " + nets.size() + " nets; worst case at rails and resistors "
+        rep.text(List.of("machine " + machine.name() + ": " + Nouns.count(nets.size(), "net") + "; worst case at rails and resistors "
                 + pct(t.rail()) + ", worn tubes at " + Math.round(100 * t.endOfLife()) + " % emission; minimum margin "
                 + num(analysis.minMargin()) + " V.",
-                failing + " nets with a negative worst-case margin, " + weak + " below the minimum.", ""));
+                Nouns.count(failing, "net") + " with a negative worst-case margin, " + weak + " below the minimum.", ""));
         Table data = new Table("nets", "nets")
                 .column("net", "net", TEXT)
                 .column("driver", "driver", TEXT, "the stage that drives the net (empty: driven from outside)")

@@ -3,6 +3,7 @@ package org.thermion.cli;
 import org.thermion.elab.Elaborator;
 import org.thermion.elab.SourceMap;
 import org.thermion.elab.ModuleCheck;
+import org.thermion.elab.ModulesAlone;
 import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.circuit.TubeLibrary;
 import org.thermion.lang.Diagnostics;
@@ -18,6 +19,7 @@ public final class MachineLoader {
     private final SourceSet sources = new SourceSet();
     private final Diagnostics diags = new Diagnostics();
     private List<ModuleCheck> modulesAlone = List.of();
+    private ModulesAlone modulesAloneChecked;
     private SourceMap sourceMap = SourceMap.NONE;
     private boolean pointers;
 
@@ -54,6 +56,7 @@ public final class MachineLoader {
         Elaborator elaborator = new Elaborator(sources, diags).withTubeModelCheck(TubeLibrary::problem);
         Machine m = elaborator.elaborate(file);
         modulesAlone = elaborator.modulesAlone();
+        modulesAloneChecked = elaborator.modulesAloneChecked();
         sourceMap = elaborator.sourceMap();
         if (diags.hasErrors() || showWarnings) {
             new DiagnosticPrinter(sources, pointers).print(diags, err);
@@ -64,6 +67,11 @@ public final class MachineLoader {
     /** The modules checked on their own when the last file loaded had no machine block. */
     public List<ModuleCheck> modulesAlone() {
         return modulesAlone;
+    }
+
+    /** The last file's modules checked alone, with the library stages and rails assumed for them (null if it had a machine). */
+    public ModulesAlone modulesAloneChecked() {
+        return modulesAloneChecked;
     }
 
     /** Where the last machine loaded was written, and its margin rules. */

@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Absent;
 import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
@@ -68,7 +69,7 @@ final class MachineSummary {
         List<String> head = new ArrayList<>();
         head.add(String.format(Locale.ROOT, "machine %s: %d-phase clock, %s period", m.name(), m.clock().phases(),
                 Numbers.si(m.clock().periodSeconds(), SECONDS)));
-        head.add(String.format(Locale.ROOT, "  modules         %d types, %d instances", types.size(), m.modules().size()));
+        head.add("  modules         " + Nouns.count(types.size(), "type") + ", " + Nouns.count(m.modules().size(), "instance"));
         head.add(String.format(Locale.ROOT, "  stage instances %d", m.stageInstanceCount()));
         head.add(String.format(Locale.ROOT, "  nets            %d", m.netlist().netCount()));
         head.add(String.format(Locale.ROOT, "  latches         %d", m.netlist().latches().size()));

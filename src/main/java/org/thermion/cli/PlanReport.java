@@ -1,7 +1,7 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Absent;
-import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
 import org.thermion.faults.FaultCircuit;
@@ -96,7 +96,7 @@ final class PlanReport {
         if (largest >= 0) {
             tail.add("largest group of faults the steps cannot tell apart: " + largest);
             if (above > 0) {
-                tail.add(Numbers.count(above, "group") + " still " + (above == 1 ? "holds" : "hold") + " more than "
+                tail.add(Nouns.count(above, "group") + " still " + (above == 1 ? "holds" : "hold") + " more than "
                         + PlanInputs.MOST_IN_GROUP + " faults (table groups): " + alike());
             }
         }

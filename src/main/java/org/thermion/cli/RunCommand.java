@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Format;
 import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.ReportUnit;
@@ -167,7 +168,7 @@ final class RunCommand extends ReportCommand {
         if (stim != null && stim.lastCycle() >= cycles) {
             long first = stim.rows().stream().filter(r -> r.cycle() >= cycles).findFirst().orElseThrow().cycle();
             err.println("warning: " + inputs + ": the rows from cycle " + first + " on come after the run's "
-                    + cycles + " cycles and never apply");
+                    + Nouns.count(cycles, "cycle") + " and never apply");
             err.println("  = raise --cycles to reach them");
             err.flush();
         }

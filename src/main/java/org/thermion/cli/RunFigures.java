@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Numbers;
 import org.thermion.plot.Figure;
 import org.thermion.plot.Panel;
@@ -37,7 +38,7 @@ final class RunFigures {
             panels.add(new Panel(name, "cycle (end of cycle, counted from 0)", bus ? "value (number)" : "level (0 or 1)",
                     List.of(new Series(name, cycles, y, true))));
         }
-        return new Figure("watched nets of " + machine + " over " + Numbers.count(r.cycles(), "cycle"),
+        return new Figure("watched nets of " + machine + " over " + Nouns.count(r.cycles(), "cycle"),
                 panels, "unknown values are left as gaps");
     }
 

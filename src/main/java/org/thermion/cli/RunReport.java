@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.model.Machine;
 import org.thermion.sim.OutputChange;
 import org.thermion.sim.RunResult;
@@ -57,7 +58,7 @@ final class RunReport {
         List<String> head = new ArrayList<>();
         head.add("run " + machine.name() + ": " + (program == null ? "no program" : "program " + program) + ", "
                 + level + " level, init " + init);
-        head.add(Numbers.count(r.cycles(), "cycle") + "; stopped: " + r.stop());
+        head.add(Nouns.count(r.cycles(), "cycle") + "; stopped: " + r.stop());
         head.add("machine time " + Numbers.si(machineSeconds(), ReportUnit.SECONDS) + " (a cycle is "
                 + Numbers.si(machine.clock().periodSeconds(), ReportUnit.SECONDS) + " on the real machine)");
         if (!init.equals("zero")) {
@@ -113,7 +114,7 @@ final class RunReport {
         } else {
             rep.table(unknowns);
         }
-        Table state = new Table("state", "final state after " + Numbers.count(r.cycles(), "cycle"))
+        Table state = new Table("state", "final state after " + Nouns.count(r.cycles(), "cycle"))
                 .column("name", "state", TEXT)
                 .column("value", "value", TEXT);
         for (int i = 0; i < r.stateNames().size(); i++) {
@@ -129,11 +130,12 @@ final class RunReport {
     /** The watched nets side by side, one row per cycle, for people. */
     private Table watchGrid() {
         boolean pc = machine.pc() != null;
-        Table t = new Table("watch_grid", pc ? "watched, at the end of each cycle (pc: the instruction the cycle ran)"
-                : "watched, at the end of each cycle");
+        // "ran", not "pc": a watched pc beside it holds the next address, and two columns named pc read as one
+        Table t = new Table("watch_grid", pc ? "watched, at the end of each cycle (ran: the address of the instruction"
+                + " the cycle ran)" : "watched, at the end of each cycle");
         t.column("cycle", "cycle", COUNT);
         if (pc) {
-            t.column("pc", "pc", COUNT);
+            t.column("ran", "ran", COUNT);
         }
         for (int i = 0; i < r.watchNames().size(); i++) {
             t.column("net_" + (i + 1), r.watchNames().get(i), TEXT);

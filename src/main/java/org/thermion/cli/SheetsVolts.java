@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.build.BuildDocuments;
 import org.thermion.build.ChartStates;
 import org.thermion.build.PinVoltages;
@@ -140,7 +141,7 @@ final class SheetsVolts extends SheetsDocument {
             r.view(changes(w, charts, reasons));
         }
         List<String> lines = new ArrayList<>();
-        reasons.forEach((why, n) -> lines.add("? at " + n + " pin" + (n == 1 ? "" : "s") + ": " + why));
+        reasons.forEach((why, n) -> lines.add("? at " + Nouns.count(n, "pin") + ": " + why));
         Map<String, List<String>> warned = new java.util.LinkedHashMap<>();
         for (PinVoltages.Chart c : charts) {
             for (String warning : c.warnings()) {

@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Absent;
 import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
@@ -183,7 +184,7 @@ final class TimingCommand extends ReportCommand {
             m.put("span", c.span());
             rep.field("critical", m);
         }
-        rep.text(String.format(Locale.ROOT, "timing %s: %d phases, period %s, phase width %s", r.machine(), r.phases(),
+        rep.text(String.format(Locale.ROOT, "timing %s: %s, period %s, phase width %s", r.machine(), Nouns.count(r.phases(), "phase"),
                         Numbers.si(r.periodSeconds(), SECONDS), Numbers.si(r.phaseSeconds(), SECONDS)),
                 "  a change launched at the end of one phase (latch outputs after their delay; inputs at the end of the "
                         + "last phase; ROM data when the PC loads) must reach each latch set-up before the end of its "
@@ -239,7 +240,7 @@ final class TimingCommand extends ReportCommand {
         } else {
             rep.text(String.format(Locale.ROOT, "critical path: into %s on phase %d, %s + set-up %s over %s",
                             c.endpoint(), c.phase(), Numbers.si(c.arrival(), SECONDS), Numbers.si(c.setup(), SECONDS),
-                            Numbers.count(c.span(), "phase width")),
+                            Nouns.count(c.span(), "phase width")),
                     String.format(Locale.ROOT, "shortest safe period %s: highest safe clock rate %s nominal, %s at the "
                                     + "slow corner", Numbers.si(r.minPeriodSeconds(), SECONDS),
                             Numbers.si(r.maxClockHertz(), HERTZ), Numbers.si(slow.maxClockHertz(), HERTZ)));

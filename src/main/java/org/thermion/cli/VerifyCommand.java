@@ -1,5 +1,6 @@
 package org.thermion.cli;
 
+import org.thermion.text.Nouns;
 import org.thermion.cli.report.Absent;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
@@ -234,8 +235,7 @@ final class VerifyCommand extends ReportCommand {
             out.add("every instruction does what the ISA says" + (r.decodeOk() ? "" : ", but the decode lines fail"));
             return out;
         }
-        out.add(String.format(Locale.ROOT, "%d mismatch%s (instruction, item), %s:", r.counterexamples().size(),
-                r.counterexamples().size() == 1 ? "" : "es",
+        out.add(String.format(Locale.ROOT, "%s (instruction, item), %s:", Nouns.count(r.counterexamples().size(), "mismatch"),
                 r.counterexamples().size() > max ? "the first " + max : "each with one counterexample"));
         int i = 0;
         for (Counterexample c : r.counterexamples()) {
@@ -243,8 +243,8 @@ final class VerifyCommand extends ReportCommand {
                 break;
             }
             out.add("");
-            out.add(String.format(Locale.ROOT, "%s (0x%X), word 0x%X, %s: %s %s in %,d case%s", c.mnemonic(), c.opcode(), c.word(),
-                    c.operand(), c.item(), c.kind(), c.cases(), c.cases() == 1 ? "" : "s"));
+            out.add(String.format(Locale.ROOT, "%s (0x%X), word 0x%X, %s: %s %s in %,d %s", c.mnemonic(), c.opcode(), c.word(),
+                    c.operand(), c.item(), c.kind(), c.cases(), Nouns.agree(c.cases(), "case")));
             out.add("  before    " + c.before());
             out.add("  inputs    " + c.inputs());
             out.add("  expected  " + c.expected() + "  pc " + c.expectedPc());

@@ -29,6 +29,8 @@ final class Declarations {
     final List<Prop> margins = new ArrayList<>();
     final List<Decl.Isa> isas = new ArrayList<>();
     private final Map<String, Span> userNames = new LinkedHashMap<>();
+    /** Declarations that did not parse, as "kind name" (and the bare kind): their uses are not reported again. */
+    private final java.util.Set<String> rejected = new java.util.HashSet<>();
 
     static final List<String> KINDS = List.of("tube", "stage", "rail", "heaters", "softstart", "realize", "packing",
             "machine", "margins");
@@ -41,6 +43,9 @@ final class Declarations {
                 isas.add(i);
             } else if (d instanceof Decl.PropDecl pd) {
                 prop(pd.prop(), library, diags);
+            } else if (d instanceof Decl.Rejected r) {
+                rejected.add(r.kind());
+                rejected.add(r.kind() + " " + r.name());
             }
         }
     }
@@ -60,6 +65,14 @@ final class Declarations {
             default -> diags.error(p.key().span(), "unknown declaration '" + kind + "'",
                     hintFor(kind, KINDS, "expected one of: " + String.join(", ", KINDS) + ", module, isa, include"));
         }
+    }
+
+    /**
+     * Whether a declaration of that kind and name was written but did not parse (its error is
+     * reported): a use of the name is then no new error. A null name asks about the kind alone.
+     */
+    boolean rejected(String kind, String name) {
+        return rejected.contains(name == null ? kind : kind + " " + name);
     }
 
     static String hintFor(String name, List<String> known, String fallback) {

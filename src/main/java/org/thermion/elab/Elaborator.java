@@ -37,6 +37,7 @@ public final class Elaborator {
     private boolean asDescribed;
     private static final int MAX_PHASES = 8;
     private List<ModuleCheck> modulesAlone = List.of();
+    private ModulesAlone modulesAloneAssumed;
     private SourceMap sourceMap = SourceMap.NONE;
     private TubeModelCheck modelCheck = TubeModelCheck.NONE;
 
@@ -83,9 +84,8 @@ public final class Elaborator {
         for (SourceFile f : files) {
             decls.add(f, false, diags);
         }
-        if (diags.hasErrors()) {
-            return null;
-        }
+        // Errors so far (syntax, duplicate names) go on with the declarations that were read,
+        // so that one run reports the errors after them too; no machine is built from them.
         try {
             return buildChecked(decls, files);
         } catch (ElaborationInterrupted e) {
@@ -117,6 +117,7 @@ public final class Elaborator {
      * is checked module by module; false when it declares no module either.
      */
     private boolean checkModulesAlone(Declarations decls, Parts parts, List<SourceFile> files) {
+        parts.forModulesAlone();
         List<ModuleCheck> found = new ArrayList<>();
         for (SourceFile f : files) {
             for (Decl d : f.decls()) {
@@ -132,6 +133,9 @@ public final class Elaborator {
             }
         }
         modulesAlone = List.copyOf(found);
+        modulesAloneAssumed = new ModulesAlone(modulesAlone,
+                java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(parts.libraryDefaults())),
+                List.copyOf(parts.assumedRails()));
         return !found.isEmpty();
     }
 
@@ -145,10 +149,18 @@ public final class Elaborator {
         return modulesAlone;
     }
 
+    /** The modules checked on their own, with the library stages and rails assumed for them (else null). */
+    public ModulesAlone modulesAloneChecked() {
+        return modulesAloneAssumed;
+    }
+
     private Machine buildChecked(Declarations decls, List<SourceFile> files) {
         Parts parts = new Parts(decls, diags, modelCheck);
         if (decls.machines.isEmpty() && checkModulesAlone(decls, parts, files)) {
             return null;
+        }
+        if (decls.machines.isEmpty() && diags.hasErrors()) {
+            return null; // its machine block may be among the declarations that did not parse
         }
         if (decls.machines.isEmpty()) {
             Path f = files.isEmpty() ? Path.of("?") : files.get(files.size() - 1).path();
@@ -165,7 +177,7 @@ public final class Elaborator {
             diags.error(mb.nameSpan.isKnown() ? mb.nameSpan : mb.span, "machine names no top module", "add `top MODULE`");
         } else {
             top = decls.modules.get(mb.top);
-            if (top == null) {
+            if (top == null && !decls.rejected("module", mb.top)) {
                 diags.error(mb.topSpan, "unknown module '" + mb.top + "'",
                         Declarations.hintFor(mb.top, new ArrayList<>(decls.modules.keySet()), "declare it with `module " + mb.top + " { ... }`"));
             }

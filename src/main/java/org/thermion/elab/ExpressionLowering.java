@@ -1,5 +1,6 @@
 package org.thermion.elab;
 
+import org.thermion.text.Nouns;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Expr;
@@ -238,7 +239,7 @@ final class ExpressionLowering {
         }
         if (c.args().size() < Math.min(min, max) || c.args().size() > max) {
             diags.error(c.span(), "stage '" + name + "' takes " + (min == max || min > max ? max + "" : min + " to " + max)
-                    + (max == 1 ? " input" : " inputs") + ", given " + c.args().size(), null);
+                    + " " + Nouns.agree(max, "input") + ", given " + c.args().size(), null);
             return null;
         }
         List<Logic> args = new ArrayList<>();

@@ -63,6 +63,9 @@ final class Instantiator {
 
     void use(Scope f, ModuleStmt.Use u) {
         Decl.Module child = decls.modules.get(u.module().text());
+        if (child == null && decls.rejected("module", u.module().text())) {
+            return;
+        }
         if (child == null) {
             diags.error(u.module().span(), "unknown module '" + u.module().text() + "'",
                     Declarations.hintFor(u.module().text(), new ArrayList<>(decls.modules.keySet()), "declare it with `module NAME { ... }`"));

@@ -1,5 +1,6 @@
 package org.thermion.elab;
 
+import org.thermion.text.Nouns;
 import java.util.List;
 
 /** A lowered expression: a bus of logic bits, or a number whose width comes from its use. */
@@ -14,6 +15,6 @@ sealed interface Lowered {
 
     /** "1 bit", "8 bits": for messages. */
     static String bitsWord(int n) {
-        return n + (n == 1 ? " bit" : " bits");
+        return Nouns.count(n, "bit");
     }
 }

@@ -1,5 +1,6 @@
 package org.thermion.elab;
 
+import org.thermion.text.Nouns;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Prop;
@@ -261,7 +262,7 @@ final class Packer {
         }
         for (Map.Entry<Integer, Integer> m : missing.entrySet()) {
             String t = parts.tubes.get(m.getKey()).name();
-            diags.error(machineSpan, "no heater arrangement for tube type " + t + " (" + m.getValue() + " envelopes)",
+            diags.error(machineSpan, "no heater arrangement for tube type " + t + " (" + Nouns.count(m.getValue(), "envelope") + ")",
                     "add `parallel " + t + "` or `series N of " + t + "` to a `heaters on RAIL` block");
         }
     }

@@ -29,6 +29,8 @@ final class Parts {
     final List<Rail> rails = new ArrayList<>();
     final Map<String, Integer> railIndex = new LinkedHashMap<>();
     final Map<String, Integer> realize = new HashMap<>();
+    /** The rails the parts library's stages are designed for, as its header says (for hints only). */
+    static final Map<String, String> LIBRARY_RAILS = Map.of("bplus", "48 V", "bias", "-24 V", "relay", "24 V");
     private final Map<String, Integer> tubeIndex = new HashMap<>();
     private final Map<String, Integer> stageIndex = new HashMap<>();
     /** Library stages already reported for a rail the machine lacks: one error each. */
@@ -38,6 +40,14 @@ final class Parts {
     private final TubeModelCheck modelCheck;
     /** Tubes whose model line was written but is in error (reported at the tube). */
     private final java.util.Set<String> modelInError = new java.util.HashSet<>();
+    /** Operators whose realize line named a stage that was reported (unknown, broken or of another function). */
+    private final java.util.Set<String> realizeInError = new java.util.HashSet<>();
+    /** For a file of modules alone: each operator the file does not map, with the library stage that stands in. */
+    private final Map<String, String> libraryDefaults = new LinkedHashMap<>();
+    private final java.util.Set<String> defaultsTaken = new java.util.HashSet<>();
+    /** For a file of modules alone: rails its stages draw from that the including machine must declare. */
+    private final List<String> assumedRails = new ArrayList<>();
+    private boolean modulesAlone;
 
     Parts(Declarations decls, Diagnostics diags) {
         this(decls, diags, TubeModelCheck.NONE);
@@ -76,20 +86,67 @@ final class Parts {
             Span at = line.span("stage");
             int s = stage(stageName, at);
             if (s < 0) {
+                realizeInError.add(op);
                 continue;
             }
             StageFunction want = StageFunction.byWord(op);
             if (stages.get(s).function() != want) {
                 diags.error(at, "stage '" + stageName + "' realizes " + stages.get(s).function().word()
                         + ", not " + op, "pick a stage whose function is " + op);
+                realizeInError.add(op);
                 continue;
             }
             realize.put(op, s);
         }
     }
 
+    /**
+     * Checks a file of modules meant for {@code include}, which has no machine to supply its
+     * realize lines and rails: each operator the file leaves unmapped is realized by the parts
+     * library's first stage of that function, and a rail no file declares is taken as the
+     * including machine's (both listed by {@link #libraryDefaults()} and {@link #assumedRails()}).
+     */
+    void forModulesAlone() {
+        modulesAlone = true;
+        for (String op : StageFunction.realizableWords()) {
+            if (realize.containsKey(op) || realizeInError.contains(op)) {
+                continue;
+            }
+            for (Prop p : decls.stages.values()) {
+                List<org.thermion.lang.ast.Value> head = p.values();
+                if (p.span().file().equals(SourceLoader.LIBRARY) && head.size() == 3 && head.get(1).text().equals(":")
+                        && head.get(2).text().equals(op)) {
+                    libraryDefaults.put(op, head.get(0).text());
+                    break;
+                }
+            }
+        }
+    }
+
+    /** The library stages that stood in for realize lines a file of modules alone leaves out, by operator (language order). */
+    Map<String, String> libraryDefaults() {
+        Map<String, String> out = new LinkedHashMap<>(libraryDefaults);
+        out.keySet().retainAll(defaultsTaken);
+        return out;
+    }
+
+    /** The rails a file of modules alone draws from without declaring them. */
+    List<String> assumedRails() {
+        return assumedRails;
+    }
+
     int rail(String name, Span at) {
         Integer i = railIndex.get(name);
+        if (i == null && decls.rejected("rail", name)) {
+            return -1;
+        }
+        if (i == null && modulesAlone) {
+            // Its voltage is the including machine's; expanding modules does not need it.
+            assumedRails.add(name);
+            railIndex.put(name, rails.size());
+            rails.add(new Rail(name, Double.NaN, Double.NaN, Double.POSITIVE_INFINITY));
+            return rails.size() - 1;
+        }
         if (i == null) {
             diags.error(at, "unknown rail '" + name + "'",
                     Declarations.hintFor(name, new ArrayList<>(railIndex.keySet()),
@@ -104,16 +161,18 @@ final class Parts {
      * where the machine uses the stage, since that is the line the user can change.
      */
     private int stageRail(String rail, Span at, String stage, Prop decl, Span use) {
-        if (railIndex.containsKey(rail) || !decl.span().file().equals(SourceLoader.LIBRARY) || use == null
+        if (railIndex.containsKey(rail) || modulesAlone || !decl.span().file().equals(SourceLoader.LIBRARY) || use == null
                 || !use.isKnown()) {
             return rail(rail, at);
         }
         if (!missingRails.add(stage + " " + rail)) {
             return -1;
         }
+        String volts = LIBRARY_RAILS.getOrDefault(rail, "... V");
         diags.error(use, "library stage '" + stage + "' draws from rail '" + rail + "', which this machine does not declare",
-                "declare `" + PropertyTable.RAIL.skeleton(rail) + "` (library stages expect rails bplus, bias and relay), "
-                        + "or declare a stage of your own");
+                "declare `rail " + rail + " { voltage " + volts + " }` (the library's stages are designed for "
+                        + "bplus " + LIBRARY_RAILS.get("bplus") + ", bias " + LIBRARY_RAILS.get("bias") + " and relay "
+                        + LIBRARY_RAILS.get("relay") + "), or declare a stage of your own");
         return -1;
     }
 
@@ -134,6 +193,9 @@ final class Parts {
             return i;
         }
         Prop p = decls.tubes.get(name);
+        if (p == null && decls.rejected("tube", name)) {
+            return -1;
+        }
         if (p == null) {
             diags.error(at, "unknown tube type '" + name + "'",
                     Declarations.hintFor(name, new ArrayList<>(decls.tubes.keySet()), "declare it with `" + PropertyTable.TUBE.skeleton(name) + "`"));
@@ -182,6 +244,9 @@ final class Parts {
             return i;
         }
         Prop p = decls.stages.get(name);
+        if (p == null && decls.rejected("stage", name)) {
+            return -1;
+        }
         if (p == null) {
             diags.error(at, "unknown stage '" + name + "'",
                     Declarations.hintFor(name, new ArrayList<>(decls.stages.keySet()), "declare it with `" + PropertyTable.STAGE.skeleton(name) + "`"));
@@ -197,8 +262,9 @@ final class Parts {
         return stages.size() - 1;
     }
 
+    /** Whether a stage of that name is declared (a declaration that did not parse counts: it is reported). */
     boolean isStage(String name) {
-        return decls.stages.containsKey(name);
+        return decls.stages.containsKey(name) || decls.rejected("stage", name);
     }
 
     private StageType buildStage(String name, Prop p, Span use) {
@@ -290,7 +356,21 @@ final class Parts {
 
     /** The stage realizing an operator, or -1 when none is mapped. */
     int realizer(String op) {
-        return realize.getOrDefault(op, -1);
+        Integer s = realize.get(op);
+        if (s == null && libraryDefaults.containsKey(op)) {
+            s = stage(libraryDefaults.get(op), Span.none());
+            realize.put(op, s);
+            defaultsTaken.add(op);
+        }
+        return s == null ? -1 : s;
+    }
+
+    /**
+     * Whether an operator's missing stage is already explained: its realize line was reported,
+     * or a realize block did not parse. A use of the operator is then no new error.
+     */
+    boolean realizeReported(String op) {
+        return realizeInError.contains(op) || decls.rejected("realize", null);
     }
 
     List<String> stageNames() {

@@ -248,7 +248,7 @@ final class StageMapper {
     /** The stage realizing {@code op}; reports a missing one once per operator. */
     int needStage(String op, String sym, Span span) {
         int s = parts.realizer(op);
-        if (s < 0 && reportedOps.add(op)) {
+        if (s < 0 && !parts.realizeReported(op) && reportedOps.add(op)) {
             diags.error(span, "operator '" + sym + "' has no stage to realize it",
                     "add `" + op + " STAGE` to a realize block, naming a stage whose function is " + op);
         }

@@ -1,5 +1,6 @@
 package org.thermion.elab;
 
+import org.thermion.text.Nouns;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.Span;
 import org.thermion.lang.ast.Expr;
@@ -153,7 +154,7 @@ final class StatementLowering {
         }
         Long p = exprs.constant(f, l.phase(), "a clock phase");
         if (p != null && (p < 1 || p > phases)) {
-            diags.error(l.phase().span(), "clock phase " + p + " does not exist; the clock has " + phases + " phases",
+            diags.error(l.phase().span(), "clock phase " + p + " does not exist; the clock has " + Nouns.count(phases, "phase"),
                     "use a phase from 1 to " + phases);
             return 1;
         }
@@ -171,7 +172,7 @@ final class StatementLowering {
             return stage;
         }
         int stage = parts.realizer("latch");
-        if (stage < 0 && !reportedNoLatchStage) {
+        if (stage < 0 && !reportedNoLatchStage && !parts.realizeReported("latch")) {
             reportedNoLatchStage = true;
             diags.error(l.name().span(), "no stage realizes latches",
                     "add `latch triode_flipflop` (or your own latch stage) to a realize block, or write `using STAGE`");

@@ -14,7 +14,7 @@ import java.util.Set;
 final class Chunks {
     /** Words that begin a top-level declaration when they open a line. */
     static final Set<String> TOP_LEVEL = Set.of("include", "module", "isa", "machine", "tube", "stage", "rail", "heaters",
-            "softstart", "realize");
+            "softstart", "realize", "packing", "margins");
 
     /** One declaration's text: from {@code start} to {@code end} (offsets), beginning on 1-based {@code line}. */
     record Chunk(int line, int start, int end) {

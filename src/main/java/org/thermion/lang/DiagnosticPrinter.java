@@ -1,5 +1,6 @@
 package org.thermion.lang;
 
+import org.thermion.text.Nouns;
 import java.io.PrintWriter;
 
 /**
@@ -33,7 +34,7 @@ public final class DiagnosticPrinter {
         int e = diags.errorCount();
         int w = diags.warnings().size();
         if (e > 0 || w > 0) {
-            out.println(plural(e, "error") + ", " + plural(w, "warning"));
+            out.println(Nouns.count(e, "error") + ", " + Nouns.count(w, "warning"));
         }
         out.flush();
     }
@@ -46,10 +47,6 @@ public final class DiagnosticPrinter {
             b.append(c == '\t' ? ' ' : c < 0x20 || c == 0x7F ? '?' : c);
         }
         return b.toString();
-    }
-
-    private static String plural(int n, String word) {
-        return n + " " + word + (n == 1 ? "" : "s");
     }
 
     public String format(Diagnostic d) {

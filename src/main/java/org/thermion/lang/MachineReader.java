@@ -7,6 +7,7 @@ import org.antlr.v4.runtime.RecognitionException;
 import org.antlr.v4.runtime.Recognizer;
 import org.antlr.v4.runtime.Token;
 import org.antlr.v4.runtime.TokenStream;
+import org.thermion.lang.ast.Decl;
 import org.thermion.lang.ast.SourceFile;
 import org.thermion.lang.parser.MachineLexer;
 import org.thermion.lang.parser.MachineParser;
@@ -20,12 +21,17 @@ import java.util.List;
  * After a syntax error each top-level declaration is parsed again on its own ({@link Chunks});
  * for each broken declaration its first error is reported and the next real one (found with
  * the first error's line blanked), and no train of follow-on errors from the parser losing its place.
+ * The declarations that parse are kept, and each broken one becomes a {@link Decl.Rejected}, so
+ * that elaboration still checks the rest of the description in the same run.
  */
 public final class MachineReader {
     private MachineReader() {
     }
 
-    /** Parses {@code text}; syntax errors go into {@code diags}. The AST is empty after errors. */
+    /**
+     * Parses {@code text}; syntax errors go into {@code diags}. After errors the AST holds the
+     * declarations that parse on their own and a {@link Decl.Rejected} for each that does not.
+     */
     public static SourceFile parse(Path file, String text, Diagnostics diags) {
         if (!NestingLimit.scan(file, text, '#', true, false, diags).isEmpty()) {
             return new SourceFile(file, List.of());
@@ -36,13 +42,17 @@ public final class MachineReader {
             return new AstBuilder(file, diags).file(tree);
         }
         int reported = 0;
+        List<Decl> kept = new ArrayList<>();
         List<Chunks.Chunk> chunks = Chunks.of(text);
         for (Chunks.Chunk c : chunks) {
             List<Diagnostic> own = new ArrayList<>();
             String chunk = text.substring(c.start(), c.end());
             boolean last = c.end() == text.length();
-            parse(file, chunk, c.line(), last, own);
-            if (!own.isEmpty()) {
+            MachineParser.FileContext part = parse(file, chunk, c.line(), last, own);
+            if (own.isEmpty()) {
+                kept.addAll(new AstBuilder(file, diags).file(part).decls());
+            } else {
+                kept.add(rejected(file, chunk, c.line()));
                 Diagnostic first = own.get(0);
                 diags.add(first);
                 reported++;
@@ -56,10 +66,35 @@ public final class MachineReader {
             }
         }
         if (reported == 0) {
+            // The declarations parse alone but not together: nothing of the file is trusted.
             diags.add(errors.get(0));
+            return new SourceFile(file, List.of());
         }
-        return new SourceFile(file, List.of());
+        return new SourceFile(file, List.copyOf(kept));
     }
+
+    /** A broken declaration by its first two words ({@code stage inverter}), read from its first line of code. */
+    static Decl.Rejected rejected(Path file, String chunk, int firstLine) {
+        String[] lines = chunk.split("\n", -1);
+        for (int i = 0; i < lines.length; i++) {
+            String code = lines[i];
+            int hash = code.indexOf('#');
+            code = hash < 0 ? code : code.substring(0, hash);
+            java.util.regex.Matcher m = FIRST_WORDS.matcher(code);
+            if (m.lookingAt()) {
+                int col = m.start(1) + 1;
+                return new Decl.Rejected(m.group(1), m.group(2) == null ? "" : m.group(2),
+                        new Span(file, firstLine + i, col, firstLine + i, col + m.group(1).length()));
+            }
+            if (!code.isBlank()) {
+                break;
+            }
+        }
+        return new Decl.Rejected("", "", new Span(file, firstLine, 1, firstLine, 2));
+    }
+
+    private static final java.util.regex.Pattern FIRST_WORDS =
+            java.util.regex.Pattern.compile("\\s*([A-Za-z_]\\w*)(?:[ \\t]+([A-Za-z0-9_]\\w*))?");
 
     /** {@code text} with every character of its {@code index}-th line (0-based) but braces made a space. */
     static String blankLine(String text, int index) {

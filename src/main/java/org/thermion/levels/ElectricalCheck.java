@@ -1,5 +1,6 @@
 package org.thermion.levels;
 
+import org.thermion.text.Nouns;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -90,13 +91,13 @@ public final class ElectricalCheck {
             boolean high = w.side() == WorstMargin.Side.HIGH;
             String levels = high ? "V_OH " + v(n.voh()) + " against V_IH " + v(n.vih())
                     : "V_OL " + v(n.vol()) + " against V_IL " + v(n.vil());
-            String msg = "net '" + n.name() + "' (" + n.stage() + ", " + n.loads() + " load" + (n.loads() == 1 ? "" : "s")
+            String msg = "net '" + n.name() + "' (" + n.stage() + ", " + Nouns.count(n.loads(), "load")
                     + ": " + n.receivers() + ") has a worst-case " + (high ? "high" : "low") + " noise margin of "
                     + v(w.worst()) + (w.worst() < 0 ? "" : ", below the minimum " + v(a.minMargin())) + " at "
                     + w.corner().describe() + " (nominal " + v(w.nominal()) + "; " + levels + " nominal)";
             String fix;
             if (n.fanOutLimit() > 0 && n.fanOutLimit() < n.loads()) {
-                fix = "feed at most " + n.fanOutLimit() + " " + n.limitKind() + " inputs from it (buffer the rest through a "
+                fix = "feed at most " + n.fanOutLimit() + " " + n.limitKind() + " " + Nouns.agree(n.fanOutLimit(), "input") + " from it (buffer the rest through a "
                         + "cathode follower), or use a stronger driving stage";
             } else if (n.fanOutLimit() == 0) {
                 fix = "this stage cannot drive even one " + n.limitKind() + " input with that margin: use another "

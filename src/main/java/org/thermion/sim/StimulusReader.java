@@ -1,5 +1,6 @@
 package org.thermion.sim;
 
+import org.thermion.text.Nouns;
 import org.thermion.lang.Diagnostics;
 import org.thermion.lang.Names;
 import org.thermion.lang.SourceSet;
@@ -68,7 +69,7 @@ public final class StimulusReader {
                 Field at = rec.size() > header.size() ? rec.get(header.size()) : rec.get(rec.size() - 1);
                 Span s = rec.size() > header.size() ? at.span() : at.endSpan();
                 diags.error(s, "expected " + header.size() + " fields (" + (phased ? "cycle, phase" : "cycle") + " and "
-                        + (header.size() - lead) + (header.size() - lead == 1 ? " input" : " inputs") + ", as in the header), found "
+                        + Nouns.count(header.size() - lead, "input") + ", as in the header), found "
                         + rec.size(), null);
                 continue;
             }

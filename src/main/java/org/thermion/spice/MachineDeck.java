@@ -1,5 +1,6 @@
 package org.thermion.spice;
 
+import org.thermion.text.Nouns;
 import org.thermion.circuit.Corner;
 import org.thermion.circuit.FlipFlop;
 import org.thermion.circuit.MachineCircuits;
@@ -190,8 +191,8 @@ public final class MachineDeck {
             }
         }
         if (inputs.length > c.inputs() && !(c instanceof FlipFlop)) {
-            notes.add(what + ": stage " + st.name() + "'s circuit has " + c.inputs() + " inputs; the gate's other "
-                    + (inputs.length - c.inputs()) + " are not written");
+            notes.add(what + ": stage " + st.name() + "'s circuit has " + Nouns.count(c.inputs(), "input") + "; the gate's other "
+                    + (inputs.length - c.inputs()) + " " + (inputs.length - c.inputs() == 1 ? "is" : "are") + " not written");
         }
         driven.put(netNode(output), instances.size());
         w.note("");

@@ -1,5 +1,6 @@
 package org.thermion.spice;
 
+import org.thermion.text.Nouns;
 import org.thermion.circuit.Load;
 import org.thermion.circuit.RailSet;
 import org.thermion.circuit.StageCircuit;
@@ -44,7 +45,7 @@ public record StageDeck(SpiceDeck deck, StageNetlist netlist, List<String> spice
         }
         w.note("stage " + stage.name() + ", written by Thermion from the circuit its operating points are solved with");
         w.note("inputs " + (in.length() == 0 ? "none" : in) + (stored ? ", stored state 1" : "")
-                + ", " + loads.size() + " load" + (loads.size() == 1 ? "" : "s") + " on the output (node "
+                + ", " + Nouns.count(loads.size(), "load") + " on the output (node "
                 + names.get(nl.output()) + ")");
         w.note("B sources: the published tube equations; R ..._leak: the model's 1 TOhm leakage per tube path");
         w.note("");

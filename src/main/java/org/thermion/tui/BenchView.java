@@ -1,5 +1,6 @@
 package org.thermion.tui;
 
+import org.thermion.text.Nouns;
 import com.googlecode.lanterna.input.KeyStroke;
 import com.googlecode.lanterna.input.KeyType;
 import org.thermion.faults.Diagnosis;
@@ -112,7 +113,7 @@ final class BenchView {
         for (String line : wrap(set, w)) {
             c.text(in.col(), row++, line, Palette.KEY);
         }
-        c.text(in.col(), row++, Canvas.fit("clock " + Words.count(b.cycles(), "cycle"), w), Palette.KEY);
+        c.text(in.col(), row++, Canvas.fit("clock " + Nouns.count(b.cycles(), "cycle"), w), Palette.KEY);
         c.text(in.col(), row++, Canvas.fit("lamp        expect  seen", w), Palette.DIM);
         int rows = in.bottom() - row;
         int first = Math.max(0, Math.min(b.lamp() - rows / 2, b.lampCount() - rows));
@@ -135,7 +136,7 @@ final class BenchView {
 
     private static void drawSuspects(Canvas c, Rect r, BenchSession b) {
         int n = b.recordedCount();
-        c.box(r, "suspects after " + Words.count(n, "step") + ", best first");
+        c.box(r, "suspects after " + Nouns.count(n, "step") + ", best first");
         Rect in = Canvas.inside(r);
         int w = in.width();
         int row = in.row();
@@ -168,7 +169,7 @@ final class BenchView {
             String words = next == null && b.leadingCount() <= 1 ? "every step recorded: look first at the fault at the top"
                     : next == null ? "every step recorded; no further step tells the leaders apart: check them by hand"
                     : "to split the leaders: after the plan, " + (b.switchesOn(next).isEmpty() ? "every switch off"
-                    : "on: " + String.join(" ", b.switchesOn(next))) + ", clock " + Words.count(next.cycles(), "cycle");
+                    : "on: " + String.join(" ", b.switchesOn(next))) + ", clock " + Nouns.count(next.cycles(), "cycle");
             int y = in.bottom() - footer;
             for (String line : wrap(words, w)) {
                 if (y < in.bottom()) {

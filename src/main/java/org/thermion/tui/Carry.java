@@ -1,5 +1,6 @@
 package org.thermion.tui;
 
+import org.thermion.text.Nouns;
 import org.thermion.asm.ListingLine;
 import org.thermion.model.Instruction;
 import org.thermion.model.Latch;
@@ -122,8 +123,8 @@ final class Carry {
         }
         fresh.carryCycles(old.cycle());
         int breakpoints = breakpoints(old, fresh);
-        out.add(0, "kept: cycle " + String.format("%,d", old.cycle()) + ", " + pc + kept + " of " + oldLatches.size()
-                + " latches, " + count(switches, "switch") + ", " + count(breakpoints, "breakpoint"));
+        out.add(0, "kept: cycle " + String.format("%,d", old.cycle()) + ", " + pc + kept + " of " + count(oldLatches.size(), "latch")
+                + ", " + count(switches, "switch") + ", " + count(breakpoints, "breakpoint"));
         if (!newLatches.isEmpty()) {
             out.add("at power-up state: " + list(new ArrayList<>(newLatches.keySet())) + " (new)");
         }
@@ -186,7 +187,7 @@ final class Carry {
         gone.removeAll(now);
         List<String> added = new ArrayList<>(now);
         added.removeAll(was);
-        String plural = Words.plural(noun);
+        String plural = Nouns.plural(noun);
         if (!added.isEmpty()) {
             out.add((added.size() == 1 ? "new " + noun + ": " : "new " + plural + ": ") + list(added));
         }
@@ -269,6 +270,6 @@ final class Carry {
     }
 
     private static String count(long n, String noun) {
-        return Words.count(n, noun);
+        return Nouns.count(n, noun);
     }
 }

@@ -2,11 +2,11 @@ package org.thermion.tui;
 
 import org.thermion.model.Machine;
 import org.thermion.model.Rail;
-import org.thermion.model.RailDraw;
 import org.thermion.model.StageType;
 import org.thermion.power.CurrentMeter;
 import org.thermion.power.DrawingInstance;
 import org.thermion.power.DrawingInstances;
+import org.thermion.power.StageDraw;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -34,12 +34,16 @@ final class PowerPanel {
 
     /**
      * Rails some stage instance draws from (plate, bias, relay coils, the soft-start thyratron), in the machine's
-     * order but with the highest positive voltage (B+) first.
+     * order but with the highest positive voltage (B+) first. Asked of the meter's stage figures, computed
+     * from the circuits or declared: a library stage no longer declares its draws.
      */
-    static List<Integer> plateRails(Machine m) {
+    static List<Integer> plateRails(Machine m, StageDraw draw) {
         boolean[] drawn = new boolean[m.rails().size()];
         for (DrawingInstance d : DrawingInstances.of(m)) {
-            mark(drawn, m.stages().get(d.stage()));
+            StageType st = m.stages().get(d.stage());
+            for (int rail = 0; rail < drawn.length; rail++) {
+                drawn[rail] |= draw.drawsOn(st, rail);
+            }
         }
         List<Integer> r = new ArrayList<>();
         int bplus = -1;
@@ -59,16 +63,6 @@ final class PowerPanel {
         return r;
     }
 
-    private static void mark(boolean[] drawn, StageType st) {
-        for (List<RailDraw> draws : List.of(st.drawLow(), st.drawHigh(), st.drawAlways())) {
-            for (RailDraw d : draws) {
-                if (d.amps() != 0) {
-                    drawn[d.rail()] = true;
-                }
-            }
-        }
-    }
-
     static void draw(Canvas c, Rect r, Session s) {
         Machine m = s.machine();
         CurrentMeter meter = s.meter();
@@ -77,7 +71,7 @@ final class PowerPanel {
         boolean showRails = in.height() >= height(s) - 2 - 1;
         c.box(r, showRails ? "power" : "power \u00B7 rail totals need more rows");
         Canvas cc = c.within(in);
-        List<Integer> rails = plateRails(m);
+        List<Integer> rails = plateRails(m, meter.draw());
         int fixed = 1 + MODULE + 6 + 9;
         int shown = Math.max(1, Math.min(rails.size(), (in.width() - fixed) / RAIL_COLUMNS));
         int col = in.col() + 1;

@@ -94,8 +94,43 @@ class CheckCommandTest {
         Result r = run("check", MODULES_ONLY);
         assertThat(r.code()).isZero();
         // majority: three ANDs and one OR; parity_latch: two inverters, two ANDs, one OR and its latch
-        assertThat(r.out()).contains("no machine block, so nothing to").containsPattern("majority +4 +0")
+        assertThat(r.out()).contains("modules only (no machine block, so").containsPattern("majority +4 +0")
                 .containsPattern("parity_latch +5 +1");
+    }
+
+    private static final String LIBRARY_STAGES = "src/test/resources/org/thermion/cli/reports/modules-library-stages.machine";
+
+    @Test
+    void aFileOfModulesWithoutRealizeOrRailsIsCheckedAsIfItHadTheLibraryStagesItNames(@TempDir Path dir) throws Exception {
+        Result alone = run("check", LIBRARY_STAGES);
+        assertThat(alone.code()).isZero();
+        assertThat(alone.err()).isEmpty();
+        String text = alone.out().replace("\n  ", " ");
+        String realize = text.substring(text.indexOf("`realize {") + 1, text.indexOf("}`") + 1);
+        assertThat(realize).contains("not pentode_inverter", "latch triode_flipflop");
+        assertThat(text).contains("Rails taken as the including machine's (not declared here): bias, bplus.");
+        // The same modules with the realize block and rails the report names: nothing assumed, the same counts.
+        Path explicit = dir.resolve("explicit.machine");
+        Files.writeString(explicit, "rail bplus { voltage 48 V }\nrail bias { voltage -24 V }\n" + realize + "\n"
+                + Files.readString(Path.of(LIBRARY_STAGES)));
+        Result written = run("check", explicit.toString());
+        assertThat(written.code()).isZero();
+        assertThat(written.out()).doesNotContain("parts library's first stage", "Rails taken");
+        assertThat(table(written.out())).isEqualTo(table(alone.out())).contains("half_adder", "lamp_select");
+    }
+
+    @Test
+    void theExampleDecoderFileMeantForIncludeChecksWithoutErrors() {
+        // examples/pumpstation/decoder.machine has modules only; the pump station supplies realize and rails
+        Result r = run("check", "examples/pumpstation/decoder.machine");
+        assertThat(r.err()).doesNotContain("error");
+        assertThat(r.code()).isZero();
+        assertThat(r.out().replace("\n  ", " ")).startsWith("examples/pumpstation/decoder.machine: modules only")
+                .contains("as if it had `realize {");
+    }
+
+    private static String table(String out) {
+        return out.substring(out.indexOf("modules:"));
     }
 
     @Test

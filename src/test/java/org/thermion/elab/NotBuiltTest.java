@@ -50,12 +50,11 @@ class NotBuiltTest {
         int oselStages = (int) whole.netlist().gates().stream().filter(g -> g.module() == osel.id() && g.stage() >= 0).count();
         assertThat(oselStages).isPositive();
         assertThat(half.stageInstanceCount()).isEqualTo(whole.stageInstanceCount() - oselStages);
-        // osel drives src, grp[4] and pos[4] of the controller; the built part reads src, pos[0..3]
-        // and grp[2..3] (the write strobes): seven switches after the six inputs. grp[0] and grp[1]
-        // were read only inside osel, so they need no switch.
-        assertThat(half.inputs()).hasSize(whole.inputs().size() + 7);
-        assertThat(half.inputs().stream().map(Port::name).toList()).contains("src", "grp[2]", "grp[3]", "pos[0]", "pos[3]")
-                .doesNotContain("grp[0]", "grp[1]");
+        // osel drives src and pos[4] of the controller, which reads all five: five switches after
+        // the six inputs. Its group lines grp[0..3] are read only inside osel: no switch.
+        assertThat(half.inputs()).hasSize(whole.inputs().size() + 5);
+        assertThat(half.inputs().stream().map(Port::name).toList()).contains("src", "pos[0]", "pos[3]")
+                .doesNotContain("grp[0]", "grp[2]", "osel.grp[2]");
     }
 
     @Test
@@ -73,11 +72,11 @@ class NotBuiltTest {
         for (int level = 0; level <= 1; level++) {
             Machine held = demo("  notbuilt osel held " + level + "\n", false);
             assertThat(held.inputs()).hasSize(whole.inputs().size());
-            // The seven nets osel drove for the built part now read the level on every lane.
+            // The five nets osel drove for the built part now read the level on every lane.
             org.thermion.sim.Simulator sim = new org.thermion.sim.Simulator(held);
             sim.reset(new org.thermion.sim.InitMode.Zero());
             sim.settle();
-            for (String net : java.util.List.of("src", "grp[2]", "grp[3]", "pos[0]", "pos[3]")) {
+            for (String net : java.util.List.of("src", "pos[0]", "pos[1]", "pos[2]", "pos[3]")) {
                 int n = java.util.Arrays.asList(held.netlist().netNames()).indexOf(net);
                 assertThat(n).as(net).isPositive();
                 assertThat(sim.value(n)).as(net + " held " + level).isEqualTo(level == 1 ? -1L : 0L);

@@ -58,7 +58,7 @@ class VcdWriterTest {
         // Nets of a module instance sit in its scope with the local name.
         String inner = innerBusBit(m);
         String innerBus = inner.substring(0, inner.lastIndexOf('['));
-        assertThat(r.vars).containsKey("pumpstation.lu.inv");
+        assertThat(r.vars).containsKey("pumpstation.lu.s_n");
         assertThat(r.vars.keySet()).anyMatch(k -> k.startsWith("pumpstation." + innerBus + "[") && k.endsWith(":0]"));
         // No bus bit is left declared alone when its whole bus is dumped.
         assertThat(r.vars.keySet()).noneMatch(k -> k.matches(".*\\[\\d+]"));

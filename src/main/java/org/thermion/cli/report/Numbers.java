@@ -29,11 +29,6 @@ public final class Numbers {
         return d.scale() < 0 ? d.setScale(0) : d;
     }
 
-    /** A counted noun that agrees with its number: "1 step", "3 steps" (nouns with a plain -s plural). */
-    public static String count(long n, String noun) {
-        return n + " " + noun + (n == 1 ? "" : "s");
-    }
-
     /** {@code v} for a CSV field: six significant figures, empty when not finite. */
     public static String plain(double v) {
         BigDecimal d = decimal(v);

@@ -27,4 +27,12 @@ public sealed interface Decl {
     /** {@code isa NAME { ... }}. */
     record Isa(Ident name, List<Prop> props, List<IsaOp> ops, Span span) implements Decl {
     }
+
+    /**
+     * A declaration whose text did not parse (its syntax errors are reported): its first word
+     * ({@code stage}, {@code rail} ...) and name, when they could be read, so that the rest of
+     * the description is still checked and its uses are not reported again as unknown.
+     */
+    record Rejected(String kind, String name, Span span) implements Decl {
+    }
 }
