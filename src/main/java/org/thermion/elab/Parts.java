@@ -150,7 +150,9 @@ final class Parts {
         if (i == null) {
             diags.error(at, "unknown rail '" + name + "'",
                     Declarations.hintFor(name, new ArrayList<>(railIndex.keySet()),
-                            "declare it with `" + PropertyTable.RAIL.skeleton(name) + "`"));
+                            "declare it with `" + (LIBRARY_RAILS.containsKey(name)
+                                    ? "rail " + name + " { voltage " + LIBRARY_RAILS.get(name) + " }"
+                                    : PropertyTable.RAIL.skeleton(name)) + "`"));
             return -1;
         }
         return i;

@@ -110,6 +110,7 @@ public final class NetFanout {
             }
         }
         List<Node> nodes = new ArrayList<>();
+        org.thermion.model.NetLabels labels = new org.thermion.model.NetLabels(nl);
         int[] nodeOfRoot = new int[n];
         java.util.Arrays.fill(nodeOfRoot, -1);
         for (int r = 0; r < n; r++) {
@@ -117,19 +118,22 @@ public final class NetFanout {
                 continue;
             }
             nodeOfRoot[r] = nodes.size();
-            nodes.add(new Node(r, sourceName(nl, members.get(r)), source[r], driver[r], members.get(r), pins.get(r)));
+            nodes.add(new Node(r, sourceName(nl, labels, members.get(r)), source[r], driver[r], members.get(r), pins.get(r)));
         }
         return new NetFanout(root, List.copyOf(nodes), nodeOfRoot);
     }
 
-    /** The first of the joined nets whose name the source wrote (a generated one only when none was). */
-    static String sourceName(Netlist nl, List<Integer> nets) {
+    /**
+     * The first of the joined nets whose name the source wrote; when none was, the expression
+     * that computes it and its file:line, never the elaborator's own name ("lu.$22").
+     */
+    static String sourceName(Netlist nl, org.thermion.model.NetLabels labels, List<Integer> nets) {
         for (int net : nets) {
             if (!generated(nl.netName(net))) {
                 return nl.netName(net);
             }
         }
-        return nl.netName(nets.get(0));
+        return labels.label(nets.get(0));
     }
 
     /** True for a temporary the elaborator made up ("alu.$12"). */

@@ -29,7 +29,7 @@ class DiagnosisTest {
     @Test
     void c17ExtendedPlanLeavesNoClassAboveThreeAndRanksEverySeededFaultFirst() {
         FaultCircuit c = FaultCircuit.of(Bench.c17());
-        FaultList faults = FaultList.of(c);
+        FaultList faults = FaultList.of(c, SocketPins.of(Bench.c17()));
         try (FaultSimulator sim = new FaultSimulator(c, null, 2)) {
             Plan plan = new PlanGenerator(sim, faults, Effort.DEFAULT).generate();
             List<Step> longer = Diagnosis.extend(sim, faults, plan.steps(), 3, Effort.DEFAULT);
@@ -44,7 +44,7 @@ class DiagnosisTest {
     void demoDiagnosisRanksEverySeededDetectableFaultFirst() {
         Machine demo = Bench.demo();
         FaultCircuit c = FaultCircuit.of(demo);
-        FaultList faults = FaultList.of(c);
+        FaultList faults = FaultList.of(c, SocketPins.of(demo)); // solder bridges seeded too
         try (FaultSimulator sim = new FaultSimulator(c, Bench.demoRom(demo), 2)) {
             Plan plan = new PlanGenerator(sim, faults, Effort.DEFAULT).generate();
             long t0 = System.nanoTime();
