@@ -27,6 +27,8 @@ import static org.thermion.cli.report.ReportUnit.TEXT;
 
 /** The parts of the timing report beyond the paths: stage figures, remedies and the short-path checks. */
 final class TimingSections {
+    private static final Absent NOT_STATED = new Absent("not stated");
+
     /** A declared figure this far from the computed one is warned about (issue's rule: 25 %). */
     static final double DECLARED_LIMIT = 0.25;
 
@@ -44,10 +46,10 @@ final class TimingSections {
                 .column("basis", "basis", TEXT, "computed from the stage's circuit, or declared in its block")
                 .column("rise_ohms", "rise R", OHMS, "effective output resistance of the rising edge")
                 .column("fall_ohms", "fall R", OHMS, "effective output resistance of the falling edge")
-                .column("declared_ron", "ron", OHMS, "the conducting resistance the stage declares")
+                .column("declared_ron", "ron", OHMS, "the conducting resistance the stage declares (used where no circuit solves)")
                 .column("gain", "gain", NUMBER, "Miller gain |dVplate/dVgrid| used for a triode input")
-                .column("gain_basis", "gain from", TEXT)
-                .column("declared_gain", "decl. gain", NUMBER)
+                .column("gain_basis", "gain from", TEXT, "computed at the operating point, declared in the block, or the default")
+                .column("declared_gain", "decl. gain", NUMBER, "the gain the block states")
                 .column("note", "note", TEXT);
         List<String> warnings = new ArrayList<>();
         Set<Integer> used = new LinkedHashSet<>();
@@ -71,12 +73,12 @@ final class TimingSections {
                 notes.add("circuit: " + e.problem());
             }
             double tubeSide = calc.pullsDown(st) ? rise : fall;
-            if (computed && differs(st.outputOhmsLow(), tubeSide)) {
+            if (computed && st.declared().ron() && differs(st.outputOhmsLow(), tubeSide)) {
                 notes.add(String.format(Locale.ROOT, "declared ron %s is %s from the computed %s",
                         Numbers.si(st.outputOhmsLow(), OHMS), percent(st.outputOhmsLow(), tubeSide),
                         Numbers.si(tubeSide, OHMS)));
             }
-            if (gainComputed && differs(st.gain(), gain)) {
+            if (gainComputed && st.declared().gain() && differs(st.gain(), gain)) {
                 notes.add(String.format(Locale.ROOT, "declared gain %.3g is %s from the computed %.3g", st.gain(),
                         percent(st.gain(), gain), gain));
             }
@@ -86,8 +88,9 @@ final class TimingSections {
                 }
             }
             t.row(st.name(), computed ? "computed" : "declared", orAbsent(rise), orAbsent(fall),
-                    orAbsent(st.outputOhmsLow()), orAbsent(gain), Double.isNaN(gain) ? Absent.NONE
-                            : gainComputed ? "computed" : "declared", orAbsent(st.gain()),
+                    st.declared().ron() ? orAbsent(st.outputOhmsLow()) : NOT_STATED, orAbsent(gain),
+                    Double.isNaN(gain) ? Absent.NONE : gainComputed ? "computed" : st.declared().gain() ? "declared" : "default",
+                    st.declared().gain() ? orAbsent(st.gain()) : NOT_STATED,
                     notes.isEmpty() ? Absent.NONE : String.join("; ", notes));
         }
         rep.table(t);

@@ -339,7 +339,8 @@ final class Parts {
         }
         return new StageType(name, function, tube, (int) b.num("sections"), perInput, fanIn, Double.isNaN(load) ? 0 : load, loadRail,
                 List.copyOf(low), List.copyOf(high), List.copyOf(always), rise, fall, b.num("setup"), ron, b.num("wiring"),
-                b.num("gain"), note == null ? "" : note.word("value"), circuit);
+                b.num("gain"), note == null ? "" : note.word("value"), circuit,
+                new StageType.Declared(b.has("ron"), b.has("gain")));
     }
 
     /** The output state ({@code low}, {@code high}, {@code always}) in which a stage of {@code f} conducts; null when reported. */

@@ -8,7 +8,8 @@ import java.util.List;
  * from the plate load and the driven capacitance. {@code sectionsPerInput} is true for
  * stages that take one section per input (diode gates). {@code circuit} is the stage's declared
  * circuit (null for a stage known only by its typed-in currents, {@code circuit none}); where both
- * are given, the typed-in draws override the computed ones.
+ * are given, the typed-in draws override the computed ones. {@code declared} says whether
+ * {@code outputOhmsLow} and {@code gain} were written in the block or are defaults.
  */
 public record StageType(
         String name,
@@ -29,7 +30,14 @@ public record StageType(
         double wiringFarads,
         double gain,
         String note,
-        StageCircuitSpec circuit) {
+        StageCircuitSpec circuit,
+        Declared declared) {
+
+    /** Which of the figures a circuit can compute the stage's block states itself (the others are defaults). */
+    public record Declared(boolean ron, boolean gain) {
+        /** Both stated, as a stage without a circuit has them. */
+        public static final Declared BOTH = new Declared(true, true);
+    }
 
     /** True when the stage declares its circuit. */
     public boolean hasCircuit() {
