@@ -48,6 +48,55 @@ class StageWiringTest {
     }
 
     @Test
+    void everyPassivePartOfEveryStageCircuitIsInTheWireListOnceWithBothLeads() {
+        for (java.nio.file.Path p : new java.nio.file.Path[] {BuildMachines.DECODER, BuildMachines.PUMPSTATION}) {
+            Machine m = BuildMachines.file(p);
+            BuildDocuments docs = BuildDocuments.of(m);
+            org.thermion.circuit.MachineCircuits circuits = docs.circuits();
+            Map<String, List<String>> leadsOf = leads(docs.wiring());
+            Map<Integer, Integer> wired = new HashMap<>();
+            for (Part part : docs.wiring().parts()) {
+                boolean passive = Set.of(PartClass.RESISTOR, PartClass.RELAY, PartClass.LAMP).contains(part.cls());
+                if (passive && part.owner() >= 0 && !part.role().startsWith("steering ")) {
+                    assertThat(leadsOf.get(part.ref())).as(part.role()).hasSize(2);
+                    wired.merge(part.owner(), 1, Integer::sum);
+                }
+            }
+            int stages = 0;
+            for (org.thermion.model.Gate g : m.netlist().gates()) {
+                if (g.stage() >= 0) {
+                    stages += assertSameCount(circuits, m.stages().get(g.stage()), g.arity(), wired.getOrDefault(g.id(), 0));
+                }
+            }
+            for (Latch l : m.netlist().latches()) {
+                if (l.stage() >= 0) {
+                    stages += assertSameCount(circuits, m.stages().get(l.stage()), 0,
+                            wired.getOrDefault(StageKey.latch(m.netlist(), l.id()), 0));
+                }
+            }
+            assertThat(stages).as(p.toString()).isGreaterThan(10);
+        }
+    }
+
+    /** The circuit's resistors, coils and lamps (its own, not the driving sources') against the parts wired for it. */
+    private static int assertSameCount(org.thermion.circuit.MachineCircuits circuits, org.thermion.model.StageType st,
+                                       int inputs, int wiredParts) {
+        java.util.Optional<org.thermion.circuit.StageCircuit> c = circuits.circuit(st);
+        if (c.isEmpty()) {
+            return 0;
+        }
+        org.thermion.circuit.DcResult r = circuits.solver().solve(c.get(), new double[Math.max(inputs, c.get().inputs())],
+                false, List.of(), org.thermion.circuit.Corner.NOMINAL);
+        assertThat(r).as(st.name()).isInstanceOf(org.thermion.circuit.OperatingPoint.class);
+        long passive = ((org.thermion.circuit.OperatingPoint) r).parts().stream().map(org.thermion.circuit.PartCurrent::label)
+                .map(s -> s.startsWith(org.thermion.circuit.StageSolver.DRIVER + ".")
+                        ? s.substring(org.thermion.circuit.StageSolver.DRIVER.length() + 1) : s)
+                .filter(s -> !s.startsWith("diode") && !s.equals("tube")).count();
+        assertThat(wiredParts).as(st.name()).isEqualTo((int) passive);
+        return 1;
+    }
+
+    @Test
     void aFollowersCathodeCoilIsARelayOnTheWireListNotAResistor() {
         Machine m = BuildMachines.text("""
                 rail bplus { voltage 48 V; source 4 ohm; limit 800 mA }
