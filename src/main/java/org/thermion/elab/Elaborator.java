@@ -310,15 +310,8 @@ public final class Elaborator {
                         .findFirst().orElse(p.span()));
             }
         }
-        for (int i = 0; i < softStarts.size(); i++) {
-            softStarts.set(i, softStartReader.withCovers(softStarts.get(i), modules));
-        }
-        for (int i = softStarts.size() - 1; i >= 0; i--) {
-            if (softStarts.get(i) == null) {
-                softStarts.remove(i);
-                softStartSpans.remove(i);
-            }
-        }
+        // A null stands for a covers line already reported: elaboration stops at the error check below.
+        softStarts.replaceAll(ss -> softStartReader.withCovers(ss, modules));
         List<BuiltBlock> built = new BuiltBlocks(parts, packer, diags).build(mb, pc != null ? pc.width() : 0,
                 rom != null ? rom.words() : 0, rom != null ? rom.width() : 0, modules);
         for (Prop h : decls.heaters) {

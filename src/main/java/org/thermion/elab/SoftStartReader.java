@@ -33,8 +33,7 @@ final class SoftStartReader {
     private final Packer packer;
     private final Diagnostics diags;
     /** The names each soft start's {@code covers} line was written with, for the checks after wiring. */
-    private final Map<SoftStart, List<Value>> coverLines = new IdentityHashMap<>();
-    private final Map<SoftStart, Span> coverSpans = new IdentityHashMap<>();
+    private final Map<SoftStart, PropLine> coverLines = new IdentityHashMap<>();
 
     SoftStartReader(Parts parts, Packer packer, Diagnostics diags) {
         this.parts = parts;
@@ -66,8 +65,7 @@ final class SoftStartReader {
         SoftStart ss = new SoftStart(name, rail, resistor.num(), watts, relay, trigger, SoftStartCover.wholeRail());
         PropLine covers = b.line("covers");
         if (covers != null) {
-            coverLines.put(ss, covers.tokens("loads"));
-            coverSpans.put(ss, covers.span("loads"));
+            coverLines.put(ss, covers);
         }
         return ss;
     }
@@ -78,13 +76,13 @@ final class SoftStartReader {
      * whichever block comes first.
      */
     SoftStart withCovers(SoftStart ss, List<ModuleInstance> modules) {
-        List<Value> names = coverLines.get(ss);
-        if (names == null) {
+        PropLine line = coverLines.remove(ss);
+        if (line == null) {
             return ss;
         }
-        coverLines.remove(ss);
+        List<Value> names = line.tokens("loads");
         if (names.isEmpty()) {
-            diags.error(coverSpans.get(ss), "soft start '" + ss.name() + "' covers nothing",
+            diags.error(line.span("loads"), "soft start '" + ss.name() + "' covers nothing",
                     "name the module instances or tube types behind its resistor, or leave out the `covers` line");
             return null;
         }
@@ -94,7 +92,7 @@ final class SoftStartReader {
         }
         SoftStart covered = new SoftStart(ss.name(), ss.rail(), ss.resistorOhms(), ss.ratedWatts(), ss.relay(),
                 ss.trigger(), cover);
-        coverLines.put(covered, names);
+        coverLines.put(covered, line);
         return covered;
     }
 
@@ -148,11 +146,11 @@ final class SoftStartReader {
     void checkCovers(List<SoftStart> softStarts, List<HeaterString> strings, List<Envelope> envelopes,
                      List<String> tubeNames) {
         for (SoftStart ss : softStarts) {
-            List<Value> written = coverLines.get(ss);
+            PropLine written = coverLines.get(ss);
             if (written == null) {
                 continue;
             }
-            for (Value v : written) {
+            for (Value v : written.tokens("loads")) {
                 for (int t : ss.cover().tubes()) {
                     if (!tubeNames.get(t).equals(v.text())) {
                         continue;
@@ -190,7 +188,7 @@ final class SoftStartReader {
                     }
                 }
                 if (!both.isEmpty()) {
-                    diags.error(coverLines.get(b).get(0).span(), "soft starts '" + a.name() + "' and '" + b.name()
+                    diags.error(coverLines.get(b).tokens("loads").get(0).span(), "soft starts '" + a.name() + "' and '" + b.name()
                                     + "' both cover " + String.join(", ", both),
                             "a load sits behind one soft-start resistor at most: take it out of one `covers` line");
                 }
