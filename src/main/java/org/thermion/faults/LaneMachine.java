@@ -31,6 +31,9 @@ final class LaneMachine {
     private final long[] loadV;
     private final long[] loadX;
     private final int pcMask;
+    // Slots given a force since the last clearFaults, so clearing touches only those.
+    private int[] forced = new int[16];
+    private int forcedCount;
     // Solder bridges (allocated with the first): per bridge its lanes; per slot the lanes it is
     // joined on, the joined value and the value its driver gives on its own.
     private Bridge[] bridges = new Bridge[0];
@@ -119,10 +122,40 @@ final class LaneMachine {
     }
 
     void force(int slot, boolean value, long lanes) {
+        if ((f0[slot] | f1[slot]) == 0L) {
+            if (forcedCount == forced.length) {
+                forced = Arrays.copyOf(forced, 2 * forced.length);
+            }
+            forced[forcedCount++] = slot;
+        }
         if (value) {
             f1[slot] |= lanes;
         } else {
             f0[slot] |= lanes;
+        }
+    }
+
+    /**
+     * Takes every fault off every lane, so a worker can load its next batch into the same
+     * machine instead of allocating one per batch (call {@link #powerUp} after injecting).
+     */
+    void clearFaults() {
+        for (int k = 0; k < forcedCount; k++) {
+            f0[forced[k]] = 0L;
+            f1[forced[k]] = 0L;
+        }
+        forcedCount = 0;
+        if (bm != null) {
+            bridges = new Bridge[0];
+            bridgeLanes = new long[0];
+            bridgedSlots = new int[0];
+            bm = null;
+            jv = null;
+            jx = null;
+            rawV = null;
+            rawX = null;
+            swV = null;
+            swX = null;
         }
     }
 

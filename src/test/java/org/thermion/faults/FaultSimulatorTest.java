@@ -40,6 +40,19 @@ class FaultSimulatorTest {
                         .isEqualTo(firstDifference(refGood, ref.run(f, steps), lamps));
             }
         }
+        // One worker reloads one machine for every batch: bridges first, so stuck-at batches follow
+        // bridge batches in the same machine, and nothing of an earlier batch may stay behind.
+        List<Fault> reversed = new ArrayList<>(faults);
+        java.util.Collections.reverse(reversed);
+        try (FaultSimulator single = new FaultSimulator(c, rom, 1)) {
+            for (int round = 0; round < 2; round++) {
+                byte[][] got = single.responses(round == 0 ? reversed : faults, steps);
+                for (int i = 0; i < faults.size(); i++) {
+                    Fault f = (round == 0 ? reversed : faults).get(i);
+                    assertThat(got[i]).as("%s, one reused machine: fault %s", what, f).isEqualTo(ref.run(f, steps));
+                }
+            }
+        }
     }
 
     /** {@code n} bridges between random stems (inputs, ROM lines, gate and latch outputs), ids from {@code firstId}. */
