@@ -24,7 +24,7 @@ public final class FaultSimulator implements AutoCloseable {
     public static final byte UNKNOWN = 2;
 
     private final FaultCircuit circuit;
-    private final long[] rom;
+    private final long[][] programs;
     private final ExecutorService pool;
     private final int threads;
     // Machines without faults, kept between calls for the workers of eachBatch (one per thread at most).
@@ -32,8 +32,23 @@ public final class FaultSimulator implements AutoCloseable {
 
     /** A simulator over {@code circuit} with program memory {@code rom} (null: none) on {@code threads} threads. */
     public FaultSimulator(FaultCircuit circuit, long[] rom, int threads) {
+        this(circuit, java.util.Collections.singletonList(rom), threads);
+    }
+
+    /**
+     * A simulator whose machine runs {@code programs.get(0)} from power-up; a step that restarts
+     * with program k fits {@code programs.get(k)} (null entries: no ROM).
+     */
+    public static FaultSimulator running(FaultCircuit circuit, List<long[]> programs, int threads) {
+        return new FaultSimulator(circuit, programs, threads);
+    }
+
+    private FaultSimulator(FaultCircuit circuit, List<long[]> programs, int threads) {
         this.circuit = circuit;
-        this.rom = rom == null ? null : rom.clone();
+        this.programs = new long[programs.size()][];
+        for (int k = 0; k < this.programs.length; k++) {
+            this.programs[k] = programs.get(k) == null ? null : programs.get(k).clone();
+        }
         this.threads = Math.max(1, threads);
         this.pool = Executors.newFixedThreadPool(this.threads, r -> {
             Thread t = new Thread(r, "fault-sim");
@@ -50,8 +65,20 @@ public final class FaultSimulator implements AutoCloseable {
         return threads;
     }
 
+    /** A simulator like this one (same threads) whose plans may also fit {@code more}, numbered after its own (close it). */
+    public FaultSimulator withPrograms(List<long[]> more) {
+        List<long[]> all = new ArrayList<>(java.util.Arrays.asList(programs));
+        all.addAll(more);
+        return new FaultSimulator(circuit, all, threads);
+    }
+
+    /** How many programs a plan may fit in turn (1 on a machine run with one). */
+    public int programs() {
+        return programs.length;
+    }
+
     LaneMachine machine() {
-        return new LaneMachine(circuit, rom);
+        return new LaneMachine(circuit, programs);
     }
 
     /** The good machine's lamps after every step: {@code [step][lamp]}. */
@@ -153,12 +180,12 @@ public final class FaultSimulator implements AutoCloseable {
         for (int l = 0; l < n; l++) {
             m.inject(faults.get(from + l), 1L << l);
         }
+        m.fit(0);
         m.powerUp();
     }
 
     static void apply(LaneMachine m, Step s) {
-        m.setInputs(s.inputs());
-        m.clock(s.cycles());
+        m.step(s);
     }
 
     /** Lanes whose lamps show a known value other than the good machine's known one. */
