@@ -175,11 +175,52 @@ class TubeLibraryTest {
     }
 
     @Test
-    void thyratronFiresAboveItsCriticalGridAndThenHolds() {
+    void thyratronFiresAboveTheCriticalGridItsControlRatioSetsAndThenHolds() {
+        // r-type.org/exhib/aaa0479.htm (EN91, the 2D21's European equivalent) and r-type.org/exhib/acf0208.htm
+        // (CV4018, marked 2D21W): "the ratio is 250", a stated figure. The critical grid is then -Ea/250: -0.192 V
+        // at a 48 V anode, -0.096 V on a 24 V relay rail. The library's 2D21 takes its firing from this ratio, so
+        // these figures restate the source rather than check it; the next test checks it against another page.
         GasThyratron t = (GasThyratron) lib.require("2D21");
-        assertThat(t.conducts(false, -6)).isFalse();
-        assertThat(t.conducts(false, -2)).isTrue();
-        assertThat(t.conducts(true, -20)).isTrue();
+        assertThat(t.criticalGrid(48)).isCloseTo(-0.192, within(1e-9));
+        assertThat(t.conducts(false, -0.3, 48)).as("below critical at 48 V: stays off").isFalse();
+        assertThat(t.conducts(false, -0.1, 48)).isTrue();
+        assertThat(t.conducts(false, -0.1, 20)).as("at 20 V the critical grid is -0.08 V").isFalse();
+        assertThat(t.conducts(true, -20, 48)).as("once fired the grid has lost control").isTrue();
+        // The fixed -4 V the library held before would have fired it with the grid 3.8 V below this.
+        assertThat(t.conducts(false, -3.9, 48)).isFalse();
+    }
+
+    @Test
+    void thyratronCriticalGridAtItsPeakAnodeRatingAgreesWithAnotherPage() {
+        // vacuumtubes.io/tube/2D21W: critical control-grid voltage "approximately -2V to -6V (varies with shield
+        // grid voltage)", and a 650 V peak forward anode rating (both stated figures, no curve given). At 650 V the
+        // control ratio gives -2.6 V: inside that range, 30 % of the way from its -2 V end.
+        GasThyratron t = (GasThyratron) lib.require("2D21");
+        assertThat(t.criticalGrid(650)).isCloseTo(-2.6, within(1e-9)).isBetween(-6.0, -2.0);
+    }
+
+    @Test
+    void aTubeBlockMayStillFixItsCriticalGridWhateverTheAnode() {
+        String text = """
+                tube X21 {
+                  kind thyratron
+                  model gas critical -4 V source "demo"
+                  sections 1
+                  heater 6.3 V 600 mA
+                }
+                rail heat { voltage 6.3 V }
+                heaters on heat { parallel X21 }
+                module top { in a; out y; y = a }
+                machine fixed { top top; inputs a; outputs y }
+                """;
+        org.thermion.lang.Diagnostics d = new org.thermion.lang.Diagnostics();
+        org.thermion.model.Machine m = new org.thermion.elab.Elaborator(new org.thermion.lang.SourceSet(), d)
+                .elaborateText(java.nio.file.Path.of("fixed.machine"), text);
+        assertThat(d.hasErrors()).as(d.all().toString()).isFalse();
+        GasThyratron t = (GasThyratron) TubeLibrary.of(m.tubes()).require("X21");
+        assertThat(t.criticalGrid(48)).isEqualTo(-4.0);
+        assertThat(t.criticalGrid(400)).isEqualTo(-4.0);
+        assertThat(t.conducts(false, -3.9, 48)).isTrue();
     }
 
     @Test

@@ -250,7 +250,7 @@ class ElectricalCheckTest {
                   tube 2D21
                   %s
                   series 100 ohm
-                  grid divider 100 k 47 k to bias
+                  grid divider 47 k 100 k to bias
                 }
                 """.formatted(load), """
                   net pulled
@@ -260,8 +260,9 @@ class ElectricalCheckTest {
 
     @Test
     void aThyratronRelayStageInTheLogicIsJudgedByItsCoil() {
-        // a high input (48 V, from outside) puts the grid at -24 + 72 x 47/147 = -1.0 V, above the
-        // 2D21's critical -4 V: it fires, and the coil carries (24 - 8) / (1 + 100 + 160) = 61.30 mA
+        // a high input (48 V, from outside) puts the grid at -24 + 72 x 100/147 = +25 V, above the 2D21's
+        // critical grid at its 24 V anode, -24/250 = -0.10 V (control ratio 250, r-type.org EN91 page): it
+        // fires, and the coil carries (24 - 8) / (1 + 100 + 160) = 61.30 mA
         LevelAnalysisTest.Loaded l = LevelAnalysisTest.load(thyratronRelay("load coil 160 ohm pickup 50 mA from relay"));
         LevelAnalysis a = LevelAnalysis.of(l.machine(), l.where().margins());
         LoadDrive d = a.drives().get(0);
