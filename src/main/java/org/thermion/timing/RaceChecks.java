@@ -12,7 +12,8 @@ import java.util.List;
 
 /**
  * The short-path checks of a multi-phase machine, from the earliest a change can arrive (each
- * gate's faster edge, each latch's faster edge):
+ * gate adding the delay of the edge its output makes, as on the long paths; each launching latch
+ * its faster edge):
  * <ul>
  * <li>hold: a flip-flop steered by its data must see the data stay put until its conducting half
  * has taken over (after that the pair holds itself), so its hold time is its own faster edge (our
@@ -25,6 +26,9 @@ import java.util.List;
  * The phases' overlap is judged from the long paths ({@link #overlaps}).
  */
 public final class RaceChecks {
+    private static final int RISE = 0;
+    private static final int FALL = 1;
+
     /** One check: what, where, the time available and the time needed (slack = have - need). */
     public record Check(String kind, int phase, String endpoint, double have, double need, String detail) {
         public double slack() {
@@ -122,30 +126,53 @@ public final class RaceChecks {
         return worst;
     }
 
-    /** Earliest arrival at every net of a change launched at the end of phase {@code launch} (infinity: none). */
+    /**
+     * Earliest arrival at every net of a change launched at the end of phase {@code launch}
+     * (infinity: none): the earlier of its rising and its falling edge. Edges are followed as the
+     * long paths follow them (an inverting gate turns a falling input into a rising output), each
+     * gate adding the delay of the edge its output makes: a diode AND falls fast through its diode
+     * but rises only through its pull-up, so one change cannot take every gate's faster edge.
+     * A launching flip-flop's output, and its free complement, count its faster edge both ways.
+     */
     double[] earliest(int launch, int phases) {
-        double[] a = new double[nl.netCount()];
-        Arrays.fill(a, Double.POSITIVE_INFINITY);
+        int n = nl.netCount();
+        double[][] a = new double[2][n];
+        Arrays.fill(a[RISE], Double.POSITIVE_INFINITY);
+        Arrays.fill(a[FALL], Double.POSITIVE_INFINITY);
         for (Latch l : nl.latches()) {
             if (l.phase() == launch) {
-                a[l.output()] = Math.min(latches[l.id()].rise(), latches[l.id()].fall());
+                double t = Math.min(latches[l.id()].rise(), latches[l.id()].fall());
+                a[RISE][l.output()] = t;
+                a[FALL][l.output()] = t;
             }
         }
         if (machine.pc() != null && machine.rom() != null && launch == machine.pc().phase()) {
             for (int d : machine.rom().dataNets()) {
-                a[d] = romAccess;
+                a[RISE][d] = romAccess;
+                a[FALL][d] = romAccess;
             }
         }
         for (Gate g : nl.gates()) {
-            double best = Double.POSITIVE_INFINITY;
-            for (int in : g.inputs()) {
-                best = Math.min(best, a[in]);
-            }
-            if (best < Double.POSITIVE_INFINITY) {
-                StageDelay d = gates[g.id()];
-                a[g.output()] = Math.min(a[g.output()], best + Math.min(d.rise(), d.fall()));
+            StageDelay d = gates[g.id()];
+            for (int out = RISE; out <= FALL; out++) {
+                double best = Double.POSITIVE_INFINITY;
+                for (int in : g.inputs()) {
+                    for (int edge = RISE; edge <= FALL; edge++) {
+                        if (g.fn().causes(edge == RISE, out == RISE)) {
+                            best = Math.min(best, a[edge][in]);
+                        }
+                    }
+                }
+                if (best < Double.POSITIVE_INFINITY) {
+                    double t = best + (out == RISE ? d.rise() : d.fall());
+                    a[out][g.output()] = Math.min(a[out][g.output()], t);
+                }
             }
         }
-        return a;
+        double[] first = new double[n];
+        for (int i = 0; i < n; i++) {
+            first[i] = Math.min(a[RISE][i], a[FALL][i]);
+        }
+        return first;
     }
 }

@@ -36,6 +36,30 @@ class ShortPathAndAdviceTest {
         assertThat(hold.passes()).isTrue();
     }
 
+    /**
+     * RACE with the same-phase path through two non-inverting gates whose fast edges differ, as a
+     * diode AND (falls through its diode, rises through its pull-up) feeding a diode OR (the other
+     * way round): a -> t_and -> t_or -> latch w (phase 1).
+     */
+    static final String RACE_THROUGH_GATES = RACE
+            .replace("stage t_ff :", "stage t_and : and { tube PQ1; circuit none; sections 1; load 10 k from bplus; rise 3 us; fall 0.1 us }\n"
+                    + "stage t_or : or { tube PQ1; circuit none; sections 1; load 10 k from bplus; rise 0.2 us; fall 4 us }\n"
+                    + "stage t_ff :")
+            .replace("latch t_ff }", "latch t_ff\n and t_and\n or t_or }")
+            .replace("g = t_inv(a)", "g = t_or(t_and(a, x), x)");
+
+    @Test
+    void holdFollowsEachChangesEdgeThroughTheGates() {
+        Machine m = TimingMachines.elaborate(RACE_THROUGH_GATES);
+        RaceChecks.Check hold = find(new RaceChecks(m, new DelayCalculator(m), 0).checks(50e-6), "hold", 1);
+        // By hand: a changes at its faster edge, 0.5 us. Rising: t_and rises 3 us, t_or rises 0.2 us:
+        // 3.7 us. Falling: t_and falls 0.1 us, t_or falls 4 us: 4.6 us. The earlier is 3.7 us (each
+        // gate's faster edge regardless of the change's direction would give 0.8 us).
+        assertThat(hold.endpoint()).isEqualTo("latch w");
+        assertThat(hold.have()).isCloseTo(3.7e-6, within(1e-12));
+        assertThat(hold.need()).isCloseTo(0.5e-6, within(1e-12));
+    }
+
     @Test
     void aPhaseShorterThanTheLatchSwitchingFailsPulseWidth() {
         Machine m = TimingMachines.elaborate(StaticTimingTest.CHAIN);
