@@ -186,6 +186,7 @@ public final class Elaborator {
             return null;
         }
         ModuleExpansion ex = ModuleExpansion.of(top, decls, parts, diags, mb.phases);
+        parts.readUnusedStages();
         Map<String, Signal> scope = ex.topScope;
         NetBuilder nb = ex.nb;
         topOutputs = new java.util.HashSet<>();

@@ -264,12 +264,38 @@ final class Parts {
         return stages.size() - 1;
     }
 
+    /**
+     * Reads the description's own stages that nothing used, for their errors only: a mistyped
+     * key or unit in a stage waiting to be used should not wait with it. Library stages are
+     * left alone (they are checked by the library's tests), and nothing read here is kept.
+     */
+    void readUnusedStages() {
+        for (Map.Entry<String, Prop> e : decls.stages.entrySet()) {
+            Prop p = e.getValue();
+            if (stageIndex.containsKey(e.getKey()) || p.span().file().equals(SourceLoader.LIBRARY)) {
+                continue;
+            }
+            function(p);
+            PropBlock b = PropBlock.read(PropertyTable.STAGE, p, "stage '" + e.getKey() + "'", p.values().get(0).span(), diags);
+            for (String key : List.of("draw", "load", "grid", "cathode", "screen")) {
+                for (PropLine line : b.lines(key)) {
+                    String rail = line.has("rail") ? line.word("rail") : null;
+                    if (rail != null && !railIndex.containsKey(rail)) {
+                        diags.error(line.span("rail"), "unknown rail '" + rail + "'",
+                                Declarations.hintFor(rail, new ArrayList<>(railIndex.keySet()), "declare it with `rail " + rail + " { voltage ... }`"));
+                    }
+                }
+            }
+        }
+    }
+
     /** Whether a stage of that name is declared (a declaration that did not parse counts: it is reported). */
     boolean isStage(String name) {
         return decls.stages.containsKey(name) || decls.rejected("stage", name);
     }
 
-    private StageType buildStage(String name, Prop p, Span use) {
+    /** The function a stage's head names ({@code stage NAME : FUNCTION}), or null (reported). */
+    private StageFunction function(Prop p) {
         PropReader head = new PropReader(p, diags);
         head.word("stage name");
         head.expectSym(":");
@@ -283,6 +309,13 @@ final class Parts {
         if (function == null) {
             diags.error(fnSpan, "unknown stage function '" + fn + "'", Declarations.hintFor(fn, StageFunction.words(),
                     "expected one of: " + String.join(", ", StageFunction.words())));
+        }
+        return function;
+    }
+
+    private StageType buildStage(String name, Prop p, Span use) {
+        StageFunction function = function(p);
+        if (function == null) {
             return null;
         }
         int errorsBefore = diags.errorCount();

@@ -70,6 +70,11 @@ final class SlotReader {
                 spans.put(w.id(), in.lastSpan());
             }
         } else if (slot instanceof Slot.Name n) {
+            if (n.id().equals("rail") && !in.failed() && in.peek() instanceof Value.Num num && num.text().matches("[-+0-9.eE]+")) {
+                // `draw low 1 mA from bplus`: a number where the rail goes, said there, not at the unit after it
+                in.fail(num.span(), "expected " + n.what() + ", found '" + num.text() + "'", null);
+                return;
+            }
             String w = in.word(n.what());
             if (w != null && !n.choices().isEmpty() && !n.choices().contains(w)) {
                 in.fail(in.lastSpan(), "unknown " + n.what() + " '" + w + "'",
