@@ -41,14 +41,14 @@ class SoftStartWiringTest {
     @Test
     void theThyratronIsWiredAsItsRelayStageWithEveryElectrodeOnItsPin() {
         Wiring w = DOCS.wiring();
-        // library thyratron_relay: series 53 ohm from the relay rail, grid divider 100 k 47 k to bias
+        // library thyratron_relay: series 53 ohm from the relay rail, grid divider 100 k 100 k to bias
         Part plate = part(w, "plate resistor of " + S);
         assertThat(plate.ohms()).isEqualTo(53.0);
         assertThat(pins(w, plate.ref())).containsExactly(entry("1", "relay"), entry("2", S + "/feed"));
         Part series = part(w, "grid series 0 of " + S);
         Part toBias = part(w, "grid to bias 0 of " + S);
         assertThat(series.ohms()).isEqualTo(100e3);
-        assertThat(toBias.ohms()).isEqualTo(47e3);
+        assertThat(toBias.ohms()).isEqualTo(100e3);
         assertThat(pins(w, series.ref())).containsExactly(entry("1", "ground"), entry("2", S + "/tap0"));
         assertThat(pins(w, toBias.ref())).containsExactly(entry("1", S + "/tap0"), entry("2", "bias"));
         // fired, the coil carries (24 V - 8 V arc drop) / (53 + 160) ohm = 75 mA (library 2D21 arcdrop, from
@@ -69,8 +69,8 @@ class SoftStartWiringTest {
         PinVoltages.Chart rest = new PinVoltages(DOCS).at(ChartStates.atRest(PUMP, null));
         Wiring w = DOCS.wiring();
         Wiring.Socket s = w.sockets().stream().filter(x -> x.tube().equals("2D21")).findFirst().orElseThrow();
-        // grid: 0 V through 100 k to the tap, 47 k to -24 V: -24 x 100 / 147 = -16.3 V by Ohm's law
-        assertThat(rest.volts(s.node(1))).isCloseTo(-24 * 100 / 147.0, within(0.05));
+        // grid: 0 V through 100 k to the tap, 100 k to -24 V: -24 x 100 / 200 = -12 V by Ohm's law
+        assertThat(rest.volts(s.node(1))).isCloseTo(-24 * 100 / 200.0, within(0.05));
         // anode: the arc drop above the cathode (8 V, library) while it conducts
         assertThat(rest.volts(s.node(6))).isBetween(8.0, 9.0);
         int behind = nodeIndex(w, "heat behind heater_soft");
