@@ -7,7 +7,6 @@ import org.thermion.model.Latch;
 import org.thermion.model.Machine;
 import org.thermion.model.Netlist;
 import org.thermion.model.Port;
-import org.thermion.model.SoftStart;
 import org.thermion.power.HeaterAnalysis;
 
 import java.util.ArrayList;
@@ -70,10 +69,9 @@ public record BuildDocuments(Machine machine, Wiring wiring, List<HeaterWiring.H
         built(m, w, stages);
         HeaterWiring hw = new HeaterWiring(w);
         hw.wire(new HeaterAnalysis(m));
-        for (SoftStart s : m.softStarts()) {
-            w.loose(PartClass.RESISTOR, s.resistorOhms(), "power resistor", 0, "soft start " + s.name(), s.ratedWatts());
-            w.loose(PartClass.RELAY, s.relay().coilOhms(), "relay, coil " + Values.ohms(s.relay().coilOhms()), 0,
-                    "bypass of soft start " + s.name(), Double.NaN);
+        SoftStartWiring soft = new SoftStartWiring(w, stages, circuits);
+        for (int i = 0; i < m.softStarts().size(); i++) {
+            soft.wire(i);
         }
         return new BuildDocuments(m, w.build(), List.copyOf(hw.runs), circuits);
     }

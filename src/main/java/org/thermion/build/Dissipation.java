@@ -39,8 +39,16 @@ final class Dissipation {
 
     /** Watts in the stage's part labelled {@code label} of {@code ohms}. */
     double watts(StageType st, String label, double ohms) {
-        Map<String, Double> w = byStage.computeIfAbsent(st.name(), k -> solve(st));
-        Double v = w.get(label);
+        return watts(st.name(), () -> circuits.circuit(st), label, ohms);
+    }
+
+    /** As {@link #watts(StageType, String, double)} for a circuit of its own (a soft start's driver), named {@code key}. */
+    double watts(String key, StageCircuit c, String label, double ohms) {
+        return watts("instance " + key, () -> Optional.of(c), label, ohms);
+    }
+
+    private double watts(String key, java.util.function.Supplier<Optional<StageCircuit>> c, String label, double ohms) {
+        Double v = byStage.computeIfAbsent(key, k -> solve(c.get())).get(label);
         return v != null ? v : span * span / ohms;
     }
 
@@ -49,9 +57,8 @@ final class Dissipation {
         return span * span / ohms;
     }
 
-    private Map<String, Double> solve(StageType st) {
+    private Map<String, Double> solve(Optional<StageCircuit> oc) {
         Map<String, Double> out = new HashMap<>();
-        Optional<StageCircuit> oc = circuits.circuit(st);
         if (oc.isEmpty()) {
             return out;
         }

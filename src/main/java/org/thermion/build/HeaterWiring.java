@@ -5,6 +5,7 @@ import org.thermion.model.Basing;
 import org.thermion.model.Electrode;
 import org.thermion.model.HeaterRating;
 import org.thermion.model.HeaterString;
+import org.thermion.model.SoftStart;
 import org.thermion.model.TubeType;
 import org.thermion.power.HeaterAnalysis;
 
@@ -42,7 +43,7 @@ public final class HeaterWiring {
             HeaterString s = r.string();
             String railName = w.m.rails().get(s.rail()).name();
             int board = w.boards.of(s.module());
-            int node = w.rail(railName);
+            int node = feed(s, railName);
             String dropper = null;
             String tag = "heater string " + (r.index() + 1);
             if (s.dropOhms() > 0) {
@@ -58,7 +59,7 @@ public final class HeaterWiring {
                 boolean last = i == s.envelopes().size() - 1;
                 int next = last ? w.rail(RailSet.GROUND) : w.local(tag + " link " + (i + 1), Node.Kind.HEATER);
                 String[] ends = ends(env, s.ratings().get(i));
-                String from = nodeName(node, railName, tag, i);
+                String from = w.name(node);
                 String to = last ? RailSet.GROUND : tag + " link " + (i + 1);
                 boolean doubtful = heaterEnds(env, s.ratings().get(i), node, next);
                 String shunt = null;
@@ -76,8 +77,14 @@ public final class HeaterWiring {
         }
     }
 
-    private String nodeName(int node, String rail, String tag, int i) {
-        return i == 0 ? (node == w.rail(rail) ? rail : tag + " after dropper") : tag + " link " + i;
+    /** Where a string starts: behind the soft start that covers it, else the rail's supply. */
+    private int feed(HeaterString s, String rail) {
+        for (SoftStart ss : w.m.softStarts()) {
+            if (ss.rail() == s.rail() && ss.cover().coversString(s, w.m.envelopes())) {
+                return w.behind(ss);
+            }
+        }
+        return w.supply(rail);
     }
 
     private String socketRef(int env) {

@@ -46,10 +46,12 @@ public record PartsList(List<Row> rows, double sparePercent, double derating) {
             if (p.cls() == PartClass.RESISTOR) {
                 double e24 = PreferredValues.nearestE24(p.ohms());
                 double need = Double.isNaN(p.watts()) ? 0 : p.watts() / derating;
-                double rating = rating(need);
+                // a rating the description declares (a soft start's resistor, sized by `powerup`) is ordered as declared
+                double rating = Double.isNaN(p.declaredWatts()) ? rating(need) : p.declaredWatts();
                 String key = item + "|" + p.type() + "|" + String.format("%012.3f", e24) + "|" + rating;
                 Row r = rows.get(key);
-                double max = Math.max(r == null ? 0 : r.maxWatts(), Double.isNaN(p.watts()) ? 0 : p.watts());
+                double before = r == null ? Double.NaN : r.maxWatts();
+                double max = Double.isNaN(p.watts()) ? before : Double.isNaN(before) ? p.watts() : Math.max(before, p.watts());
                 rows.put(key, new Row(item, p.type(), e24, rating, max, (r == null ? 0 : r.used()) + 1, 0));
             } else {
                 String key = item + "|" + p.type();

@@ -79,6 +79,8 @@ public final class PinVoltages {
     private final int[] qbar;
     private final Map<Integer, List<Load>> loads = new HashMap<>();
     private final Map<String, Double> heaterVolts = new HashMap<>();
+    /** The nodes behind the soft starts' resistors: at their rail's voltage once the bypass has closed. */
+    private final Map<String, Double> behind = new HashMap<>();
 
     public PinVoltages(BuildDocuments docs) {
         this.docs = docs;
@@ -95,6 +97,10 @@ public final class PinVoltages {
         this.highest = h;
         this.lowest = l;
         this.qbar = BuildDocuments.complements(m.netlist());
+        for (org.thermion.model.SoftStart ss : m.softStarts()) {
+            Rail r = m.rails().get(ss.rail());
+            behind.put(WiringBuilder.behindName(ss, r.name()), r.volts());
+        }
         for (HeaterWiring.HeaterRun run : docs.heaters()) {
             double below = 0;
             for (int i = run.steps().size() - 1; i >= 0; i--) {
@@ -161,6 +167,7 @@ public final class PinVoltages {
             points.put(StageKey.gate(g.id()), r);
             set(fanout.nodeOf(g.output()), net, why, r.volts(), r.note());
         }
+        bypasses(points);
         return chart(s, net, why, points, warnings);
     }
 
@@ -179,8 +186,10 @@ public final class PinVoltages {
                 }
                 case RAIL -> {
                     Rail r = circuits.rails().rail(node.name());
-                    v = node.name().equals(RailSet.GROUND) ? 0 : r == null ? Double.NaN : r.volts();
-                    note = r == null && !node.name().equals(RailSet.GROUND) ? "clock pulses: no steady voltage" : null;
+                    Double bypassed = behind.get(node.name());
+                    v = node.name().equals(RailSet.GROUND) ? 0 : r != null ? r.volts() : bypassed != null ? bypassed : Double.NaN;
+                    note = r == null && bypassed == null && !node.name().equals(RailSet.GROUND)
+                            ? "clock pulses: no steady voltage" : null;
                 }
                 case LOCAL -> {
                     Solved p = points.get(node.stage());
@@ -196,6 +205,21 @@ public final class PinVoltages {
             notes[i] = Double.isNaN(v) && note == null ? "no voltage known" : note;
         }
         return new Chart(s, volts, notes, warnings);
+    }
+
+    /**
+     * The soft starts' thyratrons, fired: every chart is of a machine switched on and warm, so each
+     * bypass has closed (its grid network's input on ground, as the wiring has it).
+     */
+    private void bypasses(Map<Integer, Solved> points) {
+        for (int i = 0; i < m.softStarts().size(); i++) {
+            Optional<org.thermion.circuit.ThyratronStage> d = SoftStartWiring.driver(m, circuits, m.softStarts().get(i));
+            if (d.isPresent()) {
+                DcResult r = solver.solve(d.get(), new double[] {0}, true, List.of(), Corner.NOMINAL);
+                points.put(StageKey.softStart(m, i), r instanceof NoDcSolution no
+                        ? new Solved(null, "no operating point: " + no.reason()) : new Solved((OperatingPoint) r, null));
+            }
+        }
     }
 
     private static void set(NetFanout.Node node, double[] net, String[] why, double volts, String note) {

@@ -1,13 +1,20 @@
 package org.thermion.build;
 
+import org.thermion.circuit.MachineCircuits;
+import org.thermion.circuit.RailSet;
+import org.thermion.circuit.ThyratronStage;
+import org.thermion.model.BypassTrigger;
 import org.thermion.model.Envelope;
 import org.thermion.model.Gate;
 import org.thermion.model.Latch;
 import org.thermion.model.Machine;
 import org.thermion.model.Netlist;
+import org.thermion.model.SoftStart;
 
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.TreeMap;
 import java.util.TreeSet;
@@ -91,5 +98,74 @@ public final class Rebuild {
             }
         }
         return out;
+    }
+
+    /**
+     * Soft start name -> the rails (and the node behind its resistor) its parts and its thyratron's
+     * socket pins are wired to, read back from the wire list (heater pins apart: the heater strings
+     * wire them).
+     */
+    public static Map<String, Set<String>> softStartsFromWiring(Machine m, Wiring w) {
+        Map<String, String> owner = new HashMap<>();
+        Map<Integer, String> byKey = new HashMap<>();
+        for (int i = 0; i < m.softStarts().size(); i++) {
+            byKey.put(StageKey.softStart(m, i), m.softStarts().get(i).name());
+        }
+        for (Part p : w.parts()) {
+            if (byKey.containsKey(p.owner())) {
+                owner.put(p.ref(), byKey.get(p.owner()));
+            }
+        }
+        for (int i = 0; i < m.softStarts().size(); i++) {
+            if (m.softStarts().get(i).trigger() instanceof BypassTrigger.ThyratronWarm tw) {
+                owner.put(w.sockets().get(tw.envelope()).ref(), m.softStarts().get(i).name());
+            }
+        }
+        Map<String, Set<String>> out = new TreeMap<>();
+        for (Node node : w.nodes()) {
+            if (node.kind() != Node.Kind.RAIL) {
+                continue;
+            }
+            for (Lead l : node.leads()) {
+                String o = owner.get(l.ref());
+                if (o != null && !l.what().equals("heater") && !l.what().equals("tap")) {
+                    out.computeIfAbsent(o, k -> new TreeSet<>()).add(node.name());
+                }
+            }
+        }
+        return out;
+    }
+
+    /**
+     * The same from the soft starts' descriptions and the circuits of the relay stages they name:
+     * the supply and the node behind the resistor; for a thyratron bypass, the plate rail, the grid
+     * network's bias rail, the cathode's rail and ground (the grid network's input). A rail a soft
+     * start covers for the thyratron's module is met behind that soft start.
+     */
+    public static Map<String, Set<String>> softStartsExpected(Machine m, MachineCircuits circuits) {
+        Map<String, Set<String>> out = new TreeMap<>();
+        for (SoftStart s : m.softStarts()) {
+            String rail = m.rails().get(s.rail()).name();
+            Set<String> names = new TreeSet<>(List.of(rail, WiringBuilder.behindName(s, rail)));
+            Optional<ThyratronStage> d = SoftStartWiring.driver(m, circuits, s);
+            if (d.isPresent() && s.trigger() instanceof BypassTrigger.ThyratronWarm tw) {
+                int module = m.envelopes().get(tw.envelope()).module();
+                ThyratronStage t = d.get();
+                names.add(seen(m, t.plateRail(), module));
+                if (Double.isFinite(t.grid().toBiasOhms())) {
+                    names.add(seen(m, t.grid().biasRail(), module));
+                }
+                names.add(seen(m, t.cathode().rail(), module));
+                names.add(RailSet.GROUND);
+            }
+            out.put(s.name(), names);
+        }
+        return out;
+    }
+
+    /** Rail {@code rail} as module {@code module} meets it: behind a soft start that covers the module. */
+    private static String seen(Machine m, String rail, int module) {
+        SoftStart s = SoftStartWiring.covering(m, rail, module);
+        return s == null ? rail : WiringBuilder.behindName(s, rail);
     }
 }

@@ -41,14 +41,21 @@ final class StageWiring {
         this.heat = heat;
     }
 
-    /** A stage instance being wired: its key, type, sections (envelope, section), board and name for local nodes. */
-    private record Instance(int key, StageType type, List<int[]> sections, int board, String name) {
+    /**
+     * A stage instance being wired: its key, type, sections (envelope, section), board, name for local
+     * nodes, and the circuit its parts' dissipation comes from (null: the stage type's own).
+     */
+    private record Instance(int key, StageType type, List<int[]> sections, int board, String name, StageCircuit circuit) {
+        Instance(int key, StageType type, List<int[]> sections, int board, String name) {
+            this(key, type, sections, board, name, null);
+        }
     }
 
     void gate(Gate g, List<int[]> sections, int qbarOf) {
         StageType st = w.m.stages().get(g.stage());
         Instance in = new Instance(StageKey.gate(g.id()), st, sections, w.boards.of(g.module()),
                 w.m.netlist().netName(g.output()));
+        w.module = g.module();
         w.place(in.name, sections);
         Optional<StageCircuit> c = circuits.circuit(st);
         int[] inputs = new int[g.arity()];
@@ -56,6 +63,7 @@ final class StageWiring {
             inputs[i] = w.net(g.input(i));
         }
         function(in, c, inputs, w.net(g.output()));
+        w.module = -1;
     }
 
     /** A stage with no flip-flop circuit, from the nodes of its inputs to the node of its output. */
@@ -79,6 +87,7 @@ final class StageWiring {
      */
     void built(String name, StageType st, List<int[]> sections, int module, int key) {
         Instance in = new Instance(key, st, sections, w.boards.of(module), name);
+        w.module = module;
         w.place(name, sections);
         Optional<StageCircuit> c = circuits.circuit(st);
         List<String> pins = new java.util.ArrayList<>();
@@ -107,12 +116,34 @@ final class StageWiring {
         }
         w.multiLead(PartClass.TERMINAL, "block terminals", in.board, "terminals of " + name, key,
                 pins.toArray(new String[0]), nodes.stream().mapToInt(Integer::intValue).toArray());
+        w.module = -1;
+    }
+
+    /**
+     * A soft start's thyratron, instance {@code key} in {@code sections} of module {@code module}:
+     * wired as its relay stage {@code driver} (whose load is the bypass relay's coil), the grid
+     * network's input on ground as `powerup` and `levels` solve it (the tube fires by warming, not
+     * by its grid). {@code coil} wires the relay between the plate feed and the anode.
+     */
+    void bypassDriver(String name, StageType st, ThyratronStage driver, List<int[]> sections, int module, int key,
+                      Between coil) {
+        Instance in = new Instance(key, st, sections, w.boards.of(module), name, driver);
+        w.module = module;
+        w.place(name, sections);
+        thyratron(in, driver, w.rail(RailSet.GROUND), w.stageLocal(key, name, "plate"), coil);
+        w.module = -1;
+    }
+
+    /** Wires a part between two nodes. */
+    interface Between {
+        void wire(int a, int b);
     }
 
     void latch(Latch l, List<int[]> sections, int qbar) {
         StageType st = w.m.stages().get(l.stage());
         Instance in = new Instance(StageKey.latch(w.m.netlist(), l.id()), st, sections, w.boards.of(l.module()),
                 w.m.netlist().netName(l.output()));
+        w.module = l.module();
         w.place(in.name, sections);
         Optional<StageCircuit> c = circuits.circuit(st);
         int q = w.net(l.output());
@@ -120,6 +151,7 @@ final class StageWiring {
         int enable = l.enable() >= 0 ? w.net(l.enable()) : w.rail(RailSet.GROUND);
         int clock = w.local("clock phase " + l.phase(), org.thermion.build.Node.Kind.RAIL);
         flipFlop(in, c, q, qb, w.net(l.data()), enable, clock);
+        w.module = -1;
     }
 
     /** A cross-coupled pair between plates {@code q} and {@code qb}, steered from {@code data}. */
@@ -203,6 +235,11 @@ final class StageWiring {
     }
 
     private void thyratron(Instance in, ThyratronStage t, int input, int output) {
+        thyratron(in, t, input, output, (top, anode) -> load(in, t.load(), top, anode));
+    }
+
+    /** A thyratron stage whose plate load {@code load} wires between the feed and the anode. */
+    private void thyratron(Instance in, ThyratronStage t, int input, int output, Between load) {
         int rail = w.rail(t.plateRail());
         int top = rail;
         if (t.plateOhms() > 0) {
@@ -210,7 +247,7 @@ final class StageWiring {
             resistor(in, "plate", t.plateOhms(), rail, top, "plate resistor");
         }
         int anode = output;
-        load(in, t.load(), top, anode);
+        load.wire(top, anode);
         int k = cathode(in, t.cathode());
         int g = grid(in, t.grid(), input, "0");
         section(in, 0, Electrode.PLATE, anode);
@@ -325,8 +362,8 @@ final class StageWiring {
     }
 
     private void resistor(Instance in, String label, double ohms, int a, int b, String role) {
-        w.twoLead(PartClass.RESISTOR, ohms, "resistor", in.board, role + " of " + in.name, heat.watts(in.type, label, ohms),
-                in.key, a, b);
+        double watts = in.circuit == null ? heat.watts(in.type, label, ohms) : heat.watts(in.name, in.circuit, label, ohms);
+        w.twoLead(PartClass.RESISTOR, ohms, "resistor", in.board, role + " of " + in.name, watts, in.key, a, b);
     }
 
     /** Section {@code i} of the instance's sections (0-based) gets electrode {@code e} on {@code node}. */

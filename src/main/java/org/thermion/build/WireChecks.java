@@ -16,7 +16,7 @@ import java.util.Map;
 /**
  * The wire list's own checks: every socket pin in at most one node; pins the basing marks as
  * internal connections (ic) or not connected (nc) carry nothing; every electrode of every used
- * section (a built block's included), and every heater pin, is wired. Each failure is one line for people.
+ * section (a built block's and a soft start's thyratron included), and every heater pin, is wired. Each failure is one line for people.
  */
 public final class WireChecks {
     private WireChecks() {
@@ -36,10 +36,16 @@ public final class WireChecks {
                 }
             }
         }
+        // sections outside the netlist that are wired all the same: built blocks' and soft starts' thyratrons
         java.util.Set<Integer> builtModules = new java.util.HashSet<>();
         for (org.thermion.model.BuiltBlock bb : m.built()) {
             if (bb.counted()) {
                 builtModules.add(bb.module());
+            }
+        }
+        for (org.thermion.model.SoftStart ss : m.softStarts()) {
+            if (ss.trigger() instanceof org.thermion.model.BypassTrigger.ThyratronWarm tw) {
+                builtModules.add(m.envelopes().get(tw.envelope()).module());
             }
         }
         for (Wiring.Socket s : w.sockets()) {

@@ -5,6 +5,7 @@ import org.thermion.model.Basing;
 import org.thermion.model.Electrode;
 import org.thermion.model.Envelope;
 import org.thermion.model.Machine;
+import org.thermion.model.SoftStart;
 import org.thermion.model.TubeType;
 
 import java.util.ArrayList;
@@ -37,6 +38,9 @@ final class WiringBuilder {
     private final int[][] socketNodes;
     private final List<Set<Integer>> doubts = new ArrayList<>();
     private final Set<String> missingBasing = new java.util.TreeSet<>();
+
+    /** The module instance of the stage being wired (-1: none), for {@link #rail}. */
+    int module = -1;
 
     private final Set<String> roles = new java.util.HashSet<>();
     private final List<Wiring.Placement> placements = new ArrayList<>();
@@ -128,9 +132,34 @@ final class WiringBuilder {
         return node("net:" + r, m.netlist().netName(r), Node.Kind.NET, r);
     }
 
-    /** The node for a rail (ground included). */
+    /**
+     * The node for a rail (ground included) as the stage being wired ({@link #module}) meets it:
+     * behind a soft start's resistor where that soft start covers the module, else the supply.
+     */
     int rail(String name) {
+        SoftStart s = module < 0 ? null : SoftStartWiring.covering(m, name, module);
+        return s != null ? behind(s) : supply(name);
+    }
+
+    /** The node of a rail where its supply comes in, ahead of any soft start. */
+    int supply(String name) {
         return node("rail:" + name, name, Node.Kind.RAIL, -1);
+    }
+
+    /** The node behind soft start {@code s}'s resistor: what it covers hangs there. */
+    int behind(SoftStart s) {
+        String name = behindName(s, m.rails().get(s.rail()).name());
+        return node("rail:" + name, name, Node.Kind.RAIL, -1);
+    }
+
+    /** The name of the node behind a soft start's resistor on rail {@code rail}. */
+    static String behindName(SoftStart s, String rail) {
+        return rail + " behind " + s.name();
+    }
+
+    /** A node's name. */
+    String name(int node) {
+        return nodeNames.get(node);
     }
 
     /** A node inside one stage or heater string, named for people. */
@@ -163,19 +192,17 @@ final class WiringBuilder {
         leads.get(node).add(lead);
     }
 
-    /** A part with no leads in the wiring (a soft start's power resistor and relay); returns its designator. */
-    String loose(PartClass cls, double ohms, String type, int board, String role, double watts) {
-        String key = role(role);
-        String ref = boards.designate(board, cls, key);
-        parts.add(new Part(ref, cls, ohms, type, board, key, watts, -1));
-        return ref;
-    }
-
     /** A two-lead part between nodes {@code a} and {@code b}; returns its designator. */
     String twoLead(PartClass cls, double ohms, String type, int board, String role, double watts, int owner, int a, int b) {
+        return twoLead(cls, ohms, type, board, role, watts, Double.NaN, owner, a, b);
+    }
+
+    /** As {@link #twoLead(PartClass, double, String, int, String, double, int, int, int)}, with a declared rating. */
+    String twoLead(PartClass cls, double ohms, String type, int board, String role, double watts, double declaredWatts,
+                   int owner, int a, int b) {
         String key = role(role);
         String ref = boards.designate(board, cls, key);
-        parts.add(new Part(ref, cls, ohms, type, board, key, watts, owner));
+        parts.add(new Part(ref, cls, ohms, type, board, key, watts, owner, declaredWatts));
         connect(a, new Lead(ref, "1", "end 1", false));
         connect(b, new Lead(ref, "2", "end 2", false));
         return ref;
@@ -183,9 +210,14 @@ final class WiringBuilder {
 
     /** A part with named leads, each to its node; returns its designator. */
     String multiLead(PartClass cls, String type, int board, String role, int owner, String[] pins, int[] nodes) {
+        return multiLead(cls, Double.NaN, type, board, role, owner, pins, nodes);
+    }
+
+    /** As {@link #multiLead(PartClass, String, int, String, int, String[], int[])}, with a value in ohms (a relay's coil). */
+    String multiLead(PartClass cls, double ohms, String type, int board, String role, int owner, String[] pins, int[] nodes) {
         String key = role(role);
         String ref = boards.designate(board, cls, key);
-        parts.add(new Part(ref, cls, Double.NaN, type, board, key, Double.NaN, owner));
+        parts.add(new Part(ref, cls, ohms, type, board, key, Double.NaN, owner));
         for (int i = 0; i < pins.length; i++) {
             connect(nodes[i], new Lead(ref, pins[i], pins[i], false));
         }

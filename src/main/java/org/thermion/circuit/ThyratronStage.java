@@ -3,7 +3,7 @@ package org.thermion.circuit;
 /**
  * A gas thyratron driving a load (a relay coil) from a rail, with an optional series plate
  * resistor. It fires when its grid (through the grid network, no grid current before firing)
- * rises above the critical voltage, and stays fired (stored true) until the plate supply is broken.
+ * rises above the critical voltage at its anode's voltage, and stays fired (stored true) until the plate supply is broken.
  */
 public record ThyratronStage(String name, GasThyratron tube, PlateLoad load, String plateRail, double plateOhms,
                              GridNetwork grid, CathodeReturn cathode) implements StageCircuit {
@@ -40,7 +40,9 @@ public record ThyratronStage(String name, GasThyratron tube, PlateLoad load, Str
         int in = b.source("in0", inputVolts[0]);
         grid.attach(b, in, "0");
         double vgk = grid.openTapVolts(b, inputVolts[0]) - b.railVolts(cathode.rail());
-        b.arc("tube", tube, tube.conducts(stored, vgk), anode, k);
+        // unfired, no current flows: the anode stands at its rail, and the critical grid follows it
+        double vak = b.railVolts(plateRail) - b.railVolts(cathode.rail());
+        b.arc("tube", tube, tube.conducts(stored, vgk, vak), anode, k);
         return anode;
     }
 

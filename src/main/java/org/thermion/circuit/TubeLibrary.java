@@ -107,7 +107,7 @@ public final class TubeLibrary {
         } else {
             TubeLaw.Gas g = (TubeLaw.Gas) c.law();
             m = new GasThyratron(t.name(), Double.isNaN(t.arcDropVolts()) ? GasThyratron.TYPICAL_ARC_DROP
-                    : t.arcDropVolts(), g.criticalGrid(), t.avgCathodeAmps(), source);
+                    : t.arcDropVolts(), g.criticalGrid(), g.controlRatio(), t.avgCathodeAmps(), source);
         }
         models.put(t.name(), m);
     }

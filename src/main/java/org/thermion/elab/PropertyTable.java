@@ -78,14 +78,17 @@ final class PropertyTable {
                     .byDefault("none").source(PLAUSIBLE),
             Property.of("model", "the law of the section's currents and its parameters: Koren's equations "
                             + "(triode: mu ex kg1 kp kvb; pentode: also kg2), the 3/2-power diode law through one point, "
-                            + "or a thyratron's critical grid voltage; with where the figures come from",
+                            + "or a thyratron's firing: a fixed critical grid voltage, or its control ratio (the critical grid "
+                            + "at minus the anode voltage over the ratio); with where the figures come from",
                     new Slot.Choice("law", branches(
                             "koren", List.of(new Slot.AnyOrder(List.of(koren("mu", above(0, 1e3)), koren("ex", from(1, 2)),
                                     koren("kg1"), koren("kg2"), koren("kp"), koren("kvb"), sourceOption()))),
                             "diode", List.of(q("amps", "diode current", Unit.AMPERE, above(0, 100)), new Slot.Word("at"),
                                     q("volts", "diode voltage", Unit.VOLT, from(0.1, 1e3)), sourceOption()),
-                            "gas", List.of(new Slot.Word("critical"),
-                                    q("critical", "critical grid voltage", Unit.VOLT, from(-200, 200)), sourceOption())),
+                            "gas", List.of(new Slot.Choice("firing", branches(
+                                    "critical", List.of(q("critical", "critical grid voltage", Unit.VOLT, from(-200, 200))),
+                                    "ratio", List.of(plain("ratio", "control ratio", above(1, 1e5)))), null),
+                                    sourceOption())),
                             null))
                     .byDefault("none: the tube's stages must state their currents")
                     .source("Koren, Glass Audio 1996 (REFERENCES.md); Child-Langmuir 3/2-power law; " + PLAUSIBLE

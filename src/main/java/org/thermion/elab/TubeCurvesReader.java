@@ -96,7 +96,8 @@ final class TubeCurvesReader {
             return new TubeLaw.Diode(m.num("amps"), m.num("volts"));
         }
         if (word.equals("gas")) {
-            return new TubeLaw.Gas(m.num("critical"));
+            return "ratio".equals(m.word("firing")) ? new TubeLaw.Gas(Double.NaN, m.num("ratio"))
+                    : new TubeLaw.Gas(m.num("critical"), Double.NaN);
         }
         List<String> need = kind == TubeKind.PENTODE ? PENTODE_PARAMS : TRIODE_PARAMS;
         boolean ok = true;
@@ -191,7 +192,7 @@ final class TubeCurvesReader {
             case DIODE:
                 return "one point of its 3/2-power law (current at a voltage)";
             case THYRATRON:
-                return "its critical grid voltage";
+                return "its critical grid voltage or its control ratio";
             default:
                 return "Koren's parameters " + String.join(", ", TRIODE_PARAMS);
         }
@@ -205,7 +206,7 @@ final class TubeCurvesReader {
             case DIODE:
                 return "model diode 60 mA at 10 V source \"...\"";
             case THYRATRON:
-                return "model gas critical -4 V source \"...\"";
+                return "model gas ratio 250 source \"...\"";
             default:
                 return "model koren mu 21.5 ex 1.3 kg1 1180 kp 84 kvb 300 source \"...\"";
         }

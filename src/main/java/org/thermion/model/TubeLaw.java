@@ -15,7 +15,10 @@ public sealed interface TubeLaw {
     record Diode(double amps, double volts) implements TubeLaw {
     }
 
-    /** A gas thyratron firing when its grid rises above {@code criticalGrid} volts. */
-    record Gas(double criticalGrid) implements TubeLaw {
+    /**
+     * A gas thyratron firing when its grid rises above its critical grid voltage: {@code criticalGrid} volts
+     * whatever the anode voltage, or (when that is NaN) minus the anode voltage over {@code controlRatio}.
+     */
+    record Gas(double criticalGrid, double controlRatio) implements TubeLaw {
     }
 }

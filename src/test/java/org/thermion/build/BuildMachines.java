@@ -14,6 +14,9 @@ import java.nio.file.Path;
 final class BuildMachines {
     static final Path DECODER = Path.of("examples/decoder-board/decoder-board.machine");
     static final Path PUMPSTATION = Path.of("examples/pumpstation/pumpstation.machine");
+    static final Path BRINGUP = Path.of("examples/bringup-panel/bringup-panel.machine");
+    /** Every bundled example machine. */
+    static final Path[] EXAMPLES = {DECODER, PUMPSTATION, BRINGUP};
 
     private BuildMachines() {
     }

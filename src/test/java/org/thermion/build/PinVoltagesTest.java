@@ -38,10 +38,15 @@ class PinVoltagesTest {
         return c.volts(s.node(pin));
     }
 
-    /** Plate current of one 12AU7 section by Koren 1996: mu 21.5, ex 1.3, kg1 1180, kp 84, kvb 300 (REFERENCES.md). */
-    private static double koren(double vp, double vg) {
-        double e1 = vp / 84 * Math.log1p(Math.exp(84 * (1 / 21.5 + vg / Math.sqrt(300 + vp * vp))));
-        return Math.pow(e1, 1.3) / 1180 * 2;
+    /**
+     * Plate current of one 12AU7 section by Koren's 1996 equation written out here, with the library's 12AU7
+     * parameters (fitted to a measured ECC82 table, TubeLibraryTest).
+     */
+    private double koren(double vp, double vg) {
+        org.thermion.circuit.KorenTriode t = (org.thermion.circuit.KorenTriode)
+                org.thermion.circuit.TubeLibrary.of(m.tubes()).require("12AU7");
+        double e1 = vp / t.kp() * Math.log1p(Math.exp(t.kp() * (1 / t.mu() + vg / Math.sqrt(t.kvb() + vp * vp))));
+        return Math.pow(e1, t.ex()) / t.kg1() * 2;
     }
 
     @Test

@@ -49,7 +49,7 @@ class StageWiringTest {
 
     @Test
     void everyPassivePartOfEveryStageCircuitIsInTheWireListOnceWithBothLeads() {
-        for (java.nio.file.Path p : new java.nio.file.Path[] {BuildMachines.DECODER, BuildMachines.PUMPSTATION}) {
+        for (java.nio.file.Path p : BuildMachines.EXAMPLES) {
             Machine m = BuildMachines.file(p);
             BuildDocuments docs = BuildDocuments.of(m);
             org.thermion.circuit.MachineCircuits circuits = docs.circuits();
@@ -58,7 +58,9 @@ class StageWiringTest {
             for (Part part : docs.wiring().parts()) {
                 boolean passive = Set.of(PartClass.RESISTOR, PartClass.RELAY, PartClass.LAMP).contains(part.cls());
                 if (passive && part.owner() >= 0 && !part.role().startsWith("steering ")) {
-                    assertThat(leadsOf.get(part.ref())).as(part.role()).hasSize(2);
+                    // a soft start's bypass relay has its contacts besides its coil
+                    assertThat(leadsOf.get(part.ref())).as(part.role())
+                            .hasSize(part.role().startsWith("bypass of soft start") ? 4 : 2);
                     wired.merge(part.owner(), 1, Integer::sum);
                 }
             }
@@ -75,6 +77,17 @@ class StageWiringTest {
                 }
             }
             assertThat(stages).as(p.toString()).isGreaterThan(10);
+            for (int i = 0; i < m.softStarts().size(); i++) {
+                var driver = SoftStartWiring.driver(m, circuits, m.softStarts().get(i));
+                int key = StageKey.softStart(m, i);
+                if (driver.isPresent()) {
+                    // the thyratron stage's circuit, its coil the bypass relay's, and the soft start's power resistor
+                    assertThat(wired.get(key) - 1).as(p + " soft start " + i)
+                            .isEqualTo(passiveParts(circuits, driver.get(), 1));
+                } else {
+                    assertThat(wired.get(key)).as(p + " soft start " + i).isEqualTo(2);
+                }
+            }
         }
     }
 
@@ -85,15 +98,20 @@ class StageWiringTest {
         if (c.isEmpty()) {
             return 0;
         }
-        org.thermion.circuit.DcResult r = circuits.solver().solve(c.get(), new double[Math.max(inputs, c.get().inputs())],
+        assertThat(wiredParts).as(st.name()).isEqualTo(passiveParts(circuits, c.get(), inputs));
+        return 1;
+    }
+
+    /** The resistors, coils and lamps of circuit {@code c} solved with {@code inputs} inputs at 0 V. */
+    private static int passiveParts(org.thermion.circuit.MachineCircuits circuits, org.thermion.circuit.StageCircuit c,
+                                    int inputs) {
+        org.thermion.circuit.DcResult r = circuits.solver().solve(c, new double[Math.max(inputs, c.inputs())],
                 false, List.of(), org.thermion.circuit.Corner.NOMINAL);
-        assertThat(r).as(st.name()).isInstanceOf(org.thermion.circuit.OperatingPoint.class);
-        long passive = ((org.thermion.circuit.OperatingPoint) r).parts().stream().map(org.thermion.circuit.PartCurrent::label)
+        assertThat(r).as(c.name()).isInstanceOf(org.thermion.circuit.OperatingPoint.class);
+        return (int) ((org.thermion.circuit.OperatingPoint) r).parts().stream().map(org.thermion.circuit.PartCurrent::label)
                 .map(s -> s.startsWith(org.thermion.circuit.StageSolver.DRIVER + ".")
                         ? s.substring(org.thermion.circuit.StageSolver.DRIVER.length() + 1) : s)
                 .filter(s -> !s.startsWith("diode") && !s.equals("tube")).count();
-        assertThat(wiredParts).as(st.name()).isEqualTo((int) passive);
-        return 1;
     }
 
     @Test
@@ -159,10 +177,12 @@ class StageWiringTest {
 
     @Test
     void everyTwoLeadPartHasBothLeadsOnTheExamplesAndRandomMachines() {
-        List<Machine> machines = new ArrayList<>(List.of(BuildMachines.file(BuildMachines.DECODER),
-                BuildMachines.file(BuildMachines.PUMPSTATION)));
+        List<Machine> machines = new ArrayList<>();
+        for (java.nio.file.Path p : BuildMachines.EXAMPLES) {
+            machines.add(BuildMachines.file(p));
+        }
         for (long seed = 1; seed <= 10; seed++) {
-            machines.add(BuildMachines.text(RandomMachines.text(seed)));
+            machines.add(BuildMachines.text(WireListTest.withSoftStart(RandomMachines.text(seed), seed)));
         }
         Set<PartClass> twoLead = Set.of(PartClass.RESISTOR, PartClass.RELAY, PartClass.LAMP);
         for (Machine m : machines) {
@@ -171,7 +191,9 @@ class StageWiringTest {
             for (Part p : w.parts()) {
                 if (twoLead.contains(p.cls()) && p.owner() >= 0) {
                     assertThat(p.ref()).as(p.role()).matches("(A\\d+)?(R|K|DS)\\d+");
-                    assertThat(leadsOf.get(p.ref())).as(p.ref() + " " + p.role()).hasSize(2);
+                    // a soft start's bypass relay: its coil and its contacts
+                    int leads = p.role().startsWith("bypass of soft start") ? 4 : 2;
+                    assertThat(leadsOf.get(p.ref())).as(p.ref() + " " + p.role()).hasSize(leads);
                 }
             }
         }

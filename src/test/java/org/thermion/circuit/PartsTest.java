@@ -38,7 +38,7 @@ class PartsTest {
     @Test
     void libraryThyratronRelayStageMatchesTheLibraryNote() {
         // Library note: (24 V - 8 V drop) / (53 ohm + 160 ohm coil) = 75 mA; the grid divider from a high
-        // (45 V) input puts the grid far above the critical -4 V.
+        // (45 V) input puts the grid far above the critical -0.10 V (24 V anode over the control ratio 250).
         OperatingPoint p = solver.solve(lib.get("thyratron_relay"), new double[] {45}, false, List.of(),
                 Corner.NOMINAL).point();
         assertThat(p.partAmps("driver.load")).isCloseTo(16.0 / 213, within(0.5e-3));

@@ -22,10 +22,11 @@ class StageSolverTest {
     @Test
     void libraryRelayStageGivesAboutFourAndAHalfMilliamps() {
         // Issue 16: both 12AU7 sections in parallel, 4.7 kOhm coil from 48 V, grid at cathode potential:
-        // "about 4.5 mA" from the published equations. We get 4.6 mA (+2 %); tolerance +-25 %.
+        // "about 4.5 mA" from the published equations. With the library's fitted 12AU7 set we get 4.74 mA (+5 %);
+        // tolerance +-25 %.
         OperatingPoint p = solver.solve(relayStage(), new double[] {0}, false, List.of(), Corner.NOMINAL).point();
         double coil = p.partAmps("driver.load");
-        assertThat(coil / 4.5e-3 - 1).isBetween(-0.25, 0.25).isCloseTo(0.02, within(0.03));
+        assertThat(coil / 4.5e-3 - 1).isBetween(-0.25, 0.25).isCloseTo(0.052, within(0.01));
         assertThat(p.railAmps("bplus")).isCloseTo(coil, within(1e-9));
         assertThat(p.maxResidualAmps()).isLessThan(1e-9);
     }

@@ -18,38 +18,38 @@ class TubeLibraryTest {
         return (KorenTriode) lib.require(n);
     }
 
+    /*
+     * The 12AU7's parameters are fitted (TubeFitter, Levenberg-Marquardt) to 19 readings of a measured ECC82 table,
+     * the 12AU7's European equivalent: uTracer readings, file src/test-assets/ECC82.utd of the GitHub repository
+     * audio-projects/tube-models (heater 12.59 V; six curves at grid -4 to -9 V, plate 49 to 249 V; currents to
+     * 0.01 mA; one tube of unstated make). The library's 12AU7 block lists the 19 readings; every check below is
+     * another reading of that table or a data sheet figure, none used by the fit.
+     */
+
     @Test
     void twelveAU7AtTheDataSheetPoint() {
-        // RCA 12AU7 at 250 V, -8.5 V: 10.5 mA (REFERENCES.md, from memory). Model 10.4 mA: -1 %.
+        // RCA 12AU7 at 250 V, -8.5 V: 10.5 mA (REFERENCES.md, from memory). Model 9.50 mA: -9.5 %.
         double ip = triode("12AU7").plateCurrent(250, -8.5);
-        assertThat(ip).isCloseTo(10.5e-3, within(0.25 * 10.5e-3));
-        assertThat(ip / 10.5e-3 - 1).isCloseTo(-0.01, within(0.02));
+        assertThat(ip / 10.5e-3 - 1).isBetween(-0.25, 0.25).isCloseTo(-0.095, within(0.02));
     }
 
     @Test
     void twelveAU7AtZeroBias() {
-        // RCA 12AU7 at 100 V, 0 V: 11.8 mA (REFERENCES.md, from memory). Model 12.6 mA: +7 %.
+        // RCA 12AU7 at 100 V, 0 V: 11.8 mA (REFERENCES.md, from memory). Model 11.70 mA: -0.9 %. The table has no
+        // reading with the grid at the cathode, where these machines run: this sheet point is the nearest check.
         double ip = triode("12AU7").plateCurrent(100, 0);
-        assertThat(ip / 11.8e-3 - 1).isCloseTo(0.07, within(0.02));
+        assertThat(ip / 11.8e-3 - 1).isBetween(-0.25, 0.25).isCloseTo(-0.009, within(0.02));
     }
 
-    /**
-     * A measured ECC82 (the 12AU7's European equivalent) plate characteristic published as a table:
-     * uTracer readings, file src/test-assets/ECC82.utd of github.com/audio-projects/tube-models
-     * (heater 12.59 V; curves at grid -4 to -9 V, plate 49 to 249 V; currents to 0.01 mA). One tube of
-     * unstated make; the published Koren set was not fitted to it.
-     */
     @Test
-    void twelveAU7AgainstAPublishedMeasuredTableAtItsLowestPlateVoltage() {
+    void twelveAU7AgainstThePublishedMeasuredTableAtItsLowestPlateVoltage() {
         KorenTriode t = triode("12AU7");
-        // Table, curve 1, point 1: 49.12 V, -4 V: 0.02 mA, i.e. 0.015 to 0.025 mA at the table's resolution.
-        // Model 0.0294 mA: +47 % against the reading, +18 % above the top of its rounding band. Near cut-off the
-        // published equations run high; the check is the usual 25 % on the band the reading allows.
+        // ECC82.utd, curve 1, point 1: 49.12 V, -4 V reads 0.02 mA (the table's last digit: 0.015 to 0.025 mA).
+        // Read as printed (a measured table, no curve to read). Model 0.0242 mA: +21 % (Koren's set gave +47 %).
         double low = t.plateCurrent(49.12, -4);
         System.out.printf("12AU7 at 49.12 V, -4 V: model %.4f mA, table 0.02 mA (%+.0f %%)%n", low * 1e3,
                 (low / 0.02e-3 - 1) * 100);
-        assertThat(low).isBetween(0.75 * 0.015e-3, 1.25 * 0.025e-3);
-        assertThat(low / 0.02e-3 - 1).isCloseTo(0.47, within(0.02));
+        assertThat(low / 0.02e-3 - 1).isBetween(-0.25, 0.25).isCloseTo(0.21, within(0.02));
         // Curve 2, point 1: 49.12 V, -5 V reads 0.00 mA (under 0.005 mA): the model must be cut off as well.
         assertThat(t.plateCurrent(49.12, -5)).isLessThan(0.005e-3);
     }
@@ -57,16 +57,19 @@ class TubeLibraryTest {
     @Test
     void twelveAU7AgainstThePublishedMeasuredTableHigherUp() {
         KorenTriode t = triode("12AU7");
-        // Same table (see above): {plate V, grid V, table mA, model error stated}.
+        // Same table, readings the fit did not use: {plate V, grid V, table mA, model error}.
         double[][] points = {
-            {62.42, -4, 0.19, -0.02},   // curve 1, point 3
-            {248.2, -4, 22.86, 0.07},   // curve 1, point 31
-            {241.96, -8, 9.81, 0.07},   // curve 5, point 30
+            {62.42, -4, 0.19, -0.081},  // curve 1, point 3
+            {75.71, -4, 0.61, 0.006},   // curve 1, point 5
+            {62.42, -5, 0.03, 0.024},   // curve 2, point 3 (0.025 to 0.035 mA at the table's last digit)
+            {248.2, -4, 22.86, -0.068}, // curve 1, point 31
+            {241.96, -8, 9.81, -0.016}, // curve 5, point 30
+            {248.8, -9, 8.43, -0.018},  // curve 6, point 31
         };
         for (double[] p : points) {
             double ip = t.plateCurrent(p[0], p[1]);
             double err = ip / (p[2] * 1e-3) - 1;
-            System.out.printf("12AU7 at %.2f V, %.0f V: model %.3f mA, table %.2f mA (%+.0f %%)%n", p[0], p[1], ip * 1e3,
+            System.out.printf("12AU7 at %.2f V, %.0f V: model %.3f mA, table %.2f mA (%+.1f %%)%n", p[0], p[1], ip * 1e3,
                     p[2], err * 100);
             assertThat(err).as("%s V, %s V", p[0], p[1]).isBetween(-0.25, 0.25).isCloseTo(p[3], within(0.02));
         }
@@ -106,7 +109,7 @@ class TubeLibraryTest {
 
     @Test
     void everyFitKeepsItsPointsAndASmallResidual() {
-        for (String n : List.of("6SN7", "6J6", "5965", "5670", "6AU6", "6AK5")) {
+        for (String n : List.of("12AU7", "6SN7", "6J6", "5965", "5670", "6AU6", "6AK5")) {
             FittedModel<?> f = lib.fit(n).orElseThrow();
             System.out.printf("%s fit: rms %.3f over %d points, %s%n", n, f.rmsRelativeError(), f.points().size(),
                     f.model());
@@ -128,15 +131,15 @@ class TubeLibraryTest {
             stated.put(t.name(), t.curves().statedResidual() * 100);
             found.put(t.name(), computed);
         }
-        assertThat(found).hasSize(6);
+        assertThat(found).hasSize(7);
         found.forEach((n, v) -> assertThat(stated.get(n)).as(n + " residual in the library, percent")
                 .isCloseTo(v, within(0.006)));
     }
 
     @Test
     void aFitRecoversAKnownSetFromItsOwnCurvePoints() {
-        // Points generated from the published 12AU7 set; starting elsewhere, the fit must find it again.
-        KorenTriode truth = triode("12AU7");
+        // Points generated from Koren's published 12AU7 set; starting elsewhere, the fit must find it again.
+        KorenTriode truth = triode("12AU7").with(21.5, 1.3, 1180, 84, 300, "Koren, Glass Audio 1996");
         List<FitPoint> pts = new java.util.ArrayList<>();
         for (double vp : new double[] {30, 60, 100, 150, 250}) {
             for (double vg : new double[] {0, -2, -4, -8}) {
@@ -172,11 +175,52 @@ class TubeLibraryTest {
     }
 
     @Test
-    void thyratronFiresAboveItsCriticalGridAndThenHolds() {
+    void thyratronFiresAboveTheCriticalGridItsControlRatioSetsAndThenHolds() {
+        // r-type.org/exhib/aaa0479.htm (EN91, the 2D21's European equivalent) and r-type.org/exhib/acf0208.htm
+        // (CV4018, marked 2D21W): "the ratio is 250", a stated figure. The critical grid is then -Ea/250: -0.192 V
+        // at a 48 V anode, -0.096 V on a 24 V relay rail. The library's 2D21 takes its firing from this ratio, so
+        // these figures restate the source rather than check it; the next test checks it against another page.
         GasThyratron t = (GasThyratron) lib.require("2D21");
-        assertThat(t.conducts(false, -6)).isFalse();
-        assertThat(t.conducts(false, -2)).isTrue();
-        assertThat(t.conducts(true, -20)).isTrue();
+        assertThat(t.criticalGrid(48)).isCloseTo(-0.192, within(1e-9));
+        assertThat(t.conducts(false, -0.3, 48)).as("below critical at 48 V: stays off").isFalse();
+        assertThat(t.conducts(false, -0.1, 48)).isTrue();
+        assertThat(t.conducts(false, -0.1, 20)).as("at 20 V the critical grid is -0.08 V").isFalse();
+        assertThat(t.conducts(true, -20, 48)).as("once fired the grid has lost control").isTrue();
+        // The fixed -4 V the library held before would have fired it with the grid 3.8 V below this.
+        assertThat(t.conducts(false, -3.9, 48)).isFalse();
+    }
+
+    @Test
+    void thyratronCriticalGridAtItsPeakAnodeRatingAgreesWithAnotherPage() {
+        // vacuumtubes.io/tube/2D21W: critical control-grid voltage "approximately -2V to -6V (varies with shield
+        // grid voltage)", and a 650 V peak forward anode rating (both stated figures, no curve given). At 650 V the
+        // control ratio gives -2.6 V: inside that range, 30 % of the way from its -2 V end.
+        GasThyratron t = (GasThyratron) lib.require("2D21");
+        assertThat(t.criticalGrid(650)).isCloseTo(-2.6, within(1e-9)).isBetween(-6.0, -2.0);
+    }
+
+    @Test
+    void aTubeBlockMayStillFixItsCriticalGridWhateverTheAnode() {
+        String text = """
+                tube X21 {
+                  kind thyratron
+                  model gas critical -4 V source "demo"
+                  sections 1
+                  heater 6.3 V 600 mA
+                }
+                rail heat { voltage 6.3 V }
+                heaters on heat { parallel X21 }
+                module top { in a; out y; y = a }
+                machine fixed { top top; inputs a; outputs y }
+                """;
+        org.thermion.lang.Diagnostics d = new org.thermion.lang.Diagnostics();
+        org.thermion.model.Machine m = new org.thermion.elab.Elaborator(new org.thermion.lang.SourceSet(), d)
+                .elaborateText(java.nio.file.Path.of("fixed.machine"), text);
+        assertThat(d.hasErrors()).as(d.all().toString()).isFalse();
+        GasThyratron t = (GasThyratron) TubeLibrary.of(m.tubes()).require("X21");
+        assertThat(t.criticalGrid(48)).isEqualTo(-4.0);
+        assertThat(t.criticalGrid(400)).isEqualTo(-4.0);
+        assertThat(t.conducts(false, -3.9, 48)).isTrue();
     }
 
     @Test

@@ -85,10 +85,10 @@ class BudgetCommandTest {
         Map<?, ?> bplus = ((List<?>) tables.get("supply")).stream().map(x -> (Map<?, ?>) x)
                 .filter(x -> x.get("rail").equals("bplus")).findFirst().orElseThrow();
         // two lamp drivers at 25 mA, four inverters at 2.4 mA (typed-in draws, counted-stages.machine): 59.6 mA at 48 V,
-        // and the soft start's thyratron (library, computed) at its highest: its grid divider, 100 k + 47 k from
-        // B+ to -24 V, carries 72 V / 147 k (Ohm's law). A conductance; through the 4 ohm source the rail sits
+        // and the soft start's thyratron (library, computed) at its highest: its grid divider, 100 k + 100 k from
+        // B+ to -24 V, carries 72 V / 200 k (Ohm's law). A conductance; through the 4 ohm source the rail sits
         // at 48 / (1 + 4 x load / 48 V) (Ohm's law)
-        double load = 0.0596 + 72 / 147e3;
+        double load = 0.0596 + 72 / 200e3;
         double volts = 48 / (1 + 4 * load / 48);
         assertThat(((Number) bplus.get("peak_amps")).doubleValue()).isCloseTo(load * volts / 48, within(1e-6));
         assertThat(bplus.get("status")).isEqualTo("OVER");
@@ -135,8 +135,8 @@ class BudgetCommandTest {
      * A machine without a ROM runs on its stimulus alone. lone-thyratron.machine: two 6AU6 inverters
      * na = !a, nb = !b, two more ya = !na, yb = !nb (counted_inverter: 2.4 mA conducting, 0.05 mA cut off)
      * and two lamp drivers on a and b (counted_lamp: 25 mA lit). The soft start's thyratron (the library's,
-     * solved from its circuit) draws on bplus through its grid network: its 100 k + 47 k divider to the bias
-     * rail carries (48 V + 24 V) / 147 k from a B+ input (Ohm's law). a = b = 0: 2 x 0.05 + 2 x 2.4 = 4.9 mA;
+     * solved from its circuit) draws on bplus through its grid network: its 100 k + 100 k divider to the bias
+     * rail carries (48 V + 24 V) / 200 k from a B+ input (Ohm's law). a = b = 0: 2 x 0.05 + 2 x 2.4 = 4.9 mA;
      * a = b = 1 from cycle 2: 2 x 2.4 + 2 x 0.05 + 2 x 25 = 54.9 mA, over the 40 mA limit.
      */
     @Test
@@ -149,8 +149,8 @@ class BudgetCommandTest {
             Map<?, ?> tables = (Map<?, ?>) ((Map<?, ?>) ReportChecks.parse(r.out())).get("tables");
             Map<?, ?> bplus = ((List<?>) tables.get("rails")).stream().map(x -> (Map<?, ?>) x)
                     .filter(x -> x.get("rail").equals("bplus")).findFirst().orElseThrow();
-            // the thyratron is not simulated (a soft start's): a run takes it at its highest, 72 V / 147 k
-            double thyratron = 72 / 147e3;
+            // the thyratron is not simulated (a soft start's): a run takes it at its highest, 72 V / 200 k
+            double thyratron = 72 / 200e3;
             assertThat(((Number) bplus.get("min_amps")).doubleValue()).isCloseTo(0.0049 + thyratron, within(1e-7));
             assertThat(((Number) bplus.get("peak_amps")).doubleValue()).isCloseTo(0.0549 + thyratron, within(1e-7));
             assertThat(((Number) bplus.get("mean_amps")).doubleValue()).isCloseTo(0.0049 + thyratron + 0.025, within(1e-7)); // JSON keeps 5 digits;

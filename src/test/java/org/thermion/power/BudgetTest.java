@@ -42,9 +42,9 @@ class BudgetTest {
         assertThat(b.staticHigh(0, bplus)).isCloseTo(2 * 2.4e-3, within(1e-12));
         assertThat(b.staticLow(0, bias)).isCloseTo(0.4e-3, within(1e-12));
         assertThat(b.staticHigh(0, bias)).isCloseTo(0.4e-3, within(1e-12));
-        // the rails add every module's: the thyratron's divider, 100 k + 47 k, carries (48 V + 24 V) / 147 k from
+        // the rails add every module's: the thyratron's divider, 100 k + 100 k, carries (48 V + 24 V) / 200 k from
         // the B+ that drives its grid to the bias rail once fired (Ohm's law)
-        double divider = (48 + 24) / 147e3;
+        double divider = (48 + 24) / 200e3;
         assertThat(b.staticLowRail(bplus)).isCloseTo(2 * 0.05e-3 + divider, within(1e-6 * divider));
         assertThat(b.staticHighRail(bias)).isCloseTo(0.4e-3 + divider, within(1e-6 * divider));
         // heater rail: two 6AU6 in series 0.3 A plus the lone 2D21 at twice its rating, 12.6 V / 10.5 ohm = 1.2 A:
