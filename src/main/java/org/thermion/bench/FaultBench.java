@@ -103,9 +103,8 @@ public final class FaultBench {
             double t2 = best(() -> two.firstDetection(collapsed, steps), quick ? 3 : 7);
             rows.add(BenchRow.target("demo", collapsed.size() + " collapsed faults against the plan (2 threads)", t2, "s",
                     DEMO_FAULTS_SECONDS, true, "1 s"));
-            double r1 = best(() -> one.responses(faults.all(), steps), quick ? 2 : 5);
-            double r2 = best(() -> two.responses(faults.all(), steps), quick ? 2 : 5);
-            rows.add(BenchRow.target("demo", "fault simulation, 1 -> 2 threads", r1 / r2, "x", THREAD_GAIN, false, "1.5 x"));
+            ThreadGain.measure(() -> one.responses(faults.all(), steps), () -> two.responses(faults.all(), steps),
+                    quick ? 3 : 7).addRow(rows, "demo", "fault simulation, 1 -> 2 threads");
         }
     }
 
@@ -114,17 +113,17 @@ public final class FaultBench {
         FaultList faults = FaultList.of(c);
         rows.add(BenchRow.info(who, "collapsed faults", faults.collapsed().size(), ""));
         List<Step> steps = Step.random(new Random(11), m.inputs().size(), 4, 4);
-        List<Fault> sample = faults.collapsed().subList(0, Math.min(faults.collapsed().size(), 64 * (quick ? 4 : 16)));
+        // Enough batches that each of two threads gets several (16 per thread with --quick).
+        List<Fault> sample = faults.collapsed().subList(0, Math.min(faults.collapsed().size(), 64 * (quick ? 32 : 64)));
         List<Fault> few = faults.collapsed().subList(0, Math.min(faults.collapsed().size(), quick ? 2 : 8));
         OneFaultSimulator ref = new OneFaultSimulator(c, rom);
         double tRef = best(() -> few.forEach(f -> ref.run(f, steps)), 1) / few.size();
         try (FaultSimulator one = new FaultSimulator(c, rom, 1); FaultSimulator two = new FaultSimulator(c, rom, 2)) {
-            one.responses(sample, steps);
-            double t1 = best(() -> one.responses(sample, steps), quick ? 1 : 3) / sample.size();
-            double t2 = best(() -> two.responses(sample, steps), quick ? 1 : 3) / sample.size();
-            rows.add(BenchRow.target(who, "fault simulation / one-fault-at-a-time reference (1 thread)", tRef / t1, "x",
-                    VS_REFERENCE, false, "50 x"));
-            rows.add(BenchRow.target(who, "fault simulation, 1 -> 2 threads", t1 / t2, "x", THREAD_GAIN, false, "1.5 x"));
+            ThreadGain g = ThreadGain.measure(() -> one.responses(sample, steps), () -> two.responses(sample, steps),
+                    quick ? 5 : 9);
+            rows.add(BenchRow.target(who, "fault simulation / one-fault-at-a-time reference (1 thread)",
+                    tRef / (g.oneSeconds() / sample.size()), "x", VS_REFERENCE, false, "50 x"));
+            g.addRow(rows, who, "fault simulation, 1 -> 2 threads");
             if (quick) {
                 rows.add(BenchRow.missing(who, "plan generation (2 threads)", "left out with --quick (minutes)"));
                 return;

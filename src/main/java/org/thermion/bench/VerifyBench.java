@@ -10,7 +10,7 @@ final class VerifyBench {
     private VerifyBench() {
     }
 
-    /** Adds "verify, 1 -> 2 threads" (target 1.5 x); one run each after a warm-up with {@code quick}, else the best of two. */
+    /** Adds "verify, 1 -> 2 threads" (target 1.5 x); after a warm-up of each, one run each with {@code quick}, else the best of two. */
     static void threadRow(List<BenchRow> rows, String who, Machine m, boolean quick) {
         if (m.isa() == null) {
             rows.add(BenchRow.missing(who, "verify, 1 -> 2 threads", "the machine declares no isa"));
@@ -18,10 +18,8 @@ final class VerifyBench {
         }
         Verifier.Options one = Verifier.Options.defaults().withThreads(1);
         Verifier.Options two = Verifier.Options.defaults().withThreads(2);
-        new Verifier(m, two).run();
-        double t1 = FaultBench.best(() -> new Verifier(m, one).run(), quick ? 1 : 2);
-        double t2 = FaultBench.best(() -> new Verifier(m, two).run(), quick ? 1 : 2);
-        rows.add(BenchRow.info(who, "verify on 1 thread", t1, "s"));
-        rows.add(BenchRow.target(who, "verify, 1 -> 2 threads", t1 / t2, "x", FaultBench.THREAD_GAIN, false, "1.5 x"));
+        ThreadGain g = ThreadGain.measure(() -> new Verifier(m, one).run(), () -> new Verifier(m, two).run(), quick ? 1 : 2);
+        rows.add(BenchRow.info(who, "verify on 1 thread", g.oneSeconds(), "s"));
+        g.addRow(rows, who, "verify, 1 -> 2 threads");
     }
 }

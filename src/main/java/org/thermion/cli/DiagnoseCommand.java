@@ -4,6 +4,7 @@ import org.thermion.faults.Diagnosis;
 import org.thermion.faults.Effort;
 import org.thermion.faults.FaultSimulator;
 import org.thermion.faults.Plan;
+import org.thermion.faults.Separation;
 import org.thermion.faults.Step;
 import org.thermion.lang.DiagnosticPrinter;
 import org.thermion.lang.Diagnostics;
@@ -56,30 +57,45 @@ final class DiagnoseCommand extends ReportCommand {
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
-        try (FaultSimulator sim = in.simulator(options.threads)) {
-            Plan plan = in.plan(sim);
-            List<Step> steps = in.steps(sim, plan, options.distinguish);
-            Diagnostics diags = new Diagnostics();
-            String hint = options.distinguish ? null
-                    : "if you followed the plan made with --distinguish, give --distinguish here too";
-            byte[][] seen = new DiagnoseObservations(in.circuit().lamps(), steps.size(), hint, diags)
-                    .read(seenFile, in.loader().sources());
-            if (!diags.all().isEmpty()) {
-                new DiagnosticPrinter(in.loader().sources()).print(diags, err);
-            }
-            if (seen == null) {
-                err.flush();
-                return ExitCodes.BAD_INPUT;
-            }
-            Diagnosis d = new Diagnosis(sim, in.faults(), steps);
-            List<Diagnosis.Suspect> ranked = d.rank(seen, Diagnosis.stepsReached(seen));
-            List<Diagnosis.Suspect> leading = ranked.stream().filter(s -> s.rank() == ranked.get(0).rank()).toList();
-            Step next = d.nextStep(leading, Effort.DEFAULT);
-            List<Diagnosis.Reading> readings = next == null ? List.of() : d.readings(leading, next);
-            DiagnoseReport report = new DiagnoseReport(in, seenFile, steps, seen, ranked, top, next, readings);
-            format.write(out, report.report());
-            out.flush();
-            return report.looksGood() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
+        List<long[]> nextRoms = in.nextPrograms(options.nextPrograms, err);
+        if (nextRoms == null) {
+            err.flush();
+            return ExitCodes.BAD_INPUT;
         }
+        try (FaultSimulator first = in.simulator(options.threads, nextRoms)) {
+            Plan plan = in.plan(first);
+            Separation sep = in.separation(first, plan, options.distinguish);
+            List<Step> steps = sep.steps();
+            try (FaultSimulator sim = first.withPrograms(sep.written())) {
+                return diagnose(in, sim, steps);
+            }
+        }
+    }
+
+    // Reads the observations of the plan's steps and ranks the classes against them; exit 0, 1 or 2.
+    private int diagnose(PlanInputs in, FaultSimulator sim, List<Step> steps) {
+        PrintWriter out = out();
+        PrintWriter err = err();
+        Diagnostics diags = new Diagnostics();
+        String hint = options.distinguish ? null
+                : "if you followed the plan made with --distinguish, give --distinguish here too";
+        byte[][] seen = new DiagnoseObservations(in.circuit().lamps(), steps.size(), hint, diags)
+                .read(seenFile, in.loader().sources());
+        if (!diags.all().isEmpty()) {
+            new DiagnosticPrinter(in.loader().sources()).print(diags, err);
+        }
+        if (seen == null) {
+            err.flush();
+            return ExitCodes.BAD_INPUT;
+        }
+        Diagnosis d = new Diagnosis(sim, in.faults(), steps);
+        List<Diagnosis.Suspect> ranked = d.rank(seen, Diagnosis.stepsReached(seen));
+        List<Diagnosis.Suspect> leading = ranked.stream().filter(s -> s.rank() == ranked.get(0).rank()).toList();
+        Step next = d.nextStep(leading, Effort.DEFAULT);
+        List<Diagnosis.Reading> readings = next == null ? List.of() : d.readings(leading, next);
+        DiagnoseReport report = new DiagnoseReport(in, seenFile, steps, seen, ranked, top, next, readings);
+        format.write(out, report.report());
+        out.flush();
+        return report.looksGood() ? ExitCodes.OK : ExitCodes.CHECK_FAILED;
     }
 }

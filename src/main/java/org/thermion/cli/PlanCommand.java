@@ -44,18 +44,25 @@ final class PlanCommand extends ReportCommand {
             err.flush();
             return ExitCodes.BAD_INPUT;
         }
-        try (FaultSimulator sim = in.simulator(options.threads);
+        List<long[]> next = in.nextPrograms(options.nextPrograms, err);
+        if (next == null) {
+            err.flush();
+            return ExitCodes.BAD_INPUT;
+        }
+        try (FaultSimulator first = in.simulator(options.threads, next);
              ProgressBar bar = ProgressBar.ticking(err, "plan", progressOptions.mode())) {
-            Plan plan = in.plan(sim);
-            Separation sep = in.separation(sim, plan, options.distinguish);
+            Plan plan = in.plan(first);
+            Separation sep = in.separation(first, plan, options.distinguish);
             List<Step> steps = sep.steps();
-            Diagnosis d = options.distinguish ? new Diagnosis(sim, in.faults(), steps) : null;
-            int largest = d == null ? -1 : d.largestClass();
-            int above = d == null ? 0 : d.classesAbove(PlanInputs.MOST_IN_GROUP);
-            byte[][] expected = sim.expected(steps);
-            bar.close();
-            format.write(out, new PlanReport(in.machine(), in.circuit(), in.faults(), plan, steps, expected, options.program,
-                    largest, above, sep.alike()).report());
+            try (FaultSimulator sim = first.withPrograms(sep.written())) {
+                Diagnosis d = options.distinguish ? new Diagnosis(sim, in.faults(), steps) : null;
+                int largest = d == null ? -1 : d.largestClass();
+                int above = d == null ? 0 : d.classesAbove(PlanInputs.MOST_IN_GROUP);
+                byte[][] expected = sim.expected(steps);
+                bar.close();
+                format.write(out, new PlanReport(in.machine(), in.circuit(), in.faults(), plan, steps, expected,
+                        options.program, options.nextPrograms, largest, above, sep).report());
+            }
         }
         out.flush();
         return ExitCodes.OK;

@@ -66,19 +66,47 @@ record PlanInputs(Machine machine, Path program, long[] rom, FaultCircuit circui
         return new FaultSimulator(circuit, rom, threads);
     }
 
+    /** The simulator running this program first, then {@code next}'s words when a plan fits them (close it). */
+    FaultSimulator simulator(int threads, List<long[]> next) {
+        List<long[]> all = new java.util.ArrayList<>();
+        all.add(rom);
+        all.addAll(next);
+        return FaultSimulator.running(circuit, all, threads);
+    }
+
+    /**
+     * The words of each further program a distinguishing plan may fit, read as the first program
+     * is; null, after printing every problem on {@code err}, for exit 2.
+     */
+    List<long[]> nextPrograms(List<Path> programs, PrintWriter err) {
+        if (programs.isEmpty()) {
+            return List.of();
+        }
+        if (machine.rom() == null) {
+            err.println("error: machine " + machine.name() + " has no ROM to fit another program in: "
+                    + "leave out --next-program (its switches are all a plan sets)");
+            return null;
+        }
+        List<long[]> out = new java.util.ArrayList<>();
+        boolean ok = true;
+        for (Path p : programs) {
+            ProgramInput in = ProgramInput.read(machine, p, null, loader, err);
+            ok &= in != null;
+            if (in != null) {
+                out.add(in.rom());
+            }
+        }
+        return ok ? out : null;
+    }
+
     /** The plan as {@code plan} prints it. */
     Plan plan(FaultSimulator sim) {
         return new PlanGenerator(sim, faults, Effort.DEFAULT).generate();
     }
 
-    /** The plan's steps, extended with distinguishing steps when asked. */
-    List<Step> steps(FaultSimulator sim, Plan plan, boolean distinguish) {
-        return separation(sim, plan, distinguish).steps();
-    }
-
     /** The plan extended with distinguishing steps when asked, with the groups that stay too large and why. */
     Separation separation(FaultSimulator sim, Plan plan, boolean distinguish) {
         return distinguish ? Separation.of(sim, faults, plan.steps(), MOST_IN_GROUP, Effort.DEFAULT)
-                : new Separation(plan.steps(), List.of());
+                : Separation.none(plan.steps());
     }
 }

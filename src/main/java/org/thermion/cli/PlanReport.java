@@ -26,7 +26,7 @@ import static org.thermion.cli.report.ReportUnit.TEXT;
 /** The plan command's report: counts, the numbered steps, and every collapsed fault's outcome. */
 final class PlanReport {
     /** The schema version of plan's JSON ({@code org/thermion/schema/plan.schema.json}). */
-    static final int VERSION = 1;
+    static final int VERSION = 2;
 
     private final Machine m;
     private final FaultCircuit c;
@@ -35,12 +35,14 @@ final class PlanReport {
     private final List<Step> steps;
     private final byte[][] expected;
     private final Path program;
+    private final List<Path> nextPrograms;
     private final int largest;
     private final int above;
     private final List<Separation.Alike> alike;
+    private final List<long[]> written;
 
     PlanReport(Machine m, FaultCircuit c, FaultList faults, Plan plan, List<Step> steps, byte[][] expected, Path program,
-               int largest, int above, List<Separation.Alike> alike) {
+               List<Path> nextPrograms, int largest, int above, Separation sep) {
         this.m = m;
         this.c = c;
         this.faults = faults;
@@ -48,9 +50,11 @@ final class PlanReport {
         this.steps = steps;
         this.expected = expected;
         this.program = program;
+        this.nextPrograms = List.copyOf(nextPrograms);
         this.largest = largest;
         this.above = above;
-        this.alike = List.copyOf(alike);
+        this.alike = sep.alike();
+        this.written = sep.written();
     }
 
     Report report() {
@@ -83,6 +87,9 @@ final class PlanReport {
         r.text(head);
         r.table(stepTable());
         r.table(faultTable());
+        if (!written.isEmpty()) {
+            r.table(writtenTable());
+        }
         if (!alike.isEmpty()) {
             r.table(groupTable());
         }
@@ -104,17 +111,30 @@ final class PlanReport {
         return r;
     }
 
-    // Why such groups stay: the program a ROM machine runs is fixed, the switches are all a switch-fed one has.
+    // Why such groups stay: on a machine without a ROM the switches are all a builder has, so a proven
+    // group is alike for good; on one with a ROM only the programs the plan fits were searched, and
+    // column other program says whether a random one would tell the group apart.
     private String alike() {
         boolean proven = alike.stream().allMatch(Separation.Alike::proven);
         String how = proven ? "proven for each: " : "proven where the table says yes (elsewhere the search budget ran out): ";
         if (program != null) {
-            return how + "no run of steps after the plan, under any switch settings, tells its faults apart at the lamps"
-                    + " while this program runs; column other program says whether a second program showed them apart,"
-                    + " column lamp on which net's lamp would split them";
+            long other = alike.stream().filter(a -> Boolean.TRUE.equals(a.otherProgram())).count();
+            List<String> names = new ArrayList<>();
+            names.add(program.toString());
+            nextPrograms.forEach(p -> names.add(p.toString()));
+            for (int k = 1; k <= written.size(); k++) {
+                names.add("written program " + k);
+            }
+            String run = names.size() == 1 ? "while this program runs"
+                    : "while each of the programs the steps fit runs (" + String.join(", ", names) + ")";
+            return how + "no run of steps after the plan, under any switch settings, tells its faults apart at the lamps "
+                    + run + "; " + other + " of them a random program splits (column other program: another program"
+                    + " would tell those apart, --next-program), the other " + (alike.size() - other)
+                    + " no program tried splits; column lamp on says which net's lamp would split each";
         }
         return how + "no run of steps after the plan, under any switch settings, tells its faults apart at the lamps;"
-                + " they differ inside the machine only, and a lamp on the net named would split them";
+                + " the switches are all this machine has, so no bench procedure can: they differ inside the machine"
+                + " only, and a lamp on the net named would split them";
     }
 
     private Table groupTable() {
@@ -140,9 +160,12 @@ final class PlanReport {
     }
 
     private Table stepTable() {
-        Table t = new Table("steps", "steps")
-                .column("step", "step", COUNT)
-                .column("switches_on", "switches on", TEXT, "every other switch off")
+        boolean restarts = steps.stream().anyMatch(Step::restarts);
+        Table t = new Table("steps", "steps").column("step", "step", COUNT);
+        if (restarts) {
+            t.column("first", "first", TEXT, "before setting the switches: switch off, fit the program named, switch on");
+        }
+        t.column("switches_on", "switches on", TEXT, "every other switch off")
                 .column("cycles", "cycles", COUNT, "single-step the clock this many whole cycles")
                 .column("lit", "lit", TEXT, "lamps expected lit; every other known lamp dark")
                 .column("unknown", "unknown", TEXT, "lamps the plan cannot predict yet");
@@ -165,8 +188,42 @@ final class PlanReport {
                     unknown.add(c.lamps().get(i).name());
                 }
             }
-            t.row(s + 1, on.isEmpty() ? "(none)" : String.join(" ", on), st.cycles(),
-                    lit.isEmpty() ? "(none)" : String.join(" ", lit), String.join(" ", unknown));
+            List<Object> row = new ArrayList<>(List.of(s + 1));
+            if (restarts) {
+                row.add(st.restarts() ? "fit " + programName(st.program()) : Absent.NONE);
+            }
+            row.addAll(List.of(on.isEmpty() ? "(none)" : String.join(" ", on), st.cycles(),
+                    lit.isEmpty() ? "(none)" : String.join(" ", lit), String.join(" ", unknown)));
+            t.row(row.toArray());
+        }
+        return t;
+    }
+
+    // The program a restarting step fits: the first is --program, then each --next-program, then those written.
+    private String programName(int k) {
+        if (k == 0) {
+            return String.valueOf(program);
+        }
+        return k <= nextPrograms.size() ? nextPrograms.get(k - 1).toString()
+                : "written program " + (k - nextPrograms.size()) + " (table written)";
+    }
+
+    // The words of each program the plan wrote, as a builder wires them into the ROM.
+    private Table writtenTable() {
+        Table t = new Table("written", "programs the plan wrote (every word not listed holds 0)")
+                .column("program", "program", COUNT, "written program 1, 2 ... as the steps name them")
+                .column("address", "address", TEXT, "hexadecimal")
+                .column("word", "word", TEXT, "hexadecimal, " + m.rom().width() + " bits");
+        int addressDigits = m.pc() == null ? 2 : Math.max(1, (m.pc().width() + 3) / 4);
+        int wordDigits = Math.max(1, (m.rom().width() + 3) / 4);
+        for (int k = 0; k < written.size(); k++) {
+            long[] words = written.get(k);
+            for (int a = 0; a < words.length; a++) {
+                if (words[a] != 0L) {
+                    t.row(k + 1, String.format(Locale.ROOT, "0x%0" + addressDigits + "X", a),
+                            String.format(Locale.ROOT, "0x%0" + wordDigits + "X", words[a]));
+                }
+            }
         }
         return t;
     }

@@ -2,11 +2,14 @@ package org.thermion.faults;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Queue;
 import java.util.concurrent.Callable;
+import java.util.concurrent.ConcurrentLinkedQueue;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
 
 /**
  * Parallel fault simulation: 64 faults at once, one per lane of a {@link LaneMachine}, each
@@ -21,14 +24,31 @@ public final class FaultSimulator implements AutoCloseable {
     public static final byte UNKNOWN = 2;
 
     private final FaultCircuit circuit;
-    private final long[] rom;
+    private final long[][] programs;
     private final ExecutorService pool;
     private final int threads;
+    // Machines without faults, kept between calls for the workers of eachBatch (one per thread at most).
+    private final Queue<LaneMachine> spare = new ConcurrentLinkedQueue<>();
 
     /** A simulator over {@code circuit} with program memory {@code rom} (null: none) on {@code threads} threads. */
     public FaultSimulator(FaultCircuit circuit, long[] rom, int threads) {
+        this(circuit, java.util.Collections.singletonList(rom), threads);
+    }
+
+    /**
+     * A simulator whose machine runs {@code programs.get(0)} from power-up; a step that restarts
+     * with program k fits {@code programs.get(k)} (null entries: no ROM).
+     */
+    public static FaultSimulator running(FaultCircuit circuit, List<long[]> programs, int threads) {
+        return new FaultSimulator(circuit, programs, threads);
+    }
+
+    private FaultSimulator(FaultCircuit circuit, List<long[]> programs, int threads) {
         this.circuit = circuit;
-        this.rom = rom == null ? null : rom.clone();
+        this.programs = new long[programs.size()][];
+        for (int k = 0; k < this.programs.length; k++) {
+            this.programs[k] = programs.get(k) == null ? null : programs.get(k).clone();
+        }
         this.threads = Math.max(1, threads);
         this.pool = Executors.newFixedThreadPool(this.threads, r -> {
             Thread t = new Thread(r, "fault-sim");
@@ -45,8 +65,20 @@ public final class FaultSimulator implements AutoCloseable {
         return threads;
     }
 
+    /** A simulator like this one (same threads) whose plans may also fit {@code more}, numbered after its own (close it). */
+    public FaultSimulator withPrograms(List<long[]> more) {
+        List<long[]> all = new ArrayList<>(java.util.Arrays.asList(programs));
+        all.addAll(more);
+        return new FaultSimulator(circuit, all, threads);
+    }
+
+    /** How many programs a plan may fit in turn (1 on a machine run with one). */
+    public int programs() {
+        return programs.length;
+    }
+
     LaneMachine machine() {
-        return new LaneMachine(circuit, rom);
+        return new LaneMachine(circuit, programs);
     }
 
     /** The good machine's lamps after every step: {@code [step][lamp]}. */
@@ -105,33 +137,55 @@ public final class FaultSimulator implements AutoCloseable {
         void run(LaneMachine m, int base, int n);
     }
 
-    /** Runs {@code job} on every batch of 64 faults, spread over the pool. */
+    /**
+     * Runs {@code job} on every batch of 64 faults. One worker per thread claims batches in turn
+     * from a shared counter and reloads its own machine for each (a machine of the 10^4-stage
+     * machine is about a megabyte: allocating one per batch cost as much as simulating it, and two
+     * threads allocating at once spent their gain in the collector).
+     */
     void eachBatch(List<Fault> faults, BatchJob job) {
-        List<Callable<Void>> jobs = new ArrayList<>();
-        for (int base = 0; base < faults.size(); base += LaneMachine.LANES) {
-            int b = base;
-            jobs.add(() -> {
-                int n = Math.min(LaneMachine.LANES, faults.size() - b);
-                job.run(loaded(faults, b, n), b, n);
+        int batches = (faults.size() + LaneMachine.LANES - 1) / LaneMachine.LANES;
+        AtomicInteger next = new AtomicInteger();
+        List<Callable<Void>> workers = new ArrayList<>();
+        for (int w = 0; w < Math.min(threads, batches); w++) {
+            workers.add(() -> {
+                LaneMachine m = spare.poll();
+                m = m == null ? machine() : m;
+                try {
+                    for (int b = next.getAndIncrement(); b < batches; b = next.getAndIncrement()) {
+                        int base = b * LaneMachine.LANES;
+                        int n = Math.min(LaneMachine.LANES, faults.size() - base);
+                        m.clearFaults();
+                        load(m, faults, base, n);
+                        job.run(m, base, n);
+                    }
+                } finally {
+                    m.clearFaults();
+                    spare.add(m);
+                }
                 return null;
             });
         }
-        run(jobs);
+        run(workers);
     }
 
     /** A machine at power-up with faults {@code from .. from+n-1} on lanes 0 .. n-1. */
     LaneMachine loaded(List<Fault> faults, int from, int n) {
         LaneMachine m = machine();
-        for (int l = 0; l < n; l++) {
-            m.inject(faults.get(from + l), 1L << l);
-        }
-        m.powerUp();
+        load(m, faults, from, n);
         return m;
     }
 
+    private static void load(LaneMachine m, List<Fault> faults, int from, int n) {
+        for (int l = 0; l < n; l++) {
+            m.inject(faults.get(from + l), 1L << l);
+        }
+        m.fit(0);
+        m.powerUp();
+    }
+
     static void apply(LaneMachine m, Step s) {
-        m.setInputs(s.inputs());
-        m.clock(s.cycles());
+        m.step(s);
     }
 
     /** Lanes whose lamps show a known value other than the good machine's known one. */

@@ -24,13 +24,18 @@ final class LaneMachine {
     final long[] x;
     final long[] f0;
     final long[] f1;
-    private final long[] rom;
+    // The programs a plan may fit (the first runs at power-up), and the one in the ROM now.
+    private final long[][] programs;
+    private long[] rom;
     private final int[] pc = new int[LANES];
     private long pcX;
     private int nextPhase = 1;
     private final long[] loadV;
     private final long[] loadX;
     private final int pcMask;
+    // Slots given a force since the last clearFaults, so clearing touches only those.
+    private int[] forced = new int[16];
+    private int forcedCount;
     // Solder bridges (allocated with the first): per bridge its lanes; per slot the lanes it is
     // joined on, the joined value and the value its driver gives on its own.
     private Bridge[] bridges = new Bridge[0];
@@ -45,8 +50,17 @@ final class LaneMachine {
     private long[] swX;
 
     LaneMachine(FaultCircuit c, long[] rom) {
+        this(c, new long[][] {rom});
+    }
+
+    /** A machine at power-up running {@code programs[0]}; a restarting step fits another ({@code null}: no ROM). */
+    LaneMachine(FaultCircuit c, long[][] programs) {
         this.c = c;
-        this.rom = rom == null ? new long[0] : rom;
+        this.programs = programs.clone();
+        for (int k = 0; k < this.programs.length; k++) {
+            this.programs[k] = programs[k] == null ? new long[0] : programs[k];
+        }
+        this.rom = this.programs[0];
         v = new long[c.slotCount];
         x = new long[c.slotCount];
         f0 = new long[c.slotCount];
@@ -119,10 +133,40 @@ final class LaneMachine {
     }
 
     void force(int slot, boolean value, long lanes) {
+        if ((f0[slot] | f1[slot]) == 0L) {
+            if (forcedCount == forced.length) {
+                forced = Arrays.copyOf(forced, 2 * forced.length);
+            }
+            forced[forcedCount++] = slot;
+        }
         if (value) {
             f1[slot] |= lanes;
         } else {
             f0[slot] |= lanes;
+        }
+    }
+
+    /**
+     * Takes every fault off every lane, so a worker can load its next batch into the same
+     * machine instead of allocating one per batch (call {@link #powerUp} after injecting).
+     */
+    void clearFaults() {
+        for (int k = 0; k < forcedCount; k++) {
+            f0[forced[k]] = 0L;
+            f1[forced[k]] = 0L;
+        }
+        forcedCount = 0;
+        if (bm != null) {
+            bridges = new Bridge[0];
+            bridgeLanes = new long[0];
+            bridgedSlots = new int[0];
+            bm = null;
+            jv = null;
+            jx = null;
+            rawV = null;
+            rawX = null;
+            swV = null;
+            swX = null;
         }
     }
 
@@ -142,6 +186,16 @@ final class LaneMachine {
         for (int i = 0; i < values.length; i++) {
             setInput(i, values[i] ? -1L : 0L);
         }
+    }
+
+    /** Does step {@code s}: a restart (program fitted, power-up), the switches, the cycles. */
+    void step(Step s) {
+        if (s.restarts()) {
+            fit(s.program());
+            powerUp();
+        }
+        setInputs(s.inputs());
+        clock(s.cycles());
     }
 
     /** Runs {@code cycles} whole clock cycles, then settles so the lamps show the new state. */
@@ -459,8 +513,19 @@ final class LaneMachine {
         nextPhase = (int) (key[key.length - 1] & 0xff);
     }
 
-    /** Copies state, inputs and values (not forces) from another machine over the same circuit. */
+    /** Fits program {@code k} in the ROM (the state is not touched: power up after it). */
+    void fit(int k) {
+        rom = programs[k];
+    }
+
+    /** Fits the program {@code o} has in its ROM now (the state is not touched). */
+    void fitProgramOf(LaneMachine o) {
+        rom = o.rom;
+    }
+
+    /** Copies state, program, inputs and values (not forces) from another machine over the same circuit. */
     void copyFrom(LaneMachine o) {
+        rom = o.rom;
         System.arraycopy(o.v, 0, v, 0, v.length);
         System.arraycopy(o.x, 0, x, 0, x.length);
         System.arraycopy(o.pc, 0, pc, 0, LANES);

@@ -20,21 +20,37 @@ public final class OneFaultSimulator {
 
     private final FaultCircuit c;
     private final Machine m;
-    private final long[] rom;
+    private final List<long[]> programs;
 
     public OneFaultSimulator(FaultCircuit c, long[] rom) {
+        this(c, java.util.Collections.singletonList(rom));
+    }
+
+    /** A reference whose machine runs {@code programs.get(0)}; a restarting step fits another. */
+    public static OneFaultSimulator running(FaultCircuit c, List<long[]> programs) {
+        return new OneFaultSimulator(c, programs);
+    }
+
+    private OneFaultSimulator(FaultCircuit c, List<long[]> programs) {
         this.c = c;
         this.m = c.machine();
-        this.rom = rom == null ? new long[0] : rom;
+        this.programs = new java.util.ArrayList<>();
+        for (long[] p : programs) {
+            this.programs.add(p == null ? new long[0] : p);
+        }
     }
 
     /** Lamps after every step, {@code [step * lamps + lamp]}, with {@code fault} in (null: none). */
     public byte[] run(Fault fault, List<Step> steps) {
-        Run r = new Run(fault);
+        Run r = new Run(fault, programs.get(0));
         int lamps = c.lamps().size();
         byte[] out = new byte[steps.size() * lamps];
         for (int s = 0; s < steps.size(); s++) {
             Step st = steps.get(s);
+            if (st.restarts()) {
+                // switched off and on with another program: a machine fresh from power-up
+                r = new Run(fault, programs.get(st.program()));
+            }
             List<Port> ins = m.inputs();
             for (int i = 0; i < ins.size(); i++) {
                 r.val[ins.get(i).net()] = (byte) (st.input(i) ? 1 : 0);
@@ -67,8 +83,11 @@ public final class OneFaultSimulator {
         boolean pcUnknown;
         int nextPhase = 1;
 
-        Run(Fault fault) {
+        final long[] rom;
+
+        Run(Fault fault, long[] rom) {
             this.fault = fault;
+            this.rom = rom;
             this.bridge = fault == null ? null : fault.bridge();
             Arrays.fill(stem, (byte) -1);
             if (fault != null) {

@@ -14,13 +14,29 @@ import java.util.concurrent.Callable;
  * when every pair is exhausted, no continuation of the plan can split the class at the lamps, and
  * the class is reported with the net whose lamp would split it along the plan's steps.
  */
-public record Separation(List<Step> steps, List<Alike> alike) {
+public record Separation(List<Step> steps, List<Alike> alike, List<long[]> written) {
     /** Random programs tried on a group the plan's program cannot split. */
     public static final int PROGRAMS = 8;
+    /** Words of a program the plan writes itself: these first ones random, every later one 0. */
+    public static final int WRITTEN_WORDS = 16;
+    /** Programs a plan writes itself at most, after the ones it was given. */
+    public static final int WRITTEN_MOST = 2;
+    /** Short random programs weighed for each one written. */
+    static final int CANDIDATES = 16;
 
+    /**
+     * @param written programs the plan wrote itself (ROM words, the first {@link #WRITTEN_WORDS} random), fitted
+     *                after the simulator's own: a restarting step with program k beyond those fits {@code written.get(k - n)}
+     */
     public Separation {
         steps = List.copyOf(steps);
         alike = List.copyOf(alike);
+        written = List.copyOf(written);
+    }
+
+    /** A plan's steps as they are, with no group reported. */
+    public static Separation none(List<Step> steps) {
+        return new Separation(steps, List.of(), List.of());
     }
 
     /**
@@ -38,15 +54,108 @@ public record Separation(List<Step> steps, List<Alike> alike) {
         }
     }
 
-    /** Extends {@code plan} so that as few classes as can be hold more than {@code most} distinct faults. */
+    /**
+     * Extends {@code plan} so that as few classes as can hold more than {@code most} distinct faults.
+     * When the program that runs leaves some too large, and the simulator has further programs,
+     * the plan goes on with each in turn: switch off, fit it, switch on, and extend again.
+     */
     public static Separation of(FaultSimulator sim, FaultList faults, List<Step> plan, int most, Effort effort) {
-        List<Step> steps = new ArrayList<>(Diagnosis.extend(sim, faults, plan, most, effort));
-        int n = sim.circuit().inputCount();
+        List<Step> steps = new ArrayList<>(plan);
+        FaultCircuit c = sim.circuit();
+        int n = c.inputCount();
         boolean all = n <= 10;
         List<boolean[]> settings = all ? PlanGenerator.everySetting(n) : PlanGenerator.sample(n, effort.candidates());
-        StateSearch search = new StateSearch(sim, settings, all, effort.searchStates());
-        // A pair with no telling run of cycles stays so after more steps (their states only move
-        // within the pairs reachable from where the search started): never searched twice.
+        // Faults of a pair whose search ran out of budget, under any program: their group is not proven.
+        Set<Integer> unproven = java.util.concurrent.ConcurrentHashMap.newKeySet();
+        List<List<Fault>> large = List.of();
+        List<long[]> written = new ArrayList<>();
+        FaultSimulator now = sim;
+        try {
+            for (int program = 0; ; program++) {
+                if (program > 0) {
+                    if (large.isEmpty() || steps.size() >= effort.maxSteps()) {
+                        break;
+                    }
+                    if (program >= now.programs()) {
+                        // Given programs all run: write a short one that shows some group apart, if one does.
+                        long[] w = written.size() < WRITTEN_MOST && c.romSlots.length > 0 ? write(c, large) : null;
+                        if (w == null) {
+                            break;
+                        }
+                        written.add(w);
+                        FaultSimulator grown = sim.withPrograms(written);
+                        if (now != sim) {
+                            now.close();
+                        }
+                        now = grown;
+                    }
+                    steps.add(new Step(new boolean[n], 1, program));
+                }
+                StateSearch search = new StateSearch(now, settings, all, effort.searchStates());
+                large = separate(now, faults, steps, most, effort, search, unproven);
+            }
+            List<Alike> out = new ArrayList<>();
+            for (List<Fault> cls : large) {
+                boolean proven = cls.stream().noneMatch(f -> unproven.contains(f.id()));
+                out.add(split(now, cls, steps, proven));
+            }
+            return new Separation(steps, out, written);
+        } finally {
+            if (now != sim) {
+                now.close();
+            }
+        }
+    }
+
+    /**
+     * A short program ({@link #WRITTEN_WORDS} random words, then 0) that, run from power-up with random
+     * switch steps, shows the faults of most of the {@code large} groups apart; null when none of
+     * {@link #CANDIDATES} shows any group apart. The same groups always get the same program.
+     */
+    static long[] write(FaultCircuit c, List<List<Fault>> large) {
+        List<Fault> pool = new ArrayList<>();
+        for (List<Fault> g : large) {
+            pool.addAll(g);
+        }
+        java.util.Random r = new java.util.Random(pool.get(0).id() * 1_000_003L + pool.size());
+        int words = Math.min(1 << Math.min(c.pcWidth, 12), WRITTEN_WORDS);
+        long mask = c.romSlots.length >= 64 ? -1L : (1L << c.romSlots.length) - 1;
+        long[] best = null;
+        int bestSplit = 0;
+        for (int k = 0; k < CANDIDATES; k++) {
+            long[] rom = new long[words];
+            for (int w = 0; w < words; w++) {
+                rom[w] = r.nextLong() & mask;
+            }
+            List<Step> steps = Step.random(r, c.inputCount(), 24, 4);
+            byte[][] resp;
+            try (FaultSimulator one = new FaultSimulator(c, rom, 1)) {
+                resp = one.responses(pool, steps);
+            }
+            int split = 0;
+            for (int g = 0, at = 0; g < large.size(); at += large.get(g).size(), g++) {
+                for (int i = at + 1; i < at + large.get(g).size(); i++) {
+                    if (!Arrays.equals(resp[i], resp[at])) {
+                        split++;
+                        break;
+                    }
+                }
+            }
+            if (split > bestSplit) {
+                best = rom;
+                bestSplit = split;
+            }
+        }
+        return best;
+    }
+
+    /** Extends {@code steps} in place while the program that runs splits classes; returns the classes left too large. */
+    private static List<List<Fault>> separate(FaultSimulator sim, FaultList faults, List<Step> steps, int most,
+                                              Effort effort, StateSearch search, Set<Integer> unproven) {
+        List<Step> longer = Diagnosis.extend(sim, faults, steps, most, effort);
+        steps.addAll(longer.subList(steps.size(), longer.size()));
+        // A pair with no telling run of cycles stays so after more steps of the same program (their
+        // states only move within the pairs reachable from where the search started): never searched twice.
         Set<Long> settled = java.util.concurrent.ConcurrentHashMap.newKeySet();
         while (true) {
             Diagnosis d = new Diagnosis(sim, faults, steps);
@@ -57,7 +166,6 @@ public record Separation(List<Step> steps, List<Alike> alike) {
                 }
             }
             List<List<boolean[]>> found = new ArrayList<>();
-            boolean[] budget = new boolean[large.size()];
             List<Callable<Void>> jobs = new ArrayList<>();
             List<Step> now = List.copyOf(steps);
             for (int k = 0; k < large.size(); k++) {
@@ -76,7 +184,10 @@ public record Separation(List<Step> steps, List<Alike> alike) {
                             found.set(at, r.cycles());
                             return null;
                         }
-                        budget[at] |= r.end() == StateSearch.End.BUDGET;
+                        if (r.end() == StateSearch.End.BUDGET) {
+                            unproven.add(a.id());
+                            unproven.add(b.id());
+                        }
                         settled.add(key);
                     }
                     return null;
@@ -91,11 +202,7 @@ public record Separation(List<Step> steps, List<Alike> alike) {
                 }
             }
             if (!grew) {
-                List<Alike> out = new ArrayList<>();
-                for (int k = 0; k < large.size(); k++) {
-                    out.add(split(sim, large.get(k), steps, !budget[k]));
-                }
-                return new Separation(steps, out);
+                return large;
             }
         }
     }

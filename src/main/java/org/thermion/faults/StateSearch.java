@@ -101,6 +101,9 @@ final class StateSearch {
         FaultCircuit c = sim.circuit();
         LaneMachine g = sim.machine();
         LaneMachine b = sim.machine();
+        // The state keys leave the program out: the search runs the one each start has fitted.
+        g.fitProgramOf(good);
+        b.fitProgramOf(faulty);
         b.inject(fault, -1L);
         if (faultyAlone) {
             g.inject(fault, -1L);

@@ -52,6 +52,46 @@ class PlanCommandTest {
     }
 
     @Test
+    void aNextProgramNeedsDistinguishAndAMachineWithARom() {
+        ReportChecks.Result r = ReportChecks.run("plan", "examples/pumpstation/pumpstation.machine", "--program",
+                "programs/pump.asm", "--next-program", "programs/every-op.asm");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("--distinguish").doesNotContain("Exception");
+        r = ReportChecks.run("plan", "examples/bringup-panel/bringup-panel.machine", "--distinguish", "--next-program",
+                "programs/every-op.asm");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("no ROM").doesNotContain("Exception");
+    }
+
+    @Test
+    void theDemosPlanSpanningTwoProgramsNamesTheRestartAndKeepsItsSchema() {
+        ReportChecks.Result r = ReportChecks.run("plan", "examples/pumpstation/pumpstation.machine", "--program",
+                "programs/pump.asm", "--distinguish", "--next-program", "programs/every-op.asm", "--format", "json");
+        assertThat(r.code()).as(r.err()).isZero();
+        JsonNode tree = ReportChecks.assertJson(r.out());
+        JsonNode steps = tree.path("tables").path("steps");
+        java.util.List<String> firsts = new java.util.ArrayList<>();
+        for (JsonNode s : steps) {
+            if (!s.path("first").isNull()) {
+                firsts.add(s.path("first").asString());
+            }
+        }
+        assertThat(firsts).isNotEmpty();
+        assertThat(firsts.get(0)).isEqualTo("fit programs/every-op.asm");
+        for (int k = 1; k < firsts.size(); k++) {
+            assertThat(firsts.get(k)).isEqualTo("fit written program " + k + " (table written)");
+        }
+        int written = 0;
+        for (JsonNode w : tree.path("tables").path("written")) {
+            written = Math.max(written, w.path("program").asInt());
+        }
+        assertThat(written).isEqualTo(firsts.size() - 1);
+        for (JsonNode g : tree.path("tables").path("groups")) {
+            assertThat(g.path("faults").asInt()).isGreaterThan(3);
+        }
+    }
+
+    @Test
     void aMachineWithARomNeedsItsProgram() {
         ReportChecks.Result r = ReportChecks.run("plan", "examples/pumpstation/pumpstation.machine");
         assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);

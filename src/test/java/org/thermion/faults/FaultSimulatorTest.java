@@ -17,11 +17,15 @@ class FaultSimulatorTest {
      * with every joining table (loops through a bridge, latch outputs, switches, fights included).
      */
     private static void assertAgree(Machine m, long[] rom, List<Step> steps, String what) {
+        assertAgreeRunning(m, java.util.Collections.singletonList(rom), steps, what);
+    }
+
+    private static void assertAgreeRunning(Machine m, List<long[]> programs, List<Step> steps, String what) {
         FaultCircuit c = FaultCircuit.of(m);
         List<Fault> faults = new ArrayList<>(FaultList.of(c, SocketPins.of(m)).all());
         faults.addAll(randomBridges(c, what.hashCode(), faults.size(), 48));
-        OneFaultSimulator ref = new OneFaultSimulator(c, rom);
-        try (FaultSimulator fast = new FaultSimulator(c, rom, 2)) {
+        OneFaultSimulator ref = OneFaultSimulator.running(c, programs);
+        try (FaultSimulator fast = FaultSimulator.running(c, programs, 2)) {
             byte[][] got = fast.responses(faults, steps);
             for (Fault f : faults) {
                 assertThat(got[f.id()]).as("%s: fault %s", what, f).isEqualTo(ref.run(f, steps));
@@ -38,6 +42,19 @@ class FaultSimulatorTest {
             for (Fault f : faults) {
                 assertThat(first[f.id()]).as("%s: first detection of %s", what, f)
                         .isEqualTo(firstDifference(refGood, ref.run(f, steps), lamps));
+            }
+        }
+        // One worker reloads one machine for every batch: bridges first, so stuck-at batches follow
+        // bridge batches in the same machine, and nothing of an earlier batch may stay behind.
+        List<Fault> reversed = new ArrayList<>(faults);
+        java.util.Collections.reverse(reversed);
+        try (FaultSimulator single = FaultSimulator.running(c, programs, 1)) {
+            for (int round = 0; round < 2; round++) {
+                byte[][] got = single.responses(round == 0 ? reversed : faults, steps);
+                for (int i = 0; i < faults.size(); i++) {
+                    Fault f = (round == 0 ? reversed : faults).get(i);
+                    assertThat(got[i]).as("%s, one reused machine: fault %s", what, f).isEqualTo(ref.run(f, steps));
+                }
             }
         }
     }
@@ -91,6 +108,19 @@ class FaultSimulatorTest {
     void agreesWithTheReferenceOnTheDemoRunningItsProgram() {
         Machine demo = Bench.demo();
         assertAgree(demo, Bench.demoRom(demo), RandomMachines.steps(5, demo.inputs().size(), 12), "demo");
+    }
+
+    @Test
+    void agreesWithTheReferenceOnTheDemoSwitchedOffAndOnWithAnotherProgramAndBack() throws Exception {
+        Machine demo = Bench.demo();
+        long[] second = Bench.rom(demo, java.nio.file.Files.readString(java.nio.file.Path.of("programs", "every-op.asm")));
+        List<Step> steps = new ArrayList<>(RandomMachines.steps(5, demo.inputs().size(), 6));
+        List<Step> more = RandomMachines.steps(6, demo.inputs().size(), 12);
+        steps.add(more.get(0).restarting(1));
+        steps.addAll(more.subList(1, 6));
+        steps.add(more.get(6).restarting(0));
+        steps.addAll(more.subList(7, 12));
+        assertAgreeRunning(demo, List.of(Bench.demoRom(demo), second), steps, "demo, two programs");
     }
 
     @Test

@@ -41,6 +41,50 @@ class SeparationTest {
     }
 
     @Test
+    void theDemosGroupsShrinkWithEveryProgramThePlanFitsAndWhatIsLeftNoProgramTriedSplits() throws Exception {
+        Machine demo = Bench.demo();
+        FaultCircuit c = FaultCircuit.of(demo);
+        FaultList faults = FaultList.of(c, SocketPins.of(demo));
+        long[] everyOp = Bench.rom(demo, java.nio.file.Files.readString(Path.of("programs", "every-op.asm")));
+        try (FaultSimulator sim = FaultSimulator.running(c, List.of(Bench.demoRom(demo), everyOp), 2)) {
+            Plan plan = new PlanGenerator(sim, faults, Effort.DEFAULT).generate();
+            Separation sep = Separation.of(sim, faults, plan.steps(), 3, Effort.DEFAULT);
+            List<Step> steps = sep.steps();
+            try (FaultSimulator all = sim.withPrograms(sep.written())) {
+                // The named second program is fitted first, each written one after it, each from power-up.
+                List<Integer> restarts = new java.util.ArrayList<>();
+                for (int i = 0; i < steps.size(); i++) {
+                    if (steps.get(i).restarts()) {
+                        assertThat(steps.get(i).program()).isEqualTo(restarts.size() + 1);
+                        restarts.add(i);
+                    }
+                }
+                assertThat(restarts).hasSize(1 + sep.written().size());
+                assertThat(all.programs()).isEqualTo(2 + sep.written().size());
+                // Every further program splits some group the ones before it left.
+                restarts.add(steps.size());
+                int before = new Diagnosis(all, faults, steps.subList(0, restarts.get(0))).classesAbove(3);
+                for (int k = 1; k < restarts.size(); k++) {
+                    int after = new Diagnosis(all, faults, steps.subList(0, restarts.get(k))).classesAbove(3);
+                    assertThat(after).as("groups above three after program %d", k + 1).isLessThan(before);
+                    before = after;
+                }
+                Diagnosis d = new Diagnosis(all, faults, steps);
+                assertThat(sep.alike()).hasSize(d.classesAbove(3));
+                for (Separation.Alike a : sep.alike()) {
+                    assertThat(a.faults()).hasSizeGreaterThan(3);
+                    assertThat(a.otherProgram()).as("a group left: random programs split it too?").isFalse();
+                }
+                // A written program is short: random words first, zeros after.
+                for (long[] w : sep.written()) {
+                    assertThat(w.length).isLessThanOrEqualTo(Separation.WRITTEN_WORDS);
+                    assertThat(java.util.Arrays.stream(w).anyMatch(x -> x != 0L)).isTrue();
+                }
+            }
+        }
+    }
+
+    @Test
     void aPairOfFaultsThePlanLeavesTogetherIsToldApartByTheSearchWhenSomeRunCan() {
         // c17's lamps n22 and n23: n22 stuck-at-0 and n23 stuck-at-0 look alike while both lamps are dark
         // (the last step of its plan) and a search from there finds the cycle that tells them apart.
