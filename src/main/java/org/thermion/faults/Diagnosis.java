@@ -13,9 +13,9 @@ import java.util.Map;
  * whose lamps agree at every step cannot be told apart by it and form one class (the class
  * that looks like the good machine is "no fault seen"). Given what the builder saw (a lamp
  * may be left blank), classes are ranked by the lamps they contradict, then by the lamps they
- * cannot predict (unknown where something was seen), then by the lamps they predict that were
- * left blank (before the step the builder has got to): exact matches
- * first, then the nearest,
+ * cannot predict (unknown where something was seen), together, then by the lamps they
+ * contradict, then by the lamps they predict that were left blank (before the step the builder
+ * has got to): exact matches first, then the nearest,
  * so two faults at once or a fault outside the model still point somewhere. Equal scores
  * share a rank.
  */
@@ -149,8 +149,10 @@ public final class Diagnosis {
                 scored.add(new Suspect(0, bad, unknown, unchecked, k.members(), k.looksGood()));
             }
         }
-        scored.sort(Comparator.comparingInt(Suspect::contradicted).thenComparingInt(Suspect::unpredicted)
-                .thenComparingInt(Suspect::unchecked));
+        // Nearest = fewest lamps seen that the class does not explain, wrong or unpredicted alike: a
+        // class that predicts nothing (a bridge whose drivers fight) contradicts nothing, yet explains nothing.
+        scored.sort(Comparator.comparingInt((Suspect s) -> s.contradicted() + s.unpredicted())
+                .thenComparingInt(Suspect::contradicted).thenComparingInt(Suspect::unchecked));
         List<Suspect> out = new ArrayList<>(scored.size());
         int rank = 0;
         for (int i = 0; i < scored.size(); i++) {
@@ -195,6 +197,34 @@ public final class Diagnosis {
         }
         Choice c = bestSplit(pool, group, effort);
         return c == null ? null : c.step;
+    }
+
+    /** A step to take next and the ranked classes it is meant to tell apart. */
+    public record Proposal(Step step, List<Suspect> candidates) {
+        public Proposal {
+            candidates = List.copyOf(candidates);
+        }
+    }
+
+    /**
+     * The next step for a builder holding {@code ranked} (from {@link #rank}): the one that best splits
+     * the classes sharing the first rank; when those cannot be split (one class alone, or faults no
+     * step after the plan tells apart), the one that best splits the first {@code widest} classes, so a
+     * near match (two faults at once) is still told from its neighbours. The step is null only when no
+     * step after the plan tells any of those candidates apart.
+     */
+    public Proposal propose(List<Suspect> ranked, int widest, Effort effort) {
+        if (ranked.isEmpty()) {
+            return new Proposal(null, List.of());
+        }
+        List<Suspect> leading = ranked.stream().filter(s -> s.rank() == ranked.get(0).rank()).toList();
+        Step step = nextStep(leading, effort);
+        if (step != null) {
+            return new Proposal(step, leading);
+        }
+        List<Suspect> wide = ranked.subList(0, Math.min(ranked.size(), Math.max(widest, leading.size())));
+        step = wide.size() > leading.size() ? nextStep(wide, effort) : null;
+        return step != null ? new Proposal(step, wide) : new Proposal(null, leading);
     }
 
     /**
