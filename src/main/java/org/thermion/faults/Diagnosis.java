@@ -13,8 +13,8 @@ import java.util.Map;
  * whose lamps agree at every step cannot be told apart by it and form one class (the class
  * that looks like the good machine is "no fault seen"). Given what the builder saw (a lamp
  * may be left blank), classes are ranked by the lamps they contradict, then by the lamps they
- * cannot predict (unknown where something was seen), together, then by the lamps they
- * contradict, then by the lamps they predict that were left blank (before the step the builder
+ * cannot predict (unknown where something was seen), a contradicted lamp weighing as two
+ * unpredicted ones, then by the lamps they contradict, then by the lamps they predict that were left blank (before the step the builder
  * has got to): exact matches first, then the nearest,
  * so two faults at once or a fault outside the model still point somewhere. Equal scores
  * share a rank.
@@ -149,9 +149,11 @@ public final class Diagnosis {
                 scored.add(new Suspect(0, bad, unknown, unchecked, k.members(), k.looksGood()));
             }
         }
-        // Nearest = fewest lamps seen that the class does not explain, wrong or unpredicted alike: a
-        // class that predicts nothing (a bridge whose drivers fight) contradicts nothing, yet explains nothing.
-        scored.sort(Comparator.comparingInt((Suspect s) -> s.contradicted() + s.unpredicted())
+        // Nearest = least unlikely: a lamp left unpredictable matches half the time, a wrong one only
+        // if a second fault or one outside the model is at work, so a wrong lamp weighs as two
+        // unpredictable ones. A class that predicts nothing (a bridge whose drivers fight)
+        // contradicts nothing, yet must not lead a near match on that alone.
+        scored.sort(Comparator.comparingInt((Suspect s) -> 2 * s.contradicted() + s.unpredicted())
                 .thenComparingInt(Suspect::contradicted).thenComparingInt(Suspect::unchecked));
         List<Suspect> out = new ArrayList<>(scored.size());
         int rank = 0;
