@@ -190,14 +190,10 @@ public final class Diagnosis {
      */
     public Step nextStep(List<Suspect> suspects, Effort effort) {
         List<Fault> pool = new ArrayList<>();
-        List<Integer> group = new ArrayList<>();
-        for (int i = 0; i < suspects.size(); i++) {
-            for (Fault f : suspects.get(i).members()) {
-                pool.add(f);
-                group.add(0);
-            }
+        for (Suspect s : suspects) {
+            pool.addAll(s.members());
         }
-        Choice c = bestSplit(pool, group, effort);
+        Choice c = bestSplit(sim, steps, pool, new long[pool.size()], effort);
         return c == null ? null : c.step;
     }
 
@@ -290,11 +286,12 @@ public final class Diagnosis {
         return out;
     }
 
+    /** A step to add and its score (sum of squared group sizes after it). */
     private record Choice(Step step, long score) {
     }
 
-    // Scores every (setting, cycles) after the plan by the sum of squares of the groups it leaves.
-    private Choice bestSplit(List<Fault> pool, List<Integer> group, Effort effort) {
+    // Scores every (setting, cycles) after {@code steps} by the sum of squares of the groups it leaves.
+    private static Choice bestSplit(FaultSimulator sim, List<Step> steps, List<Fault> pool, long[] group, Effort effort) {
         if (pool.size() < 2) {
             return null;
         }
@@ -314,18 +311,18 @@ public final class Diagnosis {
                 for (int k = 0; k < cycles; k++) {
                     scratch.clock(1);
                     for (int l = 0; l < n; l++) {
-                        sig[s][k][base + l] = signature(scratch, l);
+                        sig[s][k][base + l] = signature(sim.circuit(), scratch, l);
                     }
                 }
             }
         });
-        long before = squares(group.stream().mapToLong(g -> g).toArray());
+        long before = squares(group);
         Choice best = null;
         for (int k = 0; k < cycles; k++) {
             for (int s = 0; s < ns; s++) {
                 long[] keys = new long[pool.size()];
                 for (int i = 0; i < keys.length; i++) {
-                    keys[i] = sig[s][k][i] * 1_000_003L + group.get(i);
+                    keys[i] = sig[s][k][i] * 1_000_003L + group[i];
                 }
                 long score = squares(keys);
                 if (score < before && (best == null || score < best.score)) {
@@ -336,9 +333,9 @@ public final class Diagnosis {
         return best;
     }
 
-    private long signature(LaneMachine m, int lane) {
+    private static long signature(FaultCircuit c, LaneMachine m, int lane) {
         long h = 1469598103934665603L;
-        for (ObservedLamp lamp : sim.circuit().lamps()) {
+        for (ObservedLamp lamp : c.lamps()) {
             h = (h ^ FaultSimulator.reading(m, lamp.slot(), lane)) * 1099511628211L;
         }
         return h;
@@ -366,22 +363,23 @@ public final class Diagnosis {
     public static List<Step> extend(FaultSimulator sim, FaultList faults, List<Step> plan, int most, Effort effort) {
         List<Step> steps = new ArrayList<>(plan);
         while (steps.size() < effort.maxSteps()) {
+            // Every class afresh: a fault that looked good may show itself at the new step and join a large class.
             Diagnosis d = new Diagnosis(sim, faults, steps);
             List<Fault> pool = new ArrayList<>();
-            List<Integer> group = new ArrayList<>();
+            List<Long> group = new ArrayList<>();
             for (int c = 0; c < d.classes.size(); c++) {
                 Suspect s = d.classes.get(c);
                 if (!s.looksGood() && size(faults, s) > most) {
                     for (Fault f : s.members()) {
                         pool.add(f);
-                        group.add(c);
+                        group.add((long) c);
                     }
                 }
             }
             if (pool.isEmpty()) {
                 break;
             }
-            Choice c = d.bestSplit(pool, group, effort);
+            Choice c = bestSplit(sim, steps, pool, group.stream().mapToLong(Long::longValue).toArray(), effort);
             if (c == null) {
                 break;
             }
