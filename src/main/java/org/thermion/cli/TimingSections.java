@@ -19,6 +19,7 @@ import java.util.Locale;
 import java.util.Set;
 
 import static org.thermion.cli.report.ReportUnit.COUNT;
+import static org.thermion.cli.report.ReportUnit.FARADS;
 import static org.thermion.cli.report.ReportUnit.FLAG;
 import static org.thermion.cli.report.ReportUnit.NUMBER;
 import static org.thermion.cli.report.ReportUnit.OHMS;
@@ -47,9 +48,10 @@ final class TimingSections {
                 .column("rise_ohms", "rise R", OHMS, "effective output resistance of the rising edge")
                 .column("fall_ohms", "fall R", OHMS, "effective output resistance of the falling edge")
                 .column("declared_ron", "ron", OHMS, "the conducting resistance the stage declares (used where no circuit solves)")
-                .column("gain", "gain", NUMBER, "Miller gain |dVplate/dVgrid| used for a triode input")
+                .column("gain", "gain", NUMBER, "Miller gain |dVout/dVgrid| of a triode input: to the plate, or to the cathode of a follower")
                 .column("gain_basis", "gain from", TEXT, "computed at the operating point, declared in the block, or the default")
                 .column("declared_gain", "decl. gain", NUMBER, "the gain the block states")
+                .column("input_farads", "input C", FARADS, "one input's capacitance with the Miller effect: Cgk (1 - Ak) + Cgp (1 - Ap) for a triode, else cin")
                 .column("note", "note", TEXT);
         List<String> warnings = new ArrayList<>();
         Set<Integer> used = new LinkedHashSet<>();
@@ -90,7 +92,7 @@ final class TimingSections {
             t.row(st.name(), computed ? "computed" : "declared", orAbsent(rise), orAbsent(fall),
                     st.declared().ron() ? orAbsent(st.outputOhmsLow()) : NOT_STATED, orAbsent(gain),
                     Double.isNaN(gain) ? Absent.NONE : gainComputed ? "computed" : st.declared().gain() ? "declared" : "default",
-                    st.declared().gain() ? orAbsent(st.gain()) : NOT_STATED,
+                    st.declared().gain() ? orAbsent(st.gain()) : NOT_STATED, calc.inputFarads(st),
                     notes.isEmpty() ? Absent.NONE : String.join("; ", notes));
         }
         rep.table(t);

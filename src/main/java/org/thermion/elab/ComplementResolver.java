@@ -10,7 +10,7 @@ import java.util.Map;
  * netlist does not depend on whether a latch is declared before or after the places that read
  * its complement: an inverter of a latch output becomes a wire from the flip-flop's free
  * second output, an inverter of that complement a wire from the latch itself, and any other
- * stays an inverter tube (an error when no stage realizes {@code !}).
+ * stays an inverter tube, shared with an identical one (an error when no stage realizes {@code !}).
  */
 final class ComplementResolver {
     private ComplementResolver() {
@@ -29,11 +29,16 @@ final class ComplementResolver {
                 from = nb.complementOf(in);
             } else if (source != null) {
                 from = source;
-            } else {
-                if (gate.stage < 0) {
-                    mapper.needStage("not", "!", gate.span == null ? Span.none() : gate.span);
-                }
+            } else if (gate.stage < 0) {
+                mapper.needStage("not", "!", gate.span == null ? Span.none() : gate.span);
                 continue;
+            } else {
+                // A real inverter: the same stage named outright on the same net serves both,
+                // as it would have had the driver been known when the inverter was asked for.
+                from = nb.shareDecided(g);
+                if (from < 0) {
+                    continue;
+                }
             }
             nb.rewire(g, from);
             alias.put(gate.out, from);

@@ -10,7 +10,7 @@ import java.util.Map;
  * names) → {@link LoopUnroller} (generate loops, budgets) → {@link StatementLowering} and
  * {@link ExpressionLowering} (expressions to {@link Logic} bits) → {@link StageMapper} (bits onto
  * stages, into the {@link NetBuilder}) → {@link ComplementResolver} (inverters decided once all
- * drivers are known). {@link Instantiator} ties them together at each {@code use}.
+ * drivers are known) → {@link GateSharing} (identical gates shared). {@link Instantiator} ties them together at each {@code use}.
  */
 final class ModuleExpansion {
     final NetBuilder nb;
@@ -37,6 +37,7 @@ final class ModuleExpansion {
         unroller.instancesBy(instances);
         Scope scope = instances.top(top);
         ComplementResolver.resolve(mapper);
+        GateSharing.share(nb, parts.realizer("not"));
         return new ModuleExpansion(nb, instances.tree, mapper, scope.names);
     }
 }

@@ -107,12 +107,46 @@ final class NetBuilder {
 
     /** A gate; identical gates of one module are shared. {@code dest} < 0 asks for a new net. */
     int gate(GateFn fn, int stage, int[] in, int dest, int module, String modulePath, Span span) {
+        return gate(fn, stage, in, dest, module, modulePath, span, true);
+    }
+
+    /**
+     * An inverter whose fate waits for every driver: kept out of sharing until then, so a stage
+     * named outright is never folded into it (nor it into the stage) before it is decided.
+     */
+    int undecidedInverter(int stage, int in, int module, String modulePath, Span span) {
+        return gate(GateFn.NOT, stage, new int[]{in}, -1, module, modulePath, span, false);
+    }
+
+    /** The output of a shared gate identical to gate {@code g}, or -1; registers {@code g} when none. */
+    int shareDecided(int g) {
+        GateB gate = gates.get(g);
+        Integer existing = shared.putIfAbsent(keyOf(gate.fn, gate.stage, gate.module, gate.in), gate.out);
+        return existing == null ? -1 : existing;
+    }
+
+    /**
+     * Makes gate {@code g} a free connection from {@code from}, an identical gate's output. The
+     * nets it read keep their read marks: the description still reads them.
+     */
+    void merge(int g, int from) {
+        GateB old = gates.get(g);
+        read(from);
+        gates.set(g, new GateB(GateFn.BUF, new int[]{from}, old.out, -1, old.module, old.span));
+    }
+
+    static GateKey keyOf(GateFn fn, int stage, int module, int[] in) {
         int[] key = in.clone();
         if (fn != GateFn.NOT && fn != GateFn.BUF) {
             Arrays.sort(key);
         }
-        GateKey k = new GateKey(fn.ordinal(), stage, module, key);
-        Integer existing = stage == -1 && fn == GateFn.BUF ? null : shared.get(k);
+        return new GateKey(fn.ordinal(), stage, module, key);
+    }
+
+    private int gate(GateFn fn, int stage, int[] in, int dest, int module, String modulePath, Span span, boolean share) {
+        share &= !(stage == -1 && fn == GateFn.BUF);
+        GateKey k = keyOf(fn, stage, module, in);
+        Integer existing = share ? shared.get(k) : null;
         if (existing != null) {
             if (dest < 0) {
                 return existing;
@@ -131,7 +165,7 @@ final class NetBuilder {
         }
         gates.add(new GateB(fn, in, out, stage, module, span));
         drive(out, gates.size() - 1, span);
-        if (!(stage == -1 && fn == GateFn.BUF)) {
+        if (share) {
             shared.put(k, out);
         }
         return out;
@@ -187,7 +221,7 @@ final class NetBuilder {
      * with a mixed hash; the text key it replaces hashed so unevenly on large machines that
      * its buckets turned into trees.
      */
-    private static final class GateKey {
+    static final class GateKey {
         private final int fn;
         private final int stage;
         private final int module;
@@ -243,6 +277,10 @@ final class NetBuilder {
 
         int[] toArray() {
             return Arrays.copyOf(a, n);
+        }
+
+        int size() {
+            return n;
         }
     }
 }

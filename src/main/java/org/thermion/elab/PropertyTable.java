@@ -208,7 +208,7 @@ final class PropertyTable {
                             + "load (common practice)"),
             Property.of("wiring", "wiring capacitance per connection", q("wiring capacitance", Unit.FARAD, from(0, 1e-6)))
                     .byDefault(0).source(PLAUSIBLE),
-            Property.of("gain", "voltage gain, for the Miller capacitance of the next grid", plain("stage gain", from(-1e4, 1e4)))
+            Property.of("gain", "voltage gain, for the Miller capacitance of the next grid (a stage with a circuit has it computed; timing warns at a stated one over 25 % off)", plain("stage gain", from(-1e4, 1e4)))
                     .byDefault(1).source("Miller (REFERENCES.md); " + PLAUSIBLE),
             Property.of("note", "a line about the circuit", text("a note")).byDefault("empty"));
 

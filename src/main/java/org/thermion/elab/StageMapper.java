@@ -123,7 +123,7 @@ final class StageMapper {
         long key = ((long) f.module << 32) | in;
         Integer t = candidateFor.get(key);
         if (t == null) {
-            t = nb.gate(GateFn.NOT, parts.realizer("not"), new int[]{in}, -1, f.module, f.path, span);
+            t = nb.undecidedInverter(parts.realizer("not"), in, f.module, f.path, span);
             candidates.add(nb.driver.get(t));
             candidateOf.put(t, in);
             candidateFor.put(key, t);

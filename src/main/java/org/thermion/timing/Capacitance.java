@@ -13,23 +13,25 @@ public final class Capacitance {
     }
 
     /**
-     * Input capacitance of one input of {@code st}. A triode grid sees Cgk plus the Miller
-     * multiplied grid-plate capacitance Cgp (1 + |A|), A the stage's gain (J. M. Miller,
-     * NBS Scientific Papers 15, 1920); pentodes, diodes and thyratrons their declared cin.
-     * A stage without a declared gain counts |A| = 1.
+     * Input capacitance of one input of {@code st} with its declared gain (see
+     * {@link #input(TubeType, StageDrive.GridGains)}); a stage without one counts |A| = 1.
      */
     public static double input(StageType st, TubeType tube) {
-        return input(st, tube, st.gain());
+        return input(tube, StageDrive.GridGains.declared(Double.isNaN(st.gain()) ? 1 : st.gain()));
     }
 
-    /** As {@link #input(StageType, TubeType)} with the stage's gain given (NaN: counted 1). */
-    public static double input(StageType st, TubeType tube, double stageGain) {
+    /**
+     * Input capacitance of one triode input with grid gains {@code g}: each capacitance from the grid
+     * multiplied by one less the gain across it (J. M. Miller, NBS Scientific Papers 15, 1920),
+     * Cgp (1 - Ap) + Cgk (1 - Ak): Cgk + Cgp (1 + |A|) for a plate stage with a grounded cathode,
+     * Cgp + Cgk (1 - A) for a cathode follower. Pentodes, diodes and thyratrons: their declared cin.
+     */
+    public static double input(TubeType tube, StageDrive.GridGains g) {
         if (tube == null) {
             return 0;
         }
         if (tube.kind() == TubeKind.TRIODE) {
-            double gain = Double.isNaN(stageGain) ? 1 : Math.abs(stageGain);
-            return orZero(tube.cgk()) + orZero(tube.cgp()) * (1 + gain);
+            return orZero(tube.cgk()) * (1 - g.cathode()) + orZero(tube.cgp()) * (1 - g.plate());
         }
         return orZero(tube.cin());
     }

@@ -144,7 +144,17 @@ public final class DelayCalculator {
         return circuits.circuit(st).orElse(null);
     }
 
-    /** The Miller gain a triode receiver's input is counted with: computed where it has a circuit, else declared. */
+    /**
+     * The grid gains a triode receiver's input is counted with: computed at its operating points
+     * where it has a circuit, else its declared gain (an inverting stage; 1 when not declared).
+     */
+    public StageDrive.GridGains gains(StageType st) {
+        StageCircuit c = circuit(st);
+        StageDrive.GridGains g = c == null ? null : drive.gridGains(c);
+        return g != null ? g : StageDrive.GridGains.declared(Double.isNaN(st.gain()) ? 1 : st.gain());
+    }
+
+    /** |gain| from a receiver's grid to its output: computed where it has a circuit, else declared. */
     public double gain(StageType st) {
         StageCircuit c = circuit(st);
         double g = c == null ? Double.NaN : drive.millerGain(c);
@@ -155,6 +165,11 @@ public final class DelayCalculator {
     public boolean gainComputed(StageType st) {
         StageCircuit c = circuit(st);
         return c != null && !Double.isNaN(drive.millerGain(c));
+    }
+
+    /** The capacitance one input of {@code st} puts on the net that drives it (Miller effect included). */
+    public double inputFarads(StageType st) {
+        return Capacitance.input(tube(st), gains(st));
     }
 
     /** Stage-type indices of the stage inputs a net drives (-1 for off-board pins such as the PC). */
@@ -173,7 +188,7 @@ public final class DelayCalculator {
         for (int s : pins.get(net)) {
             if (s >= 0) {
                 StageType driven = machine.stages().get(s);
-                c += Capacitance.input(driven, tube(driven), gain(driven));
+                c += inputFarads(driven);
             }
         }
         c += Capacitance.orZero(st.wiringFarads()) * pins.get(net).size();

@@ -3,8 +3,11 @@ package org.thermion.timing;
 import org.thermion.circuit.Corner;
 import org.thermion.circuit.DcResult;
 import org.thermion.circuit.FlipFlop;
+import org.thermion.circuit.GridLoad;
 import org.thermion.circuit.GridNetwork;
 import org.thermion.circuit.Load;
+import org.thermion.circuit.LoadResistor;
+import org.thermion.circuit.OperatingPoint;
 import org.thermion.circuit.Parameter;
 import org.thermion.circuit.StageCircuit;
 import org.thermion.circuit.StageSolver;
@@ -25,7 +28,8 @@ import java.util.Map;
  * inside the swing (a regenerative stage such as a flip-flop, switched by its trigger), the
  * resistance is the small-signal one at the new level instead. Inputs sit at 0 V for 0 and at the
  * highest rail for 1; every input state is tried (the extreme ones beyond four inputs) and the
- * slowest kept. The Miller gain is |dVplate/dVgrid| at the middle of the transfer curve.
+ * slowest kept. The grid's gains to plate and cathode (for the Miller effect) are taken at the
+ * middle of the transfer curve ({@link #gridGains}).
  * Results are cached per stage, loads and corner. Not thread-safe.
  */
 public final class StageDrive {
@@ -35,7 +39,7 @@ public final class StageDrive {
     private final StageSolver solver;
     private final double high;
     private final Map<Key, Edges> edges = new HashMap<>();
-    private final Map<StageCircuit, Double> gains = new HashMap<>();
+    private final Map<StageCircuit, GridGains> gains = new HashMap<>();
     private final Map<Key, double[]> slowestRise = new HashMap<>();
     private final Map<Key, double[]> slowestFall = new HashMap<>();
 
@@ -218,62 +222,135 @@ public final class StageDrive {
     }
 
     /**
-     * |dVplate/dVgrid| of a tube stage at the middle of its transfer curve (the first input swept,
-     * the others at the level that leaves it in control); NaN for other stages.
+     * Small-signal voltage gains from a triode's grid pin to its plate and to its cathode, signed
+     * (a plate falls as its grid rises: negative; a cathode follows: positive; 0 where the node
+     * sits on a rail). Each capacitance from the grid is multiplied by one less the gain across
+     * it (J. M. Miller, NBS Scientific Papers 15, 1920): Cin = Cgp (1 - plate) + Cgk (1 - cathode).
      */
-    public double millerGain(StageCircuit stage) {
-        Double g = gains.get(stage);
-        if (g == null) {
-            g = gain(stage);
-            gains.put(stage, g);
+    public record GridGains(double plate, double cathode) {
+        /** A declared gain: an inverting stage with its cathode on a rail. */
+        public static GridGains declared(double gain) {
+            return new GridGains(-Math.abs(gain), 0);
         }
-        return g;
+
+        /** The gain's size to the node the stage takes its output from. */
+        public double toOutput(boolean cathodeOutput) {
+            return Math.abs(cathodeOutput ? cathode : plate);
+        }
     }
 
-    private double gain(StageCircuit stage) {
-        if (!(stage instanceof TubeStage t) || t.output() != TubeStage.Output.PLATE) {
-            return Double.NaN;
+    /**
+     * |dVout/dVgrid| of a tube stage or flip-flop at the middle of its swing (see {@link #gridGains});
+     * NaN for other stages.
+     */
+    public double millerGain(StageCircuit stage) {
+        GridGains g = gridGains(stage);
+        return g == null ? Double.NaN : g.toOutput(stage instanceof TubeStage t && t.output() == TubeStage.Output.CATHODE);
+    }
+
+    /**
+     * The grid gains of a stage's first input at the middle of its transfer curve, the other inputs at
+     * the level that leaves it in control: a plate stage (inverter, NOR's parallel sections on one
+     * load, NAND's stacked ones) and a cathode follower alike, from the operating points either side.
+     * A flip-flop's trigger reaches a grid of the pair: that half is swept between the two levels the
+     * cross-coupling gives its grid, its plate loaded by its load and the divider to the other grid
+     * (the half's own cathode return; exact for a grounded cathode). Null for diode and gas stages
+     * or when a point has no solution.
+     */
+    public GridGains gridGains(StageCircuit stage) {
+        if (!gains.containsKey(stage)) {
+            gains.put(stage, gainsOf(stage));
         }
-        double rest = t.arrangement() == TubeStage.Arrangement.SERIES ? high : 0;
-        double vLow = out(t, 0, rest);
-        double vHigh = out(t, high, rest);
-        if (Double.isNaN(vLow) || Double.isNaN(vHigh)) {
-            return Double.NaN;
+        return gains.get(stage);
+    }
+
+    private GridGains gainsOf(StageCircuit stage) {
+        if (stage instanceof TubeStage t) {
+            double rest = t.arrangement() == TubeStage.Arrangement.SERIES ? high : 0;
+            return sweep(t, List.of(), 0, high, rest);
         }
-        double mid = (vLow + vHigh) / 2;
-        double a = 0;
-        double b = high;
+        if (stage instanceof FlipFlop f) {
+            OperatingPoint off = point(f, new double[0], true, List.of());
+            OperatingPoint on = point(f, new double[0], false, List.of());
+            String pin = f.cross().stopperOhms() > 0 ? "driver.gridA" : "driver.tapA";
+            if (off == null || on == null || !off.nodeVolts().containsKey(pin)) {
+                return null;
+            }
+            TubeStage half = TubeStage.inverter(f.name() + " (one half)", f.tube(), 1, new LoadResistor(f.loadOhms()),
+                    f.plateRail(), f.cathode(), GridNetwork.direct(), null);
+            Load otherGrid = new GridLoad(f.cross(), f.tube().grid(), f.cathode().rail());
+            return sweep(half, List.of(otherGrid), off.nodeVolts().get(pin), on.nodeVolts().get(pin), 0);
+        }
+        return null;
+    }
+
+    /** Gains at the input between {@code from} and {@code to} where the output is halfway between its ends. */
+    private GridGains sweep(TubeStage t, List<Load> loads, double from, double to, double rest) {
+        double vFrom = out(t, loads, from, rest);
+        double vTo = out(t, loads, to, rest);
+        if (!(Math.abs(vTo - vFrom) >= MIN_SWING_VOLTS)) {
+            return null; // no solution, or no logic swing: no transfer curve to take a gain from
+        }
+        double mid = (vFrom + vTo) / 2;
+        double a = from;
+        double b = to;
         for (int i = 0; i < 50; i++) {
             double m = (a + b) / 2;
-            double v = out(t, m, rest);
+            double v = out(t, loads, m, rest);
             if (Double.isNaN(v)) {
-                return Double.NaN;
+                return null;
             }
-            if ((v > mid) == (vLow > mid)) {
+            if ((v > mid) == (vFrom > mid)) {
                 a = m;
             } else {
                 b = m;
             }
         }
         double at = (a + b) / 2;
-        double slope = (out(t, at + PROBE_VOLTS, rest) - out(t, at - PROBE_VOLTS, rest)) / (2 * PROBE_VOLTS);
-        return Math.abs(slope) / gridRatio(t.grid());
-    }
-
-    /** dVgrid/dVin of a grid network with no grid current: the divider's ratio. */
-    static double gridRatio(GridNetwork g) {
-        if (g.seriesOhms() == 0 || !Double.isFinite(g.toBiasOhms())) {
-            return 1;
+        OperatingPoint lo = point(t, inputs(t, at - PROBE_VOLTS, rest), false, loads);
+        OperatingPoint hi = point(t, inputs(t, at + PROBE_VOLTS, rest), false, loads);
+        if (lo == null || hi == null) {
+            return null;
         }
-        return g.toBiasOhms() / (g.seriesOhms() + g.toBiasOhms());
+        String pin = gridPin(t.grid(), hi);
+        double dg = hi.nodeVolts().get(pin) - lo.nodeVolts().get(pin);
+        if (!(Math.abs(dg) > 0)) {
+            return null;
+        }
+        String plate = t.arrangement() == TubeStage.Arrangement.SERIES && t.inputs() > 1 ? "driver.stack0" : "driver.plate";
+        return new GridGains(change(lo, hi, plate) / dg, change(lo, hi, "driver.cathode") / dg);
     }
 
-    private double out(TubeStage t, double first, double rest) {
+    /** The first input's grid pin: after the stopper, else the divider's tap, else the input itself. */
+    private static String gridPin(GridNetwork g, OperatingPoint p) {
+        if (g.stopperOhms() > 0) {
+            return "driver.grid0";
+        }
+        return g.seriesOhms() > 0 ? "driver.tap0" : "driver.in0";
+    }
+
+    /** A node's change between two points; 0 for a node that is not there (it sits on a rail). */
+    private static double change(OperatingPoint lo, OperatingPoint hi, String node) {
+        Double a = lo.nodeVolts().get(node);
+        Double b = hi.nodeVolts().get(node);
+        return a == null || b == null ? 0 : b - a;
+    }
+
+    private static double[] inputs(TubeStage t, double first, double rest) {
         double[] in = new double[t.inputs()];
         java.util.Arrays.fill(in, rest);
         in[0] = first;
-        DcResult r = solver.solve(t, in, false, List.of(), Corner.NOMINAL);
-        return r.solved() ? r.point().outputVolts() : Double.NaN;
+        return in;
+    }
+
+    private double out(TubeStage t, List<Load> loads, double first, double rest) {
+        OperatingPoint p = point(t, inputs(t, first, rest), false, loads);
+        return p == null ? Double.NaN : p.outputVolts();
+    }
+
+    private OperatingPoint point(StageCircuit s, double[] in, boolean stored, List<Load> loads) {
+        DcResult r = solver.solve(s, in, stored, loads, Corner.NOMINAL);
+        return r.solved() ? r.point() : null;
     }
 
     private double[] volts(boolean[] in) {

@@ -36,6 +36,30 @@ class TimingCommandTest {
     }
 
     @Test
+    void aDeclaredGainFarFromTheComputedOneIsWarnedAndMarked(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        // The pump station with its flip-flops made by a stage of its own: the library's circuit plus a
+        // declared gain of 8, which the operating points put near 12.6 (StageDriveTest checks that
+        // figure against A = mu R / (rp + R)): more than 25 % apart, so the report warns.
+        Path demo = Path.of("examples/pumpstation");
+        Files.copy(demo.resolve("decoder.machine"), dir.resolve("decoder.machine"));
+        String text = Files.readString(demo.resolve("pumpstation.machine"))
+                .replace("  latch triode_flipflop\n", "  latch my_flipflop\n")
+                .replace("realize {", "stage my_flipflop : latch {\n  tube 12AU7\n  sections 2\n  fanin 1\n"
+                        + "  load 100 k from bplus\n  grid divider 470 k 560 k to bias\n  setup 2 us\n  gain 8\n}\n\nrealize {");
+        Path machine = dir.resolve("pumpstation.machine");
+        Files.writeString(machine, text);
+        Run r = run("timing", machine.toString(), "--format", "csv");
+        List<String> row = ReportChecks.assertCsv(r.out()).stream()
+                .filter(x -> x.get(0).equals("stage_figures") && x.get(1).equals("my_flipflop")).findFirst().orElseThrow();
+        double gain = Double.parseDouble(row.get(6));
+        assertThat(row.get(7)).isEqualTo("computed");
+        assertThat(row.get(8)).isEqualTo("8");
+        assertThat(Math.abs(8 - gain) / gain).isGreaterThan(0.25);
+        assertThat(run("timing", machine.toString()).out())
+                .containsPattern("warning: stage my_flipflop: declared gain 8.00 is -[0-9]+ % from the computed [0-9.]+");
+    }
+
+    @Test
     void aTooShortPeriodFailsWithExitOne() {
         Run r = run("timing", RC.toString(), "--period", "8.7us");
         assertThat(r.code()).isEqualTo(ExitCodes.CHECK_FAILED);

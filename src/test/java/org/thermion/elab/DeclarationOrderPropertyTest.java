@@ -91,6 +91,53 @@ class DeclarationOrderPropertyTest {
         assertThat(ElaborationTest.count(m, org.thermion.model.GateFn.NOT)).isZero();
     }
 
+    @Test
+    void anInverterNamedOutrightStaysATubeWhateverTheOrder() {
+        // z names the inverter stage on purpose (to drive a lamp line, say); !q beside it is the
+        // flip-flop's free output. Before, whichever of the two came first decided whether z's
+        // tube was folded into the free output when q's latch came last.
+        String before = """
+                module top {
+                  in a
+                  out y, z
+                  y = !q
+                  z = pentode_inverter(q)
+                  latch q on phase 1 = a
+                }
+                machine t { clock { phases 1; period 1 ms }; top top; inputs a; outputs y z }
+                """;
+        String swapped = before.replace("  y = !q\n  z = pentode_inverter(q)\n", "  z = pentode_inverter(q)\n  y = !q\n");
+        String latchFirst = before.replace("  latch q on phase 1 = a\n", "").replace("  y = !q\n", "  latch q on phase 1 = a\n  y = !q\n");
+        for (String text : List.of(before, swapped, latchFirst)) {
+            Machine m = elaborate(ElaborationTest.PARTS + text, text);
+            assertThat(ElaborationTest.count(m, org.thermion.model.GateFn.NOT)).as(text).isEqualTo(1);
+        }
+    }
+
+    @Test
+    void aRepeatedInputSeenOnlyThroughNamesDrivenLaterGoes() {
+        // !n reads n before n is driven; n's own inverter is named outright. Both are one net in
+        // the end, so the AND has two inputs whichever statement comes first.
+        String late = """
+                module top {
+                  in a, b
+                  out y
+                  net n
+                  y = !n & (pentode_inverter(n) & b)
+                  n = a
+                }
+                machine t { top top; inputs a b; outputs y }
+                """;
+        String early = late.replace("  y = !n & (pentode_inverter(n) & b)\n  n = a\n", "  n = a\n  y = !n & (pentode_inverter(n) & b)\n");
+        for (String text : List.of(late, early)) {
+            Machine m = elaborate(ElaborationTest.PARTS + text, text);
+            assertThat(m.netlist().gates()).as(text)
+                    .filteredOn(g -> g.fn() == org.thermion.model.GateFn.AND)
+                    .singleElement().satisfies(g -> assertThat(g.inputs()).hasSize(2));
+            assertThat(ElaborationTest.count(m, org.thermion.model.GateFn.NOT)).as(text).isEqualTo(1);
+        }
+    }
+
     private static Machine load(Path file) {
         Diagnostics d = new Diagnostics();
         Machine m = new Elaborator(new SourceSet(), d).elaborate(file);

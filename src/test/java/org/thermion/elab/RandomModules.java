@@ -73,8 +73,13 @@ final class RandomModules {
     private static String expr(Random r, List<String> leaves, int depth) {
         if (depth == 0 || r.nextInt(3) == 0) {
             String leaf = leaves.get(r.nextInt(leaves.size()));
-            // Inverted reads are what the order used to change: make them common.
-            return r.nextBoolean() ? "!" + leaf : leaf;
+            // Inverted reads are what the order used to change: make them common, and name the
+            // inverter stage outright now and then, beside the operator that picks the same stage.
+            int pick = r.nextInt(5);
+            return pick < 2 ? "!" + leaf : pick == 2 ? "pentode_inverter(" + leaf + ")" : leaf;
+        }
+        if (r.nextInt(6) == 0) {
+            return "pentode_nand2(" + expr(r, leaves, depth - 1) + ", " + expr(r, leaves, depth - 1) + ")";
         }
         String op = new String[]{"&", "|", "^", "==", "&"}[r.nextInt(5)];
         String e = "(" + expr(r, leaves, depth - 1) + " " + op + " " + expr(r, leaves, depth - 1) + ")";
