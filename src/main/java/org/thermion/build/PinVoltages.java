@@ -209,13 +209,14 @@ public final class PinVoltages {
 
     /**
      * The soft starts' thyratrons, fired: every chart is of a machine switched on and warm, so each
-     * bypass has closed (its grid network's input on ground, as the wiring has it).
+     * bypass has closed (its grid network's input on the highest rail, as the wiring has it).
      */
     private void bypasses(Map<Integer, Solved> points) {
         for (int i = 0; i < m.softStarts().size(); i++) {
             Optional<org.thermion.circuit.ThyratronStage> d = SoftStartWiring.driver(m, circuits, m.softStarts().get(i));
             if (d.isPresent()) {
-                DcResult r = solver.solve(d.get(), new double[] {0}, true, List.of(), Corner.NOMINAL);
+                DcResult r = solver.solve(d.get(), new double[] {circuits.rails().highest().volts()}, true, List.of(),
+                        Corner.NOMINAL);
                 points.put(StageKey.softStart(m, i), r instanceof NoDcSolution no
                         ? new Solved(null, "no operating point: " + no.reason()) : new Solved((OperatingPoint) r, null));
             }

@@ -1,7 +1,6 @@
 package org.thermion.build;
 
 import org.thermion.circuit.MachineCircuits;
-import org.thermion.circuit.RailSet;
 import org.thermion.circuit.ThyratronStage;
 import org.thermion.model.BypassTrigger;
 import org.thermion.model.Envelope;
@@ -139,7 +138,7 @@ public final class Rebuild {
     /**
      * The same from the soft starts' descriptions and the circuits of the relay stages they name:
      * the supply and the node behind the resistor; for a thyratron bypass, the plate rail, the grid
-     * network's bias rail, the cathode's rail and ground (the grid network's input). A rail a soft
+     * network's bias rail, the cathode's rail and the highest rail (the grid network's input). A rail a soft
      * start covers for the thyratron's module is met behind that soft start.
      */
     public static Map<String, Set<String>> softStartsExpected(Machine m, MachineCircuits circuits) {
@@ -156,7 +155,7 @@ public final class Rebuild {
                     names.add(seen(m, t.grid().biasRail(), module));
                 }
                 names.add(seen(m, t.cathode().rail(), module));
-                names.add(RailSet.GROUND);
+                names.add(seen(m, circuits.rails().highest().name(), module));
             }
             out.put(s.name(), names);
         }

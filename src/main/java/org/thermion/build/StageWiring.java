@@ -130,7 +130,7 @@ final class StageWiring {
         Instance in = new Instance(key, st, sections, w.boards.of(module), name, driver);
         w.module = module;
         w.place(name, sections);
-        thyratron(in, driver, w.rail(RailSet.GROUND), w.stageLocal(key, name, "plate"), coil);
+        thyratron(in, driver, w.rail(circuits.rails().highest().name()), w.stageLocal(key, name, "plate"), coil);
         w.module = -1;
     }
 

@@ -38,6 +38,17 @@ public record RailSet(Map<String, Rail> rails) {
         return new RailSet(m);
     }
 
+    /**
+     * The most positive rail (the first by name on a tie). A soft start's thyratron takes its
+     * grid network's input from it: the grid then stands above its critical voltage, so the tube
+     * fires as soon as its cathode can emit, which is what "bypass when ... warm" asks.
+     */
+    public Rail highest() {
+        return rails.values().stream()
+                .max(java.util.Comparator.comparingDouble(Rail::volts).thenComparing(Rail::name, java.util.Comparator.reverseOrder()))
+                .orElseThrow();
+    }
+
     /** The rail named, or null. */
     public Rail rail(String name) {
         return rails.get(name);

@@ -103,7 +103,8 @@ final class DriveAnalysis {
 
     /**
      * A soft start's bypass relay on its thyratron stage: the relay block's coil in place of the
-     * stage's load, the tube fired (it fires by warming, not by its grid).
+     * stage's load, the tube unfired and its grid network's input on the highest rail, as the wire
+     * list has it: a grid held below its critical voltage never fires, and the coil gets nothing.
      */
     private LoadDrive softStart(int index, SoftStart s) {
         if (!(s.trigger() instanceof BypassTrigger.ThyratronWarm w)) {
@@ -120,10 +121,12 @@ final class DriveAnalysis {
         ThyratronStage driver = new ThyratronStage(ts.name(), ts.tube(), coil, ts.plateRail(), ts.plateOhms(), ts.grid(),
                 ts.cathode());
         StageSolver solver = circuits.solver();
-        ToDoubleFunction<Corner> onAmps = k -> amps(solver, driver, LOAD, 0, true, k);
+        // unfired at first: with its grid network on the highest rail it must fire by its grid once warm
+        double gridIn = circuits.rails().highest().volts();
+        ToDoubleFunction<Corner> onAmps = k -> amps(solver, driver, LOAD, gridIn, false, k);
         List<Parameter> params = parameters(solver, driver);
         Corner onCorner = WorstCase.worstCorner(params, tolerances, onAmps);
-        NoDcSolution unsolved = unsolved(solver, driver, 0, true);
+        NoDcSolution unsolved = unsolved(solver, driver, gridIn, false);
         return new LoadDrive(null, index, s.name(), st.name(), LoadDrive.Kind.COIL, onAmps.applyAsDouble(Corner.NOMINAL),
                 onAmps.applyAsDouble(onCorner), onCorner, Double.NaN, Double.NaN, Corner.NOMINAL, coil.pickupAmps(),
                 Double.NaN, coil.ohms(), r.ratedVolts(), false, unsolved);

@@ -27,6 +27,8 @@ import org.thermion.power.HeaterAnalysis;
  * rating at the rail's voltage under the machine's heaviest static load (common practice).
  */
 public final class ElectricalCheck {
+    /** Below this a fired thyratron's coil current is the solver's leakage: the tube did not fire. */
+    private static final double NEVER_FIRED_AMPS = 1e-6;
     /** A lamp is judged within ± this share of its rated current (common practice). */
     public static final int LAMP_BAND_PERCENT = 10;
     /** A relay coil held continuously above its rated voltage by more than this share runs hot (common practice). */
@@ -151,6 +153,10 @@ public final class ElectricalCheck {
                 fix = "a cathode follower gives its load at most the grid's swing less the grid-to-cathode voltage: put "
                         + "the coil in the plate circuit of a stage that cuts off and saturates, or use a coil that picks "
                         + "up at " + ma(d.onWorstAmps() * 0.9) + " or less";
+            } else if (d.use() == null && d.onWorstAmps() < NEVER_FIRED_AMPS) {
+                fix = "its thyratron never fires: stage " + d.stage() + "'s grid network (input on the highest rail, as "
+                        + "the wire list wires it) holds the grid below its critical voltage; raise the grid with a "
+                        + "smaller series resistor or a larger one to the bias rail";
             } else if (d.use() == null) {
                 fix = "a smaller `series` plate resistor in stage " + d.stage() + ", a coil of lower pick-up voltage, or a "
                         + "higher rail";

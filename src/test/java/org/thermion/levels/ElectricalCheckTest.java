@@ -244,6 +244,29 @@ class ElectricalCheckTest {
         });
     }
 
+    @Test
+    void aSoftStartsThyratronWhoseGridCanNeverReachItsCriticalVoltageIsAnError() {
+        // The grid network hangs from the highest rail (bplus, 48 V) as the wire list wires it:
+        // 100 k to it and 10 k to the -24 V bias put the grid at (48 * 10 k - 24 * 100 k) / 110 k
+        // = -17.5 V (voltage divider), far below the 2D21's critical -24 V / 250 = -0.10 V
+        // (control ratio 250, the library's source); it never fires, so its coil gets nothing.
+        String dead = softStart("coil 160 ohm; rated 12 V; pickup 8 V")
+                .replace("  series 100 ohm\n", "  series 100 ohm\n  grid divider 100 k 10 k to bias\n");
+        LevelAnalysisTest.Loaded l = LevelAnalysisTest.load(dead);
+        LevelAnalysis a = LevelAnalysis.of(l.machine(), l.where().margins());
+        LoadDrive bypass = a.drives().stream().filter(d -> d.softStart() == 0).findFirst().orElseThrow();
+        assertThat(bypass.onAmps()).isLessThan(1e-9); // the solver's leakage only
+        assertThat(ElectricalCheck.findings(l.machine(), a)).singleElement().satisfies(x -> {
+            assertThat(x.error()).isTrue();
+            assertThat(x.kind()).isEqualTo("coil");
+            assertThat(x.message()).contains("soft start 'heater_soft'", "gets 0.00 mA");
+            assertThat(x.fix()).contains("its thyratron never fires", "below its critical voltage");
+        });
+        // 100 k and 100 k: (48 - 24) / 2 = +12 V on the grid, above critical: it fires, as in the test above
+        String live = dead.replace("grid divider 100 k 10 k to bias", "grid divider 100 k 100 k to bias");
+        assertThat(findings(live)).isEmpty();
+    }
+
     static String thyratronRelay(String load) {
         return board("rail bplus { voltage 48 V }\n", """
                 stage bench_thyratron : relay {
