@@ -46,6 +46,19 @@ class PartsTest {
     }
 
     @Test
+    void libraryThyratronRelayFiresWhereItsControlRatioPutsTheCriticalGrid() {
+        // 100 k / 100 k from the input to the -12 V bias rail: grid = (Vin - 12) / 2. On the 24 V relay rail the
+        // critical grid is -24/250 = -0.096 V (control ratio 250, r-type.org EN91 page): it fires above an input of
+        // 11.81 V (Ohm's law). An 11 V input leaves the grid at -0.5 V, which the old fixed -4 V would have fired.
+        OperatingPoint off = solver.solve(lib.get("thyratron_relay"), new double[] {11}, false, List.of(),
+                Corner.NOMINAL).point();
+        OperatingPoint on = solver.solve(lib.get("thyratron_relay"), new double[] {12.5}, false, List.of(),
+                Corner.NOMINAL).point();
+        assertThat(off.partAmps("driver.load")).isCloseTo(0, within(1e-9));
+        assertThat(on.partAmps("driver.load")).isCloseTo(16.0 / 213, within(0.5e-3));
+    }
+
+    @Test
     void absurdValuesAreRefusedAtConstruction() {
         assertThatThrownBy(() -> new LoadResistor(Double.NaN)).hasMessageContaining("load ohms");
         assertThatThrownBy(() -> new LoadResistor(-1)).hasMessageContaining("load ohms");
