@@ -90,9 +90,9 @@ final class DiagnoseCommand extends ReportCommand {
         }
         Diagnosis d = new Diagnosis(sim, in.faults(), steps);
         List<Diagnosis.Suspect> ranked = d.rank(seen, Diagnosis.stepsReached(seen));
-        List<Diagnosis.Suspect> leading = ranked.stream().filter(s -> s.rank() == ranked.get(0).rank()).toList();
-        Step next = d.nextStep(leading, Effort.DEFAULT);
-        List<Diagnosis.Reading> readings = next == null ? List.of() : d.readings(leading, next);
+        Diagnosis.Proposal proposal = d.propose(ranked, top, Effort.DEFAULT);
+        Step next = proposal.step();
+        List<Diagnosis.Reading> readings = next == null ? List.of() : d.readings(proposal.candidates(), next);
         DiagnoseReport report = new DiagnoseReport(in, seenFile, steps, seen, ranked, top, next, readings);
         format.write(out, report.report());
         out.flush();

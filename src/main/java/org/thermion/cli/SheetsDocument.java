@@ -17,7 +17,7 @@ import java.util.concurrent.Callable;
  */
 abstract class SheetsDocument implements Callable<Integer> {
     /** Raised with any key of any selection: they share one schema, {@code sheets.schema.json}. */
-    static final int VERSION = 6;
+    static final int VERSION = 7;
 
     @Mixin
     SheetsOptions options;

@@ -2,6 +2,7 @@ package org.thermion.cli;
 
 import org.thermion.build.BuildDocuments;
 import org.thermion.build.PartsList;
+import org.thermion.cli.report.Numbers;
 import org.thermion.cli.report.Report;
 import org.thermion.cli.report.Table;
 import org.thermion.model.Machine;
@@ -65,14 +66,14 @@ final class SheetsParts extends SheetsDocument {
         PartsList list = PartsList.of(docs.wiring(), diodes, spares, derating);
         int budget = new TubeCount(m).total();
         failed = list.tubesUsed() != budget || list.tubesUsed() != m.envelopes().size();
-        Table t = new Table("parts", "Parts to order")
-                .column("item", "item", TEXT).column("type", "type", TEXT).column("value", "value", OHMS)
-                .column("rating", "rating", WATTS).column("dissipation", "max", WATTS,
-                        "the most one of them dissipates (operating points; a rail-span bound where none solved)")
-                .column("used", "used", COUNT).column("spares", "spare", COUNT).column("order", "order", COUNT);
+        Table t = partsTable(OHMS, WATTS);
+        // for people each value carries its own unit: one scale for 0.2 ohm and 2.2 Mohm would print 0.000
+        Table view = partsTable(TEXT, TEXT);
         for (PartsList.Row r : list.rows()) {
             t.row(r.item(), r.type(), SheetsHeaters.num(r.ohms()), SheetsHeaters.num(r.ratedWatts()),
                     SheetsHeaters.num(r.maxWatts()), r.used(), r.spares(), r.order());
+            view.row(r.item(), r.type(), ohms(r.ohms()), watts(r.ratedWatts()), watts(r.maxWatts()), r.used(), r.spares(),
+                    r.order());
         }
         Report rep = start(m, "parts")
                 .field("tubes", list.tubesUsed())
@@ -80,12 +81,38 @@ final class SheetsParts extends SheetsDocument {
                 .field("envelopes", m.envelopes().size())
                 .field("spare_percent", PERCENT, spares)
                 .field("derating", NUMBER, derating)
-                .table(t);
+                .view(view).data(t);
         if (failed) {
             rep.text("check: the parts list has " + list.tubesUsed() + " tubes, the packing " + m.envelopes().size()
                     + " envelopes and budget " + budget + " tubes; they must agree");
         }
         return rep;
+    }
+
+    /** The parts table with its value and wattage columns in {@code value}, {@code watts} (numbers for tools, text for people). */
+    private static Table partsTable(org.thermion.cli.report.ReportUnit value, org.thermion.cli.report.ReportUnit watts) {
+        return new Table("parts", "Parts to order")
+                .column("item", "item", TEXT).column("type", "type", TEXT).column("value", "value", value)
+                .column("rating", "rating", watts).column("dissipation", "max", watts,
+                        "the most one of them dissipates (operating points; a rail-span bound where none solved)")
+                .column("used", "used", COUNT).column("spares", "spare", COUNT).column("order", "order", COUNT);
+    }
+
+    /** Ohms for people: an SI prefix from 1 ohm up, three significant figures below ("0.2 ohm", "47.0 kohm"). */
+    static String ohms(double v) {
+        if (Double.isNaN(v)) {
+            return "none";
+        }
+        return v >= 1 ? Numbers.si(v, OHMS) : figures(v) + " ohm";
+    }
+
+    /** Watts for people, three significant figures ("0.125 W", "200 W"). */
+    static String watts(double v) {
+        return Double.isNaN(v) ? "none" : figures(v) + " W";
+    }
+
+    private static String figures(double v) {
+        return v == 0 ? "0" : new java.math.BigDecimal(v).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString();
     }
 
     @Override

@@ -3,6 +3,7 @@ package org.thermion.cli;
 import org.thermion.build.BuildDocuments;
 import org.thermion.build.Lead;
 import org.thermion.build.Node;
+import org.thermion.build.Part;
 import org.thermion.build.WireChecks;
 import org.thermion.build.Wiring;
 import org.thermion.cli.report.Report;
@@ -12,7 +13,10 @@ import picocli.CommandLine.Command;
 
 import java.io.PrintWriter;
 import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 import static org.thermion.cli.report.ReportUnit.FLAG;
 import static org.thermion.cli.report.ReportUnit.TEXT;
@@ -33,17 +37,27 @@ final class SheetsWires extends SheetsDocument {
         List<String> checks = WireChecks.run(m, w);
         failed = !checks.isEmpty();
         Table data = new Table("leads", "Leads")
-                .column("node", "node", TEXT).column("kind", "kind", TEXT).column("part", "part", TEXT)
+                .column("node", "node", TEXT).column("kind", "kind", TEXT)
+                .column("board", "board", TEXT, "the board the part sits on (its designator's A prefix)")
+                .column("part", "part", TEXT)
                 .column("pin", "pin", TEXT).column("what", "what", TEXT)
                 .column("doubtful", "doubt", FLAG, "the pin depends on a basing whose sources disagree");
         Table view = new Table("nets", "Nets")
                 .column("node", "net", TEXT).column("kind", "kind", TEXT)
-                .column("leads", "pins and leads", TEXT, "part-pin; ! = depends on a basing doubt");
+                .column("leads", "pins and leads", TEXT, "part-pin, board by board; ! = depends on a basing doubt");
+        Map<String, Integer> boardOf = new HashMap<>();
+        for (Part p : w.parts()) {
+            boardOf.put(p.ref(), p.board());
+        }
         int doubtful = 0;
         for (Node n : w.nodes()) {
             List<String> labels = new ArrayList<>();
-            for (Lead l : n.leads()) {
-                data.row(n.name(), kind(n), l.ref(), l.pin(), l.what(), l.doubtful());
+            // a net's leads board by board, so each board's wiring of it reads together
+            List<Lead> leads = new ArrayList<>(n.leads());
+            leads.sort(Comparator.comparingInt(l -> boardOf.getOrDefault(l.ref(), 0)));
+            for (Lead l : leads) {
+                data.row(n.name(), kind(n), w.boards().get(boardOf.getOrDefault(l.ref(), 0)), l.ref(), l.pin(), l.what(),
+                        l.doubtful());
                 labels.add(l.label() + (l.doubtful() ? "!" : ""));
                 doubtful += l.doubtful() ? 1 : 0;
             }

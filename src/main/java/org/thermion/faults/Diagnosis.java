@@ -13,9 +13,9 @@ import java.util.Map;
  * whose lamps agree at every step cannot be told apart by it and form one class (the class
  * that looks like the good machine is "no fault seen"). Given what the builder saw (a lamp
  * may be left blank), classes are ranked by the lamps they contradict, then by the lamps they
- * cannot predict (unknown where something was seen), then by the lamps they predict that were
- * left blank (before the step the builder has got to): exact matches
- * first, then the nearest,
+ * cannot predict (unknown where something was seen), a contradicted lamp weighing as two
+ * unpredicted ones, then by the lamps they contradict, then by the lamps they predict that were left blank (before the step the builder
+ * has got to): exact matches first, then the nearest,
  * so two faults at once or a fault outside the model still point somewhere. Equal scores
  * share a rank.
  */
@@ -149,8 +149,12 @@ public final class Diagnosis {
                 scored.add(new Suspect(0, bad, unknown, unchecked, k.members(), k.looksGood()));
             }
         }
-        scored.sort(Comparator.comparingInt(Suspect::contradicted).thenComparingInt(Suspect::unpredicted)
-                .thenComparingInt(Suspect::unchecked));
+        // Nearest = least unlikely: a lamp left unpredictable matches half the time, a wrong one only
+        // if a second fault or one outside the model is at work, so a wrong lamp weighs as two
+        // unpredictable ones. A class that predicts nothing (a bridge whose drivers fight)
+        // contradicts nothing, yet must not lead a near match on that alone.
+        scored.sort(Comparator.comparingInt((Suspect s) -> 2 * s.contradicted() + s.unpredicted())
+                .thenComparingInt(Suspect::contradicted).thenComparingInt(Suspect::unchecked));
         List<Suspect> out = new ArrayList<>(scored.size());
         int rank = 0;
         for (int i = 0; i < scored.size(); i++) {
@@ -186,15 +190,39 @@ public final class Diagnosis {
      */
     public Step nextStep(List<Suspect> suspects, Effort effort) {
         List<Fault> pool = new ArrayList<>();
-        List<Integer> group = new ArrayList<>();
-        for (int i = 0; i < suspects.size(); i++) {
-            for (Fault f : suspects.get(i).members()) {
-                pool.add(f);
-                group.add(0);
-            }
+        for (Suspect s : suspects) {
+            pool.addAll(s.members());
         }
-        Choice c = bestSplit(pool, group, effort);
+        Choice c = bestSplit(sim, steps, pool, new long[pool.size()], effort);
         return c == null ? null : c.step;
+    }
+
+    /** A step to take next and the ranked classes it is meant to tell apart. */
+    public record Proposal(Step step, List<Suspect> candidates) {
+        public Proposal {
+            candidates = List.copyOf(candidates);
+        }
+    }
+
+    /**
+     * The next step for a builder holding {@code ranked} (from {@link #rank}): the one that best splits
+     * the classes sharing the first rank; when those cannot be split (one class alone, or faults no
+     * step after the plan tells apart), the one that best splits the first {@code widest} classes, so a
+     * near match (two faults at once) is still told from its neighbours. The step is null only when no
+     * step after the plan tells any of those candidates apart.
+     */
+    public Proposal propose(List<Suspect> ranked, int widest, Effort effort) {
+        if (ranked.isEmpty()) {
+            return new Proposal(null, List.of());
+        }
+        List<Suspect> leading = ranked.stream().filter(s -> s.rank() == ranked.get(0).rank()).toList();
+        Step step = nextStep(leading, effort);
+        if (step != null) {
+            return new Proposal(step, leading);
+        }
+        List<Suspect> wide = ranked.subList(0, Math.min(ranked.size(), Math.max(widest, leading.size())));
+        step = wide.size() > leading.size() ? nextStep(wide, effort) : null;
+        return step != null ? new Proposal(step, wide) : new Proposal(null, leading);
     }
 
     /**
@@ -258,11 +286,12 @@ public final class Diagnosis {
         return out;
     }
 
+    /** A step to add and its score (sum of squared group sizes after it). */
     private record Choice(Step step, long score) {
     }
 
-    // Scores every (setting, cycles) after the plan by the sum of squares of the groups it leaves.
-    private Choice bestSplit(List<Fault> pool, List<Integer> group, Effort effort) {
+    // Scores every (setting, cycles) after {@code steps} by the sum of squares of the groups it leaves.
+    private static Choice bestSplit(FaultSimulator sim, List<Step> steps, List<Fault> pool, long[] group, Effort effort) {
         if (pool.size() < 2) {
             return null;
         }
@@ -282,18 +311,18 @@ public final class Diagnosis {
                 for (int k = 0; k < cycles; k++) {
                     scratch.clock(1);
                     for (int l = 0; l < n; l++) {
-                        sig[s][k][base + l] = signature(scratch, l);
+                        sig[s][k][base + l] = signature(sim.circuit(), scratch, l);
                     }
                 }
             }
         });
-        long before = squares(group.stream().mapToLong(g -> g).toArray());
+        long before = squares(group);
         Choice best = null;
         for (int k = 0; k < cycles; k++) {
             for (int s = 0; s < ns; s++) {
                 long[] keys = new long[pool.size()];
                 for (int i = 0; i < keys.length; i++) {
-                    keys[i] = sig[s][k][i] * 1_000_003L + group.get(i);
+                    keys[i] = sig[s][k][i] * 1_000_003L + group[i];
                 }
                 long score = squares(keys);
                 if (score < before && (best == null || score < best.score)) {
@@ -304,9 +333,9 @@ public final class Diagnosis {
         return best;
     }
 
-    private long signature(LaneMachine m, int lane) {
+    private static long signature(FaultCircuit c, LaneMachine m, int lane) {
         long h = 1469598103934665603L;
-        for (ObservedLamp lamp : sim.circuit().lamps()) {
+        for (ObservedLamp lamp : c.lamps()) {
             h = (h ^ FaultSimulator.reading(m, lamp.slot(), lane)) * 1099511628211L;
         }
         return h;
@@ -334,22 +363,23 @@ public final class Diagnosis {
     public static List<Step> extend(FaultSimulator sim, FaultList faults, List<Step> plan, int most, Effort effort) {
         List<Step> steps = new ArrayList<>(plan);
         while (steps.size() < effort.maxSteps()) {
+            // Every class afresh: a fault that looked good may show itself at the new step and join a large class.
             Diagnosis d = new Diagnosis(sim, faults, steps);
             List<Fault> pool = new ArrayList<>();
-            List<Integer> group = new ArrayList<>();
+            List<Long> group = new ArrayList<>();
             for (int c = 0; c < d.classes.size(); c++) {
                 Suspect s = d.classes.get(c);
                 if (!s.looksGood() && size(faults, s) > most) {
                     for (Fault f : s.members()) {
                         pool.add(f);
-                        group.add(c);
+                        group.add((long) c);
                     }
                 }
             }
             if (pool.isEmpty()) {
                 break;
             }
-            Choice c = d.bestSplit(pool, group, effort);
+            Choice c = bestSplit(sim, steps, pool, group.stream().mapToLong(Long::longValue).toArray(), effort);
             if (c == null) {
                 break;
             }

@@ -174,12 +174,17 @@ public record Separation(List<Step> steps, List<Alike> alike, List<long[]> writt
                 int at = k;
                 jobs.add(() -> {
                     Fault a = cls.get(0);
-                    for (Fault b : cls.subList(1, cls.size())) {
+                    // The group's machines after the steps, 64 to a batch: each simulated once, not once a pair.
+                    LaneMachine[] batch = new LaneMachine[(cls.size() + LaneMachine.LANES - 1) / LaneMachine.LANES];
+                    for (int i = 1; i < cls.size(); i++) {
+                        Fault b = cls.get(i);
                         long key = (long) a.id() << 32 | b.id();
                         if (settled.contains(key)) {
                             continue;
                         }
-                        StateSearch.Result r = search.tellApart(a, after(sim, a, now), b, after(sim, b, now));
+                        LaneMachine withA = after(sim, cls, 0, batch, now);
+                        LaneMachine withB = after(sim, cls, i, batch, now);
+                        StateSearch.Result r = search.tellApart(a, withA, 0, b, withB, i % LaneMachine.LANES);
                         if (r.end() == StateSearch.End.FOUND) {
                             found.set(at, r.cycles());
                             return null;
@@ -207,12 +212,18 @@ public record Separation(List<Step> steps, List<Alike> alike, List<long[]> writt
         }
     }
 
-    private static LaneMachine after(FaultSimulator sim, Fault f, List<Step> steps) {
-        LaneMachine m = sim.loaded(List.of(f), 0, 1);
-        for (Step s : steps) {
-            FaultSimulator.apply(m, s);
+    // The machine carrying cls[i] (on lane i % 64) after the steps, made when first asked for.
+    private static LaneMachine after(FaultSimulator sim, List<Fault> cls, int i, LaneMachine[] batch, List<Step> steps) {
+        int k = i / LaneMachine.LANES;
+        if (batch[k] == null) {
+            int from = k * LaneMachine.LANES;
+            LaneMachine m = sim.loaded(cls, from, Math.min(LaneMachine.LANES, cls.size() - from));
+            for (Step s : steps) {
+                FaultSimulator.apply(m, s);
+            }
+            batch[k] = m;
         }
-        return m;
+        return batch[k];
     }
 
     // The net whose readings after each step part the class best (fewest pairs left together);

@@ -89,7 +89,12 @@ final class StateSearch {
      * start): FOUND with the settings, EXHAUSTED when no run of cycles ever can.
      */
     Result tellApart(Fault a, LaneMachine withA, Fault b, LaneMachine withB) {
-        return search(b, withA, 0, withB, 0, null, null, false, a);
+        return tellApart(a, withA, 0, b, withB, 0);
+    }
+
+    /** As {@link #tellApart(Fault, LaneMachine, Fault, LaneMachine)} from lane {@code la} of {@code withA}, {@code lb} of {@code withB}. */
+    Result tellApart(Fault a, LaneMachine withA, int la, Fault b, LaneMachine withB, int lb) {
+        return search(b, withA, la, withB, lb, null, null, false, a);
     }
 
     /**

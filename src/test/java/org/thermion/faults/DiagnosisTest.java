@@ -57,6 +57,48 @@ class DiagnosisTest {
     }
 
     @Test
+    void twoStuckWiresAtOnceOnC17AlwaysGetANextStepThatSplitsTheCandidates() {
+        // Every pair of c17's stuck-at faults seeded together (the reference simulator forcing both): no
+        // single fault explains most of them, yet the builder is always told what to set next.
+        FaultCircuit c = FaultCircuit.of(Bench.c17());
+        FaultList faults = FaultList.of(c, SocketPins.of(Bench.c17()));
+        OneFaultSimulator ref = new OneFaultSimulator(c, null);
+        try (FaultSimulator sim = new FaultSimulator(c, null, 1)) {
+            Plan plan = new PlanGenerator(sim, faults, Effort.DEFAULT).generate();
+            Diagnosis d = new Diagnosis(sim, faults, plan.steps());
+            List<Fault> stuck = faults.all().stream()
+                    .filter(f -> f.kind() == FaultKind.STUCK_AT_0 || f.kind() == FaultKind.STUCK_AT_1).toList();
+            int lamps = c.lamps().size();
+            int seeded = 0;
+            int silentFirst = 0;
+            for (int i = 0; i < stuck.size(); i++) {
+                for (int j = i + 1; j < stuck.size(); j++) {
+                    List<Force> both = new java.util.ArrayList<>(stuck.get(i).forces());
+                    both.addAll(stuck.get(j).forces());
+                    byte[] r = ref.run(new Fault(-1, FaultKind.STUCK_AT_0, 0, both), plan.steps());
+                    byte[][] seen = new byte[plan.steps().size()][lamps];
+                    for (int k = 0; k < r.length; k++) {
+                        seen[k / lamps][k % lamps] = r[k] == FaultSimulator.UNKNOWN ? Diagnosis.BLANK : r[k];
+                    }
+                    List<Diagnosis.Suspect> ranked = d.rank(seen);
+                    if (ranked.get(0).looksGood() && ranked.get(0).contradicted() == 0) {
+                        continue; // the pair masks itself along the plan
+                    }
+                    seeded++;
+                    // A class that predicts none of the lamps seen is never nearer than one that predicts some.
+                    Diagnosis.Suspect first = ranked.get(0);
+                    silentFirst += first.unpredicted() > 0 && first.contradicted() == 0 ? 1 : 0;
+                    Diagnosis.Proposal p = d.propose(ranked, 8, Effort.DEFAULT);
+                    assertThat(p.step()).as("%s with %s: next step", stuck.get(i), stuck.get(j)).isNotNull();
+                    assertThat(d.readings(p.candidates(), p.step())).as("the step splits its candidates").hasSizeGreaterThan(1);
+                }
+            }
+            assertThat(seeded).isPositive();
+            System.out.println("c17 two faults: " + seeded + " pairs seen, " + silentFirst + " led by a class that cannot predict a lamp");
+        }
+    }
+
+    @Test
     void aStuckLampWithHalfTheObservationsMissingStillRanksFirstAndTheNextStepSplitsTheTies() {
         FaultCircuit c = FaultCircuit.of(Bench.c17());
         FaultList faults = FaultList.of(c);
