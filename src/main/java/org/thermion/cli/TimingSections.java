@@ -51,7 +51,7 @@ final class TimingSections {
                 .column("gain", "gain", NUMBER, "Miller gain |dVout/dVgrid| of a triode input: to the plate, or to the cathode of a follower")
                 .column("gain_basis", "gain from", TEXT, "computed at the operating point, declared in the block, or the default")
                 .column("declared_gain", "decl. gain", NUMBER, "the gain the block states")
-                .column("input_farads", "input C", FARADS, "one input's capacitance with the Miller effect: Cgk (1 - Ak) + Cgp (1 - Ap) for a triode, else cin")
+                .column("input_farads", "input C", FARADS, "one input's capacitance with the Miller effect: per grid Cgk (1 - Ak) + Cgp (1 - Ap) for a triode, else cin; times the sections the input drives")
                 .column("note", "note", TEXT);
         List<String> warnings = new ArrayList<>();
         Set<Integer> used = new LinkedHashSet<>();

@@ -5,6 +5,7 @@ import org.thermion.circuit.Load;
 import org.thermion.circuit.MachineCircuits;
 import org.thermion.circuit.StageCircuit;
 import org.thermion.circuit.Tolerances;
+import org.thermion.circuit.TubeStage;
 import org.thermion.model.Gate;
 import org.thermion.model.Latch;
 import org.thermion.model.Machine;
@@ -167,9 +168,14 @@ public final class DelayCalculator {
         return c != null && !Double.isNaN(drive.millerGain(c));
     }
 
-    /** The capacitance one input of {@code st} puts on the net that drives it (Miller effect included). */
+    /**
+     * The capacitance one input of {@code st} puts on the net that drives it (Miller effect included):
+     * one grid's, times the sections that input drives together (a lamp or relay driver's pair).
+     */
     public double inputFarads(StageType st) {
-        return Capacitance.input(tube(st), gains(st));
+        StageCircuit c = circuit(st);
+        int grids = c instanceof TubeStage t ? t.sectionsPerInput() : 1;
+        return grids * Capacitance.input(tube(st), gains(st));
     }
 
     /** Stage-type indices of the stage inputs a net drives (-1 for off-board pins such as the PC). */

@@ -165,6 +165,10 @@ class StageDriveTest {
         double b = calc.gain(ff);
         assertThat(calc.gainComputed(ff)).isTrue();
         assertThat(calc.inputFarads(ff)).isCloseTo(1.6e-12 + 1.5e-12 * (1 + b), within(1e-18));
+        // The lamp driver's input drives both sections' grids at once: twice one grid's.
+        org.thermion.model.StageType lamp = stage(m, "lamp_driver");
+        double c = calc.gain(lamp);
+        assertThat(calc.inputFarads(lamp)).isCloseTo(2 * (1.6e-12 + 1.5e-12 * (1 + c)), within(1e-18));
     }
 
     private static org.thermion.model.StageType stage(org.thermion.model.Machine m, String name) {
