@@ -1,8 +1,6 @@
 package org.thermion.build;
 
 import org.thermion.circuit.MachineCircuits;
-import org.thermion.circuit.RelayCoil;
-import org.thermion.circuit.StageCircuit;
 import org.thermion.circuit.ThyratronStage;
 import org.thermion.model.BypassTrigger;
 import org.thermion.model.Envelope;
@@ -79,18 +77,7 @@ final class SoftStartWiring {
      * thyratron circuit.
      */
     static Optional<ThyratronStage> driver(Machine m, MachineCircuits circuits, SoftStart s) {
-        if (!(s.trigger() instanceof BypassTrigger.ThyratronWarm tw)) {
-            return Optional.empty();
-        }
-        Optional<StageCircuit> c = circuits.circuit(m.stages().get(tw.stage()));
-        if (c.isEmpty() || !(c.get() instanceof ThyratronStage ts)) {
-            return Optional.empty();
-        }
-        Relay r = s.relay();
-        RelayCoil coil = new RelayCoil(r.coilOhms(), r.pickupVolts() / r.coilOhms(),
-                Math.min(r.dropoutVolts(), r.pickupVolts()) / r.coilOhms());
-        return Optional.of(new ThyratronStage(ts.name(), ts.tube(), coil, ts.plateRail(), ts.plateOhms(), ts.grid(),
-                ts.cathode()));
+        return circuits.softStartDriver(s);
     }
 
     /** The soft start on rail {@code rail} that covers module instance {@code module}, or null. */

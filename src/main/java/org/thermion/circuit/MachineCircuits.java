@@ -4,7 +4,10 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
 
+import org.thermion.model.BypassTrigger;
 import org.thermion.model.Machine;
+import org.thermion.model.Relay;
+import org.thermion.model.SoftStart;
 import org.thermion.model.StageType;
 
 /**
@@ -50,6 +53,23 @@ public final class MachineCircuits {
     /** The circuit of a stage type, empty when the stage has none (a declared-current stage). */
     public Optional<StageCircuit> circuit(StageType stage) {
         return Optional.ofNullable(byStage.get(stage.name()));
+    }
+
+    /**
+     * The circuit that drives soft start {@code s}'s bypass: its thyratron relay stage with the
+     * soft start's relay coil as the plate load; empty for a delay bypass or a stage without a
+     * thyratron circuit. Its grid network's input is on {@link RailSet#highest()}.
+     */
+    public Optional<ThyratronStage> softStartDriver(SoftStart s) {
+        if (!(s.trigger() instanceof BypassTrigger.ThyratronWarm tw)
+                || !(byStage.get(machine.stages().get(tw.stage()).name()) instanceof ThyratronStage ts)) {
+            return Optional.empty();
+        }
+        Relay r = s.relay();
+        RelayCoil coil = new RelayCoil(r.coilOhms(), r.pickupVolts() / r.coilOhms(),
+                Math.min(r.dropoutVolts(), r.pickupVolts()) / r.coilOhms());
+        return Optional.of(new ThyratronStage(ts.name(), ts.tube(), coil, ts.plateRail(), ts.plateOhms(), ts.grid(),
+                ts.cathode()));
     }
 
     /** Every stage type's circuit by stage name, in declaration order. */

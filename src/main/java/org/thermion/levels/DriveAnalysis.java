@@ -111,15 +111,13 @@ final class DriveAnalysis {
             return null;
         }
         StageType st = machine.stages().get(w.stage());
-        Optional<StageCircuit> c = circuits.circuit(st);
-        if (c.isEmpty() || !(c.get() instanceof ThyratronStage ts)) {
+        Optional<ThyratronStage> found = circuits.softStartDriver(s);
+        if (found.isEmpty()) {
             return null;
         }
+        ThyratronStage driver = found.get();
+        RelayCoil coil = (RelayCoil) driver.load();
         Relay r = s.relay();
-        RelayCoil coil = new RelayCoil(r.coilOhms(), r.pickupVolts() / r.coilOhms(),
-                Math.min(r.dropoutVolts(), r.pickupVolts()) / r.coilOhms());
-        ThyratronStage driver = new ThyratronStage(ts.name(), ts.tube(), coil, ts.plateRail(), ts.plateOhms(), ts.grid(),
-                ts.cathode());
         StageSolver solver = circuits.solver();
         // unfired at first: with its grid network on the highest rail it must fire by its grid once warm
         double gridIn = circuits.rails().highest().volts();

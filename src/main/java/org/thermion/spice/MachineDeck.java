@@ -8,8 +8,10 @@ import org.thermion.circuit.RailSet;
 import org.thermion.circuit.StageCircuit;
 import org.thermion.circuit.StageNetlist;
 import org.thermion.circuit.StageSolver;
+import org.thermion.circuit.ThyratronStage;
 import org.thermion.circuit.TubeStage;
 import org.thermion.circuit.DiodeGate;
+import org.thermion.model.BuiltBlock;
 import org.thermion.model.Gate;
 import org.thermion.model.GateFn;
 import org.thermion.model.Latch;
@@ -17,6 +19,7 @@ import org.thermion.model.Machine;
 import org.thermion.model.ModuleInstance;
 import org.thermion.model.Netlist;
 import org.thermion.model.Rail;
+import org.thermion.model.SoftStart;
 import org.thermion.model.StageType;
 import org.thermion.model.TubeType;
 
@@ -36,7 +39,8 @@ import java.util.function.Function;
  * "TAG_NODE" (TAG "g12" for gate 12, "l3" for latch 3). Wires (free buffers) join their nets; a
  * flip-flop's complement is its second plate. Nets driven from outside the selection, by a stage
  * without a circuit, or by the constants are held by DC sources at the logic levels (0 V, and the
- * highest rail for 1). Thyratrons are written unfired; a flip-flop's state is the simulator's
+ * highest rail for 1). For the whole machine, each soft start's bypass thyratron is written too,
+ * and built blocks (stated stages, no netlist) are named in a note. Thyratrons are written unfired; a flip-flop's state is the simulator's
  * choice. Stage circuits with fewer inputs than their gate drive the first ones; surplus circuit
  * inputs are held at the level that leaves the others in control.
  */
@@ -123,6 +127,13 @@ public final class MachineDeck {
                         + nl.netName(g.output()), g.stage(), g.inputs(), g.output(), g.fn(), instances, driven, notes);
             }
         }
+        boolean whole = path == null || path.isEmpty();
+        for (int i = 0; whole && i < machine.softStarts().size(); i++) {
+            softStart(parts, i, instances);
+        }
+        for (BuiltBlock b : whole ? machine.built() : List.<BuiltBlock>of()) {
+            notes.add(b.what() + " (" + b.block() + "): a built block known by its stated stages, not by a netlist; not written");
+        }
         for (String n : notes) {
             w.note(n);
         }
@@ -200,6 +211,34 @@ public final class MachineDeck {
         for (int i : surplus) {
             w.add(new SpiceCard.VoltageSource(w.name('V', tag, "unused"), names.get(i), "0", keep));
         }
+        w.parts(sn, names::get, tag, StageDeck.ROLE);
+        instances.add(new Instance(tag, what, sn, names));
+    }
+
+    /**
+     * Soft start {@code index}'s bypass thyratron, unfired, its relay coil as the plate load and
+     * its grid network's input on the highest rail, as the wire list wires it ("sK" nodes).
+     */
+    private void softStart(SpiceWriter w, int index, List<Instance> instances) {
+        SoftStart s = machine.softStarts().get(index);
+        ThyratronStage d = circuits.softStartDriver(s).orElse(null);
+        if (d == null) {
+            return;
+        }
+        String tag = "s" + index;
+        StageNetlist sn = circuits.solver().netlist(StageSolver.DRIVER, d, new double[d.inputs()], false, List.of(),
+                Corner.NOMINAL);
+        List<String> local = StageDeck.nodeNames(sn);
+        String gridSupply = SpiceNames.clean(circuits.rails().highest().name());
+        List<String> names = new ArrayList<>();
+        for (int i = 0; i < sn.nodes().size(); i++) {
+            String n = sn.nodes().get(i);
+            names.add(inputPin(n) == 0 ? gridSupply : n.startsWith("rail ") ? local.get(i) : tag + "_" + local.get(i));
+        }
+        String what = "soft start " + s.name() + "'s bypass";
+        w.note("");
+        w.note(tag + ": " + what + " (stage " + d.name() + ", its relay coil as the plate load, the grid network from rail "
+                + circuits.rails().highest().name() + "; unfired)");
         w.parts(sn, names::get, tag, StageDeck.ROLE);
         instances.add(new Instance(tag, what, sn, names));
     }

@@ -87,6 +87,26 @@ class MachineDeckTest {
     }
 
     @Test
+    void wholeMachineDeckHoldsTheSoftStartsThyratronAndNamesWhatItLeavesOut() {
+        Machine m = load("examples/pumpstation/pumpstation.machine");
+        MachineDeck.Written w = new MachineDeck(m, MachineCircuits.of(m)).write(null);
+        // examples/pumpstation: soft start heater_soft, bypass by thyratron_relay (2D21) with the soft start's
+        // 160 ohm coil, its grid divider 100 k / 100 k from bplus (the highest rail) to bias, as the wire list wires it
+        assertThat(w.instances()).filteredOn(i -> i.tag().equals("s0")).singleElement()
+                .satisfies(i -> assertThat(i.what()).contains("heater_soft"));
+        assertThat(w.deck().cards()).anySatisfy(c -> {
+            assertThat(c).isInstanceOf(SpiceCard.Resistor.class);
+            assertThat(c.name()).isEqualTo("Rs0_grid_series");
+            assertThat(c.nodes()).containsExactly("bplus", "s0_tap0");
+        });
+        assertThat(w.deck().text()).contains("Rs0_load s0_feed s0_plate 160")
+                .contains("program counter (pc): a built block known by its stated stages");
+        // a module's deck has no soft start: it belongs to the machine's supply
+        String path = m.modules().stream().map(x -> x.path()).filter(p -> !p.isEmpty()).findFirst().orElseThrow();
+        assertThat(new MachineDeck(m, MachineCircuits.of(m)).write(path).instances()).noneMatch(i -> i.tag().equals("s0"));
+    }
+
+    @Test
     void moduleSelectionKeepsOnlyItsStages() {
         Machine m = load("examples/pumpstation/pumpstation.machine");
         MachineDeck md = new MachineDeck(m, MachineCircuits.of(m));
