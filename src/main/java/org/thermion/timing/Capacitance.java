@@ -14,10 +14,10 @@ public final class Capacitance {
 
     /**
      * Input capacitance of one input of {@code st} with its declared gain (see
-     * {@link #input(TubeType, StageDrive.GridGains)}); a stage without one counts |A| = 1.
+     * {@link #input(TubeType, StageDrive.GridGains)} and {@link StageDrive.GridGains#declared(StageType)}).
      */
     public static double input(StageType st, TubeType tube) {
-        return input(tube, StageDrive.GridGains.declared(Double.isNaN(st.gain()) ? 1 : st.gain()));
+        return input(tube, StageDrive.GridGains.declared(st));
     }
 
     /**

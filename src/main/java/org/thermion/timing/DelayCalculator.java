@@ -152,7 +152,7 @@ public final class DelayCalculator {
     public StageDrive.GridGains gains(StageType st) {
         StageCircuit c = circuit(st);
         StageDrive.GridGains g = c == null ? null : drive.gridGains(c);
-        return g != null ? g : StageDrive.GridGains.declared(Double.isNaN(st.gain()) ? 1 : st.gain());
+        return g != null ? g : StageDrive.GridGains.declared(st);
     }
 
     /** |gain| from a receiver's grid to its output: computed where it has a circuit, else declared. */

@@ -1,5 +1,8 @@
 package org.thermion.timing;
 
+import org.thermion.model.StageFunction;
+import org.thermion.model.StageType;
+
 import org.thermion.circuit.Corner;
 import org.thermion.circuit.DcResult;
 import org.thermion.circuit.FlipFlop;
@@ -231,6 +234,18 @@ public final class StageDrive {
         /** A declared gain: an inverting stage with its cathode on a rail. */
         public static GridGains declared(double gain) {
             return new GridGains(-Math.abs(gain), 0);
+        }
+
+        /**
+         * A stage known by its declared figures alone: a buffer's declared gain is a cathode
+         * follower's (its cathode follows the grid), any other's an inverting plate stage's; a
+         * stage that declares none counts |A| = 1 inverting, the larger load of the two.
+         */
+        public static GridGains declared(StageType st) {
+            if (Double.isNaN(st.gain())) {
+                return declared(1);
+            }
+            return st.function() == StageFunction.BUFFER ? new GridGains(0, Math.abs(st.gain())) : declared(st.gain());
         }
 
         /** The gain's size to the node the stage takes its output from. */

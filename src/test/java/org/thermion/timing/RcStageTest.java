@@ -51,6 +51,10 @@ class RcStageTest {
         assertThat(Capacitance.input(tinv, m.tubes().get(tinv.tube()))).isCloseTo(12e-12, within(1e-18));
         // A pentode input is its declared cin, whatever its gain.
         assertThat(Capacitance.input(pinv, m.tubes().get(pinv.tube()))).isCloseTo(5e-12, within(1e-18));
+        // A buffer's declared gain is a cathode follower's: Cin = Cgp + Cgk (1 - A) = 1 pF + 2 pF x 0.1 = 1.2 pF
+        // (Miller's rule with the cathode following the grid), not an inverter's 2 + 1 x 1.9 = 3.9 pF.
+        var follow = m.stages().stream().filter(s -> s.name().equals("t_follow")).findFirst().orElseThrow();
+        assertThat(Capacitance.input(follow, m.tubes().get(follow.tube()))).isCloseTo(1.2e-12, within(1e-18));
         // A triode without cout: Cpk + Cgp per section = 1.5 pF, two sections 3 pF.
         assertThat(Capacitance.output(m.tubes().get(tinv.tube()), 2)).isCloseTo(3e-12, within(1e-18));
     }
