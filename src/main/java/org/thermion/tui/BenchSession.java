@@ -36,6 +36,8 @@ final class BenchSession {
     private int lamp;
     private List<Diagnosis.Suspect> ranked;
     private Step next;
+    /** The classes {@link #next} is meant to tell apart: the leaders, or the nearest ones when they cannot be split. */
+    private int nextSplits;
     private boolean nextAsked;
 
     /** Makes the plan for {@code machine} running {@code rom} (null: no ROM); takes seconds on a large machine. */
@@ -192,15 +194,35 @@ final class BenchSession {
         return n;
     }
 
-    /** The step after the plan that best splits the leading groups; null when none does or one leads alone. */
+    /**
+     * The step after the plan that best splits the leading groups, or, when they cannot be split,
+     * the nearest {@link #WIDEST} (as {@code diagnose} proposes: two faults at once still point
+     * somewhere); null when no step tells any of them apart.
+     */
     Step nextStep() {
         if (!nextAsked) {
             nextAsked = true;
-            List<Diagnosis.Suspect> leading = ranked.stream().filter(s -> s.rank() == ranked.get(0).rank()).toList();
-            next = leadingCount() > 1 ? diagnosis.nextStep(leading, Effort.DEFAULT) : null;
+            Diagnosis.Proposal p = ranked.isEmpty() ? null : diagnosis.propose(ranked, WIDEST, Effort.DEFAULT);
+            next = p == null ? null : p.step();
+            nextSplits = p == null ? 0 : p.candidates().size();
         }
         return next;
     }
+
+    /** True when {@link #nextStep} reaches past the leaders to the classes nearest them. */
+    boolean nextWidened() {
+        nextStep();
+        return next != null && nextSplits > ranked.stream().filter(s -> s.rank() == ranked.get(0).rank()).count();
+    }
+
+    /** How many classes the proposed step is meant to tell apart. */
+    int nextSplits() {
+        nextStep();
+        return nextSplits;
+    }
+
+    /** Classes a proposal may reach when the leaders cannot be split: diagnose's default --top. */
+    static final int WIDEST = 8;
 
     /** The switches a step sets on, by name. */
     List<String> switchesOn(Step s) {

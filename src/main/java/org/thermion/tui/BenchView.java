@@ -168,7 +168,8 @@ final class BenchView {
             Step next = b.nextStep();
             String words = next == null && b.leadingCount() <= 1 ? "every step recorded: look first at the fault at the top"
                     : next == null ? "every step recorded; no further step tells the leaders apart: check them by hand"
-                    : "to split the leaders: after the plan, " + (b.switchesOn(next).isEmpty() ? "every switch off"
+                    : (b.nextWidened() ? "to tell the leaders from the nearest (" + b.nextSplits() + " groups): after the plan, "
+                    : "to split the leaders: after the plan, ") + (b.switchesOn(next).isEmpty() ? "every switch off"
                     : "on: " + String.join(" ", b.switchesOn(next))) + ", clock " + Nouns.count(next.cycles(), "cycle");
             int y = in.bottom() - footer;
             for (String line : wrap(words, w)) {

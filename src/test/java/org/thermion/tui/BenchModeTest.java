@@ -53,6 +53,21 @@ class BenchModeTest {
     }
 
     @Test
+    void whenTheLeadersCannotBeSplitTheProposedStepReachesTheNearestGroupsAsDiagnoseDoes() {
+        BenchSession b = new BenchSession(c17(), null);
+        // every step as expected: the working machine leads alone, and no step splits one class; the step
+        // proposed tells it from the nearest groups (those one lamp away), as `diagnose --top 8` proposes
+        for (int i = 0; i < b.stepCount(); i++) {
+            b.record();
+        }
+        assertThat(b.ranked().get(0).looksGood()).isTrue();
+        assertThat(b.leadingCount()).isEqualTo(1);
+        assertThat(b.nextStep()).isNotNull();
+        assertThat(b.nextWidened()).isTrue();
+        assertThat(b.nextSplits()).isBetween(2, BenchSession.WIDEST);
+    }
+
+    @Test
     @Timeout(value = 120, unit = TimeUnit.SECONDS)
     void goldenScreenOfTheBenchOnTheDemoAfterOneStepWithTheAlarmLampDark() throws IOException {
         UiFixture ui = new UiFixture(100, 30);
