@@ -45,7 +45,7 @@ final class SoftStartWiring {
         w.twoLead(PartClass.RESISTOR, s.resistorOhms(), "power resistor", board, name, Double.NaN, s.ratedWatts(), key,
                 supply, behind);
         Relay r = s.relay();
-        String type = "relay, coil " + Values.ohms(r.coilOhms());
+        String type = Values.relay(r.coilOhms(), r.ratedVolts(), r.pickupVolts());
         String role = "bypass of " + name;
         String[] pins = {"1", "2", "C", "NO"};
         if (tw != null && driver.isPresent()) {

@@ -299,7 +299,7 @@ final class StageWiring {
         if (load instanceof LoadResistor r) {
             resistor(in, "load", r.ohms(), rail, plate, "plate load");
         } else if (load instanceof RelayCoil c) {
-            w.twoLead(PartClass.RELAY, c.ohms(), "relay, coil " + ohmsText(c.ohms()), in.board, "relay in the plate of " + in.name,
+            w.twoLead(PartClass.RELAY, c.ohms(), Values.relay(c.ohms(), Double.NaN, c.pickupAmps() * c.ohms()), in.board, "relay in the plate of " + in.name,
                     Double.NaN, in.key, rail, plate);
         } else if (load instanceof Lamp l) {
             w.twoLead(PartClass.LAMP, l.hotOhms(), "lamp " + volts(l.ratedVolts()) + " V " + milli(l.ratedAmps()) + " mA",
@@ -321,7 +321,7 @@ final class StageWiring {
         }
         if (c.coil() != null) {
             // a follower driving its relay: the cathode return is the coil, a relay on the parts list
-            w.twoLead(PartClass.RELAY, c.ohms(), "relay, coil " + ohmsText(c.ohms()), in.board, "relay in the cathode of "
+            w.twoLead(PartClass.RELAY, c.ohms(), Values.relay(c.ohms(), Double.NaN, c.coil().pickupAmps() * c.ohms()), in.board, "relay in the cathode of "
                     + in.name, Double.NaN, in.key, k, w.rail(c.rail()));
         } else {
             resistor(in, "cathode", c.ohms(), k, w.rail(c.rail()), "cathode resistor");

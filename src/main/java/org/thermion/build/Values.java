@@ -18,6 +18,18 @@ final class Values {
         return plain(ohms) + " ohm";
     }
 
+    /**
+     * A relay as ordered: by its coil's rated voltage and resistance where the rating is known
+     * ({@code relay 12 V, coil 160 ohm}), else by resistance and the pick-up voltage it must
+     * operate at ({@code relay 5 kohm, pick-up 25 V}).
+     */
+    static String relay(double coilOhms, double ratedVolts, double pickupVolts) {
+        if (!Double.isNaN(ratedVolts)) {
+            return "relay " + plain(ratedVolts) + " V, coil " + ohms(coilOhms);
+        }
+        return "relay " + ohms(coilOhms) + (Double.isNaN(pickupVolts) ? "" : ", pick-up " + plain(pickupVolts) + " V");
+    }
+
     /** A number with at most three significant figures and no trailing zeros. */
     static String plain(double v) {
         String s = String.format(Locale.ROOT, "%.3g", v);
