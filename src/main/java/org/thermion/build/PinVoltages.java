@@ -213,7 +213,7 @@ public final class PinVoltages {
      */
     private void bypasses(Map<Integer, Solved> points) {
         for (int i = 0; i < m.softStarts().size(); i++) {
-            Optional<org.thermion.circuit.ThyratronStage> d = SoftStartWiring.driver(m, circuits, m.softStarts().get(i));
+            Optional<org.thermion.circuit.ThyratronStage> d = circuits.softStartDriver(m.softStarts().get(i));
             if (d.isPresent()) {
                 DcResult r = solver.solve(d.get(), new double[] {circuits.rails().highest().volts()}, true, List.of(),
                         Corner.NOMINAL);

@@ -146,7 +146,7 @@ public final class Rebuild {
         for (SoftStart s : m.softStarts()) {
             String rail = m.rails().get(s.rail()).name();
             Set<String> names = new TreeSet<>(List.of(rail, WiringBuilder.behindName(s, rail)));
-            Optional<ThyratronStage> d = SoftStartWiring.driver(m, circuits, s);
+            Optional<ThyratronStage> d = circuits.softStartDriver(s);
             if (d.isPresent() && s.trigger() instanceof BypassTrigger.ThyratronWarm tw) {
                 int module = m.envelopes().get(tw.envelope()).module();
                 ThyratronStage t = d.get();

@@ -37,7 +37,7 @@ final class SoftStartWiring {
         int supply = w.supply(m.rails().get(s.rail()).name());
         int behind = w.behind(s);
         String name = "soft start " + s.name();
-        Optional<ThyratronStage> driver = driver(m, circuits, s);
+        Optional<ThyratronStage> driver = circuits.softStartDriver(s);
         BypassTrigger.ThyratronWarm tw = s.trigger() instanceof BypassTrigger.ThyratronWarm t ? t : null;
         int module = tw == null ? -1 : m.envelopes().get(tw.envelope()).module();
         int board = module < 0 ? 0 : w.boards.of(module);
@@ -69,15 +69,6 @@ final class SoftStartWiring {
     private static List<int[]> sections(Machine m, int envelope) {
         Envelope e = m.envelopes().get(envelope);
         return e.slots().stream().map(sl -> new int[] {envelope, sl.section()}).toList();
-    }
-
-    /**
-     * The circuit that drives soft start {@code s}'s bypass: its thyratron relay stage with the
-     * soft start's relay coil as the plate load; empty for a delay bypass or a stage without a
-     * thyratron circuit.
-     */
-    static Optional<ThyratronStage> driver(Machine m, MachineCircuits circuits, SoftStart s) {
-        return circuits.softStartDriver(s);
     }
 
     /** The soft start on rail {@code rail} that covers module instance {@code module}, or null. */

@@ -78,7 +78,7 @@ class StageWiringTest {
             }
             assertThat(stages).as(p.toString()).isGreaterThan(10);
             for (int i = 0; i < m.softStarts().size(); i++) {
-                var driver = SoftStartWiring.driver(m, circuits, m.softStarts().get(i));
+                var driver = circuits.softStartDriver(m.softStarts().get(i));
                 int key = StageKey.softStart(m, i);
                 if (driver.isPresent()) {
                     // the thyratron stage's circuit, its coil the bypass relay's, and the soft start's power resistor
