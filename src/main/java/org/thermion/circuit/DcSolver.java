@@ -11,6 +11,7 @@ final class DcSolver {
     /** Converged when every free node's current sum is below this (amperes). */
     static final double TOLERANCE_AMPS = 1e-10;
     private static final int MAX_ITERATIONS = 200;
+    /** Largest step a node takes in one iteration, at least; circuits spanning more volts take a 50th of their span. */
     private static final double MAX_STEP_VOLTS = 20;
 
     /** The node voltages, or null with {@link #failure} set and the change that would cure it. */
@@ -89,6 +90,7 @@ final class DcSolver {
             }
         }
         int n = free.length;
+        double maxStep = maxStep(c);
         double[] f = residual(c, free, v, shunt);
         double norm = norm2(f);
         double[][] j = new double[n][n];
@@ -106,7 +108,7 @@ final class DcSolver {
             }
             double biggest = maxAbs(dx);
 
-            double lambda = biggest > MAX_STEP_VOLTS ? MAX_STEP_VOLTS / biggest : 1.0;
+            double lambda = biggest > maxStep ? maxStep / biggest : 1.0;
             double[] trial = v.clone();
             double[] ft = null;
             double nt = Double.POSITIVE_INFINITY;
@@ -130,6 +132,22 @@ final class DcSolver {
             norm = nt;
         }
         return -1;
+    }
+
+    /**
+     * The step limit: {@link #MAX_STEP_VOLTS}, or a 50th of the span of the fixed voltages where that is more, so
+     * that a node a few kilovolts from its guess is reached within the iteration limit.
+     */
+    private static double maxStep(Circuit c) {
+        double lo = 0;
+        double hi = 0;
+        for (int i = 0; i < c.size(); i++) {
+            if (c.isFixed(i)) {
+                lo = Math.min(lo, c.fixed[i]);
+                hi = Math.max(hi, c.fixed[i]);
+            }
+        }
+        return Math.max(MAX_STEP_VOLTS, (hi - lo) / 50);
     }
 
     private static double[] residual(Circuit c, int[] free, double[] v, double shunt) {

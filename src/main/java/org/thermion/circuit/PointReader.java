@@ -10,6 +10,18 @@ final class PointReader {
     private PointReader() {
     }
 
+    /** A current for a message: mA from 0.1 mA to 1 A (the common case), else uA or A, so no figure reads 0.00. */
+    static String amps(double a) {
+        double m = Math.abs(a);
+        if (m >= 1) {
+            return String.format(java.util.Locale.ROOT, "%.2f A", a);
+        }
+        if (m >= 1e-4) {
+            return String.format(java.util.Locale.ROOT, "%.2f mA", a * 1e3);
+        }
+        return String.format(java.util.Locale.ROOT, "%.2f uA", a * 1e6);
+    }
+
     static DcResult read(String stage, Circuit c, DcSolver.Solution s, RailSet rails, String ownPrefix) {
         double[] v = s.volts();
         double[] out = c.nodeCurrents(v);
@@ -31,9 +43,8 @@ final class PointReader {
         for (Map.Entry<String, Double> e : railAmps.entrySet()) {
             var r = rails.rail(e.getKey());
             if (r != null && Double.isFinite(r.limitAmps()) && Math.abs(e.getValue()) > r.limitAmps()) {
-                return new NoDcSolution(stage, String.format(java.util.Locale.ROOT,
-                        "rail %s cannot supply the load: %.2f mA drawn, limit %.2f mA", e.getKey(),
-                        Math.abs(e.getValue()) * 1e3, r.limitAmps() * 1e3), "raise rail " + e.getKey()
+                return new NoDcSolution(stage, "rail " + e.getKey() + " cannot supply the load: "
+                        + amps(Math.abs(e.getValue())) + " drawn, limit " + amps(r.limitAmps()), "raise rail " + e.getKey()
                         + "'s current limit, or use a larger plate load so that the stage draws less");
             }
         }

@@ -40,7 +40,11 @@ final class LevelsReport {
         List<NetLevel> nets = analysis.nets();
         int failing = 0;
         int weak = 0;
+        int unsolved = 0;
         for (NetLevel n : nets) {
+            if (withoutLevels(n)) {
+                unsolved++;
+            }
             double w = n.worstMargin();
             if (w < 0) {
                 failing++;
@@ -60,7 +64,9 @@ final class LevelsReport {
         rep.text(List.of("machine " + machine.name() + ": " + Nouns.count(nets.size(), "net") + "; worst case at rails and resistors "
                 + pct(t.rail()) + ", worn tubes at " + Math.round(100 * t.endOfLife()) + " % emission; minimum margin "
                 + num(analysis.minMargin()) + " V.",
-                Nouns.count(failing, "net") + " with a negative worst-case margin, " + weak + " below the minimum.", ""));
+                Nouns.count(failing, "net") + " with a negative worst-case margin, " + weak + " below the minimum"
+                        + (unsolved == 0 ? "." : "; " + unsolved + " driven without levels (listed below the table)."),
+                ""));
         Table data = new Table("nets", "nets")
                 .column("net", "net", TEXT)
                 .column("driver", "driver", TEXT, "the stage that drives the net (empty: driven from outside)")
@@ -106,6 +112,7 @@ final class LevelsReport {
         }
         rep.view(view);
         rep.data(data);
+        unsolved(rep, nets);
         if (!corners.isEmpty()) {
             List<String> lines = new ArrayList<>();
             lines.add("");
@@ -131,6 +138,33 @@ final class LevelsReport {
         rep.text("");
         rep.table(drives);
         return rep;
+    }
+
+    /** In text, why a driven net shows no levels (no DC solution, ...): the data table's note, which the view leaves out. */
+    private static void unsolved(Report rep, List<NetLevel> nets) {
+        List<String> lines = new ArrayList<>();
+        int count = 0;
+        for (NetLevel n : nets) {
+            if (withoutLevels(n)) {
+                if (++count <= 20) {
+                    lines.add("  " + n.name() + " (" + n.stage() + "): " + n.note());
+                }
+            }
+        }
+        if (count == 0) {
+            return;
+        }
+        if (count > 20) {
+            lines.add("  ... and " + Nouns.count(count - 20, "more net"));
+        }
+        lines.add(0, "");
+        lines.add(1, "without levels, and why (`check` places each at its stage use):");
+        rep.text(lines);
+    }
+
+    /** A driven net whose levels could not be solved; its note says why. */
+    private static boolean withoutLevels(NetLevel n) {
+        return !n.stage().isEmpty() && !n.note().isEmpty() && !(Double.isFinite(n.voh()) && Double.isFinite(n.vol()));
     }
 
     private static Object v(double x) {

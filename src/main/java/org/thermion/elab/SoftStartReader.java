@@ -62,6 +62,9 @@ final class SoftStartReader {
         }
         double watts = resistor.has("rated") ? resistor.num("watts") : Double.POSITIVE_INFINITY;
         Relay relay = b.hasBlock("relay") ? relay(b.nested("relay")) : Relay.standard();
+        if (relay == null) {
+            return null;
+        }
         SoftStart ss = new SoftStart(name, rail, resistor.num(), watts, relay, trigger, SoftStartCover.wholeRail());
         PropLine covers = b.line("covers");
         if (covers != null) {
@@ -223,8 +226,37 @@ final class SoftStartReader {
         return new BypassTrigger.ThyratronWarm(env, st.tube(), st.loadOhms(), st.loadRail(), s);
     }
 
-    private static Relay relay(PropBlock r) {
-        return new Relay(r.num("coil"), r.num("rated"), r.num("pickup"), r.num("dropout"), r.num("operate"),
+    /**
+     * The relay block's figures; a pick-up above the coil's rating or a drop-out at or above the pick-up is an
+     * error at the line that breaks the order (defaults count: pick-up 60 % and drop-out 10 % of rated), and the
+     * soft start is not built.
+     */
+    private Relay relay(PropBlock r) {
+        Relay relay = new Relay(r.num("coil"), r.num("rated"), r.num("pickup"), r.num("dropout"), r.num("operate"),
                 r.num("contacts"));
+        PropLine pickup = r.line("pickup");
+        PropLine dropout = r.line("dropout");
+        boolean ok = true;
+        if (relay.pickupVolts() > relay.ratedVolts()) {
+            PropLine at = pickup != null ? pickup : r.line("rated");
+            diags.error(at == null ? null : at.span("value"), "pick-up voltage " + volts(relay.pickupVolts()) + " above the coil's rated "
+                    + volts(relay.ratedVolts()) + ": the relay would need more than its rating to close",
+                    "a relay picks up below its rated voltage (at most 60 % of it on a typical data sheet): check "
+                            + "`rated` and `pickup` against the relay's sheet");
+            ok = false;
+        }
+        if (relay.dropoutVolts() >= relay.pickupVolts()) {
+            PropLine at = dropout != null ? dropout : pickup != null ? pickup : r.line("rated");
+            diags.error(at == null ? null : at.span("value"), "drop-out voltage " + volts(relay.dropoutVolts())
+                    + " at or above the pick-up voltage " + volts(relay.pickupVolts()),
+                    "a relay releases below the voltage that pulls it in (about 10 % of rated on a typical data "
+                            + "sheet): check `pickup` and `dropout`");
+            ok = false;
+        }
+        return ok ? relay : null;
+    }
+
+    private static String volts(double v) {
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString() + " V";
     }
 }

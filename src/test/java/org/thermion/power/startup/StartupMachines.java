@@ -179,6 +179,20 @@ final class StartupMachines {
                 """.formatted(soft);
     }
 
+    /**
+     * {@code m} with soft start {@code index}'s bypass relay replaced by {@code relay}: figures the language
+     * refuses (a drop-out above the pick-up), for paths only a sagging supply reaches in a real machine.
+     */
+    static Machine withRelay(Machine m, int index, org.thermion.model.Relay relay) {
+        java.util.List<org.thermion.model.SoftStart> soft = new java.util.ArrayList<>(m.softStarts());
+        org.thermion.model.SoftStart s = soft.get(index);
+        soft.set(index, new org.thermion.model.SoftStart(s.name(), s.rail(), s.resistorOhms(), s.ratedWatts(), relay,
+                s.trigger(), s.cover()));
+        return new Machine(m.name(), m.clock(), m.tubes(), m.stages(), m.rails(), m.heaterRules(), java.util.List.copyOf(soft),
+                m.modules(), m.netlist(), m.rom(), m.pc(), m.inputs(), m.outputs(), m.envelopes(), m.heaterStrings(),
+                m.isa(), m.gateEnvelope(), m.latchEnvelope(), m.built(), m.radixes());
+    }
+
     static Machine elaborate(String text) {
         Diagnostics d = new Diagnostics();
         Machine m = new Elaborator(new SourceSet(), d).elaborateText(Path.of("test.machine"), text);
