@@ -79,7 +79,8 @@ final class TubeCurvesReader {
         PropLine at = b.has("fit") ? b.line("fit") : b.line("model");
         diags.error(at.prop().key().span(), "tube '" + t.name() + "': its model cannot be built: " + why,
                 b.has("fit") ? "check the point lines against the tube's sheet (a unit, a sign, a decimal point), "
-                        + "give more points, or fit fewer parameters" : "check the model line's parameters");
+                        + "give more points, or fit fewer parameters" : "check the model line's figures against the tube's sheet (a "
+                        + "power of ten, a unit, a decimal point)");
         return false;
     }
 
