@@ -10,6 +10,7 @@ import org.thermion.circuit.RailSet;
 import org.thermion.circuit.StageCircuit;
 import org.thermion.circuit.StageSolver;
 import org.thermion.levels.NetFanout;
+import org.thermion.levels.Receivers;
 import org.thermion.model.Gate;
 import org.thermion.model.Latch;
 import org.thermion.model.Machine;
@@ -77,7 +78,7 @@ public final class PinVoltages {
     private final double highest;
     private final double lowest;
     private final int[] qbar;
-    private final Map<Integer, List<Load>> loads = new HashMap<>();
+    private final Receivers receivers;
     private final Map<String, Double> heaterVolts = new HashMap<>();
     /** The nodes behind the soft starts' resistors: at their rail's voltage once the bypass has closed. */
     private final Map<String, Double> behind = new HashMap<>();
@@ -88,6 +89,7 @@ public final class PinVoltages {
         this.circuits = docs.circuits();
         this.solver = circuits.solver();
         this.fanout = NetFanout.of(m);
+        this.receivers = new Receivers(m, circuits, fanout);
         double h = 0;
         double l = 0;
         for (Rail r : m.rails()) {
@@ -290,21 +292,6 @@ public final class PinVoltages {
 
     /** The inputs a net drives, as loads in a stable order (one cache key per kind of net). */
     private List<Load> loads(int net) {
-        NetFanout.Node node = fanout.nodeOf(net);
-        return loads.computeIfAbsent(node.net(), k -> {
-            List<StageCircuit> receivers = new ArrayList<>();
-            for (NetFanout.Pin p : node.pins()) {
-                int st = p.latch() ? m.netlist().latches().get(p.index()).stage() : m.netlist().gates().get(p.index()).stage();
-                if (st >= 0) {
-                    circuits.circuit(m.stages().get(st)).ifPresent(receivers::add);
-                }
-            }
-            receivers.sort(Comparator.comparing(StageCircuit::name));
-            List<Load> out = new ArrayList<>();
-            for (StageCircuit r : receivers) {
-                out.add(r.inputLoad());
-            }
-            return List.copyOf(out);
-        });
+        return receivers.loadsOn(fanout.nodeOf(net));
     }
 }

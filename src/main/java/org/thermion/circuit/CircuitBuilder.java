@@ -42,6 +42,21 @@ public final class CircuitBuilder {
         return prefix;
     }
 
+    /**
+     * Labels parts from now on under {@code sub} within the current role ("receiver." becomes
+     * "receiver.next."), so a load's own loads get tolerances apart from it; returns the prefix
+     * to give back to {@link #restorePrefix}.
+     */
+    String nest(String sub) {
+        String old = prefix;
+        prefix = prefix + sub + ".";
+        return old;
+    }
+
+    void restorePrefix(String old) {
+        prefix = old;
+    }
+
     /** The node of rail {@code name} (at its corner voltage); ground is never toleranced. */
     int rail(String name) {
         Integer n = byName.get("rail " + name);

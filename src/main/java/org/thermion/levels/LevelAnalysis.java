@@ -51,6 +51,7 @@ public final class LevelAnalysis {
     private final List<NetAnalysis> points = new ArrayList<>();
     private final List<StageUse> pointUses = new ArrayList<>();
     private final List<LoadDrive> drives;
+    private final Receivers receivers;
 
     private record Kind(StageCircuit driver, InputLevels levels, InputLevels worstLevels, List<StageCircuit> receivers) {
     }
@@ -71,6 +72,7 @@ public final class LevelAnalysis {
         this.analysis = new MarginAnalysis(circuits.solver());
         this.worstCase = new WorstCase(analysis, tolerances);
         NetFanout fanout = NetFanout.of(machine);
+        this.receivers = new Receivers(machine, circuits, fanout);
         double[] high = new double[machine.netlist().netCount()];
         double[] low = new double[high.length];
         double outsideHigh = outsideHigh(machine);
@@ -182,17 +184,9 @@ public final class LevelAnalysis {
 
     private NetLevel analyse(NetFanout fanout, NetFanout.Node node, double[] low, double[] high, double[] worstLow,
                              double[] worstHigh) {
-        List<StageCircuit> receivers = new ArrayList<>();
-        List<String> missing = new ArrayList<>();
-        for (NetFanout.Pin p : node.pins()) {
-            StageType st = stageOf(p.latch(), p.index());
-            Optional<StageCircuit> c = circuits.circuit(st);
-            if (c.isPresent()) {
-                receivers.add(c.get());
-            } else if (!missing.contains(st.name())) {
-                missing.add(st.name());
-            }
-        }
+        Receivers.Found found = receivers.of(node);
+        List<StageCircuit> receivers = found.circuits();
+        List<String> missing = found.missing();
         String receiverText = describe(receivers, missing);
         int loads = node.pins().size();
         if (node.source() == NetFanout.Source.OUTSIDE) {

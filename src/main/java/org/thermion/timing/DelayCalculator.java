@@ -3,6 +3,8 @@ package org.thermion.timing;
 import org.thermion.circuit.Corner;
 import org.thermion.circuit.Load;
 import org.thermion.circuit.MachineCircuits;
+import org.thermion.levels.NetFanout;
+import org.thermion.levels.Receivers;
 import org.thermion.circuit.StageCircuit;
 import org.thermion.circuit.Tolerances;
 import org.thermion.circuit.TubeStage;
@@ -39,6 +41,8 @@ public final class DelayCalculator {
     private final MachineCircuits circuits;
     private final StageDrive drive;
     private final Tolerances slow;
+    private NetFanout fanout;
+    private Receivers receivers;
 
     /** Nominal delays, from the machine's own circuits where its stages have them. */
     public DelayCalculator(Machine machine) {
@@ -294,18 +298,17 @@ public final class DelayCalculator {
                 pullDown ? tubeOhms : loadOhms, pullDown ? loadOhms : tubeOhms, "declared", corner);
     }
 
-    /** The inputs on a net that have circuits, as loads on its driver. */
+    /**
+     * The inputs on a net that have circuits, as loads on its driver; a diode gate's input
+     * carries what the gate feeds ({@link Receivers}): through its conducting diode the driver
+     * charges those loads too.
+     */
     public List<Load> loadsOn(int net) {
-        List<Load> loads = new ArrayList<>();
-        for (int s : pins.get(net)) {
-            if (s >= 0) {
-                StageCircuit rc = circuit(machine.stages().get(s));
-                if (rc != null) {
-                    loads.add(rc.inputLoad());
-                }
-            }
+        if (receivers == null) {
+            fanout = NetFanout.of(machine);
+            receivers = new Receivers(machine, circuits, fanout);
         }
-        return loads;
+        return receivers.loadsOn(fanout.nodeOf(net));
     }
 
     /** True when the stage's load resistor returns to a negative rail. */

@@ -196,7 +196,7 @@ public final class PathAdvice {
                     new LoadResistor(ohms), t.plateRail(), t.cathode(), t.grid(), t.screen(), t.output());
         }
         if (c instanceof DiodeGate d) {
-            return new DiodeGate(d.name(), d.diode(), d.kind(), d.inputs(), ohms, d.pullRail());
+            return new DiodeGate(d.name(), d.diode(), d.kind(), d.inputs(), ohms, d.pullRail(), d.outputLoads());
         }
         FlipFlop f = (FlipFlop) c;
         return new FlipFlop(f.name(), f.tube(), ohms, f.plateRail(), f.cross(), f.cathode());

@@ -32,9 +32,9 @@ class StageWiringTest {
             String name = m.netlist().netName(l.output());
             Part series = part(w, "steering series D of " + name);
             Part toBias = part(w, "steering to bias D of " + name);
-            // the library's triode_flipflop: grid divider 470 k 560 k to bias, the same for the data input
-            assertThat(series.ohms()).isEqualTo(470e3);
-            assertThat(toBias.ohms()).isEqualTo(560e3);
+            // the library's triode_flipflop: grid divider 1 M 1.2 M to bias, the same for the data input
+            assertThat(series.ohms()).isEqualTo(1e6);
+            assertThat(toBias.ohms()).isEqualTo(1.2e6);
             assertThat(series.owner()).isEqualTo(StageKey.latch(m.netlist(), l.id()));
             String data = m.netlist().netName(l.data());
             assertThat(leadsOf.get(series.ref())).containsExactly(data, name + "/tapD");

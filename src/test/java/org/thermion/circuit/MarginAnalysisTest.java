@@ -111,11 +111,11 @@ class MarginAnalysisTest {
         MarginAnalysis a = new MarginAnalysis(s);
         NetAnalysis net = a.net(lib.get("diode_and"), new InputLevels(5, 45), lib.get("triode_nor2"), 3);
         assertThat(net.points()).hasSize(16).allMatch(DcResult::solved);
-        // AND of four, all inputs high (45 V) above the output: every diode is off, and the 330 k
-        // pull-up from 48 V meets three receivers' dividers (470 k + 560 k to -24 V, 343.3 k together);
-        // by hand (48*343.33 - 24*330) / 673.33 = 12.713 V. Each grid tap then sits at
-        // (12.713*560 - 24*470) / 1030 = -4.0 V, below its cathode, so no grid current.
-        assertThat(net.margins().voh()).isCloseTo(12.713, within(0.001));
+        // AND of four, all inputs high (45 V) above the output: every diode is off, and the 510 k
+        // pull-up from 48 V meets three receivers' dividers (1 M + 1.2 M to -24 V, 733.3 k together);
+        // by hand (48*733.33 - 24*510) / 1243.33 = 18.467 V. Each grid tap then sits at
+        // (18.467*1.2 - 24*1) / 2.2 = -0.84 V, below its cathode, so no grid current.
+        assertThat(net.margins().voh()).isCloseTo(18.467, within(0.001));
         long solves = s.solves();
         assertThat(a.net(lib.get("diode_and"), new InputLevels(5, 45), lib.get("triode_nor2"), 3)).isSameAs(net);
         assertThat(s.solves()).isEqualTo(solves);

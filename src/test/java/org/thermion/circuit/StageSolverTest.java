@@ -158,6 +158,45 @@ class StageSolverTest {
         assertThat(high).isBetween(40.0, 41.0);
     }
 
+    /**
+     * A diode AND (510 k pull-up, inputs high) feeding a diode OR (10 M pull-down) feeding a
+     * 1 M / 1.2 M grid divider to the bias rail: through the conducting OR diode the AND's
+     * pull-up carries the divider too. Checked against the same circuit worked by hand:
+     * Kirchhoff's current law at both nodes, Ohm's law, and the 3/2-power diode law with the
+     * library's 6AL5 perveance (Child–Langmuir, from memory), solved by bisection here.
+     */
+    @Test
+    void aDiodeGateCarriesWhatItsOutputFeedsBackToItsDriver() {
+        ChildDiode d = (ChildDiode) lib.require("6AL5");
+        DiodeGate and = new DiodeGate("and", d, DiodeGate.Kind.AND, 2, 510e3, "bplus");
+        GridLoad grid = new GridLoad(new GridNetwork(1e6, 1.2e6, "bias", 0), GridCurrentLaw.NONE, RailSet.GROUND);
+        Load or = new DiodeLoad(d, DiodeGate.Kind.OR, 10e6, "bias", List.of(grid));
+        double chained = solver.solve(and, new double[] {48, 48}, false, List.of(or), Corner.NOMINAL).point()
+                .outputVolts();
+        Load orAlone = new DiodeLoad(d, DiodeGate.Kind.OR, 10e6, "bias", List.of());
+        double alone = solver.solve(and, new double[] {48, 48}, false, List.of(orAlone), Corner.NOMINAL).point()
+                .outputVolts();
+
+        double lo = -12;
+        double hi = 48;
+        double va = Double.NaN;
+        for (int i = 0; i < 200; i++) {
+            double vb = (lo + hi) / 2;
+            double amps = (vb + 12) / 10e6 + (vb + 12) / 2.2e6;
+            va = vb + Math.pow(amps / d.perveance(), 2.0 / 3);
+            if ((48 - va) / 510e3 > amps) {
+                lo = vb;
+            } else {
+                hi = vb;
+            }
+        }
+        assertThat(chained).isCloseTo(va, within(1e-3));
+        // with the diode drop neglected: 48 - V = 510 k (1/10 M + 1/2.2 M)(V + 12), V = 34.8 V;
+        // without the divider behind the OR the AND would claim 45.1 V
+        assertThat(chained).isCloseTo(34.8, within(0.1));
+        assertThat(alone).isCloseTo(45.1, within(0.1));
+    }
+
     @Test
     void identicalUsesAreSolvedOnce() {
         StageSolver s = new StageSolver(rails);

@@ -31,7 +31,7 @@ class BenchCommandTest {
         assertThat(byMeasure.get("demo: powerup: solve 30 s").path("target").asString()).isEqualTo("<= 0.2 s");
         assertThat(byMeasure).containsKey("demo: verify: cases/s");
         assertThat(rows.findValuesAsString("target")).contains("<= 2 s");
-        assertThat(r.out()).contains("skipped: 158 gates is past --compile-max 0");
+        assertThat(r.out()).contains("skipped: 161 gates is past --compile-max 0");
     }
 
     @Test

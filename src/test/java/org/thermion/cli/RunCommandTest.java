@@ -193,8 +193,8 @@ class RunCommandTest {
         assertThat(run("run", MACHINE, "programs/pump.asm", "--cycles", "30", "--vcd", vcd.toString()).code()).isZero();
         String text = Files.readString(vcd);
         assertThat(text).startsWith("$date").contains("$enddefinitions $end");
-        // 30 cycles of 250 us end at 7500 us: the last timestamp.
-        assertThat(text.substring(text.lastIndexOf('#'))).startsWith("#7500\n");
+        // 30 cycles of 300 us end at 9000 us: the last timestamp.
+        assertThat(text.substring(text.lastIndexOf('#'))).startsWith("#9000\n");
         try (Stream<Path> files = Files.list(dir)) {
             assertThat(files.map(p -> p.getFileName().toString())).containsExactly("run.vcd");
         }

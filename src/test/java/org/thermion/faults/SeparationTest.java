@@ -41,7 +41,8 @@ class SeparationTest {
     }
 
     @Test
-    void theDemosGroupsShrinkWithEveryProgramThePlanFitsAndWhatIsLeftNoProgramTriedSplits() throws Exception {
+    void theDemosGroupsShrinkWithEveryProgramThePlanFitsAndWhatIsLeftSaysWhetherAWholeRandomRomSplitsIt()
+            throws Exception {
         Machine demo = Bench.demo();
         FaultCircuit c = FaultCircuit.of(demo);
         FaultList faults = FaultList.of(c, SocketPins.of(demo));
@@ -71,10 +72,15 @@ class SeparationTest {
                 }
                 Diagnosis d = new Diagnosis(all, faults, steps);
                 assertThat(sep.alike()).hasSize(d.classesAbove(3));
+                // Each group left says whether a whole ROM of random words splits it (the written programs
+                // are 16 words): on this demo most are alike under every program tried, not all.
+                long splitByWholeRom = 0;
                 for (Separation.Alike a : sep.alike()) {
                     assertThat(a.faults()).hasSizeGreaterThan(3);
-                    assertThat(a.otherProgram()).as("a group left: random programs split it too?").isFalse();
+                    assertThat(a.otherProgram()).isNotNull();
+                    splitByWholeRom += Boolean.TRUE.equals(a.otherProgram()) ? 1 : 0;
                 }
+                assertThat(splitByWholeRom).isLessThan(sep.alike().size());
                 // A written program is short: random words first, zeros after.
                 for (long[] w : sep.written()) {
                     assertThat(w.length).isLessThanOrEqualTo(Separation.WRITTEN_WORDS);

@@ -29,31 +29,33 @@ class ElectricalCheckTest {
     }
 
     @Test
-    void upToFourLoadsOnALibraryInverterPassAndAFifthIsAnErrorNamingTheLimit() {
+    void upToEightLoadsOnALibraryInverterPassAndTwelveAreAnErrorNamingTheLimit() {
         String two = LevelAnalysisTest.RAILS + TWO_LOADS + "machine two { top top; inputs a b; outputs y w }\n";
         assertThat(findings(two)).isEmpty();
         assertThat(findings(LevelAnalysisTest.CHAIN)).isEmpty();
-        // The same inverter feeding five inputs: at its worst corner its high level falls below V_IH
-        String five = LevelAnalysisTest.RAILS + """
-                module top {
-                  in a, b, c, d
-                  out y, z, w, u, v
-                  net mid
-                  mid = !a
-                  y = !mid
-                  z = !(mid | a)
-                  w = !(mid | b)
-                  u = !(mid | c)
-                  v = !(mid | d)
-                }
-                machine five { top top; inputs a b c d; outputs y z w u v }
-                """;
-        assertThat(findings(five)).singleElement().satisfies(x -> {
+        assertThat(findings(nors(8))).isEmpty();
+        // The same inverter feeding twelve NOR inputs: at its worst corner its high level falls below V_IH
+        assertThat(findings(nors(12))).singleElement().satisfies(x -> {
             assertThat(x.error()).isTrue();
             assertThat(x.kind()).isEqualTo("margin");
-            assertThat(x.message()).contains("net 'mid'", "5 loads", "worst-case high noise margin of -");
-            assertThat(x.fix()).contains("feed at most 4");
+            assertThat(x.message()).contains("net 'mid'", "12 loads", "worst-case high noise margin of -");
+            assertThat(x.fix()).contains("feed at most 8");
         });
+    }
+
+    /** An inverter whose output feeds {@code n} NORs (1 M / 1.2 M grid dividers each). */
+    private static String nors(int n) {
+        StringBuilder ins = new StringBuilder();
+        StringBuilder outs = new StringBuilder();
+        StringBuilder body = new StringBuilder();
+        for (int i = 0; i < n; i++) {
+            ins.append(", i").append(i);
+            outs.append(i == 0 ? "" : ", ").append('o').append(i);
+            body.append("  o").append(i).append(" = !(mid | i").append(i).append(")\n");
+        }
+        return LevelAnalysisTest.RAILS + "module top {\n  in a" + ins + "\n  out " + outs + "\n  net mid\n  mid = !a\n"
+                + body + "}\nmachine fan { top top; inputs a" + ins.toString().replace(",", "") + "; outputs "
+                + outs.toString().replace(",", "") + " }\n";
     }
 
     @Test
@@ -127,7 +129,7 @@ class ElectricalCheckTest {
     void aSeriesHeaterStringOnASoftRailIsJudgedAtTheLoadedVoltage() {
         String text = """
                 rail bplus { voltage 48 V }
-                rail bias { voltage -12 V }
+                rail bias { voltage -24 V }
                 rail heat { voltage 12.6 V; source 10 ohm }
                 heaters on heat {
                   series 2 of 6AU6

@@ -81,11 +81,11 @@ class LibraryStageFiguresTest {
 
     @Test
     void aCutOffInverterDrawsOnlyItsGridDivider() {
-        // Input at ground: the 470 k / 560 k divider to -24 V puts the grid at -24 x 470 / 1030 = -11 V, far past
+        // Input at ground: the 1 M / 1.2 M divider to -24 V puts the grid at -24 x 1 / 2.2 = -10.9 V, far past
         // the 6AU6's cut-off at a 48 V screen (about -4 V at 100 V, RCA sheet, from memory), so only the divider
-        // conducts: 24 V / 1030 k = 23.3 uA (Ohm's law), from the driving output's B+ to the bias rail.
+        // conducts: 24 V / 2.2 M = 10.9 uA (Ohm's law), from the driving output's B+ to the bias rail.
         StageType inv = stage("pentode_inverter");
-        double divider = 24 / 1030e3;
+        double divider = 24 / 2.2e6;
         assertThat(draw.amps(inv, bias, true)).isCloseTo(divider, within(0.01 * divider));
         assertThat(draw.amps(inv, bplus, true)).isCloseTo(divider, within(0.01 * divider));
         // conducting it draws two orders of magnitude more, all of it from B+ (plate and screen)
@@ -94,36 +94,36 @@ class LibraryStageFiguresTest {
 
     @Test
     void diodeGatesDrawWhatTheirPullResistorsPass() {
-        // AND, both inputs at ground (the low state that draws most): the 330 k pull-up from 48 V into two
+        // AND, both inputs at ground (the low state that draws most): the 510 k pull-up from 48 V into two
         // conducting 6AL5 sections sharing its current. Each diode's drop by the 3/2-power law through the
         // library's point (60 mA at 10 V): V = (I / 2 / K)^(2/3), K = 60 mA / 10^1.5.
         StageType and = stage("diode_and");
         double k = 60e-3 / Math.pow(10, 1.5);
         assertThat(((ChildDiode) tubes.require("6AL5")).perveance()).isCloseTo(k, within(1e-9 * k));
-        double amps = root(i -> i - (48 - Math.pow(i / 2 / k, 2.0 / 3)) / 330e3, 0, 48 / 330e3);
+        double amps = root(i -> i - (48 - Math.pow(i / 2 / k, 2.0 / 3)) / 510e3, 0, 48 / 510e3);
         assertThat(draw.amps(and, bplus, false)).isCloseTo(amps, within(0.01 * amps));
         assertThat(draw.amps(and, bplus, true)).isLessThan(0.01 * amps);
-        // OR, both inputs at B+: through the diodes into the 2.2 M pull-down to -24 V: (48 - drop + 24) / 2.2 M
+        // OR, both inputs at B+: through the diodes into the 10 M pull-down to -24 V: (48 - drop + 24) / 10 M
         StageType or = stage("diode_or");
-        double orAmps = root(i -> i - (72 - Math.pow(i / 2 / k, 2.0 / 3)) / 2.2e6, 0, 72 / 2.2e6);
+        double orAmps = root(i -> i - (72 - Math.pow(i / 2 / k, 2.0 / 3)) / 10e6, 0, 72 / 10e6);
         assertThat(draw.amps(or, bias, true)).isCloseTo(orAmps, within(0.01 * orAmps));
     }
 
     @Test
     void theRelayDriverPairFollowsKorensEquationOnItsCoilsLoadLine() {
-        // Input at B+ (48 V): the grid node joins 470 k from the input, 560 k to -24 V, and both sections' grid
+        // Input at B+ (48 V): the grid node joins 1 M from the input, 1.2 M to -24 V, and both sections' grid
         // current (K Vg^1.5 each, the model's law). Then the two sections in parallel on the 5 k coil from 48 V:
         // Vp = 48 - 5 k x 2 Ip(Vp, Vg), Ip from Koren's triode equation.
         StageType relay = stage("triode_relay");
         KorenTriode t = (KorenTriode) tubes.require("12AU7");
         double k = t.grid().k();
-        double vg = root(v -> (v + 24) / 560e3 + 2 * k * Math.pow(Math.max(v, 0), 1.5) - (48 - v) / 470e3, -24, 48);
+        double vg = root(v -> (v + 24) / 1.2e6 + 2 * k * Math.pow(Math.max(v, 0), 1.5) - (48 - v) / 1e6, -24, 48);
         double vp = root(v -> v - (48 - 5e3 * 2 * koren(t, v, vg)), 0, 48);
         double plate = 2 * koren(t, vp, vg);
-        // what the input feeds (470 k from the driving B+) is counted on B+ with the plate current
-        double fromBplus = plate + (48 - vg) / 470e3;
+        // what the input feeds (1 M from the driving B+) is counted on B+ with the plate current
+        double fromBplus = plate + (48 - vg) / 1e6;
         assertThat(draw.amps(relay, bplus, true)).isCloseTo(fromBplus, within(0.005 * fromBplus));
-        assertThat(draw.amps(relay, bias, true)).isCloseTo((vg + 24) / 560e3, within(0.005 * (vg + 24) / 560e3));
+        assertThat(draw.amps(relay, bias, true)).isCloseTo((vg + 24) / 1.2e6, within(0.005 * (vg + 24) / 1.2e6));
         // the coil's pick-up is 2 mA: the pair gives it more than twice that (issue 16's "about 4.5 mA" at Vg = 0)
         assertThat(plate).isBetween(4e-3, 5.5e-3);
     }
@@ -132,17 +132,17 @@ class LibraryStageFiguresTest {
     void theSuppressorGatedNandDeclaresWhatItsOneGridEquivalentSolvesTo() {
         // pentode_nand2 cannot be solved (no suppressor term in the model); its declared draw with both grids
         // high is the one-grid circuit of the same parts, pentode_inverter's on a 22 k load, plus a second
-        // 470 k grid divider fed from B+ with its grid near 0 V (48 V / 470 k, Ohm's law).
+        // 1 M grid divider fed from B+ with its grid near 0 V (48 V / 1 M, Ohm's law).
         Machine one = PowerMachines.of(MACHINE.replace("y0 = pentode_inverter(a)", "y0 = one_grid(a)").replace("module top", """
                 stage one_grid : not {
                   tube 6AU6
                   load 22 k from bplus
-                  grid divider 470 k 560 k to bias
+                  grid divider 1 M 1.2 M to bias
                   screen 0 ohm from bplus
                 }
                 module top"""));
         StageType g = one.stages().stream().filter(s -> s.name().equals("one_grid")).findFirst().orElseThrow();
-        double solved = StageDraw.of(one).amps(g, one.railIndex("bplus"), false) + 48 / 470e3;
+        double solved = StageDraw.of(one).amps(g, one.railIndex("bplus"), false) + 48 / 1e6;
         StageType nand = PowerMachines.of(MACHINE.replace("y0 = pentode_inverter(a)", "y0 = pentode_nand2(a, b)"))
                 .stages().stream()
                 .filter(s -> s.name().equals("pentode_nand2")).findFirst().orElseThrow();

@@ -41,20 +41,20 @@ class VcdWriterTest {
         assertThat(r.header.get("$date")).isEqualTo("test date");
         assertThat(r.header.get("$version")).isEqualTo("thermion test");
         assertThat(r.scopes).contains("pumpstation", "pumpstation.osel", "pumpstation.lu");
-        // The clock is 250 us in 2 phases (the demo's clock block): a phase is 125 us.
-        // ST runs in cycle 1; its execute phase (2) spans 375..500 us and pump loads at 500 us.
-        assertThat(r.at("pumpstation.pump", 499)).isEqualTo("0");
-        assertThat(r.at("pumpstation.pump", 500)).isEqualTo("1");
+        // The clock is 300 us in 2 phases (the demo's clock block): a phase is 150 us.
+        // ST runs in cycle 1; its execute phase (2) spans 450..600 us and pump loads at 600 us.
+        assertThat(r.at("pumpstation.pump", 599)).isEqualTo("0");
+        assertThat(r.at("pumpstation.pump", 600)).isEqualTo("1");
         // The decode bus is one 16-bit vector (IEEE 1364 $var wire 16 ... line [15:0]); line[3] (ST decoded)
-        // is up during that phase: from 375 us until the next IR load settles at 625 us.
+        // is up during that phase: from 450 us until the next IR load settles at 750 us.
         String line = "pumpstation.line[15:0]";
         assertThat(r.widths.get(r.vars.get(line))).isEqualTo(16);
-        assertThat(bit(r.at(line, 374), 3)).isEqualTo('0');
-        assertThat(r.at(line, 375)).isEqualTo("0000000000001000");
-        assertThat(bit(r.at(line, 625), 3)).isEqualTo('0');
-        // The PC: 1 after cycle 0 (250 us), 2 after cycle 1, stays 2 (JMP 2).
-        assertThat(r.at("pumpstation.pc[7:0]", 250)).isEqualTo("00000001");
-        assertThat(r.at("pumpstation.pc[7:0]", 999)).isEqualTo("00000010");
+        assertThat(bit(r.at(line, 449), 3)).isEqualTo('0');
+        assertThat(r.at(line, 450)).isEqualTo("0000000000001000");
+        assertThat(bit(r.at(line, 750), 3)).isEqualTo('0');
+        // The PC: 1 after cycle 0 (300 us), 2 after cycle 1, stays 2 (JMP 2).
+        assertThat(r.at("pumpstation.pc[7:0]", 300)).isEqualTo("00000001");
+        assertThat(r.at("pumpstation.pc[7:0]", 1199)).isEqualTo("00000010");
         // Nets of a module instance sit in its scope with the local name.
         String inner = innerBusBit(m);
         String innerBus = inner.substring(0, inner.lastIndexOf('['));
@@ -63,7 +63,7 @@ class VcdWriterTest {
         // No bus bit is left declared alone when its whole bus is dumped.
         assertThat(r.vars.keySet()).noneMatch(k -> k.matches(".*\\[\\d+]"));
         assertThat(r.vars.keySet()).noneMatch(k -> k.contains("$"));
-        assertThat(r.lastTime).isEqualTo(1000);
+        assertThat(r.lastTime).isEqualTo(1200);
     }
 
     /** Some bus bit inside a module instance (e.g. osel.pick[5]), found rather than named, as the demo evolves. */
@@ -93,7 +93,7 @@ class VcdWriterTest {
         assertThat(r.at("pumpstation.acc", 0)).isEqualTo("x");
         assertThat(r.at("pumpstation.ir[0]", 0)).isEqualTo("x");
         // NOP's word loads at the end of phase 1.
-        assertThat(r.at("pumpstation.ir[0]", 125)).isEqualTo("0");
+        assertThat(r.at("pumpstation.ir[0]", 150)).isEqualTo("0");
     }
 
     @Test
@@ -106,10 +106,10 @@ class VcdWriterTest {
         assertThat(text).containsPattern("\\$var wire " + ir.size() + " \\S+ ir \\[" + (ir.size() - 1) + ":0] \\$end");
         VcdReader r = new VcdReader(text);
         String path = "pumpstation.ir[" + (ir.size() - 1) + ":0]";
-        // After phase 1 of cycle c (125 us + 250 us c) ir holds word c; MSB first in the dump.
+        // After phase 1 of cycle c (150 us + 300 us c) ir holds word c; MSB first in the dump.
         for (int c = 0; c < 3; c++) {
             String expected = Long.toBinaryString((1L << ir.size()) | rom[c]).substring(1);
-            assertThat(r.at(path, 125 + 250L * c)).as("cycle %d", c).isEqualTo(expected);
+            assertThat(r.at(path, 150 + 300L * c)).as("cycle %d", c).isEqualTo(expected);
         }
     }
 

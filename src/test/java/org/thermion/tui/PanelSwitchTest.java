@@ -81,9 +81,9 @@ class PanelSwitchTest {
 
     @Test
     void theStatusLineGivesTheRealMachineTimeBesideTheCycles() throws IOException {
-        // The demo's clock: period 250 us (examples/pumpstation/pumpstation.machine).
+        // The demo's clock: period 300 us (examples/pumpstation/pumpstation.machine).
         UiFixture f = new UiFixture(100, 30).type("cccccc");
-        assertThat(f.status()).contains(" cycle 6 \u00B7 1.50 ms ");
+        assertThat(f.status()).contains(" cycle 6 \u00B7 1.80 ms ");
         assertThat(StatusLines.machineTime(12_345, 100e-6)).isEqualTo("1.235 s");
         assertThat(StatusLines.machineTime(123, 100e-6)).isEqualTo("12.30 ms");
         assertThat(StatusLines.machineTime(3, 1e-6)).isEqualTo("3.00 us");

@@ -102,10 +102,10 @@ class ReloadTest {
     @Test
     void aChangedDescriptionSaysWhatChanged() throws IOException {
         f.type("cc");
-        edit(MACHINE, "period 250 us", "period 50 us");
+        edit(MACHINE, "period 300 us", "period 50 us");
         f.ui.reload("pumpstation.machine");
         f.ui.draw();
-        assertThat(f.text()).contains("clock: 2 phases, 250 us a cycle \u2192 2 phases, 50 us a cycle");
+        assertThat(f.text()).contains("clock: 2 phases, 300 us a cycle \u2192 2 phases, 50 us a cycle");
         assertThat(f.ui.session().cycle()).isEqualTo(2);
         assertThat(f.ui.session().machine().clock().periodSeconds()).isCloseTo(50e-6, org.assertj.core.data.Offset.offset(1e-12));
     }
@@ -133,7 +133,7 @@ class ReloadTest {
     @Test
     void aSaveIsSeenByPollingOnceTheFileHoldsStill() throws IOException, InterruptedException {
         long t = System.nanoTime();
-        edit(MACHINE, "period 250 us", "period 80 us");
+        edit(MACHINE, "period 300 us", "period 80 us");
         // First poll sees it change, the next (one poll later) sees it held still and reloads.
         for (int i = 1; i <= 3; i++) {
             f.ui.pollFiles(t + i * FileStamps.POLL_MILLIS * 1_000_000L);
