@@ -21,6 +21,9 @@ public final class TubeLibrary {
     private final Map<String, TubeModel> models = new LinkedHashMap<>();
     private final Map<String, FittedModel<?>> fits = new LinkedHashMap<>();
 
+    /** A fit missing its points by more than this (rms relative) is refused: twice Koren's usual ±25 %. */
+    static final double MOST_FIT_RESIDUAL = 0.5;
+
     private TubeLibrary() {
     }
 
@@ -109,10 +112,17 @@ public final class TubeLibrary {
             m = new GasThyratron(t.name(), Double.isNaN(t.arcDropVolts()) ? GasThyratron.TYPICAL_ARC_DROP
                     : t.arcDropVolts(), g.criticalGrid(), g.controlRatio(), t.avgCathodeAmps(), source);
         }
+        Checks.plausibleTube(m);
         models.put(t.name(), m);
     }
 
     private <M extends TubeModel> M keep(FittedModel<M> f) {
+        Checks.plausibleFit(f.model());
+        if (!(f.rmsRelativeError() <= MOST_FIT_RESIDUAL)) {
+            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT, "the fit misses its points by "
+                    + "%.0f %% rms, more than twice the published equations' usual accuracy of 25 %%: the points "
+                    + "contradict each other or the law", 100 * f.rmsRelativeError()));
+        }
         fits.put(f.model().name(), f);
         return f.model();
     }

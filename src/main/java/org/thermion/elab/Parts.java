@@ -35,6 +35,8 @@ final class Parts {
     private final Map<String, Integer> stageIndex = new HashMap<>();
     /** Library stages already reported for a rail the machine lacks: one error each. */
     private final java.util.Set<String> missingRails = new java.util.HashSet<>();
+    /** User tubes replacing a library tube already reported for a library stage on them ("basing T", "model T"). */
+    private final java.util.Set<String> userTubeReports = new java.util.HashSet<>();
     private final Declarations decls;
     private final Diagnostics diags;
     private final TubeModelCheck modelCheck;
@@ -176,6 +178,19 @@ final class Parts {
                         + "bplus " + LIBRARY_RAILS.get("bplus") + ", bias " + LIBRARY_RAILS.get("bias") + " and relay "
                         + LIBRARY_RAILS.get("relay") + "), or declare a stage of your own");
         return -1;
+    }
+
+    /**
+     * Where a user's block for tube {@code tube} names it, when {@code stage} is a library stage and that block
+     * replaces the library's tube: what the library stage lacks is the user's block's to give, so it is reported
+     * there (once per tube), not in the library's text. Null otherwise.
+     */
+    private Span userTubeUnderLibraryStage(Prop stage, String tube) {
+        Prop t = decls.tubes.get(tube);
+        if (t == null || !stage.span().file().equals(SourceLoader.LIBRARY) || t.span().file().equals(SourceLoader.LIBRARY)) {
+            return null;
+        }
+        return t.values().get(0).span();
     }
 
     /** Whether a tube type of that name is declared (here or in the library). */
@@ -323,10 +338,18 @@ final class Parts {
         boolean blockOk = diags.errorCount() == errorsBefore;
         PropLine tubeLine = b.line("tube");
         int tube = tubeLine == null ? -1 : tube(tubeLine.word("tube"), tubeLine.span("tube"));
+        Span userTube = tubeLine == null ? null : userTubeUnderLibraryStage(p, tubeLine.word("tube"));
         if (tube >= 0 && tubes.get(tube).basings().isEmpty()) {
-            diags.warning(tubeLine.span("tube"), "stage '" + name + "' is built on " + tubes.get(tube).name()
-                    + ", which has no basing data: the wire list cannot name its pins",
-                    "add `basing BASE \"PIN electrode.section, ...\" from \"SOURCE\"` to tube " + tubes.get(tube).name());
+            String t = tubes.get(tube).name();
+            String hint = "add `basing BASE \"PIN electrode.section, ...\" from \"SOURCE\"` to tube " + t;
+            if (userTube == null) {
+                diags.warning(tubeLine.span("tube"), "stage '" + name + "' is built on " + t
+                        + ", which has no basing data: the wire list cannot name its pins", hint);
+            } else if (userTubeReports.add("basing " + t)) {
+                diags.warning(userTube, "tube '" + t + "' replaces the library's and has no basing data: the wire "
+                        + "list cannot name the pins of library stage '" + name + "' or any other stage built on it",
+                        hint + " (the library's own block has one), or take this block out to use the library's");
+            }
         }
         PropLine sections = b.line("sections");
         PropLine loadLine = b.line("load");
@@ -360,6 +383,7 @@ final class Parts {
         boolean perInput = sections != null && sections.has("per");
         StageCircuitSpec circuit = !blockOk ? null : new StageCircuitReader(diags,
                 (r, at) -> r.equals("ground") || stageRail(r, at, name, p, use) >= 0, modelInError::contains)
+                .userTube(userTube, userTubeReports)
                 .read(name, function, tubes.get(tube), b, (int) b.num("sections"), fanIn, perInput, p.values().get(0).span());
         if (circuit != null && circuit.outputAtCathode() && circuit.load() == null) {
             // A follower's load, as delays and dissipation see it, is its cathode resistor.

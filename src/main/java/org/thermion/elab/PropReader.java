@@ -7,6 +7,7 @@ import org.thermion.lang.ast.Value;
 
 import java.math.BigInteger;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -19,6 +20,8 @@ import java.util.regex.Pattern;
  */
 final class PropReader {
     private static final Pattern GLUED = Pattern.compile("([0-9]+(?:\\.[0-9]+)?)([A-Za-z]+)");
+    /** A resistor's marking with its multiplier as the decimal point (IEC 60062): 4k7, 2M2, 4R7. */
+    private static final Pattern RESISTOR_CODE = Pattern.compile("([0-9]+)([kKMRr])([0-9]+)");
 
     private final Prop prop;
     private final Diagnostics diags;
@@ -42,6 +45,11 @@ final class PropReader {
 
     Value peek() {
         return atEnd() ? null : values.get(pos);
+    }
+
+    /** The value {@code ahead} places past the next, or null. */
+    private Value peek(int ahead) {
+        return pos + ahead >= values.size() ? null : values.get(pos + ahead);
     }
 
     boolean peekWord(String w) {
@@ -134,6 +142,17 @@ final class PropReader {
                 pos++;
                 return sign * x * checkUnit(Unit.WORDS.get(w.text()), unit, w.span(), what);
             }
+            if (u instanceof Value.Word w && Unit.meant(w.text()) != null) {
+                String meant = Unit.meant(w.text(), unit);
+                fail(w.span(), "unknown unit '" + w.text() + "' in " + what, meant != null ? "write " + n.text() + " "
+                        + meant + " (" + what + " takes " + unit.example() + ")" : "write it with " + unit.example());
+                return Double.NaN;
+            }
+            if (u instanceof Value.Sym c && c.text().equals(",") && peek(1) instanceof Value.Num) {
+                fail(c.span(), what + " has a decimal comma", "write a decimal point: " + n.text() + "." + ((Value.Num)
+                        peek(1)).text());
+                return Double.NaN;
+            }
             fail(u == null ? n.span() : u.span(), what + " needs a unit", "write it with " + unit.example());
             return Double.NaN;
         }
@@ -145,7 +164,17 @@ final class PropReader {
                 return sign * x * checkUnit(Unit.WORDS.get(m.group(2)), unit, w.span(), what);
             }
             if (m.matches()) {
-                fail(w.span(), "unknown unit '" + m.group(2) + "' in " + what, "write it with " + unit.example());
+                String meant = Unit.meant(m.group(2), unit);
+                fail(w.span(), "unknown unit '" + m.group(2) + "' in " + what, meant != null ? "write " + m.group(1)
+                        + " " + meant + " (" + what + " takes " + unit.example() + ")" : "write it with " + unit.example());
+                return Double.NaN;
+            }
+            Matcher code = RESISTOR_CODE.matcher(w.text());
+            if (unit == Unit.OHM && code.matches()) {
+                String word = code.group(2).toUpperCase(Locale.ROOT).equals("R") ? "ohm"
+                        : code.group(2).equals("M") ? "M" : "k";
+                fail(w.span(), "expected " + what + " (a number with " + unit.example() + "), found the resistor "
+                        + "marking '" + w.text() + "'", "write " + code.group(1) + "." + code.group(3) + " " + word);
                 return Double.NaN;
             }
         }

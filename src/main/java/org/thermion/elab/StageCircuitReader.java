@@ -30,10 +30,24 @@ final class StageCircuitReader {
     /** Tubes whose model line is written but in error (reported there): their stages say no more. */
     private final java.util.function.Predicate<String> modelInError;
 
+    /** A user's block replacing the library's tube of a library stage (null otherwise), and what was said there. */
+    private Span userTube;
+    private java.util.Set<String> userTubeReports = new java.util.HashSet<>();
+
     StageCircuitReader(Diagnostics diags, BiPredicate<String, Span> rail, java.util.function.Predicate<String> modelInError) {
         this.diags = diags;
         this.rail = rail;
         this.modelInError = modelInError;
+    }
+
+    /**
+     * For a library stage on a tube a user's block replaces: a missing model is reported at that block ({@code at}),
+     * once per tube ({@code reported} holds "model TUBE" once said), since the library's text is not the user's.
+     */
+    StageCircuitReader userTube(Span at, java.util.Set<String> reported) {
+        this.userTube = at;
+        this.userTubeReports = reported;
+        return this;
     }
 
     /** The stage's circuit; null for a stage known by its draws (or after a reported error). */
@@ -48,7 +62,16 @@ final class StageCircuitReader {
             return null; // a stage known by its typed-in currents, as stages were before circuits
         }
         if (tube.curves() == null) {
-            if (!declared && !modelInError.test(tube.name())) {
+            if (!declared && !modelInError.test(tube.name()) && userTube != null) {
+                if (userTubeReports.add("model " + tube.name())) {
+                    diags.error(userTube, "tube '" + tube.name() + "' replaces the library's and has no model line ("
+                                    + TubeCurvesReader.needs(tube.kind()) + "), so library stage '" + stage
+                                    + "' (and any other stage on it that states no currents) cannot be solved",
+                            "add `" + TubeCurvesReader.example(tube.kind()) + "` to this block with the figures' "
+                                    + "source (the library's own " + tube.name() + " block has one), or take this "
+                                    + "block out to use the library's");
+                }
+            } else if (!declared && !modelInError.test(tube.name())) {
                 PropLine t = b.line("tube");
                 diags.error(t == null ? titleSpan : t.span("tube"), "stage '" + stage + "': tube '" + tube.name()
                                 + "' has no model line (" + TubeCurvesReader.needs(tube.kind())

@@ -79,7 +79,8 @@ final class TubeCurvesReader {
         PropLine at = b.has("fit") ? b.line("fit") : b.line("model");
         diags.error(at.prop().key().span(), "tube '" + t.name() + "': its model cannot be built: " + why,
                 b.has("fit") ? "check the point lines against the tube's sheet (a unit, a sign, a decimal point), "
-                        + "give more points, or fit fewer parameters" : "check the model line's parameters");
+                        + "give more points, or fit fewer parameters" : "check the model line's figures against the tube's sheet (a "
+                        + "power of ten, a unit, a decimal point)");
         return false;
     }
 
@@ -100,13 +101,16 @@ final class TubeCurvesReader {
                     : new TubeLaw.Gas(m.num("critical"), Double.NaN);
         }
         List<String> need = kind == TubeKind.PENTODE ? PENTODE_PARAMS : TRIODE_PARAMS;
-        boolean ok = true;
-        for (String p : need) {
-            if (!m.has("k_" + p)) {
-                diags.error(m.prop().span(), "tube '" + tube + "': the model has no parameter " + p,
-                        "add `" + p + " <number>` to the model line, e.g. `" + example(kind) + "` (Koren 1996, REFERENCES.md)");
-                ok = false;
-            }
+        List<String> missing = need.stream().filter(p -> !m.has("k_" + p)).toList();
+        boolean ok = missing.isEmpty();
+        if (!ok) {
+            // one error for the line, naming every parameter it lacks
+            String which = missing.size() == 1 ? "parameter " + missing.get(0)
+                    : "parameters " + String.join(", ", missing.subList(0, missing.size() - 1)) + " and "
+                    + missing.get(missing.size() - 1);
+            diags.error(m.prop().span(), "tube '" + tube + "': the model has no " + which,
+                    "add " + missing.stream().map(p -> "`" + p + " <number>`").collect(java.util.stream.Collectors
+                            .joining(", ")) + " to the model line, e.g. `" + example(kind) + "` (Koren 1996, REFERENCES.md)");
         }
         if (kind == TubeKind.TRIODE && m.has("kg2")) {
             diags.error(m.span("kg2"), "tube '" + tube + "' is a triode: kg2 is a pentode's screen parameter",
@@ -165,8 +169,9 @@ final class TubeCurvesReader {
             if (pointRejected) {
                 return false; // a point line's own error is reported: counting the rest would only repeat it
             }
-            diags.error(fit.prop().key().span(), "tube '" + tube + "': " + into.size() + " parameters to fit but "
-                    + points.size() + " point lines", "give at least one point per fitted parameter, or fit fewer");
+            diags.error(fit.prop().key().span(), "tube '" + tube + "': " + org.thermion.text.Nouns.count(into.size(),
+                    "parameter") + " to fit but " + org.thermion.text.Nouns.count(points.size(), "point line"),
+                    "give at least one point per fitted parameter, or fit fewer");
             return false;
         }
         return true;

@@ -24,6 +24,49 @@ enum Unit {
             Map.entry("M", new Scaled(OHM, 1e6)),
             Map.entry("W", new Scaled(WATT, 1)), Map.entry("mW", new Scaled(WATT, 1e-3)));
 
+    /** Spellings builders use for unit words Thermion reads, by their lower case; a case slip is found apart. */
+    private static final Map<String, String> SPELLINGS = Map.ofEntries(
+            Map.entry("volt", "V"), Map.entry("volts", "V"), Map.entry("vdc", "V"), Map.entry("kilovolt", "kV"),
+            Map.entry("amp", "A"), Map.entry("amps", "A"), Map.entry("mamp", "mA"), Map.entry("milliamp", "mA"),
+            Map.entry("milliamps", "mA"), Map.entry("sec", "s"), Map.entry("secs", "s"), Map.entry("msec", "ms"),
+            Map.entry("usec", "us"), Map.entry("nsec", "ns"), Map.entry("ohms", "ohm"), Map.entry("r", "ohm"),
+            Map.entry("kohm", "k"), Map.entry("kohms", "k"), Map.entry("kr", "k"), Map.entry("meg", "M"),
+            Map.entry("mohm", "M"), Map.entry("megohm", "M"), Map.entry("megohms", "M"), Map.entry("watt", "W"),
+            Map.entry("watts", "W"));
+
+    /**
+     * The unit word of dimension {@code want} that {@code word} was likely meant as ({@code K} for {@code k},
+     * {@code ma} for {@code mA}, {@code kohm}, {@code volts}, {@code meg}); null when none is near.
+     */
+    static String meant(String word, Unit want) {
+        String lower = word.toLowerCase(Locale.ROOT);
+        String spelt = SPELLINGS.get(lower);
+        if (spelt != null && WORDS.get(spelt).unit() == want) {
+            return spelt;
+        }
+        String found = null;
+        for (Map.Entry<String, Scaled> e : WORDS.entrySet()) {
+            if (e.getValue().unit() == want && e.getKey().toLowerCase(Locale.ROOT).equals(lower)) {
+                if (found != null) {
+                    return null; // 'm' could be milli or mega: name neither
+                }
+                found = e.getKey();
+            }
+        }
+        return found;
+    }
+
+    /** The unit word of any dimension that {@code word} was likely meant as, or null (a word that is no unit). */
+    static String meant(String word) {
+        for (Unit u : values()) {
+            String m = meant(word, u);
+            if (m != null) {
+                return m;
+            }
+        }
+        return null;
+    }
+
     /** A unit word's dimension and its factor to SI. */
     record Scaled(Unit unit, double factor) {
     }

@@ -69,6 +69,16 @@ final class SyntaxWording {
         if (msg.contains("<EOF>") && msg.contains("'}'")) {
             return "check that every '{' has its '}'";
         }
+        // symbols a builder copies from a sheet: the language spells its units in plain letters
+        if (msg.contains("'\u00b5") || msg.contains("'\u03bc")) {
+            return "write micro as u: uA, uF, us";
+        }
+        if (msg.contains("'\u2126") || msg.contains("'\u03a9")) {
+            return "write ohm, k or M for resistance: 100 k, 4.7 M";
+        }
+        if (msg.contains("'\u00b1")) {
+            return "write one value, with its sign; a tolerance either way is written as one figure (`margins { rails 5 percent }`)";
+        }
         return null;
     }
 }
