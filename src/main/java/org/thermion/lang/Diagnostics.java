@@ -12,6 +12,8 @@ public final class Diagnostics {
     public static final int LIMIT = 20;
 
     private final List<Diagnostic> items = new ArrayList<>();
+    /** Every diagnostic kept or counted: a second report of the same words at the same place is dropped. */
+    private final java.util.Set<Diagnostic> seen = new java.util.HashSet<>();
     private int errors;
     private int dropped;
 
@@ -28,6 +30,9 @@ public final class Diagnostics {
     }
 
     public void add(Diagnostic d) {
+        if (!seen.add(d)) {
+            return; // two readers of one line (a stage's rail checked for its load and for its circuit) said it alike
+        }
         if (d.isError()) {
             errors++;
             if (errors > LIMIT) {
