@@ -88,13 +88,13 @@ public final class MarginAnalysis {
 
     /**
      * The stage whose curve stands for a receiver's input: the receiver itself, or for a
-     * flip-flop (no DC input: it is steered) one of its halves as an inverter, which is what
-     * a steering level must cut off or turn on.
+     * flip-flop (no DC input: it is steered) the flip-flop opened at the link the steering
+     * drives ({@link SteeredHalf}): the half a steering level must cut off or turn on, with
+     * the other half on their shared cathode return and on its plate.
      */
     static StageCircuit swept(StageCircuit receiver) {
         if (receiver instanceof FlipFlop f) {
-            return TubeStage.inverter(f.name(), f.tube(), 1, new LoadResistor(f.loadOhms()), f.plateRail(), f.cathode(),
-                    f.cross(), null);
+            return new SteeredHalf(f);
         }
         return receiver;
     }

@@ -5,7 +5,7 @@ package org.thermion.circuit;
  * voltages (each input an ideal source at the driving net's level) and, for stages that
  * remember, a stored state (which half of a flip-flop conducts, whether a thyratron has fired).
  */
-public sealed interface StageCircuit permits TubeStage, DiodeGate, FlipFlop, ThyratronStage {
+public sealed interface StageCircuit permits TubeStage, DiodeGate, FlipFlop, ThyratronStage, SteeredHalf {
 
     /** The stage's name (the library's stage name). */
     String name();

@@ -273,11 +273,17 @@ public final class LevelAnalysis {
         int limit = Integer.MAX_VALUE;
         String limitKind = "";
         for (StageCircuit r : new java.util.LinkedHashSet<>(receivers)) {
+            if (!MarginAnalysis.restores(r)) {
+                continue; // a diode gate or follower has no threshold of its own: judged at its output
+            }
             int k = analysis.fanOut(d, limitAt, r, minMargin, corner);
             if (k < limit) {
                 limit = k;
                 limitKind = r.name();
             }
+        }
+        if (limit == Integer.MAX_VALUE) {
+            limit = -1;
         }
         double worstVoh = analysis.margins(d, highAt, receivers, high.corner()).voh();
         double worstVol = analysis.margins(d, lowAt, receivers, low.corner()).vol();

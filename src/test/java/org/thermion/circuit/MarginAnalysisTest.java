@@ -121,6 +121,27 @@ class MarginAnalysisTest {
         assertThat(s.solves()).isEqualTo(solves);
     }
 
+    /**
+     * A flip-flop's steering threshold counts the other half. With a common cathode resistor the
+     * conducting half holds the cathode up, so the half being steered starts to conduct only at
+     * a higher input than it would on a resistor of its own; with grounded cathodes the two
+     * curves differ only by the other half's divider and grid on the plate.
+     */
+    @Test
+    void aFlipFlopsInputThresholdCountsTheOtherHalfOnASharedCathodeResistor() {
+        KorenTriode tube = (KorenTriode) LibraryParts.tubes().require("12AU7");
+        GridNetwork cross = new GridNetwork(1e6, 1.2e6, "bias", 0);
+        StageSolver s = new StageSolver(rails48);
+        FlipFlop shared = new FlipFlop("ff", tube, 100e3, "bplus", cross, new CathodeReturn(2.2e3, RailSet.GROUND));
+        Thresholds opened = TransferCurve.thresholds(s, MarginAnalysis.swept(shared), Corner.NOMINAL);
+        Thresholds alone = TransferCurve.thresholds(s, TubeStage.inverter("half", tube, 1, new LoadResistor(100e3),
+                "bplus", shared.cathode(), cross, null), Corner.NOMINAL);
+        assertThat(opened.vil()).isGreaterThan(alone.vil() + 1);
+        // the other half's current in 2.2 k: about 0.4 mA, 1 V on the cathode, 2.2 V at the input
+        // through the 1 M / 1.2 M divider (x 2.2 / 1.2); the sweep lands within the same volts
+        assertThat(opened.vil() - alone.vil()).isLessThan(6);
+    }
+
     @Test
     void theWorstCornerIsNamed() {
         Corner c = Corner.NOMINAL.with("rail.bplus", 0.95).with("driver.load", 1.05).with("driver.emission", 0.7);

@@ -68,8 +68,9 @@ class NodeCurrentPropertyTest {
                         rnd.nextBoolean() ? DiodeGate.Kind.AND : DiodeGate.Kind.OR, 1 + rnd.nextInt(4), r(rnd, 5e3, 500e3),
                         rnd.nextBoolean() ? "bplus" : "bias");
             case 1:
-                return new FlipFlop("ff", (KorenTriode) lib.require("12AU7"), r(rnd, 5e3, 100e3), "bplus",
+                FlipFlop ff = new FlipFlop("ff", (KorenTriode) lib.require("12AU7"), r(rnd, 5e3, 100e3), "bplus",
                         new GridNetwork(r(rnd, 10e3, 1e6), r(rnd, 10e3, 1e6), "bias", 0), k);
+                return rnd.nextBoolean() ? ff : new SteeredHalf(ff); // opened at its steered link, as thresholds sweep it
             case 2:
                 return new TubeStage("cf", lib.require(rnd.nextBoolean() ? "12AU7" : "12AT7"),
                         TubeStage.Arrangement.PARALLEL, 1, 1, new DirectToRail(), "bplus",
