@@ -72,12 +72,18 @@ final class TimingCommand extends ReportCommand {
             if (Double.isNaN(t)) {
                 return badInput("--period '" + period + "' is not a time; write a positive number with s, ms, us or ns (e.g. 50us)");
             }
+            if (t > MAX_SECONDS) {
+                return badInput("--period '" + period + "' is out of range: at most 3600 s, as in the clock block");
+            }
         }
         double access = Double.NaN;
         if (romAccess != null) {
             access = parseTime(romAccess);
             if (Double.isNaN(access)) {
                 return badInput("--rom-access '" + romAccess + "' is not a time; write a positive number with s, ms, us or ns (e.g. 2us)");
+            }
+            if (access > MAX_SECONDS) {
+                return badInput("--rom-access '" + romAccess + "' is out of range: at most 3600 s, as a clock period");
             }
         }
         Machine m = new MachineLoader().load(file, err, false);
@@ -132,6 +138,9 @@ final class TimingCommand extends ReportCommand {
     }
 
     /** Seconds from text such as {@code 50us}; NaN when it is not a positive time. */
+    /** The longest period or access time taken: the clock block's own limit (1e400s reads as infinite). */
+    static final double MAX_SECONDS = 3600;
+
     static double parseTime(String text) {
         Matcher mt = TIME.matcher(text);
         if (!mt.matches()) {

@@ -293,7 +293,22 @@ final class PropReader {
             pos++;
             return;
         }
-        fail(here(), "expected '" + w + "'" + found(peek()), null);
+        fail(here(), "expected '" + w + "'" + found(peek()), "percent".equals(w) ? percentHint() : null);
+    }
+
+    /**
+     * A share written without `percent` right after its number: a fraction (0.7 for 70 %) is the likely slip, and
+     * 1.5 may be 150 % meant as a fraction; say what the line would read in percent.
+     */
+    private String percentHint() {
+        Value before = pos > 0 ? values.get(pos - 1) : null;
+        if (!(before instanceof Value.Num n)) {
+            return null;
+        }
+        double x = parseDouble(n);
+        String as = Unit.number(x) + " percent";
+        return x > 0 && x <= 2 ? "write it in percent: `" + as + "` is " + Unit.number(x) + " %; a fraction "
+                + Unit.number(x) + " is `" + Unit.number(100 * x) + " percent`" : "write `" + as + "`";
     }
 
     boolean acceptWord(String w) {

@@ -12,6 +12,11 @@ public final class Diagnostics {
     public static final int LIMIT = 20;
 
     private final List<Diagnostic> items = new ArrayList<>();
+    /**
+     * Every placed diagnostic kept or counted: a second report of the same words at the same place is dropped
+     * (unplaced ones are not: a caller may count errors past the limit with alike placeholders).
+     */
+    private final java.util.Set<Diagnostic> seen = new java.util.HashSet<>();
     private int errors;
     private int dropped;
 
@@ -28,6 +33,9 @@ public final class Diagnostics {
     }
 
     public void add(Diagnostic d) {
+        if (d.span() != null && d.span().isKnown() && !seen.add(d)) {
+            return; // two readers of one line (a stage's rail checked for its load and for its circuit) said it alike
+        }
         if (d.isError()) {
             errors++;
             if (errors > LIMIT) {

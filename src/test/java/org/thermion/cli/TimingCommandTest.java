@@ -75,6 +75,17 @@ class TimingCommandTest {
     }
 
     @Test
+    void aPeriodOrAccessTimeTooLargeToMeanAnythingIsBadInput() {
+        // 1e400 s reads as infinity: before, timing ran with it and printed "shortest safe period Infinity s".
+        Run r = run("timing", RC.toString(), "--rom-access", "1e400s");
+        assertThat(r.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(r.err()).contains("--rom-access '1e400s' is out of range: at most 3600 s");
+        Run p = run("timing", RC.toString(), "--period", "7200s");
+        assertThat(p.code()).isEqualTo(ExitCodes.BAD_INPUT);
+        assertThat(p.err()).contains("--period '7200s' is out of range");
+    }
+
+    @Test
     void csvAndJsonCarryThePath() {
         Run csv = run("timing", RC.toString(), "--format", "csv");
         List<List<String>> records = ReportChecks.assertCsv(csv.out());
