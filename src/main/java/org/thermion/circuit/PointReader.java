@@ -1,5 +1,7 @@
 package org.thermion.circuit;
 
+import org.thermion.text.Quantities;
+
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -8,18 +10,6 @@ import java.util.Map;
 /** Turns a solved circuit's node voltages into an {@link OperatingPoint}. */
 final class PointReader {
     private PointReader() {
-    }
-
-    /** A current for a message: mA from 0.1 mA to 1 A (the common case), else uA or A, so no figure reads 0.00. */
-    static String amps(double a) {
-        double m = Math.abs(a);
-        if (m >= 1) {
-            return String.format(java.util.Locale.ROOT, "%.2f A", a);
-        }
-        if (m >= 1e-4) {
-            return String.format(java.util.Locale.ROOT, "%.2f mA", a * 1e3);
-        }
-        return String.format(java.util.Locale.ROOT, "%.2f uA", a * 1e6);
     }
 
     static DcResult read(String stage, Circuit c, DcSolver.Solution s, RailSet rails, String ownPrefix) {
@@ -44,7 +34,7 @@ final class PointReader {
             var r = rails.rail(e.getKey());
             if (r != null && Double.isFinite(r.limitAmps()) && Math.abs(e.getValue()) > r.limitAmps()) {
                 return new NoDcSolution(stage, "rail " + e.getKey() + " cannot supply the load: "
-                        + amps(Math.abs(e.getValue())) + " drawn, limit " + amps(r.limitAmps()), "raise rail " + e.getKey()
+                        + Quantities.amps(Math.abs(e.getValue())) + " drawn, limit " + Quantities.amps(r.limitAmps()), "raise rail " + e.getKey()
                         + "'s current limit, or use a larger plate load so that the stage draws less");
             }
         }

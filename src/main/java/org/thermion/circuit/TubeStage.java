@@ -78,6 +78,11 @@ public record TubeStage(String name, TubeModel tube, Arrangement arrangement, in
     }
 
     public Load inputLoad() {
+        if (output == Output.CATHODE) {
+            // a follower's cathode rides a volt or two below its grid, not at its return rail:
+            // the grid draws no current and the input sees its grid network alone
+            return new GridLoad(grid, GridCurrentLaw.NONE, cathode.rail());
+        }
         GridCurrentLaw law = tube instanceof KorenTriode t ? t.grid() : ((KorenPentode) tube).grid();
         return new GridLoad(grid, law, cathode.rail());
     }

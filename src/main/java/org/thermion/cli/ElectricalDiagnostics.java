@@ -24,7 +24,8 @@ final class ElectricalDiagnostics {
         Map<String, Span> spans = new LinkedHashMap<>();
         for (Finding f : findings) {
             Span s = f.use() != null ? (f.use().latch() ? where.latch(f.use().index()) : where.gate(f.use().index()))
-                    : f.softStart() >= 0 ? where.softStart(f.softStart()) : where.heaterRule(f.heaterRule());
+                    : f.softStart() >= 0 ? where.softStart(f.softStart())
+                    : f.rail() >= 0 ? where.rail(f.rail()) : where.heaterRule(f.heaterRule());
             String key = s + "|" + f.kind() + "|" + f.error();
             if (first.putIfAbsent(key, f) == null) {
                 spans.put(key, s);

@@ -356,7 +356,7 @@ public final class Elaborator {
         if (diags.hasErrors()) {
             return null;
         }
-        sourceMap = new SourceMap(gateSpans, latchSpans, packer.ruleSpans(), softStartSpans, marginRules);
+        sourceMap = new SourceMap(gateSpans, latchSpans, packer.ruleSpans(), softStartSpans, parts.railSpans, marginRules);
         String[] places = new String[nb.names.size()];
         for (int n = 0; n < places.length; n++) {
             org.thermion.lang.Span s = nb.driverSpan.get(n);

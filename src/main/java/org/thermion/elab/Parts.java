@@ -27,6 +27,8 @@ final class Parts {
     final List<TubeType> tubes = new ArrayList<>();
     final List<StageType> stages = new ArrayList<>();
     final List<Rail> rails = new ArrayList<>();
+    /** Each rail's name where it is declared, in {@link #rails}' order ({@link Span#none()} for an assumed one). */
+    final List<Span> railSpans = new ArrayList<>();
     final Map<String, Integer> railIndex = new LinkedHashMap<>();
     final Map<String, Integer> realize = new HashMap<>();
     /** The rails the parts library's stages are designed for, as its header says (for hints only). */
@@ -75,6 +77,7 @@ final class Parts {
         railIndex.put(name, rails.size());
         rails.add(new Rail(name, Double.isNaN(volts) ? 0 : volts, b.num("source"),
                 Double.isNaN(limit) ? Double.POSITIVE_INFINITY : limit));
+        railSpans.add(p.values().get(0).span());
     }
 
     private void readRealize(Prop r) {
@@ -147,6 +150,7 @@ final class Parts {
             assumedRails.add(name);
             railIndex.put(name, rails.size());
             rails.add(new Rail(name, Double.NaN, Double.NaN, Double.POSITIVE_INFINITY));
+            railSpans.add(Span.none());
             return rails.size() - 1;
         }
         if (i == null) {

@@ -1,6 +1,7 @@
 package org.thermion.levels;
 
 import org.thermion.text.Nouns;
+import org.thermion.text.Quantities;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -44,8 +45,36 @@ public final class ElectricalCheck {
         margins(a, out);
         drives(a, out);
         ratings(a, out);
-        heaters(m, out);
+        Budget budget = new Budget(m);
+        supplies(m, budget, a.tolerances().rail(), out);
+        heaters(m, budget, out);
         return out;
+    }
+
+    /**
+     * A rail feeding stages whose source resistance drops it, at the static peak load, further
+     * than the rail tolerance that every level and margin is figured within: an error at the rail.
+     */
+    private static void supplies(Machine m, Budget budget, double tolerance, List<Finding> out) {
+        for (Budget.Supply s : budget.supply()) {
+            Rail rail = m.rails().get(s.rail());
+            double nominal = Math.abs(rail.volts());
+            double loaded = Math.abs(s.voltsAtPeak());
+            if (!(s.stageAmps() > 0) || !(nominal > 0) || !Double.isFinite(loaded)
+                    || !((nominal - loaded) / nominal > tolerance)) {
+                continue; // a heater-only rail is judged by its heaters (within ±10 %), not the logic's tolerance
+            }
+            // the loads are conductances: at the nominal voltage they would draw this much
+            double atNominal = loaded > 0 ? s.peakAmps() * nominal / loaded : nominal / rail.sourceOhms();
+            double stiff = tolerance * nominal / atNominal;
+            out.add(Finding.atRail(true, "supply", s.rail(), "rail " + rail.name() + " sags to " + v(loaded)
+                    + " under its peak load (" + ma(atNominal) + " at " + v(nominal) + " nominal, behind "
+                    + ohms(rail.sourceOhms()) + " of source): " + String.format(Locale.ROOT, "%.1f %%",
+                    100 * (nominal - loaded) / nominal) + " down, past the "
+                    + String.format(Locale.ROOT, "±%.0f %%", 100 * tolerance) + " every level and margin is figured within",
+                    "a stiffer supply (a source resistance of " + ohms(stiff) + " or less holds it within "
+                            + String.format(Locale.ROOT, "%.0f %%", 100 * tolerance) + " at this load), or less load on it"));
+        }
     }
 
     /** A stage use with no DC solution in some input state, once per use: why, and the cure. */
@@ -160,6 +189,10 @@ public final class ElectricalCheck {
             } else if (d.use() == null) {
                 fix = "a smaller `series` plate resistor in stage " + d.stage() + ", a coil of lower pick-up voltage, or a "
                         + "higher rail";
+            } else if (d.onWorstAmps() < NEVER_FIRED_AMPS) {
+                fix = "stage " + d.stage() + " never conducts here: its grid network never lifts the grid to where the "
+                        + "tube turns on (for a thyratron, its critical grid voltage); a smaller series resistor or a larger "
+                        + "one to the bias rail in its grid network";
             } else {
                 fix = "a coil of lower resistance or current, more tube sections in parallel, or a higher rail";
             }
@@ -215,11 +248,11 @@ public final class ElectricalCheck {
      * Series strings at the rail's voltage under the machine's static load: the budget's heater
      * analysis already takes each rail at its loaded voltage ({@code power.LoadedRail}).
      */
-    private static void heaters(Machine m, List<Finding> out) {
+    private static void heaters(Machine m, Budget budget, List<Finding> out) {
         if (m.heaterStrings().isEmpty()) {
             return;
         }
-        HeaterAnalysis h = new Budget(m).heaters();
+        HeaterAnalysis h = budget.heaters();
         for (HeaterAnalysis.StringResult s : h.strings()) {
             HeaterString hs = s.string();
             if (hs.envelopes().size() < 2) {
@@ -246,18 +279,20 @@ public final class ElectricalCheck {
         return String.format(Locale.ROOT, "%.2f V", volts);
     }
 
+    /** A current in its own unit (uA, mA or A), so no figure reads 0.00 or 100000.00. */
     static String ma(double amps) {
-        return String.format(Locale.ROOT, "%.2f mA", amps * 1e3);
+        return Quantities.amps(amps);
     }
 
     static String ohms(double ohms) {
-        boolean k = ohms >= 1000;
-        String n = new java.math.BigDecimal(k ? ohms / 1000 : ohms).round(new java.math.MathContext(3)).stripTrailingZeros()
+        double scale = ohms >= 1e6 ? 1e6 : ohms >= 1000 ? 1000 : 1;
+        String n = new java.math.BigDecimal(ohms / scale).round(new java.math.MathContext(3)).stripTrailingZeros()
                 .toPlainString();
-        return n + (k ? " k" : " ohm");
+        return n + (scale == 1e6 ? " M" : scale == 1000 ? " k" : " ohm");
     }
 
     static String w(double watts) {
-        return String.format(Locale.ROOT, "%.2f W", watts);
+        return Math.abs(watts) < 0.1 ? String.format(Locale.ROOT, "%.1f mW", watts * 1e3)
+                : String.format(Locale.ROOT, "%.2f W", watts);
     }
 }

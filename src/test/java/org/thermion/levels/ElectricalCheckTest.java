@@ -261,7 +261,7 @@ class ElectricalCheckTest {
         assertThat(ElectricalCheck.findings(l.machine(), a)).singleElement().satisfies(x -> {
             assertThat(x.error()).isTrue();
             assertThat(x.kind()).isEqualTo("coil");
-            assertThat(x.message()).contains("soft start 'heater_soft'", "gets 0.00 mA");
+            assertThat(x.message()).contains("soft start 'heater_soft'", "gets 0.00 uA");
             assertThat(x.fix()).contains("its thyratron never fires", "below its critical voltage");
         });
         // 100 k and 100 k: (48 - 24) / 2 = +12 V on the grid, above critical: it fires, as in the test above

@@ -68,6 +68,27 @@ class LevelAnalysisTest {
         return a.nets().stream().filter(n -> n.name().equals(name)).findFirst().orElseThrow();
     }
 
+    /**
+     * A cathode follower's grid feeds a cathode that rides just below it, not one held at its
+     * return rail: it draws no grid current, so a cut-off inverter's plate driving it stays at
+     * B+ (before, the grid was taken to conduct into -24 V and the plate read -22.7 V).
+     */
+    @Test
+    void aCathodeFollowerOnANetDrawsNoGridCurrentFromIt() {
+        String text = RAILS + """
+                module top {
+                  in a
+                  out y
+                  net m
+                  m = !a
+                  y = cathode_follower(m)
+                }
+                machine cf { top top; inputs a; outputs y }
+                """;
+        NetLevel m = net(LevelAnalysis.of(load(text).machine(), MarginRules.DEFAULT), "m");
+        assertThat(m.voh()).isCloseTo(48.0, within(0.05));
+    }
+
     @Test
     void aNetFeedingThreeInputsIsLoadedByAllOfThemAndNamedAsWritten() {
         Loaded l = load(CHAIN);
