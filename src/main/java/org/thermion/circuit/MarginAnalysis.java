@@ -243,12 +243,12 @@ public final class MarginAnalysis {
                 continue;
             }
             last = receiver;
+            if (!restores(receiver)) {
+                continue; // judged at its output: no sweep (a diode gate carrying its loads is one per chain)
+            }
             Thresholds t = thresholds(receiver, corner);
             if (t == null) {
                 return new NoiseMargins(voh, vol, null, n, "receiver " + receiver.name() + " has no DC solution");
-            }
-            if (!restores(receiver)) {
-                continue;
             }
             vil = Math.min(vil, t.vil());
             vih = Math.max(vih, t.vih());
