@@ -29,16 +29,12 @@ public record FlipFlop(String name, KorenTriode tube, double loadOhms, String pl
     }
 
     public int build(CircuitBuilder b, double[] inputVolts, boolean stored) {
-        int rail = b.rail(plateRail);
-        int k = cathode.attach(b);
-        int qa = b.node("plateA");
-        int qb = b.node("plateB");
-        b.resistor("load", rail, qa, loadOhms);
-        b.resistor("load", rail, qb, loadOhms);
-        int ga = cross.attach(b, qb, "A");
-        int gb = cross.attach(b, qa, "B");
-        b.triode("tubeA", tube, 1, qa, ga, k);
-        b.triode("tubeB", tube, 1, qb, gb, k);
+        int[] n = halves(b, -1);
+        int qa = n[0];
+        int qb = n[1];
+        int ga = n[2];
+        int gb = n[3];
+        int rail = n[4];
         double high = b.fixedVolts(rail);
         b.guess(qa, stored ? high : 0.1 * high);
         b.guess(qb, stored ? 0.1 * high : high);
@@ -47,6 +43,25 @@ public record FlipFlop(String name, KorenTriode tube, double loadOhms, String pl
         b.guess(ga, stored ? cut : 0);
         b.guess(gb, stored ? 0 : cut);
         return qa;
+    }
+
+    /**
+     * Both halves on their loads and the one cathode return, half B's grid network fed from
+     * plate A and half A's from {@code steering} (plate B when -1: the closed loop). Returns the
+     * nodes plate A, plate B, grid A, grid B and the plate rail.
+     */
+    int[] halves(CircuitBuilder b, int steering) {
+        int rail = b.rail(plateRail);
+        int k = cathode.attach(b);
+        int qa = b.node("plateA");
+        int qb = b.node("plateB");
+        b.resistor("load", rail, qa, loadOhms);
+        b.resistor("load", rail, qb, loadOhms);
+        int ga = cross.attach(b, steering >= 0 ? steering : qb, "A");
+        int gb = cross.attach(b, qa, "B");
+        b.triode("tubeA", tube, 1, qa, ga, k);
+        b.triode("tubeB", tube, 1, qb, gb, k);
+        return new int[] {qa, qb, ga, gb, rail};
     }
 
     public Load inputLoad() {

@@ -27,19 +27,7 @@ public record SteeredHalf(FlipFlop flipFlop) implements StageCircuit {
     }
 
     public int build(CircuitBuilder b, double[] inputVolts, boolean stored) {
-        FlipFlop f = flipFlop;
-        int rail = b.rail(f.plateRail());
-        int k = f.cathode().attach(b);
-        int qa = b.node("plateA");
-        int qb = b.node("plateB");
-        b.resistor("load", rail, qa, f.loadOhms());
-        b.resistor("load", rail, qb, f.loadOhms());
-        int in = b.source("in0", inputVolts[0]);
-        int ga = f.cross().attach(b, in, "A");
-        int gb = f.cross().attach(b, qa, "B");
-        b.triode("tubeA", f.tube(), 1, qa, ga, k);
-        b.triode("tubeB", f.tube(), 1, qb, gb, k);
-        return qa;
+        return flipFlop.halves(b, b.source("in0", inputVolts[0]))[0];
     }
 
     public Load inputLoad() {
