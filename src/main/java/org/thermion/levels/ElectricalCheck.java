@@ -69,10 +69,10 @@ public final class ElectricalCheck {
             double stiff = tolerance * nominal / atNominal;
             out.add(Finding.atRail(true, "supply", s.rail(), "rail " + rail.name() + " sags to " + v(loaded)
                     + " under its peak load (" + ma(atNominal) + " at " + v(nominal) + " nominal, behind "
-                    + ohms(rail.sourceOhms()) + " of source): " + String.format(Locale.ROOT, "%.1f %%",
+                    + Quantities.ohms(rail.sourceOhms()) + " of source): " + String.format(Locale.ROOT, "%.1f %%",
                     100 * (nominal - loaded) / nominal) + " down, past the "
                     + String.format(Locale.ROOT, "±%.0f %%", 100 * tolerance) + " every level and margin is figured within",
-                    "a stiffer supply (a source resistance of " + ohms(stiff) + " or less holds it within "
+                    "a stiffer supply (a source resistance of " + Quantities.ohms(stiff) + " or less holds it within "
                             + String.format(Locale.ROOT, "%.0f %%", 100 * tolerance) + " at this load), or less load on it"));
         }
     }
@@ -168,9 +168,9 @@ public final class ElectricalCheck {
                 : "relay coil of '" + d.name() + "' (" + d.stage() + ")";
         if (Double.isNaN(d.ratedAmps())) {
             out.add(new Finding(false, "coil", d.use(), -1, d.softStart(), what + " is a plain "
-                    + ohms(d.coilOhms()) + " resistor: its pick-up current is not stated, so whether it pulls in "
+                    + Quantities.ohms(d.coilOhms()) + " resistor: its pick-up current is not stated, so whether it pulls in "
                     + "(" + ma(d.onAmps()) + " nominal) cannot be judged",
-                    "write the load as `load coil " + ohms(d.coilOhms()) + " pickup <amps> from <rail>`"));
+                    "write the load as `load coil " + Quantities.ohms(d.coilOhms()) + " pickup <amps> from <rail>`"));
             return;
         }
         if (!(d.onWorstAmps() >= d.ratedAmps())) {
@@ -282,13 +282,6 @@ public final class ElectricalCheck {
     /** A current in its own unit (uA, mA or A), so no figure reads 0.00 or 100000.00. */
     static String ma(double amps) {
         return Quantities.amps(amps);
-    }
-
-    static String ohms(double ohms) {
-        double scale = ohms >= 1e6 ? 1e6 : ohms >= 1000 ? 1000 : 1;
-        String n = new java.math.BigDecimal(ohms / scale).round(new java.math.MathContext(3)).stripTrailingZeros()
-                .toPlainString();
-        return n + (scale == 1e6 ? " M" : scale == 1000 ? " k" : " ohm");
     }
 
     static String w(double watts) {

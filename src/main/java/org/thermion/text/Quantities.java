@@ -18,4 +18,12 @@ public final class Quantities {
         }
         return String.format(Locale.ROOT, "%.2f uA", a * 1e6);
     }
+
+    /** A resistance with three significant figures and no trailing zeros: "887 ohm", "4.7 k", "1 M". */
+    public static String ohms(double ohms) {
+        double scale = ohms >= 1e6 ? 1e6 : ohms >= 1000 ? 1000 : 1;
+        String n = new java.math.BigDecimal(ohms / scale).round(new java.math.MathContext(3)).stripTrailingZeros()
+                .toPlainString();
+        return n + (scale == 1e6 ? " M" : scale == 1000 ? " k" : " ohm");
+    }
 }

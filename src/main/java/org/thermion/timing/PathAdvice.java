@@ -1,5 +1,7 @@
 package org.thermion.timing;
 
+import org.thermion.text.Quantities;
+
 import org.thermion.model.NetLabels;
 import org.thermion.circuit.Corner;
 import org.thermion.circuit.DiodeGate;
@@ -94,8 +96,8 @@ public final class PathAdvice {
                 if (!(after < dom.delay() * 0.99)) {
                     break;
                 }
-                best = new Remedy(p.phase(), dom.stage(), net, "lower load", "load " + ohmsText(load) + " -> "
-                        + ohmsText(v), dom.delay(), after, p.slack() + dom.delay() - after);
+                best = new Remedy(p.phase(), dom.stage(), net, "lower load", "load " + Quantities.ohms(load) + " -> "
+                        + Quantities.ohms(v), dom.delay(), after, p.slack() + dom.delay() - after);
                 if (best.enough()) {
                     break;
                 }
@@ -229,10 +231,6 @@ public final class PathAdvice {
             }
         }
         return null;
-    }
-
-    static String ohmsText(double ohms) {
-        return ohms >= 1e6 ? trim(ohms / 1e6) + " M" : ohms >= 1e3 ? trim(ohms / 1e3) + " k" : trim(ohms) + " ohm";
     }
 
     private static String trim(double v) {
