@@ -22,6 +22,18 @@ final class Circuit {
         this.output = output;
     }
 
+    /** The same circuit with each free node's guess taken from {@code volts} (by node name) where it has one. */
+    Circuit startingFrom(java.util.Map<String, Double> volts) {
+        double[] g = guess.clone();
+        for (int i = 0; i < g.length; i++) {
+            Double v = isFixed(i) ? null : volts.get(names.get(i));
+            if (v != null && Double.isFinite(v)) {
+                g[i] = v;
+            }
+        }
+        return new Circuit(names, fixed, g, List.of(elements), output);
+    }
+
     int size() {
         return fixed.length;
     }

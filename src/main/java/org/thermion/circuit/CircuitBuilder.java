@@ -27,10 +27,46 @@ public final class CircuitBuilder {
     private final Set<Parameter> parameters = new LinkedHashSet<>();
     private String missingRail;
     private int output = -1;
+    private final boolean joinIdentical;
+    private int copies = 1;
 
     CircuitBuilder(RailSet rails, Corner corner) {
+        this(rails, corner, false);
+    }
+
+    /**
+     * With {@code joinIdentical}, equal loads on one node are built once as that many copies in
+     * parallel ({@link #attachAll}): by symmetry their nodes sit at one voltage, and a net with
+     * eight identical receivers (each with its chain) solves as one.
+     */
+    CircuitBuilder(RailSet rails, Corner corner, boolean joinIdentical) {
         this.rails = rails;
         this.corner = corner;
+        this.joinIdentical = joinIdentical;
+    }
+
+    /**
+     * Attaches {@code loads} on node {@code out}, each tagged {@code tag} and its index (equal
+     * loads once, as copies in parallel, when this builder joins identical loads).
+     */
+    void attachAll(List<Load> loads, int out, String tag) {
+        if (!joinIdentical) {
+            for (int i = 0; i < loads.size(); i++) {
+                loads.get(i).attach(this, out, tag + i);
+            }
+            return;
+        }
+        Map<Load, Integer> count = new java.util.LinkedHashMap<>();
+        for (Load l : loads) {
+            count.merge(l, 1, Integer::sum);
+        }
+        int i = 0;
+        int outer = copies;
+        for (Map.Entry<Load, Integer> e : count.entrySet()) {
+            copies = outer * e.getValue();
+            e.getKey().attach(this, out, tag + i++);
+        }
+        copies = outer;
     }
 
     /** Labels of the parts added from now on start with {@code role} + ".". */
@@ -94,11 +130,12 @@ public final class CircuitBuilder {
     /** A resistor of {@code ohms} (> 0) at its corner value. */
     void resistor(String label, int a, int b, double ohms) {
         Checks.positive("ohms of " + prefix + label, ohms);
-        elements.add(new Element.Resistor(prefix + label, a, b, ohms * factor(label, Parameter.Kind.RESISTOR)));
+        elements.add(new Element.Resistor(prefix + label, a, b, ohms * factor(label, Parameter.Kind.RESISTOR) / copies));
     }
 
     void lamp(String label, int a, int b, Lamp lamp) {
-        elements.add(new Element.Lamp(prefix + label, a, b, lamp.ratedVolts(), lamp.ratedAmps(), lamp.coldRatio()));
+        elements.add(new Element.Lamp(prefix + label, a, b, lamp.ratedVolts(), lamp.ratedAmps() * copies,
+                lamp.coldRatio()));
     }
 
     void triode(String label, KorenTriode m, int count, int p, int g, int k) {
@@ -118,6 +155,9 @@ public final class CircuitBuilder {
     }
 
     void arc(String label, GasThyratron m, boolean conducting, int a, int k) {
+        if (copies != 1) {
+            throw new IllegalStateException("a thyratron cannot stand for copies of itself: " + prefix + label);
+        }
         elements.add(new Element.Arc(prefix + label, m, conducting, a, k));
     }
 
@@ -160,8 +200,9 @@ public final class CircuitBuilder {
         return new Circuit(names, f, g, elements, output);
     }
 
+    /** The tube's emission factor at this corner, times the copies it stands for. */
     private double emission() {
-        return factor("emission", Parameter.Kind.EMISSION);
+        return factor("emission", Parameter.Kind.EMISSION) * copies;
     }
 
     private double factor(String label, Parameter.Kind kind) {

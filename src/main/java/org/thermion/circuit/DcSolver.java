@@ -5,11 +5,12 @@ package org.thermion.circuit;
  * with a finite-difference Jacobian, a step limit and a backtracking line search; when that
  * fails, conductance stepping (a shunt from every free node to ground, lowered a decade at a
  * time to none, each solve starting from the last), then source stepping (the fixed voltages
- * raised from zero in steps). Circuits are a few nodes, so dense elimination is the fastest.
+ * raised from zero in steps). The Jacobian is sparse ({@link NodalJacobian}): a stage with its
+ * loads' chains runs to a few hundred nodes, nearly a tree.
  */
 final class DcSolver {
     /** Converged when every free node's current sum is below this (amperes). */
-    static final double TOLERANCE_AMPS = 1e-10;
+    static final double TOLERANCE_AMPS = 1e-12;
     private static final int MAX_ITERATIONS = 200;
     /** Largest step a node takes in one iteration, at least; circuits spanning more volts take a 50th of their span. */
     private static final double MAX_STEP_VOLTS = 20;
@@ -32,8 +33,9 @@ final class DcSolver {
                     "give every grid a resistor to a rail (`grid divider 100 k 47 k to bias`) and every plate a load");
         }
         int[] free = freeNodes(c);
+        NodalJacobian j = new NodalJacobian(c, free);
         double[] v = c.guess.clone();
-        int it = newton(c, free, v, 1.0, 0);
+        int it = newton(c, free, j, v, 1.0, 0);
         if (it >= 0) {
             return new Solution(v, it);
         }
@@ -41,7 +43,7 @@ final class DcSolver {
         int total = 0;
         boolean ok = true;
         for (int decade = -1; decade <= 13 && ok; decade++) {
-            int n = newton(c, free, v, 1.0, decade == 13 ? 0 : Math.pow(10, -decade));
+            int n = newton(c, free, j, v, 1.0, decade == 13 ? 0 : Math.pow(10, -decade));
             ok = n >= 0;
             total += Math.max(n, 0);
         }
@@ -50,7 +52,7 @@ final class DcSolver {
         }
         v = c.guess.clone();
         for (int step = 1; step <= 20; step++) {
-            int n = newton(c, free, v, step / 20.0, 0);
+            int n = newton(c, free, j, v, step / 20.0, 0);
             if (n < 0) {
                 return new Solution(null, total, "Newton's method did not converge, not even by conductance or "
                         + "source stepping", "look for a part value far from its neighbours (a load or divider off by "
@@ -83,7 +85,7 @@ final class DcSolver {
      * Solves in place with fixed nodes at {@code scale}·their volts and a shunt of {@code shunt}
      * siemens from every free node to ground; iterations used, or -1.
      */
-    private static int newton(Circuit c, int[] free, double[] v, double scale, double shunt) {
+    private static int newton(Circuit c, int[] free, NodalJacobian j, double[] v, double scale, double shunt) {
         for (int i = 0; i < v.length; i++) {
             if (c.isFixed(i)) {
                 v[i] = c.fixed[i] * scale;
@@ -93,17 +95,13 @@ final class DcSolver {
         double maxStep = maxStep(c);
         double[] f = residual(c, free, v, shunt);
         double norm = norm2(f);
-        double[][] j = new double[n][n];
         double[] dx = new double[n];
         for (int it = 0; it < MAX_ITERATIONS; it++) {
             if (maxAbs(f) < TOLERANCE_AMPS) {
                 return it;
             }
-            jacobian(c, free, v, f, j, shunt);
-            for (int r = 0; r < n; r++) {
-                dx[r] = -f[r];
-            }
-            if (!gauss(j, dx)) {
+            System.arraycopy(f, 0, dx, 0, n);
+            if (!j.step(v, dx, shunt)) {
                 return -1;
             }
             double biggest = maxAbs(dx);
@@ -157,68 +155,6 @@ final class DcSolver {
             f[r] = all[free[r]] + shunt * v[free[r]];
         }
         return f;
-    }
-
-    private static void jacobian(Circuit c, int[] free, double[] v, double[] f, double[][] j, double shunt) {
-        for (int col = 0; col < free.length; col++) {
-            int node = free[col];
-            double keep = v[node];
-            double h = 1e-6 * Math.max(1, Math.abs(keep));
-            v[node] = keep + h;
-            double[] f1 = residual(c, free, v, shunt);
-            v[node] = keep;
-            for (int r = 0; r < free.length; r++) {
-                j[r][col] = (f1[r] - f[r]) / h;
-            }
-        }
-    }
-
-    /** Solves a·x = b in place (b becomes x) by elimination with partial pivoting. */
-    private static boolean gauss(double[][] a0, double[] b) {
-        int n = b.length;
-        double[][] a = new double[n][];
-        for (int i = 0; i < n; i++) {
-            a[i] = a0[i].clone();
-        }
-        for (int col = 0; col < n; col++) {
-            int piv = col;
-            for (int r = col + 1; r < n; r++) {
-                if (Math.abs(a[r][col]) > Math.abs(a[piv][col])) {
-                    piv = r;
-                }
-            }
-            if (!(Math.abs(a[piv][col]) > 1e-300)) {
-                return false;
-            }
-            double[] t = a[col];
-            a[col] = a[piv];
-            a[piv] = t;
-            double tb = b[col];
-            b[col] = b[piv];
-            b[piv] = tb;
-            for (int r = col + 1; r < n; r++) {
-                double m = a[r][col] / a[col][col];
-                if (m != 0) {
-                    for (int k = col; k < n; k++) {
-                        a[r][k] -= m * a[col][k];
-                    }
-                    b[r] -= m * b[col];
-                }
-            }
-        }
-        for (int r = n - 1; r >= 0; r--) {
-            double s = b[r];
-            for (int k = r + 1; k < n; k++) {
-                s -= a[r][k] * b[k];
-            }
-            b[r] = s / a[r][r];
-        }
-        for (double x : b) {
-            if (!Double.isFinite(x)) {
-                return false;
-            }
-        }
-        return true;
     }
 
     private static double norm2(double[] x) {

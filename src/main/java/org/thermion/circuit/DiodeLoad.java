@@ -25,9 +25,7 @@ public record DiodeLoad(ChildDiode diode, DiodeGate.Kind kind, double pullOhms, 
         }
         if (!beyond.isEmpty()) {
             String old = b.nest("next");
-            for (int i = 0; i < beyond.size(); i++) {
-                beyond.get(i).attach(b, node, tag + "." + i);
-            }
+            b.attachAll(beyond, node, tag + ".");
             b.restorePrefix(old);
         }
     }

@@ -19,6 +19,9 @@ public sealed interface Element permits Element.Resistor, Element.Lamp, Element.
     /** Node pairs the part joins for DC, flattened (grid paths excluded): the floating-node check. */
     int[] conductiveEnds();
 
+    /** Every node the part's currents depend on or flow into: its entries in the solver's Jacobian. */
+    int[] nodes();
+
     /** A resistor (also a relay coil). */
     record Resistor(String label, int a, int b, double ohms) implements Element {
         public void addCurrents(double[] v, double[] out) {
@@ -28,6 +31,10 @@ public sealed interface Element permits Element.Resistor, Element.Lamp, Element.
         }
 
         public int[] conductiveEnds() {
+            return new int[] {a, b};
+        }
+
+        public int[] nodes() {
             return new int[] {a, b};
         }
     }
@@ -55,6 +62,10 @@ public sealed interface Element permits Element.Resistor, Element.Lamp, Element.
         public int[] conductiveEnds() {
             return new int[] {a, b};
         }
+
+        public int[] nodes() {
+            return new int[] {a, b};
+        }
     }
 
     /** {@code count} identical triode sections in parallel; grid current by the model's grid law. */
@@ -69,6 +80,10 @@ public sealed interface Element permits Element.Resistor, Element.Lamp, Element.
 
         public int[] conductiveEnds() {
             return new int[] {p, k};
+        }
+
+        public int[] nodes() {
+            return new int[] {p, g, k};
         }
     }
 
@@ -90,6 +105,10 @@ public sealed interface Element permits Element.Resistor, Element.Lamp, Element.
         public int[] conductiveEnds() {
             return new int[] {p, k, g2, k};
         }
+
+        public int[] nodes() {
+            return new int[] {p, g1, g2, k};
+        }
     }
 
     /** A vacuum diode, anode {@code a} to cathode {@code k}. */
@@ -101,6 +120,10 @@ public sealed interface Element permits Element.Resistor, Element.Lamp, Element.
         }
 
         public int[] conductiveEnds() {
+            return new int[] {a, k};
+        }
+
+        public int[] nodes() {
             return new int[] {a, k};
         }
     }
@@ -115,6 +138,10 @@ public sealed interface Element permits Element.Resistor, Element.Lamp, Element.
 
         public int[] conductiveEnds() {
             return new int[0];
+        }
+
+        public int[] nodes() {
+            return new int[] {g, k};
         }
     }
 
@@ -136,6 +163,10 @@ public sealed interface Element permits Element.Resistor, Element.Lamp, Element.
         }
 
         public int[] conductiveEnds() {
+            return new int[] {a, k};
+        }
+
+        public int[] nodes() {
             return new int[] {a, k};
         }
     }

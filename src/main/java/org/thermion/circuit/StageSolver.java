@@ -41,6 +41,16 @@ public final class StageSolver {
     /** As {@link #solve}, the stage's parts labelled with {@code role}. */
     public DcResult solveAs(String role, StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads,
                             Corner corner) {
+        return solveNear(role, stage, inputVolts, stored, loads, corner, null);
+    }
+
+    /**
+     * As {@link #solveAs}, Newton's method starting from {@code near}'s node voltages where it
+     * has the node (a neighbouring point of a sweep: a few iterations instead of a cold start).
+     * For stages with one solution only; a bistable stage settles where its own guess puts it.
+     */
+    DcResult solveNear(String role, StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads,
+                       Corner corner, OperatingPoint near) {
         if (inputVolts.length != stage.inputs()) {
             throw new IllegalArgumentException("stage " + stage.name() + " has " + stage.inputs() + " inputs, got "
                     + inputVolts.length + " voltages");
@@ -52,7 +62,7 @@ public final class StageSolver {
         Key key = new Key(role, stage, vs, stored, List.copyOf(loads), corner);
         DcResult r = cache.get(key);
         if (r == null) {
-            r = compute(role, stage, inputVolts, stored, loads, corner);
+            r = compute(role, stage, inputVolts, stored, loads, corner, near);
             cache.put(key, r);
         }
         return r;
@@ -60,17 +70,17 @@ public final class StageSolver {
 
     /** The toleranced parameters a solve of this stage with these loads depends on. */
     public Set<Parameter> parameters(String role, StageCircuit stage, List<Load> loads) {
-        CircuitBuilder b = builder(role, stage, new double[stage.inputs()], false, loads, Corner.NOMINAL);
+        CircuitBuilder b = builder(role, stage, new double[stage.inputs()], false, loads, Corner.NOMINAL, true);
         return b.parameters();
     }
 
     /**
      * The parts and nodes a solve of this stage would use (for netlist writers): the same
-     * circuit {@link #solve} builds, not solved.
+     * circuit {@link #solve} builds, not solved, with each load drawn apart (the solve joins equal ones).
      */
     public StageNetlist netlist(String role, StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads,
                                 Corner corner) {
-        Circuit c = builder(role, stage, inputVolts, stored, loads, corner).build();
+        Circuit c = builder(role, stage, inputVolts, stored, loads, corner, false).build();
         List<Double> fixed = new ArrayList<>(c.size());
         for (double f : c.fixed) {
             fixed.add(f);
@@ -86,7 +96,7 @@ public final class StageSolver {
      */
     public double heldOutputAmps(StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads,
                                  Corner corner, double volts) {
-        CircuitBuilder b = builder(DRIVER, stage, inputVolts, stored, loads, corner);
+        CircuitBuilder b = builder(DRIVER, stage, inputVolts, stored, loads, corner, true);
         if (b.missingRail() != null || !Double.isFinite(volts)) {
             return Double.NaN;
         }
@@ -114,21 +124,19 @@ public final class StageSolver {
     }
 
     private CircuitBuilder builder(String role, StageCircuit stage, double[] inputVolts, boolean stored,
-                                   List<Load> loads, Corner corner) {
-        CircuitBuilder b = new CircuitBuilder(rails, corner);
+                                   List<Load> loads, Corner corner, boolean joinIdentical) {
+        CircuitBuilder b = new CircuitBuilder(rails, corner, joinIdentical);
         b.role(role);
         int out = stage.build(b, inputVolts, stored);
         b.role(RECEIVER.equals(role) ? "load" : RECEIVER);
-        for (int i = 0; i < loads.size(); i++) {
-            loads.get(i).attach(b, out, "#" + i);
-        }
+        b.attachAll(loads, out, "#");
         b.role(role);
         b.output(out);
         return b;
     }
 
     private DcResult compute(String role, StageCircuit stage, double[] inputVolts, boolean stored, List<Load> loads,
-                             Corner corner) {
+                             Corner corner, OperatingPoint near) {
         solves++;
         for (double v : inputVolts) {
             if (!Double.isFinite(v)) {
@@ -136,12 +144,12 @@ public final class StageSolver {
                         "give the stage's driving net a level (its driver has no DC solution either)");
             }
         }
-        CircuitBuilder b = builder(role, stage, inputVolts, stored, loads, corner);
+        CircuitBuilder b = builder(role, stage, inputVolts, stored, loads, corner, true);
         if (b.missingRail() != null) {
             return new NoDcSolution(stage.name(), "no rail named " + b.missingRail(),
                     "declare `rail " + b.missingRail() + " { voltage ... }` or name another rail in the stage");
         }
-        Circuit c = b.build();
+        Circuit c = near == null ? b.build() : b.build().startingFrom(near.nodeVolts());
         DcSolver.Solution s = DcSolver.solve(c);
         if (s.volts() == null) {
             return new NoDcSolution(stage.name(), s.failure(), s.fix());

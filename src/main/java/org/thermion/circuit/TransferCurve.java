@@ -8,7 +8,8 @@ import org.thermion.model.Rail;
  * Sweeps one input of a receiving stage across the rails (the other inputs held where the
  * swept one decides the output, at the extreme rails) and reads its thresholds off the curve.
  * The stage is solved unloaded, as role "receiver", so its parts share tolerance labels with
- * the grid networks it puts on its driver.
+ * the grid networks it puts on its driver. Each point starts from the one before (receivers
+ * have one solution per input level).
  */
 public final class TransferCurve {
     /** Points of the sweep (the thresholds are interpolated between them). */
@@ -32,14 +33,16 @@ public final class TransferCurve {
         for (int i = 1; i < in.length; i++) {
             in[i] = others[i] ? hi : lo;
         }
+        OperatingPoint last = null;
         for (int k = 0; k < POINTS; k++) {
             x[k] = lo + (hi - lo) * k / (POINTS - 1);
             in[0] = x[k];
-            DcResult r = solver.solveAs(StageSolver.RECEIVER, stage, in.clone(), false, List.of(), corner);
+            DcResult r = solver.solveNear(StageSolver.RECEIVER, stage, in.clone(), false, List.of(), corner, last);
             if (!r.solved()) {
                 return null;
             }
-            y[k] = r.point().outputVolts();
+            last = r.point();
+            y[k] = last.outputVolts();
         }
         return read(x, y, stage.inverting());
     }

@@ -13,6 +13,8 @@ import java.util.Set;
  * and that corner is named. {@link #exhaustive} tries every corner, for checking.
  */
 public final class WorstCase {
+    /** A parameter that moves a figure by no more than this fraction of it has no effect on it. */
+    public static final double NO_EFFECT = 1e-6;
     private final MarginAnalysis analysis;
     private final Tolerances tolerances;
 
@@ -43,20 +45,28 @@ public final class WorstCase {
      * The corner that lowers {@code figure} most, judged one parameter at a time by the sign of
      * its sensitivity: the figure with that parameter at the low end of its tolerance against
      * the nominal figure (one solve each; the figures are monotonic over a tolerance this narrow).
-     * The parameter goes to the low end when that lowers the figure, else to the high end.
+     * The parameter goes to the low end when that lowers the figure, to the high end when it
+     * raises it, and stays nominal (unnamed in the corner) when it moves the figure by no more
+     * than {@link #NO_EFFECT} of itself: a part that does not matter is not named, and the
+     * solver's last digits do not pick its end.
      */
     public static Corner worstCorner(List<Parameter> params, Tolerances tolerances,
                                      java.util.function.ToDoubleFunction<Corner> figure) {
         double nominal = figure.applyAsDouble(Corner.NOMINAL);
+        double noise = NO_EFFECT * Math.abs(nominal);
         Corner worst = Corner.NOMINAL;
         for (Parameter p : params) {
             double[] ends = tolerances.ends(p);
+            double moved = figure.applyAsDouble(Corner.NOMINAL.with(p.label(), ends[0]));
             double pick;
-            if (ends[1] == 1) {
-                // one-sided (emission: new or worn): compare the far end with nominal
-                pick = figure.applyAsDouble(Corner.NOMINAL.with(p.label(), ends[0])) <= nominal ? ends[0] : 1;
+            if (!Double.isFinite(nominal) || !Double.isFinite(moved)) {
+                pick = moved <= nominal ? ends[0] : ends[1];
+            } else if (moved < nominal - noise) {
+                pick = ends[0];
+            } else if (moved > nominal + noise) {
+                pick = ends[1]; // one-sided (emission: new or worn): ends[1] is 1, nominal
             } else {
-                pick = figure.applyAsDouble(Corner.NOMINAL.with(p.label(), ends[0])) <= nominal ? ends[0] : ends[1];
+                pick = 1;
             }
             if (pick != 1) {
                 worst = worst.with(p.label(), pick);

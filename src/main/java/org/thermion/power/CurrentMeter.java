@@ -26,6 +26,12 @@ import java.util.function.IntToLongFunction;
  * its output-low draw.
  */
 public final class CurrentMeter {
+    /**
+     * A later sample is a new peak only when it exceeds the old by more than this (amperes, or
+     * watts): states that draw the same current, summed in another order, differ in the last
+     * bits, and the first of them is the peak's moment.
+     */
+    private static final double TIE_AMPS = 1e-12;
     private final StageDraw draw;
     private final int rails;
     /** Channels per module: one per rail, then the module's plate dissipation in watts. */
@@ -218,7 +224,7 @@ public final class CurrentMeter {
             if (first || a < min[s]) {
                 min[s] = a;
             }
-            if (first || a > max[s]) {
+            if (first || a > max[s] + TIE_AMPS) {
                 max[s] = a;
                 maxCycle[s] = cycle;
                 maxPhase[s] = phase;
@@ -230,7 +236,7 @@ public final class CurrentMeter {
             if (first || a < railMin[r]) {
                 railMin[r] = a;
             }
-            if (first || a > railMax[r]) {
+            if (first || a > railMax[r] + TIE_AMPS) {
                 railMax[r] = a;
                 railMaxCycle[r] = cycle;
                 railMaxPhase[r] = phase;

@@ -197,6 +197,37 @@ class StageSolverTest {
         assertThat(alone).isCloseTo(45.1, within(0.1));
     }
 
+    /**
+     * Equal loads on one node are solved as one load standing for its copies. The same AND
+     * driving three equal ORs (each into two grids that conduct when driven positive) and two
+     * bare grids, solved joined, must agree with the circuit drawn out part by part (what the
+     * netlist writers get) solved as it stands.
+     */
+    @Test
+    void equalLoadsJoinedGiveTheSameAnswerAsEveryLoadDrawnOut() {
+        ChildDiode d = (ChildDiode) lib.require("6AL5");
+        DiodeGate and = new DiodeGate("and", d, DiodeGate.Kind.AND, 2, 510e3, "bplus");
+        GridCurrentLaw law = ((KorenTriode) lib.require("12AU7")).grid();
+        GridLoad grid = new GridLoad(new GridNetwork(1e6, 1.2e6, "bias", 0), law, RailSet.GROUND);
+        Load or = new DiodeLoad(d, DiodeGate.Kind.OR, 10e6, "bias", List.of(grid, grid));
+        List<Load> loads = List.of(or, grid, or, grid, or);
+        for (double[] in : new double[][] {{48, 48}, {0, 48}}) {
+            OperatingPoint joined = solver.solve(and, in, false, loads, Corner.NOMINAL).point();
+            StageNetlist drawn = solver.netlist(StageSolver.DRIVER, and, in, false, loads, Corner.NOMINAL);
+            double[] fixed = drawn.fixedVolts().stream().mapToDouble(Double::doubleValue).toArray();
+            double[] guess = new double[fixed.length];
+            for (int i = 0; i < fixed.length; i++) {
+                guess[i] = Double.isNaN(fixed[i]) ? 0 : fixed[i];
+            }
+            Circuit c = new Circuit(drawn.nodes(), fixed, guess, drawn.parts(), drawn.output());
+            DcSolver.Solution s = DcSolver.solve(c);
+            assertThat(joined.outputVolts()).isCloseTo(s.volts()[c.output], within(1e-6));
+            double bplus = c.nodeCurrents(s.volts())[drawn.nodes().indexOf("rail bplus")];
+            assertThat(joined.railAmps().get("bplus")).isCloseTo(bplus, within(1e-12));
+            assertThat(joined.nodeVolts().size()).isLessThan(drawn.nodes().size());
+        }
+    }
+
     @Test
     void identicalUsesAreSolvedOnce() {
         StageSolver s = new StageSolver(rails);
