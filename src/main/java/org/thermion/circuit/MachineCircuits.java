@@ -22,13 +22,9 @@ public final class MachineCircuits {
     private final TubeLibrary tubes;
     private final StageSolver solver;
     private final Machine machine;
-    private final RailLoading loading;
-    private final Map<Loading, LoadedRails> loaded = new java.util.EnumMap<>(Loading.class);
-    private final Map<Loading, StageSolver> loadedSolvers = new java.util.EnumMap<>(Loading.class);
 
     private MachineCircuits(Machine machine, RailSet rails, Map<String, StageCircuit> byStage, TubeLibrary tubes) {
         this.machine = machine;
-        this.loading = new RailLoading(machine, byStage);
         this.rails = rails;
         this.byStage = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(byStage));
         this.tubes = tubes;
@@ -80,40 +76,6 @@ public final class MachineCircuits {
     /** The tube models the circuits use. */
     public TubeLibrary tubes() {
         return tubes;
-    }
-
-    /**
-     * The rails under the machine's static load: every stage instance at its lightest or heaviest
-     * draw (computed from its circuit, or its draw lines) and every heater string at its rating,
-     * each rail's voltage lowered by its source resistance until voltage and load agree.
-     * Computed once per loading; not thread-safe.
-     */
-    public LoadedRails loaded(Loading which) {
-        return loaded.computeIfAbsent(which, loading::solve);
-    }
-
-    /** The loaded rails' voltages as a rail set (see {@link #loaded}). */
-    public RailSet railsAt(Loading which) {
-        return loaded(which).railSet();
-    }
-
-    /** A caching solver at the loaded rails (see {@link #loaded}); not thread-safe. */
-    public StageSolver solverAt(Loading which) {
-        return loadedSolvers.computeIfAbsent(which, w -> new StageSolver(railsAt(w)));
-    }
-
-    /**
-     * One instance's least and most current from each rail at the loaded rails: from its circuit
-     * in every input state (computed), or from its draw lines (declared).
-     */
-    public StageCurrents currents(StageType stage, Loading which) {
-        return loading.currents(stage, solverAt(which));
-    }
-
-    /** Instances of a stage type in the machine's netlist (gates and latches). */
-    public int instances(StageType stage) {
-        int i = machine.stages().indexOf(stage);
-        return i < 0 ? 0 : loading.instances(i);
     }
 
     /** The shared caching solver at {@link #rails()}; not thread-safe. */

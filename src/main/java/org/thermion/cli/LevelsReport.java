@@ -18,12 +18,13 @@ import org.thermion.cli.report.Table;
 import org.thermion.levels.LevelAnalysis;
 import org.thermion.levels.LoadDrive;
 import org.thermion.levels.NetLevel;
+import org.thermion.levels.RailsUnderLoad;
 import org.thermion.model.Machine;
 
 /** The {@code levels} report: every net worst first, then the lamp and coil drivers. */
 final class LevelsReport {
     /** The schema version of this JSON ({@code org/thermion/schema/levels.schema.json}). */
-    static final int VERSION = 1;
+    static final int VERSION = 2;
 
     private static final Absent NONE = Absent.NONE;
 
@@ -61,12 +62,28 @@ final class LevelsReport {
         rep.field("nets", nets.size());
         rep.field("negative_margins", failing);
         rep.field("below_minimum", weak);
+        rep.field("without_levels", unsolved);
+        RailsUnderLoad rails = analysis.rails();
+        rep.field("rails_under_load", rails.problem() == null);
         rep.text(List.of("machine " + machine.name() + ": " + Nouns.count(nets.size(), "net") + "; worst case at rails and resistors "
                 + pct(t.rail()) + ", worn tubes at " + Math.round(100 * t.endOfLife()) + " % emission; minimum margin "
                 + num(analysis.minMargin()) + " V.",
+                railsLine(machine, rails),
                 Nouns.count(failing, "net") + " with a negative worst-case margin, " + weak + " below the minimum"
                         + (unsolved == 0 ? "." : "; " + unsolved + " driven without levels (listed below the table)."),
                 ""));
+        Table railTable = new Table("rails", "rails")
+                .column("rail", "rail", TEXT)
+                .column("volts", "V", VOLTS, "where the levels are solved: under the heaviest static load")
+                .column("light_volts", "light V", VOLTS, "under the lightest static load")
+                .column("low_end_volts", "low end V", VOLTS, "the worst case's low end: heaviest load less the tolerance")
+                .column("high_end_volts", "high end V", VOLTS, "its high end: lightest load plus the tolerance");
+        for (org.thermion.model.Rail r : machine.rails()) {
+            double at = rails.volts(r.name());
+            double rise = rails.lightRise().getOrDefault(r.name(), 1.0);
+            railTable.row(r.name(), v(at), v(at * rise), v(at * (1 - t.rail())), v(at * rise * (1 + t.rail())));
+        }
+        rep.data(railTable);
         Table data = new Table("nets", "nets")
                 .column("net", "net", TEXT)
                 .column("driver", "driver", TEXT, "the stage that drives the net (empty: driven from outside)")
@@ -138,6 +155,20 @@ final class LevelsReport {
         rep.text("");
         rep.table(drives);
         return rep;
+    }
+
+    /** Where the levels are solved, in a line: the rails under load, or why the declared ones. */
+    private static String railsLine(Machine machine, RailsUnderLoad rails) {
+        if (rails.problem() != null) {
+            return "levels at the declared rail voltages: the machine's load could not be solved (" + rails.problem() + ")";
+        }
+        StringBuilder sb = new StringBuilder("levels at the rails under the heaviest static load (");
+        int i = 0;
+        for (org.thermion.model.Rail r : machine.rails()) {
+            sb.append(i++ == 0 ? "" : ", ").append(r.name()).append(' ')
+                    .append(String.format(java.util.Locale.ROOT, "%.1f", rails.volts(r.name()))).append(" V");
+        }
+        return sb.append("); each rail's high end is its lightest load's voltage plus the tolerance").toString();
     }
 
     /** In text, why a driven net shows no levels (no DC solution, ...): the data table's note, which the view leaves out. */

@@ -42,6 +42,8 @@ import org.thermion.model.StageType;
 final class DriveAnalysis {
     private final Machine machine;
     private final MachineCircuits circuits;
+    /** Solves at the rails the levels are figured at. */
+    private final StageSolver solver;
     private final Tolerances tolerances;
     private final Map<List<Object>, Figures> cache = new HashMap<>();
 
@@ -50,9 +52,10 @@ final class DriveAnalysis {
                            NoDcSolution unsolved) {
     }
 
-    DriveAnalysis(Machine machine, MachineCircuits circuits, Tolerances tolerances) {
+    DriveAnalysis(Machine machine, MachineCircuits circuits, StageSolver solver, Tolerances tolerances) {
         this.machine = machine;
         this.circuits = circuits;
+        this.solver = solver;
         this.tolerances = tolerances;
     }
 
@@ -118,9 +121,8 @@ final class DriveAnalysis {
         ThyratronStage driver = found.get();
         RelayCoil coil = (RelayCoil) driver.load();
         Relay r = s.relay();
-        StageSolver solver = circuits.solver();
         // unfired at first: with its grid network on the highest rail it must fire by its grid once warm
-        double gridIn = circuits.rails().highest().volts();
+        double gridIn = solver.rails().highest().volts();
         ToDoubleFunction<Corner> onAmps = k -> amps(solver, driver, LOAD, gridIn, false, k);
         List<Parameter> params = parameters(solver, driver);
         Corner onCorner = WorstCase.worstCorner(params, tolerances, onAmps);
@@ -178,7 +180,7 @@ final class DriveAnalysis {
     }
 
     private Figures solve(StageCircuit stage, String part, InputLevels levels, InputLevels worst) {
-        StageSolver s = circuits.solver();
+        StageSolver s = solver;
         // a higher grid means more current in every arrangement (a follower's too; a thyratron fires and holds);
         // at the worst corner the input is also at its driving net's worst level
         ToDoubleFunction<Corner> onAmps = c -> amps(s, stage, part, levels.high(), false, c);

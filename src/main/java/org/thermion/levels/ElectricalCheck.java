@@ -53,7 +53,8 @@ public final class ElectricalCheck {
 
     /**
      * A rail feeding stages whose source resistance drops it, at the static peak load, further
-     * than the rail tolerance that every level and margin is figured within: an error at the rail.
+     * than the rail tolerance: an error at the rail. Levels are figured at the loaded rails only
+     * within it ({@link RailsUnderLoad}).
      */
     private static void supplies(Machine m, Budget budget, double tolerance, List<Finding> out) {
         for (Budget.Supply s : budget.supply()) {
@@ -70,8 +71,9 @@ public final class ElectricalCheck {
             out.add(Finding.atRail(true, "supply", s.rail(), "rail " + rail.name() + " sags to " + v(loaded)
                     + " under its peak load (" + ma(atNominal) + " at " + v(nominal) + " nominal, behind "
                     + Quantities.ohms(rail.sourceOhms()) + " of source): " + String.format(Locale.ROOT, "%.1f %%",
-                    100 * (nominal - loaded) / nominal) + " down, past the "
-                    + String.format(Locale.ROOT, "±%.0f %%", 100 * tolerance) + " every level and margin is figured within",
+                    100 * (nominal - loaded) / nominal) + " down, past its "
+                    + String.format(Locale.ROOT, "±%.0f %%", 100 * tolerance) + " tolerance (levels and margins stand at "
+                    + "the declared voltages until it holds)",
                     "a stiffer supply (a source resistance of " + Quantities.ohms(stiff) + " or less holds it within "
                             + String.format(Locale.ROOT, "%.0f %%", 100 * tolerance) + " at this load), or less load on it"));
         }

@@ -52,6 +52,7 @@ public final class LevelAnalysis {
     private final List<StageUse> pointUses = new ArrayList<>();
     private final List<LoadDrive> drives;
     private final Receivers receivers;
+    private final RailsUnderLoad rails;
 
     private record Kind(StageCircuit driver, InputLevels levels, InputLevels worstLevels, List<StageCircuit> receivers) {
     }
@@ -64,18 +65,20 @@ public final class LevelAnalysis {
                            NetAnalysis points, double worstVoh, double worstVol) {
     }
 
-    private LevelAnalysis(Machine machine, MachineCircuits circuits, Tolerances tolerances, double minMargin) {
+    private LevelAnalysis(Machine machine, MachineCircuits circuits, RailsUnderLoad rails, Tolerances tolerances,
+                          double minMargin) {
         this.machine = machine;
         this.circuits = circuits;
-        this.tolerances = tolerances;
+        this.rails = rails;
+        this.tolerances = tolerances.withLightRise(rails.lightRise());
         this.minMargin = minMargin;
-        this.analysis = new MarginAnalysis(circuits.solver());
-        this.worstCase = new WorstCase(analysis, tolerances);
+        this.analysis = new MarginAnalysis(rails.solver());
+        this.worstCase = new WorstCase(analysis, this.tolerances);
         NetFanout fanout = NetFanout.of(machine);
         this.receivers = new Receivers(machine, circuits, fanout);
         double[] high = new double[machine.netlist().netCount()];
         double[] low = new double[high.length];
-        double outsideHigh = outsideHigh(machine);
+        double outsideHigh = Math.max(0, rails.solver().rails().highest().volts());
         java.util.Arrays.fill(high, outsideHigh);
         double[] worstHigh = high.clone();
         double[] worstLow = low.clone();
@@ -95,12 +98,18 @@ public final class LevelAnalysis {
             }
         }
         nets.sort(Comparator.comparingDouble(LevelAnalysis::sortKey).thenComparing(NetLevel::name));
-        this.drives = new DriveAnalysis(machine, circuits, tolerances).drives(fanout, low, high, worstLow, worstHigh);
+        this.drives = new DriveAnalysis(machine, circuits, rails.solver(), this.tolerances)
+                .drives(fanout, low, high, worstLow, worstHigh);
     }
 
-    /** Analyses {@code machine} at its circuits' rails with these tolerances and minimum margin (volts). */
+    /**
+     * Analyses {@code machine} at its rails under its heaviest static load, each rail's tolerance
+     * reaching up to its lightest load's voltage ({@link RailsUnderLoad}), with these tolerances
+     * and minimum margin (volts).
+     */
     public static LevelAnalysis of(Machine machine, MachineCircuits circuits, Tolerances tolerances, double minMargin) {
-        return new LevelAnalysis(machine, circuits, tolerances, minMargin);
+        return new LevelAnalysis(machine, circuits, RailsUnderLoad.of(machine, circuits, tolerances.rail()), tolerances,
+                minMargin);
     }
 
     /** Analyses {@code machine} at its own rails with its declared margin rules. */
@@ -119,8 +128,14 @@ public final class LevelAnalysis {
         return drives;
     }
 
+    /** The tolerances the worst cases take, each rail's reaching up to its lightest load's voltage. */
     public Tolerances tolerances() {
         return tolerances;
+    }
+
+    /** The rails the levels are solved at, and how far each rises at the lightest load. */
+    public RailsUnderLoad rails() {
+        return rails;
     }
 
     public double minMargin() {
@@ -171,15 +186,6 @@ public final class LevelAnalysis {
         first.addAll(gates);
         first.addAll(rest);
         return first;
-    }
-
-    /** The highest rail: what a switch or the ROM puts on a line for a 1. */
-    static double outsideHigh(Machine m) {
-        double h = 0;
-        for (Rail r : m.rails()) {
-            h = Math.max(h, r.volts());
-        }
-        return h;
     }
 
     private NetLevel analyse(NetFanout fanout, NetFanout.Node node, double[] low, double[] high, double[] worstLow,

@@ -51,6 +51,8 @@ public final class Budget {
     private final boolean[][] draws;
     private final double[][] plate;
     private final List<Supply> supply;
+    /** Heater strings at the rails' declared voltages: what a loaded rail's heaters are solved from. */
+    private final HeaterAnalysis nominalHeaters;
     private final List<Finding> findings;
 
     /** The static budget, without a simulation, stage figures from the circuits, heaters at hot resistance. */
@@ -101,6 +103,7 @@ public final class Budget {
             plate[d.module()][1] += free ? Math.max(pl, ph) : draw.plateWatts(st, d.fixedHigh());
         }
         HeaterAnalysis nominal = new HeaterAnalysis(m, HeaterAnalysis.nominalVolts(m), law);
+        this.nominalHeaters = nominal;
         double[] loaded = new double[rails];
         double[] stageNominal = new double[rails];
         for (int r = 0; r < rails; r++) {
@@ -207,6 +210,16 @@ public final class Budget {
             a += l[rail];
         }
         return a;
+    }
+
+    /**
+     * Rail {@code rail}'s voltage, signed, under the static load: every stage instance at its
+     * highest draw ({@code heaviest}) or its lowest, heaters at their steady state there.
+     */
+    public double staticVolts(int rail, boolean heaviest) {
+        Rail r = m.rails().get(rail);
+        double amps = heaviest ? staticHighRail(rail) : staticLowRail(rail);
+        return Math.signum(r.volts()) * LoadedRail.volts(r, nominalHeaters, rail, amps);
     }
 
     public double staticHighRail(int rail) {
