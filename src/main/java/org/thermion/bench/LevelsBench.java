@@ -27,9 +27,8 @@ final class LevelsBench {
         LevelAnalysis.of(m, MachineCircuits.of(m), t, r.minMargin());
         double best = Double.POSITIVE_INFINITY;
         LevelAnalysis last = null;
-        MachineCircuits circuits = null;
         for (int i = 0; i < (quick ? 1 : 3); i++) {
-            circuits = MachineCircuits.of(m);
+            MachineCircuits circuits = MachineCircuits.of(m);
             long t0 = System.nanoTime();
             last = LevelAnalysis.of(m, circuits, t, r.minMargin());
             best = Math.min(best, (System.nanoTime() - t0) * 1e-9);
@@ -38,6 +37,6 @@ final class LevelsBench {
         rows.add(held ? BenchRow.target(who, what, best, "s", TARGET_SECONDS, true, "1 s")
                 : BenchRow.info(who, what, best, "s"));
         rows.add(BenchRow.info(who, "levels: kinds of net solved", last.kinds(), ""));
-        rows.add(BenchRow.info(who, "levels: DC solves", circuits.solver().solves(), ""));
+        rows.add(BenchRow.info(who, "levels: DC solves", last.rails().solver().solves(), ""));
     }
 }

@@ -9,6 +9,8 @@ import org.thermion.circuit.MachineCircuits;
 import org.thermion.circuit.Tolerances;
 import org.thermion.model.Machine;
 import org.thermion.timing.DelayCalculator;
+import org.thermion.timing.StageDrive;
+import org.thermion.levels.RailsUnderLoad;
 import org.thermion.model.NetLabels;
 import org.thermion.timing.PathAdvice;
 import org.thermion.timing.RaceChecks;
@@ -110,8 +112,11 @@ final class TimingCommand extends ReportCommand {
     /** {@code access}: the ROM access time, NaN when not given (taken as 0, with a warning). */
     static Analysis analyse(Machine m, double period, double access) {
         MachineCircuits circuits = MachineCircuits.of(m);
-        DelayCalculator nominal = new DelayCalculator(m, circuits, null);
-        DelayCalculator slow = new DelayCalculator(m, circuits, nominal.drive(), Tolerances.DEFAULT);
+        // the operating points stand where check's levels do: at the rails under the heaviest static load
+        RailsUnderLoad rails = RailsUnderLoad.of(m, circuits, Tolerances.DEFAULT.rail());
+        StageDrive drive = new StageDrive(rails.solver(), Math.max(0, rails.solver().rails().highest().volts()));
+        DelayCalculator nominal = new DelayCalculator(m, circuits, drive, null);
+        DelayCalculator slow = new DelayCalculator(m, circuits, drive, Tolerances.DEFAULT.withLightRise(rails.lightRise()));
         List<String> warnings = new ArrayList<>();
         double rom = Double.isNaN(access) ? 0 : access;
         if (Double.isNaN(access) && m.rom() != null && m.pc() != null) {
@@ -181,7 +186,7 @@ final class TimingCommand extends ReportCommand {
         rep.field("max_clock_slow", HERTZ, slow.critical() == null ? unconstrained : slow.maxClockHertz());
         rep.field("slow_corner", "each stage's rails, resistors and tube emission at the tolerance ends that slow it ("
                 + "rails and resistors " + percent(Tolerances.DEFAULT.resistor()) + ", emission down to "
-                + Math.round(Tolerances.DEFAULT.endOfLife() * 100) + " %)");
+                + Math.round(Tolerances.DEFAULT.endOfLife() * 100) + " %), from the rails under the heaviest static load");
         if (c == null) {
             rep.field("critical", unconstrained);
         } else {
