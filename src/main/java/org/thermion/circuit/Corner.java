@@ -30,6 +30,14 @@ public record Corner(Map<String, Double> factors) {
 
     /** The corner named for a reader, e.g. "bplus -5 %, driver.load +5 %, driver.emission 70 %". */
     public String describe() {
+        return describe(null);
+    }
+
+    /**
+     * As {@link #describe()}, with each rail given as the volts it stands at in this corner, from
+     * {@code rails} (the voltages the solve starts from); null: rails as percentages too.
+     */
+    public String describe(RailSet rails) {
         if (factors.isEmpty()) {
             return "nominal";
         }
@@ -38,8 +46,11 @@ public record Corner(Map<String, Double> factors) {
             if (sb.length() > 0) {
                 sb.append(", ");
             }
+            org.thermion.model.Rail rail = rails != null && k.startsWith("rail.") ? rails.rail(k.substring(5)) : null;
             if (k.endsWith("emission")) {
                 sb.append(k).append(' ').append(Math.round(f * 100)).append(" %");
+            } else if (rail != null) {
+                sb.append(rail.name()).append(' ').append(String.format(java.util.Locale.ROOT, "%.1f V", rail.volts() * f));
             } else {
                 sb.append(k.startsWith("rail.") ? k.substring(5) : k).append(' ')
                         .append(String.format(java.util.Locale.ROOT, "%+.0f %%", (f - 1) * 100));

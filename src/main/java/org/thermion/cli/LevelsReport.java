@@ -123,7 +123,7 @@ final class LevelsReport {
             WorstMargin w = n.worse();
             if (w != null && w.worst() < analysis.minMargin() && corners.size() < 20) {
                 corners.add(n.name() + ": " + (w.side() == WorstMargin.Side.HIGH ? "NM_H " : "NM_L ")
-                        + num(w.worst()) + " V at " + w.corner().describe() + " (nominal " + num(w.nominal())
+                        + num(w.worst()) + " V at " + corner(w) + " (nominal " + num(w.nominal())
                         + " V; receivers " + n.receivers() + ")" + (n.note().isEmpty() ? "" : "; " + n.note()));
             }
         }
@@ -206,8 +206,9 @@ final class LevelsReport {
         return w == null ? NONE : v(w.worst());
     }
 
-    private static Object corner(WorstMargin w) {
-        return w == null ? NONE : w.corner().describe();
+    /** A corner with each rail in the volts it stands at there (levels stand at the rails under load). */
+    private Object corner(WorstMargin w) {
+        return w == null ? NONE : w.corner().describe(analysis.rails().solver().rails());
     }
 
     private static String pct(double f) {

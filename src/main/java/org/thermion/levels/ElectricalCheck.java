@@ -38,6 +38,11 @@ public final class ElectricalCheck {
     private ElectricalCheck() {
     }
 
+    /** The rails the analysis stands at: corners name each rail's volts there. */
+    private static org.thermion.circuit.RailSet rails(LevelAnalysis a) {
+        return a.rails().solver().rails();
+    }
+
     /** Every finding, nets worst first, then drivers, tubes and heater strings. */
     public static List<Finding> findings(Machine m, LevelAnalysis a) {
         List<Finding> out = new ArrayList<>();
@@ -115,7 +120,7 @@ public final class ElectricalCheck {
             }
             if (Double.isInfinite(w.worst())) {
                 out.add(new Finding(true, "nodc", n.use(), -1, "stage " + n.stage() + " driving net '" + n.name()
-                        + "' has a DC solution at nominal values but none at the tolerance corner " + w.corner().describe()
+                        + "' has a DC solution at nominal values but none at the tolerance corner " + w.corner().describe(rails(a))
                         + " (nominal " + (w.side() == WorstMargin.Side.HIGH ? "high" : "low") + " margin "
                         + v(w.nominal()) + "): the circuit is on the edge of what its parts allow",
                         "run `thermion levels` for the net's figures; give the stage's rails and loads more room"));
@@ -127,7 +132,7 @@ public final class ElectricalCheck {
             String msg = "net '" + n.name() + "' (" + n.stage() + ", " + Nouns.count(n.loads(), "load")
                     + ": " + n.receivers() + ") has a worst-case " + (high ? "high" : "low") + " noise margin of "
                     + v(w.worst()) + (w.worst() < 0 ? "" : ", below the minimum " + v(a.minMargin())) + " at "
-                    + w.corner().describe() + " (nominal " + v(w.nominal()) + "; " + levels + " nominal)";
+                    + w.corner().describe(rails(a)) + " (nominal " + v(w.nominal()) + "; " + levels + " nominal)";
             String fix;
             if (n.fanOutLimit() > 0 && n.fanOutLimit() < n.loads()) {
                 fix = "feed at most " + n.fanOutLimit() + " " + n.limitKind() + " " + Nouns.agree(n.fanOutLimit(), "input") + " from it (buffer the rest through a "
@@ -149,7 +154,7 @@ public final class ElectricalCheck {
                 continue; // reported as having no DC solution
             }
             if (d.kind() == LoadDrive.Kind.COIL) {
-                coil(d, out);
+                coil(d, rails(a), out);
             } else {
                 double dev = d.onAmps() / d.ratedAmps() - 1;
                 if (!(Math.abs(dev) <= LAMP_BAND_PERCENT / 100.0)) {
@@ -165,7 +170,7 @@ public final class ElectricalCheck {
     }
 
     /** A relay coil: pick-up at its worst corner, drop-out when cut off, a soft start's coil against its rating. */
-    private static void coil(LoadDrive d, List<Finding> out) {
+    private static void coil(LoadDrive d, org.thermion.circuit.RailSet at, List<Finding> out) {
         String what = d.use() == null ? "bypass relay coil of soft start '" + d.name() + "' (driven by " + d.stage() + ")"
                 : "relay coil of '" + d.name() + "' (" + d.stage() + ")";
         if (Double.isNaN(d.ratedAmps())) {
@@ -199,13 +204,13 @@ public final class ElectricalCheck {
                 fix = "a coil of lower resistance or current, more tube sections in parallel, or a higher rail";
             }
             out.add(new Finding(true, "coil", d.use(), -1, d.softStart(), what + " gets " + ma(d.onWorstAmps())
-                    + volts + " at " + d.onCorner().describe() + " (nominal " + ma(d.onAmps()) + "), "
+                    + volts + " at " + d.onCorner().describe(at) + " (nominal " + ma(d.onAmps()) + "), "
                     + String.format(Locale.ROOT, "%.0f %%", 100 * share) + " of its pick-up current of "
                     + ma(d.ratedAmps()) + ": it may never pull in", fix));
         }
         if (d.dropoutAmps() > 0 && d.offWorstAmps() > d.dropoutAmps()) {
             out.add(new Finding(true, "coil", d.use(), -1, what + " keeps " + ma(d.offWorstAmps()) + " when cut off at "
-                    + d.offCorner().describe() + ", above its drop-out current of " + ma(d.dropoutAmps())
+                    + d.offCorner().describe(at) + ", above its drop-out current of " + ma(d.dropoutAmps())
                     + ": it may never release",
                     "cut the tube off harder (a more negative bias at its grid) or use a coil with a higher "
                             + "drop-out current"));

@@ -258,16 +258,16 @@ public final class DelayCalculator {
             StringBuilder slowNote = new StringBuilder();
             if (Double.isNaN(rOhms) && nominal.solved()) {
                 rOhms = nominal.riseOhms();
-                slowNote.append("no rising edge at its slow corner (").append(riseAt.describe()).append("): nominal R");
+                slowNote.append("no rising edge at its slow corner (").append(riseAt.describe(drive.solver().rails())).append("): nominal R");
             }
             if (Double.isNaN(fOhms) && nominal.solved()) {
                 fOhms = nominal.fallOhms();
                 slowNote.append(slowNote.length() > 0 ? "; " : "").append("no falling edge at its slow corner (")
-                        .append(fallAt.describe()).append("): nominal R");
+                        .append(fallAt.describe(drive.solver().rails())).append("): nominal R");
             }
             if (nominal.problem().isEmpty() && !Double.isNaN(rOhms) && !Double.isNaN(fOhms)) {
                 String corner = slow == null ? "nominal"
-                        : "rise: " + riseAt.describe() + "; fall: " + fallAt.describe();
+                        : "rise: " + riseAt.describe(drive.solver().rails()) + "; fall: " + fallAt.describe(drive.solver().rails());
                 return new StageDelay(riseGiven ? st.rise() : RcDelay.tenToNinety(rOhms, c),
                         fallGiven ? st.fall() : RcDelay.tenToNinety(fOhms, c), c, pins.get(net).size(), riseGiven,
                         fallGiven, slowNote.toString(), rOhms, fOhms, "computed", corner);

@@ -146,5 +146,7 @@ class MarginAnalysisTest {
     void theWorstCornerIsNamed() {
         Corner c = Corner.NOMINAL.with("rail.bplus", 0.95).with("driver.load", 1.05).with("driver.emission", 0.7);
         assertThat(c.describe()).isEqualTo("driver.emission 70 %, driver.load +5 %, bplus -5 %");
+        // with the rails it is solved from, a rail reads as the volts it stands at: 47.1 V x 0.95 = 44.7 V
+        assertThat(c.describe(RailSet.volts("bplus", 47.1))).isEqualTo("driver.emission 70 %, driver.load +5 %, bplus 44.7 V");
     }
 }
