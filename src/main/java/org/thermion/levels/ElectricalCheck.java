@@ -14,6 +14,7 @@ import org.thermion.circuit.WorstMargin;
 import org.thermion.model.HeaterString;
 import org.thermion.model.Machine;
 import org.thermion.model.Rail;
+import org.thermion.model.StageType;
 import org.thermion.power.Budget;
 import org.thermion.power.HeaterAnalysis;
 
@@ -50,10 +51,44 @@ public final class ElectricalCheck {
         margins(a, out);
         drives(a, out);
         ratings(a, out);
+        drawingNothing(m, a, out);
         Budget budget = new Budget(m);
         supplies(m, budget, a.tolerances().rail(), out);
         heaters(m, budget, out);
         return out;
+    }
+
+    /**
+     * A stage with neither a circuit nor draw lines counts as drawing nothing in the budget, the
+     * supply check and power-up: a warning at its first use.
+     */
+    private static void drawingNothing(Machine m, LevelAnalysis a, List<Finding> out) {
+        java.util.Set<Integer> seen = new java.util.HashSet<>();
+        List<StageUse> uses = new ArrayList<>();
+        List<Integer> stages = new ArrayList<>();
+        for (org.thermion.model.Gate g : m.netlist().gates()) {
+            uses.add(new StageUse(false, g.id()));
+            stages.add(g.stage());
+        }
+        List<org.thermion.model.Latch> latches = m.netlist().latches();
+        for (int i = 0; i < latches.size(); i++) {
+            uses.add(new StageUse(true, i));
+            stages.add(latches.get(i).stage());
+        }
+        for (int i = 0; i < uses.size(); i++) {
+            int s = stages.get(i);
+            if (s < 0 || !seen.add(s)) {
+                continue;
+            }
+            StageType st = m.stages().get(s);
+            if (a.circuits().circuit(st).isEmpty() && st.drawLow().isEmpty() && st.drawHigh().isEmpty()
+                    && st.drawAlways().isEmpty()) {
+                out.add(new Finding(false, "draws", uses.get(i), -1, "stage " + st.name()
+                        + " has neither a circuit nor draw lines: budget, power-up and the supply check count it as "
+                        + "drawing nothing from any rail",
+                        "describe its circuit (tube, load, grid network) or give its currents with `draw` lines"));
+            }
+        }
     }
 
     /**

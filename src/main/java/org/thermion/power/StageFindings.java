@@ -8,7 +8,8 @@ import java.util.Map;
 /**
  * What the budget says about its stage figures: a declared draw more than 25 % from what the
  * stage's circuit gives at the machine's rails (one warning per stage, every such figure named),
- * and a circuit with no DC solution there (the declared figures, or nothing, stand in).
+ * a circuit with no DC solution there (the declared figures, or nothing, stand in), and a stage
+ * with neither a circuit nor draw lines (it would pass every supply check drawing nothing).
  */
 final class StageFindings {
     private StageFindings() {
@@ -46,6 +47,15 @@ final class StageFindings {
                     "its circuit has no DC solution at the machine's rails (" + u.reason() + ")",
                     u.usedInstead() == StageDraw.Origin.DECLARED ? "its declared draws are used"
                             : "it is counted as drawing nothing: declare its draws or fix its circuit"));
+        }
+        java.util.Set<String> unsolved = new java.util.HashSet<>();
+        draw.unsolved().forEach(u -> unsolved.add(u.stage()));
+        for (org.thermion.model.StageType st : draw.machine().stages()) {
+            if (used.contains(st.name()) && !unsolved.contains(st.name()) && draw.origin(st) == StageDraw.Origin.NONE) {
+                out.add(new Finding(Finding.Severity.WARNING, "stage " + st.name(),
+                        "has neither a circuit nor draw lines: it is counted as drawing nothing from any rail",
+                        "describe its circuit (tube, load, grid network) or give its currents with `draw` lines"));
+            }
         }
         return out;
     }

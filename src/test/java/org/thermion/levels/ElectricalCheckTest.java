@@ -341,4 +341,29 @@ class ElectricalCheckTest {
             assertThat(x.fix()).contains("a cathode follower gives its load at most the grid's swing");
         });
     }
+
+    @Test
+    void aStageWithNeitherACircuitNorDrawLinesIsAWarningAtItsFirstUse() {
+        String text = """
+                rail bplus { voltage 48 V }
+                rail heat { voltage 6.3 V }
+                tube TQ1 { kind triode; sections 1; heater 6.3 V 300 mA }
+                heaters on heat { parallel TQ1 at 6.3 V }
+                stage t_inv : not { tube TQ1; circuit none; sections 1; load 20 k from bplus; ron 2 k; gain 9 }
+                realize { not t_inv }
+                module top { in a
+                  out y, z
+                  y = !a
+                  z = !y }
+                machine r { top top; inputs a; outputs y z }
+                """;
+        assertThat(findings(text)).singleElement().satisfies(x -> {
+            assertThat(x.error()).isFalse();
+            assertThat(x.kind()).isEqualTo("draws");
+            assertThat(x.message()).contains("stage t_inv has neither a circuit nor draw lines", "drawing nothing");
+            assertThat(x.use()).isNotNull();
+        });
+        // the same stage with its currents declared says nothing
+        assertThat(findings(text.replace("gain 9 }", "gain 9; draw low bplus 1 mA; draw high bplus 0.1 mA }"))).isEmpty();
+    }
 }
