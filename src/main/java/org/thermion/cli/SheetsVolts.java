@@ -35,7 +35,7 @@ import static org.thermion.cli.report.ReportUnit.VOLTS;
  */
 @Command(name = "volts", mixinStandardHelpOptions = true,
         description = {"Voltage chart: the DC voltage to ground at every socket pin, from the stages' operating "
-                + "points at the declared rails, at rest after reset (latches cleared, switches off) and, with --plan, "
+                + "points at the rails as each state loads them (a rail sags by its source resistance times its load), at rest after reset (latches cleared, switches off) and, with --plan, "
                 + "after each step of the bring-up plan (what `plan` prints).",
                 "Text shows the rest state pin by pin and, for each plan step, the pins that move by more than "
                         + "0.5 V; CSV and JSON carry every pin in every state. '?' where no voltage is known "
@@ -141,6 +141,10 @@ final class SheetsVolts extends SheetsDocument {
             r.view(changes(w, charts, reasons));
         }
         List<String> lines = new ArrayList<>();
+        StringBuilder railLine = new StringBuilder("rails at rest, as that state loads them:");
+        rest.rails().forEach((name, v) -> railLine.append(railLine.charAt(railLine.length() - 1) == ':' ? " " : ", ")
+                .append(name).append(' ').append(String.format(java.util.Locale.ROOT, "%.1f V", v)));
+        lines.add(railLine.toString());
         reasons.forEach((why, n) -> lines.add("? at " + Nouns.count(n, "pin") + ": " + why));
         Map<String, List<String>> warned = new java.util.LinkedHashMap<>();
         for (PinVoltages.Chart c : charts) {

@@ -8,23 +8,15 @@ import org.thermion.circuit.MachineCircuits;
 import org.thermion.model.Machine;
 
 class RailsUnderLoadTest {
-    /** Four inverters of our own typed at 2 mA low and 0.5 mA high on a 48 V rail behind {@code ohms}. */
+    /** src/test/resources/org/thermion/power/four-inverters.machine behind {@code ohms} of source. */
     private static Machine four(String ohms) {
-        return LevelAnalysisTest.load("""
-                rail bplus { voltage 48 V; source %s }
-                rail heat { voltage 6.3 V }
-                tube TX1 { kind triode; sections 1; heater 6.3 V 300 mA }
-                heaters on heat { parallel TX1 at 6.3 V }
-                stage inv : not { tube TX1; draw low bplus 2 mA; draw high bplus 0.5 mA }
-                realize { not inv }
-                module top { in a, b, c, d
-                  out w, x, y, z
-                  w = !a
-                  x = !b
-                  y = !c
-                  z = !d }
-                machine r { top top; inputs a b c d; outputs w x y z }
-                """.formatted(ohms)).machine();
+        try {
+            return LevelAnalysisTest.load(java.nio.file.Files.readString(
+                    java.nio.file.Path.of("src/test/resources/org/thermion/power/four-inverters.machine")).formatted(ohms))
+                    .machine();
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
     }
 
     @Test
