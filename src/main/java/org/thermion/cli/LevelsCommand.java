@@ -12,7 +12,7 @@ import picocli.CommandLine.Parameters;
 /** {@code levels FILE}: every net's logic levels, noise margins, load and fan-out limit, worst first. */
 @Command(name = "levels", mixinStandardHelpOptions = true,
         description = {"Logic levels and noise margins of every net, solved from the tube models at the machine's "
-                + "own rails under each net's real load (every grid divider, diode gate, lamp and coil it feeds, and what those diode gates feed in turn): "
+                + "rails under its heaviest static load (each rail's tolerance reaching up to its lightest load's voltage), under each net's real load (every grid divider, diode gate, lamp and coil it feeds, and what those diode gates feed in turn): "
                 + "high and low level, the receivers' thresholds, both margins at nominal values and at the "
                 + "tolerance corner that worsens each (named), and the most loads the driver could feed. Worst "
                 + "net first. Lamp and coil drivers follow with their load currents.",
