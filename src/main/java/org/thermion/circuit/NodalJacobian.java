@@ -29,6 +29,8 @@ final class NodalJacobian {
     private final double[][] a;
     private final double[] scratch;
     private final int[][] elementNodes;
+    /** The most nodes one part touches. */
+    private final int widest;
 
     NodalJacobian(Circuit c, int[] free) {
         this.circuit = c;
@@ -54,6 +56,11 @@ final class NodalJacobian {
                 }
             }
         }
+        int w = 0;
+        for (int[] e : elementNodes) {
+            w = Math.max(w, e.length);
+        }
+        this.widest = w;
         this.position = new int[n];
         this.atPosition = new int[n];
         this.later = order(adj);
@@ -150,7 +157,7 @@ final class NodalJacobian {
             }
         }
         Element[] elements = circuit.elements;
-        double[] base = new double[4];
+        double[] base = new double[widest];
         for (int e = 0; e < elements.length; e++) {
             int[] nodes = elementNodes[e];
             evaluate(elements[e], nodes, v, base);

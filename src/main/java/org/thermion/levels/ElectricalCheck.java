@@ -52,7 +52,7 @@ public final class ElectricalCheck {
         drives(a, out);
         ratings(a, out);
         drawingNothing(m, a, out);
-        Budget budget = new Budget(m);
+        Budget budget = a.rails().budget();
         supplies(m, budget, a.tolerances().rail(), out);
         heaters(m, budget, out);
         return out;

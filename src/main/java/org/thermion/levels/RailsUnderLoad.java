@@ -18,9 +18,10 @@ import org.thermion.power.Budget;
  * less the rail tolerance to the lightest load's plus it. A rail feeding stages that sags past
  * its tolerance is an error of its own ({@link ElectricalCheck}); the levels then stand at the
  * declared voltages, and {@code problem} says why, so that the one cause is not reported as a
- * failing margin on every net.
+ * failing margin on every net. {@code budget} is the static budget the voltages come from (check
+ * judges the supplies and heater strings by the same one).
  */
-public record RailsUnderLoad(StageSolver solver, Map<String, Double> lightRise, String problem) {
+public record RailsUnderLoad(StageSolver solver, Map<String, Double> lightRise, String problem, Budget budget) {
     public RailsUnderLoad {
         lightRise = Map.copyOf(lightRise);
     }
@@ -38,7 +39,7 @@ public record RailsUnderLoad(StageSolver solver, Map<String, Double> lightRise, 
             if (budget.railHasDraws(i) && sag > tolerance) {
                 return new RailsUnderLoad(circuits.solver(), Map.of(), String.format(Locale.ROOT,
                         "rail %s sags %.1f %% under the heaviest load, past its ±%.0f %%", r.name(), 100 * sag,
-                        100 * tolerance));
+                        100 * tolerance), budget);
             }
             if (Double.isFinite(most) && most != 0) {
                 heavy.put(r.name(), new Rail(r.name(), most, r.sourceOhms(), r.limitAmps()));
@@ -48,7 +49,7 @@ public record RailsUnderLoad(StageSolver solver, Map<String, Double> lightRise, 
                 }
             }
         }
-        return new RailsUnderLoad(new StageSolver(new RailSet(heavy)), rise, null);
+        return new RailsUnderLoad(new StageSolver(new RailSet(heavy)), rise, null, budget);
     }
 
     /** A rail's voltage where the levels are solved (NaN for a rail the machine lacks). */
