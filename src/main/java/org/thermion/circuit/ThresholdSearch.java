@@ -7,7 +7,8 @@ import org.thermion.model.Rail;
 /**
  * Finds a receiver's thresholds near known ones, a few solves each instead of a whole sweep:
  * the unity-gain points by the secant method on the curve's slope (a central difference), the
- * midpoint on the output itself. A tolerance corner moves a threshold by a fraction of a volt,
+ * midpoint on the output itself; where the secant fails, bisection in a bracket found near the
+ * start. A tolerance corner moves a threshold by a fraction of a volt,
  * so the nominal thresholds are the starting points for every corner. Returns null when the
  * search leaves the neighbourhood or a point has no solution (the caller then sweeps).
  */
@@ -18,6 +19,8 @@ final class ThresholdSearch {
     private static final double REACH = 3;
     private static final int ITERATIONS = 8;
     private static final double DONE = 1e-3;
+    /** The step of the scan for a bracket when the secant method fails (volts). */
+    private static final double SCAN = 0.25;
 
     private final StageSolver solver;
     private final StageCircuit stage;
@@ -50,21 +53,66 @@ final class ThresholdSearch {
     static Thresholds near(StageSolver solver, StageCircuit stage, Corner corner, Thresholds start) {
         ThresholdSearch s = new ThresholdSearch(solver, stage, corner);
         if (start.method() == Thresholds.Method.UNITY_GAIN) {
-            double vil = s.root(start.vil(), true);
-            double vih = s.root(start.vih(), true);
+            double vil = s.root(start.vil(), true, 1);
+            double vih = s.root(start.vih(), true, -1);
             return Double.isNaN(vil) || Double.isNaN(vih) || !(vih > vil) ? null
                     : new Thresholds(vil, vih, Thresholds.Method.UNITY_GAIN);
         }
-        double m = s.root(start.vil(), false);
+        double m = s.root(start.vil(), false, 0);
         return Double.isNaN(m) ? null : new Thresholds(m, m, Thresholds.Method.MIDPOINT);
     }
 
-    /** Where the steepness is 1 ({@code unity}) or the output halfway between its ends, near {@code x0}. */
-    private double root(double x0, boolean unity) {
+    /**
+     * Where the steepness is 1 ({@code unity}) or the output halfway between its ends, near {@code x0};
+     * {@code sense} +1 where the steepness rises through 1 (V_IL), -1 where it falls through it (V_IH),
+     * 0 for the midpoint. The secant method first; where it fails (V_IH often sits at the kink where
+     * the next grid starts to draw current, and the slope jumps there), bisection in the nearest
+     * bracket of the right sense.
+     */
+    private double root(double x0, boolean unity, int sense) {
         double half = Double.NaN;
         if (!unity) {
             half = 0.5 * (out(lo) + out(hi));
         }
+        double secant = secant(x0, unity, half);
+        return Double.isNaN(secant) ? bracketed(x0, unity, half, sense) : secant;
+    }
+
+    /** Bisection in the bracket nearest {@code x0} (scanned in {@value #SCAN} V steps up to the reach). */
+    private double bracketed(double x0, boolean unity, double half, int sense) {
+        java.util.Map<Integer, Double> seen = new java.util.HashMap<>();
+        java.util.function.IntToDoubleFunction at = k -> seen.computeIfAbsent(k, j -> g(x0 + j * SCAN, unity, half));
+        int rings = (int) Math.round(REACH / SCAN);
+        for (int r = 1; r <= rings; r++) {
+            for (int left : new int[] {-r, r - 1}) {
+                double a = at.applyAsDouble(left);
+                double b = at.applyAsDouble(left + 1);
+                if (Double.isNaN(a) || Double.isNaN(b) || !(a * b <= 0) || a == b
+                        || (sense > 0 && !(a < b)) || (sense < 0 && !(a > b))) {
+                    continue;
+                }
+                double xa = x0 + left * SCAN;
+                double xb = xa + SCAN;
+                while (xb - xa > DONE) {
+                    double xm = 0.5 * (xa + xb);
+                    double m = g(xm, unity, half);
+                    if (Double.isNaN(m)) {
+                        return Double.NaN;
+                    }
+                    if ((m <= 0) == (a <= 0)) {
+                        xa = xm;
+                        a = m;
+                    } else {
+                        xb = xm;
+                    }
+                }
+                return 0.5 * (xa + xb);
+            }
+        }
+        return Double.NaN;
+    }
+
+    private double secant(double x0, boolean unity, double half) {
         double a = x0;
         double b = x0 + 0.1;
         double fa = g(a, unity, half);
