@@ -108,8 +108,9 @@ public final class ElectricalCheck {
             // the loads are conductances: at the nominal voltage they would draw this much
             double atNominal = loaded > 0 ? s.peakAmps() * nominal / loaded : nominal / rail.sourceOhms();
             double stiff = tolerance * nominal / atNominal;
-            out.add(Finding.atRail(true, "supply", s.rail(), "rail " + rail.name() + " sags to " + v(loaded)
-                    + " under its peak load (" + ma(atNominal) + " at " + v(nominal) + " nominal, behind "
+            double sign = Math.signum(rail.volts()); // a negative rail is figured on its magnitude, told signed
+            out.add(Finding.atRail(true, "supply", s.rail(), "rail " + rail.name() + " sags to " + v(sign * loaded)
+                    + " under its peak load (" + ma(atNominal) + " at " + v(sign * nominal) + " nominal, behind "
                     + Quantities.ohms(rail.sourceOhms()) + " of source): " + String.format(Locale.ROOT, "%.1f %%",
                     100 * (nominal - loaded) / nominal) + " down, past its "
                     + String.format(Locale.ROOT, "±%.0f %%", 100 * tolerance) + " tolerance (levels and margins stand at "
