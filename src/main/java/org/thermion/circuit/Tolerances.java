@@ -37,12 +37,16 @@ public record Tolerances(double rail, double resistor, double endOfLife, Map<Str
         return new Tolerances(rail, resistor, endOfLife, rise);
     }
 
+    /** A rail's two ends as factors of the voltage it is solved at: {low, high}. */
+    public double[] railEnds(String name) {
+        return new double[] {1 - rail, (1 + rail) * lightRise.getOrDefault(name, 1.0)};
+    }
+
     /** The two ends of a parameter: {low, high} factors. */
     double[] ends(Parameter p) {
         switch (p.kind()) {
             case RAIL:
-                String name = p.label().startsWith("rail.") ? p.label().substring(5) : p.label();
-                return new double[] {1 - rail, (1 + rail) * lightRise.getOrDefault(name, 1.0)};
+                return railEnds(p.label().startsWith("rail.") ? p.label().substring(5) : p.label());
             case RESISTOR:
                 return new double[] {1 - resistor, 1 + resistor};
             default:

@@ -80,8 +80,9 @@ final class LevelsReport {
                 .column("high_end_volts", "high end V", VOLTS, "its high end: lightest load plus the tolerance");
         for (org.thermion.model.Rail r : machine.rails()) {
             double at = rails.volts(r.name());
-            double rise = rails.lightRise().getOrDefault(r.name(), 1.0);
-            railTable.row(r.name(), v(at), v(at * rise), v(at * (1 - t.rail())), v(at * rise * (1 + t.rail())));
+            double[] ends = t.railEnds(r.name());
+            railTable.row(r.name(), v(at), v(at * rails.lightRise().getOrDefault(r.name(), 1.0)), v(at * ends[0]),
+                    v(at * ends[1]));
         }
         rep.data(railTable);
         Table data = new Table("nets", "nets")

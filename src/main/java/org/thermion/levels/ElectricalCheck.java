@@ -51,8 +51,8 @@ public final class ElectricalCheck {
         margins(a, out);
         drives(a, out);
         ratings(a, out);
-        drawingNothing(m, a, out);
         Budget budget = a.rails().budget();
+        drawingNothing(m, budget, out);
         supplies(m, budget, a.tolerances().rail(), out);
         heaters(m, budget, out);
         return out;
@@ -62,7 +62,7 @@ public final class ElectricalCheck {
      * A stage with neither a circuit nor draw lines counts as drawing nothing in the budget, the
      * supply check and power-up: a warning at its first use.
      */
-    private static void drawingNothing(Machine m, LevelAnalysis a, List<Finding> out) {
+    private static void drawingNothing(Machine m, Budget budget, List<Finding> out) {
         java.util.Set<Integer> seen = new java.util.HashSet<>();
         List<StageUse> uses = new ArrayList<>();
         List<Integer> stages = new ArrayList<>();
@@ -81,8 +81,7 @@ public final class ElectricalCheck {
                 continue;
             }
             StageType st = m.stages().get(s);
-            if (a.circuits().circuit(st).isEmpty() && st.drawLow().isEmpty() && st.drawHigh().isEmpty()
-                    && st.drawAlways().isEmpty()) {
+            if (budget.draw().drawsNothing(st)) {
                 out.add(new Finding(false, "draws", uses.get(i), -1, "stage " + st.name()
                         + " has neither a circuit nor draw lines: budget, power-up and the supply check count it as "
                         + "drawing nothing from any rail",
@@ -99,12 +98,11 @@ public final class ElectricalCheck {
     private static void supplies(Machine m, Budget budget, double tolerance, List<Finding> out) {
         for (Budget.Supply s : budget.supply()) {
             Rail rail = m.rails().get(s.rail());
+            if (Double.isNaN(RailsUnderLoad.sagPast(rail, s, tolerance))) {
+                continue;
+            }
             double nominal = Math.abs(rail.volts());
             double loaded = Math.abs(s.voltsAtPeak());
-            if (!(s.stageAmps() > 0) || !(nominal > 0) || !Double.isFinite(loaded)
-                    || !((nominal - loaded) / nominal > tolerance)) {
-                continue; // a heater-only rail is judged by its heaters (within ±10 %), not the logic's tolerance
-            }
             // the loads are conductances: at the nominal voltage they would draw this much
             double atNominal = loaded > 0 ? s.peakAmps() * nominal / loaded : nominal / rail.sourceOhms();
             double stiff = tolerance * nominal / atNominal;

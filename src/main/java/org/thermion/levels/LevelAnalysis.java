@@ -133,11 +133,6 @@ public final class LevelAnalysis {
         return tolerances;
     }
 
-    /** The machine's stage circuits. */
-    public MachineCircuits circuits() {
-        return circuits;
-    }
-
     /** The rails the levels are solved at, and how far each rises at the lightest load. */
     public RailsUnderLoad rails() {
         return rails;

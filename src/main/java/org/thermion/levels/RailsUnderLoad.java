@@ -33,14 +33,15 @@ public record RailsUnderLoad(StageSolver solver, Map<String, Double> lightRise, 
         Map<String, Double> rise = new LinkedHashMap<>();
         for (int i = 0; i < m.rails().size(); i++) {
             Rail r = m.rails().get(i);
-            double most = budget.staticVolts(i, true);
-            double least = budget.staticVolts(i, false);
-            double sag = (Math.abs(r.volts()) - Math.abs(most)) / Math.abs(r.volts());
-            if (budget.railHasDraws(i) && sag > tolerance) {
+            Budget.Supply supply = budget.supply().get(i);
+            double sag = sagPast(r, supply, tolerance);
+            if (!Double.isNaN(sag)) {
                 return new RailsUnderLoad(circuits.solver(), Map.of(), String.format(Locale.ROOT,
                         "rail %s sags %.1f %% under the heaviest load, past its ±%.0f %%", r.name(), 100 * sag,
                         100 * tolerance), budget);
             }
+            double most = Math.signum(r.volts()) * supply.voltsAtPeak();
+            double least = budget.voltsAtLightest(i);
             if (Double.isFinite(most) && most != 0) {
                 heavy.put(r.name(), new Rail(r.name(), most, r.sourceOhms(), r.limitAmps()));
                 double f = least / most;
@@ -50,6 +51,18 @@ public record RailsUnderLoad(StageSolver solver, Map<String, Double> lightRise, 
             }
         }
         return new RailsUnderLoad(new StageSolver(new RailSet(heavy)), rise, null, budget);
+    }
+
+    /**
+     * How far (a fraction) a rail feeding stages sags below its declared voltage at the static peak
+     * load, when that is past {@code tolerance}; NaN when it holds, or when only heaters hang on it
+     * (heater strings are judged by their own ±10 %).
+     */
+    static double sagPast(Rail rail, Budget.Supply s, double tolerance) {
+        double nominal = Math.abs(rail.volts());
+        double loaded = Math.abs(s.voltsAtPeak());
+        double sag = (nominal - loaded) / nominal;
+        return s.stageAmps() > 0 && nominal > 0 && Double.isFinite(loaded) && sag > tolerance ? sag : Double.NaN;
     }
 
     /** A rail's voltage where the levels are solved (NaN for a rail the machine lacks). */

@@ -213,13 +213,13 @@ public final class Budget {
     }
 
     /**
-     * Rail {@code rail}'s voltage, signed, under the static load: every stage instance at its
-     * highest draw ({@code heaviest}) or its lowest, heaters at their steady state there.
+     * Rail {@code rail}'s voltage, signed, under the lightest static load: every stage instance at
+     * its lowest draw, heaters at their steady state there (the heaviest is the supply check's
+     * {@link Supply#voltsAtPeak}).
      */
-    public double staticVolts(int rail, boolean heaviest) {
+    public double voltsAtLightest(int rail) {
         Rail r = m.rails().get(rail);
-        double amps = heaviest ? staticHighRail(rail) : staticLowRail(rail);
-        return Math.signum(r.volts()) * LoadedRail.volts(r, nominalHeaters, rail, amps);
+        return Math.signum(r.volts()) * LoadedRail.volts(r, nominalHeaters, rail, staticLowRail(rail));
     }
 
     public double staticHighRail(int rail) {

@@ -176,6 +176,14 @@ public final class StageDraw {
         return figures(st).origin;
     }
 
+    /**
+     * True when the stage has neither a circuit nor draw lines (a circuit without a DC solution
+     * is not this: it is reported as unsolved): it counts as drawing nothing from any rail.
+     */
+    public boolean drawsNothing(StageType st) {
+        return origin(st) == Origin.NONE && unsolved.stream().noneMatch(u -> u.stage().equals(st.name()));
+    }
+
     /** Declared figures more than 25 % from the computed ones, in stage order. */
     public List<Mismatch> mismatches() {
         return mismatches;

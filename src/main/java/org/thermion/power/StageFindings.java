@@ -48,10 +48,8 @@ final class StageFindings {
                     u.usedInstead() == StageDraw.Origin.DECLARED ? "its declared draws are used"
                             : "it is counted as drawing nothing: declare its draws or fix its circuit"));
         }
-        java.util.Set<String> unsolved = new java.util.HashSet<>();
-        draw.unsolved().forEach(u -> unsolved.add(u.stage()));
         for (org.thermion.model.StageType st : draw.machine().stages()) {
-            if (used.contains(st.name()) && !unsolved.contains(st.name()) && draw.origin(st) == StageDraw.Origin.NONE) {
+            if (used.contains(st.name()) && draw.drawsNothing(st)) {
                 out.add(new Finding(Finding.Severity.WARNING, "stage " + st.name(),
                         "has neither a circuit nor draw lines: it is counted as drawing nothing from any rail",
                         "describe its circuit (tube, load, grid network) or give its currents with `draw` lines"));
